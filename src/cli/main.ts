@@ -1,0 +1,2 @@
+// Placeholder until the CLI lands.
+console.log('sluice');

@@ -1,0 +1,95 @@
+// What the read stage hands on: shards found, documents split out of them, and an
+// account of every input line so that nothing is lost without a count.
+import type { Readable } from 'node:stream';
+
+export type ShardFormat = 'jsonl' | 'txt';
+export type Compression = 'none' | 'gzip' | 'zstd';
+
+/** Why a line was not turned into a document. */
+export type RejectReason =
+  | 'invalid-json'        // JSONL line that does not parse
+  | 'not-an-object'       // JSONL line that parses to something other than an object
+  | 'missing-text'        // no value at the text field's dot path
+  | 'non-string-text'     // a value, but not a string
+  | 'invalid-encoding'    // bytes that are not valid in the shard's declared encoding
+  | 'binary'              // NUL bytes: binary content, not text
+  | 'line-too-long';      // longer than corpus.maxLineBytes; skipped without buffering
+
+/** A shard found by discovery, ready to be read. */
+export interface ShardRef {
+  /** Path relative to the policy root, with forward slashes. Reports use it. */
+  path: string;
+  absPath: string;
+  format: ShardFormat;
+  compression: Compression;
+  /** Encoding the shard's bytes are decoded with (`utf-8` unless the policy declares another). */
+  encoding: string;
+  /** Subset name taken from the path by corpus.subset, if it matches. */
+  subset?: string;
+  /** Size on disk (compressed), bytes. */
+  sizeBytes: number;
+  /** Opens the raw (still compressed) bytes; defaults to the file at absPath. Lets other sources (a git blob) be read the same way. */
+  open?: () => Readable;
+}
+
+/** A file matched by the globs but not read, with the reason. */
+export interface SkippedFile {
+  path: string;
+  reason: 'link-outside-root' | 'unsupported-format' | 'not-a-file' | 'unreadable';
+  detail: string;
+}
+
+export interface Discovery {
+  shards: ShardRef[];
+  skipped: SkippedFile[];
+}
+
+/** One document split out of a shard. */
+export interface RawDocument {
+  /** 1-based line where the document starts. */
+  line: number;
+  /** 1-based line where it ends (same as line for JSONL). */
+  lineEnd: number;
+  text: string;
+  /** Value of the declared-language field, when the policy names one and the record has a string there. */
+  declaredLanguage?: string;
+}
+
+export interface Rejection {
+  line: number;
+  reason: RejectReason;
+  detail: string;
+}
+
+/** Every line of a shard, accounted for: docLines + empty + rejected.count === lines. */
+export interface ReadAccount {
+  /** Physical lines read (after decompression); a final line without a newline counts. */
+  lines: number;
+  /** Documents handed on. */
+  docs: number;
+  /** Lines that are part of a document (JSONL: equals docs; text: the paragraphs' lines). */
+  docLines: number;
+  /** Blank lines (only whitespace). */
+  empty: number;
+  rejected: {
+    count: number;
+    byReason: Partial<Record<RejectReason, number>>;
+    /** The first few rejections, with line numbers, for the report. */
+    samples: Rejection[];
+  };
+  /** Bytes after decompression (what the text costs), and on disk. */
+  bytes: number;
+  compressedBytes: number;
+  /** Set when the shard could not be read to its end (corrupt or truncated compression, I/O error): what was read before the break still counts. */
+  broken?: { afterLine: number; message: string };
+}
+
+export interface ReadOptions {
+  /** Dot path of the text field (JSONL). */
+  textField: string;
+  /** Dot path of the declared-language field (JSONL), if any. */
+  declaredLanguageField?: string;
+  maxLineBytes: number;
+  /** How many rejections to keep as samples. */
+  maxSamples: number;
+}
