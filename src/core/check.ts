@@ -1,0 +1,113 @@
+// The core both front ends call: policy file in, report out. It wires the
+// stages together (policy → read → measure → results → judge) and does the I/O
+// at the edges; every figure is computed inside the stages.
+import { buildReport } from '../judge/report.js';
+import type { Report } from '../judge/types.js';
+import { formatProblem, loadPolicy } from '../policy/index.js';
+import type { Policy } from '../policy/types.js';
+import { discoverShards } from '../read/index.js';
+import type { ShardRef } from '../read/types.js';
+import { ResultCache } from '../results/cache.js';
+import type { CorpusResult } from '../results/corpus.js';
+import { contentIdOf, scanShard } from '../results/scan.js';
+import { mergeShardResults } from '../results/tally.js';
+import type { ShardResult } from '../results/types.js';
+import { prepareAnalyzers } from './analyzers.js';
+
+/** A run that cannot be judged (bad policy, no shards, unreadable root): exit code 2. */
+export class ConfigError extends Error {
+  override name = 'ConfigError';
+}
+
+export interface Progress {
+  policy: string;
+  shardsDone: number;
+  shards: number;
+  /** Uncompressed bytes read so far. */
+  bytes: number;
+  elapsedMs: number;
+}
+
+export interface CheckOptions {
+  /** Policy files to judge, each on its own. */
+  policies: string[];
+  /** Directory of cached shard results, or null for none. */
+  cacheDir: string | null;
+  /** Override the policy root (mainly for tests and the Action's base tree). */
+  root?: string;
+  onProgress?: (p: Progress) => void;
+  /** Called with each policy's warnings (dubious but valid settings). */
+  onWarning?: (message: string) => void;
+  /** Where relative paths in the report are relative to. */
+  cwd?: string;
+}
+
+/** Returns the loaded policy, or throws ConfigError listing every problem with file, line and key. */
+export async function loadPolicyOrThrow(file: string, root?: string, onWarning?: (m: string) => void): Promise<Policy> {
+  const loaded = await loadPolicy(file, root !== undefined ? { root } : undefined);
+  if (!loaded.ok) {
+    throw new ConfigError(loaded.problems.map(formatProblem).join('\n'));
+  }
+  for (const w of loaded.warnings) onWarning?.(formatProblem(w));
+  return loaded.policy;
+}
+
+/** Returns the measured corpus of one policy: every shard's result, cached by content where possible. */
+export async function measureCorpus(policy: Policy, opts: CheckOptions, shardsOverride?: ShardRef[]): Promise<CorpusResult> {
+  const started = performance.now();
+  let discovery;
+  try {
+    discovery = await discoverShards(policy.root, policy.corpus);
+  } catch (err) {
+    throw new ConfigError(`${policy.file}: ${(err as Error).message}`);
+  }
+  const shards = shardsOverride ?? discovery.shards;
+  if (shards.length === 0) {
+    throw new ConfigError(
+      `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(', ')}) under ${policy.root}` +
+        (discovery.skipped.length ? `; ${discovery.skipped.length} files matched but were skipped, e.g. ${discovery.skipped[0]!.path} (${discovery.skipped[0]!.reason})` : ''),
+    );
+  }
+  const prepared = await prepareAnalyzers(policy);
+  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
+  const results: ShardResult[] = [];
+  const cached = new Set<string>();
+  let bytes = 0;
+  for (const ref of shards) {
+    let result: ShardResult | undefined;
+    if (cache) {
+      const contentId = await contentIdOf(ref);
+      result = await cache.get(contentId, prepared.settingsId, ref);
+      if (result) cached.add(ref.path);
+    }
+    if (!result) {
+      result = await scanShard(ref, prepared.scan, prepared.analyzers);
+      if (cache) await cache.put(result);
+    }
+    results.push(result);
+    bytes += result.read.bytes;
+    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes, elapsedMs: performance.now() - started });
+  }
+  results.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
+  const corpus: CorpusResult = {
+    shards: results,
+    cached,
+    skipped: discovery.skipped,
+    tally: mergeShardResults(results, policy.languages.map((l) => l.key)),
+    elapsedMs: 0,
+  };
+  await prepared.finish(corpus);
+  corpus.elapsedMs = Math.round(performance.now() - started);
+  return corpus;
+}
+
+/** Returns one report per policy file. */
+export async function runCheck(opts: CheckOptions): Promise<Report[]> {
+  const reports: Report[] = [];
+  for (const file of opts.policies) {
+    const policy = await loadPolicyOrThrow(file, opts.root, opts.onWarning);
+    const corpus = await measureCorpus(policy, opts);
+    reports.push(buildReport(policy, corpus, opts.cwd));
+  }
+  return reports;
+}

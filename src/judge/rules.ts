@@ -1,0 +1,174 @@
+// Policy rules → outcomes. Each rule reads figures, compares them with the
+// policy's limit and says in one sentence what it found. A rule the policy does
+// not list is never judged here (its figures are still in the report), except
+// `input`, which is always on: a report over broken shards is not complete.
+import type { Policy, RuleName, Severity } from '../policy/types.js';
+import type { CorpusResult } from '../results/corpus.js';
+import { maskOfKinds } from '../results/tally.js';
+import { amountIn, ratio } from './figures.js';
+import type { LanguageFigures, Location, RuleOutcome, Verdict } from './types.js';
+
+/** How many file:line locations one outcome lists; the counts stay complete. */
+export const LOCATIONS_PER_RULE = 10;
+
+/** Formats a share as a percentage with one decimal. */
+export function pct(x: number | null): string {
+  return x === null ? 'n/a' : `${(x * 100).toFixed(1)} %`;
+}
+
+function outcome(
+  policy: Policy,
+  rule: RuleName,
+  scope: string,
+  measured: number | null,
+  limit: number | null,
+  unit: RuleOutcome['unit'],
+  failed: boolean,
+  message: string,
+  locations: Location[] = [],
+): RuleOutcome {
+  const severity: Severity = policy.severity[rule] ?? 'error';
+  const verdict: Verdict = !failed ? 'pass' : severity === 'error' ? 'fail' : 'warn';
+  return { rule, scope, measured, limit, unit, severity, verdict, message, locations: locations.slice(0, LOCATIONS_PER_RULE) };
+}
+
+/** Returns the outcome of every rule the policy lists (and of `input`). */
+export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<string, LanguageFigures>): RuleOutcome[] {
+  const out: RuleOutcome[] = [];
+  const { rules } = policy;
+
+  // input: broken shards, files matched but unreadable, rejected lines.
+  const broken: Location[] = [
+    ...corpus.shards.filter((s) => s.read.broken).map((s) => ({ path: s.path, line: s.read.broken!.afterLine + 1, detail: s.read.broken!.message })),
+    ...corpus.skipped.filter((s) => s.reason !== 'link-outside-root').map((s) => ({ path: s.path, detail: `${s.reason}: ${s.detail}` })),
+  ];
+  out.push(
+    outcome(
+      policy, 'input', 'corpus', broken.length, rules.input.maxBrokenShards, 'count', broken.length > rules.input.maxBrokenShards,
+      broken.length === 0
+        ? `all ${corpus.shards.length} shards read to the end`
+        : `${broken.length} shard${broken.length === 1 ? '' : 's'} could not be read completely; figures cover only what was read before the break`,
+      broken,
+    ),
+  );
+  if (rules.input.maxRejected !== undefined) {
+    const { lines, rejected } = corpus.tally.input;
+    const share = ratio(rejected, lines) ?? 0;
+    const locs = corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
+    out.push(
+      outcome(policy, 'input', 'corpus', share, rules.input.maxRejected, 'share', share > rules.input.maxRejected,
+        `${rejected} of ${lines} lines rejected (${pct(share)}; limit ${pct(rules.input.maxRejected)})`, locs),
+    );
+  }
+
+  if (rules.mix) {
+    const unit = rules.mix.unit;
+    for (const spec of policy.languages) {
+      if (spec.target === undefined) continue;
+      const f = langs[spec.key];
+      const share = f ? (f.share[unit] ?? 0) : 0;
+      const off = share - spec.target;
+      out.push(
+        outcome(policy, 'mix', `language:${spec.key}`, share, spec.target, 'share', Math.abs(off) > rules.mix.tolerance + 1e-12,
+          `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} ± ${(rules.mix.tolerance * 100).toFixed(1)} points (${off >= 0 ? '+' : ''}${(off * 100).toFixed(1)} points)`),
+      );
+    }
+    for (const [key, limit] of [['other', rules.mix.maxOther], ['und', rules.mix.maxUndetermined]] as const) {
+      if (limit === undefined) continue;
+      const share = langs[key]?.share[unit] ?? 0;
+      const what = key === 'other' ? 'in languages the policy does not list' : 'too short or unclear to label';
+      out.push(outcome(policy, 'mix', `language:${key}`, share, limit, 'share', share > limit + 1e-12, `${pct(share)} of ${unit} ${what} (limit ${pct(limit)})`));
+    }
+  }
+
+  if (rules.script) {
+    const { minPurity, maxImpureDocs } = rules.script;
+    for (const spec of policy.languages) {
+      const f = langs[spec.key];
+      if (!f || f.purityDocs === 0) continue;
+      const impure = f.impureDocs ?? 0;
+      const share = ratio(impure, f.purityDocs) ?? 0;
+      const locs = corpus.shards.flatMap((s) =>
+        s.samples.impure.filter((x) => x.language === spec.key && x.purity < minPurity).map((x) => ({ path: s.path, line: x.line, detail: `purity ${pct(x.purity)}: ${x.detail}` })),
+      );
+      out.push(
+        outcome(policy, 'script', `language:${spec.key}`, share, maxImpureDocs, 'share', share > maxImpureDocs + 1e-12,
+          `${impure} of ${f.purityDocs} ${spec.key} documents have under ${pct(minPurity)} of their letters in ${spec.scripts.join('/')} (${pct(share)}; limit ${pct(maxImpureDocs)})`, locs),
+      );
+    }
+  }
+
+  if (rules.encoding) {
+    const forbid = maskOfKinds(rules.encoding.forbid);
+    let docs = 0;
+    for (const [mask, n] of Object.entries(corpus.tally.anomalyMasks)) if ((Number(mask) & forbid) !== 0) docs += n;
+    const total = corpus.tally.input.docs;
+    const share = ratio(docs, total) ?? 0;
+    const byKind = rules.encoding.forbid.filter((k) => corpus.tally.anomalyDocs[k] > 0).map((k) => `${k} ${corpus.tally.anomalyDocs[k]}`);
+    const locs = corpus.shards.flatMap((s) =>
+      s.samples.anomalous.filter((a) => a.kinds.some((k) => rules.encoding!.forbid.includes(k))).map((a) => ({ path: s.path, line: a.line, detail: a.detail })),
+    );
+    out.push(
+      outcome(policy, 'encoding', 'corpus', share, rules.encoding.maxAnomalousDocs, 'share', share > rules.encoding.maxAnomalousDocs + 1e-12,
+        `${docs} of ${total} documents have forbidden characters or mojibake${byKind.length ? ` (${byKind.join(', ')})` : ''}; limit ${pct(rules.encoding.maxAnomalousDocs)}`, locs),
+    );
+  }
+
+  if (rules.fertility) {
+    const fr = rules.fertility;
+    for (const spec of policy.languages) {
+      const f = langs[spec.key];
+      const main = f?.fertility;
+      if (!main || main.fertility === null) continue;
+      const max = fr.max[spec.key];
+      if (max !== undefined) {
+        out.push(outcome(policy, 'fertility', `language:${spec.key}`, main.fertility, max, 'ratio', main.fertility > max,
+          `${spec.key}: ${main.fertility.toFixed(3)} tokens per word under ${main.tokenizer} (limit ${max})`));
+      }
+      const maxCont = fr.maxContinued[spec.key];
+      if (maxCont !== undefined && main.continuedWords !== null) {
+        out.push(outcome(policy, 'fertility', `language:${spec.key}`, main.continuedWords, maxCont, 'share', main.continuedWords > maxCont,
+          `${spec.key}: ${pct(main.continuedWords)} of words split into 2+ tokens under ${main.tokenizer} (limit ${pct(maxCont)})`));
+      }
+      const base = f.baseline;
+      if (fr.maxRegression !== undefined && base && base.fertility) {
+        const rise = main.fertility / base.fertility - 1;
+        out.push(outcome(policy, 'fertility', `language:${spec.key}`, rise, fr.maxRegression, 'ratio', rise > fr.maxRegression + 1e-12,
+          `${spec.key}: fertility ${main.fertility.toFixed(3)} under ${main.tokenizer} vs ${base.fertility.toFixed(3)} under ${base.tokenizer} (${rise >= 0 ? '+' : ''}${pct(rise)}; limit +${pct(fr.maxRegression)})`));
+      }
+    }
+  }
+
+  if (rules.duplicates && corpus.duplicates) {
+    const d = corpus.duplicates;
+    const locs = (kind: 'exact' | 'near'): Location[] =>
+      d.clusters.filter((c) => c.kind === kind).flatMap((c) => c.copies.map((x) => ({ path: x.path, line: x.line, detail: `copy of ${c.first.path}:${c.first.line}${x.jaccard !== undefined ? ` (Jaccard ≈ ${x.jaccard.toFixed(2)})` : ''}` })));
+    if (rules.duplicates.maxExact !== undefined) {
+      const rate = ratio(d.exactDocs, d.docs) ?? 0;
+      out.push(outcome(policy, 'duplicates', 'corpus', rate, rules.duplicates.maxExact, 'share', rate > rules.duplicates.maxExact + 1e-12,
+        `${d.exactDocs} of ${d.docs} documents are exact copies of an earlier one (${pct(rate)}; limit ${pct(rules.duplicates.maxExact)})`, locs('exact')));
+    }
+    if (rules.duplicates.near.max !== undefined) {
+      const rate = ratio(d.nearDocs, d.docs) ?? 0;
+      out.push(outcome(policy, 'duplicates', 'corpus', rate, rules.duplicates.near.max, 'share', rate > rules.duplicates.near.max + 1e-12,
+        `${d.nearDocs} of ${d.docs} documents are near copies (Jaccard ≥ ${d.parameters.threshold}) of an earlier one (${pct(rate)}; limit ${pct(rules.duplicates.near.max)})`, locs('near')));
+    }
+  }
+
+  if (rules.contamination && corpus.contamination) {
+    const docs = corpus.shards.reduce((s, r) => s + (r.contamination?.docs ?? 0), 0);
+    const locs = corpus.shards.flatMap((s) => (s.contamination?.samples ?? []).map((x) => ({ path: s.path, line: x.line, detail: `shares a ${corpus.contamination!.ngram}-gram with ${x.evalFile}:${x.evalLine}` })));
+    out.push(outcome(policy, 'contamination', 'corpus', docs, rules.contamination.maxDocs, 'count', docs > rules.contamination.maxDocs,
+      `${docs} training document${docs === 1 ? '' : 's'} share a ${corpus.contamination.ngram}-word sequence with the evaluation sets (limit ${rules.contamination.maxDocs})`, locs));
+  }
+  return out;
+}
+
+/** Returns the overall verdict: fail if any error-severity rule failed, warn if any warn-severity rule did. */
+export function overallVerdict(outcomes: readonly RuleOutcome[]): Verdict {
+  if (outcomes.some((o) => o.verdict === 'fail')) return 'fail';
+  if (outcomes.some((o) => o.verdict === 'warn')) return 'warn';
+  return 'pass';
+}
+
+export { amountIn };

@@ -1,0 +1,46 @@
+// Number and text formatting shared by the views. Formatting only: every figure
+// is already in the report.
+
+/** Formats a share (0..1) as a percentage with one decimal, or an en dash for none. */
+export function percent(x: number | null | undefined): string {
+  return x === null || x === undefined ? '–' : `${(x * 100).toFixed(1)} %`;
+}
+
+/** Formats a count with thin grouping (12,345). */
+export function count(n: number | null | undefined): string {
+  return n === null || n === undefined ? '–' : n.toLocaleString('en-US');
+}
+
+/** Formats a ratio with a fixed number of decimals. */
+export function fixed(x: number | null | undefined, digits = 2): string {
+  return x === null || x === undefined ? '–' : x.toFixed(digits);
+}
+
+/** Formats a signed difference in percentage points. */
+export function points(x: number | null | undefined): string {
+  if (x === null || x === undefined) return '–';
+  const r = Math.round(x * 10) / 10;
+  return `${r > 0 ? '+' : r < 0 ? '−' : '±'}${Math.abs(r).toFixed(1)} pt`;
+}
+
+/** Formats bytes in SI units. */
+export function bytes(n: number): string {
+  if (n < 1e3) return `${n} B`;
+  if (n < 1e6) return `${(n / 1e3).toFixed(1)} kB`;
+  if (n < 1e9) return `${(n / 1e6).toFixed(1)} MB`;
+  return `${(n / 1e9).toFixed(2)} GB`;
+}
+
+/** Formats a rule's measured value or limit in its unit. */
+export function inUnit(x: number | null, unit: 'share' | 'count' | 'ratio' | 'points'): string {
+  if (x === null) return '–';
+  if (unit === 'share') return percent(x);
+  if (unit === 'count') return count(x);
+  if (unit === 'points') return points(x);
+  return fixed(x, 3);
+}
+
+/** Returns a location as path:line. */
+export function where(loc: { path: string; line?: number }): string {
+  return loc.line === undefined ? loc.path : `${loc.path}:${loc.line}`;
+}

@@ -1,0 +1,144 @@
+// The Markdown view: the verdict first, the rules that fail, then the figures
+// in collapsed sections. Used for --markdown, the job summary and the PR comment.
+import type { Report, RuleOutcome } from '../judge/types.js';
+import { bar } from './bars.js';
+import { codePath, escapeMarkdown as esc } from './escape.js';
+import { bytes, count, fixed, inUnit, percent, points } from './format.js';
+
+export interface MarkdownOptions {
+  /** Links file:line locations to this URL prefix (e.g. a blob URL at the PR's head commit). */
+  linkBase?: string;
+  /** Extra sections placed right after the rules (the PR comment's comparison against base). */
+  before?: string;
+  /** Largest number of rows in per-shard tables. */
+  maxShardRows?: number;
+}
+
+const ICON: Record<RuleOutcome['verdict'], string> = { pass: '✅', warn: '⚠️', fail: '❌' };
+
+/** Returns the report as GitHub-flavoured Markdown. */
+export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): string {
+  const out: string[] = [];
+  const loc = (path: string, line?: number): string => {
+    const text = codePath(line === undefined ? path : `${path}:${line}`);
+    if (!opts.linkBase) return text;
+    const href = `${opts.linkBase}/${path.split('/').map(encodeURIComponent).join('/')}${line !== undefined ? `#L${line}` : ''}`;
+    return `[${text}](${href})`;
+  };
+
+  out.push(`## ${ICON[report.verdict]} sluice · ${esc(report.policy.name)}: ${report.verdict.toUpperCase()}`);
+  out.push('');
+  out.push(`**${esc(report.headline)}**`);
+  out.push('');
+  out.push(
+    `${count(report.totals.docs)} documents in ${count(report.input.shards)} shards, ${bytes(report.totals.bytes)} of text` +
+      (report.totals.tokens !== undefined ? `, ${count(report.totals.tokens)} tokens (${esc(report.tokenizer?.main ?? '')})` : '') +
+      `; policy ${codePath(report.policy.file)}.`,
+  );
+  out.push('');
+
+  const notPassing = report.rules.filter((r) => r.verdict !== 'pass');
+  const ordered = [...notPassing, ...report.rules.filter((r) => r.verdict === 'pass')];
+  out.push('| | rule | scope | measured | limit | finding |');
+  out.push('|---|---|---|---:|---:|---|');
+  for (const r of ordered) {
+    out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === 'warn' ? ' (warn)' : ''} | ${esc(r.scope.replace(/^language:/, ''))} | ${inUnit(r.measured, r.unit)} | ${inUnit(r.limit, r.unit)} | ${esc(r.message)} |`);
+  }
+  out.push('');
+  for (const r of notPassing) {
+    if (r.locations.length === 0) continue;
+    out.push(`<details><summary>${ICON[r.verdict]} ${r.rule} · ${esc(r.scope)}: where</summary>`);
+    out.push('');
+    for (const l of r.locations) out.push(`- ${loc(l.path, l.line)}${l.detail ? `: ${esc(l.detail)}` : ''}`);
+    out.push('');
+    out.push('</details>');
+    out.push('');
+  }
+  if (opts.before) out.push(opts.before, '');
+
+  // Mix
+  const unit = report.mixUnit;
+  out.push(`<details open><summary>Language mix (by ${unit})</summary>`);
+  out.push('');
+  out.push(`| language | target | share of ${unit} | | docs | words${report.totals.tokens !== undefined ? ' | tokens' : ''} | purity |`);
+  out.push(`|---|---:|---:|---|---:|---:|${report.totals.tokens !== undefined ? '---:|' : ''}---:|`);
+  for (const f of Object.values(report.languages)) {
+    if (f.docs === 0 && f.target === undefined) continue;
+    const share = f.share[unit] ?? 0;
+    out.push(
+      `| ${esc(f.key)} | ${percent(f.target)} | ${percent(share)} | ${bar(share, 16)} | ${count(f.docs)} | ${count(f.words)}${report.totals.tokens !== undefined ? ` | ${count(f.tokens ?? 0)}` : ''} | ${percent(f.purity)} |`,
+    );
+  }
+  out.push('');
+  out.push('</details>');
+  out.push('');
+
+  // Tokenizer
+  const withFertility = Object.values(report.languages).filter((f) => f.fertility && f.docs > 0);
+  if (withFertility.length > 0) {
+    const hasBase = withFertility.some((f) => f.baseline);
+    out.push(`<details><summary>Tokenizer: ${esc(report.tokenizer?.main ?? '')}${hasBase ? ` vs ${esc(report.tokenizer?.baseline ?? '')}` : ''}</summary>`);
+    out.push('');
+    out.push(`| language | fertility | continued words | tokens/word | chars/token | bytes/token | dictionary fertility${hasBase ? ' | baseline fertility | change | mix shift' : ''} |`);
+    out.push(`|---|---:|---:|---:|---:|---:|---:|${hasBase ? '---:|---:|---:|' : ''}`);
+    for (const f of withFertility) {
+      const t = f.fertility!;
+      const b = f.baseline;
+      const change = b?.fertility && t.fertility ? t.fertility / b.fertility - 1 : null;
+      out.push(
+        `| ${esc(f.key)} | ${fixed(t.fertility, 3)} | ${percent(t.continuedWords)} | ${fixed(t.tokensPerWord, 3)} | ${fixed(t.charsPerToken, 2)} | ${fixed(t.bytesPerToken, 2)} | ${t.dictionary ? fixed(t.dictionary.fertility, 3) : '–'}` +
+          (hasBase ? ` | ${fixed(b?.fertility, 3)} | ${change === null ? '–' : `${change >= 0 ? '+' : ''}${percent(change)}`} | ${points(report.tokenizer?.mixShiftPoints?.[f.key])}` : '') +
+          ' |',
+      );
+    }
+    out.push('');
+    out.push('</details>');
+    out.push('');
+  }
+
+  // Duplicates
+  if (report.duplicates) {
+    const d = report.duplicates;
+    out.push(`<details><summary>Duplicates: ${count(d.exactDocs)} exact (${percent(d.exactRate)}), ${count(d.nearDocs)} near (${percent(d.nearRate)})</summary>`);
+    out.push('');
+    out.push(`MinHash over word ${d.parameters.shingle}-grams, ${d.parameters.hashes} hashes, ${d.parameters.bands} bands × ${d.parameters.rows} rows, Jaccard ≥ ${d.parameters.threshold}.`);
+    out.push('');
+    for (const c of d.clusters.slice(0, 10)) {
+      out.push(`- ${c.kind} ×${c.size}: first ${loc(c.first.path, c.first.line)}; copies ${c.copies.slice(0, 5).map((x) => `${loc(x.path, x.line)}${x.jaccard !== undefined ? ` (J≈${x.jaccard.toFixed(2)})` : ''}`).join(', ')}${c.copies.length > 5 ? ` and ${c.copies.length - 5} more` : ''}`);
+    }
+    out.push('');
+    out.push('</details>');
+    out.push('');
+  }
+  if (report.contamination) {
+    const c = report.contamination;
+    out.push(`<details><summary>Evaluation overlap: ${count(c.docs)} training documents share a ${c.ngram}-gram with ${count(c.evalItems)} evaluation items</summary>`);
+    out.push('');
+    for (const s of c.samples) out.push(`- ${loc(s.path, s.line)} overlaps ${codePath(s.detail ?? '')}`);
+    out.push('');
+    out.push('</details>');
+    out.push('');
+  }
+
+  // Input
+  const i = report.input;
+  out.push(`<details><summary>Input: ${count(i.lines)} lines = ${count(i.docLines)} in documents + ${count(i.empty)} empty + ${count(i.rejected.count)} rejected</summary>`);
+  out.push('');
+  const reasons = Object.entries(i.rejected.byReason);
+  if (reasons.length) out.push(`Rejected by reason: ${reasons.map(([r, n]) => `${r} ${count(n)}`).join(', ')}.`, '');
+  for (const b of i.broken) out.push(`- broken: ${loc(b.path)} after line ${b.afterLine}: ${esc(b.message)}`);
+  for (const s of i.skipped) out.push(`- skipped: ${codePath(s.path)} (${s.reason}): ${esc(s.detail)}`);
+  const maxRows = opts.maxShardRows ?? 50;
+  out.push('');
+  out.push('| shard | subset | lines | docs | empty | rejected | languages |');
+  out.push('|---|---|---:|---:|---:|---:|---|');
+  for (const s of report.shards.slice(0, maxRows)) {
+    out.push(`| ${loc(s.path)} | ${esc(s.subset ?? '')} | ${count(s.lines)} | ${count(s.docs)} | ${count(s.empty)} | ${count(s.rejected)} | ${esc(Object.entries(s.languages).map(([k, n]) => `${k} ${n}`).join(', '))} |`);
+  }
+  if (report.shards.length > maxRows) out.push('', `…and ${report.shards.length - maxRows} more shards (all are in the JSON report).`);
+  out.push('');
+  out.push('</details>');
+  out.push('');
+  out.push('<sub>sluice does not judge licences, personal data or toxicity: a pass is not a clearance.</sub>');
+  return `${out.join('\n')}\n`;
+}

@@ -1,0 +1,63 @@
+// Shard results cached by content: the key is the shard's raw-bytes hash plus the
+// identity of the measurement settings, so a changed policy or tokenizer never
+// reuses a stale result, and an unchanged shard is never measured twice.
+import { createHash } from 'node:crypto';
+import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import { RESULT_SCHEMA, type ShardResult } from './types.js';
+
+/** Returns a stable id for a JSON-able settings object (sha256 of its canonical JSON, 16 hex digits). */
+export function settingsIdOf(settings: unknown): string {
+  return createHash('sha256').update(canonicalJson(settings)).digest('hex').slice(0, 16);
+}
+
+/** Returns JSON with object keys sorted, so equal settings give equal text. */
+export function canonicalJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v: unknown) => {
+    if (v && typeof v === 'object' && !Array.isArray(v)) {
+      return Object.fromEntries(Object.entries(v as Record<string, unknown>).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)));
+    }
+    return v;
+  });
+}
+
+/** A directory of cached shard results. */
+export class ResultCache {
+  hits = 0;
+  misses = 0;
+  constructor(readonly dir: string) {}
+
+  private file(contentId: string, settingsId: string): string {
+    return join(this.dir, `${settingsId}-${contentId}.json`);
+  }
+
+  /** Returns the cached result for this content under these settings, or undefined. */
+  async get(contentId: string, settingsId: string, at: { path: string; subset?: string }): Promise<ShardResult | undefined> {
+    try {
+      const r = JSON.parse(await readFile(this.file(contentId, settingsId), 'utf8')) as ShardResult;
+      if (r.schema !== RESULT_SCHEMA || r.contentId !== contentId || r.settingsId !== settingsId) {
+        this.misses += 1;
+        return undefined;
+      }
+      this.hits += 1;
+      // The same bytes may sit at another path (a rename): report them where they are now.
+      const moved: ShardResult = { ...r, path: at.path };
+      if (at.subset === undefined) delete moved.subset;
+      else moved.subset = at.subset;
+      return moved;
+    } catch {
+      this.misses += 1;
+      return undefined;
+    }
+  }
+
+  /** Stores a result; broken shards are never cached, so they are read again next time. */
+  async put(result: ShardResult): Promise<void> {
+    if (result.read.broken) return;
+    await mkdir(this.dir, { recursive: true });
+    const target = this.file(result.contentId, result.settingsId);
+    const tmp = `${target}.${process.pid}.tmp`;
+    await writeFile(tmp, JSON.stringify(result));
+    await rename(tmp, target);
+  }
+}
