@@ -31,6 +31,8 @@ export interface LanguageSpec {
   key: string;
   /** ISO 639-3 code the key resolves to (`hi` → `hin`, `ar` → `ara`). */
   iso6393: string;
+  /** English name of the language from ISO 639-3 (`Hindi`), for reports. */
+  name?: string;
   /** ISO 639-3 codes a detector label may carry for this language: the code itself plus, for a macrolanguage, its members (`ara` covers `arb`). */
   covers: string[];
   /** Unicode Script property values (long names, e.g. `Devanagari`) that count as this language's own. */
@@ -96,6 +98,9 @@ export interface EncodingRule {
   forbid: AnomalyKind[];
 }
 
+/** Judge on a deterministic sample of documents (picked by document hash). */
+export type SamplingSpec = { docsPerShard: number } | { fraction: number };
+
 export interface FertilityRule {
   /** Per language key: highest running-text fertility (subword tokens per word). */
   max: Record<string, number>;
@@ -103,6 +108,8 @@ export interface FertilityRule {
   maxRegression?: number;
   /** Per language key: highest share of continued words. */
   maxContinued: Record<string, number>;
+  /** Per language key: word list (one entry a line, or a hunspell .dic) for dictionary fertility. */
+  wordLists: Record<string, { file: string; absPath: string }>;
 }
 
 export interface NearDuplicateSpec {
@@ -115,6 +122,8 @@ export interface NearDuplicateSpec {
 export interface DuplicatesRule {
   maxExact?: number;
   near: NearDuplicateSpec;
+  /** Exact-duplicate normalization: punctuation kept (default) or stripped. */
+  punctuation: 'keep' | 'strip';
 }
 
 export interface ContaminationRule {
@@ -135,7 +144,16 @@ export interface Rules {
 
 /** A tokenizer named by the policy: a file (tokenizer.json or tiktoken ranks) or a builtin encoding. */
 export type TokenizerSpec =
-  | { kind: 'file'; file: string; absPath: string; format: 'tokenizer.json' | 'tiktoken' }
+  | {
+      kind: 'file';
+      /** As written in the policy, relative to the policy root. */
+      file: string;
+      absPath: string;
+      /** `tokenizer.json` (Hugging Face format) or `tiktoken` (base64 token + rank per line). */
+      format: 'tokenizer.json' | 'tiktoken';
+      /** For tiktoken rank files, which carry no split pattern: the builtin whose pattern to use, or a regex. */
+      pattern?: string;
+    }
   | { kind: 'builtin'; name: 'gpt2' | 'r50k_base' | 'p50k_base' | 'cl100k_base' | 'o200k_base' };
 
 export interface Policy {
@@ -154,6 +172,7 @@ export interface Policy {
   severity: Partial<Record<RuleName, Severity>>;
   tokenizer?: TokenizerSpec;
   baseline?: TokenizerSpec;
+  sampling?: SamplingSpec;
 }
 
 /** A policy that cannot be judged: file, 1-based line and column, key path, and a suggestion. */
@@ -167,3 +186,8 @@ export interface PolicyProblem {
   /** "did you mean `tolerance`?" when a key is close to a valid one. */
   suggestion?: string;
 }
+
+/** What loading a policy gives: the typed policy and any warnings, or every problem that stops it being judged. */
+export type PolicyResult =
+  | { ok: true; policy: Policy; warnings: PolicyProblem[] }
+  | { ok: false; problems: PolicyProblem[]; warnings: PolicyProblem[] };
