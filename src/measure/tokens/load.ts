@@ -1,0 +1,101 @@
+// Loads the tokenizer a policy names, from js-tiktoken's builtins or a file, with no
+// network. Every failure is a TokenizerError naming the file (and line, for rank files).
+
+import { createHash } from 'node:crypto';
+import { readFile } from 'node:fs/promises';
+import type { TokenizerSpec } from '../../policy/types.js';
+import { TokenizerError } from './errors.js';
+import { createJsonCounter } from './hf.js';
+import { BUILTIN_NAMES, BUILTIN_PATTERNS, DEFAULT_RANK_FILE_PATTERN, isBuiltinName, type BuiltinName } from './patterns.js';
+import { parseBuiltinRanks, parseRankFile } from './ranks.js';
+import { createRankCounter } from './tiktoken.js';
+import type { TokenCounter } from './types.js';
+
+export interface LoadOptions {
+  /** Entries per cache generation (see cache.ts); tests make it small to force eviction. */
+  cacheGenerationSize?: number;
+}
+
+/** Loads the builtin ranks module of an encoding (each is a few MB of JavaScript, so only on demand). */
+async function importBuiltin(name: BuiltinName): Promise<{ pat_str: string; bpe_ranks: string }> {
+  switch (name) {
+    case 'gpt2':
+      return (await import('js-tiktoken/ranks/gpt2')).default;
+    case 'r50k_base':
+      return (await import('js-tiktoken/ranks/r50k_base')).default;
+    case 'p50k_base':
+      return (await import('js-tiktoken/ranks/p50k_base')).default;
+    case 'cl100k_base':
+      return (await import('js-tiktoken/ranks/cl100k_base')).default;
+    case 'o200k_base':
+      return (await import('js-tiktoken/ranks/o200k_base')).default;
+  }
+}
+
+/** Returns a TokenCounter for the tokenizer a policy names; throws a TokenizerError (stage `load`) naming the file when it cannot. */
+export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = {}): Promise<TokenCounter> {
+  const generationSize = options.cacheGenerationSize;
+  if (spec.kind === 'builtin') {
+    const name: string = spec.name;
+    if (!isBuiltinName(name)) {
+      throw new TokenizerError('load', name, `unknown builtin tokenizer; the builtins are ${BUILTIN_NAMES.join(', ')}`);
+    }
+    const data = await importBuiltin(name);
+    return createRankCounter({
+      id: `builtin:${name}`,
+      label: name,
+      ranks: parseBuiltinRanks(data.bpe_ranks, name),
+      pattern: data.pat_str,
+      ...(generationSize === undefined ? {} : { generationSize }),
+    });
+  }
+
+  let bytes: Buffer;
+  try {
+    bytes = await readFile(spec.absPath);
+  } catch (cause) {
+    const code = (cause as NodeJS.ErrnoException).code;
+    const why = code === 'ENOENT' ? `no such file (${spec.absPath})` : `cannot read ${spec.absPath}: ${(cause as Error).message}`;
+    throw new TokenizerError('load', spec.file, why, { cause });
+  }
+  const digest = createHash('sha256').update(bytes).digest('hex');
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch (cause) {
+    throw new TokenizerError('load', spec.file, 'not valid UTF-8', { cause });
+  }
+
+  if (spec.format === 'tiktoken') {
+    const { pattern, patternId } = resolvePattern(spec.pattern, spec.file);
+    return createRankCounter({
+      id: `tiktoken:sha256:${digest}:pattern:${patternId}`,
+      label: spec.file,
+      ranks: parseRankFile(text, spec.file),
+      pattern,
+      ...(generationSize === undefined ? {} : { generationSize }),
+    });
+  }
+  if (spec.format === 'tokenizer.json') {
+    let json: unknown;
+    try {
+      json = JSON.parse(text);
+    } catch (cause) {
+      throw new TokenizerError('load', spec.file, `not valid JSON: ${(cause as Error).message}`, { cause });
+    }
+    return createJsonCounter(json, spec.file, `tokenizer.json:sha256:${digest}`, generationSize);
+  }
+  throw new TokenizerError('load', spec.file, `unknown tokenizer format ${JSON.stringify(spec.format)} (expected tokenizer.json or tiktoken)`);
+}
+
+/** A rank file's split pattern: a builtin's name, a regex source, or the default. */
+function resolvePattern(pattern: string | undefined, file: string): { pattern: string; patternId: string } {
+  const name = pattern ?? DEFAULT_RANK_FILE_PATTERN;
+  if (isBuiltinName(name)) return { pattern: BUILTIN_PATTERNS[name], patternId: name };
+  try {
+    new RegExp(name, 'gu');
+  } catch (cause) {
+    throw new TokenizerError('load', file, `split pattern is not a valid regular expression: ${(cause as Error).message}`, { cause });
+  }
+  return { pattern: name, patternId: `sha256:${createHash('sha256').update(name).digest('hex').slice(0, 16)}` };
+}

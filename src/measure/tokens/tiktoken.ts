@@ -1,0 +1,126 @@
+// Counters for tiktoken-style vocabularies (js-tiktoken builtins and rank files).
+//
+// js-tiktoken's encode splits the text with the pattern regex and BPE-encodes each
+// match on its own, so count(text) = Σ count(match) exactly; the per-match count is
+// cached. For the builtin patterns a hand-written splitter (ascii-split.ts) finds the
+// matches in ASCII stretches and the regex takes over for each piece that touches
+// another character. Special-token strings in the text count as ordinary text, like
+// `encode(text, [], [])`: corpus text that happens to contain "<|endoftext|>" is text.
+
+import { splitCl100k, splitGpt2, splitO200k, type AsciiSplitter } from './ascii-split.js';
+import { bytePairCount } from './bpe.js';
+import { hashRange, MAX_CACHED_PIECE_LENGTH, PieceCache } from './cache.js';
+import { TokenizerError } from './errors.js';
+import { BUILTIN_PATTERNS } from './patterns.js';
+import type { RankTable } from './ranks.js';
+import type { TokenCounter } from './types.js';
+
+export interface RankCounterOptions {
+  id: string;
+  label: string;
+  ranks: RankTable;
+  /** The split regex source, compiled with flags `gu` as js-tiktoken does. */
+  pattern: string;
+  generationSize?: number;
+  /** Use the hand-written ASCII splitter when the pattern is a builtin's (default true; off to measure the regex alone). */
+  asciiSplitter?: boolean;
+}
+
+/** Returns the hand-written splitter equivalent to a pattern, or null when there is none. */
+export function asciiSplitterFor(pattern: string): AsciiSplitter | null {
+  if (pattern === BUILTIN_PATTERNS.gpt2) return splitGpt2;
+  if (pattern === BUILTIN_PATTERNS.cl100k_base) return splitCl100k;
+  if (pattern === BUILTIN_PATTERNS.o200k_base) return splitO200k;
+  return null;
+}
+
+/** Returns the UTF-8 bytes of a piece as a latin1 string (lone surrogates become U+FFFD, as with TextEncoder). */
+function utf8Bytes(piece: string): string {
+  for (let i = 0; i < piece.length; i++) {
+    if (piece.charCodeAt(i) >= 128) return Buffer.from(piece, 'utf8').toString('latin1');
+  }
+  return piece;
+}
+
+/** Returns a TokenCounter over a rank table and split pattern, with a per-piece cache. */
+export function createRankCounter(options: RankCounterOptions): TokenCounter {
+  const { ranks, label } = options;
+  const split = new RegExp(options.pattern, 'gu');
+  const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
+  const cache = new PieceCache<number>(options.generationSize);
+  const words = new PieceCache<number>(options.generationSize);
+
+  const countRange = (text: string, start: number, end: number): number => {
+    if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(utf8Bytes(text.slice(start, end)), ranks);
+    const hash = hashRange(text, start, end);
+    const cached = cache.find(text, start, end, hash);
+    if (cached !== undefined) return cached;
+    const piece = text.slice(start, end);
+    const n = bytePairCount(utf8Bytes(piece), ranks);
+    cache.add(piece, hash, n);
+    return n;
+  };
+
+  // Every match of the regex from lastIndex `from` on, as String.prototype.matchAll gives them.
+  const countByRegex = (text: string, from: number): number => {
+    let tokens = 0;
+    split.lastIndex = from;
+    let m: RegExpExecArray | null;
+    while ((m = split.exec(text)) !== null) {
+      const length = m[0].length;
+      if (length === 0) {
+        // As matchAll does: step over one code point after an empty match.
+        const code = text.charCodeAt(split.lastIndex);
+        split.lastIndex += code >= 0xd800 && code <= 0xdbff ? 2 : 1;
+        continue;
+      }
+      tokens += countRange(text, m.index, m.index + length);
+    }
+    return tokens;
+  };
+
+  const countText = (text: string): number => {
+    if (ascii === null) return countByRegex(text, 0);
+    let tokens = 0;
+    const n = text.length;
+    let p = 0;
+    while (p < n) {
+      let e = ascii(text, p);
+      if (e < 0) {
+        split.lastIndex = p;
+        const m = split.exec(text);
+        // The builtin patterns match at every position with at least one character.
+        if (m === null || m.index !== p || m[0].length === 0) return tokens + countByRegex(text, p);
+        e = p + m[0].length;
+      }
+      tokens += countRange(text, p, e);
+      p = e;
+    }
+    return tokens;
+  };
+
+  const guarded = (text: string): number => {
+    try {
+      return countText(text);
+    } catch (cause) {
+      throw new TokenizerError('count', label, `cannot encode text: ${(cause as Error).message}`, { cause });
+    }
+  };
+
+  return {
+    id: options.id,
+    label,
+    kind: 'tiktoken',
+    unknownTokenId: null,
+    exactFastPath: true,
+    count: (text) => ({ tokens: guarded(text), unknown: 0 }),
+    countPiece: (piece) => {
+      const cached = words.get(piece);
+      if (cached !== undefined) return cached;
+      const n = guarded(piece);
+      words.set(piece, n);
+      return n;
+    },
+    cacheStats: () => cache.stats(),
+  };
+}
