@@ -12,7 +12,7 @@ import type { CorpusResult } from '../results/corpus.js';
 import { contentIdOf, scanShard } from '../results/scan.js';
 import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
-import { prepareAnalyzers } from './analyzers.js';
+import { AnalyzerSetupError, prepareAnalyzers } from './analyzers.js';
 
 /** A run that cannot be judged (bad policy, no shards, unreadable root): exit code 2. */
 export class ConfigError extends Error {
@@ -40,6 +40,10 @@ export interface CheckOptions {
   onWarning?: (message: string) => void;
   /** Where relative paths in the report are relative to. */
   cwd?: string;
+  /** Returns the content half of a shard's cache key without measuring it (default: sha256 of its raw bytes; the Action uses git blob ids). */
+  contentKey?: (ref: ShardRef) => Promise<string>;
+  /** Shards taken as new: duplicates they add against the other shards are reported separately. */
+  newShards?: string[];
 }
 
 /** Returns the loaded policy, or throws ConfigError listing every problem with file, line and key. */
@@ -68,7 +72,13 @@ export async function measureCorpus(policy: Policy, opts: CheckOptions, shardsOv
         (discovery.skipped.length ? `; ${discovery.skipped.length} files matched but were skipped, e.g. ${discovery.skipped[0]!.path} (${discovery.skipped[0]!.reason})` : ''),
     );
   }
-  const prepared = await prepareAnalyzers(policy);
+  let prepared;
+  try {
+    prepared = await prepareAnalyzers(policy);
+  } catch (err) {
+    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
+    throw err;
+  }
   const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
   const results: ShardResult[] = [];
   const cached = new Set<string>();
@@ -76,14 +86,15 @@ export async function measureCorpus(policy: Policy, opts: CheckOptions, shardsOv
   for (const ref of shards) {
     let result: ShardResult | undefined;
     if (cache) {
-      const contentId = await contentIdOf(ref);
+      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
       result = await cache.get(contentId, prepared.settingsId, ref);
       if (result) cached.add(ref.path);
+      else {
+        result = await scanShard(ref, prepared.scan, prepared.analyzers);
+        await cache.put({ ...result, contentId });
+      }
     }
-    if (!result) {
-      result = await scanShard(ref, prepared.scan, prepared.analyzers);
-      if (cache) await cache.put(result);
-    }
+    if (!result) result = await scanShard(ref, prepared.scan, prepared.analyzers);
     results.push(result);
     bytes += result.read.bytes;
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes, elapsedMs: performance.now() - started });
@@ -96,7 +107,7 @@ export async function measureCorpus(policy: Policy, opts: CheckOptions, shardsOv
     tally: mergeShardResults(results, policy.languages.map((l) => l.key)),
     elapsedMs: 0,
   };
-  await prepared.finish(corpus);
+  await prepared.finish(corpus, opts.newShards);
   corpus.elapsedMs = Math.round(performance.now() - started);
   return corpus;
 }

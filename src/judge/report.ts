@@ -7,7 +7,8 @@ import { languageFigures, ratio } from './figures.js';
 import { judgeRules, overallVerdict } from './rules.js';
 import type { Report, ShardFigures } from './types.js';
 
-export const TOOL_VERSION = '0.1.0';
+export { TOOL_VERSION } from '../version.js';
+import { TOOL_VERSION } from '../version.js';
 
 /** Returns the report of one policy over one corpus result. */
 export function buildReport(policy: Policy, corpus: CorpusResult, cwd: string = process.cwd()): Report {

@@ -32,10 +32,11 @@ export class ResultCache {
   }
 
   /** Returns the cached result for this content under these settings, or undefined. */
-  async get(contentId: string, settingsId: string, at: { path: string; subset?: string }): Promise<ShardResult | undefined> {
+  async get(contentId: string, settingsId: string, at: { path: string; subset?: string; encoding: string; format: string }): Promise<ShardResult | undefined> {
     try {
       const r = JSON.parse(await readFile(this.file(contentId, settingsId), 'utf8')) as ShardResult;
-      if (r.schema !== RESULT_SCHEMA || r.contentId !== contentId || r.settingsId !== settingsId) {
+      // The same bytes decoded with another encoding or format are another result.
+      if (r.schema !== RESULT_SCHEMA || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at.encoding || r.format !== at.format) {
         this.misses += 1;
         return undefined;
       }

@@ -46,6 +46,8 @@ export interface CorpusResult {
   /** Per language key: dictionary fertility under the main tokenizer and the baseline. */
   dictionary?: Record<string, { main: DictionaryResult; baseline?: DictionaryResult }>;
   duplicates?: DuplicateSummary;
+  /** When some shards were taken as new: the duplicates they add against the rest. */
+  duplicatesAgainstExisting?: { newShards: string[]; docs: number; exactDocs: number; nearDocs: number; perShard: Array<{ shard: string; docs: number; exactDocs: number; nearDocs: number }> };
   contamination?: { ngram: number; evalFiles: string[]; evalItems: number };
   elapsedMs: number;
 }

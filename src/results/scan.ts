@@ -57,7 +57,7 @@ export async function scanShard(ref: ShardRef, settings: ScanSettings, analyzers
       const source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
       const tap = new PassThrough();
       source.on('data', (chunk: Buffer) => hash.update(chunk));
-      source.on('error', (err) => tap.destroy(err));
+      source.on('error', (err: Error) => tap.destroy(err));
       source.pipe(tap);
       return tap;
     },

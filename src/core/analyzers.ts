@@ -1,0 +1,138 @@
+// Builds the per-document analyzers a policy asks for (measurer, tokenizers,
+// duplicate index, evaluation overlap), the identity of those settings for the
+// cache, and the cross-shard step that runs once every shard is measured.
+import { relative } from 'node:path';
+import { createMeasurer, forEachWord } from '../measure/index.js';
+import { buildEvalIndex, duplicateOptionsFrom, DuplicateIndexBuilder, findContamination, type EvalItem } from '../measure/duplicates/index.js';
+import { dictionaryFertility, loadTokenizer, measureTokens, readWordList, type TokenCounter } from '../measure/tokens/index.js';
+import type { Policy } from '../policy/types.js';
+import { discoverShards, readShard } from '../read/index.js';
+import type { ReadOptions } from '../read/types.js';
+import { settingsIdOf } from '../results/cache.js';
+import type { CorpusResult } from '../results/corpus.js';
+import { joinShardIndexes, summarizeDuplicates } from '../results/duplicates.js';
+import type { ScanAnalyzers, ScanSettings } from '../results/scan.js';
+import type { DocumentTokens } from '../results/tally.js';
+import { RESULT_SCHEMA } from '../results/types.js';
+import { TOOL_VERSION } from '../version.js';
+
+/** Rejection samples kept per shard. */
+const REJECTION_SAMPLES = 10;
+
+export interface PreparedAnalyzers {
+  settingsId: string;
+  scan: ScanSettings;
+  analyzers: ScanAnalyzers;
+  /** Adds the cross-shard figures (duplicates, dictionary fertility, tokenizer labels) to a measured corpus. */
+  finish(corpus: CorpusResult, newShards?: string[]): Promise<void>;
+}
+
+/** Returns the read options a policy implies. */
+export function readOptionsOf(policy: Policy): ReadOptions {
+  const opts: ReadOptions = { textField: policy.corpus.text, maxLineBytes: policy.corpus.maxLineBytes, maxSamples: REJECTION_SAMPLES };
+  if (policy.corpus.declaredLanguage !== undefined) opts.declaredLanguageField = policy.corpus.declaredLanguage;
+  return opts;
+}
+
+/** A setting that cannot be used (tokenizer or evaluation files unreadable): the run cannot be judged. */
+export class AnalyzerSetupError extends Error {
+  override name = 'AnalyzerSetupError';
+}
+
+/** Returns the analyzers of a policy, ready to scan shards. */
+export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzers> {
+  const measure = createMeasurer({ languages: policy.languages, detection: policy.detection });
+  const read = readOptionsOf(policy);
+
+  let main: TokenCounter | undefined;
+  let baseline: TokenCounter | undefined;
+  try {
+    if (policy.tokenizer) main = await loadTokenizer(policy.tokenizer);
+    if (policy.baseline) baseline = await loadTokenizer(policy.baseline);
+  } catch (err) {
+    throw new AnalyzerSetupError(`${policy.file}: tokenizer: ${(err as Error).message}`);
+  }
+
+  const dupRule = policy.rules.duplicates;
+  const dupOptions = dupRule ? duplicateOptionsFrom(dupRule) : undefined;
+
+  let evalIndex: ReturnType<typeof buildEvalIndex> | undefined;
+  let evalFiles: string[] = [];
+  if (policy.rules.contamination) {
+    const rule = policy.rules.contamination;
+    const found = await discoverShards(policy.root, { ...policy.corpus, include: rule.eval, exclude: [] });
+    if (found.shards.length === 0) {
+      throw new AnalyzerSetupError(`${policy.file}: rules.contamination.eval (${rule.eval.join(', ')}) matched no evaluation files under ${policy.root}`);
+    }
+    const items: EvalItem[] = [];
+    for (const ref of found.shards) {
+      const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
+      if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
+    }
+    evalIndex = buildEvalIndex(items, rule.ngram);
+    evalFiles = found.shards.map((s) => s.path);
+  }
+
+  const settingsId = settingsIdOf({
+    tool: TOOL_VERSION,
+    schema: RESULT_SCHEMA,
+    languages: policy.languages.map((l) => ({ key: l.key, covers: l.covers, scripts: l.scripts })),
+    detection: policy.detection,
+    read: { text: read.textField, declared: read.declaredLanguageField ?? null, maxLineBytes: read.maxLineBytes },
+    tokenizer: main?.id ?? null,
+    baseline: baseline?.id ?? null,
+    duplicates: dupOptions ?? null,
+    eval: evalIndex?.id ?? null,
+  });
+
+  const analyzers: ScanAnalyzers = { measure };
+  if (main) {
+    const m = main;
+    const b = baseline;
+    analyzers.tokens = (text: string): DocumentTokens => {
+      const out: DocumentTokens = { main: measureTokens(m, text, forEachWord) };
+      if (b) out.baseline = measureTokens(b, text, forEachWord);
+      return out;
+    };
+  }
+  if (dupOptions) analyzers.duplicates = () => new DuplicateIndexBuilder(dupOptions);
+  if (evalIndex) {
+    const idx = evalIndex;
+    analyzers.contamination = (text: string) => findContamination(idx, text);
+  }
+
+  return {
+    settingsId,
+    scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId },
+    analyzers,
+    async finish(corpus, newShards) {
+      if (main) corpus.tokenizer = { label: main.label, hasUnknown: main.unknownTokenId !== null };
+      if (baseline) corpus.baseline = { label: baseline.label, hasUnknown: baseline.unknownTokenId !== null };
+      const lists = policy.rules.fertility?.wordLists ?? {};
+      if (main && Object.keys(lists).length > 0) {
+        corpus.dictionary = {};
+        for (const [key, list] of Object.entries(lists)) {
+          let words: string[];
+          try {
+            words = await readWordList(list.absPath);
+          } catch (err) {
+            throw new AnalyzerSetupError(`${policy.file}: rules.fertility.word-lists.${key}: ${(err as Error).message}`);
+          }
+          const shown = relative(policy.root, list.absPath) || list.file;
+          const m = dictionaryFertility(main, words);
+          const entry: NonNullable<CorpusResult['dictionary']>[string] = { main: { list: shown, ...m } };
+          if (baseline) entry.baseline = { list: shown, ...dictionaryFertility(baseline, words) };
+          corpus.dictionary[key] = entry;
+        }
+      }
+      if (dupOptions) {
+        const findings = joinShardIndexes(corpus.shards, dupOptions, newShards);
+        corpus.duplicates = summarizeDuplicates(findings, policy.languages.map((l) => l.key));
+        if (findings.againstExisting) corpus.duplicatesAgainstExisting = findings.againstExisting;
+      }
+      if (evalIndex && policy.rules.contamination) {
+        corpus.contamination = { ngram: policy.rules.contamination.ngram, evalFiles, evalItems: evalIndex.items };
+      }
+    },
+  };
+}

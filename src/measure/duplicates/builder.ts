@@ -1,0 +1,205 @@
+// Builds one shard's duplicate index: per document its line, language, exact hash and a
+// reduced-width MinHash signature, in the binary layout described in format.ts.
+import { Sketcher } from './minhash.js';
+import { DocumentScanner, prepareText } from './scan.js';
+import {
+  EXACT_BYTES,
+  FORMAT_VERSION,
+  HEADER_BYTES,
+  KIND_EMPTY,
+  KIND_FULL,
+  KIND_WORDLESS,
+  MAGIC,
+  bitsFor,
+  checksum32,
+  signatureBytes,
+} from './format.js';
+import type { DuplicatesRule } from '../../policy/types.js';
+import type { DuplicateOptions, IndexedDocument } from './types.js';
+
+/** Largest shingle the header can carry (one byte). */
+const MAX_SHINGLE = 255;
+/** Largest signature the header can carry (two bytes). */
+const MAX_HASHES = 65535;
+/** Languages are small integers; this bound keeps the location record at most 4 bytes for them. */
+const MAX_LANGUAGE = (1 << 24) - 1;
+
+/** Returns `opts` checked, or throws a RangeError naming the offending option. */
+export function checkOptions(opts: DuplicateOptions): DuplicateOptions {
+  const { shingle, hashes, threshold, punctuation } = opts;
+  if (!Number.isInteger(shingle) || shingle < 1 || shingle > MAX_SHINGLE) {
+    throw new RangeError(`duplicates: shingle must be an integer from 1 to ${MAX_SHINGLE} words, got ${shingle}`);
+  }
+  if (!Number.isInteger(hashes) || hashes < 1 || hashes > MAX_HASHES) {
+    throw new RangeError(`duplicates: hashes must be an integer from 1 to ${MAX_HASHES}, got ${hashes}`);
+  }
+  if (typeof threshold !== 'number' || !(threshold > 0 && threshold <= 1)) {
+    throw new RangeError(`duplicates: threshold must be a number in (0, 1], got ${threshold}`);
+  }
+  if (punctuation !== 'keep' && punctuation !== 'strip') {
+    throw new RangeError(`duplicates: punctuation must be 'keep' or 'strip', got ${String(punctuation)}`);
+  }
+  return { shingle, hashes, threshold, punctuation };
+}
+
+/** Returns the index options a policy's `rules.duplicates` asks for. */
+export function duplicateOptionsFrom(rule: DuplicatesRule): DuplicateOptions {
+  return checkOptions({ shingle: rule.near.shingle, hashes: rule.near.hashes, threshold: rule.near.threshold, punctuation: rule.punctuation });
+}
+
+/** A byte array that grows by doubling. */
+class Bytes {
+  data: Uint8Array;
+  length = 0;
+  constructor(capacity: number) {
+    this.data = new Uint8Array(Math.max(16, capacity));
+  }
+  reserve(extra: number): void {
+    if (this.length + extra <= this.data.length) return;
+    let cap = this.data.length * 2;
+    while (cap < this.length + extra) cap *= 2;
+    const d = new Uint8Array(cap);
+    d.set(this.data.subarray(0, this.length));
+    this.data = d;
+  }
+  varint(v: number): void {
+    this.reserve(10);
+    while (v >= 0x80) {
+      this.data[this.length++] = (v % 0x80) | 0x80;
+      v = Math.floor(v / 0x80);
+    }
+    this.data[this.length++] = v;
+  }
+}
+
+/** Collects one shard's documents and returns its duplicate index blob. */
+export class DuplicateIndexBuilder {
+  readonly options: DuplicateOptions;
+  readonly signatureBits: number;
+  private readonly sigBytes: number;
+  private readonly sketcher: Sketcher;
+  private readonly scanner = new DocumentScanner();
+  private readonly exact: Bytes;
+  private readonly signatures: Bytes;
+  private readonly stream: Bytes;
+  private documents = 0;
+  private lastOrdinal = -1;
+  private lastLine = 0;
+  private finished = false;
+
+  constructor(opts: DuplicateOptions) {
+    this.options = checkOptions(opts);
+    this.signatureBits = bitsFor(this.options);
+    this.sigBytes = signatureBytes(this.options.hashes, this.signatureBits);
+    this.sketcher = new Sketcher(this.options.shingle, this.options.hashes);
+    this.exact = new Bytes(1024 * EXACT_BYTES);
+    this.signatures = new Bytes(1024 * this.sigBytes);
+    this.stream = new Bytes(4096);
+  }
+
+  /** Indexes one document; documents must come in increasing ordinal order. */
+  add(doc: IndexedDocument): void {
+    if (this.finished) throw new Error('DuplicateIndexBuilder: add() after finish()');
+    const { ordinal, line, language, text } = doc;
+    if (!Number.isInteger(ordinal) || ordinal <= this.lastOrdinal) {
+      throw new RangeError(`DuplicateIndexBuilder: ordinal ${ordinal} after ${this.lastOrdinal}; documents must be added in increasing ordinal order`);
+    }
+    if (!Number.isInteger(line) || line < 0) throw new RangeError(`DuplicateIndexBuilder: line must be a non-negative integer, got ${line} (ordinal ${ordinal})`);
+    if (!Number.isInteger(language) || language < 0 || language > MAX_LANGUAGE) {
+      throw new RangeError(`DuplicateIndexBuilder: language must be an integer from 0 to ${MAX_LANGUAGE}, got ${language} (ordinal ${ordinal})`);
+    }
+    if (typeof text !== 'string') throw new TypeError(`DuplicateIndexBuilder: text must be a string (ordinal ${ordinal})`);
+    this.lastOrdinal = ordinal;
+
+    const prepared = prepareText(text);
+    const exact = this.exact;
+    exact.reserve(EXACT_BYTES);
+    const sigs = this.signatures;
+    sigs.reserve(this.sigBytes);
+    const sc = this.scanner;
+    sc.scan(prepared, this.options.punctuation === 'strip');
+    let kind = KIND_EMPTY;
+    if (sc.exactLength > 0) {
+      writeU32(exact.data, exact.length, sc.exactHigh);
+      writeU32(exact.data, exact.length + 4, sc.exactLow);
+      const count = sc.wordCount;
+      if (count > 0) {
+        this.sketcher.sketch(sc.words, count);
+        packSignature(this.sketcher.values, this.signatureBits, sigs.data, sigs.length);
+        kind = KIND_FULL;
+      } else {
+        sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
+        kind = KIND_WORDLESS;
+      }
+    } else {
+      exact.data.fill(0, exact.length, exact.length + EXACT_BYTES);
+      sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
+    }
+    exact.length += EXACT_BYTES;
+    sigs.length += this.sigBytes;
+    const delta = line - this.lastLine;
+    this.lastLine = line;
+    this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
+    this.stream.varint(language * 4 + kind);
+    this.documents++;
+  }
+
+  /** Returns the number of documents added so far. */
+  get size(): number {
+    return this.documents;
+  }
+
+  /** Returns the index blob; the builder cannot be used afterwards. */
+  finish(): Uint8Array {
+    if (this.finished) throw new Error('DuplicateIndexBuilder: finish() called twice');
+    this.finished = true;
+    const n = this.documents;
+    const total = HEADER_BYTES + this.exact.length + this.signatures.length + this.stream.length;
+    const blob = new Uint8Array(total);
+    const view = new DataView(blob.buffer);
+    for (let i = 0; i < 4; i++) blob[i] = MAGIC[i]!;
+    view.setUint8(4, FORMAT_VERSION);
+    view.setUint8(5, this.options.punctuation === 'strip' ? 1 : 0);
+    view.setUint8(6, this.options.shingle);
+    view.setUint8(7, this.signatureBits);
+    view.setUint16(8, this.options.hashes, true);
+    view.setFloat32(12, this.options.threshold, true);
+    view.setUint32(16, n, true);
+    view.setUint32(20, this.stream.length, true);
+    let at = HEADER_BYTES;
+    blob.set(this.exact.data.subarray(0, this.exact.length), at);
+    at += this.exact.length;
+    blob.set(this.signatures.data.subarray(0, this.signatures.length), at);
+    at += this.signatures.length;
+    blob.set(this.stream.data.subarray(0, this.stream.length), at);
+    view.setUint32(24, checksum32(blob, HEADER_BYTES, total), true);
+    return blob;
+  }
+}
+
+function writeU32(d: Uint8Array, at: number, v: number): void {
+  d[at] = v & 0xff;
+  d[at + 1] = (v >>> 8) & 0xff;
+  d[at + 2] = (v >>> 16) & 0xff;
+  d[at + 3] = v >>> 24;
+}
+
+/** Writes the low `bits` bits of each value, packed little-endian, at `d[at]`. */
+export function packSignature(values: Int32Array, bits: number, d: Uint8Array, at: number): void {
+  const k = values.length;
+  if (bits === 4) {
+    let i = 0;
+    for (; i + 1 < k; i += 2) d[at++] = (values[i]! & 15) | ((values[i + 1]! & 15) << 4);
+    if (i < k) d[at] = values[i]! & 15;
+  } else if (bits === 8) {
+    for (let i = 0; i < k; i++) d[at + i] = values[i]! & 0xff;
+  } else if (bits === 16) {
+    for (let i = 0; i < k; i++) {
+      const v = values[i]!;
+      d[at + 2 * i] = v & 0xff;
+      d[at + 2 * i + 1] = (v >>> 8) & 0xff;
+    }
+  } else {
+    for (let i = 0; i < k; i++) writeU32(d, at + 4 * i, values[i]!);
+  }
+}

@@ -1,0 +1,196 @@
+// Evaluation-set contamination: does a training text contain an n-word span of any held-out
+// evaluation item? The 13-gram overlap test follows Brown et al. (2020), "Language Models are
+// Few-Shot Learners", appendix C. Words are those of the near-duplicate stage (letters, marks
+// and digits, after NFC and lowercasing), so punctuation and case differences still match.
+// Each n-gram is hashed to 64 bits (two 32-bit lanes); with a million eval n-grams and a
+// billion training n-grams, a false match by hash collision has probability ~5e-5 in all.
+//
+// An eval item shorter than n words is kept as one gram of all its words: a training text
+// overlaps it when it contains the whole item as a run of words. (Dropping such items would
+// hide contamination of short-answer sets; a very short item — one or two words — will match
+// ordinary text, so the index counts them in `shortItems` for the report to show.) An item with
+// no words at all cannot overlap anything and is counted in `emptyItems`.
+import * as hash from './hash.js';
+import { hashWords, prepareText, wordBuffer, type WordBuffer } from './scan.js';
+
+// Module-local copies (see scan.ts: some loaders make imported bindings getters).
+const fmix32 = hash.fmix32;
+const fmix32b = hash.fmix32b;
+
+/** Default n of the overlap test: 13 words, after Brown et al. (2020). */
+export const DEFAULT_NGRAM = 13;
+/** Rolling-hash bases of the two lanes (odd, so each step is invertible mod 2^32). */
+const BASE_1 = 0x2545f491;
+const BASE_2 = 0x5851f42d;
+/** The table is kept at most half full, so a probe ends after ~2 slots on average. */
+const LOAD = 0.5;
+/** Bump when tokenization or hashing changes, so cached results keyed by the index id are not reused. */
+const INDEX_VERSION = 1;
+
+/** An evaluation item: the eval file (as reports name it), the 1-based line, and its text. */
+export interface EvalItem {
+  file: string;
+  line: number;
+  text: string;
+}
+
+/** An index of the n-grams of a set of evaluation items. */
+export interface EvalIndex {
+  /** 16 hex digits identifying the index's contents (n, every item's file, line and words, in order): a cache key for results per eval set. */
+  readonly id: string;
+  readonly ngram: number;
+  readonly items: number;
+  /** Distinct n-grams (and whole short items) in the index. */
+  readonly grams: number;
+  /** Items shorter than n words, each indexed as one gram of all its words. */
+  readonly shortItems: number;
+  /** Items without a single word: they can overlap nothing. */
+  readonly emptyItems: number;
+  /** Lengths (in words) of grams in the index, longest first: n, then any shorter item lengths. */
+  readonly lengths: readonly number[];
+  /** @internal open-addressing table: two key lanes and the first item holding each gram. */
+  readonly table: { lane1: Int32Array; lane2: Int32Array; item: Int32Array; mask: number };
+  /** @internal where each item came from. */
+  readonly sources: ReadonlyArray<{ file: string; line: number }>;
+}
+
+/** Returns an index of every n-word span (and every whole item shorter than n words) of the evaluation items; a gram in several items maps to the first. */
+export function buildEvalIndex(items: EvalItem[], ngram = DEFAULT_NGRAM): EvalIndex {
+  if (!Number.isInteger(ngram) || ngram < 1) throw new RangeError(`contamination: ngram must be a positive integer, got ${ngram}`);
+  const buf = wordBuffer(2);
+  const grams: Array<{ l1: Int32Array; l2: Int32Array; count: number }> = [];
+  const lengths = new Set<number>();
+  let total = 0;
+  let shortItems = 0;
+  let emptyItems = 0;
+  // Id: a running 64-bit hash over n and each item's file, line and word hashes.
+  let id1 = Math.imul(0x9e3779b9 ^ INDEX_VERSION, 0x01000193) ^ ngram;
+  let id2 = Math.imul(0x7f4a7c15 ^ INDEX_VERSION, 0x5bd1e995) ^ ngram;
+  const fold = (x: number): void => {
+    id1 = Math.imul(id1 ^ x, 0x01000193);
+    id1 = (id1 << 13) | (id1 >>> 19);
+    id2 = Math.imul(id2 ^ x, 0x5bd1e995);
+    id2 = (id2 << 11) | (id2 >>> 21);
+  };
+  items.forEach((item, idx) => {
+    if (typeof item?.text !== 'string') throw new TypeError(`contamination: item ${idx} (${item?.file}:${item?.line}) has no text`);
+    const words = hashWords(prepareText(item.text), buf);
+    for (let i = 0; i < item.file.length; i++) fold(item.file.charCodeAt(i));
+    fold(0xfffe);
+    fold(item.line);
+    for (let i = 0; i < words; i++) fold(buf.lane1[i]!);
+    fold(0xffff);
+    if (words === 0) {
+      emptyItems++;
+      grams.push({ l1: new Int32Array(0), l2: new Int32Array(0), count: 0 });
+      return;
+    }
+    const m = Math.min(ngram, words);
+    if (words < ngram) shortItems++;
+    lengths.add(m);
+    const count = words - m + 1;
+    const l1 = new Int32Array(count);
+    const l2 = new Int32Array(count);
+    rollGrams(buf, words, m, l1, l2);
+    grams.push({ l1, l2, count });
+    total += count;
+  });
+
+  let size = 16;
+  while (size * LOAD < total) size *= 2;
+  const lane1 = new Int32Array(size);
+  const lane2 = new Int32Array(size);
+  const item = new Int32Array(size).fill(-1);
+  const mask = size - 1;
+  let distinct = 0;
+  grams.forEach((g, idx) => {
+    for (let i = 0; i < g.count; i++) {
+      const a = g.l1[i]!;
+      const b = g.l2[i]!;
+      let slot = a & mask;
+      while (item[slot]! >= 0 && !(lane1[slot] === a && lane2[slot] === b)) slot = (slot + 1) & mask;
+      if (item[slot]! < 0) {
+        lane1[slot] = a;
+        lane2[slot] = b;
+        item[slot] = idx;
+        distinct++;
+      }
+    }
+  });
+  return {
+    id: hash.hex64(fmix32(id1 ^ items.length), fmix32b(id2 + items.length)),
+    ngram,
+    items: items.length,
+    grams: distinct,
+    shortItems,
+    emptyItems,
+    lengths: [...lengths].sort((a, b) => b - a),
+    table: { lane1, lane2, item, mask },
+    sources: items.map((it) => ({ file: it.file, line: it.line })),
+  };
+}
+
+/** Writes the two-lane hash of every m-word window of the words in `buf` into l1/l2 (count − m + 1 of them). */
+function rollGrams(buf: WordBuffer, count: number, m: number, l1: Int32Array, l2: Int32Array): void {
+  const w1 = buf.lane1;
+  const w2 = buf.lane2!;
+  let top1 = 1;
+  let top2 = 1;
+  for (let j = 1; j < m; j++) {
+    top1 = Math.imul(top1, BASE_1);
+    top2 = Math.imul(top2, BASE_2);
+  }
+  let h1 = 0;
+  let h2 = 0;
+  for (let j = 0; j < m; j++) {
+    h1 = (Math.imul(h1, BASE_1) + w1[j]!) | 0;
+    h2 = (Math.imul(h2, BASE_2) + w2[j]!) | 0;
+  }
+  // The window length is mixed in, so a short item's gram cannot equal a window of another length.
+  l1[0] = fmix32(h1 ^ m) | 0;
+  l2[0] = fmix32b(h2 + m) | 0;
+  for (let i = 1; i + m <= count; i++) {
+    h1 = (Math.imul((h1 - Math.imul(w1[i - 1]!, top1)) | 0, BASE_1) + w1[i + m - 1]!) | 0;
+    h2 = (Math.imul((h2 - Math.imul(w2[i - 1]!, top2)) | 0, BASE_2) + w2[i + m - 1]!) | 0;
+    l1[i] = fmix32(h1 ^ m) | 0;
+    l2[i] = fmix32b(h2 + m) | 0;
+  }
+}
+
+const scratch = { buf: wordBuffer(2), l1: new Int32Array(1024), l2: new Int32Array(1024) };
+
+/** Returns the file and line of the first evaluation item (in the index's order) that `text` overlaps by an n-word span or a whole short item, or null. */
+export function findContamination(index: EvalIndex, text: string): { file: string; line: number } | null {
+  const buf = scratch.buf;
+  const words = hashWords(prepareText(text), buf);
+  const { lane1, lane2, item, mask } = index.table;
+  let best = -1;
+  for (const m of index.lengths) {
+    if (words < m) continue;
+    const count = words - m + 1;
+    if (scratch.l1.length < count) {
+      scratch.l1 = new Int32Array(count * 2);
+      scratch.l2 = new Int32Array(count * 2);
+    }
+    const l1 = scratch.l1;
+    const l2 = scratch.l2;
+    rollGrams(buf, words, m, l1, l2);
+    for (let i = 0; i < count; i++) {
+      const a = l1[i]!;
+      const b = l2[i]!;
+      let slot = a & mask;
+      for (;;) {
+        const it = item[slot]!;
+        if (it < 0) break;
+        if (lane1[slot] === a && lane2[slot] === b) {
+          if (best < 0 || it < best) best = it;
+          break;
+        }
+        slot = (slot + 1) & mask;
+      }
+      if (best === 0) break;
+    }
+    if (best === 0) break;
+  }
+  return best < 0 ? null : { ...index.sources[best]! };
+}
