@@ -72,10 +72,10 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
       const f = langs[spec.key];
       const share = f ? (f.share[unit] ?? 0) : 0;
       const off = share - spec.target;
-      out.push(
-        outcome(policy, 'mix', `language:${spec.key}`, share, spec.target, 'share', Math.abs(off) > rules.mix.tolerance + 1e-12,
-          `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} ± ${(rules.mix.tolerance * 100).toFixed(1)} points (${off >= 0 ? '+' : ''}${(off * 100).toFixed(1)} points)`),
-      );
+      const o = outcome(policy, 'mix', `language:${spec.key}`, share, spec.target, 'share', Math.abs(off) > rules.mix.tolerance + 1e-12,
+        `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} ± ${(rules.mix.tolerance * 100).toFixed(1)} points (${off >= 0 ? '+' : ''}${(off * 100).toFixed(1)} points)`);
+      o.tolerance = rules.mix.tolerance;
+      out.push(o);
     }
     for (const [key, limit] of [['other', rules.mix.maxOther], ['und', rules.mix.maxUndetermined]] as const) {
       if (limit === undefined) continue;
@@ -137,7 +137,7 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
       const base = f.baseline;
       if (fr.maxRegression !== undefined && base && base.fertility) {
         const rise = main.fertility / base.fertility - 1;
-        out.push(outcome(policy, 'fertility', `language:${spec.key}`, rise, fr.maxRegression, 'ratio', rise > fr.maxRegression + 1e-12,
+        out.push(outcome(policy, 'fertility', `language:${spec.key}`, rise, fr.maxRegression, 'share', rise > fr.maxRegression + 1e-12,
           `${spec.key}: fertility ${main.fertility.toFixed(3)} under ${main.tokenizer} vs ${base.fertility.toFixed(3)} under ${base.tokenizer} (${rise >= 0 ? '+' : ''}${pct(rise)}; limit +${pct(fr.maxRegression)})`));
       }
     }

@@ -67,6 +67,8 @@ export interface RuleOutcome {
   scope: string;
   measured: number | null;
   limit: number | null;
+  /** For limits of the form target ± tolerance (mix): the tolerance, in the same unit. */
+  tolerance?: number;
   /** How to read measured and limit: share (0..1), count, ratio. */
   unit: 'share' | 'count' | 'ratio' | 'points';
   severity: Severity;

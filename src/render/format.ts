@@ -40,6 +40,12 @@ export function inUnit(x: number | null, unit: 'share' | 'count' | 'ratio' | 'po
   return fixed(x, 3);
 }
 
+/** Formats a rule's limit, with its tolerance where it has one (40.0 % ±5.0). */
+export function limitOf(r: { limit: number | null; unit: 'share' | 'count' | 'ratio' | 'points'; tolerance?: number }): string {
+  const base = inUnit(r.limit, r.unit);
+  return r.tolerance === undefined ? base : `${base} ±${(r.tolerance * 100).toFixed(1)}`;
+}
+
 /** Returns a location as path:line. */
 export function where(loc: { path: string; line?: number }): string {
   return loc.line === undefined ? loc.path : `${loc.path}:${loc.line}`;

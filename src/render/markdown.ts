@@ -3,7 +3,7 @@
 import type { Report, RuleOutcome } from '../judge/types.js';
 import { bar } from './bars.js';
 import { codePath, escapeMarkdown as esc } from './escape.js';
-import { bytes, count, fixed, inUnit, percent, points } from './format.js';
+import { bytes, count, fixed, inUnit, limitOf, percent, points } from './format.js';
 
 export interface MarkdownOptions {
   /** Links file:line locations to this URL prefix (e.g. a blob URL at the PR's head commit). */
@@ -42,7 +42,7 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
   out.push('| | rule | scope | measured | limit | finding |');
   out.push('|---|---|---|---:|---:|---|');
   for (const r of ordered) {
-    out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === 'warn' ? ' (warn)' : ''} | ${esc(r.scope.replace(/^language:/, ''))} | ${inUnit(r.measured, r.unit)} | ${inUnit(r.limit, r.unit)} | ${esc(r.message)} |`);
+    out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === 'warn' ? ' (warn)' : ''} | ${esc(r.scope.replace(/^language:/, ''))} | ${inUnit(r.measured, r.unit)} | ${limitOf(r)} | ${esc(r.message)} |`);
   }
   out.push('');
   for (const r of notPassing) {
@@ -72,6 +72,21 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
   out.push('');
   out.push('</details>');
   out.push('');
+
+  const declared = Object.values(report.languages).filter((f) => f.declaredDocs);
+  if (declared.length) {
+    out.push('<details><summary>Declared vs detected language</summary>');
+    out.push('');
+    out.push('| declared | documents | detected otherwise | detected as |');
+    out.push('|---|---:|---:|---|');
+    for (const f of declared) {
+      const as = Object.entries(f.detectedAs ?? {}).sort((a, b) => b[1] - a[1]).map(([k, n]) => `${esc(k)} ${count(n)}`).join(', ');
+      out.push(`| ${esc(f.key)} | ${count(f.declaredDocs)} | ${percent((f.mismatchDocs ?? 0) / (f.declaredDocs ?? 1))} | ${as} |`);
+    }
+    out.push('');
+    out.push('</details>');
+    out.push('');
+  }
 
   // Tokenizer
   const withFertility = Object.values(report.languages).filter((f) => f.fertility && f.docs > 0);

@@ -2,7 +2,7 @@
 // mix table. Colour only when asked (a TTY without NO_COLOR).
 import type { Report, RuleOutcome } from '../judge/types.js';
 import { bar } from './bars.js';
-import { bytes, count, fixed, inUnit, percent, points, where } from './format.js';
+import { bytes, count, fixed, inUnit, limitOf, percent, points, where } from './format.js';
 
 export interface TerminalOptions {
   color: boolean;
@@ -36,7 +36,7 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
   for (const r of ordered) {
     const scope = r.scope.replace(/^language:/, '');
     lines.push(
-      `${paint[r.verdict](mark[r.verdict])} ${r.rule.padEnd(13)} ${clean(scope).padEnd(10)} ${inUnit(r.measured, r.unit).padStart(9)} ${dim('limit')} ${inUnit(r.limit, r.unit).padEnd(8)} ${r.verdict === 'pass' ? dim(clean(r.message)) : clean(r.message)}`,
+      `${paint[r.verdict](mark[r.verdict])} ${r.rule.padEnd(13)} ${clean(scope).padEnd(10)} ${inUnit(r.measured, r.unit).padStart(9)} ${dim('limit')} ${limitOf(r).padEnd(13)} ${r.verdict === 'pass' ? dim(clean(r.message)) : clean(r.message)}`,
     );
     if (r.verdict !== 'pass') {
       for (const l of r.locations.slice(0, maxLoc)) lines.push(`       ${dim('at')} ${clean(where(l))}${l.detail ? dim(`  ${clean(l.detail)}`) : ''}`);
@@ -55,6 +55,16 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
     lines.push(
       `  ${clean(f.key).padEnd(9)} ${percent(f.target).padStart(7)} ${percent(share).padStart(7)}  ${bar(share, 20).padEnd(20)} ${count(f.docs).padStart(8)} ${count(f.words).padStart(10)}${hasTokens ? ` ${count(f.tokens ?? 0).padStart(10)}` : ''} ${percent(f.purity).padStart(7)}`,
     );
+  }
+
+  const declared = Object.values(report.languages).filter((f) => f.declaredDocs);
+  if (declared.length) {
+    lines.push('');
+    lines.push(bold('Declared vs detected language'));
+    for (const f of declared) {
+      const as = Object.entries(f.detectedAs ?? {}).sort((a, b) => b[1] - a[1]).map(([k, n]) => `${clean(k)} ${count(n)}`).join(', ');
+      lines.push(`  ${clean(f.key).padEnd(9)} ${count(f.declaredDocs).padStart(7)} declared, ${percent((f.mismatchDocs ?? 0) / (f.declaredDocs ?? 1)).padStart(7)} detected otherwise ${dim(`(${as})`)}`);
+    }
   }
 
   const fert = Object.values(report.languages).filter((f) => f.fertility && f.docs > 0);

@@ -14,8 +14,8 @@ import * as hash from './hash.js';
 import { hashWords, prepareText, wordBuffer, type WordBuffer } from './scan.js';
 
 // Module-local copies (see scan.ts: some loaders make imported bindings getters).
-const fmix32 = hash.fmix32;
-const fmix32b = hash.fmix32b;
+const mix32 = hash.mix32;
+const mix32b = hash.mix32b;
 
 /** Default n of the overlap test: 13 words, after Brown et al. (2020). */
 export const DEFAULT_NGRAM = 13;
@@ -118,7 +118,7 @@ export function buildEvalIndex(items: EvalItem[], ngram = DEFAULT_NGRAM): EvalIn
     }
   });
   return {
-    id: hash.hex64(fmix32(id1 ^ items.length), fmix32b(id2 + items.length)),
+    id: hash.hex64(mix32(id1 ^ items.length), mix32b(id2 + items.length)),
     ngram,
     items: items.length,
     grams: distinct,
@@ -147,13 +147,13 @@ function rollGrams(buf: WordBuffer, count: number, m: number, l1: Int32Array, l2
     h2 = (Math.imul(h2, BASE_2) + w2[j]!) | 0;
   }
   // The window length is mixed in, so a short item's gram cannot equal a window of another length.
-  l1[0] = fmix32(h1 ^ m) | 0;
-  l2[0] = fmix32b(h2 + m) | 0;
+  l1[0] = mix32(h1 ^ m);
+  l2[0] = mix32b(h2 + m);
   for (let i = 1; i + m <= count; i++) {
     h1 = (Math.imul((h1 - Math.imul(w1[i - 1]!, top1)) | 0, BASE_1) + w1[i + m - 1]!) | 0;
     h2 = (Math.imul((h2 - Math.imul(w2[i - 1]!, top2)) | 0, BASE_2) + w2[i + m - 1]!) | 0;
-    l1[i] = fmix32(h1 ^ m) | 0;
-    l2[i] = fmix32b(h2 + m) | 0;
+    l1[i] = mix32(h1 ^ m);
+    l2[i] = mix32b(h2 + m);
   }
 }
 

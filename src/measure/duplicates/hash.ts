@@ -1,24 +1,35 @@
 // 32-bit mixing primitives. Everything is Math.imul arithmetic on 32-bit halves so the
 // hot loops never touch BigInt; a 64-bit value is carried as two independent lanes.
 
-/** Returns `h` passed through the MurmurHash3 finalizer (a bijection on 32 bits with full avalanche). */
-export function fmix32(h: number): number {
+/** Returns `h` passed through the MurmurHash3 finalizer (a bijection on 32 bits with full avalanche), as a signed 32-bit integer. */
+export function mix32(h: number): number {
   h ^= h >>> 16;
   h = Math.imul(h, 0x85ebca6b);
   h ^= h >>> 13;
   h = Math.imul(h, 0xc2b2ae35);
-  h ^= h >>> 16;
-  return h >>> 0;
+  return h ^ (h >>> 16);
 }
 
-/** Returns a second 32-bit finalizer, independent of fmix32 (constants of the SplitMix32 / "lowbias32" mixer). */
-export function fmix32b(h: number): number {
+/** Returns a second 32-bit finalizer, independent of mix32 (constants of the "lowbias32" mixer), as a signed 32-bit integer. */
+export function mix32b(h: number): number {
   h ^= h >>> 16;
   h = Math.imul(h, 0x7feb352d);
   h ^= h >>> 15;
   h = Math.imul(h, 0x846ca68b);
-  h ^= h >>> 16;
-  return h >>> 0;
+  return h ^ (h >>> 16);
+}
+
+// Hot loops use the signed forms: an unsigned result above 2^31 returned from a call that is
+// not inlined is boxed as a heap number, which measured ~10× slower in the n-gram loop.
+
+/** Returns mix32(h) as an unsigned 32-bit integer. */
+export function fmix32(h: number): number {
+  return mix32(h) >>> 0;
+}
+
+/** Returns mix32b(h) as an unsigned 32-bit integer. */
+export function fmix32b(h: number): number {
+  return mix32b(h) >>> 0;
 }
 
 // The 64-bit string hash: two FNV-1a-style lanes, one step per UTF-16 code unit, then the
@@ -36,8 +47,8 @@ export function finishExact(h1: number, h2: number, length: number, out: { exact
   h2 = (h2 + length) | 0;
   h1 = (h1 + h2) | 0;
   h2 = (h2 + h1) | 0;
-  h1 = fmix32(h1) | 0;
-  h2 = fmix32b(h2) | 0;
+  h1 = mix32(h1);
+  h2 = mix32b(h2);
   h1 = (h1 + h2) | 0;
   h2 = (h2 + h1) | 0;
   out.exactHigh = h1 >>> 0;

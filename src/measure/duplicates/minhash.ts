@@ -30,7 +30,7 @@
 import * as hash from './hash.js';
 
 // A module-local copy: some loaders turn imported bindings into getter calls.
-const fmix32b = hash.fmix32b;
+const mix32b = hash.mix32b;
 
 /** Base of the polynomial rolling hash over word hashes (odd, so multiplication is invertible mod 2^32). */
 const ROLL_BASE = 0x2545f491;
@@ -71,7 +71,7 @@ export class Sketcher {
     // A seed per shingle length keeps a short document's single shingle (all its words) apart
     // from shingles of other lengths.
     this.lengthSeed = new Int32Array(shingle + 1);
-    for (let m = 0; m <= shingle; m++) this.lengthSeed[m] = fmix32b(0x632be5ab + m);
+    for (let m = 0; m <= shingle; m++) this.lengthSeed[m] = mix32b(0x632be5ab + m);
   }
 
   /**

@@ -15,8 +15,8 @@ import * as hash from './hash.js';
 
 // Module-local copies: some loaders (tsx, vitest) turn imported bindings into getter calls,
 // which made the scan loops ~5× slower when measured.
-const fmix32 = hash.fmix32;
-const fmix32b = hash.fmix32b;
+const mix32 = hash.mix32;
+const mix32b = hash.mix32b;
 const finishExact = hash.finishExact;
 const hex64 = hash.hex64;
 const EXACT_BASIS_1 = hash.EXACT_BASIS_1;
@@ -141,15 +141,15 @@ export function hashWords(prepared: string, buf: WordBuffer): number {
     } else if (inWord) {
       inWord = false;
       if (count === buf.lane1.length) grow(buf);
-      buf.lane1[count] = fmix32(h1 ^ len) | 0;
-      if (two) buf.lane2![count] = fmix32b(h2 + len) | 0;
+      buf.lane1[count] = mix32(h1 ^ len);
+      if (two) buf.lane2![count] = mix32b(h2 + len);
       count++;
     }
   }
   if (inWord) {
     if (count === buf.lane1.length) grow(buf);
-    buf.lane1[count] = fmix32(h1 ^ len) | 0;
-    if (two) buf.lane2![count] = fmix32b(h2 + len) | 0;
+    buf.lane1[count] = mix32(h1 ^ len);
+    if (two) buf.lane2![count] = mix32b(h2 + len);
     count++;
   }
   return count;
@@ -238,7 +238,7 @@ export class DocumentScanner {
             w.set(words);
             words = w;
           }
-          words[count++] = fmix32(wh ^ wlen) | 0;
+          words[count++] = mix32(wh ^ wlen);
         }
         if (cls === SPACE) {
           space = true;
@@ -270,7 +270,7 @@ export class DocumentScanner {
         w.set(words);
         words = w;
       }
-      words[count++] = fmix32(wh ^ wlen) | 0;
+      words[count++] = mix32(wh ^ wlen);
     }
     finishExact(h1, h2, emitted, this);
     this.words = words;

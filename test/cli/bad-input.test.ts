@@ -1,0 +1,124 @@
+// Bad input gets a clear message naming the file, line or key, and loses no
+// count: a typo'd policy, a missing field, no matching shards, a truncated .gz,
+// a non-UTF-8 file declared UTF-8, a 50 MB single line, a binary file.
+import { randomBytes } from 'node:crypto';
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import { describe, expect, it } from 'vitest';
+import { corpus, ENGLISH, HINDI, policyYaml, sluice } from './helpers.js';
+
+const lines = (n: number, text: string): string => Array.from({ length: n }, (_, i) => JSON.stringify({ text: `${text} (${i})` })).join('\n') + '\n';
+
+describe('a policy that cannot be judged exits 2 with the file, line and key', () => {
+  it('names a misspelt key and suggests the right one', () => {
+    const root = corpus({ 'p.yaml': policyYaml().replace('tolerance', 'tolerence'), 'data/a.jsonl': lines(3, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/p\.yaml:\d+:\d+: rules\.mix\.tolerence: .*did you mean `tolerance`/);
+    expect(r.stdout).toBe('');
+  });
+
+  it('names a missing required field', () => {
+    const root = corpus({ 'p.yaml': policyYaml().replace('  include: ["data/**/*"]\n', '  text: text\n'), 'data/a.jsonl': lines(3, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/p\.yaml:\d+:\d+: corpus.*include/);
+  });
+
+  it('says when no shard matched', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'other/a.jsonl': lines(3, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('no shards matched corpus.include (data/**/*)');
+  });
+
+  it('says when the policy file does not exist', () => {
+    const r = sluice(['check', '/nonexistent/policy.yaml']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('/nonexistent/policy.yaml');
+  });
+});
+
+describe('broken shards are findings, and the scan goes on', () => {
+  it('reports a truncated .gz with what was read before the break, and judges the rest', () => {
+    const whole = gzipSync(Buffer.from(lines(2000, ENGLISH)));
+    const root = corpus({
+      'p.yaml': policyYaml(),
+      'data/cut.jsonl.gz': whole.subarray(0, Math.floor(whole.length / 2)),
+      'data/good.jsonl': lines(10, HINDI),
+    });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache'], { json: true });
+    expect(r.status).toBe(1);
+    const rep = r.report!;
+    const cut = rep.shards.find((s) => s.path === 'data/cut.jsonl.gz')!;
+    expect(cut.broken?.message).toMatch(/unexpected end of file/i);
+    expect(cut.docs).toBeGreaterThan(0);
+    expect(cut.docs).toBeLessThan(2000);
+    expect(cut.docs + cut.empty + cut.rejected).toBe(cut.lines);
+    expect(rep.shards.find((s) => s.path === 'data/good.jsonl')!.docs).toBe(10);
+    const input = rep.rules.find((o) => o.rule === 'input' && o.verdict === 'fail')!;
+    expect(input.locations[0]!.path).toBe('data/cut.jsonl.gz');
+    expect(r.stdout).toContain('data/cut.jsonl.gz');
+  });
+
+  it('rejects invalid UTF-8 lines with their line numbers, keeping the others', () => {
+    const bad = Buffer.concat([Buffer.from(lines(2, ENGLISH)), Buffer.from('{"text": "caf'), Buffer.from([0xe9]), Buffer.from('"}\n'), Buffer.from(lines(2, ENGLISH))]);
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/latin1.jsonl': bad });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache'], { json: true });
+    const s = r.report!.shards[0]!;
+    expect(s).toMatchObject({ lines: 5, docs: 4, rejected: 1 });
+    expect(s.rejections[0]).toMatchObject({ line: 3, reason: 'invalid-encoding' });
+  });
+
+  it('rejects a 50 MB single line without losing the lines around it', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/.keep': '' });
+    const big = Buffer.alloc(50 * 1024 * 1024, 0x61);
+    writeFileSync(join(root, 'data', 'huge.jsonl'), Buffer.concat([Buffer.from(lines(1, ENGLISH)), Buffer.from('{"text": "'), big, Buffer.from('"}\n'), Buffer.from(lines(1, HINDI))]), { flag: 'w' });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache'], { json: true });
+    const s = r.report!.shards[0]!;
+    expect(s).toMatchObject({ lines: 3, docs: 2, rejected: 1 });
+    expect(s.rejections[0]).toMatchObject({ line: 2, reason: 'line-too-long' });
+    expect(r.report!.input.rejected.byReason).toEqual({ 'line-too-long': 1 });
+  });
+
+  it('counts a binary file matched by a glob as rejected lines, not documents', () => {
+    const noise = randomBytes(64 * 1024);
+    noise[100] = 0; // at least one NUL
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/blob.jsonl': noise, 'data/ok.jsonl': lines(4, ENGLISH), 'data/picture.png': noise });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache'], { json: true });
+    const rep = r.report!;
+    const blob = rep.shards.find((s) => s.path === 'data/blob.jsonl')!;
+    expect(blob.docs).toBe(0);
+    expect(blob.rejected).toBe(blob.lines - blob.empty);
+    expect(blob.lines).toBeGreaterThan(0);
+    // A file the globs match but no reader handles is listed, and the report says it is incomplete.
+    expect(rep.input.skipped).toEqual([expect.objectContaining({ path: 'data/picture.png', reason: 'unsupported-format' })]);
+    expect(rep.rules.find((o) => o.rule === 'input')!.verdict).toBe('fail');
+  });
+});
+
+describe('the command line', () => {
+  it('prints help and exits 0', () => {
+    const r = sluice(['--help']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('sluice check');
+  });
+
+  it('exits 2 on an unknown command, with a one-line reason', () => {
+    const r = sluice(['chek']);
+    expect(r.status).toBe(2);
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+  });
+
+  it('gives the same report from the cache as from a fresh scan', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/a.jsonl': lines(20, ENGLISH), 'data/b.jsonl': lines(20, HINDI) });
+    const cacheDir = join(root, '.cache');
+    const first = sluice(['check', join(root, 'p.yaml'), '--cache-dir', cacheDir], { json: true }).report!;
+    const second = sluice(['check', join(root, 'p.yaml'), '--cache-dir', cacheDir], { json: true }).report!;
+    expect(first.timing.cacheHits).toBe(0);
+    expect(second.timing.cacheHits).toBe(2);
+    const strip = (r: typeof first) => ({ ...r, timing: null, shards: r.shards.map((s) => ({ ...s, fromCache: null })) });
+    expect(strip(second)).toEqual(strip(first));
+  });
+});
