@@ -41,6 +41,10 @@ export class AnalyzerSetupError extends Error {
 
 /** Returns the analyzers of a policy, ready to scan shards. */
 export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzers> {
+  if (policy.sampling) {
+    // Judging on a sample without intervals would look like a full report: refuse rather than pretend.
+    throw new AnalyzerSetupError(`${policy.file}: sampling is not implemented in this version of sluice; remove \`sampling:\` to judge every document`);
+  }
   const measure = createMeasurer({ languages: policy.languages, detection: policy.detection });
   const read = readOptionsOf(policy);
 
