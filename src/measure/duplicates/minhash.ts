@@ -12,12 +12,12 @@
 //
 // Chosen by measurement (scripts/bench-duplicates.mjs, one run, alternatives interleaved,
 // Brown paragraphs, k = 128, 5-word shingles; MB/s of scan + sketch, ratio to the naive loop):
-//   naive: string shingles in a Set, 128 universal hash functions     8.4 MB/s   1.0×
-//   k independent Math.imul hash functions over shingle hashes       15.6 MB/s   1.9×
-//   one-permutation hashing + optimal densification (1 round)         53.8 MB/s   6.4×
-//   fill sketch, 8 rounds + densification (this)                      57.5 MB/s   6.8×
-//   fill sketch, rounds until every bin is filled                     51.0 MB/s   6.0×
-// (sketch alone: 4.3, 3.5 and 4.2 µs per paragraph for the last three; the machine is shared,
+//   naive: string shingles in a Set, 128 universal hash functions     8.7 MB/s   1.0×
+//   k independent Math.imul hash functions over shingle hashes       17.1 MB/s   2.0×
+//   one-permutation hashing + optimal densification (1 round)         55.3 MB/s   6.3×
+//   fill sketch, 8 rounds + densification (this)                      61.2 MB/s   7.0×
+//   fill sketch, rounds until every bin is filled                     53.6 MB/s   6.2×
+// (sketch alone: 4.0, 3.3 and 4.1 µs per paragraph for the last three; the machine is shared,
 // so runs differ by ±30 % while the order stays). Variance of the
 // estimate relative to √(J(1−J)/k), J = 0.8, sets of 5 / 10 / 20 / 40 / 80 / 160 / 400 shingles:
 //   one-permutation hashing   1.50 1.37 1.32 1.30 1.08 0.87 0.78

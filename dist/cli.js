@@ -1,0 +1,15190 @@
+import { createRequire as __sluiceCreateRequire } from 'node:module'; const require = __sluiceCreateRequire(import.meta.url);
+
+// src/cli/main.ts
+import { writeFile as writeFile2 } from "node:fs/promises";
+
+// src/judge/report.ts
+import { relative } from "node:path";
+
+// src/judge/figures.ts
+function ratio(a, b) {
+  return b === 0 ? null : a / b;
+}
+function amountIn(t, unit) {
+  switch (unit) {
+    case "docs":
+      return t.docs;
+    case "bytes":
+      return t.bytes;
+    case "chars":
+      return t.chars;
+    case "words":
+      return t.words;
+    case "tokens":
+      return t.tokens?.tokens ?? 0;
+  }
+}
+function docsBelowPurity(histogram, minPurity) {
+  const firstPure = Math.floor(minPurity * 100 + 1e-9);
+  let n = 0;
+  for (let i = 0; i < firstPure && i < histogram.length; i++) n += histogram[i];
+  return n;
+}
+function tokenFigures(t, tokens, tokenizer) {
+  return {
+    tokenizer: tokenizer.label,
+    tokens: tokens.tokens,
+    fertility: ratio(tokens.wordTokens, t.words),
+    continuedWords: ratio(tokens.continuedWords, t.words),
+    tokensPerWord: ratio(tokens.tokens, t.words),
+    charsPerToken: ratio(t.chars, tokens.tokens),
+    bytesPerToken: ratio(t.bytes, tokens.tokens),
+    unknownRate: tokenizer.hasUnknown ? ratio(tokens.unknown, tokens.tokens) : null
+  };
+}
+function languageFigures(policy, corpus) {
+  const keys = [...policy.languages.map((l) => l.key), "other", "und"];
+  const langs = corpus.tally.languages;
+  const total = (unit) => keys.reduce((s, k) => s + (langs[k] ? amountIn(langs[k], unit) : 0), 0);
+  const totals = { docs: total("docs"), bytes: total("bytes"), chars: total("chars"), words: total("words"), tokens: total("tokens") };
+  const out = {};
+  for (const key of keys) {
+    const t = langs[key];
+    if (!t) continue;
+    const share = {
+      docs: ratio(t.docs, totals.docs) ?? 0,
+      bytes: ratio(t.bytes, totals.bytes) ?? 0,
+      chars: ratio(t.chars, totals.chars) ?? 0,
+      words: ratio(t.words, totals.words) ?? 0
+    };
+    if (corpus.tokenizer) share.tokens = ratio(t.tokens?.tokens ?? 0, totals.tokens) ?? 0;
+    const spec = policy.languages.find((l) => l.key === key);
+    const f = {
+      key,
+      docs: t.docs,
+      bytes: t.bytes,
+      chars: t.chars,
+      words: t.words,
+      share,
+      purity: ratio(t.expectedScriptChars, t.scriptChars),
+      purityDocs: t.purityDocs
+    };
+    if (spec?.target !== void 0) f.target = spec.target;
+    if (policy.rules.script) f.impureDocs = docsBelowPurity(t.purityHistogram, policy.rules.script.minPurity);
+    const declaredRow = corpus.tally.declared[key];
+    if (declaredRow) {
+      const declaredDocs = Object.values(declaredRow).reduce((a, b) => a + b, 0);
+      f.declaredDocs = declaredDocs;
+      f.mismatchDocs = declaredDocs - (declaredRow[key] ?? 0) - (declaredRow["und"] ?? 0);
+      f.detectedAs = declaredRow;
+    }
+    if (corpus.tokenizer && t.tokens) {
+      f.tokens = t.tokens.tokens;
+      f.fertility = tokenFigures(t, t.tokens, corpus.tokenizer);
+      const dict = corpus.dictionary?.[key];
+      if (dict) f.fertility.dictionary = { entries: dict.main.entries, fertility: dict.main.fertility, continuedWords: dict.main.continued, list: dict.main.list };
+    }
+    if (corpus.baseline && t.baseline) {
+      f.baseline = tokenFigures(t, t.baseline, corpus.baseline);
+      const dict = corpus.dictionary?.[key]?.baseline;
+      if (dict) f.baseline.dictionary = { entries: dict.entries, fertility: dict.fertility, continuedWords: dict.continued, list: dict.list };
+    }
+    out[key] = f;
+  }
+  return out;
+}
+
+// src/results/types.ts
+var RESULT_SCHEMA = 1;
+var PURITY_BINS = 101;
+var SAMPLES_PER_KIND = 5;
+var ANOMALY_KINDS = [
+  "replacement-char",
+  "control-chars",
+  "bidi-controls",
+  "zero-width",
+  "private-use",
+  "mojibake"
+];
+
+// src/results/tally.ts
+function emptyLanguageTally() {
+  return {
+    docs: 0,
+    bytes: 0,
+    chars: 0,
+    words: 0,
+    purityDocs: 0,
+    scriptChars: 0,
+    expectedScriptChars: 0,
+    purityHistogram: new Array(PURITY_BINS).fill(0)
+  };
+}
+function emptyTokenTally() {
+  return { tokens: 0, unknown: 0, wordTokens: 0, continuedWords: 0 };
+}
+function purityBin(purity) {
+  return Math.min(PURITY_BINS - 1, Math.max(0, Math.floor(purity * 100 + 1e-9)));
+}
+function anomalyMask(anomalies) {
+  let mask = 0;
+  ANOMALY_KINDS.forEach((kind, i) => {
+    if ((anomalies[kind] ?? 0) > 0) mask |= 1 << i;
+  });
+  return mask;
+}
+function kindsOfMask(mask) {
+  return ANOMALY_KINDS.filter((_, i) => (mask & 1 << i) !== 0);
+}
+function maskOfKinds(kinds) {
+  return kinds.reduce((m, k) => m | 1 << ANOMALY_KINDS.indexOf(k), 0);
+}
+var ShardTally = class {
+  languages = {};
+  scripts = {};
+  anomalyMasks = {};
+  anomalyDocs = Object.fromEntries(ANOMALY_KINDS.map((k) => [k, 0]));
+  declared = {};
+  impure = [];
+  anomalous = [];
+  mismatch = [];
+  constructor(languageKeys) {
+    for (const key of [...languageKeys, "other", "und"]) this.languages[key] = emptyLanguageTally();
+  }
+  lang(key) {
+    let t = this.languages[key];
+    if (!t) this.languages[key] = t = emptyLanguageTally();
+    return t;
+  }
+  /** Adds one document's measures, with its line for located samples. */
+  add(line, m, tokens) {
+    const t = this.lang(m.language);
+    t.docs += 1;
+    t.bytes += m.bytes;
+    t.chars += m.chars;
+    t.words += m.words;
+    if (tokens?.main) addTokens(t.tokens ??= emptyTokenTally(), tokens.main);
+    if (tokens?.baseline) addTokens(t.baseline ??= emptyTokenTally(), tokens.baseline);
+    let scriptChars = 0;
+    for (const [script, n] of Object.entries(m.scripts)) {
+      this.scripts[script] = (this.scripts[script] ?? 0) + n;
+      scriptChars += n;
+    }
+    if (m.purity !== null) {
+      const basis = this.lang(m.declared !== void 0 && m.declared !== "other" ? m.declared : m.language);
+      basis.purityDocs += 1;
+      basis.scriptChars += scriptChars;
+      basis.expectedScriptChars += Math.round(m.purity * scriptChars);
+      basis.purityHistogram[purityBin(m.purity)] += 1;
+      keepLowest(this.impure, { line, language: m.declared ?? m.language, purity: m.purity, detail: describeScripts(m.scripts) });
+    }
+    const mask = anomalyMask(m.anomalies);
+    if (mask !== 0) {
+      this.anomalyMasks[mask] = (this.anomalyMasks[mask] ?? 0) + 1;
+      const kinds = kindsOfMask(mask);
+      for (const k of kinds) this.anomalyDocs[k] += 1;
+      if (this.anomalous.length < SAMPLES_PER_KIND) {
+        this.anomalous.push({ line, kinds, detail: kinds.map((k) => `${k} \xD7${m.anomalies[k]}`).join(", ") });
+      }
+    }
+    if (m.declared !== void 0) {
+      const row = this.declared[m.declared] ??= {};
+      row[m.language] = (row[m.language] ?? 0) + 1;
+      if (m.declared !== m.language && m.language !== "und" && this.mismatch.length < SAMPLES_PER_KIND) {
+        this.mismatch.push({ line, declared: m.declared, detected: m.language, detail: `detector label ${m.detected}` });
+      }
+    }
+  }
+};
+function addTokens(into, d) {
+  into.tokens += d.tokens;
+  into.unknown += d.unknown;
+  into.wordTokens += d.wordTokens;
+  into.continuedWords += d.continuedWords;
+}
+function keepLowest(list, item) {
+  if (list.length >= SAMPLES_PER_KIND && item.purity >= list[list.length - 1].purity) return;
+  list.push(item);
+  list.sort((a, b) => a.purity - b.purity || a.line - b.line);
+  if (list.length > SAMPLES_PER_KIND) list.pop();
+}
+function describeScripts(scripts) {
+  const total = Object.values(scripts).reduce((a, b) => a + b, 0);
+  return Object.entries(scripts).sort((a, b) => b[1] - a[1]).slice(0, 3).map(([s, n]) => `${s} ${Math.round(100 * n / total)}%`).join(", ");
+}
+function addLanguageTallies(a, b) {
+  const out = {
+    docs: a.docs + b.docs,
+    bytes: a.bytes + b.bytes,
+    chars: a.chars + b.chars,
+    words: a.words + b.words,
+    purityDocs: a.purityDocs + b.purityDocs,
+    scriptChars: a.scriptChars + b.scriptChars,
+    expectedScriptChars: a.expectedScriptChars + b.expectedScriptChars,
+    purityHistogram: a.purityHistogram.map((n, i) => n + (b.purityHistogram[i] ?? 0))
+  };
+  if (a.tokens || b.tokens) out.tokens = sumTokens(a.tokens, b.tokens);
+  if (a.baseline || b.baseline) out.baseline = sumTokens(a.baseline, b.baseline);
+  return out;
+}
+function sumTokens(a, b) {
+  const out = emptyTokenTally();
+  if (a) addTokens(out, a);
+  if (b) addTokens(out, b);
+  return out;
+}
+function mergeShardResults(results, languageKeys) {
+  const languages = {};
+  for (const key of [...languageKeys, "other", "und"]) languages[key] = emptyLanguageTally();
+  const out = {
+    shards: results.length,
+    languages,
+    scripts: {},
+    anomalyMasks: {},
+    anomalyDocs: Object.fromEntries(ANOMALY_KINDS.map((k) => [k, 0])),
+    declared: {},
+    input: { lines: 0, docs: 0, docLines: 0, empty: 0, rejected: 0, byReason: {}, bytes: 0, compressedBytes: 0 }
+  };
+  for (const r of results) {
+    for (const [k, t] of Object.entries(r.languages)) {
+      out.languages[k] = addLanguageTallies(out.languages[k] ?? emptyLanguageTally(), t);
+    }
+    addCounts(out.scripts, r.scripts);
+    addCounts(out.anomalyMasks, r.anomalyMasks);
+    addCounts(out.anomalyDocs, r.anomalyDocs);
+    for (const [d, row] of Object.entries(r.declared)) addCounts(out.declared[d] ??= {}, row);
+    const i = out.input;
+    i.lines += r.read.lines;
+    i.docs += r.read.docs;
+    i.docLines += r.read.docLines;
+    i.empty += r.read.empty;
+    i.rejected += r.read.rejected.count;
+    addCounts(i.byReason, r.read.rejected.byReason);
+    i.bytes += r.read.bytes;
+    i.compressedBytes += r.read.compressedBytes;
+  }
+  return out;
+}
+function addCounts(into, from) {
+  for (const [k, n] of Object.entries(from)) into[k] = (into[k] ?? 0) + (n ?? 0);
+}
+
+// src/judge/rules.ts
+var LOCATIONS_PER_RULE = 10;
+function pct(x) {
+  return x === null ? "n/a" : `${(x * 100).toFixed(1)} %`;
+}
+function outcome(policy, rule, scope, measured, limit, unit, failed, message, locations = []) {
+  const severity = policy.severity[rule] ?? "error";
+  const verdict = !failed ? "pass" : severity === "error" ? "fail" : "warn";
+  return { rule, scope, measured, limit, unit, severity, verdict, message, locations: locations.slice(0, LOCATIONS_PER_RULE) };
+}
+function judgeRules(policy, corpus, langs) {
+  const out = [];
+  const { rules } = policy;
+  const broken = [
+    ...corpus.shards.filter((s) => s.read.broken).map((s) => ({ path: s.path, line: s.read.broken.afterLine + 1, detail: s.read.broken.message })),
+    // Files the globs match but sluice cannot read make the report incomplete; links out of
+    // the root and second paths to one file are deliberate skips, reported but not judged.
+    ...corpus.skipped.filter((s) => s.reason === "unreadable" || s.reason === "unsupported-format" || s.reason === "not-a-file").map((s) => ({ path: s.path, detail: `${s.reason}: ${s.detail}` }))
+  ];
+  out.push(
+    outcome(
+      policy,
+      "input",
+      "corpus",
+      broken.length,
+      rules.input.maxBrokenShards,
+      "count",
+      broken.length > rules.input.maxBrokenShards,
+      broken.length === 0 ? `all ${corpus.shards.length} shards read to the end` : `${broken.length} shard${broken.length === 1 ? "" : "s"} could not be read completely; figures cover only what was read before the break`,
+      broken
+    )
+  );
+  if (rules.input.maxRejected !== void 0) {
+    const { lines, rejected } = corpus.tally.input;
+    const share = ratio(rejected, lines) ?? 0;
+    const locs = corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
+    out.push(
+      outcome(
+        policy,
+        "input",
+        "corpus",
+        share,
+        rules.input.maxRejected,
+        "share",
+        share > rules.input.maxRejected,
+        `${rejected} of ${lines} lines rejected (${pct(share)}; limit ${pct(rules.input.maxRejected)})`,
+        locs
+      )
+    );
+  }
+  if (rules.mix) {
+    const unit = rules.mix.unit;
+    for (const spec of policy.languages) {
+      if (spec.target === void 0) continue;
+      const f = langs[spec.key];
+      const share = f ? f.share[unit] ?? 0 : 0;
+      const off = share - spec.target;
+      const o = outcome(
+        policy,
+        "mix",
+        `language:${spec.key}`,
+        share,
+        spec.target,
+        "share",
+        Math.abs(off) > rules.mix.tolerance + 1e-12,
+        `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} \xB1 ${(rules.mix.tolerance * 100).toFixed(1)} points (${off >= 0 ? "+" : ""}${(off * 100).toFixed(1)} points)`
+      );
+      o.tolerance = rules.mix.tolerance;
+      out.push(o);
+    }
+    for (const [key, limit] of [["other", rules.mix.maxOther], ["und", rules.mix.maxUndetermined]]) {
+      if (limit === void 0) continue;
+      const share = langs[key]?.share[unit] ?? 0;
+      const what = key === "other" ? "in languages the policy does not list" : "too short or unclear to label";
+      out.push(outcome(policy, "mix", `language:${key}`, share, limit, "share", share > limit + 1e-12, `${pct(share)} of ${unit} ${what} (limit ${pct(limit)})`));
+    }
+  }
+  if (rules.script) {
+    const { minPurity, maxImpureDocs } = rules.script;
+    for (const spec of policy.languages) {
+      const f = langs[spec.key];
+      if (!f || f.purityDocs === 0) continue;
+      const impure = f.impureDocs ?? 0;
+      const share = ratio(impure, f.purityDocs) ?? 0;
+      const locs = corpus.shards.flatMap(
+        (s) => s.samples.impure.filter((x) => x.language === spec.key && x.purity < minPurity).map((x) => ({ path: s.path, line: x.line, detail: `purity ${pct(x.purity)}: ${x.detail}` }))
+      );
+      out.push(
+        outcome(
+          policy,
+          "script",
+          `language:${spec.key}`,
+          share,
+          maxImpureDocs,
+          "share",
+          share > maxImpureDocs + 1e-12,
+          `${impure} of ${f.purityDocs} ${spec.key} documents have under ${pct(minPurity)} of their letters in ${spec.scripts.join("/")} (${pct(share)}; limit ${pct(maxImpureDocs)})`,
+          locs
+        )
+      );
+    }
+  }
+  if (rules.encoding) {
+    const forbid = maskOfKinds(rules.encoding.forbid);
+    let docs = 0;
+    for (const [mask, n] of Object.entries(corpus.tally.anomalyMasks)) if ((Number(mask) & forbid) !== 0) docs += n;
+    const total = corpus.tally.input.docs;
+    const share = ratio(docs, total) ?? 0;
+    const byKind = rules.encoding.forbid.filter((k) => corpus.tally.anomalyDocs[k] > 0).map((k) => `${k} ${corpus.tally.anomalyDocs[k]}`);
+    const locs = corpus.shards.flatMap(
+      (s) => s.samples.anomalous.filter((a) => a.kinds.some((k) => rules.encoding.forbid.includes(k))).map((a) => ({ path: s.path, line: a.line, detail: a.detail }))
+    );
+    out.push(
+      outcome(
+        policy,
+        "encoding",
+        "corpus",
+        share,
+        rules.encoding.maxAnomalousDocs,
+        "share",
+        share > rules.encoding.maxAnomalousDocs + 1e-12,
+        `${docs} of ${total} documents have forbidden characters or mojibake${byKind.length ? ` (${byKind.join(", ")})` : ""}; limit ${pct(rules.encoding.maxAnomalousDocs)}`,
+        locs
+      )
+    );
+  }
+  if (rules.fertility) {
+    const fr = rules.fertility;
+    for (const spec of policy.languages) {
+      const f = langs[spec.key];
+      const main2 = f?.fertility;
+      if (!main2 || main2.fertility === null) continue;
+      const max = fr.max[spec.key];
+      if (max !== void 0) {
+        out.push(outcome(
+          policy,
+          "fertility",
+          `language:${spec.key}`,
+          main2.fertility,
+          max,
+          "ratio",
+          main2.fertility > max,
+          `${spec.key}: ${main2.fertility.toFixed(3)} tokens per word under ${main2.tokenizer} (limit ${max})`
+        ));
+      }
+      const maxCont = fr.maxContinued[spec.key];
+      if (maxCont !== void 0 && main2.continuedWords !== null) {
+        out.push(outcome(
+          policy,
+          "fertility",
+          `language:${spec.key}`,
+          main2.continuedWords,
+          maxCont,
+          "share",
+          main2.continuedWords > maxCont,
+          `${spec.key}: ${pct(main2.continuedWords)} of words split into 2+ tokens under ${main2.tokenizer} (limit ${pct(maxCont)})`
+        ));
+      }
+      const base = f.baseline;
+      if (fr.maxRegression !== void 0 && base && base.fertility) {
+        const rise = main2.fertility / base.fertility - 1;
+        out.push(outcome(
+          policy,
+          "fertility",
+          `language:${spec.key}`,
+          rise,
+          fr.maxRegression,
+          "share",
+          rise > fr.maxRegression + 1e-12,
+          `${spec.key}: fertility ${main2.fertility.toFixed(3)} under ${main2.tokenizer} vs ${base.fertility.toFixed(3)} under ${base.tokenizer} (${rise >= 0 ? "+" : ""}${pct(rise)}; limit +${pct(fr.maxRegression)})`
+        ));
+      }
+    }
+  }
+  if (rules.duplicates && corpus.duplicates) {
+    const d = corpus.duplicates;
+    const locs = (kind) => d.clusters.filter((c) => c.kind === kind).flatMap((c) => c.copies.map((x) => ({ path: x.path, line: x.line, detail: `copy of ${c.first.path}:${c.first.line}${x.jaccard !== void 0 ? ` (Jaccard \u2248 ${x.jaccard.toFixed(2)})` : ""}` })));
+    if (rules.duplicates.maxExact !== void 0) {
+      const rate = ratio(d.exactDocs, d.docs) ?? 0;
+      out.push(outcome(
+        policy,
+        "duplicates",
+        "corpus",
+        rate,
+        rules.duplicates.maxExact,
+        "share",
+        rate > rules.duplicates.maxExact + 1e-12,
+        `${d.exactDocs} of ${d.docs} documents are exact copies of an earlier one (${pct(rate)}; limit ${pct(rules.duplicates.maxExact)})`,
+        locs("exact")
+      ));
+    }
+    if (rules.duplicates.near.max !== void 0) {
+      const rate = ratio(d.nearDocs, d.docs) ?? 0;
+      out.push(outcome(
+        policy,
+        "duplicates",
+        "corpus",
+        rate,
+        rules.duplicates.near.max,
+        "share",
+        rate > rules.duplicates.near.max + 1e-12,
+        `${d.nearDocs} of ${d.docs} documents are near copies (Jaccard \u2265 ${d.parameters.threshold}) of an earlier one (${pct(rate)}; limit ${pct(rules.duplicates.near.max)})`,
+        locs("near")
+      ));
+    }
+  }
+  if (rules.contamination && corpus.contamination) {
+    const docs = corpus.shards.reduce((s, r) => s + (r.contamination?.docs ?? 0), 0);
+    const locs = corpus.shards.flatMap((s) => (s.contamination?.samples ?? []).map((x) => ({ path: s.path, line: x.line, detail: `shares a ${corpus.contamination.ngram}-gram with ${x.evalFile}:${x.evalLine}` })));
+    out.push(outcome(
+      policy,
+      "contamination",
+      "corpus",
+      docs,
+      rules.contamination.maxDocs,
+      "count",
+      docs > rules.contamination.maxDocs,
+      `${docs} training document${docs === 1 ? "" : "s"} share a ${corpus.contamination.ngram}-word sequence with the evaluation sets (limit ${rules.contamination.maxDocs})`,
+      locs
+    ));
+  }
+  return out;
+}
+function overallVerdict(outcomes) {
+  if (outcomes.some((o) => o.verdict === "fail")) return "fail";
+  if (outcomes.some((o) => o.verdict === "warn")) return "warn";
+  return "pass";
+}
+
+// src/version.ts
+var TOOL_VERSION = "0.1.0";
+
+// src/judge/report.ts
+function buildReport(policy, corpus, cwd = process.cwd()) {
+  const languages = languageFigures(policy, corpus);
+  const rules = judgeRules(policy, corpus, languages);
+  const verdict = overallVerdict(rules);
+  const mixUnit = policy.rules.mix?.unit ?? (corpus.tokenizer ? "tokens" : "words");
+  const totals = { docs: 0, bytes: 0, chars: 0, words: 0 };
+  for (const f of Object.values(languages)) {
+    totals.docs += f.docs;
+    totals.bytes += f.bytes;
+    totals.chars += f.chars;
+    totals.words += f.words;
+    if (f.tokens !== void 0) totals.tokens = (totals.tokens ?? 0) + f.tokens;
+  }
+  const shards = corpus.shards.map((s) => {
+    const fig = {
+      path: s.path,
+      lines: s.read.lines,
+      docs: s.read.docs,
+      empty: s.read.empty,
+      rejected: s.read.rejected.count,
+      bytes: s.read.bytes,
+      languages: Object.fromEntries(Object.entries(s.languages).filter(([, t]) => t.docs > 0).map(([k, t]) => [k, t.docs])),
+      rejections: s.read.rejected.samples,
+      fromCache: corpus.cached.has(s.path)
+    };
+    if (s.subset !== void 0) fig.subset = s.subset;
+    if (corpus.tokenizer) fig.tokens = Object.values(s.languages).reduce((n, t) => n + (t.tokens?.tokens ?? 0), 0);
+    if (s.read.broken) fig.broken = s.read.broken;
+    return fig;
+  });
+  const subsets = {};
+  for (const s of corpus.shards) {
+    const key = s.subset ?? "(none)";
+    const sub = subsets[key] ??= { docs: 0, bytes: 0, words: 0, languages: {} };
+    for (const [lang, t] of Object.entries(s.languages)) {
+      if (t.docs === 0) continue;
+      sub.docs += t.docs;
+      sub.bytes += t.bytes;
+      sub.words += t.words;
+      if (t.tokens) sub.tokens = (sub.tokens ?? 0) + t.tokens.tokens;
+      sub.languages[lang] = (sub.languages[lang] ?? 0) + t.docs;
+    }
+  }
+  const report = {
+    report: "sluice",
+    version: 1,
+    tool: { name: "sluice", version: TOOL_VERSION },
+    policy: { name: policy.name, file: relative(cwd, policy.file) || policy.file, root: relative(cwd, policy.root) || "." },
+    verdict,
+    headline: headlineOf(verdict, rules),
+    mixUnit,
+    totals,
+    languages,
+    scripts: corpus.tally.scripts,
+    subsets,
+    rules,
+    input: {
+      shards: corpus.shards.length,
+      lines: corpus.tally.input.lines,
+      docs: corpus.tally.input.docs,
+      docLines: corpus.tally.input.docLines,
+      empty: corpus.tally.input.empty,
+      rejected: { count: corpus.tally.input.rejected, byReason: corpus.tally.input.byReason },
+      skipped: corpus.skipped,
+      broken: corpus.shards.filter((s) => s.read.broken).map((s) => ({ path: s.path, ...s.read.broken }))
+    },
+    shards,
+    timing: {
+      elapsedMs: corpus.elapsedMs,
+      megabytesPerSecond: Math.round(corpus.tally.input.bytes / 1e6 / Math.max(corpus.elapsedMs, 1) * 1e3 * 10) / 10,
+      cacheHits: corpus.cached.size,
+      cacheMisses: corpus.shards.length - corpus.cached.size
+    }
+  };
+  if (corpus.tokenizer) {
+    report.tokenizer = { main: corpus.tokenizer.label };
+    if (corpus.baseline) {
+      report.tokenizer.baseline = corpus.baseline.label;
+      const baseTotal = Object.values(corpus.tally.languages).reduce((n, t) => n + (t.baseline?.tokens ?? 0), 0);
+      const under = {};
+      const shift = {};
+      for (const [k, t] of Object.entries(corpus.tally.languages)) {
+        if (t.docs === 0) continue;
+        under[k] = ratio(t.baseline?.tokens ?? 0, baseTotal) ?? 0;
+        shift[k] = ((languages[k]?.share.tokens ?? 0) - under[k]) * 100;
+      }
+      report.tokenizer.mixUnderBaseline = under;
+      report.tokenizer.mixShiftPoints = shift;
+    }
+  }
+  if (corpus.duplicates) {
+    const d = corpus.duplicates;
+    const bySubset = {};
+    for (const s of corpus.shards) {
+      const row = d.byShard[s.path];
+      if (!row) continue;
+      const sub = bySubset[s.subset ?? "(none)"] ??= { docs: 0, exactDocs: 0, nearDocs: 0 };
+      sub.docs += row.docs;
+      sub.exactDocs += row.exactDocs;
+      sub.nearDocs += row.nearDocs;
+    }
+    report.duplicates = {
+      exactDocs: d.exactDocs,
+      exactRate: ratio(d.exactDocs, d.docs) ?? 0,
+      nearDocs: d.nearDocs,
+      nearRate: ratio(d.nearDocs, d.docs) ?? 0,
+      tooShortDocs: d.tooShortDocs,
+      byLanguage: d.byLanguage,
+      bySubset,
+      byShard: d.byShard,
+      clusters: d.clusters,
+      parameters: d.parameters
+    };
+  }
+  if (corpus.contamination) {
+    report.contamination = {
+      docs: corpus.shards.reduce((s, r) => s + (r.contamination?.docs ?? 0), 0),
+      ngram: corpus.contamination.ngram,
+      evalFiles: corpus.contamination.evalFiles,
+      evalItems: corpus.contamination.evalItems,
+      samples: corpus.shards.flatMap((s) => (s.contamination?.samples ?? []).map((x) => ({ path: s.path, line: x.line, detail: `${x.evalFile}:${x.evalLine}` })))
+    };
+  }
+  return report;
+}
+function headlineOf(verdict, rules) {
+  const failing = rules.filter((r) => r.verdict === "fail");
+  const warning = rules.filter((r) => r.verdict === "warn");
+  const names = (list) => [...new Set(list.map((r) => r.scope === "corpus" ? r.rule : `${r.rule} (${r.scope.replace(/^language:/, "")})`))].join(", ");
+  if (verdict === "fail") return `FAIL: ${failing.length} rule${failing.length === 1 ? "" : "s"} at error severity failed: ${names(failing)}`;
+  if (verdict === "warn") return `PASS with warnings: ${names(warning)}`;
+  return `PASS: all ${rules.length} judged rules hold`;
+}
+
+// src/policy/load.ts
+import { readFile, stat } from "node:fs/promises";
+import path3 from "node:path";
+
+// src/policy/format.ts
+var PLAIN_KEY = /^[A-Za-z0-9_$-]+$/;
+function formatPath(path5) {
+  let out = "";
+  for (const seg of path5) {
+    if (typeof seg === "number") out += `[${seg}]`;
+    else if (PLAIN_KEY.test(seg)) out += out === "" ? seg : `.${seg}`;
+    else out += `[${JSON.stringify(seg)}]`;
+  }
+  return out;
+}
+function formatProblem(p) {
+  let where2 = p.file;
+  if (p.line !== void 0) {
+    where2 += `:${p.line}`;
+    if (p.column !== void 0) where2 += `:${p.column}`;
+  }
+  const key = p.path ? ` ${p.path}:` : "";
+  const hint = p.suggestion ? ` (${p.suggestion})` : "";
+  return `${where2}:${key} ${p.message}${hint}`.replace(/\s*\n\s*/g, " ");
+}
+
+// src/policy/parse.ts
+import path2 from "node:path";
+
+// src/policy/yaml-doc.ts
+import {
+  LineCounter,
+  parseDocument,
+  isAlias,
+  isMap,
+  isPair,
+  isScalar,
+  isSeq
+} from "yaml";
+var MAX_ALIAS_COUNT = 100;
+function readPolicyYaml(text) {
+  const lineCounter = new LineCounter();
+  const source = text.charCodeAt(0) === 65279 ? text.slice(1) : text;
+  const doc = parseDocument(source, { lineCounter, uniqueKeys: false, prettyErrors: false });
+  const pos = (offset) => {
+    const { line, col } = lineCounter.linePos(offset);
+    return { line, column: col };
+  };
+  const errors = doc.errors.map((e) => ({
+    position: pos(e.pos[0]),
+    path: pathAtOffset(doc, e.pos[0]),
+    message: plainMessage(e.message)
+  }));
+  const warnings = doc.warnings.map((e) => ({
+    position: pos(e.pos[0]),
+    path: pathAtOffset(doc, e.pos[0]),
+    message: plainMessage(e.message)
+  }));
+  const duplicates = [];
+  findDuplicates(doc, doc.contents, [], pos, duplicates);
+  let value;
+  if (errors.length === 0) {
+    try {
+      value = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
+    } catch (e) {
+      errors.push({ position: { line: 1, column: 1 }, path: [], message: e.message });
+    }
+  }
+  const locate2 = (path5, part = "value") => {
+    const found = walk(doc, path5);
+    const node = part === "key" ? found.key ?? found.value : found.value ?? found.key;
+    const offset = node?.range?.[0];
+    return offset === void 0 ? { line: 1, column: 1 } : pos(offset);
+  };
+  return { value, errors, duplicates, warnings, locate: locate2 };
+}
+function plainMessage(message) {
+  return message.replace(/ at line \d+, column \d+:?[\s\S]*$/, "").trim();
+}
+function keyText(pair) {
+  const k = pair.key;
+  if (isScalar(k)) return String(k.value);
+  return void 0;
+}
+function resolved(doc, node) {
+  return isAlias(node) ? node.resolve(doc) : node;
+}
+function walk(doc, path5) {
+  let value = resolved(doc, doc.contents);
+  let key;
+  for (const seg of path5) {
+    if (isMap(value)) {
+      const pair = value.items.find((p) => keyText(p) === String(seg));
+      if (!pair) break;
+      key = pair.key ?? void 0;
+      const next = resolved(doc, pair.value);
+      value = next && next.range && !(isScalar(next) && next.value === null && next.range[0] === next.range[1]) ? next : void 0;
+      if (!value) break;
+    } else if (isSeq(value) && typeof seg === "number") {
+      const item = resolved(doc, value.items[seg]);
+      if (!item) break;
+      key = void 0;
+      value = item;
+    } else {
+      break;
+    }
+  }
+  return { key, value: value ?? void 0 };
+}
+function pathAtOffset(doc, offset) {
+  const path5 = [];
+  let node = doc.contents;
+  for (; ; ) {
+    if (isMap(node)) {
+      const pair = node.items.find((p) => {
+        const start = p.key?.range?.[0];
+        const end = p.value?.range?.[2] ?? p.key?.range?.[2];
+        return start !== void 0 && end !== void 0 && start <= offset && offset <= end;
+      });
+      const k = pair && keyText(pair);
+      if (!pair || k === void 0) return path5;
+      path5.push(k);
+      node = pair.value;
+    } else if (isSeq(node)) {
+      const i = node.items.findIndex((it) => {
+        const r = it?.range;
+        return r != null && r[0] <= offset && offset <= r[2];
+      });
+      if (i < 0) return path5;
+      path5.push(i);
+      node = node.items[i];
+    } else {
+      return path5;
+    }
+  }
+}
+function findDuplicates(doc, node, path5, pos, out) {
+  if (isMap(node)) {
+    const seen = /* @__PURE__ */ new Map();
+    for (const pair of node.items) {
+      if (!isPair(pair)) continue;
+      const k = keyText(pair);
+      const start = pair.key?.range?.[0];
+      if (k !== void 0 && start !== void 0) {
+        const first = seen.get(k);
+        if (first) {
+          out.push({
+            position: pos(start),
+            path: [...path5, k],
+            message: `duplicate key \`${k}\` (first set on line ${first.line}); a key may appear once per mapping`
+          });
+        } else {
+          seen.set(k, pos(start));
+        }
+      }
+      findDuplicates(doc, pair.value, k === void 0 ? path5 : [...path5, k], pos, out);
+    }
+  } else if (isSeq(node)) {
+    node.items.forEach((item, i) => findDuplicates(doc, item, [...path5, i], pos, out));
+  }
+}
+
+// src/policy/schema-check.ts
+import { Ajv2020 } from "ajv/dist/2020.js";
+
+// schemas/policy.schema.json
+var policy_schema_default = {
+  $schema: "https://json-schema.org/draft/2020-12/schema",
+  title: "sluice policy",
+  description: "What a corpus must satisfy to merge: where its shards are, which languages it holds, and the rules a pull request is judged by. Keys are kebab-case.",
+  type: "object",
+  additionalProperties: false,
+  required: ["version", "corpus", "languages"],
+  properties: {
+    version: {
+      description: "Policy format version. This sluice reads version 1; a higher number means the policy was written for a newer sluice.",
+      type: "integer",
+      const: 1
+    },
+    name: {
+      description: "Name shown in reports. Default: the policy file name without its extension.",
+      type: "string",
+      minLength: 1
+    },
+    root: {
+      description: "Directory all globs and files are relative to, itself relative to the policy file's directory. Default: the nearest directory above the policy file that holds a `.git` entry, else the policy file's directory.",
+      type: "string",
+      minLength: 1
+    },
+    corpus: {
+      description: "Where the shards are and how to read them.",
+      type: "object",
+      additionalProperties: false,
+      required: ["include"],
+      properties: {
+        include: {
+          description: "Glob or list of globs (relative to root) matching the shards: .jsonl, .txt, optionally .gz or .zst compressed.",
+          type: ["string", "array"],
+          minLength: 1,
+          minItems: 1,
+          items: { type: "string", minLength: 1 },
+          examples: [["data/**/*.jsonl.gz"]]
+        },
+        exclude: {
+          description: "Glob or list of globs (relative to root) of files to leave out even when `include` matches them.",
+          type: ["string", "array"],
+          minLength: 1,
+          items: { type: "string", minLength: 1 },
+          default: []
+        },
+        text: {
+          description: "Dot path of the text field in JSONL records, e.g. `text` or `meta.body`.",
+          type: "string",
+          minLength: 1,
+          default: "text"
+        },
+        "declared-language": {
+          description: "Dot path of a field in JSONL records that declares the document's language, when the shards carry one; it is compared with the detected language.",
+          type: "string",
+          minLength: 1
+        },
+        subset: {
+          description: "Pattern with exactly one `{subset}` placeholder that names a shard's subset from its path, e.g. `data/{subset}/**`.",
+          type: "string",
+          minLength: 1,
+          examples: ["data/{subset}/**"]
+        },
+        encodings: {
+          description: "Shards not in UTF-8: glob (relative to root) \u2192 encoding name as iconv-lite knows it (e.g. `windows-1256`). A shard that matches several globs takes the first, in the order written.",
+          type: "object",
+          additionalProperties: { type: "string", minLength: 1 },
+          default: {}
+        },
+        "max-line-bytes": {
+          description: "Lines longer than this many bytes (after decompression) are rejected without being buffered. Default 8 MiB.",
+          type: "integer",
+          minimum: 1,
+          default: 8388608
+        }
+      }
+    },
+    languages: {
+      description: "The languages the corpus is meant to hold, keyed by ISO 639-1 (`hi`), ISO 639-3 (`hin`) or BCP 47 (`hi-IN`, `sr-Latn`) codes. `other` and `und` are reserved for text in unlisted languages and text too short to label.",
+      type: "object",
+      minProperties: 1,
+      additionalProperties: { $ref: "#/$defs/language" },
+      examples: [{ hin: { scripts: ["Devanagari"], target: 0.4 }, eng: { scripts: ["Latin"], target: 0.6 } }]
+    },
+    detection: {
+      description: "Language identification settings.",
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        "min-chars": {
+          description: "Texts with fewer letters than this are labelled `und` (too short to judge). Default 20.",
+          type: "integer",
+          minimum: 0,
+          default: 20
+        }
+      }
+    },
+    tokenizer: {
+      $ref: "#/$defs/tokenizer",
+      description: "The model's tokenizer: token counts for the mix and fertility are measured with it. Either `builtin` or `file`."
+    },
+    baseline: {
+      $ref: "#/$defs/tokenizer",
+      description: "A second tokenizer to compare fertility against (e.g. the one in use before a vocabulary change). Either `builtin` or `file`."
+    },
+    sampling: {
+      description: "Judge a deterministic sample of documents (picked by document hash) instead of all of them. Either `docs-per-shard` or `fraction`.",
+      type: "object",
+      additionalProperties: false,
+      minProperties: 1,
+      properties: {
+        "docs-per-shard": {
+          description: "At most this many documents from each shard.",
+          type: "integer",
+          minimum: 1
+        },
+        fraction: {
+          description: "This share of each shard's documents, in (0, 1].",
+          type: "number",
+          exclusiveMinimum: 0,
+          maximum: 1
+        }
+      },
+      dependentSchemas: {
+        "docs-per-shard": { properties: { fraction: false } }
+      }
+    },
+    rules: {
+      description: "What the corpus is judged by. `input` is always judged; the other rules only when listed.",
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        input: {
+          description: "Input that could not be read: rejected lines and broken shards. Always judged, because a report over broken shards is incomplete.",
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            "max-rejected": {
+              description: "Highest share of input lines that may be rejected (invalid JSON, bad encoding, missing text field, ...). No limit when absent; rejections are still counted and reported.",
+              $ref: "#/$defs/share"
+            },
+            "max-broken-shards": {
+              description: "How many shards may be unreadable or broken (corrupt or truncated compression). Default 0.",
+              type: "integer",
+              minimum: 0,
+              default: 0
+            }
+          }
+        },
+        mix: {
+          description: "Each language's share of the corpus against its `target`. Needs at least one language with a `target`.",
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            unit: {
+              description: "What a share is counted in. Default `tokens` when a tokenizer is set, else `words` (UAX #29 word boundaries).",
+              enum: ["docs", "bytes", "chars", "words", "tokens"]
+            },
+            tolerance: {
+              description: "Allowed absolute distance between a language's share and its target (0.03 = 3 points). Default 0.03.",
+              $ref: "#/$defs/share",
+              default: 0.03
+            },
+            "max-other": {
+              description: "Highest share of text in languages the policy does not list (`other`).",
+              $ref: "#/$defs/share"
+            },
+            "max-und": {
+              description: "Highest share of text too short or unclear to label (`und`).",
+              $ref: "#/$defs/share"
+            }
+          }
+        },
+        script: {
+          description: "Script purity: the share of a document's letters that are in its language's own scripts.",
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            "min-purity": {
+              description: "A document whose purity is below this is impure. Default 0.9.",
+              $ref: "#/$defs/share",
+              default: 0.9
+            },
+            "max-impure-docs": {
+              description: "Highest share of impure documents, per language. Default 0.02.",
+              $ref: "#/$defs/share",
+              default: 0.02
+            }
+          }
+        },
+        encoding: {
+          description: "Encoding anomalies in the text: replacement characters, control characters, bidirectional controls, zero-width characters, private-use characters, mojibake.",
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            "max-anomalous-docs": {
+              description: "Highest share of documents with any forbidden anomaly. Default 0.",
+              $ref: "#/$defs/share",
+              default: 0
+            },
+            forbid: {
+              description: "Anomaly kinds that make a document anomalous. Default: replacement-char, control-chars, bidi-controls, mojibake. `zero-width` is not in the default because joiners are part of correct spelling in several scripts.",
+              type: "array",
+              uniqueItems: true,
+              items: {
+                enum: ["replacement-char", "control-chars", "bidi-controls", "zero-width", "private-use", "mojibake"]
+              },
+              default: ["replacement-char", "control-chars", "bidi-controls", "mojibake"]
+            }
+          }
+        },
+        fertility: {
+          description: "Tokenizer fertility (subword tokens per word) and the share of continued words (words split into two or more tokens), per language. Needs `tokenizer`.",
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            max: {
+              description: "Per language key (as written under `languages`): highest running-text fertility.",
+              type: "object",
+              additionalProperties: { type: "number", exclusiveMinimum: 0 },
+              default: {}
+            },
+            "max-regression": {
+              description: "Highest relative rise of fertility against the base branch or the baseline tokenizer (0.03 = 3 %).",
+              type: "number",
+              minimum: 0
+            },
+            "max-continued": {
+              description: "Per language key: highest share of continued words.",
+              type: "object",
+              additionalProperties: { $ref: "#/$defs/share" },
+              default: {}
+            },
+            "word-lists": {
+              description: "Per language key: a word list (one entry a line, or a hunspell .dic), relative to root, for dictionary fertility.",
+              type: "object",
+              additionalProperties: { type: "string", minLength: 1 },
+              default: {}
+            }
+          }
+        },
+        duplicates: {
+          description: "Exact duplicates (hash of normalized text) and near duplicates (MinHash estimate of the Jaccard similarity of word shingles).",
+          type: "object",
+          additionalProperties: false,
+          properties: {
+            "max-exact": {
+              description: "Highest share of documents that exactly repeat an earlier one.",
+              $ref: "#/$defs/share"
+            },
+            near: {
+              description: "Near-duplicate detection settings.",
+              type: "object",
+              additionalProperties: false,
+              properties: {
+                threshold: {
+                  description: "Estimated Jaccard similarity at or above which two documents are near duplicates, in (0, 1). Default 0.8.",
+                  type: "number",
+                  exclusiveMinimum: 0,
+                  exclusiveMaximum: 1,
+                  default: 0.8
+                },
+                max: {
+                  description: "Highest share of documents that nearly repeat another.",
+                  $ref: "#/$defs/share"
+                },
+                shingle: {
+                  description: "Words per shingle. Default 5.",
+                  type: "integer",
+                  minimum: 1,
+                  default: 5
+                },
+                hashes: {
+                  description: "MinHash functions per document, 16 to 1024. Default 128. The estimate's standard error is sqrt(J(1-J)/k) for k hashes: below 16 it is too coarse to judge a threshold (common practice), and above 1024 the cost grows with little gain.",
+                  type: "integer",
+                  minimum: 16,
+                  maximum: 1024,
+                  default: 128
+                }
+              }
+            },
+            punctuation: {
+              description: "Exact-duplicate normalization: keep punctuation (default) or strip it before hashing.",
+              enum: ["keep", "strip"],
+              default: "keep"
+            }
+          }
+        },
+        contamination: {
+          description: "Training documents that contain text of an evaluation item (n-gram overlap).",
+          type: "object",
+          additionalProperties: false,
+          required: ["eval"],
+          properties: {
+            eval: {
+              description: "Glob or list of globs (relative to root) matching the evaluation sets (.jsonl or .txt).",
+              type: ["string", "array"],
+              minLength: 1,
+              minItems: 1,
+              items: { type: "string", minLength: 1 }
+            },
+            ngram: {
+              description: "Words per n-gram; a document sharing any n-gram with an evaluation item is contaminated. Default 13, the length used for the overlap test in Brown et al. (2020).",
+              type: "integer",
+              minimum: 1,
+              default: 13
+            },
+            "max-docs": {
+              description: "Highest number of contaminated documents. Default 0.",
+              type: "integer",
+              minimum: 0,
+              default: 0
+            }
+          }
+        }
+      }
+    },
+    severity: {
+      description: "Per rule: `error` blocks the merge, `warn` only reports. A rule not listed is `error`.",
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        input: { $ref: "#/$defs/severity" },
+        mix: { $ref: "#/$defs/severity" },
+        script: { $ref: "#/$defs/severity" },
+        encoding: { $ref: "#/$defs/severity" },
+        fertility: { $ref: "#/$defs/severity" },
+        duplicates: { $ref: "#/$defs/severity" },
+        contamination: { $ref: "#/$defs/severity" }
+      }
+    }
+  },
+  $defs: {
+    share: {
+      description: "A share, from 0 to 1 (0.02 = 2 %).",
+      type: "number",
+      minimum: 0,
+      maximum: 1
+    },
+    severity: {
+      description: "`error` blocks the merge; `warn` only reports.",
+      enum: ["error", "warn"],
+      default: "error"
+    },
+    language: {
+      description: "One language of the corpus. An entry with nothing after the colon takes the defaults.",
+      type: ["object", "null"],
+      additionalProperties: false,
+      properties: {
+        scripts: {
+          description: "Unicode scripts that count as this language's own, as Script property names (`Devanagari`) or ISO 15924 codes (`Deva`). Optional for common languages and for BCP 47 keys with a script subtag (`sr-Latn`).",
+          type: "array",
+          minItems: 1,
+          uniqueItems: true,
+          items: { type: "string", minLength: 1 },
+          examples: [["Devanagari"], ["Han", "Hiragana", "Katakana"]]
+        },
+        target: {
+          description: "Target share of the mix, 0 to 1 (0.40 = 40 %). Targets of all languages sum to at most 1.",
+          $ref: "#/$defs/share"
+        }
+      }
+    },
+    tokenizer: {
+      type: "object",
+      additionalProperties: false,
+      minProperties: 1,
+      properties: {
+        builtin: {
+          description: "An encoding shipped with sluice (from js-tiktoken).",
+          enum: ["gpt2", "r50k_base", "p50k_base", "cl100k_base", "o200k_base"]
+        },
+        file: {
+          description: "A tokenizer file relative to root: a Hugging Face `tokenizer.json`, or tiktoken ranks (`.tiktoken`: base64 token and rank per line).",
+          type: "string",
+          minLength: 1
+        },
+        format: {
+          description: "Format of `file`. Default: from the file name (`.json` \u2192 tokenizer.json, `.tiktoken` \u2192 tiktoken).",
+          enum: ["tokenizer.json", "tiktoken"]
+        },
+        pattern: {
+          description: "For tiktoken rank files, which carry no pre-tokenization pattern: the builtin whose pattern to use (e.g. `cl100k_base`), or a JavaScript regular expression (Unicode mode).",
+          type: "string",
+          minLength: 1
+        }
+      },
+      dependentRequired: {
+        format: ["file"],
+        pattern: ["file"]
+      },
+      dependentSchemas: {
+        builtin: { properties: { file: false } }
+      }
+    }
+  }
+};
+
+// src/policy/suggest.ts
+var MAX_DISTANCE = 2;
+var MIN_PREFIX_LENGTH = 4;
+var SHORT_KEY_LENGTH = 4;
+function editDistance(a, b) {
+  if (a === b) return 0;
+  const m = a.length;
+  const n = b.length;
+  let prev2 = new Array(n + 1).fill(0);
+  let prev = Array.from({ length: n + 1 }, (_, j) => j);
+  let cur = new Array(n + 1).fill(0);
+  for (let i = 1; i <= m; i++) {
+    cur[0] = i;
+    for (let j = 1; j <= n; j++) {
+      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+      let d = Math.min(prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + cost);
+      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) {
+        d = Math.min(d, prev2[j - 2] + 1);
+      }
+      cur[j] = d;
+    }
+    [prev2, prev, cur] = [prev, cur, prev2];
+  }
+  return prev[n];
+}
+function folded(s) {
+  return s.toLowerCase().replace(/[-_\s]/g, "");
+}
+function sortedLetters(s) {
+  return [...s].sort().join("");
+}
+function nearest(input, candidates) {
+  const list = [...candidates];
+  const want = folded(input);
+  const wantLetters = sortedLetters(want);
+  let best;
+  let bestDistance = Infinity;
+  let bestSameLetters = false;
+  for (const candidate of list) {
+    if (candidate === input) continue;
+    const f = folded(candidate);
+    const d = editDistance(want, f);
+    const limit = candidate.length <= SHORT_KEY_LENGTH ? 1 : MAX_DISTANCE;
+    if (d > limit) continue;
+    const sameLetters = sortedLetters(f) === wantLetters;
+    if (d < bestDistance || d === bestDistance && sameLetters && !bestSameLetters) {
+      best = candidate;
+      bestDistance = d;
+      bestSameLetters = sameLetters;
+    }
+  }
+  if (best !== void 0) return best;
+  for (const candidate of list) {
+    const f = folded(candidate);
+    if (f.length >= MIN_PREFIX_LENGTH && want.length >= MIN_PREFIX_LENGTH && (want.startsWith(f) || f.startsWith(want))) return candidate;
+  }
+  return void 0;
+}
+function didYouMean(candidate) {
+  return `did you mean \`${candidate}\`?`;
+}
+
+// src/policy/schema-check.ts
+var MAX_LISTED_KEYS = 12;
+var POLICY_SCHEMA = policy_schema_default;
+var validator;
+function policyValidator() {
+  validator ??= new Ajv2020({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true }).compile(POLICY_SCHEMA);
+  return validator;
+}
+function checkAgainstSchema(value) {
+  const validate = policyValidator();
+  if (validate(value)) return [];
+  const issues = [];
+  const seen = /* @__PURE__ */ new Set();
+  const wrongType = new Set((validate.errors ?? []).filter((e) => e.keyword === "type").map((e) => e.instancePath));
+  for (const e of validate.errors ?? []) {
+    if (e.keyword !== "type" && wrongType.has(e.instancePath)) continue;
+    const issue = issueOf(e, value);
+    const id = `${issue.path.join("\0")}${issue.message}`;
+    if (seen.has(id)) continue;
+    seen.add(id);
+    issues.push(issue);
+  }
+  return issues;
+}
+function pointerPath(pointer, data2) {
+  if (pointer === "") return [];
+  const out = [];
+  let node = data2;
+  for (const raw of pointer.slice(1).split("/")) {
+    const seg = raw.replace(/~1/g, "/").replace(/~0/g, "~");
+    if (Array.isArray(node)) {
+      const i = Number(seg);
+      out.push(i);
+      node = node[i];
+    } else {
+      out.push(seg);
+      node = node && typeof node === "object" ? node[seg] : void 0;
+    }
+  }
+  return out;
+}
+function kindOf(value) {
+  if (value === null || value === void 0) return "nothing";
+  if (Array.isArray(value)) return "a list";
+  if (typeof value === "object") return "a mapping";
+  if (typeof value === "string") return `the text \`${value}\``;
+  if (typeof value === "number") return `the number ${value}`;
+  if (typeof value === "boolean") return `\`${value}\``;
+  return typeof value;
+}
+var TYPE_WORDS = {
+  object: "a mapping",
+  array: "a list",
+  string: "a string",
+  number: "a number",
+  integer: "a whole number",
+  boolean: "`true` or `false`",
+  null: "empty"
+};
+function propertyNames(s) {
+  const props = s?.properties;
+  return props && typeof props === "object" ? Object.keys(props) : [];
+}
+var keyIndex;
+function schemaKeyIndex() {
+  if (keyIndex) return keyIndex;
+  keyIndex = /* @__PURE__ */ new Map();
+  const defs = POLICY_SCHEMA.$defs ?? {};
+  const visit = (s, at2, depth) => {
+    if (!s || depth > 8) return;
+    if (typeof s.$ref === "string" && s.$ref.startsWith("#/$defs/")) visit(defs[s.$ref.slice(8)], at2, depth + 1);
+    for (const [k, sub] of Object.entries(s.properties ?? {})) {
+      const list = keyIndex.get(k) ?? [];
+      list.push(at2);
+      keyIndex.set(k, list);
+      visit(sub, at2 ? `${at2}.${k}` : k, depth + 1);
+    }
+  };
+  visit(POLICY_SCHEMA, "", 0);
+  return keyIndex;
+}
+function issueOf(e, root) {
+  const path5 = pointerPath(e.instancePath, root);
+  const p = e.params;
+  const data2 = e.data;
+  switch (e.keyword) {
+    case "additionalProperties": {
+      const key = String(p.additionalProperty);
+      const valid = propertyNames(e.parentSchema);
+      const near = nearest(key, valid);
+      let message = `unknown key \`${key}\``;
+      let suggestion;
+      if (near) {
+        suggestion = didYouMean(near);
+      } else {
+        const elsewhere = schemaKeyIndex().get(key);
+        if (elsewhere?.length === 1) {
+          suggestion = `\`${key}\` belongs under \`${elsewhere[0] || "the top level"}\``;
+        } else if (valid.length > 0 && valid.length <= MAX_LISTED_KEYS) {
+          message += `; expected one of ${valid.map((k) => `\`${k}\``).join(", ")}`;
+        }
+      }
+      return { path: [...path5, key], part: "key", message, ...suggestion ? { suggestion } : {} };
+    }
+    case "required": {
+      const key = String(p.missingProperty);
+      return { path: [...path5, key], part: "key", message: `missing required key \`${key}\`` };
+    }
+    case "dependentRequired": {
+      return {
+        path: [...path5, String(p.property)],
+        part: "key",
+        message: `\`${String(p.property)}\` is only used together with \`${String(p.missingProperty)}\`; set \`${String(p.missingProperty)}\` too or remove it`
+      };
+    }
+    case "false schema": {
+      const m = /\/dependentSchemas\/([^/]+)\//.exec(e.schemaPath);
+      const with_ = m ? m[1].replace(/~1/g, "/").replace(/~0/g, "~") : void 0;
+      const key = String(path5[path5.length - 1]);
+      return {
+        path: path5,
+        part: "key",
+        message: with_ ? `set either \`${with_}\` or \`${key}\`, not both` : `\`${key}\` is not allowed here`
+      };
+    }
+    case "type": {
+      const want = [].concat(p.type).map((t) => TYPE_WORDS[t] ?? t);
+      let suggestion;
+      const numeric = want.includes(TYPE_WORDS.number) || want.includes(TYPE_WORDS.integer);
+      if (typeof data2 === "string" && /^\s*\d+(\.\d+)?\s*%\s*$/.test(data2) && numeric) {
+        suggestion = `write shares as fractions: \`${Number.parseFloat(data2) / 100}\``;
+      } else if (typeof data2 === "string" && numeric && data2.trim() !== "" && Number.isFinite(Number(data2))) {
+        suggestion = `write it without quotes: \`${data2.trim()}\``;
+      } else if (path5.length === 2 && path5[0] === "languages" && typeof data2 === "number") {
+        suggestion = `write \`${String(path5[1])}: { target: ${data2} }\``;
+      } else if (typeof data2 === "string" && want.includes("a list") && want.length === 1) {
+        suggestion = `write a list: \`[${data2}]\``;
+      }
+      return { path: path5, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
+    }
+    case "enum": {
+      const allowed = p.allowedValues.map(String);
+      const near = typeof data2 === "string" ? nearest(data2, allowed) : void 0;
+      return {
+        path: path5,
+        part: "value",
+        message: `must be one of ${allowed.map((v) => `\`${v}\``).join(", ")}, not ${kindOf(data2)}`,
+        ...near ? { suggestion: didYouMean(near) } : {}
+      };
+    }
+    case "const": {
+      return { path: path5, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
+    }
+    case "minimum":
+    case "maximum":
+    case "exclusiveMinimum":
+    case "exclusiveMaximum": {
+      const cmp = String(p.comparison).replace(">=", "\u2265").replace("<=", "\u2264");
+      let suggestion;
+      if (e.keyword === "maximum" && p.limit === 1 && typeof data2 === "number" && data2 > 1 && data2 <= 100) {
+        suggestion = `shares are fractions of 1: ${data2} % is \`${data2 / 100}\``;
+      }
+      return { path: path5, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
+    }
+    case "minProperties": {
+      const names = propertyNames(e.parentSchema);
+      const dependent = new Set(Object.keys(e.parentSchema?.dependentRequired ?? {}));
+      const primary = names.filter((k) => !dependent.has(k));
+      const what = primary.length > 0 && primary.length <= MAX_LISTED_KEYS ? `; set ${primary.map((k) => `\`${k}\``).join(" or ")}` : "";
+      return { path: path5, part: "value", message: `must not be empty${what}` };
+    }
+    case "minItems":
+      return { path: path5, part: "value", message: "must not be an empty list" };
+    case "minLength":
+      return { path: path5, part: "value", message: "must not be empty" };
+    case "uniqueItems":
+      const item = Array.isArray(data2) ? data2[Number(p.j)] : void 0;
+      return { path: path5, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
+    default:
+      return { path: path5, part: "value", message: e.message ?? `fails the \`${e.keyword}\` check` };
+  }
+}
+
+// src/policy/build.ts
+import path from "node:path";
+import iconv from "iconv-lite";
+
+// src/policy/data/default-scripts.ts
+var DEFAULT_SCRIPTS = {
+  // Latin
+  afr: ["Latin"],
+  cat: ["Latin"],
+  ceb: ["Latin"],
+  ces: ["Latin"],
+  cym: ["Latin"],
+  dan: ["Latin"],
+  deu: ["Latin"],
+  ekk: ["Latin"],
+  eng: ["Latin"],
+  epo: ["Latin"],
+  est: ["Latin"],
+  eus: ["Latin"],
+  fil: ["Latin"],
+  fin: ["Latin"],
+  fra: ["Latin"],
+  gle: ["Latin"],
+  glg: ["Latin"],
+  hau: ["Latin"],
+  hrv: ["Latin"],
+  hun: ["Latin"],
+  ibo: ["Latin"],
+  ind: ["Latin"],
+  isl: ["Latin"],
+  ita: ["Latin"],
+  jav: ["Latin"],
+  kmr: ["Latin"],
+  lav: ["Latin"],
+  lit: ["Latin"],
+  lvs: ["Latin"],
+  mlt: ["Latin"],
+  nld: ["Latin"],
+  nno: ["Latin"],
+  nob: ["Latin"],
+  nor: ["Latin"],
+  pol: ["Latin"],
+  por: ["Latin"],
+  ron: ["Latin"],
+  slk: ["Latin"],
+  slv: ["Latin"],
+  som: ["Latin"],
+  spa: ["Latin"],
+  sqi: ["Latin"],
+  als: ["Latin"],
+  sun: ["Latin"],
+  swa: ["Latin"],
+  swe: ["Latin"],
+  swh: ["Latin"],
+  tgl: ["Latin"],
+  tur: ["Latin"],
+  vie: ["Latin"],
+  xho: ["Latin"],
+  yor: ["Latin"],
+  zul: ["Latin"],
+  // Arabic
+  ara: ["Arabic"],
+  arb: ["Arabic"],
+  ary: ["Arabic"],
+  arz: ["Arabic"],
+  apc: ["Arabic"],
+  ckb: ["Arabic"],
+  fas: ["Arabic"],
+  pes: ["Arabic"],
+  prs: ["Arabic"],
+  pus: ["Arabic"],
+  pbu: ["Arabic"],
+  pbt: ["Arabic"],
+  urd: ["Arabic"],
+  pnb: ["Arabic"],
+  skr: ["Arabic"],
+  // Cyrillic
+  bel: ["Cyrillic"],
+  bul: ["Cyrillic"],
+  kaz: ["Cyrillic"],
+  khk: ["Cyrillic"],
+  kir: ["Cyrillic"],
+  mkd: ["Cyrillic"],
+  mon: ["Cyrillic"],
+  rus: ["Cyrillic"],
+  tat: ["Cyrillic"],
+  tgk: ["Cyrillic"],
+  ukr: ["Cyrillic"],
+  // Other alphabets and abjads
+  ell: ["Greek"],
+  heb: ["Hebrew"],
+  yid: ["Hebrew"],
+  ydd: ["Hebrew"],
+  hye: ["Armenian"],
+  kat: ["Georgian"],
+  amh: ["Ethiopic"],
+  tir: ["Ethiopic"],
+  div: ["Thaana"],
+  // Brahmic scripts of South Asia
+  hin: ["Devanagari"],
+  mar: ["Devanagari"],
+  nep: ["Devanagari"],
+  npi: ["Devanagari"],
+  san: ["Devanagari"],
+  mai: ["Devanagari"],
+  bho: ["Devanagari"],
+  mag: ["Devanagari"],
+  ben: ["Bengali"],
+  asm: ["Bengali"],
+  pan: ["Gurmukhi"],
+  guj: ["Gujarati"],
+  ori: ["Oriya"],
+  ory: ["Oriya"],
+  tam: ["Tamil"],
+  tel: ["Telugu"],
+  kan: ["Kannada"],
+  mal: ["Malayalam"],
+  sin: ["Sinhala"],
+  // Southeast Asia and Tibet
+  tha: ["Thai"],
+  lao: ["Lao"],
+  khm: ["Khmer"],
+  mya: ["Myanmar"],
+  bod: ["Tibetan"],
+  // East Asia
+  zho: ["Han"],
+  cmn: ["Han"],
+  yue: ["Han"],
+  wuu: ["Han"],
+  jpn: ["Han", "Hiragana", "Katakana"],
+  kor: ["Hangul", "Han"]
+};
+var SCRIPT_CODE_VARIANTS = {
+  Hans: ["Han"],
+  Hant: ["Han"],
+  Hanb: ["Han", "Bopomofo"],
+  Jpan: ["Han", "Hiragana", "Katakana"],
+  Hrkt: ["Hiragana", "Katakana"],
+  Kore: ["Hangul", "Han"],
+  Latf: ["Latin"],
+  Latg: ["Latin"],
+  Cyrs: ["Cyrillic"],
+  Aran: ["Arabic"],
+  Syre: ["Syriac"],
+  Syrj: ["Syriac"],
+  Syrn: ["Syriac"],
+  Geok: ["Georgian"]
+};
+
+// src/policy/languages.ts
+import { iso6393 as ISO_639_3 } from "iso-639-3";
+import { parse as parseBcp47 } from "bcp-47";
+
+// src/policy/data/macrolanguages.ts
+var MACROLANGUAGE_MEMBERS = {
+  aka: ["fat", "twi"],
+  ara: [
+    "aao",
+    "abh",
+    "abv",
+    "acm",
+    "acq",
+    "acw",
+    "acx",
+    "acy",
+    "adf",
+    "aeb",
+    "aec",
+    "afb",
+    "ajp",
+    "apc",
+    "apd",
+    "arb",
+    "arq",
+    "ars",
+    "ary",
+    "arz",
+    "auz",
+    "avl",
+    "ayh",
+    "ayl",
+    "ayn",
+    "ayp",
+    "pga",
+    "shu",
+    "ssh"
+  ],
+  aym: ["ayc", "ayr"],
+  aze: ["azb", "azj"],
+  bal: ["bcc", "bgn", "bgp"],
+  bik: ["bcl", "bln", "bto", "cts", "fbl", "lbl", "rbl", "ubl"],
+  bnc: ["ebk", "lbk", "obk", "rbk", "vbk"],
+  bua: ["bxm", "bxr", "bxu"],
+  chm: ["mhr", "mrj"],
+  cre: ["crj", "crk", "crl", "crm", "csw", "cwd"],
+  del: ["umu", "unm"],
+  den: ["scs", "xsl"],
+  din: ["dib", "dik", "dip", "diw", "dks"],
+  doi: ["dgo", "xnr"],
+  est: ["ekk", "vro"],
+  fas: ["pes", "prs"],
+  ful: ["ffm", "fub", "fuc", "fue", "fuf", "fuh", "fui", "fuq", "fuv"],
+  gba: ["bdt", "gbp", "gbq", "gmm", "gso", "gya"],
+  gon: ["esg", "gno", "wsg"],
+  grb: ["gbo", "gec", "grj", "grv", "gry"],
+  grn: ["gnw", "gug", "gui", "gun", "nhd"],
+  hai: ["hax", "hdn"],
+  hbs: ["bos", "cnr", "hrv", "srp"],
+  hmn: [
+    "cqd",
+    "hea",
+    "hma",
+    "hmc",
+    "hmd",
+    "hme",
+    "hmg",
+    "hmh",
+    "hmi",
+    "hmj",
+    "hml",
+    "hmm",
+    "hmp",
+    "hmq",
+    "hms",
+    "hmw",
+    "hmy",
+    "hmz",
+    "hnj",
+    "hrm",
+    "huj",
+    "mmr",
+    "muq",
+    "mww",
+    "sfm"
+  ],
+  iku: ["ike", "ikt"],
+  ipk: ["esi", "esk"],
+  jrb: ["ajt", "aju", "jye", "yhd", "yud"],
+  kau: ["kby", "knc", "krt"],
+  kln: ["enb", "eyo", "niq", "oki", "pko", "sgc", "spy", "tec", "tuy"],
+  kok: ["gom", "knn"],
+  kom: ["koi", "kpv"],
+  kon: ["kng", "kwy", "ldi"],
+  kpe: ["gkp", "xpe"],
+  kur: ["ckb", "kmr", "sdh"],
+  lah: ["hnd", "hno", "jat", "phr", "pnb", "skr", "xhe"],
+  lav: ["ltg", "lvs"],
+  luy: ["bxk", "ida", "lkb", "lko", "lks", "lri", "lrm", "lsm", "lto", "lts", "lwg", "nle", "nyd", "rag"],
+  man: ["emk", "mku", "mlq", "mnk", "msc", "mwk"],
+  mlg: ["bhr", "bmm", "bzc", "msh", "plt", "skg", "tdx", "tkg", "txy", "xmv", "xmw"],
+  mon: ["khk", "mvf"],
+  msa: [
+    "bjn",
+    "btj",
+    "bve",
+    "bvu",
+    "coa",
+    "dup",
+    "hji",
+    "ind",
+    "jak",
+    "jax",
+    "kvb",
+    "kvr",
+    "kxd",
+    "lce",
+    "lcf",
+    "liw",
+    "max",
+    "meo",
+    "mfa",
+    "mfb",
+    "min",
+    "mqg",
+    "msi",
+    "mui",
+    "orn",
+    "ors",
+    "pel",
+    "pse",
+    "tmw",
+    "urk",
+    "vkk",
+    "vkt",
+    "xmm",
+    "zlm",
+    "zmi",
+    "zsm"
+  ],
+  mwr: ["dhd", "mtr", "mve", "rwr", "swv", "wry"],
+  nep: ["dty", "npi"],
+  nor: ["nno", "nob"],
+  oji: ["ciw", "ojb", "ojc", "ojg", "ojs", "ojw", "otw"],
+  ori: ["ory", "spv"],
+  orm: ["gax", "gaz", "hae", "orc"],
+  pus: ["pbt", "pbu", "pst"],
+  que: [
+    "qub",
+    "qud",
+    "quf",
+    "qug",
+    "quh",
+    "quk",
+    "qul",
+    "qup",
+    "qur",
+    "qus",
+    "quw",
+    "qux",
+    "quy",
+    "quz",
+    "qva",
+    "qvc",
+    "qve",
+    "qvh",
+    "qvi",
+    "qvj",
+    "qvl",
+    "qvm",
+    "qvn",
+    "qvo",
+    "qvp",
+    "qvs",
+    "qvw",
+    "qvz",
+    "qwa",
+    "qwc",
+    "qwh",
+    "qws",
+    "qxa",
+    "qxc",
+    "qxh",
+    "qxl",
+    "qxn",
+    "qxo",
+    "qxp",
+    "qxr",
+    "qxt",
+    "qxu",
+    "qxw"
+  ],
+  raj: ["bgq", "gda", "gju", "hoj", "mup", "wbr"],
+  rom: ["rmc", "rmf", "rml", "rmn", "rmo", "rmw", "rmy"],
+  sqi: ["aae", "aat", "aln", "als"],
+  srd: ["sdc", "sdn", "src", "sro"],
+  swa: ["swc", "swh"],
+  syr: ["aii", "cld"],
+  tmh: ["taq", "thv", "thz", "ttq"],
+  uzb: ["uzn", "uzs"],
+  yid: ["ydd", "yih"],
+  zap: [
+    "zaa",
+    "zab",
+    "zac",
+    "zad",
+    "zae",
+    "zaf",
+    "zai",
+    "zam",
+    "zao",
+    "zaq",
+    "zar",
+    "zas",
+    "zat",
+    "zav",
+    "zaw",
+    "zax",
+    "zca",
+    "zoo",
+    "zpa",
+    "zpb",
+    "zpc",
+    "zpd",
+    "zpe",
+    "zpf",
+    "zpg",
+    "zph",
+    "zpi",
+    "zpj",
+    "zpk",
+    "zpl",
+    "zpm",
+    "zpn",
+    "zpo",
+    "zpp",
+    "zpq",
+    "zpr",
+    "zps",
+    "zpt",
+    "zpu",
+    "zpv",
+    "zpw",
+    "zpx",
+    "zpy",
+    "zpz",
+    "zsr",
+    "zte",
+    "ztg",
+    "ztl",
+    "ztm",
+    "ztn",
+    "ztp",
+    "ztq",
+    "zts",
+    "ztt",
+    "ztu",
+    "ztx",
+    "zty"
+  ],
+  zha: [
+    "zch",
+    "zeh",
+    "zgb",
+    "zgm",
+    "zgn",
+    "zhd",
+    "zhn",
+    "zlj",
+    "zln",
+    "zlq",
+    "zqe",
+    "zyb",
+    "zyg",
+    "zyj",
+    "zyn",
+    "zzj"
+  ],
+  zho: [
+    "cdo",
+    "cjy",
+    "cmn",
+    "cnp",
+    "cpx",
+    "csp",
+    "czh",
+    "czo",
+    "gan",
+    "hak",
+    "hsn",
+    "lzh",
+    "mnp",
+    "nan",
+    "wuu",
+    "yue"
+  ],
+  zza: ["diq", "kiu"]
+};
+
+// src/policy/script-names.generated.ts
+var SCRIPT_ALIASES = {
+  "Adlam": "Adlam",
+  "Adlm": "Adlam",
+  "Aghb": "Caucasian_Albanian",
+  "Ahom": "Ahom",
+  "Anatolian_Hieroglyphs": "Anatolian_Hieroglyphs",
+  "Arab": "Arabic",
+  "Arabic": "Arabic",
+  "Armenian": "Armenian",
+  "Armi": "Imperial_Aramaic",
+  "Armn": "Armenian",
+  "Avestan": "Avestan",
+  "Avst": "Avestan",
+  "Bali": "Balinese",
+  "Balinese": "Balinese",
+  "Bamu": "Bamum",
+  "Bamum": "Bamum",
+  "Bass": "Bassa_Vah",
+  "Bassa_Vah": "Bassa_Vah",
+  "Batak": "Batak",
+  "Batk": "Batak",
+  "Beng": "Bengali",
+  "Bengali": "Bengali",
+  "Berf": "Beria_Erfe",
+  "Beria_Erfe": "Beria_Erfe",
+  "Bhaiksuki": "Bhaiksuki",
+  "Bhks": "Bhaiksuki",
+  "Bopo": "Bopomofo",
+  "Bopomofo": "Bopomofo",
+  "Brah": "Brahmi",
+  "Brahmi": "Brahmi",
+  "Brai": "Braille",
+  "Braille": "Braille",
+  "Bugi": "Buginese",
+  "Buginese": "Buginese",
+  "Buhd": "Buhid",
+  "Buhid": "Buhid",
+  "Cakm": "Chakma",
+  "Canadian_Aboriginal": "Canadian_Aboriginal",
+  "Cans": "Canadian_Aboriginal",
+  "Cari": "Carian",
+  "Carian": "Carian",
+  "Caucasian_Albanian": "Caucasian_Albanian",
+  "Chakma": "Chakma",
+  "Cham": "Cham",
+  "Cher": "Cherokee",
+  "Cherokee": "Cherokee",
+  "Chorasmian": "Chorasmian",
+  "Chrs": "Chorasmian",
+  "Common": "Common",
+  "Copt": "Coptic",
+  "Coptic": "Coptic",
+  "Cpmn": "Cypro_Minoan",
+  "Cprt": "Cypriot",
+  "Cuneiform": "Cuneiform",
+  "Cypriot": "Cypriot",
+  "Cypro_Minoan": "Cypro_Minoan",
+  "Cyrillic": "Cyrillic",
+  "Cyrl": "Cyrillic",
+  "Deseret": "Deseret",
+  "Deva": "Devanagari",
+  "Devanagari": "Devanagari",
+  "Diak": "Dives_Akuru",
+  "Dives_Akuru": "Dives_Akuru",
+  "Dogr": "Dogra",
+  "Dogra": "Dogra",
+  "Dsrt": "Deseret",
+  "Dupl": "Duployan",
+  "Duployan": "Duployan",
+  "Egyp": "Egyptian_Hieroglyphs",
+  "Egyptian_Hieroglyphs": "Egyptian_Hieroglyphs",
+  "Elba": "Elbasan",
+  "Elbasan": "Elbasan",
+  "Elym": "Elymaic",
+  "Elymaic": "Elymaic",
+  "Ethi": "Ethiopic",
+  "Ethiopic": "Ethiopic",
+  "Gara": "Garay",
+  "Garay": "Garay",
+  "Geor": "Georgian",
+  "Georgian": "Georgian",
+  "Glag": "Glagolitic",
+  "Glagolitic": "Glagolitic",
+  "Gong": "Gunjala_Gondi",
+  "Gonm": "Masaram_Gondi",
+  "Goth": "Gothic",
+  "Gothic": "Gothic",
+  "Gran": "Grantha",
+  "Grantha": "Grantha",
+  "Greek": "Greek",
+  "Grek": "Greek",
+  "Gujarati": "Gujarati",
+  "Gujr": "Gujarati",
+  "Gukh": "Gurung_Khema",
+  "Gunjala_Gondi": "Gunjala_Gondi",
+  "Gurmukhi": "Gurmukhi",
+  "Guru": "Gurmukhi",
+  "Gurung_Khema": "Gurung_Khema",
+  "Han": "Han",
+  "Hang": "Hangul",
+  "Hangul": "Hangul",
+  "Hani": "Han",
+  "Hanifi_Rohingya": "Hanifi_Rohingya",
+  "Hano": "Hanunoo",
+  "Hanunoo": "Hanunoo",
+  "Hatr": "Hatran",
+  "Hatran": "Hatran",
+  "Hebr": "Hebrew",
+  "Hebrew": "Hebrew",
+  "Hira": "Hiragana",
+  "Hiragana": "Hiragana",
+  "Hluw": "Anatolian_Hieroglyphs",
+  "Hmng": "Pahawh_Hmong",
+  "Hmnp": "Nyiakeng_Puachue_Hmong",
+  "Hung": "Old_Hungarian",
+  "Imperial_Aramaic": "Imperial_Aramaic",
+  "Inherited": "Inherited",
+  "Inscriptional_Pahlavi": "Inscriptional_Pahlavi",
+  "Inscriptional_Parthian": "Inscriptional_Parthian",
+  "Ital": "Old_Italic",
+  "Java": "Javanese",
+  "Javanese": "Javanese",
+  "Kaithi": "Kaithi",
+  "Kali": "Kayah_Li",
+  "Kana": "Katakana",
+  "Kannada": "Kannada",
+  "Katakana": "Katakana",
+  "Kawi": "Kawi",
+  "Kayah_Li": "Kayah_Li",
+  "Khar": "Kharoshthi",
+  "Kharoshthi": "Kharoshthi",
+  "Khitan_Small_Script": "Khitan_Small_Script",
+  "Khmer": "Khmer",
+  "Khmr": "Khmer",
+  "Khoj": "Khojki",
+  "Khojki": "Khojki",
+  "Khudawadi": "Khudawadi",
+  "Kirat_Rai": "Kirat_Rai",
+  "Kits": "Khitan_Small_Script",
+  "Knda": "Kannada",
+  "Krai": "Kirat_Rai",
+  "Kthi": "Kaithi",
+  "Lana": "Tai_Tham",
+  "Lao": "Lao",
+  "Laoo": "Lao",
+  "Latin": "Latin",
+  "Latn": "Latin",
+  "Lepc": "Lepcha",
+  "Lepcha": "Lepcha",
+  "Limb": "Limbu",
+  "Limbu": "Limbu",
+  "Lina": "Linear_A",
+  "Linb": "Linear_B",
+  "Linear_A": "Linear_A",
+  "Linear_B": "Linear_B",
+  "Lisu": "Lisu",
+  "Lyci": "Lycian",
+  "Lycian": "Lycian",
+  "Lydi": "Lydian",
+  "Lydian": "Lydian",
+  "Mahajani": "Mahajani",
+  "Mahj": "Mahajani",
+  "Maka": "Makasar",
+  "Makasar": "Makasar",
+  "Malayalam": "Malayalam",
+  "Mand": "Mandaic",
+  "Mandaic": "Mandaic",
+  "Mani": "Manichaean",
+  "Manichaean": "Manichaean",
+  "Marc": "Marchen",
+  "Marchen": "Marchen",
+  "Masaram_Gondi": "Masaram_Gondi",
+  "Medefaidrin": "Medefaidrin",
+  "Medf": "Medefaidrin",
+  "Meetei_Mayek": "Meetei_Mayek",
+  "Mend": "Mende_Kikakui",
+  "Mende_Kikakui": "Mende_Kikakui",
+  "Merc": "Meroitic_Cursive",
+  "Mero": "Meroitic_Hieroglyphs",
+  "Meroitic_Cursive": "Meroitic_Cursive",
+  "Meroitic_Hieroglyphs": "Meroitic_Hieroglyphs",
+  "Miao": "Miao",
+  "Mlym": "Malayalam",
+  "Modi": "Modi",
+  "Mong": "Mongolian",
+  "Mongolian": "Mongolian",
+  "Mro": "Mro",
+  "Mroo": "Mro",
+  "Mtei": "Meetei_Mayek",
+  "Mult": "Multani",
+  "Multani": "Multani",
+  "Myanmar": "Myanmar",
+  "Mymr": "Myanmar",
+  "Nabataean": "Nabataean",
+  "Nag_Mundari": "Nag_Mundari",
+  "Nagm": "Nag_Mundari",
+  "Nand": "Nandinagari",
+  "Nandinagari": "Nandinagari",
+  "Narb": "Old_North_Arabian",
+  "Nbat": "Nabataean",
+  "New_Tai_Lue": "New_Tai_Lue",
+  "Newa": "Newa",
+  "Nko": "Nko",
+  "Nkoo": "Nko",
+  "Nshu": "Nushu",
+  "Nushu": "Nushu",
+  "Nyiakeng_Puachue_Hmong": "Nyiakeng_Puachue_Hmong",
+  "Ogam": "Ogham",
+  "Ogham": "Ogham",
+  "Ol_Chiki": "Ol_Chiki",
+  "Ol_Onal": "Ol_Onal",
+  "Olck": "Ol_Chiki",
+  "Old_Hungarian": "Old_Hungarian",
+  "Old_Italic": "Old_Italic",
+  "Old_North_Arabian": "Old_North_Arabian",
+  "Old_Permic": "Old_Permic",
+  "Old_Persian": "Old_Persian",
+  "Old_Sogdian": "Old_Sogdian",
+  "Old_South_Arabian": "Old_South_Arabian",
+  "Old_Turkic": "Old_Turkic",
+  "Old_Uyghur": "Old_Uyghur",
+  "Onao": "Ol_Onal",
+  "Oriya": "Oriya",
+  "Orkh": "Old_Turkic",
+  "Orya": "Oriya",
+  "Osage": "Osage",
+  "Osge": "Osage",
+  "Osma": "Osmanya",
+  "Osmanya": "Osmanya",
+  "Ougr": "Old_Uyghur",
+  "Pahawh_Hmong": "Pahawh_Hmong",
+  "Palm": "Palmyrene",
+  "Palmyrene": "Palmyrene",
+  "Pau_Cin_Hau": "Pau_Cin_Hau",
+  "Pauc": "Pau_Cin_Hau",
+  "Perm": "Old_Permic",
+  "Phag": "Phags_Pa",
+  "Phags_Pa": "Phags_Pa",
+  "Phli": "Inscriptional_Pahlavi",
+  "Phlp": "Psalter_Pahlavi",
+  "Phnx": "Phoenician",
+  "Phoenician": "Phoenician",
+  "Plrd": "Miao",
+  "Prti": "Inscriptional_Parthian",
+  "Psalter_Pahlavi": "Psalter_Pahlavi",
+  "Qaac": "Coptic",
+  "Qaai": "Inherited",
+  "Rejang": "Rejang",
+  "Rjng": "Rejang",
+  "Rohg": "Hanifi_Rohingya",
+  "Runic": "Runic",
+  "Runr": "Runic",
+  "Samaritan": "Samaritan",
+  "Samr": "Samaritan",
+  "Sarb": "Old_South_Arabian",
+  "Saur": "Saurashtra",
+  "Saurashtra": "Saurashtra",
+  "Sgnw": "SignWriting",
+  "Sharada": "Sharada",
+  "Shavian": "Shavian",
+  "Shaw": "Shavian",
+  "Shrd": "Sharada",
+  "Sidd": "Siddham",
+  "Siddham": "Siddham",
+  "Sidetic": "Sidetic",
+  "Sidt": "Sidetic",
+  "SignWriting": "SignWriting",
+  "Sind": "Khudawadi",
+  "Sinh": "Sinhala",
+  "Sinhala": "Sinhala",
+  "Sogd": "Sogdian",
+  "Sogdian": "Sogdian",
+  "Sogo": "Old_Sogdian",
+  "Sora": "Sora_Sompeng",
+  "Sora_Sompeng": "Sora_Sompeng",
+  "Soyo": "Soyombo",
+  "Soyombo": "Soyombo",
+  "Sund": "Sundanese",
+  "Sundanese": "Sundanese",
+  "Sunu": "Sunuwar",
+  "Sunuwar": "Sunuwar",
+  "Sylo": "Syloti_Nagri",
+  "Syloti_Nagri": "Syloti_Nagri",
+  "Syrc": "Syriac",
+  "Syriac": "Syriac",
+  "Tagalog": "Tagalog",
+  "Tagb": "Tagbanwa",
+  "Tagbanwa": "Tagbanwa",
+  "Tai_Le": "Tai_Le",
+  "Tai_Tham": "Tai_Tham",
+  "Tai_Viet": "Tai_Viet",
+  "Tai_Yo": "Tai_Yo",
+  "Takr": "Takri",
+  "Takri": "Takri",
+  "Tale": "Tai_Le",
+  "Talu": "New_Tai_Lue",
+  "Tamil": "Tamil",
+  "Taml": "Tamil",
+  "Tang": "Tangut",
+  "Tangsa": "Tangsa",
+  "Tangut": "Tangut",
+  "Tavt": "Tai_Viet",
+  "Tayo": "Tai_Yo",
+  "Telu": "Telugu",
+  "Telugu": "Telugu",
+  "Tfng": "Tifinagh",
+  "Tglg": "Tagalog",
+  "Thaa": "Thaana",
+  "Thaana": "Thaana",
+  "Thai": "Thai",
+  "Tibetan": "Tibetan",
+  "Tibt": "Tibetan",
+  "Tifinagh": "Tifinagh",
+  "Tirh": "Tirhuta",
+  "Tirhuta": "Tirhuta",
+  "Tnsa": "Tangsa",
+  "Todhri": "Todhri",
+  "Todr": "Todhri",
+  "Tolong_Siki": "Tolong_Siki",
+  "Tols": "Tolong_Siki",
+  "Toto": "Toto",
+  "Tulu_Tigalari": "Tulu_Tigalari",
+  "Tutg": "Tulu_Tigalari",
+  "Ugar": "Ugaritic",
+  "Ugaritic": "Ugaritic",
+  "Unknown": "Unknown",
+  "Vai": "Vai",
+  "Vaii": "Vai",
+  "Vith": "Vithkuqi",
+  "Vithkuqi": "Vithkuqi",
+  "Wancho": "Wancho",
+  "Wara": "Warang_Citi",
+  "Warang_Citi": "Warang_Citi",
+  "Wcho": "Wancho",
+  "Xpeo": "Old_Persian",
+  "Xsux": "Cuneiform",
+  "Yezi": "Yezidi",
+  "Yezidi": "Yezidi",
+  "Yi": "Yi",
+  "Yiii": "Yi",
+  "Zanabazar_Square": "Zanabazar_Square",
+  "Zanb": "Zanabazar_Square",
+  "Zinh": "Inherited",
+  "Zyyy": "Common",
+  "Zzzz": "Unknown"
+};
+
+// src/policy/scripts.ts
+var NO_LANGUAGE = /* @__PURE__ */ new Set(["Common", "Inherited", "Unknown"]);
+function fold(name) {
+  return name.trim().toLowerCase().replace(/[\s-]+/g, "_");
+}
+var index;
+function scriptIndex() {
+  if (index) return index;
+  index = /* @__PURE__ */ new Map();
+  for (const [alias, long] of Object.entries(SCRIPT_ALIASES)) index.set(fold(alias), [long]);
+  for (const [code, longs] of Object.entries(SCRIPT_CODE_VARIANTS)) {
+    if (!index.has(fold(code))) index.set(fold(code), longs);
+  }
+  return index;
+}
+function lookUpScript(written) {
+  const found = scriptIndex().get(fold(written));
+  if (found) {
+    const [first] = found;
+    if (found.length === 1 && first !== void 0 && NO_LANGUAGE.has(first)) {
+      return {
+        ok: false,
+        message: `\`${written}\` (${first}) is shared by all languages (digits, punctuation, marks) and cannot be a language's own script`
+      };
+    }
+    return { ok: true, scripts: found };
+  }
+  const longNames = new Set(Object.values(SCRIPT_ALIASES).filter((n) => !NO_LANGUAGE.has(n)));
+  const candidates = [...longNames, ...Object.keys(SCRIPT_ALIASES).filter((k) => k.length === 4)];
+  const near = nearest(written, candidates);
+  const suggestion = near === void 0 ? void 0 : SCRIPT_ALIASES[near] ?? near;
+  return {
+    ok: false,
+    message: `unknown script \`${written}\`; write a Unicode Script name (\`Devanagari\`) or an ISO 15924 code (\`Deva\`)`,
+    ...suggestion ? { suggestion: `did you mean \`${suggestion}\`?` } : {}
+  };
+}
+
+// src/policy/languages.ts
+var RESERVED_LANGUAGE_KEYS = {
+  other: "text in languages the policy does not list",
+  und: "text too short or unclear to label"
+};
+var NOT_A_CODE = "is not a language code; write ISO 639-1 (`hi`), ISO 639-3 (`hin`) or a BCP 47 tag (`hi-IN`, `sr-Latn`)";
+var tables;
+function codeTables() {
+  if (tables) return tables;
+  const t = { by3: /* @__PURE__ */ new Map(), by1: /* @__PURE__ */ new Map(), by2B: /* @__PURE__ */ new Map(), byName: /* @__PURE__ */ new Map() };
+  for (const lang of ISO_639_3) {
+    t.by3.set(lang.iso6393, lang);
+    if (lang.iso6391) t.by1.set(lang.iso6391, lang);
+    if (lang.iso6392B && lang.iso6392B !== lang.iso6393) t.by2B.set(lang.iso6392B, lang);
+    const name = lang.name.toLowerCase();
+    if (!t.byName.has(name)) t.byName.set(name, lang);
+  }
+  tables = t;
+  return t;
+}
+function membersOf(code) {
+  return Object.hasOwn(MACROLANGUAGE_MEMBERS, code) ? MACROLANGUAGE_MEMBERS[code] : [];
+}
+function resolvedOf(lang) {
+  if (lang.scope === "special") {
+    return { ok: false, message: `\`${lang.iso6393}\` is a special ISO 639 code (${lang.name}), not a language` };
+  }
+  return { ok: true, iso6393: lang.iso6393, name: lang.name, covers: [lang.iso6393, ...membersOf(lang.iso6393)] };
+}
+function suggestionForName(key) {
+  const { byName } = codeTables();
+  const exact = byName.get(key.toLowerCase());
+  if (exact) return didYouMean(exact.iso6393);
+  if (key.length < 4) return void 0;
+  const near = nearest(key, byName.keys());
+  const lang = near === void 0 ? void 0 : byName.get(near);
+  return lang ? `did you mean \`${lang.iso6393}\` (${lang.name})?` : void 0;
+}
+function resolvePrimary(code, written) {
+  const { by1, by3, by2B } = codeTables();
+  const lower = code.toLowerCase();
+  if (lower.length === 2) {
+    const lang = by1.get(lower);
+    if (lang) return resolvedOf(lang);
+    return { ok: false, message: `\`${written}\` is not an ISO 639-1 code` };
+  }
+  if (lower.length === 3) {
+    const lang = by3.get(lower);
+    if (lang) return resolvedOf(lang);
+    const bib = by2B.get(lower);
+    if (bib) {
+      return {
+        ok: false,
+        message: `\`${written}\` is an ISO 639-2/B code (${bib.name}); keys use ISO 639-3 codes`,
+        suggestion: didYouMean(bib.iso6393)
+      };
+    }
+    return { ok: false, message: `\`${written}\` is not an ISO 639-3 code` };
+  }
+  return { ok: false, message: `\`${written}\` ${NOT_A_CODE}` };
+}
+function resolveLanguageKey(key) {
+  const lower = key.toLowerCase();
+  const reserved = Object.hasOwn(RESERVED_LANGUAGE_KEYS, lower) ? RESERVED_LANGUAGE_KEYS[lower] : void 0;
+  if (reserved) {
+    return { ok: false, message: `\`${key}\` is reserved: reports use it for ${reserved}` };
+  }
+  if (/^[A-Za-z]{2,3}$/.test(key)) {
+    const r2 = resolvePrimary(key, key);
+    if (!r2.ok && !r2.suggestion) {
+      const s = suggestionForName(key);
+      if (s) return { ...r2, suggestion: s };
+    }
+    return r2;
+  }
+  let malformed;
+  const tag = parseBcp47(key, {
+    normalize: true,
+    warning: (reason) => {
+      malformed ??= reason;
+    }
+  });
+  const primary = tag.extendedLanguageSubtags[0] ?? tag.language;
+  if (malformed || !primary) {
+    const s = suggestionForName(key);
+    return {
+      ok: false,
+      message: `\`${key}\` ${NOT_A_CODE}`,
+      ...s ? { suggestion: s } : {}
+    };
+  }
+  const r = resolvePrimary(primary, primary);
+  if (!r.ok) {
+    const suggestion = r.suggestion ?? suggestionForName(primary);
+    const message = primary === key ? r.message : `${r.message} (in \`${key}\`)`;
+    return { ok: false, message, ...suggestion ? { suggestion } : {} };
+  }
+  if (tag.script) {
+    const s = lookUpScript(tag.script);
+    if (!s.ok) {
+      return { ok: false, message: `script subtag \`${tag.script}\` in \`${key}\`: ${s.message}`, ...s.suggestion ? { suggestion: s.suggestion } : {} };
+    }
+    return { ...r, subtagScripts: s.scripts, scriptSubtag: tag.script };
+  }
+  return r;
+}
+
+// src/policy/build.ts
+var DEFAULT_MAX_LINE_BYTES = 8 * 1024 * 1024;
+var DEFAULT_MIN_CHARS = 20;
+var DEFAULT_TOLERANCE = 0.03;
+var DEFAULT_MIN_PURITY = 0.9;
+var DEFAULT_MAX_IMPURE_DOCS = 0.02;
+var DEFAULT_FORBID = ["replacement-char", "control-chars", "bidi-controls", "mojibake"];
+var DEFAULT_NEAR = { threshold: 0.8, shingle: 5, hashes: 128 };
+var DEFAULT_NGRAM = 13;
+var SUM_EPSILON = 1e-9;
+var LOOSE_TOLERANCE = 0.5;
+var MIN_SENSIBLE_MIN_CHARS = 10;
+var MIN_SENSIBLE_NGRAM = 8;
+var LOOSE_NEAR_THRESHOLD = 0.5;
+var BUILTIN_TOKENIZERS = ["gpt2", "r50k_base", "p50k_base", "cl100k_base", "o200k_base"];
+var RULE_NAMES = ["input", "mix", "script", "encoding", "fertility", "duplicates", "contamination"];
+var MIX_UNITS = ["docs", "bytes", "chars", "words", "tokens"];
+var ANOMALY_KINDS2 = ["replacement-char", "control-chars", "bidi-controls", "zero-width", "private-use", "mojibake"];
+function asObj(v) {
+  return v !== null && typeof v === "object" && !Array.isArray(v) ? v : void 0;
+}
+function asNum(v) {
+  return typeof v === "number" && Number.isFinite(v) ? v : void 0;
+}
+function asStr(v) {
+  return typeof v === "string" && v.length > 0 ? v : void 0;
+}
+function asStrList(v) {
+  if (typeof v === "string") return v.length > 0 ? [v] : [];
+  if (Array.isArray(v)) return v.filter((x) => typeof x === "string" && x.length > 0);
+  return void 0;
+}
+function fmt(n) {
+  return String(Math.round(n * 1e6) / 1e6);
+}
+function buildPolicy(value, opts, sink) {
+  const raw = asObj(value) ?? {};
+  const files = [];
+  const policyDir = path.dirname(opts.file);
+  const writtenRoot = asStr(raw.root);
+  const root = opts.root ?? (writtenRoot !== void 0 ? path.resolve(policyDir, writtenRoot) : opts.defaultRoot ?? policyDir);
+  const corpus = buildCorpus(asObj(raw.corpus) ?? {}, sink);
+  const tokenizer = buildTokenizer(raw.tokenizer, ["tokenizer"], root, files, sink);
+  const baseline = buildTokenizer(raw.baseline, ["baseline"], root, files, sink);
+  if (raw.baseline !== void 0 && raw.tokenizer === void 0) {
+    sink.problem(["baseline"], "a baseline is compared against the `tokenizer`, which is not set", { part: "key" });
+  }
+  if (tokenizer && baseline && JSON.stringify(tokenizer) === JSON.stringify(baseline)) {
+    sink.warning(["baseline"], "the baseline is the same tokenizer as `tokenizer`, so every comparison is even", { part: "key" });
+  }
+  const languages = buildLanguages(raw.languages, sink);
+  const detection = { minChars: asNum(asObj(raw.detection)?.["min-chars"]) ?? DEFAULT_MIN_CHARS };
+  if (detection.minChars < MIN_SENSIBLE_MIN_CHARS) {
+    sink.warning(["detection", "min-chars"], `texts of fewer than ${MIN_SENSIBLE_MIN_CHARS} letters cannot be told apart by language; ${detection.minChars} lets guesses count`);
+  }
+  const sampling = buildSampling(raw.sampling);
+  const rules = buildRules(asObj(raw.rules) ?? {}, { languages, tokenizerSet: raw.tokenizer !== void 0, root, files, sink });
+  const severity = buildSeverity(asObj(raw.severity) ?? {}, rules, sink);
+  const policy = {
+    version: 1,
+    file: opts.file,
+    name: asStr(raw.name) ?? path.parse(opts.file).name,
+    root,
+    corpus,
+    languages,
+    detection,
+    rules,
+    severity,
+    ...tokenizer ? { tokenizer } : {},
+    ...baseline ? { baseline } : {},
+    ...sampling ? { sampling } : {}
+  };
+  return { policy, files };
+}
+function checkGlob(glob, at2, sink) {
+  if (path.isAbsolute(glob) || /^[A-Za-z]:[\\/]/.test(glob)) {
+    sink.problem(at2, `\`${glob}\` is an absolute path; globs are relative to the root`);
+  } else if (/(^|\/)\.\.(\/|$)/.test(glob)) {
+    sink.problem(at2, `\`${glob}\` leaves the root; set \`root\` higher instead`);
+  } else if (glob.startsWith("!")) {
+    sink.problem(at2, `\`${glob}\` starts with \`!\`; list files to leave out under \`corpus.exclude\``);
+  }
+}
+function globList(v, at2, sink) {
+  const list = asStrList(v) ?? [];
+  const single = typeof v === "string";
+  list.forEach((g, i) => checkGlob(g, single ? at2 : [...at2, i], sink));
+  return list;
+}
+function isDotPath(s) {
+  return s.split(".").every((part) => part.length > 0);
+}
+function buildCorpus(c, sink) {
+  const at2 = (k) => ["corpus", k];
+  const include = globList(c.include, at2("include"), sink);
+  const exclude = globList(c.exclude, at2("exclude"), sink);
+  const text = asStr(c.text) ?? "text";
+  if (!isDotPath(text)) sink.problem(at2("text"), `\`${text}\` is not a dot path such as \`text\` or \`meta.body\``);
+  const declared = asStr(c["declared-language"]);
+  if (declared !== void 0 && !isDotPath(declared)) {
+    sink.problem(at2("declared-language"), `\`${declared}\` is not a dot path such as \`lang\` or \`meta.lang\``);
+  }
+  const subset = asStr(c.subset);
+  if (subset !== void 0) {
+    const count3 = subset.split("{subset}").length - 1;
+    if (count3 !== 1) {
+      sink.problem(at2("subset"), `must contain \`{subset}\` exactly once, found ${count3 === 0 ? "none" : `${count3} times`}`, {
+        ...count3 === 0 ? { suggestion: "for example `data/{subset}/**`" } : {}
+      });
+    }
+  }
+  const encodings = [];
+  for (const [glob, enc] of Object.entries(asObj(c.encodings) ?? {})) {
+    const where2 = ["corpus", "encodings", glob];
+    checkGlob(glob, where2, sink);
+    if (typeof enc !== "string" || enc.length === 0) continue;
+    if (!iconv.encodingExists(enc)) {
+      sink.problem(where2, `unknown encoding \`${enc}\` (encoding names are those iconv-lite knows, e.g. \`windows-1256\`)`, {
+        ...encodingSuggestion(enc)
+      });
+      continue;
+    }
+    encodings.push({ glob, encoding: enc });
+  }
+  return {
+    include,
+    exclude,
+    text,
+    ...declared !== void 0 ? { declaredLanguage: declared } : {},
+    ...subset !== void 0 ? { subset } : {},
+    encodings,
+    maxLineBytes: asNum(c["max-line-bytes"]) ?? DEFAULT_MAX_LINE_BYTES
+  };
+}
+function encodingSuggestion(enc) {
+  const canonical = enc.toLowerCase().replace(/[^a-z0-9]/g, "");
+  const names = Object.keys(iconv.encodings ?? {}).filter((k) => !k.startsWith("_") && !/^\d+$/.test(k));
+  const near = nearest(canonical, names);
+  return near ? { suggestion: didYouMean(near) } : {};
+}
+function buildTokenizer(v, at2, root, files, sink) {
+  const t = asObj(v);
+  if (!t) return void 0;
+  const builtin = asStr(t.builtin);
+  if (builtin !== void 0) {
+    return BUILTIN_TOKENIZERS.includes(builtin) ? { kind: "builtin", name: builtin } : void 0;
+  }
+  const file = asStr(t.file);
+  if (file === void 0) return void 0;
+  const written = asStr(t.format);
+  let format;
+  if (written === "tokenizer.json" || written === "tiktoken") format = written;
+  else if (written === void 0) {
+    if (/\.json$/i.test(file)) format = "tokenizer.json";
+    else if (/\.tiktoken$/i.test(file)) format = "tiktoken";
+    else {
+      sink.problem([...at2, "file"], `cannot tell the format of \`${file}\` from its name (.json or .tiktoken)`, {
+        suggestion: "set `format: tokenizer.json` or `format: tiktoken`"
+      });
+      return void 0;
+    }
+  } else return void 0;
+  const pattern = asStr(t.pattern);
+  if (format === "tokenizer.json" && pattern !== void 0) {
+    sink.problem([...at2, "pattern"], "`pattern` is only used with tiktoken rank files; a tokenizer.json carries its own pre-tokenizer", { part: "key" });
+  }
+  if (format === "tiktoken") {
+    if (pattern === void 0) {
+      sink.problem([...at2, "file"], "tiktoken rank files carry no split pattern; set `pattern` to a builtin whose pattern to use (e.g. `cl100k_base`) or to a regular expression", { part: "key" });
+    } else if (!BUILTIN_TOKENIZERS.includes(pattern)) {
+      try {
+        new RegExp(pattern, "gu");
+      } catch (e) {
+        const near = nearest(pattern, BUILTIN_TOKENIZERS);
+        sink.problem([...at2, "pattern"], `neither a builtin name nor a valid regular expression: ${e.message}`, {
+          ...near ? { suggestion: didYouMean(near) } : {}
+        });
+      }
+    }
+  }
+  const absPath = path.resolve(root, file);
+  files.push({ path: [...at2, "file"], what: "tokenizer file", file, absPath });
+  return { kind: "file", file, absPath, format, ...format === "tiktoken" && pattern !== void 0 ? { pattern } : {} };
+}
+function buildLanguages(v, sink) {
+  const out = [];
+  const entries = Object.entries(asObj(v) ?? {});
+  for (const [key, rawSpec] of entries) {
+    const at2 = ["languages", key];
+    const spec = asObj(rawSpec) ?? {};
+    const r = resolveLanguageKey(key);
+    if (!r.ok) {
+      sink.problem(at2, r.message, { part: "key", ...r.suggestion ? { suggestion: r.suggestion } : {} });
+      continue;
+    }
+    const scripts = [];
+    const writtenScripts = Array.isArray(spec.scripts) ? spec.scripts : void 0;
+    writtenScripts?.forEach((s, i) => {
+      if (typeof s !== "string" || s.length === 0) return;
+      const found = lookUpScript(s);
+      if (!found.ok) {
+        sink.problem([...at2, "scripts", i], found.message, found.suggestion ? { suggestion: found.suggestion } : {});
+        return;
+      }
+      for (const long of found.scripts) if (!scripts.includes(long)) scripts.push(long);
+    });
+    if (writtenScripts === void 0) {
+      const fallback = r.subtagScripts ?? (Object.hasOwn(DEFAULT_SCRIPTS, r.iso6393) ? DEFAULT_SCRIPTS[r.iso6393] : void 0);
+      if (fallback) scripts.push(...fallback);
+      else {
+        sink.problem(at2, `no default script for \`${r.iso6393}\` (${r.name}); list its scripts, e.g. \`scripts: [Latin]\``, { part: "key" });
+      }
+    } else if (r.subtagScripts && scripts.length > 0 && !r.subtagScripts.every((s) => scripts.includes(s))) {
+      sink.warning([...at2, "scripts"], `the key says \`${r.scriptSubtag}\` (${r.subtagScripts.join(", ")}) but \`scripts\` lists ${scripts.join(", ")}; \`scripts\` is used`);
+    }
+    const target = asNum(spec.target);
+    out.push({
+      key,
+      iso6393: r.iso6393,
+      name: r.name,
+      covers: r.covers,
+      scripts,
+      ...target !== void 0 ? { target } : {}
+    });
+  }
+  for (let j = 0; j < out.length; j++) {
+    for (let i = 0; i < j; i++) {
+      const a = out[i];
+      const b = out[j];
+      const shared = b.covers.filter((c) => a.covers.includes(c));
+      if (shared.length === 0) continue;
+      const same = a.iso6393 === b.iso6393;
+      sink.problem(
+        ["languages", b.key],
+        same ? `\`${b.key}\` and \`${a.key}\` are the same language (\`${a.iso6393}\`); list it once${b.key.includes("-") || a.key.includes("-") ? ", with all its scripts under `scripts`" : ""}` : `\`${b.key}\` overlaps \`${a.key}\`: both cover ${shared.map((c) => `\`${c}\``).join(", ")}, so a detected label could count under either; keep one`,
+        { part: "key" }
+      );
+    }
+  }
+  const withTargets = out.filter((l) => l.target !== void 0);
+  const sum = withTargets.reduce((s, l) => s + l.target, 0);
+  if (sum > 1 + SUM_EPSILON) {
+    sink.problem(["languages"], `targets sum to ${fmt(sum)} (${withTargets.map((l) => `${l.key} ${fmt(l.target)}`).join(" + ")}); they may add up to at most 1`, { part: "key" });
+  }
+  return out;
+}
+function buildSampling(v) {
+  const s = asObj(v);
+  if (!s) return void 0;
+  const docs = asNum(s["docs-per-shard"]);
+  if (docs !== void 0) return { docsPerShard: docs };
+  const fraction = asNum(s.fraction);
+  if (fraction !== void 0) return { fraction };
+  return void 0;
+}
+function buildRules(r, ctx) {
+  const { sink } = ctx;
+  const input = asObj(r.input) ?? {};
+  const rules = {
+    input: {
+      ...asNum(input["max-rejected"]) !== void 0 ? { maxRejected: asNum(input["max-rejected"]) } : {},
+      maxBrokenShards: asNum(input["max-broken-shards"]) ?? 0
+    }
+  };
+  if (rules.input.maxRejected !== void 0 && rules.input.maxRejected >= LOOSE_TOLERANCE) {
+    sink.warning(["rules", "input", "max-rejected"], `${fmt(rules.input.maxRejected)} lets half the input or more be rejected`);
+  }
+  const mix2 = asObj(r.mix);
+  if (mix2) rules.mix = buildMix(mix2, ctx);
+  else if (ctx.languages.some((l) => l.target !== void 0)) {
+    sink.warning(["languages"], "targets are set but there is no `rules.mix`, so they are not judged", { part: "key" });
+  }
+  const script = asObj(r.script);
+  if (script) {
+    rules.script = {
+      minPurity: asNum(script["min-purity"]) ?? DEFAULT_MIN_PURITY,
+      maxImpureDocs: asNum(script["max-impure-docs"]) ?? DEFAULT_MAX_IMPURE_DOCS
+    };
+  }
+  const encoding = asObj(r.encoding);
+  if (encoding) {
+    const forbid = Array.isArray(encoding.forbid) ? encoding.forbid.filter((k) => ANOMALY_KINDS2.includes(k)) : [...DEFAULT_FORBID];
+    if (Array.isArray(encoding.forbid) && encoding.forbid.length === 0) {
+      sink.warning(["rules", "encoding", "forbid"], "forbids nothing, so the encoding rule can never fail");
+    }
+    rules.encoding = { maxAnomalousDocs: asNum(encoding["max-anomalous-docs"]) ?? 0, forbid: [...new Set(forbid)] };
+  }
+  const fertility = asObj(r.fertility);
+  if (fertility) rules.fertility = buildFertility(fertility, ctx);
+  const dup = asObj(r.duplicates);
+  if (dup) {
+    const near = asObj(dup.near) ?? {};
+    const nearMax = asNum(near.max);
+    const rule = {
+      ...asNum(dup["max-exact"]) !== void 0 ? { maxExact: asNum(dup["max-exact"]) } : {},
+      near: {
+        threshold: asNum(near.threshold) ?? DEFAULT_NEAR.threshold,
+        ...nearMax !== void 0 ? { max: nearMax } : {},
+        shingle: asNum(near.shingle) ?? DEFAULT_NEAR.shingle,
+        hashes: asNum(near.hashes) ?? DEFAULT_NEAR.hashes
+      },
+      punctuation: dup.punctuation === "strip" ? "strip" : "keep"
+    };
+    if (rule.maxExact === void 0 && rule.near.max === void 0) {
+      sink.warning(["rules", "duplicates"], "sets neither `max-exact` nor `near.max`, so it only reports", { part: "key" });
+    }
+    if (rule.near.threshold < LOOSE_NEAR_THRESHOLD) {
+      sink.warning(["rules", "duplicates", "near", "threshold"], `${fmt(rule.near.threshold)} counts documents that share little text as near duplicates`);
+    }
+    rules.duplicates = rule;
+  }
+  const cont = asObj(r.contamination);
+  if (cont) {
+    const rule = {
+      eval: globList(cont.eval, ["rules", "contamination", "eval"], sink),
+      ngram: asNum(cont.ngram) ?? DEFAULT_NGRAM,
+      maxDocs: asNum(cont["max-docs"]) ?? 0
+    };
+    if (rule.ngram < MIN_SENSIBLE_NGRAM) {
+      sink.warning(["rules", "contamination", "ngram"], `${rule.ngram}-grams match common phrases, not only copied evaluation text; ${DEFAULT_NGRAM} is the usual length`);
+    }
+    rules.contamination = rule;
+  }
+  return rules;
+}
+function buildMix(mix2, ctx) {
+  const { sink, languages } = ctx;
+  const writtenUnit = asStr(mix2.unit);
+  const unit = writtenUnit !== void 0 && MIX_UNITS.includes(writtenUnit) ? writtenUnit : ctx.tokenizerSet ? "tokens" : "words";
+  if (unit === "tokens" && !ctx.tokenizerSet) {
+    sink.problem(["rules", "mix", "unit"], "counting the mix in `tokens` needs a `tokenizer`", {
+      suggestion: "set `tokenizer: { builtin: o200k_base }` (or your own), or use `unit: words`"
+    });
+  }
+  const tolerance = asNum(mix2.tolerance) ?? DEFAULT_TOLERANCE;
+  const maxOther = asNum(mix2["max-other"]);
+  const maxUnd = asNum(mix2["max-und"]);
+  const rule = {
+    unit,
+    tolerance,
+    ...maxOther !== void 0 ? { maxOther } : {},
+    ...maxUnd !== void 0 ? { maxUndetermined: maxUnd } : {}
+  };
+  const withTargets = languages.filter((l) => l.target !== void 0);
+  if (withTargets.length === 0 && languages.length > 0) {
+    sink.problem(["rules", "mix"], "the mix rule needs a `target` on at least one language under `languages`", { part: "key" });
+  }
+  if (tolerance >= LOOSE_TOLERANCE) {
+    sink.warning(["rules", "mix", "tolerance"], `${fmt(tolerance)} lets almost any share pass`);
+  }
+  if (withTargets.length > 0 && withTargets.length === languages.length && maxOther !== void 0) {
+    const sum = withTargets.reduce((s, l) => s + l.target, 0);
+    const room = sum + tolerance * withTargets.length + maxOther + (maxUnd ?? 0);
+    if (room < 1 - SUM_EPSILON) {
+      sink.warning(
+        ["rules", "mix", "max-other"],
+        `targets sum to ${fmt(sum)}: with tolerance ${fmt(tolerance)} per language and max-other ${fmt(maxOther)}${maxUnd !== void 0 ? ` and max-und ${fmt(maxUnd)}` : ""} only ${fmt(room)} of the corpus can be accounted for` + (maxUnd !== void 0 ? ", so the mix rule cannot pass" : `; the other ${fmt(1 - room)} would have to be \`und\``)
+      );
+    }
+  }
+  return rule;
+}
+function perLanguage(v, at2, ctx, read) {
+  const out = {};
+  const keys = ctx.languages.map((l) => l.key);
+  for (const [key, x] of Object.entries(asObj(v) ?? {})) {
+    if (!keys.includes(key)) {
+      const r = resolveLanguageKey(key);
+      const same = r.ok ? ctx.languages.find((l) => l.iso6393 === r.iso6393 || l.covers.includes(r.iso6393)) : void 0;
+      const near = same?.key ?? nearest(key, keys);
+      ctx.sink.problem([...at2, key], `\`${key}\` is not a language of this policy (keys under \`languages\`: ${keys.map((k) => `\`${k}\``).join(", ") || "none"})`, {
+        part: "key",
+        ...near ? { suggestion: didYouMean(near) } : {}
+      });
+      continue;
+    }
+    const value = read(x, key);
+    if (value !== void 0) out[key] = value;
+  }
+  return out;
+}
+function buildFertility(f, ctx) {
+  const at2 = ["rules", "fertility"];
+  if (!ctx.tokenizerSet) {
+    ctx.sink.problem(at2, "fertility is measured with the model's tokenizer, and no `tokenizer` is set", {
+      part: "key",
+      suggestion: "set `tokenizer: { builtin: o200k_base }` or `tokenizer: { file: ... }`"
+    });
+  }
+  const max = perLanguage(f.max, [...at2, "max"], ctx, (x) => asNum(x));
+  for (const [key, m] of Object.entries(max)) {
+    if (m < 1) {
+      ctx.sink.warning([...at2, "max", key], `${fmt(m)} tokens per word: every word is at least one token unless the tokenizer has multi-word tokens, so this likely always fails`);
+    }
+  }
+  const maxContinued = perLanguage(f["max-continued"], [...at2, "max-continued"], ctx, (x) => asNum(x));
+  const wordLists = perLanguage(f["word-lists"], [...at2, "word-lists"], ctx, (x, key) => {
+    const file = asStr(x);
+    if (file === void 0) return void 0;
+    const absPath = path.resolve(ctx.root, file);
+    ctx.files.push({ path: [...at2, "word-lists", key], what: "word list", file, absPath });
+    return { file, absPath };
+  });
+  const maxRegression = asNum(f["max-regression"]);
+  if (Object.keys(max).length === 0 && Object.keys(maxContinued).length === 0 && maxRegression === void 0) {
+    ctx.sink.warning(at2, "sets no limit (`max`, `max-continued` or `max-regression`), so it only reports", { part: "key" });
+  }
+  return { max, ...maxRegression !== void 0 ? { maxRegression } : {}, maxContinued, wordLists };
+}
+function buildSeverity(s, rules, sinkTo) {
+  const out = {};
+  for (const [name, level] of Object.entries(s)) {
+    if (!RULE_NAMES.includes(name) || level !== "error" && level !== "warn") continue;
+    out[name] = level;
+    if (rules[name] === void 0) {
+      sinkTo.warning(["severity", name], `sets a severity for \`${name}\`, which is not under \`rules\``, { part: "key" });
+    }
+  }
+  return out;
+}
+
+// src/policy/parse.ts
+var POLICY_VERSION = 1;
+function sorted(list) {
+  const seen = /* @__PURE__ */ new Set();
+  return list.filter((p) => {
+    const id = `${p.line}:${p.column}:${p.path}:${p.message}`;
+    if (seen.has(id)) return false;
+    seen.add(id);
+    return true;
+  }).sort((a, b) => (a.line ?? 0) - (b.line ?? 0) || (a.column ?? 0) - (b.column ?? 0));
+}
+function parsePolicyDetailed(text, file, opts = {}) {
+  const doc = readPolicyYaml(text);
+  const problems = [];
+  const warnings = [];
+  const make = (at2, position, message, suggestion) => ({
+    file,
+    line: position.line,
+    column: position.column,
+    path: formatPath(at2),
+    message,
+    ...suggestion ? { suggestion } : {}
+  });
+  const failed = () => ({
+    result: { ok: false, problems: sorted(problems), warnings: sorted(warnings) },
+    files: [],
+    locate: doc.locate
+  });
+  for (const w of doc.warnings) warnings.push(make(w.path, w.position, w.message));
+  for (const e of doc.errors) problems.push(make(e.path, e.position, `YAML syntax: ${e.message}`));
+  if (problems.length > 0) return failed();
+  for (const d of doc.duplicates) problems.push(make(d.path, d.position, d.message));
+  const value = doc.value;
+  if (value === null || value === void 0) {
+    problems.push(make([], { line: 1, column: 1 }, "the policy is empty; it needs at least `version`, `corpus` and `languages`"));
+    return failed();
+  }
+  if (typeof value !== "object" || Array.isArray(value)) {
+    problems.push(make([], doc.locate([]), `the policy must be a mapping of keys (version, corpus, languages, ...), not ${kindOf(value)}`));
+    return failed();
+  }
+  const version = value.version;
+  if (typeof version === "number" && Number.isInteger(version) && version > POLICY_VERSION) {
+    problems.push(
+      make(["version"], doc.locate(["version"]), `this policy is written for a newer sluice (policy version ${version}); this sluice reads version ${POLICY_VERSION}`, "upgrade sluice")
+    );
+    return failed();
+  }
+  for (const issue of checkAgainstSchema(value)) {
+    problems.push(make(issue.path, doc.locate(issue.path, issue.part), issue.message, issue.suggestion));
+  }
+  const absFile = path2.resolve(file);
+  const built = buildPolicy(
+    value,
+    {
+      file: absFile,
+      ...opts.root !== void 0 ? { root: path2.resolve(opts.root) } : {},
+      ...opts.defaultRoot !== void 0 ? { defaultRoot: path2.resolve(opts.defaultRoot) } : {}
+    },
+    {
+      problem: (at2, message, o = {}) => problems.push(make(at2, doc.locate(at2, o.part ?? "value"), message, o.suggestion)),
+      warning: (at2, message, o = {}) => warnings.push(make(at2, doc.locate(at2, o.part ?? "value"), message, o.suggestion))
+    }
+  );
+  if (problems.length > 0) return failed();
+  const policy = built.policy;
+  return {
+    result: { ok: true, policy, warnings: sorted(warnings) },
+    files: built.files.map((f) => ({ ...f, position: doc.locate(f.path, "value") })),
+    locate: doc.locate
+  };
+}
+
+// src/policy/load.ts
+async function nearestGitRoot(dir) {
+  let at2 = path3.resolve(dir);
+  for (; ; ) {
+    try {
+      await stat(path3.join(at2, ".git"));
+      return at2;
+    } catch {
+    }
+    const up = path3.dirname(at2);
+    if (up === at2) return void 0;
+    at2 = up;
+  }
+}
+async function kindOfPath(p) {
+  try {
+    const s = await stat(p);
+    return s.isDirectory() ? "dir" : "file";
+  } catch (e) {
+    const code = e.code;
+    return { missing: code === "ENOENT" ? "does not exist" : `cannot be read (${code ?? e.message})` };
+  }
+}
+async function loadPolicy(file, overrides = {}) {
+  const absFile = path3.resolve(file);
+  let text;
+  try {
+    text = await readFile(absFile, "utf8");
+  } catch (e) {
+    const code = e.code;
+    const why = code === "ENOENT" ? "no such file" : code === "EISDIR" ? "it is a directory" : e.message;
+    return { ok: false, problems: [{ file, path: "", message: `cannot read the policy file: ${why}` }], warnings: [] };
+  }
+  const policyDir = path3.dirname(absFile);
+  const defaultRoot = await nearestGitRoot(policyDir) ?? policyDir;
+  const parsed = parsePolicyDetailed(text, file, { ...overrides, defaultRoot });
+  if (!parsed.result.ok) return parsed.result;
+  const { policy, warnings } = parsed.result;
+  const problems = [];
+  const rootKind = await kindOfPath(policy.root);
+  if (rootKind !== "dir") {
+    const why = rootKind === "file" ? "is a file, not a directory" : rootKind.missing;
+    if (overrides.root !== void 0) {
+      problems.push({ file, path: "root", message: `the root given in place of the policy's (${policy.root}) ${why}` });
+    } else {
+      const at2 = parsed.locate(["root"], "value");
+      problems.push({ file, line: at2.line, column: at2.column, path: "root", message: `the root directory ${policy.root} ${why}` });
+    }
+  }
+  for (const ref of parsed.files) {
+    const kind = await kindOfPath(ref.absPath);
+    if (kind === "file") continue;
+    const why = kind === "dir" ? "is a directory, not a file" : kind.missing;
+    problems.push({
+      file,
+      line: ref.position.line,
+      column: ref.position.column,
+      path: formatPath(ref.path),
+      message: `${ref.what} \`${ref.file}\` ${why} (looked for ${ref.absPath}; paths are relative to the root)`
+    });
+  }
+  if (problems.length > 0) return { ok: false, problems, warnings };
+  return parsed.result;
+}
+
+// src/read/discover.ts
+import { realpath, stat as stat2 } from "node:fs/promises";
+import { readdir } from "node:fs";
+import path4 from "node:path";
+import fg from "fast-glob";
+
+// src/read/classify.ts
+import iconv2 from "iconv-lite";
+import picomatch from "picomatch";
+var DEFAULT_ENCODING = "utf-8";
+var SUBSET_PLACEHOLDER = "{subset}";
+var SUBSET_SENTINEL = "SLUICESUBSETSENTINEL";
+var FORMAT_BY_EXTENSION = { jsonl: "jsonl", ndjson: "jsonl", txt: "txt" };
+var COMPRESSION_BY_EXTENSION = { gz: "gzip", zst: "zstd", zstd: "zstd" };
+function shardKindOf(filePath) {
+  const name = filePath.slice(filePath.lastIndexOf("/") + 1).toLowerCase();
+  const parts = name.split(".");
+  const last = parts.length > 1 ? parts[parts.length - 1] : "";
+  const compression = COMPRESSION_BY_EXTENSION[last];
+  if (compression !== void 0) {
+    const inner = parts.length > 2 ? parts[parts.length - 2] : "";
+    const format2 = FORMAT_BY_EXTENSION[inner];
+    return format2 !== void 0 ? { format: format2, compression } : { unsupported: inner === "" ? `.${last}` : `.${inner}.${last}` };
+  }
+  const format = FORMAT_BY_EXTENSION[last];
+  return format !== void 0 ? { format, compression: "none" } : { unsupported: last === "" ? "" : `.${last}` };
+}
+function isLineSplittableEncoding(encoding) {
+  if (!iconv2.encodingExists(encoding)) return false;
+  const probe = iconv2.encode("a\n{", encoding, { addBOM: false });
+  return probe.length === 3 && probe[0] === 97 && probe[1] === 10 && probe[2] === 123;
+}
+function subsetExtractor(pattern) {
+  const count3 = pattern.split(SUBSET_PLACEHOLDER).length - 1;
+  if (count3 !== 1) {
+    throw new Error(`corpus.subset: pattern \`${pattern}\` must contain \`${SUBSET_PLACEHOLDER}\` exactly once (found ${count3})`);
+  }
+  const source = picomatch.makeRe(pattern.replace(SUBSET_PLACEHOLDER, SUBSET_SENTINEL), { dot: true }).source;
+  if (source.split(SUBSET_SENTINEL).length !== 2) {
+    throw new Error(`corpus.subset: pattern \`${pattern}\` could not be compiled around \`${SUBSET_PLACEHOLDER}\``);
+  }
+  const re = new RegExp(source.replace(SUBSET_SENTINEL, "(?<subset>[^/]+)"));
+  return (filePath) => re.exec(filePath)?.groups?.["subset"];
+}
+function pathClassifier(corpus) {
+  const overrides = corpus.encodings.map(({ glob, encoding }) => {
+    if (!iconv2.encodingExists(encoding)) {
+      throw new Error(`corpus.encodings: glob \`${glob}\` names encoding \`${encoding}\`, which iconv-lite does not know`);
+    }
+    if (!isLineSplittableEncoding(encoding)) {
+      throw new Error(
+        `corpus.encodings: glob \`${glob}\` names encoding \`${encoding}\`, which does not keep ASCII bytes as they are; sluice splits lines at byte 0x0A, so convert such shards to UTF-8`
+      );
+    }
+    return { match: picomatch(glob, { dot: true }), encoding };
+  });
+  const subsetOf = corpus.subset !== void 0 ? subsetExtractor(corpus.subset) : void 0;
+  return (filePath) => {
+    const kind = shardKindOf(filePath);
+    if ("unsupported" in kind) {
+      const ext = kind.unsupported === "" ? "no extension" : `extension \`${kind.unsupported}\``;
+      return { supported: false, detail: `${ext}; sluice reads .jsonl, .ndjson and .txt, optionally compressed as .gz, .zst or .zstd` };
+    }
+    const encoding = overrides.find((o) => o.match(filePath))?.encoding ?? DEFAULT_ENCODING;
+    const subset = subsetOf?.(filePath);
+    return subset !== void 0 ? { supported: true, ...kind, encoding, subset } : { supported: true, ...kind, encoding };
+  };
+}
+
+// src/read/discover.ts
+var RESOLVE_CONCURRENCY = 64;
+async function discoverShards(root, corpus) {
+  const classify = pathClassifier(corpus);
+  for (const pattern of [...corpus.include, ...corpus.exclude]) checkPatternStaysInside(pattern);
+  const absRoot = path4.resolve(root);
+  const realRoot = await readableRoot(absRoot);
+  const skipped = [];
+  const lister = directoryLister(absRoot, realRoot, skipped);
+  let entries;
+  try {
+    entries = await fg(corpus.include, {
+      cwd: absRoot,
+      ignore: corpus.exclude,
+      // dot stays false (fast-glob's default): hidden files and directories (.git, .cache) match only when a glob names them.
+      onlyFiles: false,
+      // keep FIFOs and broken links, to report them rather than drop them silently
+      markDirectories: true,
+      followSymbolicLinks: true,
+      fs: { readdir: lister }
+    });
+  } catch (error) {
+    throw new Error(`cannot list the corpus under ${absRoot}: ${messageOf(error)}`);
+  }
+  entries.sort(byCodeUnits);
+  const found = [];
+  await forEachLimited(entries, RESOLVE_CONCURRENCY, async (rel) => {
+    if (rel.endsWith("/")) {
+      const dir = rel.slice(0, -1);
+      if (!("unsupported" in shardKindOf(dir))) skipped.push({ path: dir, reason: "not-a-file", detail: "a directory, named like a shard" });
+      return;
+    }
+    const abs = path4.join(absRoot, rel);
+    let real;
+    try {
+      real = await realpath(abs);
+    } catch (error) {
+      skipped.push({ path: rel, reason: "unreadable", detail: `cannot resolve (a broken link?): ${messageOf(error)}` });
+      return;
+    }
+    if (!isInside(realRoot, real)) {
+      skipped.push({ path: rel, reason: "link-outside-root", detail: `resolves to ${real}, outside the root ${realRoot}` });
+      return;
+    }
+    let stats;
+    try {
+      stats = await stat2(real);
+    } catch (error) {
+      skipped.push({ path: rel, reason: "unreadable", detail: messageOf(error) });
+      return;
+    }
+    if (!stats.isFile()) {
+      skipped.push({ path: rel, reason: "not-a-file", detail: `not a regular file (${fileType(stats)})` });
+      return;
+    }
+    found.push({ rel, real, stats, direct: toPosix(path4.relative(realRoot, real)) === rel });
+  });
+  const shards = [];
+  for (const file of chooseOnePathPerFile(found, skipped)) {
+    const kind = classify(file.rel);
+    if (!kind.supported) {
+      skipped.push({ path: file.rel, reason: "unsupported-format", detail: kind.detail });
+      continue;
+    }
+    const shard = {
+      path: file.rel,
+      absPath: file.real,
+      format: kind.format,
+      compression: kind.compression,
+      encoding: kind.encoding,
+      sizeBytes: file.stats.size
+    };
+    if (kind.subset !== void 0) shard.subset = kind.subset;
+    shards.push(shard);
+  }
+  shards.sort((a, b) => byCodeUnits(a.path, b.path));
+  skipped.sort((a, b) => byCodeUnits(a.path, b.path) || byCodeUnits(a.reason, b.reason));
+  return { shards, skipped };
+}
+function chooseOnePathPerFile(found, skipped) {
+  const byFile = /* @__PURE__ */ new Map();
+  for (const file of found) {
+    const key = `${file.stats.dev}:${file.stats.ino}`;
+    const group = byFile.get(key);
+    if (group === void 0) byFile.set(key, [file]);
+    else group.push(file);
+  }
+  const kept = [];
+  for (const group of byFile.values()) {
+    group.sort((a, b) => Number(b.direct) - Number(a.direct) || byCodeUnits(a.rel, b.rel));
+    const [first, ...others] = group;
+    kept.push(first);
+    for (const other of others) skipped.push({ path: other.rel, reason: "same-file", detail: `the same file as ${first.rel}, which is read` });
+  }
+  return kept;
+}
+function directoryLister(absRoot, realRoot, skipped) {
+  const realOf = /* @__PURE__ */ new Map();
+  const resolve = (dir) => {
+    let real = realOf.get(dir);
+    if (real === void 0) {
+      real = realpath(dir);
+      realOf.set(dir, real);
+    }
+    return real;
+  };
+  const list = async (dir) => {
+    const rel = toPosix(path4.relative(absRoot, dir));
+    let real;
+    try {
+      real = await resolve(dir);
+    } catch (error) {
+      skipped.push({ path: rel, reason: "unreadable", detail: `cannot resolve the directory: ${messageOf(error)}` });
+      return "skip";
+    }
+    if (!isInside(realRoot, real)) {
+      skipped.push({ path: rel, reason: "link-outside-root", detail: `directory resolves to ${real}, outside the root ${realRoot}; not followed` });
+      return "skip";
+    }
+    for (let up = path4.dirname(dir); isInside(absRoot, up) && up !== dir; up = path4.dirname(up)) {
+      if (await resolve(up).catch(() => "") === real) {
+        skipped.push({ path: rel, reason: "link-loop", detail: `links back to ${toPosix(path4.relative(absRoot, up)) || "."}, which the walk is inside; not followed` });
+        return "skip";
+      }
+      if (up === absRoot) break;
+    }
+    return "list";
+  };
+  const lister = (dir, optionsOrCallback, maybeCallback) => {
+    const callback = typeof optionsOrCallback === "function" ? optionsOrCallback : maybeCallback;
+    const options = typeof optionsOrCallback === "function" ? {} : optionsOrCallback;
+    list(dir).then(
+      (decision) => {
+        if (decision === "skip") return callback(null, []);
+        readdir(dir, options, (error, entries) => {
+          if (error === null) return callback(null, entries);
+          if (error.code !== "ENOENT") skipped.push({ path: toPosix(path4.relative(absRoot, dir)), reason: "unreadable", detail: `cannot list the directory: ${error.message}` });
+          callback(null, []);
+        });
+      },
+      (error) => callback(error, [])
+    );
+  };
+  return lister;
+}
+async function readableRoot(absRoot) {
+  let real;
+  let stats;
+  try {
+    real = await realpath(absRoot);
+    stats = await stat2(real);
+  } catch (error) {
+    throw new Error(`corpus root ${absRoot} cannot be read: ${messageOf(error)}`);
+  }
+  if (!stats.isDirectory()) throw new Error(`corpus root ${absRoot} is not a directory`);
+  await new Promise(
+    (resolve, reject) => readdir(real, (error) => error === null ? resolve() : reject(new Error(`corpus root ${absRoot} cannot be listed: ${error.message}`)))
+  );
+  return real;
+}
+function checkPatternStaysInside(pattern) {
+  const body = pattern.startsWith("!") ? pattern.slice(1) : pattern;
+  if (path4.posix.isAbsolute(body) || path4.win32.isAbsolute(body) || body.split("/").includes("..")) {
+    throw new Error(`corpus glob \`${pattern}\` leaves the root; globs are relative to the root and may not use \`..\` or absolute paths`);
+  }
+}
+function isInside(root, candidate) {
+  return candidate === root || candidate.startsWith(root.endsWith(path4.sep) ? root : root + path4.sep);
+}
+function fileType(stats) {
+  if (stats.isDirectory()) return "a directory";
+  if (stats.isFIFO()) return "a FIFO";
+  if (stats.isSocket()) return "a socket";
+  if (stats.isCharacterDevice() || stats.isBlockDevice()) return "a device";
+  return "not a regular file";
+}
+function toPosix(p) {
+  return p.split(path4.sep).join("/");
+}
+function byCodeUnits(a, b) {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+async function forEachLimited(items, limit, task) {
+  let next = 0;
+  const worker = async () => {
+    while (next < items.length) await task(items[next++]);
+  };
+  await Promise.all(Array.from({ length: Math.min(limit, items.length) }, worker));
+}
+function messageOf(error) {
+  return error instanceof Error ? error.message : String(error);
+}
+
+// src/read/shard.ts
+import { isUtf8 as isUtf82 } from "node:buffer";
+
+// src/read/decode.ts
+import { isUtf8 } from "node:buffer";
+import iconv3 from "iconv-lite";
+function firstInvalidUtf8(bytes2) {
+  const n = bytes2.length;
+  let i = 0;
+  while (i < n) {
+    const b = bytes2[i];
+    if (b < 128) {
+      i++;
+      continue;
+    }
+    let lo = 128;
+    let hi = 191;
+    let need;
+    if (b >= 194 && b <= 223) need = 1;
+    else if (b === 224) need = 2, lo = 160;
+    else if (b === 237) need = 2, hi = 159;
+    else if (b >= 225 && b <= 239) need = 2;
+    else if (b === 240) need = 3, lo = 144;
+    else if (b === 244) need = 3, hi = 143;
+    else if (b >= 241 && b <= 243) need = 3;
+    else return i;
+    if (i + need >= n) return i;
+    const b1 = bytes2[i + 1];
+    if (b1 < lo || b1 > hi) return i;
+    for (let k = 2; k <= need; k++) {
+      const bk = bytes2[i + k];
+      if (bk < 128 || bk > 191) return i;
+    }
+    i += need + 1;
+  }
+  return -1;
+}
+function lineDecoder(encoding) {
+  return isUtf8Name(encoding) ? decodeUtf8Line : legacyLineDecoder(encoding);
+}
+function isUtf8Name(encoding) {
+  return encoding.toLowerCase().replace(/[^a-z0-9]/g, "") === "utf8";
+}
+function decodeUtf8Line(buf, start, end, clean3) {
+  if (clean3) return buf.toString("utf8", start, end);
+  const line = buf.subarray(start, end);
+  const nul = line.indexOf(0);
+  if (nul !== -1) return { reason: "binary", at: nul };
+  if (!isUtf8(line)) return { reason: "invalid-encoding", at: firstInvalidUtf8(line) };
+  return line.toString("utf8");
+}
+function legacyLineDecoder(encoding) {
+  return (buf, start, end, clean3) => {
+    const line = buf.subarray(start, end);
+    if (!clean3) {
+      const nul = line.indexOf(0);
+      if (nul !== -1) return { reason: "binary", at: nul };
+    }
+    const text = iconv3.decode(line, encoding, { stripBOM: false });
+    if (!text.includes("\uFFFD")) return text;
+    return { reason: "invalid-encoding", at: firstUndecodableByte(line, encoding) };
+  };
+}
+function firstUndecodableByte(line, encoding) {
+  const decoder = iconv3.getDecoder(encoding, { stripBOM: false });
+  for (let i = 0; i < line.length; i++) {
+    if (decoder.write(line.subarray(i, i + 1)).includes("\uFFFD")) return i;
+  }
+  return Math.max(0, line.length - 1);
+}
+
+// src/read/lines.ts
+var NEWLINE = 10;
+var CARRIAGE_RETURN = 13;
+var LineSplitter = class {
+  constructor(sink, options) {
+    this.sink = sink;
+    this.options = options;
+    this.max = options.maxLineBytes;
+  }
+  sink;
+  options;
+  max;
+  /** Pieces of the unfinished line carried over from earlier chunks (copies, so the producer may reuse its buffers). */
+  parts = [];
+  carried = 0;
+  /** Bytes of the too-long line being skipped, or -1 when not skipping. */
+  skipped = -1;
+  /** Absolute offset where the carried or skipped line starts. */
+  lineOffset = 0;
+  /** Absolute offset of the next chunk's first byte. */
+  offset = 0;
+  /** Returns the bytes fed so far (the decompressed size). */
+  get bytes() {
+    return this.offset;
+  }
+  /** Returns the bytes of an unfinished line held or skipped (what a broken stream cuts off). */
+  get pendingBytes() {
+    return this.skipped >= 0 ? this.skipped : this.carried;
+  }
+  /** Splits one chunk, handing every line it completes to the sink. */
+  write(chunk) {
+    const n = chunk.length;
+    if (n === 0) return;
+    let pos = 0;
+    if (this.skipped >= 0) {
+      const nl = chunk.indexOf(NEWLINE);
+      if (nl === -1) {
+        this.skipped += n;
+        this.offset += n;
+        return;
+      }
+      this.sink.tooLong(this.skipped + nl, this.lineOffset);
+      this.skipped = -1;
+      pos = nl + 1;
+    } else if (this.carried > 0) {
+      const nl = chunk.indexOf(NEWLINE);
+      if (nl === -1) {
+        if (this.carried + n > this.max) this.startSkipping(this.carried + n);
+        else this.carry(Buffer.from(chunk));
+        this.offset += n;
+        return;
+      }
+      const length = this.carried + nl;
+      if (length > this.max) {
+        this.sink.tooLong(length, this.lineOffset);
+      } else {
+        this.parts.push(chunk.subarray(0, nl));
+        const line = Buffer.concat(this.parts, length);
+        this.emit(line, 0, length, false, this.lineOffset);
+      }
+      this.parts = [];
+      this.carried = 0;
+      pos = nl + 1;
+    }
+    const last = chunk.lastIndexOf(NEWLINE);
+    if (last >= pos) {
+      const clean3 = this.options.blockIsClean(chunk.subarray(pos, last));
+      const base = this.offset;
+      let start = pos;
+      while (start <= last) {
+        const nl = chunk.indexOf(NEWLINE, start);
+        if (nl - start > this.max) this.sink.tooLong(nl - start, base + start);
+        else this.emit(chunk, start, nl, clean3, base + start);
+        start = nl + 1;
+      }
+      pos = last + 1;
+    }
+    if (pos < n) {
+      this.lineOffset = this.offset + pos;
+      if (n - pos > this.max) this.startSkipping(n - pos);
+      else this.carry(Buffer.from(chunk.subarray(pos)));
+    }
+    this.offset += n;
+  }
+  /** Hands on the final line when the stream did not end with a newline. */
+  end() {
+    if (this.skipped >= 0) {
+      this.sink.tooLong(this.skipped, this.lineOffset);
+      this.skipped = -1;
+    } else if (this.carried > 0) {
+      const line = Buffer.concat(this.parts, this.carried);
+      this.parts = [];
+      this.carried = 0;
+      this.emit(line, 0, line.length, false, this.lineOffset);
+    }
+  }
+  carry(piece) {
+    this.parts.push(piece);
+    this.carried += piece.length;
+  }
+  startSkipping(bytes2) {
+    this.parts = [];
+    this.carried = 0;
+    this.skipped = bytes2;
+  }
+  emit(buf, start, end, clean3, offset) {
+    if (end > start && buf[end - 1] === CARRIAGE_RETURN) end--;
+    if (offset === 0 && this.options.stripBom && end - start >= 3 && buf[start] === 239 && buf[start + 1] === 187 && buf[start + 2] === 191) {
+      start += 3;
+    }
+    this.sink.line(buf, start, end, clean3, offset);
+  }
+};
+
+// src/read/records.ts
+var MAX_PARSE_MESSAGE_CHARS = 200;
+function dotPathReader(dotPath) {
+  const keys = dotPath.split(".");
+  if (keys.length === 1) {
+    const key = keys[0];
+    return (record) => Object.hasOwn(record, key) ? record[key] : void 0;
+  }
+  return (record) => {
+    let value = record;
+    for (const key of keys) {
+      if (value === null || typeof value !== "object" || !Object.hasOwn(value, key)) return void 0;
+      value = value[key];
+    }
+    return value;
+  };
+}
+function kindOf2(value) {
+  if (value === null) return "null";
+  if (Array.isArray(value)) return "an array";
+  const type = typeof value;
+  return type === "object" ? "an object" : `a ${type}`;
+}
+function recordParser(textField, declaredLanguageField) {
+  const textOf = dotPathReader(textField);
+  const languageOf = declaredLanguageField !== void 0 ? dotPathReader(declaredLanguageField) : void 0;
+  return (line) => {
+    let record;
+    try {
+      record = JSON.parse(line);
+    } catch (error) {
+      const message = error instanceof Error ? error.message : String(error);
+      return { reason: "invalid-json", detail: message.length > MAX_PARSE_MESSAGE_CHARS ? `${message.slice(0, MAX_PARSE_MESSAGE_CHARS)}\u2026` : message };
+    }
+    if (record === null || typeof record !== "object" || Array.isArray(record)) {
+      return { reason: "not-an-object", detail: `the line parses to ${kindOf2(record)}, not an object` };
+    }
+    const text = textOf(record);
+    if (text === void 0) return { reason: "missing-text", detail: `no value at \`${textField}\`` };
+    if (typeof text !== "string") return { reason: "non-string-text", detail: `\`${textField}\` is ${kindOf2(text)}, not a string` };
+    const language = languageOf?.(record);
+    return { text, declaredLanguage: typeof language === "string" ? language : void 0 };
+  };
+}
+
+// src/read/source.ts
+import { createReadStream } from "node:fs";
+import { pipeline } from "node:stream";
+import { createGunzip } from "node:zlib";
+import { Decompress } from "fzstd";
+var READ_CHUNK_BYTES = 256 * 1024;
+var GUNZIP_CHUNK_BYTES = 128 * 1024;
+async function pumpShard(ref, write) {
+  let source;
+  try {
+    source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
+  } catch (error) {
+    return { compressedBytes: 0, error: `cannot open: ${messageOf2(error)}` };
+  }
+  switch (ref.compression) {
+    case "none":
+      return pumpPlain(source, write);
+    case "gzip":
+      return pumpGzip(source, write);
+    case "zstd":
+      return pumpZstd(source, write);
+  }
+}
+async function pumpPlain(source, write) {
+  let compressedBytes = 0;
+  const error = await drain(source, (chunk) => {
+    compressedBytes += chunk.length;
+    write(chunk);
+  });
+  return error === void 0 ? { compressedBytes } : { compressedBytes, error: `read failed: ${error}` };
+}
+async function pumpGzip(source, write) {
+  const gunzip = createGunzip({ chunkSize: GUNZIP_CHUNK_BYTES });
+  let readFailed = false;
+  source.once("error", () => readFailed = true);
+  pipeline(source, gunzip, () => {
+  });
+  const error = await drain(gunzip, write);
+  const compressedBytes = gunzip.bytesWritten;
+  if (error === void 0) return { compressedBytes };
+  return { compressedBytes, error: readFailed ? `read failed: ${error}` : `gzip: ${error}` };
+}
+async function pumpZstd(source, write) {
+  let compressedBytes = 0;
+  let consumerError;
+  const decompressor = new Decompress((data2) => {
+    if (data2.length === 0) return;
+    try {
+      write(Buffer.from(data2.buffer, data2.byteOffset, data2.byteLength));
+    } catch (error) {
+      consumerError = { error };
+      throw error;
+    }
+  });
+  const push = (chunk, final) => {
+    try {
+      decompressor.push(chunk, final);
+      return void 0;
+    } catch (error) {
+      if (consumerError !== void 0) throw consumerError.error;
+      return messageOf2(error);
+    }
+  };
+  let broken;
+  const readError = await drain(source, (chunk) => {
+    compressedBytes += chunk.length;
+    broken = push(chunk, false);
+    if (broken !== void 0) throw new StopSignal();
+  });
+  if (readError === void 0 && broken === void 0) broken = push(new Uint8Array(0), true);
+  if (readError !== void 0) return { compressedBytes, error: `read failed: ${readError}` };
+  return broken === void 0 ? { compressedBytes } : { compressedBytes, error: `zstd: ${broken}` };
+}
+var StopSignal = class extends Error {
+};
+async function drain(stream, body) {
+  const iterator = stream[Symbol.asyncIterator]();
+  for (; ; ) {
+    let step;
+    try {
+      step = await iterator.next();
+    } catch (error) {
+      return messageOf2(error);
+    }
+    if (step.done) return void 0;
+    try {
+      body(typeof step.value === "string" ? Buffer.from(step.value) : step.value);
+    } catch (error) {
+      stream.destroy();
+      if (error instanceof StopSignal) return void 0;
+      throw error;
+    }
+  }
+}
+function messageOf2(error) {
+  return error instanceof Error ? error.message : String(error);
+}
+
+// src/read/shard.ts
+var BLANK = /^\s*$/;
+var OPEN_BRACE = 123;
+function emptyAccount() {
+  return { lines: 0, docs: 0, docLines: 0, empty: 0, rejected: { count: 0, byReason: {}, samples: [] }, bytes: 0, compressedBytes: 0 };
+}
+async function readShard(ref, opts, onDocument) {
+  const account = emptyAccount();
+  const sink = ref.format === "jsonl" ? new JsonlSink(account, opts, onDocument, ref.encoding) : new TextSink(account, opts, onDocument, ref.encoding);
+  const utf8 = isUtf8Name(ref.encoding);
+  const splitter = new LineSplitter(sink, {
+    maxLineBytes: opts.maxLineBytes,
+    stripBom: utf8,
+    blockIsClean: utf8 ? (block) => block.indexOf(0) === -1 && isUtf82(block) : (block) => block.indexOf(0) === -1
+  });
+  const { compressedBytes, error } = await pumpShard(ref, (chunk) => splitter.write(chunk));
+  if (error === void 0) {
+    splitter.end();
+    sink.finish();
+  } else {
+    sink.finish();
+    const pending = splitter.pendingBytes;
+    account.broken = {
+      afterLine: account.lines,
+      message: pending > 0 ? `${error} (${pending} bytes of an unfinished line after line ${account.lines} not counted)` : error
+    };
+  }
+  account.bytes = splitter.bytes;
+  account.compressedBytes = compressedBytes;
+  return account;
+}
+var AccountingSink = class {
+  constructor(account, opts, onDocument, encoding) {
+    this.account = account;
+    this.opts = opts;
+    this.onDocument = onDocument;
+    this.encoding = encoding;
+    this.decode = lineDecoder(encoding);
+  }
+  account;
+  opts;
+  onDocument;
+  encoding;
+  decode;
+  /** Called once after the last line (also after a break). */
+  finish() {
+  }
+  tooLong(bytes2, _offset) {
+    const line = ++this.account.lines;
+    this.reject(line, "line-too-long", `line of ${bytes2} bytes is longer than maxLineBytes (${this.opts.maxLineBytes}); skipped unread`);
+  }
+  reject(line, reason, detail) {
+    const rejected = this.account.rejected;
+    rejected.count++;
+    rejected.byReason[reason] = (rejected.byReason[reason] ?? 0) + 1;
+    if (rejected.samples.length < this.opts.maxSamples) rejected.samples.push({ line, reason, detail });
+  }
+  rejectFault(line, fault, offset) {
+    const where2 = `byte ${fault.at} of the line (byte ${offset + fault.at} of the decompressed shard)`;
+    if (fault.reason === "binary") this.reject(line, "binary", `NUL byte at ${where2}: binary content, not text`);
+    else this.reject(line, "invalid-encoding", `not valid ${this.encoding} at ${where2}`);
+  }
+};
+var JsonlSink = class extends AccountingSink {
+  parse;
+  constructor(account, opts, onDocument, encoding) {
+    super(account, opts, onDocument, encoding);
+    this.parse = recordParser(opts.textField, opts.declaredLanguageField);
+  }
+  line(buf, start, end, clean3, offset) {
+    const line = ++this.account.lines;
+    const text = this.decode(buf, start, end, clean3);
+    if (typeof text !== "string") return this.rejectFault(line, text, offset);
+    if (text.length === 0 || text.charCodeAt(0) !== OPEN_BRACE && BLANK.test(text)) {
+      this.account.empty++;
+      return;
+    }
+    const record = this.parse(text);
+    if ("reason" in record) return this.reject(line, record.reason, record.detail);
+    this.account.docs++;
+    this.account.docLines++;
+    const doc = { line, lineEnd: line, text: record.text };
+    if (record.declaredLanguage !== void 0) doc.declaredLanguage = record.declaredLanguage;
+    this.onDocument(doc);
+  }
+};
+var TextSink = class extends AccountingSink {
+  paragraph = [];
+  paragraphBytes = 0;
+  paragraphStart = 0;
+  line(buf, start, end, clean3, offset) {
+    const line = ++this.account.lines;
+    const text = this.decode(buf, start, end, clean3);
+    if (typeof text !== "string") {
+      this.flush();
+      return this.rejectFault(line, text, offset);
+    }
+    if (text.length === 0 || BLANK.test(text)) {
+      this.flush();
+      this.account.empty++;
+      return;
+    }
+    const bytes2 = end - start;
+    if (this.paragraph.length > 0 && this.paragraphBytes + bytes2 > this.opts.maxLineBytes) this.flush();
+    if (this.paragraph.length === 0) this.paragraphStart = line;
+    this.paragraph.push(text);
+    this.paragraphBytes += bytes2 + 1;
+  }
+  tooLong(bytes2, offset) {
+    this.flush();
+    super.tooLong(bytes2, offset);
+  }
+  finish() {
+    this.flush();
+  }
+  flush() {
+    const count3 = this.paragraph.length;
+    if (count3 === 0) return;
+    const doc = { line: this.paragraphStart, lineEnd: this.paragraphStart + count3 - 1, text: this.paragraph.join("\n") };
+    this.paragraph = [];
+    this.paragraphBytes = 0;
+    this.account.docs++;
+    this.account.docLines += count3;
+    this.onDocument(doc);
+  }
+};
+
+// src/results/cache.ts
+import { createHash } from "node:crypto";
+import { mkdir, readFile as readFile2, rename, writeFile } from "node:fs/promises";
+import { join } from "node:path";
+function settingsIdOf(settings) {
+  return createHash("sha256").update(canonicalJson(settings)).digest("hex").slice(0, 16);
+}
+function canonicalJson(value) {
+  return JSON.stringify(value, (_key, v) => {
+    if (v && typeof v === "object" && !Array.isArray(v)) {
+      return Object.fromEntries(Object.entries(v).sort(([a], [b]) => a < b ? -1 : a > b ? 1 : 0));
+    }
+    return v;
+  });
+}
+var ResultCache = class {
+  constructor(dir) {
+    this.dir = dir;
+  }
+  dir;
+  hits = 0;
+  misses = 0;
+  file(contentId, settingsId) {
+    return join(this.dir, `${settingsId}-${contentId}.json`);
+  }
+  /** Returns the cached result for this content under these settings, or undefined. */
+  async get(contentId, settingsId, at2) {
+    try {
+      const r = JSON.parse(await readFile2(this.file(contentId, settingsId), "utf8"));
+      if (r.schema !== RESULT_SCHEMA || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at2.encoding || r.format !== at2.format) {
+        this.misses += 1;
+        return void 0;
+      }
+      this.hits += 1;
+      const moved = { ...r, path: at2.path };
+      if (at2.subset === void 0) delete moved.subset;
+      else moved.subset = at2.subset;
+      return moved;
+    } catch {
+      this.misses += 1;
+      return void 0;
+    }
+  }
+  /** Stores a result; broken shards are never cached, so they are read again next time. */
+  async put(result) {
+    if (result.read.broken) return;
+    await mkdir(this.dir, { recursive: true });
+    const target = this.file(result.contentId, result.settingsId);
+    const tmp = `${target}.${process.pid}.tmp`;
+    await writeFile(tmp, JSON.stringify(result));
+    await rename(tmp, target);
+  }
+};
+
+// src/results/scan.ts
+import { createHash as createHash2 } from "node:crypto";
+import { createReadStream as createReadStream2 } from "node:fs";
+import { PassThrough } from "node:stream";
+var READ_CHUNK_BYTES2 = 256 * 1024;
+async function contentIdOf(ref) {
+  const hash2 = createHash2("sha256");
+  const stream = ref.open?.() ?? createReadStream2(ref.absPath);
+  for await (const chunk of stream) hash2.update(chunk);
+  return hash2.digest("hex");
+}
+async function scanShard(ref, settings, analyzers) {
+  const started = performance.now();
+  const tally = new ShardTally(settings.languageKeys);
+  const dup = analyzers.duplicates?.();
+  const languageIndex = new Map(settings.languageKeys.map((k, i) => [k, i]));
+  const otherIndex = settings.languageKeys.length;
+  const contamination = analyzers.contamination ? { docs: 0, samples: [] } : void 0;
+  const hash2 = createHash2("sha256");
+  const tapped = {
+    ...ref,
+    open: () => {
+      const source = ref.open?.() ?? createReadStream2(ref.absPath, { highWaterMark: READ_CHUNK_BYTES2 });
+      const tap = new PassThrough();
+      source.on("data", (chunk) => hash2.update(chunk));
+      source.on("error", (err) => tap.destroy(err));
+      source.pipe(tap);
+      return tap;
+    }
+  };
+  let ordinal = 0;
+  let failure;
+  const account = await readShard(tapped, settings.read, (doc) => {
+    if (failure) return;
+    try {
+      const m = analyzers.measure(doc);
+      const tokens = analyzers.tokens?.(doc.text);
+      tally.add(doc.line, m, tokens);
+      dup?.add({ ordinal, line: doc.line, language: languageIndex.get(m.language) ?? otherIndex, text: doc.text });
+      if (contamination) {
+        const hit = analyzers.contamination(doc.text);
+        if (hit) {
+          contamination.docs += 1;
+          if (contamination.samples.length < SAMPLES_PER_KIND) {
+            contamination.samples.push({ line: doc.line, evalFile: hit.file, evalLine: hit.line });
+          }
+        }
+      }
+      ordinal += 1;
+    } catch (err) {
+      failure = { line: doc.line, message: `measuring failed at line ${doc.line}: ${err.message}` };
+    }
+  });
+  if (failure && !account.broken) account.broken = { afterLine: failure.line - 1, message: failure.message };
+  const result = {
+    schema: RESULT_SCHEMA,
+    path: ref.path,
+    format: ref.format,
+    compression: ref.compression,
+    encoding: ref.encoding,
+    sizeBytes: ref.sizeBytes,
+    contentId: hash2.digest("hex"),
+    settingsId: settings.settingsId,
+    read: account,
+    languages: tally.languages,
+    scripts: tally.scripts,
+    anomalyMasks: tally.anomalyMasks,
+    anomalyDocs: tally.anomalyDocs,
+    declared: tally.declared,
+    samples: { impure: tally.impure, anomalous: tally.anomalous, mismatch: tally.mismatch },
+    elapsedMs: Math.round(performance.now() - started)
+  };
+  if (ref.subset !== void 0) result.subset = ref.subset;
+  if (dup) result.duplicateIndex = Buffer.from(dup.finish()).toString("base64");
+  if (contamination) result.contamination = contamination;
+  return result;
+}
+
+// src/core/analyzers.ts
+import { relative as relative2 } from "node:path";
+
+// src/measure/encoding.ts
+import iconv4 from "iconv-lite";
+var MOJIBAKE_LEAD_FIRST = 194;
+var MOJIBAKE_LEAD_LAST = 244;
+var IMPLAUSIBLE_2_BYTE = [
+  [576, 767],
+  [1984, 2047]
+];
+var MULTIPLICATION_SIGN = 215;
+var LOST_BYTE = 256;
+var UNMAPPED = -1;
+function emptyAnomalyCounts() {
+  return {
+    "replacement-char": 0,
+    "control-chars": 0,
+    "bidi-controls": 0,
+    "zero-width": 0,
+    "private-use": 0,
+    mojibake: 0
+  };
+}
+function emptyMarkCounts() {
+  return { joiners: 0, directionMarks: 0 };
+}
+function anomalyOf(cp, atStart) {
+  if (cp < 32) return cp === 9 || cp === 10 || cp === 13 ? null : "control-chars";
+  if (cp < 127) return null;
+  if (cp <= 159) return "control-chars";
+  if (cp < 8203) return null;
+  if (cp === 8203 || cp === 8288) return "zero-width";
+  if (cp >= 8234 && cp <= 8238 || cp >= 8294 && cp <= 8297) return "bidi-controls";
+  if (cp >= 55296 && cp <= 57343) return "replacement-char";
+  if (cp >= 57344 && cp <= 63743) return "private-use";
+  if (cp === 65279) return atStart ? null : "zero-width";
+  if (cp === 65533) return "replacement-char";
+  if (cp >= 983040 && cp <= 1048573 || cp >= 1048576 && cp <= 1114109) return "private-use";
+  return null;
+}
+function markOf(cp) {
+  if (cp === 8204 || cp === 8205) return "joiners";
+  if (cp === 8206 || cp === 8207 || cp === 1564) return "directionMarks";
+  return null;
+}
+function needsCloserLook(cp) {
+  return anomalyOf(cp, false) !== null || markOf(cp) !== null || cp >= MOJIBAKE_LEAD_FIRST && cp <= MOJIBAKE_LEAD_LAST;
+}
+var byteMap;
+function bytesOfChars() {
+  if (byteMap) return byteMap;
+  const map = new Int16Array(65536).fill(UNMAPPED);
+  for (let b = 128; b <= 255; b++) map[b] = b;
+  const cp1252 = iconv4.decode(Buffer.from(Array.from({ length: 32 }, (_, k) => 128 + k)), "windows-1252");
+  for (let k = 0; k < cp1252.length; k++) {
+    const cp = cp1252.charCodeAt(k);
+    if (cp !== 65533) map[cp] = 128 + k;
+  }
+  map[65533] = LOST_BYTE;
+  byteMap = map;
+  return map;
+}
+var assigned = new RegExp("^\\p{Assigned}$", "u");
+var letter = new RegExp("^\\p{L}$", "u");
+var punctuationOrSpace = /^[\p{P}\p{Zs}]$/u;
+function isUpper(ch) {
+  return ch !== ch.toLowerCase() && ch === ch.toUpperCase();
+}
+function countsAlone(text, start, length, cp) {
+  if (length === 2) {
+    if (text.charCodeAt(start) === MULTIPLICATION_SIGN) return false;
+    if (start > 0 && isUpper(text[start - 1])) return false;
+    for (const [lo, hi] of IMPLAUSIBLE_2_BYTE) if (cp >= lo && cp <= hi) return false;
+    return assigned.test(String.fromCodePoint(cp));
+  }
+  let letters = 0;
+  let punctuation = 0;
+  for (let k = 1; k < length; k++) {
+    const ch = text[start + k];
+    if (letter.test(ch)) letters++;
+    else if (punctuationOrSpace.test(ch)) punctuation++;
+  }
+  if (letters === length - 1) return false;
+  if (punctuation === length - 1 && !letter.test(text[start + length] ?? " ")) return false;
+  return assigned.test(String.fromCodePoint(cp));
+}
+function countMojibake(text) {
+  const map = bytesOfChars();
+  const found = [];
+  const n = text.length;
+  for (let i = 0; i < n; i++) {
+    const lead = map[text.charCodeAt(i)];
+    if (lead < MOJIBAKE_LEAD_FIRST || lead > MOJIBAKE_LEAD_LAST) continue;
+    const length = lead < 224 ? 2 : lead < 240 ? 3 : 4;
+    if (i + length > n) continue;
+    const lo = lead === 224 ? 160 : lead === 240 ? 144 : 128;
+    const hi = lead === 237 ? 159 : lead === 244 ? 143 : 191;
+    let cp = lead & (length === 2 ? 31 : length === 3 ? 15 : 7);
+    let lossy = false;
+    let valid = true;
+    for (let k = 1; k < length; k++) {
+      const b = map[text.charCodeAt(i + k)];
+      const first = k === 1;
+      if (b === LOST_BYTE) {
+        if (first && lo > 157) {
+          valid = false;
+          break;
+        }
+        lossy = true;
+        cp = cp << 6;
+      } else if (b >= (first ? lo : 128) && b <= (first ? hi : 191)) {
+        cp = cp << 6 | b & 63;
+      } else {
+        valid = false;
+        break;
+      }
+    }
+    if (!valid) continue;
+    found.push({ start: i, end: i + length, alone: !lossy && countsAlone(text, i, length, cp) });
+    i += length - 1;
+  }
+  let count3 = 0;
+  for (let s = 0; s < found.length; s++) {
+    const seq = found[s];
+    const joined = found[s - 1]?.end === seq.start || found[s + 1]?.start === seq.end;
+    if (joined || seq.alone) count3++;
+  }
+  return count3;
+}
+
+// src/measure/language.ts
+import { parse } from "bcp-47";
+import { iso6393To1, iso6393To2B } from "iso-639-3";
+
+// src/measure/language-candidates.ts
+var MAJOR_LANGUAGES = {
+  // Latin: the most-used Latin-script languages with a franc profile.
+  Latin: [
+    "eng",
+    "spa",
+    "fra",
+    "deu",
+    "por",
+    "ita",
+    "nld",
+    "pol",
+    "tur",
+    "vie",
+    "ind",
+    "zlm",
+    "ron",
+    "ces",
+    "hun",
+    "swe",
+    "fin",
+    "dan",
+    "hrv",
+    "slk",
+    "swh",
+    "tgl",
+    "cat"
+  ],
+  Devanagari: ["hin", "mar", "npi"],
+  Arabic: ["arb", "urd", "pes", "pbu"],
+  Cyrillic: ["rus", "ukr", "bel", "bul", "srp", "mkd", "kaz"],
+  Hebrew: ["heb", "ydd"],
+  Ethiopic: ["amh", "tir"],
+  Han: ["cmn", "jpn"],
+  // Scripts written by one major language: labelled directly, without a detector.
+  Hiragana: ["jpn"],
+  Katakana: ["jpn"],
+  Hangul: ["kor"],
+  Greek: ["ell"],
+  Thai: ["tha"],
+  Lao: ["lao"],
+  Khmer: ["khm"],
+  Myanmar: ["mya"],
+  Georgian: ["kat"],
+  Armenian: ["hye"],
+  Bengali: ["ben"],
+  Gurmukhi: ["pan"],
+  Gujarati: ["guj"],
+  Oriya: ["ory"],
+  Tamil: ["tam"],
+  Telugu: ["tel"],
+  Kannada: ["kan"],
+  Malayalam: ["mal"],
+  Sinhala: ["sin"],
+  Tibetan: ["bod"],
+  Thaana: ["div"],
+  Ol_Chiki: ["sat"],
+  Tifinagh: ["zgh"],
+  Yi: ["iii"],
+  Javanese: ["jav"]
+};
+
+// src/measure/language-franc.ts
+import { data } from "franc/data.js";
+
+// src/measure/data/franc-scripts.generated.ts
+var FRANC_EXPRESSIONS = ["cmn", "Latin", "Cyrillic", "Arabic", "ben", "Devanagari", "jpn", "jav", "kor", "tel", "tam", "guj", "kan", "mal", "Myanmar", "pan", "Ethiopic", "tha", "sin", "ell", "khm", "hye", "sat", "bod", "Hebrew", "kat", "lao", "zgh", "iii", "aii"];
+var FRANC_CLASS_MASKS = [0, 2, 524288, 4, 2097152, 16777216, 8, 536870912, 32, 16, 32768, 2048, 1024, 512, 4096, 8192, 262144, 131072, 67108864, 8388608, 16384, 33554432, 256, 65536, 1048576, 4194304, 134217728, 1, 64, 65, 268435456, 128];
+var FRANC_RANGE_STARTS = [
+  0,
+  65,
+  91,
+  97,
+  123,
+  170,
+  171,
+  186,
+  187,
+  192,
+  215,
+  216,
+  247,
+  248,
+  697,
+  736,
+  741,
+  880,
+  884,
+  885,
+  888,
+  890,
+  894,
+  895,
+  896,
+  900,
+  901,
+  902,
+  903,
+  904,
+  907,
+  908,
+  909,
+  910,
+  930,
+  931,
+  994,
+  1008,
+  1024,
+  1157,
+  1159,
+  1328,
+  1329,
+  1367,
+  1369,
+  1419,
+  1421,
+  1424,
+  1425,
+  1480,
+  1488,
+  1515,
+  1519,
+  1525,
+  1536,
+  1541,
+  1542,
+  1548,
+  1549,
+  1563,
+  1564,
+  1567,
+  1568,
+  1600,
+  1601,
+  1611,
+  1622,
+  1648,
+  1649,
+  1757,
+  1758,
+  1792,
+  1806,
+  1807,
+  1867,
+  1869,
+  1872,
+  1920,
+  2144,
+  2155,
+  2160,
+  2191,
+  2192,
+  2194,
+  2200,
+  2274,
+  2275,
+  2304,
+  2385,
+  2389,
+  2404,
+  2406,
+  2432,
+  2436,
+  2437,
+  2445,
+  2447,
+  2449,
+  2451,
+  2473,
+  2474,
+  2481,
+  2482,
+  2483,
+  2486,
+  2490,
+  2492,
+  2501,
+  2503,
+  2505,
+  2507,
+  2511,
+  2519,
+  2520,
+  2524,
+  2526,
+  2527,
+  2532,
+  2534,
+  2559,
+  2561,
+  2564,
+  2565,
+  2571,
+  2575,
+  2577,
+  2579,
+  2601,
+  2602,
+  2609,
+  2610,
+  2612,
+  2613,
+  2615,
+  2616,
+  2618,
+  2620,
+  2621,
+  2622,
+  2627,
+  2631,
+  2633,
+  2635,
+  2638,
+  2641,
+  2642,
+  2649,
+  2653,
+  2654,
+  2655,
+  2662,
+  2679,
+  2689,
+  2692,
+  2693,
+  2702,
+  2703,
+  2706,
+  2707,
+  2729,
+  2730,
+  2737,
+  2738,
+  2740,
+  2741,
+  2746,
+  2748,
+  2758,
+  2759,
+  2762,
+  2763,
+  2766,
+  2768,
+  2769,
+  2784,
+  2788,
+  2790,
+  2802,
+  2809,
+  2816,
+  2946,
+  2948,
+  2949,
+  2955,
+  2958,
+  2961,
+  2962,
+  2966,
+  2969,
+  2971,
+  2972,
+  2973,
+  2974,
+  2976,
+  2979,
+  2981,
+  2984,
+  2987,
+  2990,
+  3002,
+  3006,
+  3011,
+  3014,
+  3017,
+  3018,
+  3022,
+  3024,
+  3025,
+  3031,
+  3032,
+  3046,
+  3067,
+  3072,
+  3085,
+  3086,
+  3089,
+  3090,
+  3113,
+  3114,
+  3130,
+  3132,
+  3141,
+  3142,
+  3145,
+  3146,
+  3150,
+  3157,
+  3159,
+  3160,
+  3163,
+  3165,
+  3166,
+  3168,
+  3172,
+  3174,
+  3184,
+  3191,
+  3200,
+  3213,
+  3214,
+  3217,
+  3218,
+  3241,
+  3242,
+  3252,
+  3253,
+  3258,
+  3260,
+  3269,
+  3270,
+  3273,
+  3274,
+  3278,
+  3285,
+  3287,
+  3293,
+  3295,
+  3296,
+  3300,
+  3302,
+  3312,
+  3313,
+  3316,
+  3328,
+  3341,
+  3342,
+  3345,
+  3346,
+  3397,
+  3398,
+  3401,
+  3402,
+  3408,
+  3412,
+  3428,
+  3430,
+  3456,
+  3457,
+  3460,
+  3461,
+  3479,
+  3482,
+  3506,
+  3507,
+  3516,
+  3517,
+  3518,
+  3520,
+  3527,
+  3530,
+  3531,
+  3535,
+  3541,
+  3542,
+  3543,
+  3544,
+  3552,
+  3558,
+  3568,
+  3570,
+  3573,
+  3585,
+  3643,
+  3648,
+  3676,
+  3713,
+  3715,
+  3716,
+  3717,
+  3718,
+  3723,
+  3724,
+  3748,
+  3749,
+  3750,
+  3751,
+  3774,
+  3776,
+  3781,
+  3782,
+  3783,
+  3784,
+  3791,
+  3792,
+  3802,
+  3804,
+  3808,
+  3840,
+  3912,
+  3913,
+  3949,
+  3953,
+  3992,
+  3993,
+  4029,
+  4030,
+  4045,
+  4046,
+  4053,
+  4057,
+  4059,
+  4096,
+  4256,
+  4294,
+  4295,
+  4296,
+  4301,
+  4302,
+  4304,
+  4347,
+  4348,
+  4352,
+  4608,
+  4681,
+  4682,
+  4686,
+  4688,
+  4695,
+  4696,
+  4697,
+  4698,
+  4702,
+  4704,
+  4745,
+  4746,
+  4750,
+  4752,
+  4785,
+  4786,
+  4790,
+  4792,
+  4799,
+  4800,
+  4801,
+  4802,
+  4806,
+  4808,
+  4823,
+  4824,
+  4881,
+  4882,
+  4886,
+  4888,
+  4955,
+  4957,
+  4989,
+  4992,
+  5018,
+  6016,
+  6110,
+  6112,
+  6122,
+  6128,
+  6138,
+  6624,
+  6656,
+  7248,
+  7296,
+  7305,
+  7312,
+  7355,
+  7357,
+  7360,
+  7424,
+  7462,
+  7467,
+  7468,
+  7517,
+  7522,
+  7526,
+  7531,
+  7544,
+  7545,
+  7615,
+  7616,
+  7680,
+  7936,
+  7958,
+  7960,
+  7966,
+  7968,
+  8006,
+  8008,
+  8014,
+  8016,
+  8024,
+  8025,
+  8026,
+  8027,
+  8028,
+  8029,
+  8030,
+  8031,
+  8062,
+  8064,
+  8117,
+  8118,
+  8133,
+  8134,
+  8148,
+  8150,
+  8156,
+  8157,
+  8176,
+  8178,
+  8181,
+  8182,
+  8191,
+  8305,
+  8306,
+  8319,
+  8320,
+  8336,
+  8349,
+  8486,
+  8487,
+  8490,
+  8492,
+  8498,
+  8499,
+  8526,
+  8527,
+  8544,
+  8585,
+  11360,
+  11392,
+  11520,
+  11558,
+  11559,
+  11560,
+  11565,
+  11566,
+  11568,
+  11624,
+  11631,
+  11633,
+  11647,
+  11648,
+  11671,
+  11680,
+  11687,
+  11688,
+  11695,
+  11696,
+  11703,
+  11704,
+  11711,
+  11712,
+  11719,
+  11720,
+  11727,
+  11728,
+  11735,
+  11736,
+  11743,
+  11744,
+  11776,
+  11904,
+  11930,
+  11931,
+  12020,
+  12032,
+  12246,
+  12293,
+  12294,
+  12295,
+  12296,
+  12321,
+  12330,
+  12334,
+  12336,
+  12344,
+  12348,
+  12353,
+  12439,
+  12445,
+  12448,
+  12449,
+  12539,
+  12541,
+  12544,
+  12593,
+  12687,
+  12784,
+  12800,
+  12831,
+  12896,
+  12927,
+  13008,
+  13055,
+  13056,
+  13144,
+  13312,
+  19894,
+  19904,
+  19968,
+  40880,
+  40960,
+  42125,
+  42128,
+  42183,
+  42560,
+  42656,
+  42786,
+  42888,
+  42891,
+  42955,
+  42960,
+  42962,
+  42963,
+  42964,
+  42965,
+  42970,
+  42994,
+  43008,
+  43232,
+  43264,
+  43360,
+  43389,
+  43392,
+  43470,
+  43472,
+  43482,
+  43486,
+  43488,
+  43519,
+  43616,
+  43648,
+  43777,
+  43783,
+  43785,
+  43791,
+  43793,
+  43799,
+  43808,
+  43815,
+  43816,
+  43823,
+  43824,
+  43867,
+  43868,
+  43877,
+  43878,
+  43882,
+  44032,
+  55204,
+  55216,
+  55239,
+  55243,
+  55292,
+  63744,
+  64110,
+  64112,
+  64218,
+  64256,
+  64263,
+  64275,
+  64280,
+  64285,
+  64311,
+  64312,
+  64317,
+  64318,
+  64319,
+  64320,
+  64322,
+  64323,
+  64325,
+  64326,
+  64336,
+  64451,
+  64467,
+  64830,
+  64832,
+  64912,
+  64914,
+  64968,
+  64975,
+  64976,
+  65008,
+  65024,
+  65070,
+  65072,
+  65136,
+  65141,
+  65142,
+  65277,
+  65313,
+  65339,
+  65345,
+  65371,
+  65382,
+  65392,
+  65393,
+  65438,
+  65440,
+  65471,
+  65474,
+  65480,
+  65482,
+  65488,
+  65490,
+  65496,
+  65498,
+  65501,
+  65856,
+  65935,
+  65952,
+  65953,
+  67456,
+  67462,
+  67463,
+  67505,
+  67506,
+  67515,
+  69216,
+  69247,
+  69373,
+  69376,
+  70113,
+  70133,
+  72448,
+  72458,
+  73664,
+  73714,
+  73727,
+  73728,
+  94178,
+  94180,
+  94192,
+  94194,
+  110576,
+  110580,
+  110581,
+  110588,
+  110589,
+  110591,
+  110592,
+  110883,
+  110898,
+  110899,
+  110928,
+  110931,
+  110933,
+  110934,
+  110948,
+  110952,
+  119296,
+  119366,
+  122624,
+  122655,
+  122661,
+  122667,
+  122928,
+  122990,
+  123023,
+  123024,
+  124896,
+  124903,
+  124904,
+  124908,
+  124909,
+  124911,
+  124912,
+  124927,
+  126464,
+  126468,
+  126469,
+  126496,
+  126497,
+  126499,
+  126500,
+  126501,
+  126503,
+  126504,
+  126505,
+  126515,
+  126516,
+  126520,
+  126521,
+  126522,
+  126523,
+  126524,
+  126530,
+  126531,
+  126535,
+  126536,
+  126537,
+  126538,
+  126539,
+  126540,
+  126541,
+  126544,
+  126545,
+  126547,
+  126548,
+  126549,
+  126551,
+  126552,
+  126553,
+  126554,
+  126555,
+  126556,
+  126557,
+  126558,
+  126559,
+  126560,
+  126561,
+  126563,
+  126564,
+  126565,
+  126567,
+  126571,
+  126572,
+  126579,
+  126580,
+  126584,
+  126585,
+  126589,
+  126590,
+  126591,
+  126592,
+  126602,
+  126603,
+  126620,
+  126625,
+  126628,
+  126629,
+  126634,
+  126635,
+  126652,
+  126704,
+  126706,
+  127488,
+  127489,
+  131072,
+  173792,
+  173824,
+  177978,
+  177984,
+  178206,
+  178208,
+  183970,
+  183984,
+  191457,
+  194560,
+  195102,
+  196608,
+  201547,
+  201552,
+  205744
+];
+var FRANC_RANGE_CLASSES = [
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  3,
+  0,
+  3,
+  0,
+  4,
+  0,
+  4,
+  0,
+  4,
+  0,
+  5,
+  0,
+  5,
+  0,
+  5,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  7,
+  0,
+  7,
+  0,
+  7,
+  6,
+  0,
+  7,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  8,
+  0,
+  8,
+  0,
+  8,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  9,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  12,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  14,
+  0,
+  15,
+  0,
+  15,
+  0,
+  15,
+  0,
+  15,
+  0,
+  15,
+  0,
+  15,
+  0,
+  15,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  17,
+  0,
+  17,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  18,
+  0,
+  19,
+  0,
+  19,
+  0,
+  19,
+  0,
+  19,
+  0,
+  19,
+  0,
+  19,
+  0,
+  19,
+  0,
+  20,
+  21,
+  0,
+  21,
+  0,
+  21,
+  0,
+  21,
+  0,
+  21,
+  22,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  24,
+  0,
+  24,
+  0,
+  24,
+  0,
+  24,
+  0,
+  25,
+  3,
+  0,
+  21,
+  0,
+  21,
+  0,
+  1,
+  2,
+  3,
+  1,
+  2,
+  1,
+  2,
+  1,
+  3,
+  1,
+  2,
+  0,
+  1,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  2,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  21,
+  0,
+  21,
+  0,
+  21,
+  0,
+  26,
+  0,
+  26,
+  0,
+  26,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  3,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  22,
+  0,
+  27,
+  0,
+  28,
+  0,
+  28,
+  0,
+  28,
+  0,
+  28,
+  0,
+  22,
+  0,
+  28,
+  22,
+  0,
+  22,
+  0,
+  28,
+  0,
+  28,
+  0,
+  29,
+  27,
+  0,
+  29,
+  27,
+  30,
+  0,
+  30,
+  0,
+  3,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  8,
+  0,
+  22,
+  0,
+  31,
+  0,
+  31,
+  0,
+  31,
+  20,
+  0,
+  20,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  1,
+  0,
+  1,
+  2,
+  1,
+  0,
+  22,
+  0,
+  22,
+  0,
+  22,
+  0,
+  27,
+  0,
+  27,
+  0,
+  1,
+  0,
+  4,
+  0,
+  5,
+  0,
+  5,
+  0,
+  5,
+  0,
+  5,
+  0,
+  5,
+  0,
+  5,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  3,
+  0,
+  6,
+  0,
+  6,
+  0,
+  1,
+  0,
+  1,
+  0,
+  28,
+  0,
+  28,
+  0,
+  22,
+  0,
+  22,
+  0,
+  22,
+  0,
+  22,
+  0,
+  22,
+  0,
+  2,
+  0,
+  2,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  6,
+  0,
+  6,
+  0,
+  16,
+  0,
+  8,
+  0,
+  12,
+  0,
+  12,
+  0,
+  27,
+  0,
+  27,
+  0,
+  28,
+  0,
+  28,
+  0,
+  28,
+  0,
+  28,
+  0,
+  28,
+  0,
+  28,
+  0,
+  28,
+  0,
+  28,
+  0,
+  2,
+  0,
+  1,
+  0,
+  1,
+  0,
+  3,
+  0,
+  3,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  23,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  28,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0,
+  27,
+  0
+];
+
+// src/measure/language-franc.ts
+var MAX_LENGTH = 2048;
+var MIN_LENGTH = 10;
+var MAX_DIFFERENCE = 300;
+var SLOT_BITS = 13;
+var SLOTS = 1 << SLOT_BITS;
+var DIRECT = 27 * 27 * 27;
+var UND = "und";
+var francClassBmp;
+var francAstralStarts;
+var francAstralClasses;
+function francClasses() {
+  if (francClassBmp) return francClassBmp;
+  const table2 = new Uint8Array(65536);
+  const starts = [];
+  const classes2 = [];
+  for (let r = 0; r < FRANC_RANGE_STARTS.length; r++) {
+    const start = FRANC_RANGE_STARTS[r];
+    const end = FRANC_RANGE_STARTS[r + 1] ?? 1114112;
+    const cls = FRANC_RANGE_CLASSES[r];
+    if (start < 65536) table2.fill(cls, start, Math.min(end, 65536));
+    if (end > 65536) {
+      starts.push(Math.max(start, 65536));
+      classes2.push(cls);
+    }
+  }
+  francAstralStarts = Int32Array.from(starts);
+  francAstralClasses = Uint8Array.from(classes2);
+  francClassBmp = table2;
+  return table2;
+}
+function astralFrancClass(cp) {
+  const starts = francAstralStarts;
+  let lo = 0;
+  let hi = starts.length - 1;
+  while (lo < hi) {
+    const midpoint = lo + hi + 1 >> 1;
+    if (starts[midpoint] <= cp) lo = midpoint;
+    else hi = midpoint - 1;
+  }
+  return francAstralClasses[lo];
+}
+var classCounts = new Int32Array(FRANC_CLASS_MASKS.length);
+var expressionCounts = new Int32Array(FRANC_EXPRESSIONS.length);
+var CLASS_EXPRESSIONS = FRANC_CLASS_MASKS.map(
+  (mask) => FRANC_EXPRESSIONS.map((_, e) => e).filter((e) => (mask & 1 << e) !== 0)
+);
+function topExpression(text, end) {
+  const table2 = francClasses();
+  classCounts.fill(0);
+  for (let i = 0; i < end; i++) {
+    const unit = text.charCodeAt(i);
+    if (unit >= 55296 && unit <= 56319 && i + 1 < end) {
+      const low = text.charCodeAt(i + 1);
+      if (low >= 56320 && low <= 57343) {
+        const cls2 = astralFrancClass((unit - 55296 << 10) + (low - 56320) + 65536);
+        classCounts[cls2] = classCounts[cls2] + 1;
+        i++;
+        continue;
+      }
+    }
+    const cls = table2[unit];
+    classCounts[cls] = classCounts[cls] + 1;
+  }
+  expressionCounts.fill(0);
+  for (let c = 1; c < classCounts.length; c++) {
+    const n = classCounts[c];
+    if (n === 0) continue;
+    for (const e of CLASS_EXPRESSIONS[c]) expressionCounts[e] = expressionCounts[e] + n;
+  }
+  let best = 0;
+  for (let e = 1; e < expressionCounts.length; e++) if (expressionCounts[e] > expressionCounts[best]) best = e;
+  return { expression: best, count: expressionCounts[best] };
+}
+var LATIN = FRANC_EXPRESSIONS.indexOf("Latin");
+var ASCII_SHORTCUT = (() => {
+  const table2 = francClasses();
+  for (let u = 0; u < 128; u++) {
+    const isLetter = (u | 32) - 97 >>> 0 < 26;
+    const mask = FRANC_CLASS_MASKS[table2[u]];
+    if (mask !== (isLetter ? 1 << LATIN : 0)) return false;
+  }
+  return LATIN > 0;
+})();
+var internBits = 0;
+var internHi = new Int32Array(0);
+var internLo = new Int32Array(0);
+var internId = new Int32Array(0);
+var internCount = 0;
+var groupLanguages = /* @__PURE__ */ new Map();
+var profiles = /* @__PURE__ */ new Map();
+function hash(hi, lo, bits) {
+  return (Math.imul(hi, 2654435761) ^ Math.imul(lo + 2135587861, 2246822519)) >>> 32 - bits;
+}
+function internedId(hi, lo, add) {
+  if (!add) {
+    const direct = directIndex(hi >>> 16, hi & 65535, lo);
+    if (direct >= 0) return directId[direct];
+  }
+  return hashedId(hi, lo, add);
+}
+function symbolOf(unit) {
+  return unit === 32 ? 0 : unit - 97 >>> 0 < 26 ? unit - 96 : -1;
+}
+function directIndex(a, b, c) {
+  const x = symbolOf(a);
+  const y = symbolOf(b);
+  const z = symbolOf(c);
+  return (x | y | z) < 0 ? -1 : (x * 27 + y) * 27 + z;
+}
+var directId = new Int32Array(DIRECT).fill(-1);
+function hashedId(hi, lo, add) {
+  const mask = (1 << internBits) - 1;
+  let slot = hash(hi, lo, internBits);
+  for (; ; ) {
+    const id = internId[slot];
+    if (id < 0) break;
+    if (internHi[slot] === hi && internLo[slot] === lo) return id;
+    slot = slot + 1 & mask;
+  }
+  if (!add) return -1;
+  internHi[slot] = hi;
+  internLo[slot] = lo;
+  internId[slot] = internCount;
+  return internCount++;
+}
+function loadProfiles() {
+  if (internBits > 0) return;
+  let total = 0;
+  for (const script in data) {
+    const languages = data[script];
+    groupLanguages.set(script, Object.keys(languages));
+    const models = /* @__PURE__ */ new Map();
+    for (const language in languages) {
+      const model = languages[language];
+      models.set(language, model);
+      total += model.split("|").length;
+    }
+    profiles.set(script, models);
+  }
+  internBits = Math.ceil(Math.log2(total * 2));
+  internHi = new Int32Array(1 << internBits);
+  internLo = new Int32Array(1 << internBits);
+  internId = new Int32Array(1 << internBits).fill(-1);
+  for (const models of profiles.values()) {
+    for (const model of models.values()) {
+      for (const t of model.split("|")) {
+        const id = internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), true);
+        const direct = directIndex(t.charCodeAt(0), t.charCodeAt(1), t.charCodeAt(2));
+        if (direct >= 0) directId[direct] = id;
+      }
+    }
+  }
+}
+function invert(group, languages) {
+  const models = profiles.get(group);
+  const perLanguage2 = languages.map((language) => {
+    const rankOf2 = /* @__PURE__ */ new Map();
+    const model = models.get(language).split("|");
+    for (let r = model.length - 1; r >= 0; r--) {
+      const t = model[r];
+      rankOf2.set(internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), false), r);
+    }
+    return rankOf2;
+  });
+  const offsets2 = new Int32Array(internCount + 1);
+  for (const rankOf2 of perLanguage2) for (const id of rankOf2.keys()) offsets2[id + 1] = offsets2[id + 1] + 1;
+  for (let t = 0; t < internCount; t++) offsets2[t + 1] = offsets2[t + 1] + offsets2[t];
+  const fill = offsets2.slice(0, internCount);
+  const entries = new Int32Array(offsets2[internCount]);
+  perLanguage2.forEach((rankOf2, l) => {
+    for (const [id, rank2] of rankOf2) {
+      const at2 = fill[id];
+      fill[id] = at2 + 1;
+      entries[at2] = l << 16 | rank2 + 1;
+    }
+  });
+  return { languages, offsets: offsets2, entries };
+}
+var unitKind;
+var lowerUnit;
+var KEEP = 0;
+var SEPARATOR = 1;
+var CARE = 2;
+var CAPITAL_SIGMA = 931;
+function cleaningTables() {
+  if (unitKind) return;
+  const kinds = new Uint8Array(65536);
+  const lower = new Uint16Array(65536);
+  const space = /\s/;
+  for (let u = 0; u < 65536; u++) {
+    if (u >= 55296 && u <= 57343) {
+      kinds[u] = CARE;
+      continue;
+    }
+    const ch = String.fromCharCode(u);
+    if (u >= 33 && u <= 64 || space.test(ch)) {
+      kinds[u] = SEPARATOR;
+      continue;
+    }
+    const lowered = ch.toLowerCase();
+    if (lowered.length !== 1 || u === CAPITAL_SIGMA) kinds[u] = CARE;
+    else lower[u] = lowered.charCodeAt(0);
+  }
+  unitKind = kinds;
+  lowerUnit = lower;
+}
+var cleaned = new Uint16Array(MAX_LENGTH * 2 + 2);
+var slotHi = new Int32Array(SLOTS);
+var slotLo = new Int32Array(SLOTS);
+var slotCount = new Int32Array(SLOTS);
+var slotStamp = new Int32Array(SLOTS);
+var stamp = 0;
+var distinctIds = new Int32Array(MAX_LENGTH * 2 + 2);
+var distinctCounts = new Int32Array(MAX_LENGTH * 2 + 2);
+function clean(text, end) {
+  cleaningTables();
+  const kinds = unitKind;
+  const lower = lowerUnit;
+  let n = 0;
+  cleaned[n++] = 32;
+  let pendingSpace = false;
+  let units = 0;
+  let letter2 = false;
+  for (let i = 0; i < end; i++) {
+    const unit = text.charCodeAt(i);
+    units |= unit;
+    if (!letter2) letter2 = (unit | 32) - 97 >>> 0 < 26;
+    const kind = kinds[unit];
+    if (kind === SEPARATOR) {
+      pendingSpace = n > 1;
+      continue;
+    }
+    if (pendingSpace) {
+      cleaned[n++] = 32;
+      pendingSpace = false;
+    }
+    if (kind === KEEP) {
+      cleaned[n++] = lower[unit];
+      continue;
+    }
+    if (unit === CAPITAL_SIGMA) {
+      sampleIsAscii = false;
+      return cleanNatively(text, end);
+    }
+    let piece;
+    if (unit >= 55296 && unit <= 56319 && i + 1 < end && (text.charCodeAt(i + 1) & 64512) === 56320) {
+      piece = text.slice(i, i + 2).toLowerCase();
+      i++;
+    } else piece = (unit & 63488) === 55296 ? String.fromCharCode(unit) : String.fromCharCode(unit).toLowerCase();
+    for (let k = 0; k < piece.length; k++) cleaned[n++] = piece.charCodeAt(k);
+  }
+  cleaned[n++] = 32;
+  sampleIsAscii = units < 128;
+  sampleHasAsciiLetter = letter2;
+  return n;
+}
+var sampleIsAscii = false;
+var sampleHasAsciiLetter = false;
+function cleanNatively(text, end) {
+  const value = ` ${text.slice(0, end).replace(/[\u0021-\u0040]+/g, " ").replace(/\s+/g, " ").trim().toLowerCase()} `;
+  for (let k = 0; k < value.length; k++) cleaned[k] = value.charCodeAt(k);
+  return value.length;
+}
+var directStamp = new Int32Array(DIRECT);
+var directCount = new Int32Array(DIRECT);
+function countTrigrams(n) {
+  stamp++;
+  if (stamp === 2147483647) {
+    slotStamp.fill(0);
+    directStamp.fill(0);
+    stamp = 1;
+  }
+  let distinct = 0;
+  const mask = SLOTS - 1;
+  let s1 = symbolOf(cleaned[0]);
+  let s2 = symbolOf(cleaned[1]);
+  for (let p = 0; p + 2 < n; p++) {
+    const c = cleaned[p + 2];
+    const s0 = s1;
+    s1 = s2;
+    s2 = symbolOf(c);
+    if ((s0 | s1 | s2) >= 0) {
+      const direct = (s0 * 27 + s1) * 27 + s2;
+      if (directStamp[direct] !== stamp) {
+        directStamp[direct] = stamp;
+        directCount[direct] = 1;
+        distinctIds[distinct++] = -1 - direct;
+      } else directCount[direct] = directCount[direct] + 1;
+      continue;
+    }
+    const hi = cleaned[p] << 16 | cleaned[p + 1];
+    let slot = hash(hi, c, SLOT_BITS);
+    for (; ; ) {
+      if (slotStamp[slot] !== stamp) {
+        slotStamp[slot] = stamp;
+        slotHi[slot] = hi;
+        slotLo[slot] = c;
+        slotCount[slot] = 1;
+        distinctIds[distinct++] = slot;
+        break;
+      }
+      if (slotHi[slot] === hi && slotLo[slot] === c) {
+        slotCount[slot] = slotCount[slot] + 1;
+        break;
+      }
+      slot = slot + 1 & mask;
+    }
+  }
+  for (let d = 0; d < distinct; d++) {
+    const entry = distinctIds[d];
+    if (entry < 0) {
+      distinctCounts[d] = directCount[-1 - entry];
+      distinctIds[d] = directId[-1 - entry];
+    } else {
+      distinctCounts[d] = slotCount[entry];
+      distinctIds[d] = hashedId(slotHi[entry], slotLo[entry], false);
+    }
+  }
+  return distinct;
+}
+function createFrancLabeller(only, minLength = MIN_LENGTH) {
+  loadProfiles();
+  const allowed = new Set(only);
+  const anything = allowed.size === 0;
+  const groups = FRANC_EXPRESSIONS.map((expression) => {
+    const languages = groupLanguages.get(expression);
+    if (!languages) return null;
+    return invert(expression, languages.filter((l) => anything || allowed.has(l)));
+  });
+  const distances = new Int32Array(Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
+  const label = (text) => {
+    if (!text || text.length < minLength) return UND;
+    const end = Math.min(text.length, MAX_LENGTH);
+    const n = clean(text, end);
+    const top = sampleIsAscii && ASCII_SHORTCUT ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 } : topExpression(text, end);
+    const name = FRANC_EXPRESSIONS[top.expression];
+    const group = groups[top.expression];
+    if (!group) return top.count === 0 || !(anything || allowed.has(name)) ? UND : name;
+    const k = group.languages.length;
+    if (k === 0) return UND;
+    const distinct = countTrigrams(n);
+    distances.fill(distinct * MAX_DIFFERENCE, 0, k);
+    const { offsets: offsets2, entries } = group;
+    for (let d = 0; d < distinct; d++) {
+      const id = distinctIds[d];
+      if (id < 0) continue;
+      const count3 = distinctCounts[d];
+      const last = offsets2[id + 1];
+      for (let e = offsets2[id]; e < last; e++) {
+        const entry = entries[e];
+        const difference = count3 - (entry & 65535);
+        const l = entry >>> 16;
+        distances[l] = distances[l] + (difference < 0 ? -difference : difference) - MAX_DIFFERENCE;
+      }
+    }
+    let best = 0;
+    for (let l = 1; l < k; l++) if (distances[l] < distances[best]) best = l;
+    return group.languages[best];
+  };
+  return Object.assign(label, { only: [...only] });
+}
+function francLanguages() {
+  loadProfiles();
+  const single = FRANC_EXPRESSIONS.filter((e) => !groupLanguages.has(e));
+  return [.../* @__PURE__ */ new Set([...[...groupLanguages.values()].flat(), ...single])];
+}
+
+// src/measure/data/scripts.generated.ts
+var SCRIPT_NAMES = ["Unknown", "Common", "Inherited", "Adlam", "Ahom", "Anatolian_Hieroglyphs", "Arabic", "Armenian", "Avestan", "Balinese", "Bamum", "Bassa_Vah", "Batak", "Bengali", "Beria_Erfe", "Bhaiksuki", "Bopomofo", "Brahmi", "Braille", "Buginese", "Buhid", "Canadian_Aboriginal", "Carian", "Caucasian_Albanian", "Chakma", "Cham", "Cherokee", "Chorasmian", "Coptic", "Cuneiform", "Cypriot", "Cypro_Minoan", "Cyrillic", "Deseret", "Devanagari", "Dives_Akuru", "Dogra", "Duployan", "Egyptian_Hieroglyphs", "Elbasan", "Elymaic", "Ethiopic", "Garay", "Georgian", "Glagolitic", "Gothic", "Grantha", "Greek", "Gujarati", "Gunjala_Gondi", "Gurmukhi", "Gurung_Khema", "Han", "Hangul", "Hanifi_Rohingya", "Hanunoo", "Hatran", "Hebrew", "Hiragana", "Imperial_Aramaic", "Inscriptional_Pahlavi", "Inscriptional_Parthian", "Javanese", "Kaithi", "Kannada", "Katakana", "Kawi", "Kayah_Li", "Kharoshthi", "Khitan_Small_Script", "Khmer", "Khojki", "Khudawadi", "Kirat_Rai", "Lao", "Latin", "Lepcha", "Limbu", "Linear_A", "Linear_B", "Lisu", "Lycian", "Lydian", "Mahajani", "Makasar", "Malayalam", "Mandaic", "Manichaean", "Marchen", "Masaram_Gondi", "Medefaidrin", "Meetei_Mayek", "Mende_Kikakui", "Meroitic_Cursive", "Meroitic_Hieroglyphs", "Miao", "Modi", "Mongolian", "Mro", "Multani", "Myanmar", "Nabataean", "Nag_Mundari", "Nandinagari", "New_Tai_Lue", "Newa", "Nko", "Nushu", "Nyiakeng_Puachue_Hmong", "Ogham", "Ol_Chiki", "Ol_Onal", "Old_Hungarian", "Old_Italic", "Old_North_Arabian", "Old_Permic", "Old_Persian", "Old_Sogdian", "Old_South_Arabian", "Old_Turkic", "Old_Uyghur", "Oriya", "Osage", "Osmanya", "Pahawh_Hmong", "Palmyrene", "Pau_Cin_Hau", "Phags_Pa", "Phoenician", "Psalter_Pahlavi", "Rejang", "Runic", "Samaritan", "Saurashtra", "Sharada", "Shavian", "Siddham", "Sidetic", "SignWriting", "Sinhala", "Sogdian", "Sora_Sompeng", "Soyombo", "Sundanese", "Sunuwar", "Syloti_Nagri", "Syriac", "Tagalog", "Tagbanwa", "Tai_Le", "Tai_Tham", "Tai_Viet", "Tai_Yo", "Takri", "Tamil", "Tangsa", "Tangut", "Telugu", "Thaana", "Thai", "Tibetan", "Tifinagh", "Tirhuta", "Todhri", "Tolong_Siki", "Toto", "Tulu_Tigalari", "Ugaritic", "Vai", "Vithkuqi", "Wancho", "Warang_Citi", "Yezidi", "Yi", "Zanabazar_Square"];
+var SCRIPT_RANGE_STARTS = [
+  0,
+  65,
+  91,
+  97,
+  123,
+  170,
+  171,
+  186,
+  187,
+  192,
+  215,
+  216,
+  247,
+  248,
+  697,
+  736,
+  741,
+  746,
+  748,
+  768,
+  880,
+  884,
+  885,
+  888,
+  890,
+  894,
+  895,
+  896,
+  900,
+  901,
+  902,
+  903,
+  904,
+  907,
+  908,
+  909,
+  910,
+  930,
+  931,
+  994,
+  1008,
+  1024,
+  1157,
+  1159,
+  1328,
+  1329,
+  1367,
+  1369,
+  1419,
+  1421,
+  1424,
+  1425,
+  1480,
+  1488,
+  1515,
+  1519,
+  1525,
+  1536,
+  1541,
+  1542,
+  1548,
+  1549,
+  1563,
+  1564,
+  1567,
+  1568,
+  1600,
+  1601,
+  1611,
+  1622,
+  1648,
+  1649,
+  1757,
+  1758,
+  1792,
+  1806,
+  1807,
+  1867,
+  1869,
+  1872,
+  1920,
+  1970,
+  1984,
+  2043,
+  2045,
+  2048,
+  2094,
+  2096,
+  2111,
+  2112,
+  2140,
+  2142,
+  2143,
+  2144,
+  2155,
+  2160,
+  2194,
+  2199,
+  2274,
+  2275,
+  2304,
+  2385,
+  2389,
+  2404,
+  2406,
+  2432,
+  2436,
+  2437,
+  2445,
+  2447,
+  2449,
+  2451,
+  2473,
+  2474,
+  2481,
+  2482,
+  2483,
+  2486,
+  2490,
+  2492,
+  2501,
+  2503,
+  2505,
+  2507,
+  2511,
+  2519,
+  2520,
+  2524,
+  2526,
+  2527,
+  2532,
+  2534,
+  2559,
+  2561,
+  2564,
+  2565,
+  2571,
+  2575,
+  2577,
+  2579,
+  2601,
+  2602,
+  2609,
+  2610,
+  2612,
+  2613,
+  2615,
+  2616,
+  2618,
+  2620,
+  2621,
+  2622,
+  2627,
+  2631,
+  2633,
+  2635,
+  2638,
+  2641,
+  2642,
+  2649,
+  2653,
+  2654,
+  2655,
+  2662,
+  2679,
+  2689,
+  2692,
+  2693,
+  2702,
+  2703,
+  2706,
+  2707,
+  2729,
+  2730,
+  2737,
+  2738,
+  2740,
+  2741,
+  2746,
+  2748,
+  2758,
+  2759,
+  2762,
+  2763,
+  2766,
+  2768,
+  2769,
+  2784,
+  2788,
+  2790,
+  2802,
+  2809,
+  2816,
+  2817,
+  2820,
+  2821,
+  2829,
+  2831,
+  2833,
+  2835,
+  2857,
+  2858,
+  2865,
+  2866,
+  2868,
+  2869,
+  2874,
+  2876,
+  2885,
+  2887,
+  2889,
+  2891,
+  2894,
+  2901,
+  2904,
+  2908,
+  2910,
+  2911,
+  2916,
+  2918,
+  2936,
+  2946,
+  2948,
+  2949,
+  2955,
+  2958,
+  2961,
+  2962,
+  2966,
+  2969,
+  2971,
+  2972,
+  2973,
+  2974,
+  2976,
+  2979,
+  2981,
+  2984,
+  2987,
+  2990,
+  3002,
+  3006,
+  3011,
+  3014,
+  3017,
+  3018,
+  3022,
+  3024,
+  3025,
+  3031,
+  3032,
+  3046,
+  3067,
+  3072,
+  3085,
+  3086,
+  3089,
+  3090,
+  3113,
+  3114,
+  3130,
+  3132,
+  3141,
+  3142,
+  3145,
+  3146,
+  3150,
+  3157,
+  3159,
+  3160,
+  3163,
+  3164,
+  3166,
+  3168,
+  3172,
+  3174,
+  3184,
+  3191,
+  3200,
+  3213,
+  3214,
+  3217,
+  3218,
+  3241,
+  3242,
+  3252,
+  3253,
+  3258,
+  3260,
+  3269,
+  3270,
+  3273,
+  3274,
+  3278,
+  3285,
+  3287,
+  3292,
+  3295,
+  3296,
+  3300,
+  3302,
+  3312,
+  3313,
+  3316,
+  3328,
+  3341,
+  3342,
+  3345,
+  3346,
+  3397,
+  3398,
+  3401,
+  3402,
+  3408,
+  3412,
+  3428,
+  3430,
+  3456,
+  3457,
+  3460,
+  3461,
+  3479,
+  3482,
+  3506,
+  3507,
+  3516,
+  3517,
+  3518,
+  3520,
+  3527,
+  3530,
+  3531,
+  3535,
+  3541,
+  3542,
+  3543,
+  3544,
+  3552,
+  3558,
+  3568,
+  3570,
+  3573,
+  3585,
+  3643,
+  3647,
+  3648,
+  3676,
+  3713,
+  3715,
+  3716,
+  3717,
+  3718,
+  3723,
+  3724,
+  3748,
+  3749,
+  3750,
+  3751,
+  3774,
+  3776,
+  3781,
+  3782,
+  3783,
+  3784,
+  3791,
+  3792,
+  3802,
+  3804,
+  3808,
+  3840,
+  3912,
+  3913,
+  3949,
+  3953,
+  3992,
+  3993,
+  4029,
+  4030,
+  4045,
+  4046,
+  4053,
+  4057,
+  4059,
+  4096,
+  4256,
+  4294,
+  4295,
+  4296,
+  4301,
+  4302,
+  4304,
+  4347,
+  4348,
+  4352,
+  4608,
+  4681,
+  4682,
+  4686,
+  4688,
+  4695,
+  4696,
+  4697,
+  4698,
+  4702,
+  4704,
+  4745,
+  4746,
+  4750,
+  4752,
+  4785,
+  4786,
+  4790,
+  4792,
+  4799,
+  4800,
+  4801,
+  4802,
+  4806,
+  4808,
+  4823,
+  4824,
+  4881,
+  4882,
+  4886,
+  4888,
+  4955,
+  4957,
+  4989,
+  4992,
+  5018,
+  5024,
+  5110,
+  5112,
+  5118,
+  5120,
+  5760,
+  5789,
+  5792,
+  5867,
+  5870,
+  5881,
+  5888,
+  5910,
+  5919,
+  5920,
+  5941,
+  5943,
+  5952,
+  5972,
+  5984,
+  5997,
+  5998,
+  6001,
+  6002,
+  6004,
+  6016,
+  6110,
+  6112,
+  6122,
+  6128,
+  6138,
+  6144,
+  6146,
+  6148,
+  6149,
+  6150,
+  6170,
+  6176,
+  6265,
+  6272,
+  6315,
+  6320,
+  6390,
+  6400,
+  6431,
+  6432,
+  6444,
+  6448,
+  6460,
+  6464,
+  6465,
+  6468,
+  6480,
+  6510,
+  6512,
+  6517,
+  6528,
+  6572,
+  6576,
+  6602,
+  6608,
+  6619,
+  6622,
+  6624,
+  6656,
+  6684,
+  6686,
+  6688,
+  6751,
+  6752,
+  6781,
+  6783,
+  6794,
+  6800,
+  6810,
+  6816,
+  6830,
+  6832,
+  6878,
+  6880,
+  6892,
+  6912,
+  6989,
+  6990,
+  7040,
+  7104,
+  7156,
+  7164,
+  7168,
+  7224,
+  7227,
+  7242,
+  7245,
+  7248,
+  7296,
+  7307,
+  7312,
+  7355,
+  7357,
+  7360,
+  7368,
+  7376,
+  7379,
+  7380,
+  7393,
+  7394,
+  7401,
+  7405,
+  7406,
+  7412,
+  7413,
+  7416,
+  7418,
+  7419,
+  7424,
+  7462,
+  7467,
+  7468,
+  7517,
+  7522,
+  7526,
+  7531,
+  7544,
+  7545,
+  7615,
+  7616,
+  7680,
+  7936,
+  7958,
+  7960,
+  7966,
+  7968,
+  8006,
+  8008,
+  8014,
+  8016,
+  8024,
+  8025,
+  8026,
+  8027,
+  8028,
+  8029,
+  8030,
+  8031,
+  8062,
+  8064,
+  8117,
+  8118,
+  8133,
+  8134,
+  8148,
+  8150,
+  8156,
+  8157,
+  8176,
+  8178,
+  8181,
+  8182,
+  8191,
+  8192,
+  8204,
+  8206,
+  8293,
+  8294,
+  8305,
+  8306,
+  8308,
+  8319,
+  8320,
+  8335,
+  8336,
+  8349,
+  8352,
+  8386,
+  8400,
+  8433,
+  8448,
+  8486,
+  8487,
+  8490,
+  8492,
+  8498,
+  8499,
+  8526,
+  8527,
+  8544,
+  8585,
+  8588,
+  8592,
+  9258,
+  9280,
+  9291,
+  9312,
+  10240,
+  10496,
+  11124,
+  11126,
+  11264,
+  11360,
+  11392,
+  11508,
+  11513,
+  11520,
+  11558,
+  11559,
+  11560,
+  11565,
+  11566,
+  11568,
+  11624,
+  11631,
+  11633,
+  11647,
+  11648,
+  11671,
+  11680,
+  11687,
+  11688,
+  11695,
+  11696,
+  11703,
+  11704,
+  11711,
+  11712,
+  11719,
+  11720,
+  11727,
+  11728,
+  11735,
+  11736,
+  11743,
+  11744,
+  11776,
+  11870,
+  11904,
+  11930,
+  11931,
+  12020,
+  12032,
+  12246,
+  12272,
+  12293,
+  12294,
+  12295,
+  12296,
+  12321,
+  12330,
+  12334,
+  12336,
+  12344,
+  12348,
+  12352,
+  12353,
+  12439,
+  12441,
+  12443,
+  12445,
+  12448,
+  12449,
+  12539,
+  12541,
+  12544,
+  12549,
+  12592,
+  12593,
+  12687,
+  12688,
+  12704,
+  12736,
+  12774,
+  12783,
+  12784,
+  12800,
+  12831,
+  12832,
+  12896,
+  12927,
+  13008,
+  13055,
+  13056,
+  13144,
+  13312,
+  19904,
+  19968,
+  40960,
+  42125,
+  42128,
+  42183,
+  42192,
+  42240,
+  42540,
+  42560,
+  42656,
+  42744,
+  42752,
+  42786,
+  42888,
+  42891,
+  42973,
+  42993,
+  43008,
+  43053,
+  43056,
+  43066,
+  43072,
+  43128,
+  43136,
+  43206,
+  43214,
+  43226,
+  43232,
+  43264,
+  43310,
+  43311,
+  43312,
+  43348,
+  43359,
+  43360,
+  43389,
+  43392,
+  43470,
+  43471,
+  43472,
+  43482,
+  43486,
+  43488,
+  43519,
+  43520,
+  43575,
+  43584,
+  43598,
+  43600,
+  43610,
+  43612,
+  43616,
+  43648,
+  43715,
+  43739,
+  43744,
+  43767,
+  43777,
+  43783,
+  43785,
+  43791,
+  43793,
+  43799,
+  43808,
+  43815,
+  43816,
+  43823,
+  43824,
+  43867,
+  43868,
+  43877,
+  43878,
+  43882,
+  43884,
+  43888,
+  43968,
+  44014,
+  44016,
+  44026,
+  44032,
+  55204,
+  55216,
+  55239,
+  55243,
+  55292,
+  63744,
+  64110,
+  64112,
+  64218,
+  64256,
+  64263,
+  64275,
+  64280,
+  64285,
+  64311,
+  64312,
+  64317,
+  64318,
+  64319,
+  64320,
+  64322,
+  64323,
+  64325,
+  64326,
+  64336,
+  64830,
+  64832,
+  64976,
+  65008,
+  65024,
+  65040,
+  65050,
+  65056,
+  65070,
+  65072,
+  65107,
+  65108,
+  65127,
+  65128,
+  65132,
+  65136,
+  65141,
+  65142,
+  65277,
+  65279,
+  65280,
+  65281,
+  65313,
+  65339,
+  65345,
+  65371,
+  65382,
+  65392,
+  65393,
+  65438,
+  65440,
+  65471,
+  65474,
+  65480,
+  65482,
+  65488,
+  65490,
+  65496,
+  65498,
+  65501,
+  65504,
+  65511,
+  65512,
+  65519,
+  65529,
+  65534,
+  65536,
+  65548,
+  65549,
+  65575,
+  65576,
+  65595,
+  65596,
+  65598,
+  65599,
+  65614,
+  65616,
+  65630,
+  65664,
+  65787,
+  65792,
+  65795,
+  65799,
+  65844,
+  65847,
+  65856,
+  65935,
+  65936,
+  65949,
+  65952,
+  65953,
+  66e3,
+  66045,
+  66046,
+  66176,
+  66205,
+  66208,
+  66257,
+  66272,
+  66273,
+  66300,
+  66304,
+  66340,
+  66349,
+  66352,
+  66379,
+  66384,
+  66427,
+  66432,
+  66462,
+  66463,
+  66464,
+  66500,
+  66504,
+  66518,
+  66560,
+  66640,
+  66688,
+  66718,
+  66720,
+  66730,
+  66736,
+  66772,
+  66776,
+  66812,
+  66816,
+  66856,
+  66864,
+  66916,
+  66927,
+  66928,
+  66939,
+  66940,
+  66955,
+  66956,
+  66963,
+  66964,
+  66966,
+  66967,
+  66978,
+  66979,
+  66994,
+  66995,
+  67002,
+  67003,
+  67005,
+  67008,
+  67060,
+  67072,
+  67383,
+  67392,
+  67414,
+  67424,
+  67432,
+  67456,
+  67462,
+  67463,
+  67505,
+  67506,
+  67515,
+  67584,
+  67590,
+  67592,
+  67593,
+  67594,
+  67638,
+  67639,
+  67641,
+  67644,
+  67645,
+  67647,
+  67648,
+  67670,
+  67671,
+  67680,
+  67712,
+  67743,
+  67751,
+  67760,
+  67808,
+  67827,
+  67828,
+  67830,
+  67835,
+  67840,
+  67868,
+  67871,
+  67872,
+  67898,
+  67903,
+  67904,
+  67930,
+  67968,
+  68e3,
+  68024,
+  68028,
+  68048,
+  68050,
+  68096,
+  68100,
+  68101,
+  68103,
+  68108,
+  68116,
+  68117,
+  68120,
+  68121,
+  68150,
+  68152,
+  68155,
+  68159,
+  68169,
+  68176,
+  68185,
+  68192,
+  68224,
+  68256,
+  68288,
+  68327,
+  68331,
+  68343,
+  68352,
+  68406,
+  68409,
+  68416,
+  68438,
+  68440,
+  68448,
+  68467,
+  68472,
+  68480,
+  68498,
+  68505,
+  68509,
+  68521,
+  68528,
+  68608,
+  68681,
+  68736,
+  68787,
+  68800,
+  68851,
+  68858,
+  68864,
+  68904,
+  68912,
+  68922,
+  68928,
+  68966,
+  68969,
+  68998,
+  69006,
+  69008,
+  69216,
+  69247,
+  69248,
+  69290,
+  69291,
+  69294,
+  69296,
+  69298,
+  69314,
+  69320,
+  69328,
+  69337,
+  69370,
+  69376,
+  69416,
+  69424,
+  69466,
+  69488,
+  69514,
+  69552,
+  69580,
+  69600,
+  69623,
+  69632,
+  69710,
+  69714,
+  69750,
+  69759,
+  69760,
+  69827,
+  69837,
+  69838,
+  69840,
+  69865,
+  69872,
+  69882,
+  69888,
+  69941,
+  69942,
+  69960,
+  69968,
+  70007,
+  70016,
+  70112,
+  70113,
+  70133,
+  70144,
+  70162,
+  70163,
+  70210,
+  70272,
+  70279,
+  70280,
+  70281,
+  70282,
+  70286,
+  70287,
+  70302,
+  70303,
+  70314,
+  70320,
+  70379,
+  70384,
+  70394,
+  70400,
+  70404,
+  70405,
+  70413,
+  70415,
+  70417,
+  70419,
+  70441,
+  70442,
+  70449,
+  70450,
+  70452,
+  70453,
+  70458,
+  70459,
+  70460,
+  70469,
+  70471,
+  70473,
+  70475,
+  70478,
+  70480,
+  70481,
+  70487,
+  70488,
+  70493,
+  70500,
+  70502,
+  70509,
+  70512,
+  70517,
+  70528,
+  70538,
+  70539,
+  70540,
+  70542,
+  70543,
+  70544,
+  70582,
+  70583,
+  70593,
+  70594,
+  70595,
+  70597,
+  70598,
+  70599,
+  70603,
+  70604,
+  70614,
+  70615,
+  70617,
+  70625,
+  70627,
+  70656,
+  70748,
+  70749,
+  70754,
+  70784,
+  70856,
+  70864,
+  70874,
+  71040,
+  71094,
+  71096,
+  71134,
+  71168,
+  71237,
+  71248,
+  71258,
+  71264,
+  71277,
+  71296,
+  71354,
+  71360,
+  71370,
+  71376,
+  71396,
+  71424,
+  71451,
+  71453,
+  71468,
+  71472,
+  71495,
+  71680,
+  71740,
+  71840,
+  71923,
+  71935,
+  71936,
+  71943,
+  71945,
+  71946,
+  71948,
+  71956,
+  71957,
+  71959,
+  71960,
+  71990,
+  71991,
+  71993,
+  71995,
+  72007,
+  72016,
+  72026,
+  72096,
+  72104,
+  72106,
+  72152,
+  72154,
+  72165,
+  72192,
+  72264,
+  72272,
+  72355,
+  72368,
+  72384,
+  72441,
+  72448,
+  72458,
+  72544,
+  72552,
+  72640,
+  72674,
+  72688,
+  72698,
+  72704,
+  72713,
+  72714,
+  72759,
+  72760,
+  72774,
+  72784,
+  72813,
+  72816,
+  72848,
+  72850,
+  72872,
+  72873,
+  72887,
+  72960,
+  72967,
+  72968,
+  72970,
+  72971,
+  73015,
+  73018,
+  73019,
+  73020,
+  73022,
+  73023,
+  73032,
+  73040,
+  73050,
+  73056,
+  73062,
+  73063,
+  73065,
+  73066,
+  73103,
+  73104,
+  73106,
+  73107,
+  73113,
+  73120,
+  73130,
+  73136,
+  73180,
+  73184,
+  73194,
+  73440,
+  73465,
+  73472,
+  73489,
+  73490,
+  73531,
+  73534,
+  73563,
+  73648,
+  73649,
+  73664,
+  73714,
+  73727,
+  73728,
+  74650,
+  74752,
+  74863,
+  74864,
+  74869,
+  74880,
+  75076,
+  77712,
+  77811,
+  77824,
+  78934,
+  78944,
+  82939,
+  82944,
+  83527,
+  90368,
+  90426,
+  92160,
+  92729,
+  92736,
+  92767,
+  92768,
+  92778,
+  92782,
+  92784,
+  92863,
+  92864,
+  92874,
+  92880,
+  92910,
+  92912,
+  92918,
+  92928,
+  92998,
+  93008,
+  93018,
+  93019,
+  93026,
+  93027,
+  93048,
+  93053,
+  93072,
+  93504,
+  93562,
+  93760,
+  93851,
+  93856,
+  93881,
+  93883,
+  93908,
+  93952,
+  94027,
+  94031,
+  94088,
+  94095,
+  94112,
+  94176,
+  94177,
+  94178,
+  94180,
+  94181,
+  94192,
+  94199,
+  94208,
+  101120,
+  101590,
+  101631,
+  101632,
+  101663,
+  101760,
+  101875,
+  110576,
+  110580,
+  110581,
+  110588,
+  110589,
+  110591,
+  110592,
+  110593,
+  110880,
+  110883,
+  110898,
+  110899,
+  110928,
+  110931,
+  110933,
+  110934,
+  110948,
+  110952,
+  110960,
+  111356,
+  113664,
+  113771,
+  113776,
+  113789,
+  113792,
+  113801,
+  113808,
+  113818,
+  113820,
+  113824,
+  113828,
+  117760,
+  118013,
+  118016,
+  118452,
+  118458,
+  118481,
+  118496,
+  118513,
+  118528,
+  118574,
+  118576,
+  118599,
+  118608,
+  118724,
+  118784,
+  119030,
+  119040,
+  119079,
+  119081,
+  119143,
+  119146,
+  119163,
+  119171,
+  119173,
+  119180,
+  119210,
+  119214,
+  119275,
+  119296,
+  119366,
+  119488,
+  119508,
+  119520,
+  119540,
+  119552,
+  119639,
+  119648,
+  119673,
+  119808,
+  119893,
+  119894,
+  119965,
+  119966,
+  119968,
+  119970,
+  119971,
+  119973,
+  119975,
+  119977,
+  119981,
+  119982,
+  119994,
+  119995,
+  119996,
+  119997,
+  120004,
+  120005,
+  120070,
+  120071,
+  120075,
+  120077,
+  120085,
+  120086,
+  120093,
+  120094,
+  120122,
+  120123,
+  120127,
+  120128,
+  120133,
+  120134,
+  120135,
+  120138,
+  120145,
+  120146,
+  120486,
+  120488,
+  120780,
+  120782,
+  120832,
+  121484,
+  121499,
+  121504,
+  121505,
+  121520,
+  122624,
+  122655,
+  122661,
+  122667,
+  122880,
+  122887,
+  122888,
+  122905,
+  122907,
+  122914,
+  122915,
+  122917,
+  122918,
+  122923,
+  122928,
+  122990,
+  123023,
+  123024,
+  123136,
+  123181,
+  123184,
+  123198,
+  123200,
+  123210,
+  123214,
+  123216,
+  123536,
+  123567,
+  123584,
+  123642,
+  123647,
+  123648,
+  124112,
+  124154,
+  124368,
+  124411,
+  124415,
+  124416,
+  124608,
+  124639,
+  124640,
+  124662,
+  124670,
+  124672,
+  124896,
+  124903,
+  124904,
+  124908,
+  124909,
+  124911,
+  124912,
+  124927,
+  124928,
+  125125,
+  125127,
+  125143,
+  125184,
+  125260,
+  125264,
+  125274,
+  125278,
+  125280,
+  126065,
+  126133,
+  126209,
+  126270,
+  126464,
+  126468,
+  126469,
+  126496,
+  126497,
+  126499,
+  126500,
+  126501,
+  126503,
+  126504,
+  126505,
+  126515,
+  126516,
+  126520,
+  126521,
+  126522,
+  126523,
+  126524,
+  126530,
+  126531,
+  126535,
+  126536,
+  126537,
+  126538,
+  126539,
+  126540,
+  126541,
+  126544,
+  126545,
+  126547,
+  126548,
+  126549,
+  126551,
+  126552,
+  126553,
+  126554,
+  126555,
+  126556,
+  126557,
+  126558,
+  126559,
+  126560,
+  126561,
+  126563,
+  126564,
+  126565,
+  126567,
+  126571,
+  126572,
+  126579,
+  126580,
+  126584,
+  126585,
+  126589,
+  126590,
+  126591,
+  126592,
+  126602,
+  126603,
+  126620,
+  126625,
+  126628,
+  126629,
+  126634,
+  126635,
+  126652,
+  126704,
+  126706,
+  126976,
+  127020,
+  127024,
+  127124,
+  127136,
+  127151,
+  127153,
+  127168,
+  127169,
+  127184,
+  127185,
+  127222,
+  127232,
+  127406,
+  127462,
+  127488,
+  127489,
+  127491,
+  127504,
+  127548,
+  127552,
+  127561,
+  127568,
+  127570,
+  127584,
+  127590,
+  127744,
+  128729,
+  128732,
+  128749,
+  128752,
+  128765,
+  128768,
+  128986,
+  128992,
+  129004,
+  129008,
+  129009,
+  129024,
+  129036,
+  129040,
+  129096,
+  129104,
+  129114,
+  129120,
+  129160,
+  129168,
+  129198,
+  129200,
+  129212,
+  129216,
+  129218,
+  129232,
+  129241,
+  129280,
+  129624,
+  129632,
+  129646,
+  129648,
+  129661,
+  129664,
+  129675,
+  129678,
+  129735,
+  129736,
+  129737,
+  129741,
+  129757,
+  129759,
+  129771,
+  129775,
+  129785,
+  129792,
+  129939,
+  129940,
+  130043,
+  131072,
+  173792,
+  173824,
+  178206,
+  178208,
+  183982,
+  183984,
+  191457,
+  191472,
+  192094,
+  194560,
+  195102,
+  196608,
+  201547,
+  201552,
+  210042,
+  917505,
+  917506,
+  917536,
+  917632,
+  917760,
+  918e3
+];
+var SCRIPT_RANGE_IDS = [
+  1,
+  75,
+  1,
+  75,
+  1,
+  75,
+  1,
+  75,
+  1,
+  75,
+  1,
+  75,
+  1,
+  75,
+  1,
+  75,
+  1,
+  16,
+  1,
+  2,
+  47,
+  1,
+  47,
+  0,
+  47,
+  1,
+  47,
+  0,
+  47,
+  1,
+  47,
+  1,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  28,
+  47,
+  32,
+  2,
+  32,
+  0,
+  7,
+  0,
+  7,
+  0,
+  7,
+  0,
+  57,
+  0,
+  57,
+  0,
+  57,
+  0,
+  6,
+  1,
+  6,
+  1,
+  6,
+  1,
+  6,
+  1,
+  6,
+  1,
+  6,
+  2,
+  6,
+  2,
+  6,
+  1,
+  6,
+  146,
+  0,
+  146,
+  0,
+  146,
+  6,
+  158,
+  0,
+  106,
+  0,
+  106,
+  132,
+  0,
+  132,
+  0,
+  86,
+  0,
+  86,
+  0,
+  146,
+  0,
+  6,
+  0,
+  6,
+  1,
+  6,
+  34,
+  2,
+  34,
+  1,
+  34,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  13,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  50,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  48,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  121,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  154,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  0,
+  157,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  64,
+  0,
+  85,
+  0,
+  85,
+  0,
+  85,
+  0,
+  85,
+  0,
+  85,
+  0,
+  85,
+  0,
+  85,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  139,
+  0,
+  159,
+  0,
+  1,
+  159,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  74,
+  0,
+  160,
+  0,
+  160,
+  0,
+  160,
+  0,
+  160,
+  0,
+  160,
+  0,
+  160,
+  1,
+  160,
+  0,
+  100,
+  43,
+  0,
+  43,
+  0,
+  43,
+  0,
+  43,
+  1,
+  43,
+  53,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  26,
+  0,
+  26,
+  0,
+  21,
+  109,
+  0,
+  131,
+  1,
+  131,
+  0,
+  147,
+  0,
+  147,
+  55,
+  1,
+  0,
+  20,
+  0,
+  148,
+  0,
+  148,
+  0,
+  148,
+  0,
+  70,
+  0,
+  70,
+  0,
+  70,
+  0,
+  97,
+  1,
+  97,
+  1,
+  97,
+  0,
+  97,
+  0,
+  97,
+  0,
+  21,
+  0,
+  77,
+  0,
+  77,
+  0,
+  77,
+  0,
+  77,
+  0,
+  77,
+  149,
+  0,
+  149,
+  0,
+  104,
+  0,
+  104,
+  0,
+  104,
+  0,
+  104,
+  70,
+  19,
+  0,
+  19,
+  150,
+  0,
+  150,
+  0,
+  150,
+  0,
+  150,
+  0,
+  150,
+  0,
+  2,
+  0,
+  2,
+  0,
+  9,
+  0,
+  9,
+  143,
+  12,
+  0,
+  12,
+  76,
+  0,
+  76,
+  0,
+  76,
+  110,
+  32,
+  0,
+  43,
+  0,
+  43,
+  143,
+  0,
+  2,
+  1,
+  2,
+  1,
+  2,
+  1,
+  2,
+  1,
+  2,
+  1,
+  2,
+  1,
+  0,
+  75,
+  47,
+  32,
+  75,
+  47,
+  75,
+  47,
+  75,
+  32,
+  75,
+  47,
+  2,
+  75,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  47,
+  0,
+  1,
+  2,
+  1,
+  0,
+  1,
+  75,
+  0,
+  1,
+  75,
+  1,
+  0,
+  75,
+  0,
+  1,
+  0,
+  2,
+  0,
+  1,
+  47,
+  1,
+  75,
+  1,
+  75,
+  1,
+  75,
+  1,
+  75,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  18,
+  1,
+  0,
+  1,
+  44,
+  75,
+  28,
+  0,
+  28,
+  43,
+  0,
+  43,
+  0,
+  43,
+  0,
+  161,
+  0,
+  161,
+  0,
+  161,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  32,
+  1,
+  0,
+  52,
+  0,
+  52,
+  0,
+  52,
+  0,
+  1,
+  52,
+  1,
+  52,
+  1,
+  52,
+  2,
+  53,
+  1,
+  52,
+  1,
+  0,
+  58,
+  0,
+  2,
+  1,
+  58,
+  1,
+  65,
+  1,
+  65,
+  0,
+  16,
+  0,
+  53,
+  0,
+  1,
+  16,
+  1,
+  0,
+  1,
+  65,
+  53,
+  0,
+  1,
+  53,
+  1,
+  65,
+  1,
+  65,
+  1,
+  52,
+  1,
+  52,
+  173,
+  0,
+  173,
+  0,
+  80,
+  168,
+  0,
+  32,
+  10,
+  0,
+  1,
+  75,
+  1,
+  75,
+  0,
+  75,
+  145,
+  0,
+  1,
+  0,
+  127,
+  0,
+  133,
+  0,
+  133,
+  0,
+  34,
+  67,
+  1,
+  67,
+  130,
+  0,
+  130,
+  53,
+  0,
+  62,
+  0,
+  1,
+  62,
+  0,
+  62,
+  100,
+  0,
+  25,
+  0,
+  25,
+  0,
+  25,
+  0,
+  25,
+  100,
+  151,
+  0,
+  151,
+  91,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  75,
+  1,
+  75,
+  47,
+  75,
+  1,
+  0,
+  26,
+  91,
+  0,
+  91,
+  0,
+  53,
+  0,
+  53,
+  0,
+  53,
+  0,
+  52,
+  0,
+  52,
+  0,
+  75,
+  0,
+  7,
+  0,
+  57,
+  0,
+  57,
+  0,
+  57,
+  0,
+  57,
+  0,
+  57,
+  0,
+  57,
+  6,
+  1,
+  6,
+  0,
+  6,
+  2,
+  1,
+  0,
+  2,
+  32,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  6,
+  0,
+  6,
+  0,
+  1,
+  0,
+  1,
+  75,
+  1,
+  75,
+  1,
+  65,
+  1,
+  65,
+  1,
+  53,
+  0,
+  53,
+  0,
+  53,
+  0,
+  53,
+  0,
+  53,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  79,
+  0,
+  79,
+  0,
+  79,
+  0,
+  79,
+  0,
+  79,
+  0,
+  79,
+  0,
+  79,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  47,
+  0,
+  1,
+  0,
+  47,
+  0,
+  1,
+  2,
+  0,
+  81,
+  0,
+  22,
+  0,
+  2,
+  1,
+  0,
+  113,
+  0,
+  113,
+  45,
+  0,
+  115,
+  0,
+  167,
+  0,
+  167,
+  116,
+  0,
+  116,
+  0,
+  33,
+  135,
+  123,
+  0,
+  123,
+  0,
+  122,
+  0,
+  122,
+  0,
+  39,
+  0,
+  23,
+  0,
+  23,
+  169,
+  0,
+  169,
+  0,
+  169,
+  0,
+  169,
+  0,
+  169,
+  0,
+  169,
+  0,
+  169,
+  0,
+  169,
+  0,
+  163,
+  0,
+  78,
+  0,
+  78,
+  0,
+  78,
+  0,
+  75,
+  0,
+  75,
+  0,
+  75,
+  0,
+  30,
+  0,
+  30,
+  0,
+  30,
+  0,
+  30,
+  0,
+  30,
+  0,
+  30,
+  59,
+  0,
+  59,
+  125,
+  101,
+  0,
+  101,
+  0,
+  56,
+  0,
+  56,
+  0,
+  56,
+  128,
+  0,
+  128,
+  82,
+  0,
+  82,
+  137,
+  0,
+  94,
+  93,
+  0,
+  93,
+  0,
+  93,
+  68,
+  0,
+  68,
+  0,
+  68,
+  0,
+  68,
+  0,
+  68,
+  0,
+  68,
+  0,
+  68,
+  0,
+  68,
+  0,
+  118,
+  114,
+  0,
+  87,
+  0,
+  87,
+  0,
+  8,
+  0,
+  8,
+  61,
+  0,
+  61,
+  60,
+  0,
+  60,
+  129,
+  0,
+  129,
+  0,
+  129,
+  0,
+  119,
+  0,
+  112,
+  0,
+  112,
+  0,
+  112,
+  54,
+  0,
+  54,
+  0,
+  42,
+  0,
+  42,
+  0,
+  42,
+  0,
+  6,
+  0,
+  172,
+  0,
+  172,
+  0,
+  172,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  117,
+  0,
+  140,
+  0,
+  120,
+  0,
+  27,
+  0,
+  40,
+  0,
+  17,
+  0,
+  17,
+  0,
+  17,
+  63,
+  0,
+  63,
+  0,
+  141,
+  0,
+  141,
+  0,
+  24,
+  0,
+  24,
+  0,
+  83,
+  0,
+  134,
+  0,
+  139,
+  0,
+  71,
+  0,
+  71,
+  0,
+  99,
+  0,
+  99,
+  0,
+  99,
+  0,
+  99,
+  0,
+  99,
+  0,
+  72,
+  0,
+  72,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  2,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  46,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  166,
+  0,
+  105,
+  0,
+  105,
+  0,
+  162,
+  0,
+  162,
+  0,
+  136,
+  0,
+  136,
+  0,
+  96,
+  0,
+  96,
+  0,
+  97,
+  0,
+  153,
+  0,
+  153,
+  0,
+  100,
+  0,
+  4,
+  0,
+  4,
+  0,
+  4,
+  0,
+  36,
+  0,
+  171,
+  0,
+  171,
+  35,
+  0,
+  35,
+  0,
+  35,
+  0,
+  35,
+  0,
+  35,
+  0,
+  35,
+  0,
+  35,
+  0,
+  35,
+  0,
+  103,
+  0,
+  103,
+  0,
+  103,
+  0,
+  174,
+  0,
+  142,
+  0,
+  21,
+  126,
+  0,
+  34,
+  0,
+  134,
+  0,
+  144,
+  0,
+  144,
+  0,
+  15,
+  0,
+  15,
+  0,
+  15,
+  0,
+  15,
+  0,
+  88,
+  0,
+  88,
+  0,
+  88,
+  0,
+  89,
+  0,
+  89,
+  0,
+  89,
+  0,
+  89,
+  0,
+  89,
+  0,
+  89,
+  0,
+  89,
+  0,
+  49,
+  0,
+  49,
+  0,
+  49,
+  0,
+  49,
+  0,
+  49,
+  0,
+  49,
+  0,
+  164,
+  0,
+  164,
+  0,
+  84,
+  0,
+  66,
+  0,
+  66,
+  0,
+  66,
+  0,
+  80,
+  0,
+  154,
+  0,
+  154,
+  29,
+  0,
+  29,
+  0,
+  29,
+  0,
+  29,
+  0,
+  31,
+  0,
+  38,
+  0,
+  38,
+  0,
+  5,
+  0,
+  51,
+  0,
+  10,
+  0,
+  98,
+  0,
+  98,
+  0,
+  98,
+  155,
+  0,
+  155,
+  0,
+  11,
+  0,
+  11,
+  0,
+  124,
+  0,
+  124,
+  0,
+  124,
+  0,
+  124,
+  0,
+  124,
+  0,
+  73,
+  0,
+  90,
+  0,
+  14,
+  0,
+  14,
+  0,
+  95,
+  0,
+  95,
+  0,
+  95,
+  0,
+  156,
+  107,
+  52,
+  69,
+  0,
+  52,
+  0,
+  156,
+  69,
+  0,
+  69,
+  156,
+  0,
+  156,
+  0,
+  65,
+  0,
+  65,
+  0,
+  65,
+  0,
+  65,
+  58,
+  65,
+  0,
+  58,
+  0,
+  58,
+  0,
+  65,
+  0,
+  65,
+  0,
+  107,
+  0,
+  37,
+  0,
+  37,
+  0,
+  37,
+  0,
+  37,
+  0,
+  37,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  2,
+  0,
+  2,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  2,
+  1,
+  2,
+  1,
+  2,
+  1,
+  2,
+  1,
+  0,
+  47,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  138,
+  0,
+  138,
+  0,
+  138,
+  0,
+  75,
+  0,
+  75,
+  0,
+  44,
+  0,
+  44,
+  0,
+  44,
+  0,
+  44,
+  0,
+  44,
+  0,
+  32,
+  0,
+  32,
+  0,
+  108,
+  0,
+  108,
+  0,
+  108,
+  0,
+  108,
+  0,
+  165,
+  0,
+  170,
+  0,
+  170,
+  0,
+  102,
+  0,
+  111,
+  0,
+  111,
+  0,
+  152,
+  0,
+  152,
+  0,
+  152,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  41,
+  0,
+  92,
+  0,
+  92,
+  0,
+  3,
+  0,
+  3,
+  0,
+  3,
+  0,
+  1,
+  0,
+  1,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  6,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  58,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  52,
+  0,
+  52,
+  0,
+  52,
+  0,
+  52,
+  0,
+  52,
+  0,
+  52,
+  0,
+  52,
+  0,
+  52,
+  0,
+  1,
+  0,
+  1,
+  0,
+  2,
+  0
+];
+
+// src/measure/script.ts
+var FIRST_COUNTED_ID = 3;
+var bmp;
+var astralStarts;
+var astralIds;
+function bmpScriptIds() {
+  if (bmp) return bmp;
+  const table2 = new Uint8Array(65536);
+  const starts = [];
+  const ids = [];
+  for (let r = 0; r < SCRIPT_RANGE_STARTS.length; r++) {
+    const start = SCRIPT_RANGE_STARTS[r];
+    const end = SCRIPT_RANGE_STARTS[r + 1] ?? 1114112;
+    const id = SCRIPT_RANGE_IDS[r];
+    if (start < 65536) table2.fill(id, start, Math.min(end, 65536));
+    if (end > 65536) {
+      starts.push(Math.max(start, 65536));
+      ids.push(id);
+    }
+  }
+  astralStarts = Int32Array.from(starts);
+  astralIds = Uint8Array.from(ids);
+  bmp = table2;
+  return table2;
+}
+function astralScriptId(cp) {
+  if (!astralStarts) bmpScriptIds();
+  const starts = astralStarts;
+  let lo = 0;
+  let hi = starts.length - 1;
+  while (lo < hi) {
+    const midpoint = lo + hi + 1 >> 1;
+    if (starts[midpoint] <= cp) lo = midpoint;
+    else hi = midpoint - 1;
+  }
+  return astralIds[lo];
+}
+function scriptProfile(text) {
+  const counts = new Int32Array(SCRIPT_NAMES.length);
+  const table2 = bmpScriptIds();
+  for (let i = 0; i < text.length; i++) {
+    const unit = text.charCodeAt(i);
+    let id;
+    if (unit >= 55296 && unit <= 56319 && i + 1 < text.length) {
+      const low = text.charCodeAt(i + 1);
+      if (low >= 56320 && low <= 57343) {
+        id = astralScriptId((unit - 55296 << 10) + (low - 56320) + 65536);
+        i++;
+      } else id = table2[unit];
+    } else id = table2[unit];
+    counts[id] = counts[id] + 1;
+  }
+  return profileFromCounts(counts);
+}
+function profileFromCounts(counts) {
+  const profile = {};
+  for (let id = FIRST_COUNTED_ID; id < counts.length; id++) {
+    const n = counts[id];
+    if (n > 0) profile[SCRIPT_NAMES[id]] = n;
+  }
+  return profile;
+}
+function dominantScriptOf(profile) {
+  let best = null;
+  let bestCount = 0;
+  for (const name in profile) {
+    const n = profile[name];
+    if (n > bestCount || n === bestCount && best !== null && name < best) {
+      best = name;
+      bestCount = n;
+    }
+  }
+  return best;
+}
+
+// src/measure/language.ts
+var OTHER = "other";
+var UNDETERMINED = "und";
+var twoLetterCodes;
+var bibliographicCodes;
+function iso6393Of(code) {
+  const c = code.toLowerCase();
+  if (c.length === 2) {
+    twoLetterCodes ??= new Map(Object.entries(iso6393To1).map(([three, two]) => [two, three]));
+    return twoLetterCodes.get(c);
+  }
+  if (c.length === 3) {
+    bibliographicCodes ??= new Map(
+      Object.entries(iso6393To2B).filter(([three, b]) => three !== b).map(([three, b]) => [b, three])
+    );
+    return bibliographicCodes.get(c) ?? c;
+  }
+  return void 0;
+}
+function createLanguageDetector(languages, detection) {
+  const keyOfLabel = /* @__PURE__ */ new Map();
+  for (const spec of languages) {
+    for (const code of [spec.iso6393, ...spec.covers]) if (!keyOfLabel.has(code)) keyOfLabel.set(code, spec.key);
+  }
+  const scriptsOfKey = new Map(languages.map((spec) => [spec.key, spec.scripts]));
+  const keyOfLowerKey = new Map(languages.map((spec) => [spec.key.toLowerCase(), spec.key]));
+  const routes = /* @__PURE__ */ new Map();
+  const francKnows = new Set(francLanguages());
+  const declaredCache = /* @__PURE__ */ new Map();
+  const routeOf = (script) => {
+    const cached = routes.get(script);
+    if (cached !== void 0) return cached;
+    const listing = languages.filter((spec) => spec.scripts.includes(script));
+    const candidates = new Set(MAJOR_LANGUAGES[script] ?? []);
+    for (const spec of listing) for (const code of [spec.iso6393, ...spec.covers]) candidates.add(code);
+    const labellable = [...candidates].filter((code) => francKnows.has(code));
+    let route = null;
+    if (labellable.length > 1) route = { labeller: createFrancLabeller(labellable, 1) };
+    else if (listing.length > 0) route = { direct: listing[0].iso6393 };
+    else if (candidates.size > 0) route = { direct: labellable[0] ?? [...candidates][0] };
+    routes.set(script, route);
+    return route;
+  };
+  const labelWith = (route, text) => route === null ? UNDETERMINED : "direct" in route ? route.direct : route.labeller(text);
+  const decide = (detected) => ({
+    detected,
+    language: detected === UNDETERMINED ? UNDETERMINED : keyOfLabel.get(detected) ?? OTHER
+  });
+  return {
+    detect(text, dominantScript, letters) {
+      if (dominantScript === null || letters < detection.minChars) return { detected: UNDETERMINED, language: UNDETERMINED };
+      const route = routeOf(dominantScript);
+      if (route === null) return { detected: UNDETERMINED, language: OTHER };
+      let detected = labelWith(route, text);
+      if (detected === UNDETERMINED && text.length > MAX_LENGTH) {
+        const sampleScript = dominantScriptOf(scriptProfile(text.slice(0, MAX_LENGTH)));
+        if (sampleScript !== null && sampleScript !== dominantScript) detected = labelWith(routeOf(sampleScript), text);
+      }
+      return decide(detected);
+    },
+    declared(value) {
+      const cached = declaredCache.get(value);
+      if (cached !== void 0) return cached;
+      const trimmed = value.trim();
+      let key = keyOfLowerKey.get(trimmed.toLowerCase());
+      if (key === void 0) {
+        const subtag = parse(trimmed.replace(/_/g, "-"), { forgiving: true }).language;
+        const code = subtag ? iso6393Of(subtag) : void 0;
+        key = code && keyOfLabel.get(code) || OTHER;
+      }
+      if (declaredCache.size < 1e4) declaredCache.set(value, key);
+      return key;
+    },
+    scriptsOf(key) {
+      return scriptsOfKey.get(key);
+    }
+  };
+}
+
+// src/measure/data/word-break.generated.ts
+var WORD_BREAK_RANGE_STARTS = [
+  0,
+  34,
+  35,
+  39,
+  40,
+  44,
+  45,
+  46,
+  47,
+  48,
+  58,
+  59,
+  60,
+  65,
+  91,
+  95,
+  96,
+  97,
+  123,
+  169,
+  170,
+  171,
+  173,
+  174,
+  175,
+  181,
+  182,
+  183,
+  184,
+  185,
+  186,
+  187,
+  192,
+  215,
+  216,
+  247,
+  248,
+  728,
+  734,
+  746,
+  748,
+  768,
+  880,
+  885,
+  886,
+  888,
+  890,
+  894,
+  895,
+  896,
+  902,
+  903,
+  904,
+  907,
+  908,
+  909,
+  910,
+  930,
+  931,
+  1014,
+  1015,
+  1154,
+  1155,
+  1162,
+  1328,
+  1329,
+  1367,
+  1369,
+  1373,
+  1374,
+  1375,
+  1376,
+  1417,
+  1418,
+  1419,
+  1425,
+  1470,
+  1471,
+  1472,
+  1473,
+  1475,
+  1476,
+  1478,
+  1479,
+  1480,
+  1488,
+  1515,
+  1519,
+  1523,
+  1524,
+  1525,
+  1536,
+  1542,
+  1548,
+  1550,
+  1552,
+  1563,
+  1564,
+  1565,
+  1568,
+  1611,
+  1632,
+  1642,
+  1643,
+  1644,
+  1645,
+  1646,
+  1648,
+  1649,
+  1748,
+  1749,
+  1750,
+  1757,
+  1758,
+  1759,
+  1765,
+  1767,
+  1769,
+  1770,
+  1774,
+  1776,
+  1786,
+  1789,
+  1791,
+  1792,
+  1807,
+  1809,
+  1810,
+  1840,
+  1867,
+  1869,
+  1958,
+  1969,
+  1970,
+  1984,
+  1994,
+  2027,
+  2036,
+  2038,
+  2040,
+  2041,
+  2042,
+  2043,
+  2045,
+  2046,
+  2048,
+  2070,
+  2074,
+  2075,
+  2084,
+  2085,
+  2088,
+  2089,
+  2094,
+  2112,
+  2137,
+  2140,
+  2144,
+  2155,
+  2160,
+  2184,
+  2185,
+  2192,
+  2194,
+  2199,
+  2208,
+  2250,
+  2274,
+  2275,
+  2308,
+  2362,
+  2365,
+  2366,
+  2384,
+  2385,
+  2392,
+  2402,
+  2404,
+  2406,
+  2416,
+  2417,
+  2433,
+  2436,
+  2437,
+  2445,
+  2447,
+  2449,
+  2451,
+  2473,
+  2474,
+  2481,
+  2482,
+  2483,
+  2486,
+  2490,
+  2492,
+  2493,
+  2494,
+  2501,
+  2503,
+  2505,
+  2507,
+  2510,
+  2511,
+  2519,
+  2520,
+  2524,
+  2526,
+  2527,
+  2530,
+  2532,
+  2534,
+  2544,
+  2546,
+  2556,
+  2557,
+  2558,
+  2559,
+  2561,
+  2564,
+  2565,
+  2571,
+  2575,
+  2577,
+  2579,
+  2601,
+  2602,
+  2609,
+  2610,
+  2612,
+  2613,
+  2615,
+  2616,
+  2618,
+  2620,
+  2621,
+  2622,
+  2627,
+  2631,
+  2633,
+  2635,
+  2638,
+  2641,
+  2642,
+  2649,
+  2653,
+  2654,
+  2655,
+  2662,
+  2672,
+  2674,
+  2677,
+  2678,
+  2689,
+  2692,
+  2693,
+  2702,
+  2703,
+  2706,
+  2707,
+  2729,
+  2730,
+  2737,
+  2738,
+  2740,
+  2741,
+  2746,
+  2748,
+  2749,
+  2750,
+  2758,
+  2759,
+  2762,
+  2763,
+  2766,
+  2768,
+  2769,
+  2784,
+  2786,
+  2788,
+  2790,
+  2800,
+  2809,
+  2810,
+  2816,
+  2817,
+  2820,
+  2821,
+  2829,
+  2831,
+  2833,
+  2835,
+  2857,
+  2858,
+  2865,
+  2866,
+  2868,
+  2869,
+  2874,
+  2876,
+  2877,
+  2878,
+  2885,
+  2887,
+  2889,
+  2891,
+  2894,
+  2901,
+  2904,
+  2908,
+  2910,
+  2911,
+  2914,
+  2916,
+  2918,
+  2928,
+  2929,
+  2930,
+  2946,
+  2947,
+  2948,
+  2949,
+  2955,
+  2958,
+  2961,
+  2962,
+  2966,
+  2969,
+  2971,
+  2972,
+  2973,
+  2974,
+  2976,
+  2979,
+  2981,
+  2984,
+  2987,
+  2990,
+  3002,
+  3006,
+  3011,
+  3014,
+  3017,
+  3018,
+  3022,
+  3024,
+  3025,
+  3031,
+  3032,
+  3046,
+  3056,
+  3072,
+  3077,
+  3085,
+  3086,
+  3089,
+  3090,
+  3113,
+  3114,
+  3130,
+  3132,
+  3133,
+  3134,
+  3141,
+  3142,
+  3145,
+  3146,
+  3150,
+  3157,
+  3159,
+  3160,
+  3163,
+  3164,
+  3166,
+  3168,
+  3170,
+  3172,
+  3174,
+  3184,
+  3200,
+  3201,
+  3204,
+  3205,
+  3213,
+  3214,
+  3217,
+  3218,
+  3241,
+  3242,
+  3252,
+  3253,
+  3258,
+  3260,
+  3261,
+  3262,
+  3269,
+  3270,
+  3273,
+  3274,
+  3278,
+  3285,
+  3287,
+  3292,
+  3295,
+  3296,
+  3298,
+  3300,
+  3302,
+  3312,
+  3313,
+  3315,
+  3316,
+  3328,
+  3332,
+  3341,
+  3342,
+  3345,
+  3346,
+  3387,
+  3389,
+  3390,
+  3397,
+  3398,
+  3401,
+  3402,
+  3406,
+  3407,
+  3412,
+  3415,
+  3416,
+  3423,
+  3426,
+  3428,
+  3430,
+  3440,
+  3450,
+  3456,
+  3457,
+  3460,
+  3461,
+  3479,
+  3482,
+  3506,
+  3507,
+  3516,
+  3517,
+  3518,
+  3520,
+  3527,
+  3530,
+  3531,
+  3535,
+  3541,
+  3542,
+  3543,
+  3544,
+  3552,
+  3558,
+  3568,
+  3570,
+  3572,
+  3585,
+  3643,
+  3648,
+  3663,
+  3664,
+  3674,
+  3713,
+  3715,
+  3716,
+  3717,
+  3718,
+  3723,
+  3724,
+  3748,
+  3749,
+  3750,
+  3751,
+  3774,
+  3776,
+  3781,
+  3782,
+  3783,
+  3784,
+  3791,
+  3792,
+  3802,
+  3804,
+  3808,
+  3840,
+  3841,
+  3864,
+  3866,
+  3872,
+  3882,
+  3893,
+  3894,
+  3895,
+  3896,
+  3897,
+  3898,
+  3902,
+  3904,
+  3912,
+  3913,
+  3949,
+  3953,
+  3973,
+  3974,
+  3976,
+  3981,
+  3992,
+  3993,
+  4029,
+  4038,
+  4039,
+  4096,
+  4160,
+  4170,
+  4176,
+  4240,
+  4250,
+  4256,
+  4294,
+  4295,
+  4296,
+  4301,
+  4302,
+  4304,
+  4347,
+  4348,
+  4352,
+  4608,
+  4681,
+  4682,
+  4686,
+  4688,
+  4695,
+  4696,
+  4697,
+  4698,
+  4702,
+  4704,
+  4745,
+  4746,
+  4750,
+  4752,
+  4785,
+  4786,
+  4790,
+  4792,
+  4799,
+  4800,
+  4801,
+  4802,
+  4806,
+  4808,
+  4823,
+  4824,
+  4881,
+  4882,
+  4886,
+  4888,
+  4955,
+  4957,
+  4960,
+  4992,
+  5008,
+  5024,
+  5110,
+  5112,
+  5118,
+  5121,
+  5741,
+  5743,
+  5760,
+  5761,
+  5787,
+  5792,
+  5867,
+  5870,
+  5881,
+  5888,
+  5906,
+  5910,
+  5919,
+  5938,
+  5941,
+  5952,
+  5970,
+  5972,
+  5984,
+  5997,
+  5998,
+  6001,
+  6002,
+  6004,
+  6016,
+  6100,
+  6103,
+  6104,
+  6108,
+  6110,
+  6112,
+  6122,
+  6155,
+  6160,
+  6170,
+  6176,
+  6265,
+  6272,
+  6277,
+  6279,
+  6313,
+  6314,
+  6315,
+  6320,
+  6390,
+  6400,
+  6431,
+  6432,
+  6444,
+  6448,
+  6460,
+  6470,
+  6480,
+  6510,
+  6512,
+  6517,
+  6528,
+  6572,
+  6576,
+  6602,
+  6608,
+  6619,
+  6622,
+  6624,
+  6656,
+  6679,
+  6684,
+  6688,
+  6751,
+  6752,
+  6781,
+  6783,
+  6784,
+  6794,
+  6800,
+  6810,
+  6816,
+  6830,
+  6832,
+  6878,
+  6880,
+  6892,
+  6912,
+  6917,
+  6964,
+  6981,
+  6989,
+  6992,
+  7002,
+  7019,
+  7028,
+  7040,
+  7043,
+  7073,
+  7086,
+  7088,
+  7098,
+  7142,
+  7156,
+  7168,
+  7204,
+  7224,
+  7232,
+  7242,
+  7245,
+  7248,
+  7258,
+  7294,
+  7296,
+  7307,
+  7312,
+  7355,
+  7357,
+  7360,
+  7376,
+  7379,
+  7380,
+  7401,
+  7405,
+  7406,
+  7412,
+  7413,
+  7415,
+  7418,
+  7419,
+  7424,
+  7616,
+  7680,
+  7958,
+  7960,
+  7966,
+  7968,
+  8006,
+  8008,
+  8014,
+  8016,
+  8024,
+  8025,
+  8026,
+  8027,
+  8028,
+  8029,
+  8030,
+  8031,
+  8062,
+  8064,
+  8117,
+  8118,
+  8125,
+  8126,
+  8127,
+  8130,
+  8133,
+  8134,
+  8141,
+  8144,
+  8148,
+  8150,
+  8156,
+  8160,
+  8173,
+  8178,
+  8181,
+  8182,
+  8189,
+  8204,
+  8208,
+  8216,
+  8218,
+  8228,
+  8229,
+  8231,
+  8232,
+  8234,
+  8239,
+  8240,
+  8252,
+  8253,
+  8255,
+  8257,
+  8260,
+  8261,
+  8265,
+  8266,
+  8276,
+  8277,
+  8288,
+  8293,
+  8294,
+  8304,
+  8305,
+  8306,
+  8319,
+  8320,
+  8336,
+  8349,
+  8400,
+  8433,
+  8450,
+  8451,
+  8455,
+  8456,
+  8458,
+  8468,
+  8469,
+  8470,
+  8473,
+  8478,
+  8482,
+  8483,
+  8484,
+  8485,
+  8486,
+  8487,
+  8488,
+  8489,
+  8490,
+  8494,
+  8495,
+  8505,
+  8506,
+  8508,
+  8512,
+  8517,
+  8522,
+  8526,
+  8527,
+  8544,
+  8585,
+  8596,
+  8602,
+  8617,
+  8619,
+  8986,
+  8988,
+  9e3,
+  9001,
+  9167,
+  9168,
+  9193,
+  9204,
+  9208,
+  9211,
+  9398,
+  9410,
+  9411,
+  9450,
+  9642,
+  9644,
+  9654,
+  9655,
+  9664,
+  9665,
+  9723,
+  9727,
+  9728,
+  9733,
+  9742,
+  9743,
+  9745,
+  9746,
+  9748,
+  9750,
+  9752,
+  9753,
+  9757,
+  9758,
+  9760,
+  9761,
+  9762,
+  9764,
+  9766,
+  9767,
+  9770,
+  9771,
+  9774,
+  9776,
+  9784,
+  9787,
+  9792,
+  9793,
+  9794,
+  9795,
+  9800,
+  9812,
+  9823,
+  9825,
+  9827,
+  9828,
+  9829,
+  9831,
+  9832,
+  9833,
+  9851,
+  9852,
+  9854,
+  9856,
+  9874,
+  9880,
+  9881,
+  9882,
+  9883,
+  9885,
+  9888,
+  9890,
+  9895,
+  9896,
+  9898,
+  9900,
+  9904,
+  9906,
+  9917,
+  9919,
+  9924,
+  9926,
+  9928,
+  9929,
+  9934,
+  9936,
+  9937,
+  9938,
+  9939,
+  9941,
+  9961,
+  9963,
+  9968,
+  9974,
+  9975,
+  9979,
+  9981,
+  9982,
+  9986,
+  9987,
+  9989,
+  9990,
+  9992,
+  9998,
+  9999,
+  1e4,
+  10002,
+  10003,
+  10004,
+  10005,
+  10006,
+  10007,
+  10013,
+  10014,
+  10017,
+  10018,
+  10024,
+  10025,
+  10035,
+  10037,
+  10052,
+  10053,
+  10055,
+  10056,
+  10060,
+  10061,
+  10062,
+  10063,
+  10067,
+  10070,
+  10071,
+  10072,
+  10083,
+  10085,
+  10133,
+  10136,
+  10145,
+  10146,
+  10160,
+  10161,
+  10175,
+  10176,
+  10548,
+  10550,
+  11013,
+  11016,
+  11035,
+  11037,
+  11088,
+  11089,
+  11093,
+  11094,
+  11264,
+  11493,
+  11499,
+  11503,
+  11506,
+  11508,
+  11520,
+  11558,
+  11559,
+  11560,
+  11565,
+  11566,
+  11568,
+  11624,
+  11631,
+  11632,
+  11647,
+  11648,
+  11671,
+  11680,
+  11687,
+  11688,
+  11695,
+  11696,
+  11703,
+  11704,
+  11711,
+  11712,
+  11719,
+  11720,
+  11727,
+  11728,
+  11735,
+  11736,
+  11743,
+  11744,
+  11776,
+  11823,
+  11824,
+  11904,
+  11930,
+  11931,
+  12020,
+  12032,
+  12246,
+  12293,
+  12296,
+  12321,
+  12330,
+  12334,
+  12336,
+  12337,
+  12342,
+  12344,
+  12348,
+  12349,
+  12350,
+  12353,
+  12439,
+  12441,
+  12443,
+  12539,
+  12540,
+  12544,
+  12549,
+  12592,
+  12593,
+  12687,
+  12704,
+  12736,
+  12784,
+  12831,
+  12896,
+  12927,
+  12951,
+  12952,
+  12953,
+  12954,
+  13008,
+  13055,
+  13056,
+  13144,
+  13312,
+  19904,
+  19968,
+  42125,
+  42128,
+  42183,
+  42192,
+  42238,
+  42240,
+  42509,
+  42512,
+  42528,
+  42538,
+  42540,
+  42560,
+  42607,
+  42611,
+  42612,
+  42622,
+  42623,
+  42654,
+  42656,
+  42736,
+  42738,
+  42760,
+  42973,
+  42993,
+  43010,
+  43011,
+  43014,
+  43015,
+  43019,
+  43020,
+  43043,
+  43048,
+  43052,
+  43053,
+  43072,
+  43124,
+  43136,
+  43138,
+  43188,
+  43206,
+  43216,
+  43226,
+  43232,
+  43250,
+  43256,
+  43259,
+  43260,
+  43261,
+  43263,
+  43264,
+  43274,
+  43302,
+  43310,
+  43312,
+  43335,
+  43348,
+  43360,
+  43389,
+  43392,
+  43396,
+  43443,
+  43457,
+  43471,
+  43472,
+  43482,
+  43488,
+  43504,
+  43514,
+  43519,
+  43520,
+  43561,
+  43575,
+  43584,
+  43587,
+  43588,
+  43596,
+  43598,
+  43600,
+  43610,
+  43616,
+  43715,
+  43739,
+  43744,
+  43755,
+  43760,
+  43762,
+  43765,
+  43767,
+  43777,
+  43783,
+  43785,
+  43791,
+  43793,
+  43799,
+  43808,
+  43815,
+  43816,
+  43823,
+  43824,
+  43882,
+  43888,
+  44003,
+  44011,
+  44012,
+  44014,
+  44016,
+  44026,
+  44032,
+  55204,
+  55216,
+  55239,
+  55243,
+  55292,
+  55296,
+  57344,
+  63744,
+  64110,
+  64112,
+  64218,
+  64256,
+  64263,
+  64275,
+  64280,
+  64285,
+  64286,
+  64287,
+  64297,
+  64298,
+  64311,
+  64312,
+  64317,
+  64318,
+  64319,
+  64320,
+  64322,
+  64323,
+  64325,
+  64326,
+  64336,
+  64434,
+  64467,
+  64830,
+  64848,
+  64912,
+  64914,
+  64968,
+  65008,
+  65020,
+  65024,
+  65040,
+  65043,
+  65044,
+  65056,
+  65072,
+  65075,
+  65077,
+  65101,
+  65104,
+  65105,
+  65106,
+  65107,
+  65108,
+  65109,
+  65110,
+  65136,
+  65141,
+  65142,
+  65277,
+  65279,
+  65280,
+  65287,
+  65288,
+  65292,
+  65293,
+  65294,
+  65295,
+  65296,
+  65306,
+  65307,
+  65308,
+  65313,
+  65339,
+  65343,
+  65344,
+  65345,
+  65371,
+  65382,
+  65438,
+  65440,
+  65471,
+  65474,
+  65480,
+  65482,
+  65488,
+  65490,
+  65496,
+  65498,
+  65501,
+  65529,
+  65532
+];
+var WORD_BREAK_RANGE_VALUES = [
+  0,
+  9,
+  0,
+  8,
+  0,
+  6,
+  0,
+  7,
+  0,
+  3,
+  5,
+  6,
+  0,
+  1,
+  0,
+  4,
+  0,
+  1,
+  0,
+  16,
+  1,
+  0,
+  10,
+  16,
+  0,
+  1,
+  0,
+  5,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  11,
+  1,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  6,
+  1,
+  0,
+  1,
+  5,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  5,
+  1,
+  6,
+  1,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  2,
+  0,
+  2,
+  1,
+  5,
+  0,
+  3,
+  0,
+  6,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  10,
+  3,
+  0,
+  3,
+  6,
+  0,
+  1,
+  10,
+  1,
+  0,
+  1,
+  10,
+  3,
+  0,
+  10,
+  1,
+  10,
+  0,
+  10,
+  1,
+  3,
+  1,
+  0,
+  1,
+  0,
+  1,
+  10,
+  1,
+  10,
+  0,
+  1,
+  10,
+  1,
+  0,
+  3,
+  1,
+  10,
+  1,
+  0,
+  6,
+  0,
+  1,
+  0,
+  10,
+  0,
+  1,
+  10,
+  1,
+  10,
+  1,
+  10,
+  1,
+  10,
+  0,
+  1,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  3,
+  0,
+  10,
+  1,
+  10,
+  3,
+  10,
+  1,
+  10,
+  1,
+  10,
+  1,
+  10,
+  1,
+  10,
+  0,
+  3,
+  0,
+  1,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  10,
+  1,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  10,
+  0,
+  3,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  3,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  10,
+  0,
+  3,
+  0,
+  1,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  10,
+  0,
+  3,
+  0,
+  1,
+  0,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  10,
+  0,
+  3,
+  0,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  10,
+  0,
+  3,
+  0,
+  1,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  10,
+  0,
+  3,
+  0,
+  1,
+  10,
+  0,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  10,
+  1,
+  0,
+  1,
+  10,
+  0,
+  1,
+  10,
+  0,
+  3,
+  0,
+  1,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  3,
+  0,
+  10,
+  0,
+  11,
+  0,
+  11,
+  0,
+  3,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  3,
+  0,
+  11,
+  0,
+  1,
+  0,
+  10,
+  0,
+  3,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  10,
+  0,
+  11,
+  3,
+  0,
+  11,
+  3,
+  11,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  11,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  10,
+  0,
+  1,
+  10,
+  0,
+  1,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  3,
+  0,
+  10,
+  3,
+  0,
+  1,
+  0,
+  1,
+  10,
+  1,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  10,
+  0,
+  3,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  3,
+  0,
+  11,
+  0,
+  1,
+  10,
+  0,
+  11,
+  0,
+  11,
+  0,
+  10,
+  3,
+  0,
+  3,
+  0,
+  11,
+  0,
+  10,
+  0,
+  10,
+  0,
+  10,
+  1,
+  10,
+  1,
+  0,
+  3,
+  0,
+  10,
+  0,
+  10,
+  1,
+  10,
+  1,
+  3,
+  1,
+  10,
+  0,
+  1,
+  10,
+  0,
+  3,
+  0,
+  1,
+  3,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  10,
+  1,
+  10,
+  1,
+  10,
+  1,
+  10,
+  1,
+  0,
+  1,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  7,
+  0,
+  7,
+  0,
+  5,
+  0,
+  10,
+  4,
+  0,
+  16,
+  0,
+  4,
+  0,
+  6,
+  0,
+  16,
+  0,
+  4,
+  0,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  16,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  17,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  1,
+  17,
+  1,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  16,
+  0,
+  1,
+  0,
+  1,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  1,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  10,
+  11,
+  16,
+  11,
+  0,
+  11,
+  1,
+  16,
+  0,
+  11,
+  0,
+  10,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  16,
+  0,
+  16,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  3,
+  1,
+  0,
+  1,
+  10,
+  0,
+  10,
+  0,
+  1,
+  10,
+  1,
+  10,
+  0,
+  1,
+  0,
+  1,
+  10,
+  1,
+  10,
+  1,
+  10,
+  1,
+  10,
+  0,
+  10,
+  0,
+  1,
+  0,
+  10,
+  1,
+  10,
+  0,
+  3,
+  0,
+  10,
+  1,
+  0,
+  1,
+  0,
+  1,
+  10,
+  3,
+  1,
+  10,
+  0,
+  1,
+  10,
+  0,
+  11,
+  0,
+  10,
+  1,
+  10,
+  0,
+  1,
+  3,
+  0,
+  11,
+  3,
+  11,
+  0,
+  1,
+  10,
+  0,
+  1,
+  10,
+  1,
+  10,
+  0,
+  3,
+  0,
+  11,
+  0,
+  11,
+  1,
+  10,
+  0,
+  1,
+  10,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  10,
+  0,
+  10,
+  0,
+  3,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  1,
+  0,
+  1,
+  0,
+  2,
+  10,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  0,
+  2,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  5,
+  0,
+  10,
+  0,
+  4,
+  0,
+  4,
+  6,
+  0,
+  7,
+  0,
+  6,
+  5,
+  0,
+  1,
+  0,
+  1,
+  0,
+  10,
+  0,
+  7,
+  0,
+  6,
+  0,
+  7,
+  0,
+  3,
+  5,
+  6,
+  0,
+  1,
+  0,
+  4,
+  0,
+  1,
+  0,
+  11,
+  10,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  11,
+  0,
+  10,
+  0
+];
+
+// src/measure/words.ts
+var OTHER2 = 0;
+var ALETTER = 1;
+var HEBREW_LETTER = 2;
+var NUMERIC = 3;
+var EXTEND_NUM_LET = 4;
+var MID_LETTER = 5;
+var MID_NUM = 6;
+var MID_NUM_LET = 7;
+var SINGLE_QUOTE = 8;
+var DOUBLE_QUOTE = 9;
+var IGNORABLE = 10;
+var NEEDS_SEGMENTER = 11;
+var CLASS_MASK = 15;
+var EXTENDED_PICTOGRAPHIC = 16;
+var ZWJ = 8205;
+var OUT = 0;
+var IN = 1;
+var PENDING = 2;
+var SEGMENTER_LOCALE = "und";
+var segmenter;
+var classes;
+function classTable() {
+  if (classes) return classes;
+  const table2 = new Uint8Array(65536);
+  for (let r = 0; r < WORD_BREAK_RANGE_STARTS.length; r++) {
+    const end = WORD_BREAK_RANGE_STARTS[r + 1] ?? 65536;
+    table2.fill(WORD_BREAK_RANGE_VALUES[r], WORD_BREAK_RANGE_STARTS[r], end);
+  }
+  let probe = "";
+  for (let cp = 0; cp < 65536; cp++) {
+    const cls = table2[cp] & CLASS_MASK;
+    if (cls !== OTHER2 && cls !== NEEDS_SEGMENTER) probe += String.fromCharCode(cp);
+  }
+  for (const m of probe.matchAll(new RegExp("\\P{Assigned}", "gu"))) {
+    const cp = m[0].charCodeAt(0);
+    table2[cp] = table2[cp] & ~CLASS_MASK | NEEDS_SEGMENTER;
+  }
+  classes = table2;
+  return table2;
+}
+function wordSegmenter() {
+  segmenter ??= new Intl.Segmenter(SEGMENTER_LOCALE, { granularity: "word" });
+  return segmenter;
+}
+var offsets = new Int32Array(1024);
+function scan(text, record) {
+  const table2 = classTable();
+  const n = text.length;
+  let count3 = 0;
+  let state = OUT;
+  let start = 0;
+  let end = 0;
+  let coreEnd = 0;
+  let midAt = 0;
+  let midEnd = 0;
+  let last = OTHER2;
+  let mid = OTHER2;
+  let hasCore = false;
+  let connectors = 0;
+  for (let i = 0; i < n; i++) {
+    let cls = table2[text.charCodeAt(i)];
+    if (cls >= NEEDS_SEGMENTER) {
+      if ((cls & EXTENDED_PICTOGRAPHIC) !== 0 && i > 0 && text.charCodeAt(i - 1) === ZWJ) return -1;
+      cls &= CLASS_MASK;
+      if (cls === NEEDS_SEGMENTER) return -1;
+    }
+    if (state === IN) {
+      if (cls === IGNORABLE) {
+        end = i + 1;
+        continue;
+      }
+      if (cls >= ALETTER && cls <= EXTEND_NUM_LET) {
+        if (cls === EXTEND_NUM_LET) connectors++;
+        else hasCore = true;
+        last = cls;
+        end = coreEnd = i + 1;
+        continue;
+      }
+      const letterBefore = last === ALETTER || last === HEBREW_LETTER;
+      if (cls === MID_LETTER && letterBefore || // WB6
+      (cls === MID_NUM_LET || cls === SINGLE_QUOTE) && (letterBefore || last === NUMERIC) || // WB6, WB12, WB7a
+      cls === MID_NUM && last === NUMERIC || // WB12
+      cls === DOUBLE_QUOTE && last === HEBREW_LETTER) {
+        state = PENDING;
+        mid = cls;
+        midAt = midEnd = i + 1;
+        continue;
+      }
+      count3 = emit(record, count3, start, end, wordLike(last, hasCore, connectors, end > coreEnd));
+      state = OUT;
+      continue;
+    }
+    if (state === PENDING) {
+      if (cls === IGNORABLE) {
+        midEnd = i + 1;
+        continue;
+      }
+      const letter2 = cls === ALETTER || cls === HEBREW_LETTER;
+      if (letter2 && (last === ALETTER || last === HEBREW_LETTER) && mid !== MID_NUM && mid !== DOUBLE_QUOTE || // WB7
+      cls === HEBREW_LETTER && last === HEBREW_LETTER && mid === DOUBLE_QUOTE || // WB7c
+      cls === NUMERIC && last === NUMERIC && mid !== MID_LETTER && mid !== DOUBLE_QUOTE) {
+        hasCore = true;
+        last = cls;
+        end = coreEnd = i + 1;
+        state = IN;
+        continue;
+      }
+      count3 = endPending(record, count3, start, end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors);
+      state = OUT;
+    }
+    if (cls >= ALETTER && cls <= EXTEND_NUM_LET) {
+      state = IN;
+      start = i;
+      end = coreEnd = i + 1;
+      last = cls;
+      hasCore = cls !== EXTEND_NUM_LET;
+      connectors = cls === EXTEND_NUM_LET ? 1 : 0;
+    }
+  }
+  if (state === IN) count3 = emit(record, count3, start, end, wordLike(last, hasCore, connectors, end > coreEnd));
+  else if (state === PENDING) {
+    count3 = endPending(record, count3, start, end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors);
+  }
+  return count3;
+}
+function wordLike(last, hasCore, connectors, trailingIgnorables) {
+  if (!hasCore && connectors < 2) return false;
+  return !(last === EXTEND_NUM_LET && trailingIgnorables);
+}
+function endPending(record, count3, start, end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors) {
+  if (last === HEBREW_LETTER && mid === SINGLE_QUOTE) return emit(record, count3, start, midEnd, midEnd === midAt);
+  return emit(record, count3, start, end, wordLike(last, hasCore, connectors, end > coreEnd));
+}
+function emit(record, count3, start, end, isWordLike) {
+  if (!isWordLike) return count3;
+  if (record) {
+    if (offsets.length < (count3 + 1) * 2) {
+      const grown = new Int32Array(offsets.length * 2);
+      grown.set(offsets);
+      offsets = grown;
+    }
+    offsets[count3 * 2] = start;
+    offsets[count3 * 2 + 1] = end;
+  }
+  return count3 + 1;
+}
+function countWordsWithSegmenter(text) {
+  let count3 = 0;
+  for (const s of wordSegmenter().segment(text)) if (s.isWordLike) count3++;
+  return count3;
+}
+function countWords(text) {
+  const fast = scan(text, false);
+  return fast >= 0 ? fast : countWordsWithSegmenter(text);
+}
+function forEachWord(text, onWord) {
+  const fast = scan(text, true);
+  if (fast >= 0) {
+    const found = offsets.slice(0, fast * 2);
+    for (let w = 0; w < fast; w++) onWord(found[w * 2], found[w * 2 + 1]);
+    return;
+  }
+  for (const s of wordSegmenter().segment(text)) {
+    if (s.isWordLike) onWord(s.index, s.index + s.segment.length);
+  }
+}
+
+// src/measure/document.ts
+var SCRIPT_MASK = 255;
+var CLOSER_LOOK = 256;
+var characterTable;
+function characters() {
+  if (characterTable) return characterTable;
+  const scripts = bmpScriptIds();
+  const table2 = new Uint16Array(65536);
+  for (let cp = 0; cp < 65536; cp++) table2[cp] = scripts[cp] | (needsCloserLook(cp) ? CLOSER_LOOK : 0);
+  characterTable = table2;
+  return table2;
+}
+function scanCharacters(text, counts) {
+  const table2 = characters();
+  counts.fill(0);
+  const anomalies = emptyAnomalyCounts();
+  const marks = emptyMarkCounts();
+  const n = text.length;
+  let bytes2 = 0;
+  let pairs = 0;
+  let leads = false;
+  for (let i = 0; i < n; i++) {
+    const unit = text.charCodeAt(i);
+    if (unit >= 55296 && unit <= 56319 && i + 1 < n) {
+      const low = text.charCodeAt(i + 1);
+      if (low >= 56320 && low <= 57343) {
+        const cp = (unit - 55296 << 10) + (low - 56320) + 65536;
+        const id2 = astralScriptId(cp);
+        counts[id2] = counts[id2] + 1;
+        if (cp >= 983040) {
+          const kind = anomalyOf(cp, false);
+          if (kind !== null) anomalies[kind]++;
+        }
+        bytes2 += 4;
+        pairs++;
+        i++;
+        continue;
+      }
+    }
+    bytes2 += unit < 128 ? 1 : unit < 2048 ? 2 : 3;
+    const info = table2[unit];
+    const id = info & SCRIPT_MASK;
+    counts[id] = counts[id] + 1;
+    if ((info & CLOSER_LOOK) !== 0) {
+      const kind = anomalyOf(unit, i === 0);
+      if (kind !== null) anomalies[kind]++;
+      const mark = markOf(unit);
+      if (mark !== null) marks[mark]++;
+      if (unit >= MOJIBAKE_LEAD_FIRST && unit <= MOJIBAKE_LEAD_LAST) leads = true;
+    }
+  }
+  if (leads) anomalies.mojibake = countMojibake(text);
+  return { bytes: bytes2, chars: n - pairs, anomalies, marks };
+}
+function createMeasurer(settings) {
+  const detector = createLanguageDetector(settings.languages, settings.detection);
+  const counts = new Int32Array(SCRIPT_NAMES.length);
+  return (doc) => {
+    const { text } = doc;
+    const pass = scanCharacters(text, counts);
+    const scripts = {};
+    let letters = 0;
+    let dominant = 0;
+    for (let id = FIRST_COUNTED_ID; id < counts.length; id++) {
+      const n = counts[id];
+      if (n === 0) continue;
+      scripts[SCRIPT_NAMES[id]] = n;
+      letters += n;
+      if (dominant === 0 || n > counts[dominant]) dominant = id;
+    }
+    const dominantScript = letters === 0 ? null : SCRIPT_NAMES[dominant];
+    const { detected, language } = detector.detect(text, dominantScript, letters);
+    const declared = doc.declaredLanguage === void 0 ? void 0 : detector.declared(doc.declaredLanguage);
+    const expected = declared !== void 0 && declared !== OTHER ? declared : language;
+    let purity = null;
+    const expectedScripts = expected === OTHER || expected === UNDETERMINED ? void 0 : detector.scriptsOf(expected);
+    if (expectedScripts !== void 0 && letters > 0) {
+      let own = 0;
+      for (const name of expectedScripts) own += scripts[name] ?? 0;
+      purity = own / letters;
+    }
+    const measure = {
+      bytes: pass.bytes,
+      chars: pass.chars,
+      words: countWords(text),
+      scripts,
+      dominantScript,
+      detected,
+      language,
+      purity,
+      anomalies: pass.anomalies,
+      marks: pass.marks
+    };
+    if (declared !== void 0) measure.declared = declared;
+    return measure;
+  };
+}
+
+// src/measure/duplicates/hash.ts
+function mix32(h) {
+  h ^= h >>> 16;
+  h = Math.imul(h, 2246822507);
+  h ^= h >>> 13;
+  h = Math.imul(h, 3266489909);
+  return h ^ h >>> 16;
+}
+function mix32b(h) {
+  h ^= h >>> 16;
+  h = Math.imul(h, 2146121005);
+  h ^= h >>> 15;
+  h = Math.imul(h, 2221713035);
+  return h ^ h >>> 16;
+}
+function fmix32(h) {
+  return mix32(h) >>> 0;
+}
+var EXACT_BASIS_1 = 2166136261 | 0;
+var EXACT_BASIS_2 = 1818371886 | 0;
+var EXACT_PRIME_1 = 16777619;
+var EXACT_PRIME_2 = 1540483477;
+function finishExact(h1, h2, length, out) {
+  h1 ^= length;
+  h2 = h2 + length | 0;
+  h1 = h1 + h2 | 0;
+  h2 = h2 + h1 | 0;
+  h1 = mix32(h1);
+  h2 = mix32b(h2);
+  h1 = h1 + h2 | 0;
+  h2 = h2 + h1 | 0;
+  out.exactHigh = h1 >>> 0;
+  out.exactLow = h2 >>> 0;
+}
+function hex64(hi, lo) {
+  return (hi >>> 0).toString(16).padStart(8, "0") + (lo >>> 0).toString(16).padStart(8, "0");
+}
+
+// src/measure/duplicates/minhash.ts
+var mix32b2 = mix32b;
+var ROLL_BASE = 625341585;
+var FILL_ROUNDS = 8;
+var PROBE_TABLE = 32;
+var MAX_HASHES = 65535;
+var Sketcher = class {
+  shingle;
+  hashes;
+  /** The last signature: one 32-bit value per bin, valid until the next call. */
+  values;
+  rounds;
+  shingles;
+  lengthSeed;
+  fillRounds;
+  /** `fillRounds` is for experiments (scripts/bench-duplicates.mjs): 1 is plain one-permutation hashing with densification, Infinity fills every bin by rounds. Signatures are comparable only at equal values. */
+  constructor(shingle, hashes, fillRounds = FILL_ROUNDS) {
+    if (!Number.isInteger(hashes) || hashes < 1 || hashes > MAX_HASHES) throw new RangeError(`hashes must be an integer from 1 to ${MAX_HASHES}, got ${hashes}`);
+    if (!Number.isInteger(shingle) || shingle < 1) throw new RangeError(`shingle must be a positive integer, got ${shingle}`);
+    if (!(fillRounds >= 1)) throw new RangeError(`fillRounds must be at least 1, got ${fillRounds}`);
+    this.shingle = shingle;
+    this.hashes = hashes;
+    this.fillRounds = fillRounds;
+    this.values = new Int32Array(hashes);
+    this.rounds = new Int32Array(hashes);
+    this.shingles = new Int32Array(1024);
+    this.lengthSeed = new Int32Array(shingle + 1);
+    for (let m = 0; m <= shingle; m++) this.lengthSeed[m] = mix32b2(1663821227 + m);
+  }
+  /**
+   * Returns the number of shingles of a document given its word hashes (0 when it has no words,
+   * and then `values` is untouched), leaving its signature in `values`. A document with fewer
+   * words than one shingle gets one shingle made of all its words.
+   */
+  sketch(words, count3) {
+    if (count3 === 0) return 0;
+    const n = this.shingle;
+    const m = count3 < n ? count3 : n;
+    const shingleCount = count3 < n ? 1 : count3 - n + 1;
+    if (this.shingles.length < shingleCount) this.shingles = new Int32Array(shingleCount * 2);
+    const sh = this.shingles;
+    let top = 1;
+    for (let j = 1; j < m; j++) top = Math.imul(top, ROLL_BASE);
+    let h = 0;
+    for (let j = 0; j < m; j++) h = Math.imul(h, ROLL_BASE) + words[j] | 0;
+    const seed = this.lengthSeed[m];
+    sh[0] = mix(h ^ seed);
+    for (let i = 1; i < shingleCount; i++) {
+      h = Math.imul(h - Math.imul(words[i - 1], top) | 0, ROLL_BASE) + words[i + m - 1] | 0;
+      sh[i] = mix(h ^ seed);
+    }
+    this.fill(sh, shingleCount);
+    return shingleCount;
+  }
+  /** Returns `values` filled with the signature of a set given as `count` 32-bit hashes in `set` (duplicates allowed; count ≥ 1). */
+  fill(set, count3) {
+    const k = this.hashes;
+    const val = this.values;
+    const rnd = this.rounds;
+    rnd.fill(-1);
+    let empty = k;
+    for (let i = 0; i < count3; i++) {
+      const x = set[i];
+      const b = Math.imul(x >>> 16, k) >>> 16;
+      const r = rnd[b];
+      if (r < 0) {
+        rnd[b] = 0;
+        val[b] = x;
+        empty--;
+      } else if (x < val[b]) {
+        val[b] = x;
+      }
+    }
+    const rounds = this.fillRounds;
+    for (let t = 1; empty > 0 && t < rounds; t++) {
+      const ts = Math.imul(t, 2654435761);
+      for (let i = 0; i < count3; i++) {
+        const x = mix(set[i] ^ ts);
+        const b = Math.imul(x >>> 16, k) >>> 16;
+        const r = rnd[b];
+        if (r < 0) {
+          rnd[b] = t;
+          val[b] = x;
+          empty--;
+        } else if (r === t && x < val[b]) {
+          val[b] = x;
+        }
+      }
+    }
+    if (empty > 0) this.densify();
+    return val;
+  }
+  /**
+   * Fills each still-empty bin with the value of the first filled bin along a probe sequence
+   * that depends only on the bin (optimal densification, Shrivastava 2017): two sets copy from
+   * the same bin exactly when it is the first one filled in both, so agreement stays ∝ Jaccard.
+   */
+  densify() {
+    const k = this.hashes;
+    const val = this.values;
+    const rnd = this.rounds;
+    const probes = this.probes();
+    for (let i = 0; i < k; i++) {
+      if (rnd[i] >= 0) continue;
+      let from = -1;
+      for (let a = 0; a < PROBE_TABLE; a++) {
+        const j = probes[i * PROBE_TABLE + a];
+        if (rnd[j] >= 0) {
+          from = j;
+          break;
+        }
+      }
+      for (let a = PROBE_TABLE; from < 0; a++) {
+        const j = probeBin(i, a, k);
+        if (rnd[j] >= 0) from = j;
+      }
+      val[i] = val[from];
+    }
+  }
+  probeTable;
+  /** Returns the first PROBE_TABLE probes of every bin, computed once per sketcher. */
+  probes() {
+    if (this.probeTable) return this.probeTable;
+    const k = this.hashes;
+    const t = new Int32Array(k * PROBE_TABLE);
+    for (let i = 0; i < k; i++) for (let a = 0; a < PROBE_TABLE; a++) t[i * PROBE_TABLE + a] = probeBin(i, a, k);
+    this.probeTable = t;
+    return t;
+  }
+};
+function probeBin(bin, attempt, k) {
+  const x = mix(Math.imul(bin + 1, 2654435761) ^ Math.imul(attempt + 1, 2246822519) ^ 668265263);
+  return Math.imul(x >>> 16, k) >>> 16;
+}
+function mix(h) {
+  h ^= h >>> 16;
+  h = Math.imul(h, 2246822507);
+  h ^= h >>> 13;
+  h = Math.imul(h, 3266489909);
+  return h ^ h >>> 16;
+}
+
+// src/measure/duplicates/scan.ts
+var mix322 = mix32;
+var mix32b3 = mix32b;
+var finishExact2 = finishExact;
+var EXACT_BASIS_12 = EXACT_BASIS_1;
+var EXACT_BASIS_22 = EXACT_BASIS_2;
+var EXACT_PRIME_12 = EXACT_PRIME_1;
+var EXACT_PRIME_22 = EXACT_PRIME_2;
+var WORD_CHAR = /^[\p{L}\p{M}\p{N}]$/u;
+var PUNCT_CHAR = new RegExp("^\\p{P}$", "u");
+var SPACE_CHAR = /^\s$/u;
+var CLASS_RUNS = [
+  [/[\p{L}\p{M}\p{N}]+/gu, 1],
+  [/\s+/gu, 3],
+  [new RegExp("\\p{P}+", "gu"), 4]
+];
+var OTHER3 = 0;
+var WORD = 1;
+var HIGH_SURROGATE = 2;
+var SPACE = 3;
+var PUNCT = 4;
+var table;
+function classTable2() {
+  if (table) return table;
+  const t = new Uint8Array(65536);
+  const units = new Uint16Array(65536);
+  for (let c = 0; c < 65536; c++) units[c] = c >= 55296 && c < 57344 ? 0 : c;
+  let all = "";
+  for (let c = 0; c < 65536; c += 4096) all += String.fromCharCode(...units.subarray(c, c + 4096));
+  for (const [re, cls] of CLASS_RUNS) {
+    for (const m of all.matchAll(re)) {
+      for (let i = m.index, end = m.index + m[0].length; i < end; i++) t[i] = cls;
+    }
+  }
+  for (let c = 55296; c < 56320; c++) t[c] = HIGH_SURROGATE;
+  for (let c = 56320; c < 57344; c++) t[c] = OTHER3;
+  table = t;
+  return t;
+}
+function astralClass(text, i) {
+  const cp = text.slice(i, i + 2);
+  if (WORD_CHAR.test(cp)) return WORD;
+  if (PUNCT_CHAR.test(cp)) return PUNCT;
+  if (SPACE_CHAR.test(cp)) return SPACE;
+  return OTHER3;
+}
+function prepareText(text) {
+  return text.normalize("NFC").toLowerCase();
+}
+function wordBuffer(lanes, capacity = 1024) {
+  return { lane1: new Int32Array(capacity), lane2: lanes === 2 ? new Int32Array(capacity) : null };
+}
+function grow(buf) {
+  const l1 = new Int32Array(buf.lane1.length * 2);
+  l1.set(buf.lane1);
+  buf.lane1 = l1;
+  if (buf.lane2) {
+    const l2 = new Int32Array(buf.lane2.length * 2);
+    l2.set(buf.lane2);
+    buf.lane2 = l2;
+  }
+}
+function hashWords(prepared, buf) {
+  const t = classTable2();
+  const two = buf.lane2 !== null;
+  const n = prepared.length;
+  let count3 = 0;
+  let inWord = false;
+  let h1 = 0;
+  let h2 = 0;
+  let len = 0;
+  for (let i = 0; i < n; i++) {
+    const c = prepared.charCodeAt(i);
+    let cls = t[c];
+    let c2 = -1;
+    if (cls === HIGH_SURROGATE) {
+      const lo = i + 1 < n ? prepared.charCodeAt(i + 1) : 0;
+      if (lo >= 56320 && lo < 57344) {
+        cls = astralClass(prepared, i);
+        c2 = lo;
+        i++;
+      } else {
+        cls = OTHER3;
+      }
+    }
+    if (cls === WORD) {
+      if (!inWord) {
+        inWord = true;
+        h1 = 2166136261;
+        h2 = 84696351;
+        len = 0;
+      }
+      h1 = Math.imul(h1 ^ c, 16777619);
+      if (two) h2 = Math.imul(h2 ^ c, 739982445);
+      len++;
+      if (c2 >= 0) {
+        h1 = Math.imul(h1 ^ c2, 16777619);
+        if (two) h2 = Math.imul(h2 ^ c2, 739982445);
+        len++;
+      }
+    } else if (inWord) {
+      inWord = false;
+      if (count3 === buf.lane1.length) grow(buf);
+      buf.lane1[count3] = mix322(h1 ^ len);
+      if (two) buf.lane2[count3] = mix32b3(h2 + len);
+      count3++;
+    }
+  }
+  if (inWord) {
+    if (count3 === buf.lane1.length) grow(buf);
+    buf.lane1[count3] = mix322(h1 ^ len);
+    if (two) buf.lane2[count3] = mix32b3(h2 + len);
+    count3++;
+  }
+  return count3;
+}
+var DocumentScanner = class {
+  /** Code units of the exact normal form (0: empty document). */
+  exactLength = 0;
+  /** The 64-bit exact hash as two unsigned 32-bit lanes. */
+  exactHigh = 0;
+  exactLow = 0;
+  /** Words found; their hashes are words[0 .. wordCount). */
+  wordCount = 0;
+  words = new Int32Array(1024);
+  /**
+   * Scans `prepared` (see prepareText) once, computing both the exact hash of its normal form
+   * (see normalizeForExact; punctuation deleted when `strip`) and one hash per word.
+   * One fused pass: classifying each code unit once is most of the cost.
+   */
+  scan(prepared, strip) {
+    const t = classTable2();
+    let words = this.words;
+    let count3 = 0;
+    let inWord = false;
+    let wh = 0;
+    let wlen = 0;
+    let h1 = EXACT_BASIS_12;
+    let h2 = EXACT_BASIS_22;
+    let emitted = 0;
+    let space = false;
+    const n = prepared.length;
+    for (let i = 0; i < n; i++) {
+      const c = prepared.charCodeAt(i);
+      let cls = t[c];
+      let lo = -1;
+      if (cls === HIGH_SURROGATE) {
+        const next = i + 1 < n ? prepared.charCodeAt(i + 1) : 0;
+        if (next >= 56320 && next < 57344) {
+          cls = astralClass(prepared, i);
+          lo = next;
+          i++;
+        } else {
+          cls = OTHER3;
+        }
+      }
+      if (cls === WORD) {
+        if (!inWord) {
+          inWord = true;
+          wh = 2166136261 | 0;
+          wlen = 0;
+        }
+        wh = Math.imul(wh ^ c, 16777619);
+        wlen++;
+        if (lo >= 0) {
+          wh = Math.imul(wh ^ lo, 16777619);
+          wlen++;
+        }
+      } else {
+        if (inWord) {
+          inWord = false;
+          if (count3 === words.length) {
+            const w = new Int32Array(words.length * 2);
+            w.set(words);
+            words = w;
+          }
+          words[count3++] = mix322(wh ^ wlen);
+        }
+        if (cls === SPACE) {
+          space = true;
+          continue;
+        }
+        if (strip && cls === PUNCT) continue;
+      }
+      if (space) {
+        if (emitted > 0) {
+          h1 = Math.imul(h1 ^ 32, EXACT_PRIME_12);
+          h2 = Math.imul(h2 ^ 32, EXACT_PRIME_22);
+          emitted++;
+        }
+        space = false;
+      }
+      h1 = Math.imul(h1 ^ c, EXACT_PRIME_12);
+      h2 = Math.imul(h2 ^ c, EXACT_PRIME_22);
+      emitted++;
+      if (lo >= 0) {
+        h1 = Math.imul(h1 ^ lo, EXACT_PRIME_12);
+        h2 = Math.imul(h2 ^ lo, EXACT_PRIME_22);
+        emitted++;
+      }
+    }
+    if (inWord) {
+      if (count3 === words.length) {
+        const w = new Int32Array(words.length * 2);
+        w.set(words);
+        words = w;
+      }
+      words[count3++] = mix322(wh ^ wlen);
+    }
+    finishExact2(h1, h2, emitted, this);
+    this.words = words;
+    this.wordCount = count3;
+    this.exactLength = emitted;
+  }
+};
+var oneOff = new DocumentScanner();
+
+// src/measure/duplicates/lsh.ts
+var MISS_WEIGHT = 0.9;
+var STEPS = 200;
+var BAND_KEY_BITS = 32;
+var WIDTHS = [4, 8, 16, 32];
+function candidateProbability(p, bands, rows) {
+  return 1 - Math.pow(1 - Math.pow(p, rows), bands);
+}
+function signatureBits(rows) {
+  for (const w of WIDTHS) if (w * rows >= BAND_KEY_BITS) return w;
+  return 32;
+}
+function rowAgreement(s, bits) {
+  if (bits >= 32) return s;
+  const c = Math.pow(2, -bits);
+  return s + (1 - s) * c;
+}
+function lshBands(threshold, hashes) {
+  if (!(threshold > 0 && threshold <= 1)) throw new RangeError(`threshold must be in (0, 1], got ${threshold}`);
+  if (!Number.isInteger(hashes) || hashes < 1) throw new RangeError(`hashes must be a positive integer, got ${hashes}`);
+  const key = `${threshold}/${hashes}`;
+  const known = chosen.get(key);
+  if (known) return { ...known };
+  let best = { bands: 1, rows: hashes };
+  let bestCost = Infinity;
+  for (let rows = 1; rows <= hashes; rows++) {
+    const bits = signatureBits(rows);
+    for (let bands = 1; bands * rows <= hashes; bands++) {
+      let falseArea = 0;
+      let missArea = 0;
+      const h = 1 / STEPS;
+      for (let i = 0; i < STEPS; i++) {
+        const s = (i + 0.5) * h;
+        const p = candidateProbability(rowAgreement(s, bits), bands, rows);
+        if (s < threshold) falseArea += p * h;
+        else missArea += (1 - p) * h;
+      }
+      const cost = (1 - MISS_WEIGHT) * falseArea + MISS_WEIGHT * missArea;
+      if (cost < bestCost - 1e-12) {
+        bestCost = cost;
+        best = { bands, rows };
+      }
+    }
+  }
+  chosen.set(key, best);
+  return { ...best };
+}
+var chosen = /* @__PURE__ */ new Map();
+function jaccardFromAgreement(agreeing, hashes, bits) {
+  const p = agreeing / hashes;
+  if (bits >= 32) return p;
+  const c = Math.pow(2, -bits);
+  const j = (p - c) / (1 - c);
+  return j < 0 ? 0 : j > 1 ? 1 : j;
+}
+
+// src/measure/duplicates/format.ts
+var MAGIC = [83, 76, 68, 88];
+var FORMAT_VERSION = 1;
+var HEADER_BYTES = 32;
+var EXACT_BYTES = 8;
+var KIND_EMPTY = 0;
+var KIND_WORDLESS = 1;
+var KIND_FULL = 2;
+function signatureBytes(hashes, bits) {
+  return Math.ceil(hashes * bits / 8);
+}
+function bitsFor(opts) {
+  return signatureBits(lshBands(opts.threshold, opts.hashes).rows);
+}
+function checksum32(bytes2, start, end) {
+  let h = 789265437 ^ end - start;
+  let i = start;
+  for (; i + 3 < end; i += 4) {
+    let k2 = bytes2[i] | bytes2[i + 1] << 8 | bytes2[i + 2] << 16 | bytes2[i + 3] << 24;
+    k2 = Math.imul(k2, 3432918353);
+    k2 = k2 << 15 | k2 >>> 17;
+    h ^= Math.imul(k2, 461845907);
+    h = h << 13 | h >>> 19;
+    h = Math.imul(h, 5) + 3864292196 | 0;
+  }
+  let k = 0;
+  for (let s = 0; i < end; i++, s += 8) k |= bytes2[i] << s;
+  h ^= Math.imul(k, 3432918353);
+  return fmix32(h);
+}
+function parseIndex(blob, verifyChecksum = true) {
+  if (!(blob instanceof Uint8Array)) return { ok: false, reason: "not a byte array" };
+  if (blob.length < HEADER_BYTES) return { ok: false, reason: `truncated: ${blob.length} bytes, shorter than the ${HEADER_BYTES}-byte header` };
+  for (let i = 0; i < 4; i++) {
+    if (blob[i] !== MAGIC[i]) return { ok: false, reason: "not a duplicate index (bad magic bytes)" };
+  }
+  const view = new DataView(blob.buffer, blob.byteOffset, blob.byteLength);
+  const version = view.getUint8(4);
+  if (version !== FORMAT_VERSION) return { ok: false, reason: `format version ${version}, this build reads version ${FORMAT_VERSION}` };
+  const punct = view.getUint8(5);
+  const shingle = view.getUint8(6);
+  const bits = view.getUint8(7);
+  const hashes = view.getUint16(8, true);
+  const threshold = view.getFloat32(12, true);
+  const documents = view.getUint32(16, true);
+  const streamBytes = view.getUint32(20, true);
+  const checksum = view.getUint32(24, true);
+  if (punct > 1 || shingle < 1 || hashes < 1 || ![4, 8, 16, 32].includes(bits)) {
+    return { ok: false, reason: "corrupt header (parameters out of range)" };
+  }
+  const sigBytes = signatureBytes(hashes, bits);
+  const exactOffset = HEADER_BYTES;
+  const signatureOffset = exactOffset + documents * EXACT_BYTES;
+  const streamOffset = signatureOffset + documents * sigBytes;
+  const expected = streamOffset + streamBytes;
+  if (blob.length !== expected) {
+    return {
+      ok: false,
+      reason: blob.length < expected ? `truncated: ${blob.length} bytes, the header announces ${expected} for ${documents} documents` : `${blob.length - expected} unexpected bytes after the ${expected} the header announces`
+    };
+  }
+  if (verifyChecksum && checksum32(blob, HEADER_BYTES, blob.length) !== checksum) {
+    return { ok: false, reason: "corrupt: checksum mismatch" };
+  }
+  return {
+    ok: true,
+    layout: {
+      formatVersion: version,
+      shingle,
+      hashes,
+      signatureBits: bits,
+      punctuation: punct === 1 ? "strip" : "keep",
+      threshold,
+      documents,
+      bytes: blob.length,
+      exactOffset,
+      signatureOffset,
+      signatureBytes: sigBytes,
+      streamOffset,
+      streamBytes
+    }
+  };
+}
+function incompatibility(header, opts) {
+  if (header.shingle !== opts.shingle) return `built with ${header.shingle}-word shingles, joined with ${opts.shingle}`;
+  if (header.hashes !== opts.hashes) return `built with ${header.hashes} hashes, joined with ${opts.hashes}`;
+  if (header.punctuation !== opts.punctuation) return `built with punctuation '${header.punctuation}', joined with '${opts.punctuation}'`;
+  const bits = bitsFor(opts);
+  if (header.signatureBits !== bits) {
+    return `built for threshold ${round(header.threshold)} (${header.signatureBits}-bit values), joined at threshold ${opts.threshold}, which needs ${bits}-bit values`;
+  }
+  return null;
+}
+function round(x) {
+  return Math.round(x * 1e6) / 1e6;
+}
+
+// src/measure/duplicates/builder.ts
+var MAX_SHINGLE = 255;
+var MAX_HASHES2 = 65535;
+var MAX_LANGUAGE = (1 << 24) - 1;
+function checkOptions(opts) {
+  const { shingle, hashes, threshold, punctuation } = opts;
+  if (!Number.isInteger(shingle) || shingle < 1 || shingle > MAX_SHINGLE) {
+    throw new RangeError(`duplicates: shingle must be an integer from 1 to ${MAX_SHINGLE} words, got ${shingle}`);
+  }
+  if (!Number.isInteger(hashes) || hashes < 1 || hashes > MAX_HASHES2) {
+    throw new RangeError(`duplicates: hashes must be an integer from 1 to ${MAX_HASHES2}, got ${hashes}`);
+  }
+  if (typeof threshold !== "number" || !(threshold > 0 && threshold <= 1)) {
+    throw new RangeError(`duplicates: threshold must be a number in (0, 1], got ${threshold}`);
+  }
+  if (punctuation !== "keep" && punctuation !== "strip") {
+    throw new RangeError(`duplicates: punctuation must be 'keep' or 'strip', got ${String(punctuation)}`);
+  }
+  return { shingle, hashes, threshold, punctuation };
+}
+function duplicateOptionsFrom(rule) {
+  return checkOptions({ shingle: rule.near.shingle, hashes: rule.near.hashes, threshold: rule.near.threshold, punctuation: rule.punctuation });
+}
+var Bytes = class {
+  data;
+  length = 0;
+  constructor(capacity) {
+    this.data = new Uint8Array(Math.max(16, capacity));
+  }
+  reserve(extra) {
+    if (this.length + extra <= this.data.length) return;
+    let cap = this.data.length * 2;
+    while (cap < this.length + extra) cap *= 2;
+    const d = new Uint8Array(cap);
+    d.set(this.data.subarray(0, this.length));
+    this.data = d;
+  }
+  varint(v) {
+    this.reserve(10);
+    while (v >= 128) {
+      this.data[this.length++] = v % 128 | 128;
+      v = Math.floor(v / 128);
+    }
+    this.data[this.length++] = v;
+  }
+};
+var DuplicateIndexBuilder = class {
+  options;
+  signatureBits;
+  sigBytes;
+  sketcher;
+  scanner = new DocumentScanner();
+  exact;
+  signatures;
+  stream;
+  documents = 0;
+  lastOrdinal = -1;
+  lastLine = 0;
+  finished = false;
+  constructor(opts) {
+    this.options = checkOptions(opts);
+    this.signatureBits = bitsFor(this.options);
+    this.sigBytes = signatureBytes(this.options.hashes, this.signatureBits);
+    this.sketcher = new Sketcher(this.options.shingle, this.options.hashes);
+    this.exact = new Bytes(1024 * EXACT_BYTES);
+    this.signatures = new Bytes(1024 * this.sigBytes);
+    this.stream = new Bytes(4096);
+  }
+  /** Indexes one document; documents must come in increasing ordinal order. */
+  add(doc) {
+    if (this.finished) throw new Error("DuplicateIndexBuilder: add() after finish()");
+    const { ordinal, line, language, text } = doc;
+    if (!Number.isInteger(ordinal) || ordinal <= this.lastOrdinal) {
+      throw new RangeError(`DuplicateIndexBuilder: ordinal ${ordinal} after ${this.lastOrdinal}; documents must be added in increasing ordinal order`);
+    }
+    if (!Number.isInteger(line) || line < 0) throw new RangeError(`DuplicateIndexBuilder: line must be a non-negative integer, got ${line} (ordinal ${ordinal})`);
+    if (!Number.isInteger(language) || language < 0 || language > MAX_LANGUAGE) {
+      throw new RangeError(`DuplicateIndexBuilder: language must be an integer from 0 to ${MAX_LANGUAGE}, got ${language} (ordinal ${ordinal})`);
+    }
+    if (typeof text !== "string") throw new TypeError(`DuplicateIndexBuilder: text must be a string (ordinal ${ordinal})`);
+    this.lastOrdinal = ordinal;
+    const prepared = prepareText(text);
+    const exact = this.exact;
+    exact.reserve(EXACT_BYTES);
+    const sigs = this.signatures;
+    sigs.reserve(this.sigBytes);
+    const sc = this.scanner;
+    sc.scan(prepared, this.options.punctuation === "strip");
+    let kind = KIND_EMPTY;
+    if (sc.exactLength > 0) {
+      writeU32(exact.data, exact.length, sc.exactHigh);
+      writeU32(exact.data, exact.length + 4, sc.exactLow);
+      const count3 = sc.wordCount;
+      if (count3 > 0) {
+        this.sketcher.sketch(sc.words, count3);
+        packSignature(this.sketcher.values, this.signatureBits, sigs.data, sigs.length);
+        kind = KIND_FULL;
+      } else {
+        sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
+        kind = KIND_WORDLESS;
+      }
+    } else {
+      exact.data.fill(0, exact.length, exact.length + EXACT_BYTES);
+      sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
+    }
+    exact.length += EXACT_BYTES;
+    sigs.length += this.sigBytes;
+    const delta = line - this.lastLine;
+    this.lastLine = line;
+    this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
+    this.stream.varint(language * 4 + kind);
+    this.documents++;
+  }
+  /** Returns the number of documents added so far. */
+  get size() {
+    return this.documents;
+  }
+  /** Returns the index blob; the builder cannot be used afterwards. */
+  finish() {
+    if (this.finished) throw new Error("DuplicateIndexBuilder: finish() called twice");
+    this.finished = true;
+    const n = this.documents;
+    const total = HEADER_BYTES + this.exact.length + this.signatures.length + this.stream.length;
+    const blob = new Uint8Array(total);
+    const view = new DataView(blob.buffer);
+    for (let i = 0; i < 4; i++) blob[i] = MAGIC[i];
+    view.setUint8(4, FORMAT_VERSION);
+    view.setUint8(5, this.options.punctuation === "strip" ? 1 : 0);
+    view.setUint8(6, this.options.shingle);
+    view.setUint8(7, this.signatureBits);
+    view.setUint16(8, this.options.hashes, true);
+    view.setFloat32(12, this.options.threshold, true);
+    view.setUint32(16, n, true);
+    view.setUint32(20, this.stream.length, true);
+    let at2 = HEADER_BYTES;
+    blob.set(this.exact.data.subarray(0, this.exact.length), at2);
+    at2 += this.exact.length;
+    blob.set(this.signatures.data.subarray(0, this.signatures.length), at2);
+    at2 += this.signatures.length;
+    blob.set(this.stream.data.subarray(0, this.stream.length), at2);
+    view.setUint32(24, checksum32(blob, HEADER_BYTES, total), true);
+    return blob;
+  }
+};
+function writeU32(d, at2, v) {
+  d[at2] = v & 255;
+  d[at2 + 1] = v >>> 8 & 255;
+  d[at2 + 2] = v >>> 16 & 255;
+  d[at2 + 3] = v >>> 24;
+}
+function packSignature(values, bits, d, at2) {
+  const k = values.length;
+  if (bits === 4) {
+    let i = 0;
+    for (; i + 1 < k; i += 2) d[at2++] = values[i] & 15 | (values[i + 1] & 15) << 4;
+    if (i < k) d[at2] = values[i] & 15;
+  } else if (bits === 8) {
+    for (let i = 0; i < k; i++) d[at2 + i] = values[i] & 255;
+  } else if (bits === 16) {
+    for (let i = 0; i < k; i++) {
+      const v = values[i];
+      d[at2 + 2 * i] = v & 255;
+      d[at2 + 2 * i + 1] = v >>> 8 & 255;
+    }
+  } else {
+    for (let i = 0; i < k; i++) writeU32(d, at2 + 4 * i, values[i]);
+  }
+}
+
+// src/measure/duplicates/join.ts
+var DEFAULT_MAX_CLUSTERS = 20;
+var DEFAULT_MAX_COPIES = 10;
+var DEFAULT_MAX_BUCKET_COMPARISONS = 64;
+var KIND_MASK = 3;
+var IN_NEW_SHARD = 1 << 2;
+var CLASS_HAS_NEW = 1 << 3;
+var CLASS_HAS_EXISTING = 1 << 4;
+var NEAR = 1 << 5;
+var NEAR_EXISTING = 1 << 6;
+var PARTICIPANT = 1 << 7;
+var DuplicateIndexError = class extends Error {
+  shard;
+  reason;
+  constructor(shard, reason) {
+    super(`duplicate index of ${shard}: ${reason}`);
+    this.name = "DuplicateIndexError";
+    this.shard = shard;
+    this.reason = reason;
+  }
+};
+var EQUAL_NIBBLES = new Uint8Array(256);
+for (let x = 0; x < 256; x++) EQUAL_NIBBLES[x] = ((x & 15) === 0 ? 1 : 0) + (x >>> 4 === 0 ? 1 : 0);
+function joinDuplicates(shards, opts) {
+  const options = checkOptions(opts);
+  const maxClusters = opts.maxClusters ?? DEFAULT_MAX_CLUSTERS;
+  const maxCopies = opts.maxCopies ?? DEFAULT_MAX_COPIES;
+  const cap = opts.maxBucketComparisons ?? DEFAULT_MAX_BUCKET_COMPARISONS;
+  for (const [name, v] of [["maxClusters", maxClusters], ["maxCopies", maxCopies], ["maxBucketComparisons", cap]]) {
+    if (!Number.isInteger(v) || v < 0) throw new RangeError(`joinDuplicates: ${name} must be a non-negative integer, got ${v}`);
+  }
+  const { bands, rows } = lshBands(options.threshold, options.hashes);
+  const bits = signatureBits(rows);
+  const k = options.hashes;
+  const indexes = [];
+  const seen = /* @__PURE__ */ new Set();
+  let total = 0;
+  let indexBytes = 0;
+  for (const { shard, index: index2 } of shards) {
+    if (seen.has(shard)) throw new DuplicateIndexError(shard, "shard listed twice");
+    seen.add(shard);
+    const parsed = parseIndex(index2);
+    if (!parsed.ok) throw new DuplicateIndexError(shard, parsed.reason);
+    const why = incompatibility(parsed.layout, options);
+    if (why) throw new DuplicateIndexError(shard, why);
+    indexes.push({ shard, blob: index2, layout: parsed.layout, start: total });
+    total += parsed.layout.documents;
+    indexBytes += index2.length;
+  }
+  const n = total;
+  const starts = new Int32Array(indexes.length + 1);
+  indexes.forEach((s, i) => starts[i] = s.start);
+  starts[indexes.length] = n;
+  const newNames = new Set(opts.newShards ?? []);
+  const trackExisting = opts.newShards !== void 0;
+  const isNew = indexes.map((s) => newNames.has(s.shard));
+  const flags = new Uint8Array(n);
+  indexes.forEach((s, si) => {
+    const newBit = isNew[si] ? IN_NEW_SHARD : 0;
+    readLocations(s, (i, _line, _language, kind) => {
+      flags[s.start + i] = kind | newBit;
+    });
+  });
+  const hi = new Int32Array(n);
+  let lo = new Int32Array(n);
+  for (const s of indexes) {
+    const view = new DataView(s.blob.buffer, s.blob.byteOffset, s.blob.byteLength);
+    for (let i = 0, at2 = s.layout.exactOffset; i < s.layout.documents; i++, at2 += EXACT_BYTES) {
+      hi[s.start + i] = view.getInt32(at2, true);
+      lo[s.start + i] = view.getInt32(at2 + 4, true);
+    }
+  }
+  const order = new Int32Array(n);
+  const scratch2 = new Int32Array(n);
+  const counts = new Int32Array(65536);
+  radixSort(hi, n, order, scratch2, counts);
+  const rep = new Int32Array(n).fill(-1);
+  for (let p = 0; p < n; ) {
+    let q = p + 1;
+    const h = hi[order[p]];
+    while (q < n && hi[order[q]] === h) q++;
+    let run2 = null;
+    for (let x = p + 1; x < q; x++) {
+      if (lo[order[x]] !== lo[order[p]]) {
+        run2 = Array.from(order.subarray(p, q)).sort((a, b) => lo[a] - lo[b] || a - b);
+        break;
+      }
+    }
+    const members = run2 ?? order.subarray(p, q);
+    for (let x = 0; x < members.length; ) {
+      let y = x + 1;
+      const l = lo[members[x]];
+      while (y < members.length && lo[members[y]] === l) y++;
+      let first = -1;
+      for (let z = x; z < y; z++) {
+        const g = members[z];
+        if ((flags[g] & KIND_MASK) === KIND_EMPTY) continue;
+        if (first < 0) first = g;
+        rep[g] = first;
+        flags[first] = flags[first] | (flags[g] & IN_NEW_SHARD ? CLASS_HAS_NEW : CLASS_HAS_EXISTING);
+      }
+      x = y;
+    }
+    p = q;
+  }
+  const workingExact = flags.byteLength + hi.byteLength + lo.byteLength + order.byteLength + scratch2.byteLength + rep.byteLength + counts.byteLength;
+  const bufA = hi.buffer;
+  const bufB = order.buffer;
+  const bufC = scratch2.buffer;
+  for (let g = 0; g < n; g++) if (rep[g] === g && (flags[g] & KIND_MASK) === KIND_FULL) flags[g] = flags[g] | PARTICIPANT;
+  const keys = hi;
+  lo = new Int32Array(0);
+  const nearOf = new Int32Array(n).fill(-1);
+  const sig = new SignatureReader(indexes, starts, k, bits);
+  let comparedPairs = 0;
+  let verifiedPairs = 0;
+  let cappedBuckets = 0;
+  const threshold = options.threshold;
+  for (let band = 0; band < bands; band++) {
+    sig.bandKeys(flags, band * rows, rows, keys);
+    radixSort(keys, n, order, scratch2, counts);
+    for (let p = 0; p < n; ) {
+      let q = p + 1;
+      const key = keys[order[p]];
+      while (q < n && keys[order[q]] === key) q++;
+      if (key === 0 || q - p === 1) {
+        p = q;
+        continue;
+      }
+      if (q - p > cap + 1) cappedBuckets++;
+      for (let x = p + 1; x < q; x++) {
+        const i = order[x];
+        const fi = flags[i];
+        if (fi & NEAR && !(trackExisting && fi & (CLASS_HAS_EXISTING | CLASS_HAS_NEW))) continue;
+        const stop = Math.max(p, x - cap);
+        for (let y = x - 1; y >= stop; y--) {
+          const j = order[y];
+          const f = flags[i];
+          const fj = flags[j];
+          const needNear = (f & NEAR) === 0;
+          const wantI = trackExisting && wantsExisting(f) && (fj & CLASS_HAS_EXISTING) !== 0;
+          const wantJ = trackExisting && wantsExisting(fj) && (f & CLASS_HAS_EXISTING) !== 0;
+          if (!needNear && !wantI && !wantJ) {
+            if (!trackExisting) break;
+            continue;
+          }
+          comparedPairs++;
+          if (sig.jaccard(i, j) < threshold) continue;
+          verifiedPairs++;
+          if (needNear) {
+            flags[i] = flags[i] | NEAR;
+            nearOf[i] = j;
+          }
+          if (wantI) flags[i] = flags[i] | NEAR_EXISTING;
+          if (wantJ) flags[j] = flags[j] | NEAR_EXISTING;
+        }
+      }
+      p = q;
+    }
+  }
+  const workingBytes = Math.max(
+    workingExact,
+    flags.byteLength + rep.byteLength + nearOf.byteLength + bufA.byteLength + bufB.byteLength + bufC.byteLength + counts.byteLength
+  );
+  const rootOf = new Int32Array(bufA, 0, n);
+  const nearSize = new Int32Array(bufB, 0, n).fill(0);
+  const exactSize = new Int32Array(bufC, 0, n).fill(0);
+  for (let g = 0; g < n; g++) {
+    const r = rep[g];
+    if (r >= 0) exactSize[r] = exactSize[r] + 1;
+    if (r === g && (flags[g] & KIND_MASK) === KIND_FULL) {
+      const j = nearOf[g];
+      rootOf[g] = j < 0 ? g : rootOf[j];
+      nearSize[rootOf[g]] = nearSize[rootOf[g]] + 1;
+    } else {
+      rootOf[g] = -1;
+    }
+  }
+  const tallyOf = () => ({ docs: 0, emptyDocs: 0, wordlessDocs: 0, exactDocs: 0, nearDocs: 0 });
+  const totalTally = tallyOf();
+  const perShard = [];
+  const perLanguage2 = /* @__PURE__ */ new Map();
+  const against = trackExisting ? {
+    newShards: [...newNames],
+    unknownShards: [...newNames].filter((s) => !seen.has(s)),
+    docs: 0,
+    exactDocs: 0,
+    nearDocs: 0,
+    perShard: []
+  } : void 0;
+  indexes.forEach((s, si) => {
+    const st = tallyOf();
+    const ag = { shard: s.shard, docs: 0, exactDocs: 0, nearDocs: 0 };
+    readLocations(s, (i, _line, language, kind) => {
+      const g = s.start + i;
+      let lt = perLanguage2.get(language);
+      if (!lt) perLanguage2.set(language, lt = tallyOf());
+      const r = rep[g];
+      const exact = r >= 0 && r !== g;
+      const near = !exact && r === g && (flags[g] & NEAR) !== 0;
+      count(st, kind, exact, near);
+      count(lt, kind, exact, near);
+      count(totalTally, kind, exact, near);
+      if (against && isNew[si]) {
+        ag.docs++;
+        if (r >= 0) {
+          const fr = flags[r];
+          if (fr & CLASS_HAS_EXISTING) ag.exactDocs++;
+          else if (fr & NEAR_EXISTING) ag.nearDocs++;
+        }
+      }
+    });
+    perShard.push({ shard: s.shard, ...st });
+    if (against && isNew[si]) {
+      against.perShard.push(ag);
+      against.docs += ag.docs;
+      against.exactDocs += ag.exactDocs;
+      against.nearDocs += ag.nearDocs;
+    }
+  });
+  let exactClusters = 0;
+  let nearClusters = 0;
+  const top = new TopClusters(maxClusters);
+  for (let g = 0; g < n; g++) {
+    if (exactSize[g] >= 2) {
+      exactClusters++;
+      top.offer(g, exactSize[g], "exact");
+    }
+    if (nearSize[g] >= 2) {
+      nearClusters++;
+      top.offer(g, nearSize[g], "near");
+    }
+  }
+  const chosen2 = top.sorted();
+  const exactSlot = /* @__PURE__ */ new Map();
+  const nearSlot = /* @__PURE__ */ new Map();
+  chosen2.forEach((c, idx) => (c.kind === "exact" ? exactSlot : nearSlot).set(c.first, idx));
+  const copies = chosen2.map(() => []);
+  for (let g = 0; g < n; g++) {
+    const r = rep[g];
+    if (r >= 0 && r !== g) {
+      const slot = exactSlot.get(r);
+      if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
+    }
+    const t = rootOf[g];
+    if (t >= 0 && t !== g) {
+      const slot = nearSlot.get(t);
+      if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
+    }
+  }
+  const wanted = /* @__PURE__ */ new Set();
+  chosen2.forEach((c, idx) => {
+    wanted.add(c.first);
+    for (const g of copies[idx]) {
+      wanted.add(g);
+      if (c.kind === "near") wanted.add(nearOf[g]);
+    }
+  });
+  const where2 = locate(indexes, starts, wanted);
+  const clusters = chosen2.map((c, idx) => ({
+    kind: c.kind,
+    first: where2.get(c.first),
+    size: c.size,
+    copies: copies[idx].map((g) => {
+      const at2 = where2.get(g);
+      if (c.kind === "exact") return { ...at2 };
+      const of = nearOf[g];
+      return { ...at2, jaccard: round4(sig.jaccard(g, of)), of: where2.get(of) };
+    }),
+    copiesOmitted: c.size - 1 - copies[idx].length
+  }));
+  return {
+    options,
+    total: totalTally,
+    exactDocs: totalTally.exactDocs,
+    nearDocs: totalTally.nearDocs,
+    perShard,
+    perLanguage: [...perLanguage2].sort((a, b) => a[0] - b[0]).map(([language, t]) => ({ language, ...t })),
+    clusters,
+    exactClusters,
+    nearClusters,
+    clustersOmitted: exactClusters + nearClusters - clusters.length,
+    ...against ? { againstExisting: against } : {},
+    statistics: {
+      bands,
+      rows,
+      signatureBits: bits,
+      comparedPairs,
+      verifiedPairs,
+      cappedBuckets,
+      workingBytes,
+      workingBytesPerDocument: n ? round4(workingBytes / n) : 0,
+      indexBytes,
+      indexBytesPerDocument: n ? round4(indexBytes / n) : 0
+    }
+  };
+}
+function count(t, kind, exact, near) {
+  t.docs++;
+  if (kind === KIND_EMPTY) t.emptyDocs++;
+  if (kind === KIND_WORDLESS) t.wordlessDocs++;
+  if (exact) t.exactDocs++;
+  if (near) t.nearDocs++;
+}
+function wantsExisting(f) {
+  return (f & (CLASS_HAS_NEW | CLASS_HAS_EXISTING | NEAR_EXISTING)) === CLASS_HAS_NEW;
+}
+function round4(x) {
+  return Math.round(x * 1e4) / 1e4;
+}
+function readLocations(s, visit) {
+  const b = s.blob;
+  let at2 = s.layout.streamOffset;
+  const end = at2 + s.layout.streamBytes;
+  let line = 0;
+  const varint = () => {
+    let v = 0;
+    let scale = 1;
+    for (let shift = 0; shift < 49; shift += 7) {
+      if (at2 >= end) throw new DuplicateIndexError(s.shard, "corrupt: location stream ends inside a record");
+      const byte = b[at2++];
+      v += (byte & 127) * scale;
+      if (byte < 128) return v;
+      scale *= 128;
+    }
+    throw new DuplicateIndexError(s.shard, "corrupt: over-long number in the location stream");
+  };
+  for (let i = 0; i < s.layout.documents; i++) {
+    const z = varint();
+    line += z % 2 === 0 ? z / 2 : -(z + 1) / 2;
+    const tag = varint();
+    const kind = tag % 4;
+    if (kind > KIND_FULL) throw new DuplicateIndexError(s.shard, `corrupt: unknown document kind ${kind}`);
+    visit(i, line, Math.floor(tag / 4), kind);
+  }
+  if (at2 !== end) throw new DuplicateIndexError(s.shard, `corrupt: ${end - at2} bytes left after the last location record`);
+}
+function locate(indexes, starts, wanted) {
+  const out = /* @__PURE__ */ new Map();
+  const byShard = /* @__PURE__ */ new Map();
+  for (const g of wanted) {
+    const si = shardOf(starts, g);
+    let set = byShard.get(si);
+    if (!set) byShard.set(si, set = /* @__PURE__ */ new Set());
+    set.add(g);
+  }
+  for (const [si, set] of byShard) {
+    const s = indexes[si];
+    readLocations(s, (i, line, language) => {
+      const g = s.start + i;
+      if (set.has(g)) out.set(g, { shard: s.shard, line, language });
+    });
+  }
+  return out;
+}
+function shardOf(starts, g) {
+  let a = 0;
+  let b = starts.length - 2;
+  while (a < b) {
+    const mid = a + b + 1 >>> 1;
+    if (starts[mid] <= g) a = mid;
+    else b = mid - 1;
+  }
+  while (a + 1 < starts.length - 1 && starts[a + 1] <= g) a++;
+  return a;
+}
+function radixSort(keys, n, out, scratch2, counts) {
+  counts.fill(0);
+  for (let i = 0; i < n; i++) counts[keys[i] & 65535]++;
+  let sum = 0;
+  for (let d = 0; d < 65536; d++) {
+    const c = counts[d];
+    counts[d] = sum;
+    sum += c;
+  }
+  for (let i = 0; i < n; i++) scratch2[counts[keys[i] & 65535]++] = i;
+  counts.fill(0);
+  for (let i = 0; i < n; i++) counts[keys[i] >>> 16]++;
+  sum = 0;
+  for (let d = 0; d < 65536; d++) {
+    const c = counts[d];
+    counts[d] = sum;
+    sum += c;
+  }
+  for (let p = 0; p < n; p++) {
+    const i = scratch2[p];
+    out[counts[keys[i] >>> 16]++] = i;
+  }
+}
+var SignatureReader = class {
+  constructor(indexes, starts, k, bits) {
+    this.starts = starts;
+    this.k = k;
+    this.bits = bits;
+    this.blobs = indexes.map((s) => s.blob);
+    this.offsets = indexes.map((s) => s.layout.signatureOffset);
+    this.bytes = indexes[0]?.layout.signatureBytes ?? 0;
+  }
+  starts;
+  k;
+  bits;
+  blobs;
+  offsets;
+  bytes;
+  lastShard = 0;
+  /** Returns [blob, byte offset] of global document g's signature. */
+  find(g) {
+    const st = this.starts;
+    let s = this.lastShard;
+    if (!(st[s] <= g && g < st[s + 1])) s = this.lastShard = shardOf(st, g);
+    return s;
+  }
+  /** Returns the estimated Jaccard similarity of two documents from their stored values. */
+  jaccard(a, b) {
+    const sa = this.find(a);
+    const oa = this.offsets[sa] + (a - this.starts[sa]) * this.bytes;
+    const sb = this.find(b);
+    const ob = this.offsets[sb] + (b - this.starts[sb]) * this.bytes;
+    const same = agreement(this.blobs[sa], oa, this.blobs[sb], ob, this.bytes, this.k, this.bits);
+    return jaccardFromAgreement(same, this.k, this.bits);
+  }
+  /** Writes into keys[g] the band key (values [first, first + rows)) of every document taking part in near detection, and 0 into the others'. */
+  bandKeys(flags, first, rows, keys) {
+    const bits = this.bits;
+    const nb = this.bytes;
+    for (let s = 0; s < this.blobs.length; s++) {
+      const blob = this.blobs[s];
+      const end = this.starts[s + 1];
+      for (let g = this.starts[s], off = this.offsets[s]; g < end; g++, off += nb) {
+        keys[g] = flags[g] & PARTICIPANT ? bandKey(blob, off, bits, first, rows) || 1 : 0;
+      }
+    }
+  }
+};
+function agreement(a, oa, b, ob, bytes2, k, bits) {
+  let same = 0;
+  if (bits === 4) {
+    for (let i = 0; i < bytes2; i++) same += EQUAL_NIBBLES[a[oa + i] ^ b[ob + i]];
+    if (k % 2 === 1) same--;
+  } else {
+    const w = bits / 8;
+    for (let i = 0; i < bytes2; i += w) {
+      let eq = true;
+      for (let j = 0; j < w; j++) if (a[oa + i + j] !== b[ob + i + j]) eq = false;
+      if (eq) same++;
+    }
+  }
+  return same;
+}
+function bandKey(blob, off, bits, first, rows) {
+  let h = 1013904242 ^ first;
+  for (let v = first; v < first + rows; v++) {
+    let x;
+    if (bits === 4) x = blob[off + (v >>> 1)] >>> ((v & 1) << 2) & 15;
+    else if (bits === 8) x = blob[off + v];
+    else if (bits === 16) x = blob[off + 2 * v] | blob[off + 2 * v + 1] << 8;
+    else x = blob[off + 4 * v] | blob[off + 4 * v + 1] << 8 | blob[off + 4 * v + 2] << 16 | blob[off + 4 * v + 3] << 24;
+    h = Math.imul(h ^ x, 16777619);
+    h = h << 13 | h >>> 19;
+  }
+  h ^= h >>> 16;
+  h = Math.imul(h, 2246822507);
+  h ^= h >>> 13;
+  h = Math.imul(h, 3266489909);
+  return h ^ h >>> 16;
+}
+var TopClusters = class {
+  constructor(limit) {
+    this.limit = limit;
+  }
+  limit;
+  items = [];
+  offer(first, size, kind) {
+    if (this.limit === 0) return;
+    this.items.push({ first, size, kind });
+    if (this.items.length >= 2 * this.limit && this.items.length >= 1024) this.cut();
+  }
+  sorted() {
+    this.cut();
+    return this.items;
+  }
+  cut() {
+    this.items.sort((a, b) => b.size - a.size || a.first - b.first || (a.kind === b.kind ? 0 : a.kind === "exact" ? -1 : 1));
+    if (this.items.length > this.limit) this.items.length = this.limit;
+  }
+};
+
+// src/measure/duplicates/contamination.ts
+var mix323 = mix32;
+var mix32b4 = mix32b;
+var DEFAULT_NGRAM2 = 13;
+var BASE_1 = 625341585;
+var BASE_2 = 1481765933;
+var LOAD = 0.5;
+var INDEX_VERSION = 1;
+function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
+  if (!Number.isInteger(ngram) || ngram < 1) throw new RangeError(`contamination: ngram must be a positive integer, got ${ngram}`);
+  const buf = wordBuffer(2);
+  const grams = [];
+  const lengths = /* @__PURE__ */ new Set();
+  let total = 0;
+  let shortItems = 0;
+  let emptyItems = 0;
+  let id1 = Math.imul(2654435769 ^ INDEX_VERSION, 16777619) ^ ngram;
+  let id2 = Math.imul(2135587861 ^ INDEX_VERSION, 1540483477) ^ ngram;
+  const fold2 = (x) => {
+    id1 = Math.imul(id1 ^ x, 16777619);
+    id1 = id1 << 13 | id1 >>> 19;
+    id2 = Math.imul(id2 ^ x, 1540483477);
+    id2 = id2 << 11 | id2 >>> 21;
+  };
+  items.forEach((item2, idx) => {
+    if (typeof item2?.text !== "string") throw new TypeError(`contamination: item ${idx} (${item2?.file}:${item2?.line}) has no text`);
+    const words = hashWords(prepareText(item2.text), buf);
+    for (let i = 0; i < item2.file.length; i++) fold2(item2.file.charCodeAt(i));
+    fold2(65534);
+    fold2(item2.line);
+    for (let i = 0; i < words; i++) fold2(buf.lane1[i]);
+    fold2(65535);
+    if (words === 0) {
+      emptyItems++;
+      grams.push({ l1: new Int32Array(0), l2: new Int32Array(0), count: 0 });
+      return;
+    }
+    const m = Math.min(ngram, words);
+    if (words < ngram) shortItems++;
+    lengths.add(m);
+    const count3 = words - m + 1;
+    const l1 = new Int32Array(count3);
+    const l2 = new Int32Array(count3);
+    rollGrams(buf, words, m, l1, l2);
+    grams.push({ l1, l2, count: count3 });
+    total += count3;
+  });
+  let size = 16;
+  while (size * LOAD < total) size *= 2;
+  const lane1 = new Int32Array(size);
+  const lane2 = new Int32Array(size);
+  const item = new Int32Array(size).fill(-1);
+  const mask = size - 1;
+  let distinct = 0;
+  grams.forEach((g, idx) => {
+    for (let i = 0; i < g.count; i++) {
+      const a = g.l1[i];
+      const b = g.l2[i];
+      let slot = a & mask;
+      while (item[slot] >= 0 && !(lane1[slot] === a && lane2[slot] === b)) slot = slot + 1 & mask;
+      if (item[slot] < 0) {
+        lane1[slot] = a;
+        lane2[slot] = b;
+        item[slot] = idx;
+        distinct++;
+      }
+    }
+  });
+  return {
+    id: hex64(mix323(id1 ^ items.length), mix32b4(id2 + items.length)),
+    ngram,
+    items: items.length,
+    grams: distinct,
+    shortItems,
+    emptyItems,
+    lengths: [...lengths].sort((a, b) => b - a),
+    table: { lane1, lane2, item, mask },
+    sources: items.map((it) => ({ file: it.file, line: it.line }))
+  };
+}
+function rollGrams(buf, count3, m, l1, l2) {
+  const w1 = buf.lane1;
+  const w2 = buf.lane2;
+  let top1 = 1;
+  let top2 = 1;
+  for (let j = 1; j < m; j++) {
+    top1 = Math.imul(top1, BASE_1);
+    top2 = Math.imul(top2, BASE_2);
+  }
+  let h1 = 0;
+  let h2 = 0;
+  for (let j = 0; j < m; j++) {
+    h1 = Math.imul(h1, BASE_1) + w1[j] | 0;
+    h2 = Math.imul(h2, BASE_2) + w2[j] | 0;
+  }
+  l1[0] = mix323(h1 ^ m);
+  l2[0] = mix32b4(h2 + m);
+  for (let i = 1; i + m <= count3; i++) {
+    h1 = Math.imul(h1 - Math.imul(w1[i - 1], top1) | 0, BASE_1) + w1[i + m - 1] | 0;
+    h2 = Math.imul(h2 - Math.imul(w2[i - 1], top2) | 0, BASE_2) + w2[i + m - 1] | 0;
+    l1[i] = mix323(h1 ^ m);
+    l2[i] = mix32b4(h2 + m);
+  }
+}
+var scratch = { buf: wordBuffer(2), l1: new Int32Array(1024), l2: new Int32Array(1024) };
+function findContamination(index2, text) {
+  const buf = scratch.buf;
+  const words = hashWords(prepareText(text), buf);
+  const { lane1, lane2, item, mask } = index2.table;
+  let best = -1;
+  for (const m of index2.lengths) {
+    if (words < m) continue;
+    const count3 = words - m + 1;
+    if (scratch.l1.length < count3) {
+      scratch.l1 = new Int32Array(count3 * 2);
+      scratch.l2 = new Int32Array(count3 * 2);
+    }
+    const l1 = scratch.l1;
+    const l2 = scratch.l2;
+    rollGrams(buf, words, m, l1, l2);
+    for (let i = 0; i < count3; i++) {
+      const a = l1[i];
+      const b = l2[i];
+      let slot = a & mask;
+      for (; ; ) {
+        const it = item[slot];
+        if (it < 0) break;
+        if (lane1[slot] === a && lane2[slot] === b) {
+          if (best < 0 || it < best) best = it;
+          break;
+        }
+        slot = slot + 1 & mask;
+      }
+      if (best === 0) break;
+    }
+    if (best === 0) break;
+  }
+  return best < 0 ? null : { ...index2.sources[best] };
+}
+
+// src/measure/tokens/load.ts
+import { createHash as createHash3 } from "node:crypto";
+import { readFile as readFile3 } from "node:fs/promises";
+
+// src/measure/tokens/errors.ts
+var TokenizerError = class extends Error {
+  name = "TokenizerError";
+  stage;
+  /** The tokenizer file (as given), or the builtin name. */
+  file;
+  /** 1-based line of a rank file, when the problem is on one line. */
+  line;
+  constructor(stage, file, message, options = {}) {
+    const where2 = options.line === void 0 ? file : `${file}:${options.line}`;
+    super(`${where2}: ${message}`, options.cause === void 0 ? void 0 : { cause: options.cause });
+    this.stage = stage;
+    this.file = file;
+    if (options.line !== void 0) this.line = options.line;
+  }
+};
+
+// src/measure/tokens/hf.ts
+import * as hf from "@huggingface/tokenizers";
+
+// src/measure/tokens/cache.ts
+var DEFAULT_GENERATION_SIZE = 65536;
+var MAX_CACHED_PIECE_LENGTH = 128;
+var EMPTY = -1;
+function hashRange(text, start, end) {
+  let h = 2166136261 | 0;
+  for (let i = start; i < end; i++) h = Math.imul(h ^ text.charCodeAt(i), 16777619);
+  return h;
+}
+var Generation = class {
+  constructor(capacity) {
+    this.capacity = capacity;
+    let size = 1;
+    while (size < capacity * 2) size *= 2;
+    this.mask = size - 1;
+    this.slots = new Int32Array(size).fill(EMPTY);
+    this.hashes = new Int32Array(size);
+  }
+  capacity;
+  mask;
+  slots;
+  hashes;
+  keys = [];
+  values = [];
+  find(text, start, end, hash2) {
+    const { slots, hashes, keys, mask } = this;
+    const length = end - start;
+    for (let i = hash2 & mask; ; i = i + 1 & mask) {
+      const id = slots[i];
+      if (id === EMPTY) return void 0;
+      if (hashes[i] === hash2) {
+        const key = keys[id];
+        if (key.length === length && text.startsWith(key, start)) return this.values[id];
+      }
+    }
+  }
+  add(key, hash2, value) {
+    const { slots, mask } = this;
+    let i = hash2 & mask;
+    while (slots[i] !== EMPTY) i = i + 1 & mask;
+    slots[i] = this.keys.length;
+    this.hashes[i] = hash2;
+    this.keys.push(key);
+    this.values.push(value);
+  }
+  get size() {
+    return this.keys.length;
+  }
+  clear() {
+    this.slots.fill(EMPTY);
+    this.keys = [];
+    this.values = [];
+  }
+};
+var PieceCache = class {
+  young;
+  old;
+  hits = 0;
+  misses = 0;
+  evictions = 0;
+  constructor(generationSize = DEFAULT_GENERATION_SIZE) {
+    if (!(generationSize >= 1)) throw new RangeError(`cache generation size must be at least 1, got ${generationSize}`);
+    this.young = new Generation(generationSize);
+    this.old = new Generation(generationSize);
+  }
+  /** Returns the cached value of text[start, end) with its hash, or undefined (a miss, counted). */
+  find(text, start, end, hash2) {
+    let value = this.young.find(text, start, end, hash2);
+    if (value !== void 0) {
+      this.hits++;
+      return value;
+    }
+    value = this.old.find(text, start, end, hash2);
+    if (value !== void 0) {
+      this.hits++;
+      this.add(text.slice(start, end), hash2, value);
+      return value;
+    }
+    this.misses++;
+    return void 0;
+  }
+  /** Returns the cached value of a whole string, or undefined. */
+  get(key) {
+    return this.find(key, 0, key.length, hashRange(key, 0, key.length));
+  }
+  /** Stores a value under a key (hash as from hashRange), retiring the young generation when full. */
+  add(key, hash2, value) {
+    if (key.length > MAX_CACHED_PIECE_LENGTH) return;
+    this.young.add(key, hash2, value);
+    if (this.young.size >= this.young.capacity) {
+      const retired = this.old;
+      this.old = this.young;
+      retired.clear();
+      this.young = retired;
+      this.evictions++;
+    }
+  }
+  /** Stores a value under a whole string. */
+  set(key, value) {
+    this.add(key, hashRange(key, 0, key.length), value);
+  }
+  /** Returns hit, miss and eviction counts and the entries held. */
+  stats() {
+    return { hits: this.hits, misses: this.misses, evictions: this.evictions, entries: this.young.size + this.old.size };
+  }
+};
+
+// src/measure/tokens/hf.ts
+var { BPE, ByteLevelPreTokenizer, MetaspacePreTokenizer, ReplacePreTokenizer, SequencePreTokenizer, Unigram, WordPiece } = hf;
+var { Tokenizer } = hf;
+var REQUIRED_KEYS = ["normalizer", "pre_tokenizer", "post_processor", "decoder"];
+function createJsonCounter(json, file, id, generationSize) {
+  if (json === null || typeof json !== "object" || Array.isArray(json)) {
+    throw new TokenizerError("load", file, "a tokenizer.json must hold a JSON object");
+  }
+  const config = { ...json };
+  const model = config.model;
+  if (model === null || typeof model !== "object" || Array.isArray(model)) {
+    throw new TokenizerError("load", file, 'no "model" object: not a tokenizer.json');
+  }
+  if (model.type !== void 0 && !["BPE", "WordPiece", "Unigram"].includes(model.type)) {
+    throw new TokenizerError(
+      "load",
+      file,
+      `unknown model type ${JSON.stringify(model.type)} (sluice reads BPE, WordPiece and Unigram)`
+    );
+  }
+  for (const key of REQUIRED_KEYS) if (!(key in config)) config[key] = null;
+  if (!("added_tokens" in config)) config.added_tokens = [];
+  if (!Array.isArray(config.added_tokens)) throw new TokenizerError("load", file, '"added_tokens" must be a list');
+  let tokenizer;
+  try {
+    tokenizer = new Tokenizer(config, {});
+  } catch (cause) {
+    throw new TokenizerError("load", file, `cannot build the tokenizer: ${cause.message}`, { cause });
+  }
+  const lib = tokenizer;
+  const kind = kindOf3(lib.model);
+  if (kind === null) {
+    throw new TokenizerError("load", file, "the model is neither BPE, WordPiece nor Unigram");
+  }
+  const unknownId = lib.model.unk_token_id ?? null;
+  const plan = planFastPath(lib);
+  const idOf = (token) => lib.added_tokens_map.get(token)?.id ?? lib.model.tokens_to_ids.get(token) ?? lib.model.unk_token_id;
+  const isUnknown = (token) => {
+    const tokenId = idOf(token);
+    return tokenId === void 0 || tokenId === unknownId;
+  };
+  const isFusable = (token) => (lib.model.tokens_to_ids.get(token) ?? lib.model.unk_token_id) === lib.model.unk_token_id;
+  const wholeText = (text) => {
+    const ids = lib.encode(text, { add_special_tokens: false }).ids;
+    let unknown = 0;
+    for (const tokenId of ids) if (tokenId === void 0 || tokenId === unknownId) unknown++;
+    return { tokens: ids.length, unknown };
+  };
+  let countText = wholeText;
+  let stats = () => ({ hits: 0, misses: 0, evictions: 0, entries: 0 });
+  if (plan !== null) {
+    const cache = new PieceCache(generationSize);
+    const firstSectionCache = plan.dependsOnSection ? new PieceCache(generationSize) : cache;
+    stats = () => {
+      const a = cache.stats();
+      if (firstSectionCache === cache) return a;
+      const b = firstSectionCache.stats();
+      return { hits: a.hits + b.hits, misses: a.misses + b.misses, evictions: a.evictions + b.evictions, entries: a.entries + b.entries };
+    };
+    const fuse = lib.model.fuse_unk;
+    const pieceCount = (piece, sectionIndex) => {
+      const store = sectionIndex === 0 ? firstSectionCache : cache;
+      const cached = store.get(piece);
+      if (cached !== void 0) return cached;
+      let parts = [piece];
+      for (const stage of plan.rest) parts = stage.pre_tokenize(parts, { section_index: sectionIndex });
+      const out = lib.model(parts);
+      let unknown = 0;
+      for (const token of out) if (isUnknown(token)) unknown++;
+      const first = out[0];
+      const last = out[out.length - 1];
+      const result = {
+        tokens: out.length,
+        unknown,
+        firstFusable: first !== void 0 && isFusable(first),
+        lastFusable: last !== void 0 && isFusable(last),
+        firstUnknown: first !== void 0 && isUnknown(first),
+        lastUnknown: last !== void 0 && isUnknown(last)
+      };
+      store.set(piece, result);
+      return result;
+    };
+    const countSubsection = (text, sectionIndex, total) => {
+      const options = { section_index: sectionIndex };
+      let parts = [text];
+      for (const stage of plan.head) parts = stage.pre_tokenize(parts, options);
+      const pieces = plan.split(parts, options);
+      let previous = null;
+      for (const piece of pieces) {
+        const c = pieceCount(piece, sectionIndex);
+        if (c.tokens === 0) continue;
+        total.tokens += c.tokens;
+        total.unknown += c.unknown;
+        if (fuse && previous !== null && previous.lastFusable && c.firstFusable) {
+          total.tokens--;
+          if (previous.lastUnknown && c.firstUnknown) total.unknown--;
+        }
+        previous = c;
+      }
+    };
+    countText = (text) => {
+      const total = { tokens: 0, unknown: 0 };
+      const sections = splitAdded(lib.splitter_unnormalized, lib.added_tokens_map, text);
+      for (let i = 0; i < sections.length; i++) {
+        const section = sections[i];
+        if (section.length === 0) continue;
+        if (lib.added_tokens_map.has(section)) {
+          total.tokens++;
+          if (isUnknown(section)) total.unknown++;
+          continue;
+        }
+        const normalized = lib.normalizer === null ? section : lib.normalizer(section);
+        if (normalized.length === 0) continue;
+        const subsections = splitAdded(lib.splitter_normalized, lib.added_tokens_map, normalized);
+        for (const sub of subsections) {
+          if (sub.length === 0) continue;
+          if (lib.added_tokens_map.has(sub)) {
+            total.tokens++;
+            if (isUnknown(sub)) total.unknown++;
+            continue;
+          }
+          countSubsection(sub, i, total);
+        }
+      }
+      return total;
+    };
+  }
+  const guarded = (text) => {
+    try {
+      return countText(text);
+    } catch (cause) {
+      throw new TokenizerError("count", file, `cannot encode text: ${cause.message}`, { cause });
+    }
+  };
+  const words = new PieceCache(generationSize);
+  return {
+    id,
+    label: file,
+    kind,
+    unknownTokenId: unknownId,
+    exactFastPath: plan !== null,
+    count: guarded,
+    countPiece: (piece) => {
+      const cached = words.get(piece);
+      if (cached !== void 0) return cached;
+      const n = guarded(piece).tokens;
+      words.set(piece, n);
+      return n;
+    },
+    cacheStats: () => stats()
+  };
+}
+function kindOf3(model) {
+  if (model instanceof BPE) return "bpe";
+  if (model instanceof WordPiece) return "wordpiece";
+  if (model instanceof Unigram) return "unigram";
+  return null;
+}
+function splitAdded(splitter, added, text) {
+  const trie = splitter.trie;
+  let any = false;
+  for (const first in trie) {
+    if (text.includes(first)) {
+      any = true;
+      break;
+    }
+  }
+  if (!any) return text.length === 0 ? [] : [text];
+  const sections = splitter.split(text);
+  sections.forEach((section, i) => {
+    const token = added.get(section);
+    if (token === void 0) return;
+    if (token.lstrip && i > 0) sections[i - 1] = sections[i - 1].trimEnd();
+    if (token.rstrip && i < sections.length - 1) sections[i + 1] = sections[i + 1].trimStart();
+  });
+  return sections;
+}
+function isSingleOutput(stage) {
+  if (stage instanceof ByteLevelPreTokenizer) return stage.use_regex === false;
+  return stage instanceof MetaspacePreTokenizer || stage instanceof ReplacePreTokenizer;
+}
+function planFastPath(lib) {
+  if (lib.remove_space === true || lib.do_lowercase_and_remove_accent === true) return null;
+  if (lib.post_processor !== null) {
+    const probe = ["a", "b", "c"];
+    let out;
+    try {
+      out = lib.post_processor([...probe], null, false).tokens;
+    } catch {
+      return null;
+    }
+    if (!Array.isArray(out) || out.length !== probe.length || out.some((t, i) => t !== probe[i])) return null;
+  }
+  if (lib.pre_tokenizer === null) return null;
+  const stages = [];
+  const flatten = (stage) => {
+    if (stage instanceof SequencePreTokenizer) {
+      for (const inner of stage.tokenizers ?? []) if (inner !== null) flatten(inner);
+    } else {
+      stages.push(stage);
+    }
+  };
+  flatten(lib.pre_tokenizer);
+  const k = stages.findIndex((stage) => !isSingleOutput(stage));
+  if (k < 0) return null;
+  const splitter = stages[k];
+  let rest = stages.slice(k + 1);
+  let split = (parts, options) => splitter.pre_tokenize(parts, options);
+  if (splitter instanceof ByteLevelPreTokenizer) {
+    const bl = splitter;
+    const mapper = new ByteLevelPreTokenizer({ ...bl.config, use_regex: false, add_prefix_space: false });
+    split = (parts) => parts.flatMap((text) => {
+      const t = bl.add_prefix_space && !text.startsWith(" ") ? " " + text : text;
+      return t.match(bl.pattern) ?? [];
+    });
+    rest = [mapper, ...rest];
+  }
+  const dependsOnSection = rest.some(
+    (stage) => stage instanceof MetaspacePreTokenizer && stage.prepend_scheme === "first"
+  );
+  return { head: stages.slice(0, k), split, rest, dependsOnSection };
+}
+
+// src/measure/tokens/patterns.ts
+var BUILTIN_NAMES = ["gpt2", "r50k_base", "p50k_base", "cl100k_base", "o200k_base"];
+var GPT2 = String.raw`'s|'t|'re|'ve|'m|'ll|'d| ?\p{L}+| ?\p{N}+| ?[^\s\p{L}\p{N}]+|\s+(?!\S)|\s+`;
+var CL100K = String.raw`('s|'S|'t|'T|'re|'rE|'Re|'RE|'ve|'vE|'Ve|'VE|'m|'M|'ll|'lL|'Ll|'LL|'d|'D)|[^\r\n\p{L}\p{N}]?\p{L}+|\p{N}{1,3}| ?[^\s\p{L}\p{N}]+[\r\n]*|\s*[\r\n]+|\s+(?!\S)|\s+`;
+var O200K_CONTRACTION = String.raw`('s|'S|'t|'T|'re|'rE|'Re|'RE|'ve|'vE|'Ve|'VE|'m|'M|'ll|'lL|'Ll|'LL|'d|'D)?`;
+var O200K = String.raw`[^\r\n\p{L}\p{N}]?[\p{Lu}\p{Lt}\p{Lm}\p{Lo}\p{M}]*[\p{Ll}\p{Lm}\p{Lo}\p{M}]+` + O200K_CONTRACTION + String.raw`|[^\r\n\p{L}\p{N}]?[\p{Lu}\p{Lt}\p{Lm}\p{Lo}\p{M}]+[\p{Ll}\p{Lm}\p{Lo}\p{M}]*` + O200K_CONTRACTION + String.raw`|\p{N}{1,3}| ?[^\s\p{L}\p{N}]+[\r\n/]*|\s*[\r\n]+|\s+(?!\S)|\s+`;
+var BUILTIN_PATTERNS = {
+  gpt2: GPT2,
+  r50k_base: GPT2,
+  p50k_base: GPT2,
+  cl100k_base: CL100K,
+  o200k_base: O200K
+};
+var DEFAULT_RANK_FILE_PATTERN = "cl100k_base";
+function isBuiltinName(name) {
+  return BUILTIN_NAMES.includes(name);
+}
+
+// src/measure/tokens/ranks.ts
+var BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
+var RANK = /^(?:0|[1-9][0-9]*)$/;
+function parseRankFile(text, file) {
+  const ranks = /* @__PURE__ */ new Map();
+  const lines = text.split("\n");
+  for (let i = 0; i < lines.length; i++) {
+    const line = lines[i].endsWith("\r") ? lines[i].slice(0, -1) : lines[i];
+    if (line.length === 0) {
+      if (i === lines.length - 1) continue;
+      throw new TokenizerError("load", file, "empty line in a rank file", { line: i + 1 });
+    }
+    const parts = line.split(" ");
+    if (parts.length !== 2) {
+      throw new TokenizerError("load", file, `expected "<base64 token> <rank>", got ${quote(line)}`, { line: i + 1 });
+    }
+    const [token, rank2] = parts;
+    if (token.length === 0 || !BASE64.test(token)) {
+      throw new TokenizerError("load", file, `token ${quote(token)} is not base64`, { line: i + 1 });
+    }
+    if (!RANK.test(rank2) || !Number.isSafeInteger(Number(rank2))) {
+      throw new TokenizerError("load", file, `rank ${quote(rank2)} is not a non-negative integer`, { line: i + 1 });
+    }
+    const bytes2 = Buffer.from(token, "base64").toString("latin1");
+    if (ranks.has(bytes2)) {
+      throw new TokenizerError("load", file, `token ${quote(token)} is listed twice`, { line: i + 1 });
+    }
+    ranks.set(bytes2, Number(rank2));
+  }
+  requireEveryByte(ranks, file);
+  return ranks;
+}
+function parseBuiltinRanks(bpeRanks, name) {
+  const ranks = /* @__PURE__ */ new Map();
+  for (const line of bpeRanks.split("\n")) {
+    if (line.length === 0) continue;
+    const parts = line.split(" ");
+    const first = Number.parseInt(parts[1] ?? "", 10);
+    if (!Number.isSafeInteger(first)) throw new TokenizerError("load", name, "builtin rank table is damaged");
+    for (let i = 2; i < parts.length; i++) {
+      ranks.set(Buffer.from(parts[i], "base64").toString("latin1"), first + i - 2);
+    }
+  }
+  requireEveryByte(ranks, name);
+  return ranks;
+}
+function requireEveryByte(ranks, file) {
+  const missing = [];
+  for (let b = 0; b < 256; b++) {
+    if (!ranks.has(String.fromCharCode(b))) missing.push(`0x${b.toString(16).padStart(2, "0")}`);
+  }
+  if (missing.length > 0) {
+    const shown = missing.slice(0, 5).join(", ") + (missing.length > 5 ? ", ..." : "");
+    throw new TokenizerError(
+      "load",
+      file,
+      `rank table lacks ${missing.length} of the 256 single-byte tokens (${shown}); a byte-level vocabulary needs them all (truncated file?)`
+    );
+  }
+}
+function quote(s) {
+  return JSON.stringify(s.length > 60 ? `${s.slice(0, 60)}...` : s);
+}
+
+// src/measure/tokens/ascii-split.ts
+var APOSTROPHE = 39;
+var SPACE2 = 32;
+var SLASH = 47;
+var LOWER = 1;
+var UPPER = 2;
+var DIGIT = 4;
+var SPACE_CLASS = 8;
+var NEWLINE2 = 16;
+var CLASS = new Uint8Array(128);
+for (let c = 0; c < 128; c++) {
+  if (c >= 97 && c <= 122) CLASS[c] = LOWER;
+  else if (c >= 65 && c <= 90) CLASS[c] = UPPER;
+  else if (c >= 48 && c <= 57) CLASS[c] = DIGIT;
+  else if (c === SPACE2 || c >= 9 && c <= 13) CLASS[c] = SPACE_CLASS | (c === 10 || c === 13 ? NEWLINE2 : 0);
+}
+var LETTER = LOWER | UPPER;
+var isOther = (k) => k === 0;
+var END = -1;
+var at = (text, i) => i < text.length ? text.charCodeAt(i) : END;
+function contraction(text, i, caseless) {
+  if (at(text, i) !== APOSTROPHE) return 0;
+  let a = at(text, i + 1);
+  let b = at(text, i + 2);
+  if (caseless) {
+    if (a >= 65 && a <= 90) a += 32;
+    if (b >= 65 && b <= 90) b += 32;
+  }
+  if (a === 115 || a === 116 || a === 109 || a === 100) return 2;
+  if (a === 114 && b === 101 || a === 118 && b === 101 || a === 108 && b === 108) return 3;
+  return 0;
+}
+function run(text, i, mask) {
+  const n = text.length;
+  while (i < n) {
+    const c = text.charCodeAt(i);
+    if (c >= 128) return -1;
+    if ((CLASS[c] & mask) === 0) return i;
+    i++;
+  }
+  return i;
+}
+function otherRun(text, i) {
+  const n = text.length;
+  while (i < n) {
+    const c = text.charCodeAt(i);
+    if (c >= 128) return -1;
+    if (!isOther(CLASS[c])) return i;
+    i++;
+  }
+  return i;
+}
+function trailing(text, i, slash) {
+  for (; ; ) {
+    const c = at(text, i);
+    if (c === 10 || c === 13 || slash && c === SLASH) i++;
+    else return i;
+  }
+}
+function spaceRunWithNewlines(text, p, q) {
+  for (let i = q - 1; i >= p; i--) {
+    if ((CLASS[text.charCodeAt(i)] & NEWLINE2) !== 0) return i + 1;
+  }
+  if (q === text.length || q - p === 1) return q;
+  return q - 1;
+}
+var splitGpt2 = (text, p) => {
+  const c = text.charCodeAt(p);
+  if (c >= 128) return -1;
+  const k = CLASS[c];
+  if (c === APOSTROPHE) {
+    const len = contraction(text, p, false);
+    if (len > 0) return p + len;
+  }
+  let s = p;
+  if (c === SPACE2) {
+    const d = at(text, p + 1);
+    if (d >= 128) return -1;
+    if (d !== END && (CLASS[d] & SPACE_CLASS) === 0) s = p + 1;
+  }
+  const first = s === p ? k : CLASS[text.charCodeAt(s)];
+  if (s > p || (k & SPACE_CLASS) === 0) {
+    if ((first & LETTER) !== 0) return run(text, s, LETTER);
+    if ((first & DIGIT) !== 0) return run(text, s, DIGIT);
+    return otherRun(text, s);
+  }
+  const q = run(text, p, SPACE_CLASS);
+  if (q < 0) return -1;
+  if (q === text.length || q - p === 1) return q;
+  return q - 1;
+};
+function o200kLetters(text, s) {
+  const u = run(text, s, UPPER);
+  if (u < 0) return -1;
+  const l = run(text, u, LOWER);
+  if (l < 0) return -1;
+  return l + contraction(text, l, true);
+}
+var splitO200k = (text, p) => {
+  const c = text.charCodeAt(p);
+  if (c >= 128) return -1;
+  const k = CLASS[c];
+  if ((k & LETTER) !== 0) return o200kLetters(text, p);
+  if (k === DIGIT) {
+    let e = p + 1;
+    while (e < p + 3) {
+      const d = at(text, e);
+      if (d >= 128) return -1;
+      if (d === END || CLASS[d] !== DIGIT) break;
+      e++;
+    }
+    return e;
+  }
+  if (isOther(k)) {
+    const d = at(text, p + 1);
+    if (d >= 128) return -1;
+    if (d !== END && (CLASS[d] & LETTER) !== 0) return o200kLetters(text, p + 1);
+    const e = otherRun(text, p);
+    return e < 0 ? -1 : trailing(text, e, true);
+  }
+  const q = run(text, p, SPACE_CLASS);
+  if (q < 0) return -1;
+  if (q - p === 1 && (k & NEWLINE2) === 0 && q < text.length) {
+    const d = text.charCodeAt(q);
+    if ((CLASS[d] & LETTER) !== 0) return o200kLetters(text, q);
+    if (c === SPACE2 && isOther(CLASS[d])) {
+      const e = otherRun(text, q);
+      return e < 0 ? -1 : trailing(text, e, true);
+    }
+  }
+  return spaceRunWithNewlines(text, p, q);
+};
+var splitCl100k = (text, p) => {
+  const c = text.charCodeAt(p);
+  if (c >= 128) return -1;
+  const k = CLASS[c];
+  if (c === APOSTROPHE) {
+    const len = contraction(text, p, true);
+    if (len > 0) return p + len;
+  }
+  if ((k & LETTER) !== 0) return run(text, p, LETTER);
+  if (k === DIGIT) {
+    let e = p + 1;
+    while (e < p + 3) {
+      const d = at(text, e);
+      if (d >= 128) return -1;
+      if (d === END || CLASS[d] !== DIGIT) break;
+      e++;
+    }
+    return e;
+  }
+  if (isOther(k)) {
+    const d = at(text, p + 1);
+    if (d >= 128) return -1;
+    if (d !== END && (CLASS[d] & LETTER) !== 0) return run(text, p + 1, LETTER);
+    const e = otherRun(text, p);
+    return e < 0 ? -1 : trailing(text, e, false);
+  }
+  const q = run(text, p, SPACE_CLASS);
+  if (q < 0) return -1;
+  if (q - p === 1 && (k & NEWLINE2) === 0 && q < text.length) {
+    const d = text.charCodeAt(q);
+    if ((CLASS[d] & LETTER) !== 0) return run(text, q, LETTER);
+    if (c === SPACE2 && isOther(CLASS[d])) {
+      const e = otherRun(text, q);
+      return e < 0 ? -1 : trailing(text, e, false);
+    }
+  }
+  return spaceRunWithNewlines(text, p, q);
+};
+
+// src/measure/tokens/bpe.ts
+function bytePairCount(bytes2, ranks) {
+  const n = bytes2.length;
+  if (n <= 1) return n;
+  if (ranks.has(bytes2)) return 1;
+  const starts = new Array(n + 1);
+  for (let i = 0; i <= n; i++) starts[i] = i;
+  const pairRank = new Array(n - 1);
+  for (let i = 0; i < n - 1; i++) pairRank[i] = ranks.get(bytes2.slice(i, i + 2)) ?? Infinity;
+  let parts = n;
+  while (parts > 1) {
+    let best = Infinity;
+    let at2 = -1;
+    for (let i = 0; i < parts - 1; i++) {
+      const r = pairRank[i];
+      if (r < best) {
+        best = r;
+        at2 = i;
+      }
+    }
+    if (at2 < 0) break;
+    starts.splice(at2 + 1, 1);
+    pairRank.splice(at2, 1);
+    parts--;
+    if (at2 < parts - 1) pairRank[at2] = rankOf(bytes2, starts, at2, ranks);
+    if (at2 > 0) pairRank[at2 - 1] = rankOf(bytes2, starts, at2 - 1, ranks);
+  }
+  return parts;
+}
+function rankOf(bytes2, starts, i, ranks) {
+  return ranks.get(bytes2.slice(starts[i], starts[i + 2])) ?? Infinity;
+}
+
+// src/measure/tokens/tiktoken.ts
+function asciiSplitterFor(pattern) {
+  if (pattern === BUILTIN_PATTERNS.gpt2) return splitGpt2;
+  if (pattern === BUILTIN_PATTERNS.cl100k_base) return splitCl100k;
+  if (pattern === BUILTIN_PATTERNS.o200k_base) return splitO200k;
+  return null;
+}
+function utf8Bytes(piece) {
+  for (let i = 0; i < piece.length; i++) {
+    if (piece.charCodeAt(i) >= 128) return Buffer.from(piece, "utf8").toString("latin1");
+  }
+  return piece;
+}
+function createRankCounter(options) {
+  const { ranks, label } = options;
+  const split = new RegExp(options.pattern, "gu");
+  const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
+  const cache = new PieceCache(options.generationSize);
+  const words = new PieceCache(options.generationSize);
+  const countRange = (text, start, end) => {
+    if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(utf8Bytes(text.slice(start, end)), ranks);
+    const hash2 = hashRange(text, start, end);
+    const cached = cache.find(text, start, end, hash2);
+    if (cached !== void 0) return cached;
+    const piece = text.slice(start, end);
+    const n = bytePairCount(utf8Bytes(piece), ranks);
+    cache.add(piece, hash2, n);
+    return n;
+  };
+  const countByRegex = (text, from) => {
+    let tokens = 0;
+    split.lastIndex = from;
+    let m;
+    while ((m = split.exec(text)) !== null) {
+      const length = m[0].length;
+      if (length === 0) {
+        const code = text.charCodeAt(split.lastIndex);
+        split.lastIndex += code >= 55296 && code <= 56319 ? 2 : 1;
+        continue;
+      }
+      tokens += countRange(text, m.index, m.index + length);
+    }
+    return tokens;
+  };
+  const countText = (text) => {
+    if (ascii === null) return countByRegex(text, 0);
+    let tokens = 0;
+    const n = text.length;
+    let p = 0;
+    while (p < n) {
+      let e = ascii(text, p);
+      if (e < 0) {
+        split.lastIndex = p;
+        const m = split.exec(text);
+        if (m === null || m.index !== p || m[0].length === 0) return tokens + countByRegex(text, p);
+        e = p + m[0].length;
+      }
+      tokens += countRange(text, p, e);
+      p = e;
+    }
+    return tokens;
+  };
+  const guarded = (text) => {
+    try {
+      return countText(text);
+    } catch (cause) {
+      throw new TokenizerError("count", label, `cannot encode text: ${cause.message}`, { cause });
+    }
+  };
+  return {
+    id: options.id,
+    label,
+    kind: "tiktoken",
+    unknownTokenId: null,
+    exactFastPath: true,
+    count: (text) => ({ tokens: guarded(text), unknown: 0 }),
+    countPiece: (piece) => {
+      const cached = words.get(piece);
+      if (cached !== void 0) return cached;
+      const n = guarded(piece);
+      words.set(piece, n);
+      return n;
+    },
+    cacheStats: () => cache.stats()
+  };
+}
+
+// src/measure/tokens/load.ts
+async function importBuiltin(name) {
+  switch (name) {
+    case "gpt2":
+      return (await import("js-tiktoken/ranks/gpt2")).default;
+    case "r50k_base":
+      return (await import("js-tiktoken/ranks/r50k_base")).default;
+    case "p50k_base":
+      return (await import("js-tiktoken/ranks/p50k_base")).default;
+    case "cl100k_base":
+      return (await import("js-tiktoken/ranks/cl100k_base")).default;
+    case "o200k_base":
+      return (await import("js-tiktoken/ranks/o200k_base")).default;
+  }
+}
+async function loadTokenizer(spec, options = {}) {
+  const generationSize = options.cacheGenerationSize;
+  if (spec.kind === "builtin") {
+    const name = spec.name;
+    if (!isBuiltinName(name)) {
+      throw new TokenizerError("load", name, `unknown builtin tokenizer; the builtins are ${BUILTIN_NAMES.join(", ")}`);
+    }
+    const data2 = await importBuiltin(name);
+    return createRankCounter({
+      id: `builtin:${name}`,
+      label: name,
+      ranks: parseBuiltinRanks(data2.bpe_ranks, name),
+      pattern: data2.pat_str,
+      ...generationSize === void 0 ? {} : { generationSize }
+    });
+  }
+  let bytes2;
+  try {
+    bytes2 = await readFile3(spec.absPath);
+  } catch (cause) {
+    const code = cause.code;
+    const why = code === "ENOENT" ? `no such file (${spec.absPath})` : `cannot read ${spec.absPath}: ${cause.message}`;
+    throw new TokenizerError("load", spec.file, why, { cause });
+  }
+  const digest = createHash3("sha256").update(bytes2).digest("hex");
+  let text;
+  try {
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes2);
+  } catch (cause) {
+    throw new TokenizerError("load", spec.file, "not valid UTF-8", { cause });
+  }
+  if (spec.format === "tiktoken") {
+    const { pattern, patternId } = resolvePattern(spec.pattern, spec.file);
+    return createRankCounter({
+      id: `tiktoken:sha256:${digest}:pattern:${patternId}`,
+      label: spec.file,
+      ranks: parseRankFile(text, spec.file),
+      pattern,
+      ...generationSize === void 0 ? {} : { generationSize }
+    });
+  }
+  if (spec.format === "tokenizer.json") {
+    let json;
+    try {
+      json = JSON.parse(text);
+    } catch (cause) {
+      throw new TokenizerError("load", spec.file, `not valid JSON: ${cause.message}`, { cause });
+    }
+    return createJsonCounter(json, spec.file, `tokenizer.json:sha256:${digest}`, generationSize);
+  }
+  throw new TokenizerError("load", spec.file, `unknown tokenizer format ${JSON.stringify(spec.format)} (expected tokenizer.json or tiktoken)`);
+}
+function resolvePattern(pattern, file) {
+  const name = pattern ?? DEFAULT_RANK_FILE_PATTERN;
+  if (isBuiltinName(name)) return { pattern: BUILTIN_PATTERNS[name], patternId: name };
+  try {
+    new RegExp(name, "gu");
+  } catch (cause) {
+    throw new TokenizerError("load", file, `split pattern is not a valid regular expression: ${cause.message}`, { cause });
+  }
+  return { pattern: name, patternId: `sha256:${createHash3("sha256").update(name).digest("hex").slice(0, 16)}` };
+}
+
+// src/measure/tokens/measure.ts
+var SPACE3 = 32;
+function measureTokens(counter, text, forEachWord2) {
+  const { tokens, unknown } = counter.count(text);
+  let words = 0;
+  let wordTokens = 0;
+  let continuedWords = 0;
+  forEachWord2(text, (start, end) => {
+    const from = start > 0 && text.charCodeAt(start - 1) === SPACE3 ? start - 1 : start;
+    const n = counter.countPiece(text.slice(from, end));
+    words++;
+    wordTokens += n;
+    if (n >= 2) continuedWords++;
+  });
+  return { tokens, unknown, words, wordTokens, continuedWords };
+}
+
+// src/measure/tokens/dictionary.ts
+import { readFile as readFile4 } from "node:fs/promises";
+var WordListError = class extends Error {
+  constructor(file, message, line, options) {
+    super(`${line === void 0 ? file : `${file}:${line}`}: ${message}`, options);
+    this.file = file;
+    this.line = line;
+  }
+  file;
+  line;
+  name = "WordListError";
+};
+function dictionaryFertility(counter, words) {
+  let entries = 0;
+  let tokens = 0;
+  let continued = 0;
+  for (const word of words) {
+    const w = word.trim();
+    if (w.length === 0) continue;
+    const n = counter.countPiece(" " + w);
+    entries++;
+    tokens += n;
+    if (n >= 2) continued++;
+  }
+  return {
+    entries,
+    tokens,
+    fertility: entries === 0 ? 0 : tokens / entries,
+    continued: entries === 0 ? 0 : continued / entries
+  };
+}
+async function readWordList(file) {
+  let bytes2;
+  try {
+    bytes2 = await readFile4(file);
+  } catch (cause) {
+    const code = cause.code;
+    throw new WordListError(file, code === "ENOENT" ? "no such file" : cause.message, void 0, { cause });
+  }
+  let text;
+  try {
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes2);
+  } catch (cause) {
+    throw new WordListError(file, "not valid UTF-8 (sluice reads word lists in UTF-8)", void 0, { cause });
+  }
+  if (text.charCodeAt(0) === 65279) text = text.slice(1);
+  const lines = text.split(/\r?\n/);
+  const hunspell = /^\s*\d+\s*$/.test(lines[0] ?? "");
+  const words = [];
+  for (let i = hunspell ? 1 : 0; i < lines.length; i++) {
+    const line = lines[i].trim();
+    if (line.length === 0) continue;
+    const word = hunspell ? hunspellWord(line) : line;
+    if (word.length > 0) words.push(word);
+  }
+  if (hunspell) {
+    const declared = Number(lines[0].trim());
+    if (words.length === 0 && declared > 0) throw new WordListError(file, `declares ${declared} entries but has none`, 1);
+  }
+  return words;
+}
+function hunspellWord(line) {
+  let word = "";
+  for (let i = 0; i < line.length; i++) {
+    const c = line[i];
+    if (c === "\\" && line[i + 1] === "/") {
+      word += "/";
+      i++;
+      continue;
+    }
+    if (c === "/" || c === "	" || c === " ") break;
+    word += c;
+  }
+  return word;
+}
+
+// src/results/duplicates.ts
+var CLUSTERS_LISTED = 20;
+function joinShardIndexes(shards, options, newShards) {
+  const withIndex = shards.filter((s) => s.duplicateIndex !== void 0);
+  return joinDuplicates(
+    withIndex.map((s) => ({ shard: s.path, index: new Uint8Array(Buffer.from(s.duplicateIndex, "base64")) })),
+    { ...options, maxClusters: CLUSTERS_LISTED, ...newShards ? { newShards } : {} }
+  );
+}
+function summarizeDuplicates(f, languageKeys) {
+  const langName = (i) => languageKeys[i] ?? "other";
+  const byLanguage = {};
+  for (const l of f.perLanguage) {
+    const row = byLanguage[langName(l.language)] ??= { docs: 0, exactDocs: 0, nearDocs: 0 };
+    row.docs += l.docs;
+    row.exactDocs += l.exactDocs;
+    row.nearDocs += l.nearDocs;
+  }
+  const byShard = {};
+  for (const s of f.perShard) byShard[s.shard] = { docs: s.docs, exactDocs: s.exactDocs, nearDocs: s.nearDocs };
+  return {
+    docs: f.total.docs,
+    exactDocs: f.exactDocs,
+    nearDocs: f.nearDocs,
+    tooShortDocs: f.total.emptyDocs + f.total.wordlessDocs,
+    byLanguage,
+    byShard,
+    clusters: f.clusters.map((c) => ({
+      kind: c.kind,
+      first: { path: c.first.shard, line: c.first.line },
+      copies: c.copies.map((x) => ({ path: x.shard, line: x.line, ...x.jaccard !== void 0 ? { jaccard: Math.round(x.jaccard * 1e3) / 1e3 } : {} })),
+      size: c.size
+    })),
+    parameters: {
+      shingle: f.options.shingle,
+      hashes: f.options.hashes,
+      bands: f.statistics.bands,
+      rows: f.statistics.rows,
+      threshold: f.options.threshold
+    }
+  };
+}
+
+// src/core/analyzers.ts
+var REJECTION_SAMPLES = 10;
+function readOptionsOf(policy) {
+  const opts = { textField: policy.corpus.text, maxLineBytes: policy.corpus.maxLineBytes, maxSamples: REJECTION_SAMPLES };
+  if (policy.corpus.declaredLanguage !== void 0) opts.declaredLanguageField = policy.corpus.declaredLanguage;
+  return opts;
+}
+var AnalyzerSetupError = class extends Error {
+  name = "AnalyzerSetupError";
+};
+async function prepareAnalyzers(policy) {
+  if (policy.sampling) {
+    throw new AnalyzerSetupError(`${policy.file}: sampling is not implemented in this version of sluice; remove \`sampling:\` to judge every document`);
+  }
+  const measure = createMeasurer({ languages: policy.languages, detection: policy.detection });
+  const read = readOptionsOf(policy);
+  let main2;
+  let baseline;
+  try {
+    if (policy.tokenizer) main2 = await loadTokenizer(policy.tokenizer);
+    if (policy.baseline) baseline = await loadTokenizer(policy.baseline);
+  } catch (err) {
+    throw new AnalyzerSetupError(`${policy.file}: tokenizer: ${err.message}`);
+  }
+  const dupRule = policy.rules.duplicates;
+  const dupOptions = dupRule ? duplicateOptionsFrom(dupRule) : void 0;
+  let evalIndex;
+  let evalFiles = [];
+  if (policy.rules.contamination) {
+    const rule = policy.rules.contamination;
+    const found = await discoverShards(policy.root, { ...policy.corpus, include: rule.eval, exclude: [] });
+    if (found.shards.length === 0) {
+      throw new AnalyzerSetupError(`${policy.file}: rules.contamination.eval (${rule.eval.join(", ")}) matched no evaluation files under ${policy.root}`);
+    }
+    const items = [];
+    for (const ref of found.shards) {
+      const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
+      if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
+    }
+    evalIndex = buildEvalIndex(items, rule.ngram);
+    evalFiles = found.shards.map((s) => s.path);
+  }
+  const settingsId = settingsIdOf({
+    tool: TOOL_VERSION,
+    schema: RESULT_SCHEMA,
+    languages: policy.languages.map((l) => ({ key: l.key, covers: l.covers, scripts: l.scripts })),
+    detection: policy.detection,
+    read: { text: read.textField, declared: read.declaredLanguageField ?? null, maxLineBytes: read.maxLineBytes },
+    tokenizer: main2?.id ?? null,
+    baseline: baseline?.id ?? null,
+    duplicates: dupOptions ?? null,
+    eval: evalIndex?.id ?? null
+  });
+  const analyzers = { measure };
+  if (main2) {
+    const m = main2;
+    const b = baseline;
+    analyzers.tokens = (text) => {
+      const out = { main: measureTokens(m, text, forEachWord) };
+      if (b) out.baseline = measureTokens(b, text, forEachWord);
+      return out;
+    };
+  }
+  if (dupOptions) analyzers.duplicates = () => new DuplicateIndexBuilder(dupOptions);
+  if (evalIndex) {
+    const idx = evalIndex;
+    analyzers.contamination = (text) => findContamination(idx, text);
+  }
+  return {
+    settingsId,
+    scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId },
+    analyzers,
+    async finish(corpus, newShards) {
+      if (main2) corpus.tokenizer = { label: main2.label, hasUnknown: main2.unknownTokenId !== null };
+      if (baseline) corpus.baseline = { label: baseline.label, hasUnknown: baseline.unknownTokenId !== null };
+      const lists = policy.rules.fertility?.wordLists ?? {};
+      if (main2 && Object.keys(lists).length > 0) {
+        corpus.dictionary = {};
+        for (const [key, list] of Object.entries(lists)) {
+          let words;
+          try {
+            words = await readWordList(list.absPath);
+          } catch (err) {
+            throw new AnalyzerSetupError(`${policy.file}: rules.fertility.word-lists.${key}: ${err.message}`);
+          }
+          const shown = relative2(policy.root, list.absPath) || list.file;
+          const m = dictionaryFertility(main2, words);
+          const entry = { main: { list: shown, ...m } };
+          if (baseline) entry.baseline = { list: shown, ...dictionaryFertility(baseline, words) };
+          corpus.dictionary[key] = entry;
+        }
+      }
+      if (dupOptions) {
+        const findings = joinShardIndexes(corpus.shards, dupOptions, newShards);
+        corpus.duplicates = summarizeDuplicates(findings, policy.languages.map((l) => l.key));
+        if (findings.againstExisting) corpus.duplicatesAgainstExisting = findings.againstExisting;
+      }
+      if (evalIndex && policy.rules.contamination) {
+        corpus.contamination = { ngram: policy.rules.contamination.ngram, evalFiles, evalItems: evalIndex.items };
+      }
+    }
+  };
+}
+
+// src/core/check.ts
+var ConfigError = class extends Error {
+  name = "ConfigError";
+};
+async function loadPolicyOrThrow(file, root, onWarning) {
+  const loaded = await loadPolicy(file, root !== void 0 ? { root } : void 0);
+  if (!loaded.ok) {
+    throw new ConfigError(loaded.problems.map(formatProblem).join("\n"));
+  }
+  for (const w of loaded.warnings) onWarning?.(formatProblem(w));
+  return loaded.policy;
+}
+async function measureCorpus(policy, opts, shardsOverride) {
+  const started = performance.now();
+  let discovery;
+  try {
+    discovery = await discoverShards(policy.root, policy.corpus);
+  } catch (err) {
+    throw new ConfigError(`${policy.file}: ${err.message}`);
+  }
+  const shards = shardsOverride ?? discovery.shards;
+  if (shards.length === 0) {
+    throw new ConfigError(
+      `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(", ")}) under ${policy.root}` + (discovery.skipped.length ? `; ${discovery.skipped.length} files matched but were skipped, e.g. ${discovery.skipped[0].path} (${discovery.skipped[0].reason})` : "")
+    );
+  }
+  let prepared;
+  try {
+    prepared = await prepareAnalyzers(policy);
+  } catch (err) {
+    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
+    throw err;
+  }
+  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
+  const results = [];
+  const cached = /* @__PURE__ */ new Set();
+  let bytes2 = 0;
+  for (const ref of shards) {
+    let result;
+    if (cache) {
+      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
+      result = await cache.get(contentId, prepared.settingsId, ref);
+      if (result) cached.add(ref.path);
+      else {
+        result = await scanShard(ref, prepared.scan, prepared.analyzers);
+        await cache.put({ ...result, contentId });
+      }
+    }
+    if (!result) result = await scanShard(ref, prepared.scan, prepared.analyzers);
+    results.push(result);
+    bytes2 += result.read.bytes;
+    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes2, elapsedMs: performance.now() - started });
+  }
+  results.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+  const corpus = {
+    shards: results,
+    cached,
+    skipped: discovery.skipped,
+    tally: mergeShardResults(results, policy.languages.map((l) => l.key)),
+    elapsedMs: 0
+  };
+  await prepared.finish(corpus, opts.newShards);
+  corpus.elapsedMs = Math.round(performance.now() - started);
+  return corpus;
+}
+async function runCheck(opts) {
+  const reports = [];
+  for (const file of opts.policies) {
+    const policy = await loadPolicyOrThrow(file, opts.root, opts.onWarning);
+    const corpus = await measureCorpus(policy, opts);
+    reports.push(buildReport(policy, corpus, opts.cwd));
+  }
+  return reports;
+}
+
+// src/render/json.ts
+function renderJson(report) {
+  return `${JSON.stringify(report, null, 2)}
+`;
+}
+
+// src/render/bars.ts
+var FULL = "\u2588";
+var PARTIAL = ["", "\u258F", "\u258E", "\u258D", "\u258C", "\u258B", "\u258A", "\u2589"];
+function bar(value, width = 20) {
+  const cells = Math.max(0, Math.min(1, value)) * width;
+  const whole = Math.floor(cells);
+  const eighth = Math.round((cells - whole) * 8);
+  return FULL.repeat(whole) + (eighth === 8 ? FULL : PARTIAL[eighth]);
+}
+
+// src/render/escape.ts
+var MARKDOWN_PUNCT = /[\\`*_{}[\]()#+\-.!|~>]/g;
+var HTML_SPECIAL = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
+function escapeMarkdown(text) {
+  return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, (c) => `U+${c.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`).replace(/[&<>"']/g, (c) => HTML_SPECIAL[c]).replace(MARKDOWN_PUNCT, (c) => `\\${c}`).replace(/@/g, "&#64;").replace(/:\/\//g, "&#58;//").replace(/\r?\n|\r/g, " ");
+}
+function codePath(path5) {
+  const safe = path5.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
+  return `\`${safe}\``;
+}
+
+// src/render/format.ts
+function percent(x) {
+  return x === null || x === void 0 ? "\u2013" : `${(x * 100).toFixed(1)} %`;
+}
+function count2(n) {
+  return n === null || n === void 0 ? "\u2013" : n.toLocaleString("en-US");
+}
+function fixed(x, digits = 2) {
+  return x === null || x === void 0 ? "\u2013" : x.toFixed(digits);
+}
+function points(x) {
+  if (x === null || x === void 0) return "\u2013";
+  const r = Math.round(x * 10) / 10;
+  return `${r > 0 ? "+" : r < 0 ? "\u2212" : "\xB1"}${Math.abs(r).toFixed(1)} pt`;
+}
+function bytes(n) {
+  if (n < 1e3) return `${n} B`;
+  if (n < 1e6) return `${(n / 1e3).toFixed(1)} kB`;
+  if (n < 1e9) return `${(n / 1e6).toFixed(1)} MB`;
+  return `${(n / 1e9).toFixed(2)} GB`;
+}
+function inUnit(x, unit) {
+  if (x === null) return "\u2013";
+  if (unit === "share") return percent(x);
+  if (unit === "count") return count2(x);
+  if (unit === "points") return points(x);
+  return fixed(x, 3);
+}
+function limitOf(r) {
+  const base = inUnit(r.limit, r.unit);
+  return r.tolerance === void 0 ? base : `${base} \xB1${(r.tolerance * 100).toFixed(1)}`;
+}
+function where(loc) {
+  return loc.line === void 0 ? loc.path : `${loc.path}:${loc.line}`;
+}
+
+// src/render/markdown.ts
+var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C" };
+function renderMarkdown(report, opts = {}) {
+  const out = [];
+  const loc = (path5, line) => {
+    const text = codePath(line === void 0 ? path5 : `${path5}:${line}`);
+    if (!opts.linkBase) return text;
+    const href = `${opts.linkBase}/${path5.split("/").map(encodeURIComponent).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
+    return `[${text}](${href})`;
+  };
+  out.push(`## ${ICON[report.verdict]} sluice \xB7 ${escapeMarkdown(report.policy.name)}: ${report.verdict.toUpperCase()}`);
+  out.push("");
+  out.push(`**${escapeMarkdown(report.headline)}**`);
+  out.push("");
+  out.push(
+    `${count2(report.totals.docs)} documents in ${count2(report.input.shards)} shards, ${bytes(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${count2(report.totals.tokens)} tokens (${escapeMarkdown(report.tokenizer?.main ?? "")})` : "") + `; policy ${codePath(report.policy.file)}.`
+  );
+  out.push("");
+  const notPassing = report.rules.filter((r) => r.verdict !== "pass");
+  const ordered = [...notPassing, ...report.rules.filter((r) => r.verdict === "pass")];
+  out.push("| | rule | scope | measured | limit | finding |");
+  out.push("|---|---|---|---:|---:|---|");
+  for (const r of ordered) {
+    out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === "warn" ? " (warn)" : ""} | ${escapeMarkdown(r.scope.replace(/^language:/, ""))} | ${inUnit(r.measured, r.unit)} | ${limitOf(r)} | ${escapeMarkdown(r.message)} |`);
+  }
+  out.push("");
+  for (const r of notPassing) {
+    if (r.locations.length === 0) continue;
+    out.push(`<details><summary>${ICON[r.verdict]} ${r.rule} \xB7 ${escapeMarkdown(r.scope)}: where</summary>`);
+    out.push("");
+    for (const l of r.locations) out.push(`- ${loc(l.path, l.line)}${l.detail ? `: ${escapeMarkdown(l.detail)}` : ""}`);
+    out.push("");
+    out.push("</details>");
+    out.push("");
+  }
+  if (opts.before) out.push(opts.before, "");
+  const unit = report.mixUnit;
+  out.push(`<details open><summary>Language mix (by ${unit})</summary>`);
+  out.push("");
+  out.push(`| language | target | share of ${unit} | | docs | words${report.totals.tokens !== void 0 ? " | tokens" : ""} | purity |`);
+  out.push(`|---|---:|---:|---|---:|---:|${report.totals.tokens !== void 0 ? "---:|" : ""}---:|`);
+  for (const f of Object.values(report.languages)) {
+    if (f.docs === 0 && f.target === void 0) continue;
+    const share = f.share[unit] ?? 0;
+    out.push(
+      `| ${escapeMarkdown(f.key)} | ${percent(f.target)} | ${percent(share)} | ${bar(share, 16)} | ${count2(f.docs)} | ${count2(f.words)}${report.totals.tokens !== void 0 ? ` | ${count2(f.tokens ?? 0)}` : ""} | ${percent(f.purity)} |`
+    );
+  }
+  out.push("");
+  out.push("</details>");
+  out.push("");
+  const declared = Object.values(report.languages).filter((f) => f.declaredDocs);
+  if (declared.length) {
+    out.push("<details><summary>Declared vs detected language</summary>");
+    out.push("");
+    out.push("| declared | documents | detected otherwise | detected as |");
+    out.push("|---|---:|---:|---|");
+    for (const f of declared) {
+      const as = Object.entries(f.detectedAs ?? {}).sort((a, b) => b[1] - a[1]).map(([k, n]) => `${escapeMarkdown(k)} ${count2(n)}`).join(", ");
+      out.push(`| ${escapeMarkdown(f.key)} | ${count2(f.declaredDocs)} | ${percent((f.mismatchDocs ?? 0) / (f.declaredDocs ?? 1))} | ${as} |`);
+    }
+    out.push("");
+    out.push("</details>");
+    out.push("");
+  }
+  const withFertility = Object.values(report.languages).filter((f) => f.fertility && f.docs > 0);
+  if (withFertility.length > 0) {
+    const hasBase = withFertility.some((f) => f.baseline);
+    out.push(`<details><summary>Tokenizer: ${escapeMarkdown(report.tokenizer?.main ?? "")}${hasBase ? ` vs ${escapeMarkdown(report.tokenizer?.baseline ?? "")}` : ""}</summary>`);
+    out.push("");
+    out.push(`| language | fertility | continued words | tokens/word | chars/token | bytes/token | dictionary fertility${hasBase ? " | baseline fertility | change | mix shift" : ""} |`);
+    out.push(`|---|---:|---:|---:|---:|---:|---:|${hasBase ? "---:|---:|---:|" : ""}`);
+    for (const f of withFertility) {
+      const t = f.fertility;
+      const b = f.baseline;
+      const change = b?.fertility && t.fertility ? t.fertility / b.fertility - 1 : null;
+      out.push(
+        `| ${escapeMarkdown(f.key)} | ${fixed(t.fertility, 3)} | ${percent(t.continuedWords)} | ${fixed(t.tokensPerWord, 3)} | ${fixed(t.charsPerToken, 2)} | ${fixed(t.bytesPerToken, 2)} | ${t.dictionary ? fixed(t.dictionary.fertility, 3) : "\u2013"}` + (hasBase ? ` | ${fixed(b?.fertility, 3)} | ${change === null ? "\u2013" : `${change >= 0 ? "+" : ""}${percent(change)}`} | ${points(report.tokenizer?.mixShiftPoints?.[f.key])}` : "") + " |"
+      );
+    }
+    out.push("");
+    out.push("</details>");
+    out.push("");
+  }
+  if (report.duplicates) {
+    const d = report.duplicates;
+    out.push(`<details><summary>Duplicates: ${count2(d.exactDocs)} exact (${percent(d.exactRate)}), ${count2(d.nearDocs)} near (${percent(d.nearRate)})</summary>`);
+    out.push("");
+    out.push(`MinHash over word ${d.parameters.shingle}-grams, ${d.parameters.hashes} hashes, ${d.parameters.bands} bands \xD7 ${d.parameters.rows} rows, Jaccard \u2265 ${d.parameters.threshold}.`);
+    out.push("");
+    for (const c of d.clusters.slice(0, 10)) {
+      out.push(`- ${c.kind} \xD7${c.size}: first ${loc(c.first.path, c.first.line)}; copies ${c.copies.slice(0, 5).map((x) => `${loc(x.path, x.line)}${x.jaccard !== void 0 ? ` (J\u2248${x.jaccard.toFixed(2)})` : ""}`).join(", ")}${c.copies.length > 5 ? ` and ${c.copies.length - 5} more` : ""}`);
+    }
+    out.push("");
+    out.push("</details>");
+    out.push("");
+  }
+  if (report.contamination) {
+    const c = report.contamination;
+    out.push(`<details><summary>Evaluation overlap: ${count2(c.docs)} training documents share a ${c.ngram}-gram with ${count2(c.evalItems)} evaluation items</summary>`);
+    out.push("");
+    for (const s of c.samples) out.push(`- ${loc(s.path, s.line)} overlaps ${codePath(s.detail ?? "")}`);
+    out.push("");
+    out.push("</details>");
+    out.push("");
+  }
+  const i = report.input;
+  out.push(`<details><summary>Input: ${count2(i.lines)} lines = ${count2(i.docLines)} in documents + ${count2(i.empty)} empty + ${count2(i.rejected.count)} rejected</summary>`);
+  out.push("");
+  const reasons = Object.entries(i.rejected.byReason);
+  if (reasons.length) out.push(`Rejected by reason: ${reasons.map(([r, n]) => `${r} ${count2(n)}`).join(", ")}.`, "");
+  for (const b of i.broken) out.push(`- broken: ${loc(b.path)} after line ${b.afterLine}: ${escapeMarkdown(b.message)}`);
+  for (const s of i.skipped) out.push(`- skipped: ${codePath(s.path)} (${s.reason}): ${escapeMarkdown(s.detail)}`);
+  const maxRows = opts.maxShardRows ?? 50;
+  out.push("");
+  out.push("| shard | subset | lines | docs | empty | rejected | languages |");
+  out.push("|---|---|---:|---:|---:|---:|---|");
+  for (const s of report.shards.slice(0, maxRows)) {
+    out.push(`| ${loc(s.path)} | ${escapeMarkdown(s.subset ?? "")} | ${count2(s.lines)} | ${count2(s.docs)} | ${count2(s.empty)} | ${count2(s.rejected)} | ${escapeMarkdown(Object.entries(s.languages).map(([k, n]) => `${k} ${n}`).join(", "))} |`);
+  }
+  if (report.shards.length > maxRows) out.push("", `\u2026and ${report.shards.length - maxRows} more shards (all are in the JSON report).`);
+  out.push("");
+  out.push("</details>");
+  out.push("");
+  out.push("<sub>sluice does not judge licences, personal data or toxicity: a pass is not a clearance.</sub>");
+  return `${out.join("\n")}
+`;
+}
+
+// src/render/terminal.ts
+function renderTerminal(report, opts) {
+  const c = (code) => (s) => opts.color ? `\x1B[${code}m${s}\x1B[0m` : s;
+  const red = c(31), green = c(32), yellow = c(33), dim = c(2), bold = c(1);
+  const paint = { pass: green, warn: yellow, fail: red };
+  const mark = { pass: "ok  ", warn: "WARN", fail: "FAIL" };
+  const lines = [];
+  lines.push(`${bold(`sluice \xB7 ${clean2(report.policy.name)}`)}  ${paint[report.verdict](bold(report.verdict.toUpperCase()))}`);
+  lines.push(paint[report.verdict](report.headline));
+  lines.push(
+    dim(
+      `${count2(report.totals.docs)} documents, ${count2(report.input.shards)} shards, ${bytes(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${count2(report.totals.tokens)} tokens (${report.tokenizer?.main})` : "") + ` \xB7 policy ${report.policy.file}`
+    )
+  );
+  lines.push("");
+  const maxLoc = opts.maxLocations ?? 5;
+  const ordered = [...report.rules].sort((a, b) => rank(a) - rank(b));
+  for (const r of ordered) {
+    const scope = r.scope.replace(/^language:/, "");
+    lines.push(
+      `${paint[r.verdict](mark[r.verdict])} ${r.rule.padEnd(13)} ${clean2(scope).padEnd(10)} ${inUnit(r.measured, r.unit).padStart(9)} ${dim("limit")} ${limitOf(r).padEnd(13)} ${r.verdict === "pass" ? dim(clean2(r.message)) : clean2(r.message)}`
+    );
+    if (r.verdict !== "pass") {
+      for (const l of r.locations.slice(0, maxLoc)) lines.push(`       ${dim("at")} ${clean2(where(l))}${l.detail ? dim(`  ${clean2(l.detail)}`) : ""}`);
+      if (r.locations.length > maxLoc) lines.push(dim(`       \u2026${r.locations.length - maxLoc} more locations in the JSON and Markdown reports`));
+    }
+  }
+  lines.push("");
+  const unit = report.mixUnit;
+  const hasTokens = report.totals.tokens !== void 0;
+  lines.push(bold(`Language mix by ${unit}`));
+  lines.push(dim(`  ${"language".padEnd(9)} ${"target".padStart(7)} ${"share".padStart(7)}  ${"".padEnd(20)} ${"docs".padStart(8)} ${"words".padStart(10)}${hasTokens ? ` ${"tokens".padStart(10)}` : ""} ${"purity".padStart(7)}`));
+  for (const f of Object.values(report.languages)) {
+    if (f.docs === 0 && f.target === void 0) continue;
+    const share = f.share[unit] ?? 0;
+    lines.push(
+      `  ${clean2(f.key).padEnd(9)} ${percent(f.target).padStart(7)} ${percent(share).padStart(7)}  ${bar(share, 20).padEnd(20)} ${count2(f.docs).padStart(8)} ${count2(f.words).padStart(10)}${hasTokens ? ` ${count2(f.tokens ?? 0).padStart(10)}` : ""} ${percent(f.purity).padStart(7)}`
+    );
+  }
+  const declared = Object.values(report.languages).filter((f) => f.declaredDocs);
+  if (declared.length) {
+    lines.push("");
+    lines.push(bold("Declared vs detected language"));
+    for (const f of declared) {
+      const as = Object.entries(f.detectedAs ?? {}).sort((a, b) => b[1] - a[1]).map(([k, n]) => `${clean2(k)} ${count2(n)}`).join(", ");
+      lines.push(`  ${clean2(f.key).padEnd(9)} ${count2(f.declaredDocs).padStart(7)} declared, ${percent((f.mismatchDocs ?? 0) / (f.declaredDocs ?? 1)).padStart(7)} detected otherwise ${dim(`(${as})`)}`);
+    }
+  }
+  const fert = Object.values(report.languages).filter((f) => f.fertility && f.docs > 0);
+  if (fert.length) {
+    lines.push("");
+    const base = report.tokenizer?.baseline;
+    lines.push(bold(`Fertility (subword tokens per word) under ${report.tokenizer?.main}${base ? ` vs ${base}` : ""}`));
+    for (const f of fert) {
+      const t = f.fertility;
+      const b = f.baseline;
+      lines.push(
+        `  ${clean2(f.key).padEnd(9)} ${fixed(t.fertility, 3).padStart(6)}  continued ${percent(t.continuedWords).padStart(7)}  chars/token ${fixed(t.charsPerToken, 2).padStart(5)}` + (t.dictionary ? `  dictionary ${fixed(t.dictionary.fertility, 3)}` : "") + (b ? dim(`  ${base}: ${fixed(b.fertility, 3)}, mix shift ${points(report.tokenizer?.mixShiftPoints?.[f.key])}`) : "")
+      );
+    }
+  }
+  if (report.duplicates) {
+    const d = report.duplicates;
+    lines.push("");
+    lines.push(bold("Duplicates") + dim(`  exact ${count2(d.exactDocs)} (${percent(d.exactRate)}), near ${count2(d.nearDocs)} (${percent(d.nearRate)}), Jaccard \u2265 ${d.parameters.threshold}`));
+    for (const cl of d.clusters.slice(0, 5)) {
+      lines.push(`  ${cl.kind.padEnd(5)} \xD7${String(cl.size).padEnd(3)} ${clean2(where(cl.first))} ${dim("\u2192")} ${cl.copies.slice(0, 3).map((x) => clean2(where(x))).join(", ")}${cl.copies.length > 3 ? dim(` +${cl.copies.length - 3}`) : ""}`);
+    }
+  }
+  if (report.contamination && report.contamination.docs > 0) {
+    lines.push("");
+    lines.push(bold("Evaluation overlap") + dim(`  ${report.contamination.docs} training documents share a ${report.contamination.ngram}-gram with an evaluation item`));
+    for (const s of report.contamination.samples.slice(0, 5)) lines.push(`  ${clean2(where(s))} ${dim("overlaps")} ${clean2(s.detail ?? "")}`);
+  }
+  const i = report.input;
+  lines.push("");
+  lines.push(
+    dim(
+      `Input: ${count2(i.lines)} lines = ${count2(i.docLines)} in ${count2(i.docs)} documents + ${count2(i.empty)} empty + ${count2(i.rejected.count)} rejected` + (Object.keys(i.rejected.byReason).length ? ` (${Object.entries(i.rejected.byReason).map(([k, n]) => `${k} ${n}`).join(", ")})` : "") + (i.skipped.length ? `; ${i.skipped.length} files skipped` : "") + (i.broken.length ? `; ${i.broken.length} shards broken` : "")
+    )
+  );
+  lines.push(dim(`${fixed(report.timing.megabytesPerSecond, 1)} MB/s, ${report.timing.elapsedMs} ms, ${report.timing.cacheHits} shards from cache`));
+  return `${lines.join("\n")}
+`;
+}
+function rank(r) {
+  return r.verdict === "fail" ? 0 : r.verdict === "warn" ? 1 : 2;
+}
+function clean2(s) {
+  return s.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u202A-\u202E\u2066-\u2069]/g, (ch) => `U+${ch.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`);
+}
+
+// src/cli/options.ts
+import { parseArgs } from "node:util";
+var USAGE = `sluice: a merge gate for the quality of multilingual training corpora
+
+Usage:
+  sluice check [--policy] FILE [FILE...] [options]   measure the corpus a policy names and judge it
+
+Options for check:
+  -p, --policy FILE      policy file (YAML); repeat for several; positional files work too
+      --json FILE        write the JSON report (schemas/report.schema.json) to FILE
+      --markdown FILE    write the Markdown report to FILE
+      --root DIR         judge the shards under DIR instead of the policy's root
+      --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
+      --no-cache         measure every shard again
+      --color / --no-color   force colour on or off (default: on for a terminal, off when NO_COLOR is set)
+  -q, --quiet            print only the verdict line
+  -h, --help             this text
+  -v, --version          the version
+
+Exit status: 0 the gate passes (warnings allowed), 1 a rule at error severity failed,
+2 the run could not be judged (bad policy, no shards matched, unreadable root).
+`;
+var UsageError = class extends Error {
+  name = "UsageError";
+};
+function parseCli(argv, env, isTTY) {
+  const [command, ...rest] = argv;
+  if (command === void 0 || command === "-h" || command === "--help" || command === "help") return { command: "help" };
+  if (command === "-v" || command === "--version") return { command: "version" };
+  if (command !== "check") throw new UsageError(`unknown command \`${command}\`; try \`sluice --help\``);
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: rest,
+      allowPositionals: true,
+      options: {
+        policy: { type: "string", short: "p", multiple: true },
+        json: { type: "string" },
+        markdown: { type: "string" },
+        root: { type: "string" },
+        "cache-dir": { type: "string" },
+        "no-cache": { type: "boolean" },
+        color: { type: "boolean" },
+        "no-color": { type: "boolean" },
+        quiet: { type: "boolean", short: "q" },
+        help: { type: "boolean", short: "h" }
+      }
+    });
+  } catch (err) {
+    throw new UsageError(`${err.message}; try \`sluice --help\``);
+  }
+  const v = parsed.values;
+  if (v.help) return { command: "help" };
+  const policies = [...v.policy ?? [], ...parsed.positionals];
+  if (policies.length === 0) throw new UsageError("no policy file given; usage: sluice check --policy policies/main.yaml");
+  const color = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
+  const out = {
+    command: "check",
+    policies,
+    cacheDir: v["no-cache"] ? null : v["cache-dir"] ?? ".sluice-cache",
+    color,
+    quiet: v.quiet ?? false
+  };
+  if (v.json !== void 0) out.json = v.json;
+  if (v.markdown !== void 0) out.markdown = v.markdown;
+  if (v.root !== void 0) out.root = v.root;
+  return out;
+}
+
+// src/cli/main.ts
+async function check(opts) {
+  const progress = progressPrinter();
+  const reports = await runCheck({
+    policies: opts.policies,
+    cacheDir: opts.cacheDir,
+    ...opts.root !== void 0 ? { root: opts.root } : {},
+    onProgress: progress.update,
+    onWarning: (m) => process.stderr.write(`warning: ${m}
+`)
+  });
+  progress.clear();
+  for (const report of reports) {
+    process.stdout.write(opts.quiet ? `${report.headline}
+` : renderTerminal(report, { color: opts.color }));
+  }
+  const single = reports.length === 1;
+  const suffixed = (file, name) => single ? file : file.replace(/(\.[^./]+)?$/, (ext) => `.${name}${ext}`);
+  for (const report of reports) {
+    if (opts.json) await writeFile2(suffixed(opts.json, report.policy.name), renderJson(report));
+    if (opts.markdown) await writeFile2(suffixed(opts.markdown, report.policy.name), renderMarkdown(report));
+  }
+  return reports.some((r) => r.verdict === "fail") ? 1 : 0;
+}
+function progressPrinter() {
+  const tty = process.stderr.isTTY === true;
+  let last = 0;
+  let shown = false;
+  return {
+    update(p) {
+      if (!tty || p.elapsedMs < 1e3 || p.elapsedMs - last < 200) return;
+      last = p.elapsedMs;
+      shown = true;
+      const rate = p.bytes / 1e6 / (p.elapsedMs / 1e3);
+      process.stderr.write(`\r\x1B[K${p.policy}: ${p.shardsDone}/${p.shards} shards, ${(p.bytes / 1e6).toFixed(1)} MB read, ${rate.toFixed(1)} MB/s`);
+    },
+    clear() {
+      if (shown) process.stderr.write("\r\x1B[K");
+    }
+  };
+}
+async function main() {
+  try {
+    const cmd = parseCli(process.argv.slice(2), process.env, process.stdout.isTTY === true);
+    if (cmd.command === "help") {
+      process.stdout.write(USAGE);
+      return 0;
+    }
+    if (cmd.command === "version") {
+      process.stdout.write(`${TOOL_VERSION}
+`);
+      return 0;
+    }
+    return await check(cmd);
+  } catch (err) {
+    if (err instanceof UsageError || err instanceof ConfigError) {
+      process.stderr.write(`sluice: ${err.message}
+`);
+      return 2;
+    }
+    process.stderr.write(`sluice: internal error: ${err.stack ?? String(err)}
+`);
+    return 2;
+  }
+}
+process.exitCode = await main();
