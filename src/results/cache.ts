@@ -4,7 +4,8 @@
 import { createHash } from 'node:crypto';
 import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { RESULT_SCHEMA, type ShardResult } from './types.js';
+import { shardResultFromStored, storedShardResult } from './serialize.js';
+import type { ShardResult } from './types.js';
 
 /** Returns a stable id for a JSON-able settings object (sha256 of its canonical JSON, 16 hex digits). */
 export function settingsIdOf(settings: unknown): string {
@@ -34,9 +35,9 @@ export class ResultCache {
   /** Returns the cached result for this content under these settings, or undefined. */
   async get(contentId: string, settingsId: string, at: { path: string; subset?: string; encoding: string; format: string }): Promise<ShardResult | undefined> {
     try {
-      const r = JSON.parse(await readFile(this.file(contentId, settingsId), 'utf8')) as ShardResult;
+      const r = shardResultFromStored(JSON.parse(await readFile(this.file(contentId, settingsId), 'utf8')));
       // The same bytes decoded with another encoding or format are another result.
-      if (r.schema !== RESULT_SCHEMA || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at.encoding || r.format !== at.format) {
+      if (!r || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at.encoding || r.format !== at.format) {
         this.misses += 1;
         return undefined;
       }
@@ -58,7 +59,7 @@ export class ResultCache {
     await mkdir(this.dir, { recursive: true });
     const target = this.file(result.contentId, result.settingsId);
     const tmp = `${target}.${process.pid}.tmp`;
-    await writeFile(tmp, JSON.stringify(result));
+    await writeFile(tmp, JSON.stringify(storedShardResult(result)));
     await rename(tmp, target);
   }
 }

@@ -11,7 +11,7 @@ export const CLUSTERS_LISTED = 20;
 export function joinShardIndexes(shards: readonly ShardResult[], options: DuplicateOptions, newShards?: string[]): DuplicateFindings {
   const withIndex = shards.filter((s) => s.duplicateIndex !== undefined);
   return joinDuplicates(
-    withIndex.map((s) => ({ shard: s.path, index: new Uint8Array(Buffer.from(s.duplicateIndex!, 'base64')) })),
+    withIndex.map((s) => ({ shard: s.path, index: s.duplicateIndex! })),
     { ...options, maxClusters: CLUSTERS_LISTED, ...(newShards ? { newShards } : {}) },
   );
 }

@@ -107,7 +107,7 @@ export async function scanShard(ref: ShardRef, settings: ScanSettings, analyzers
     elapsedMs: Math.round(performance.now() - started),
   };
   if (ref.subset !== undefined) result.subset = ref.subset;
-  if (dup) result.duplicateIndex = Buffer.from(dup.finish()).toString('base64');
+  if (dup) result.duplicateIndex = dup.finish();
   if (contamination) result.contamination = contamination;
   return result;
 }

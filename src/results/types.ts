@@ -76,8 +76,8 @@ export interface ShardResult {
     anomalous: Array<LineSample & { kinds: AnomalyKind[] }>;
     mismatch: Array<LineSample & { declared: string; detected: string }>;
   };
-  /** Base64 of the shard's duplicate-index blob, when duplicates are measured. */
-  duplicateIndex?: string;
+  /** The shard's duplicate-index blob, when duplicates are measured (base64 in stored JSON: see serialize.ts). */
+  duplicateIndex?: Uint8Array;
   /** Training documents that overlap an evaluation item. */
   contamination?: { docs: number; samples: Array<{ line: number; evalFile: string; evalLine: number }> };
   /** Wall time spent measuring, for progress and benchmarks; not part of any judgement. */

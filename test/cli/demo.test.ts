@@ -1,7 +1,7 @@
 // The README's promise: the demo's pull request fails the gate for the planted
 // reasons and says where; the clean corpus passes; the JSON report follows its
 // published schema.
-import Ajv2020 from 'ajv/dist/2020.js';
+import { Ajv2020 } from 'ajv/dist/2020.js';
 import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
