@@ -3664,6 +3664,20 @@ var TextSink = class extends AccountingSink {
 import { createHash } from "node:crypto";
 import { mkdir, readFile as readFile2, rename, writeFile } from "node:fs/promises";
 import { join } from "node:path";
+
+// src/results/serialize.ts
+function storedShardResult(r) {
+  const { duplicateIndex, ...rest } = r;
+  return duplicateIndex ? { ...rest, duplicateIndex: Buffer.from(duplicateIndex).toString("base64") } : rest;
+}
+function shardResultFromStored(value) {
+  const v = value;
+  if (!v || typeof v !== "object" || v.schema !== RESULT_SCHEMA) return void 0;
+  const { duplicateIndex, ...rest } = v;
+  return duplicateIndex ? { ...rest, duplicateIndex: new Uint8Array(Buffer.from(duplicateIndex, "base64")) } : rest;
+}
+
+// src/results/cache.ts
 function settingsIdOf(settings) {
   return createHash("sha256").update(canonicalJson(settings)).digest("hex").slice(0, 16);
 }
@@ -3688,8 +3702,8 @@ var ResultCache = class {
   /** Returns the cached result for this content under these settings, or undefined. */
   async get(contentId, settingsId, at2) {
     try {
-      const r = JSON.parse(await readFile2(this.file(contentId, settingsId), "utf8"));
-      if (r.schema !== RESULT_SCHEMA || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at2.encoding || r.format !== at2.format) {
+      const r = shardResultFromStored(JSON.parse(await readFile2(this.file(contentId, settingsId), "utf8")));
+      if (!r || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at2.encoding || r.format !== at2.format) {
         this.misses += 1;
         return void 0;
       }
@@ -3709,18 +3723,133 @@ var ResultCache = class {
     await mkdir(this.dir, { recursive: true });
     const target = this.file(result.contentId, result.settingsId);
     const tmp = `${target}.${process.pid}.tmp`;
-    await writeFile(tmp, JSON.stringify(result));
+    await writeFile(tmp, JSON.stringify(storedShardResult(result)));
     await rename(tmp, target);
   }
 };
 
 // src/results/scan.ts
-import { createHash as createHash2 } from "node:crypto";
+import { createHash as createHash3 } from "node:crypto";
 import { createReadStream as createReadStream2 } from "node:fs";
 import { PassThrough } from "node:stream";
+
+// src/results/sample.ts
+import { createHash as createHash2 } from "node:crypto";
+var HASH_SPACE = 2 ** 53;
+var UNSAMPLED_LANGUAGE = "unsampled";
+function documentHash(text, seed = 0) {
+  const h = createHash2("sha256");
+  if (seed !== 0) h.update(`${seed}\0`);
+  const d = h.update(text, "utf8").digest();
+  return (d.readUInt32BE(0) & 2097151) * 4294967296 + d.readUInt32BE(4);
+}
+function fractionCutoff(fraction) {
+  return Math.ceil(fraction * HASH_SPACE) - 1;
+}
+var SmallestHashes = class {
+  constructor(k) {
+    this.k = k;
+  }
+  k;
+  heap = [];
+  /** Offers one document's hash. */
+  add(hash2) {
+    const h = this.heap;
+    if (h.length < this.k) {
+      h.push(hash2);
+      let i2 = h.length - 1;
+      while (i2 > 0) {
+        const p = i2 - 1 >> 1;
+        if (h[p] >= h[i2]) break;
+        [h[p], h[i2]] = [h[i2], h[p]];
+        i2 = p;
+      }
+      return;
+    }
+    if (hash2 >= h[0]) return;
+    h[0] = hash2;
+    let i = 0;
+    for (; ; ) {
+      const l = 2 * i + 1;
+      const r = l + 1;
+      let m = i;
+      if (l < h.length && h[l] > h[m]) m = l;
+      if (r < h.length && h[r] > h[m]) m = r;
+      if (m === i) break;
+      [h[m], h[i]] = [h[i], h[m]];
+      i = m;
+    }
+  }
+  /**
+   * Returns the cutoff: the k-th smallest hash, or HASH_SPACE when fewer than k were seen (all are measured).
+   * Copies of one text share a hash, so a cutoff on a repeated hash measures every copy: a few more than k.
+   */
+  cutoff() {
+    return this.heap.length < this.k ? HASH_SPACE : this.heap[0];
+  }
+};
+function describeSampling(spec) {
+  return "fraction" in spec ? { method: "fraction", setting: spec.fraction } : { method: "docs-per-shard", setting: spec.docsPerShard };
+}
+function emptyMoments() {
+  return {
+    bytes2: 0,
+    chars2: 0,
+    words2: 0,
+    tokens2: 0,
+    baselineTokens2: 0,
+    wordTokens2: 0,
+    wordTokensWords: 0,
+    continued2: 0,
+    continuedWords: 0,
+    baselineWordTokens2: 0,
+    wordTokensBaseline: 0,
+    expected2: 0,
+    scriptChars2: 0,
+    expectedScriptChars: 0
+  };
+}
+var MomentTally = class {
+  moments = {};
+  of(key) {
+    return this.moments[key] ??= emptyMoments();
+  }
+  /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
+  add(m, tokens) {
+    const t = this.of(m.language);
+    t.bytes2 += m.bytes * m.bytes;
+    t.chars2 += m.chars * m.chars;
+    t.words2 += m.words * m.words;
+    const main2 = tokens?.main;
+    const base = tokens?.baseline;
+    if (main2) {
+      t.tokens2 += main2.tokens * main2.tokens;
+      t.wordTokens2 += main2.wordTokens * main2.wordTokens;
+      t.wordTokensWords += main2.wordTokens * m.words;
+      t.continued2 += main2.continuedWords * main2.continuedWords;
+      t.continuedWords += main2.continuedWords * m.words;
+    }
+    if (base) {
+      t.baselineTokens2 += base.tokens * base.tokens;
+      t.baselineWordTokens2 += base.wordTokens * base.wordTokens;
+      if (main2) t.wordTokensBaseline += main2.wordTokens * base.wordTokens;
+    }
+    if (m.purity !== null) {
+      let scriptChars = 0;
+      for (const n of Object.values(m.scripts)) scriptChars += n;
+      const expected = Math.round(m.purity * scriptChars);
+      const b = this.of(m.declared !== void 0 && m.declared !== "other" ? m.declared : m.language);
+      b.expected2 += expected * expected;
+      b.scriptChars2 += scriptChars * scriptChars;
+      b.expectedScriptChars += expected * scriptChars;
+    }
+  }
+};
+
+// src/results/scan.ts
 var READ_CHUNK_BYTES2 = 256 * 1024;
 async function contentIdOf(ref) {
-  const hash2 = createHash2("sha256");
+  const hash2 = createHash3("sha256");
   const stream = ref.open?.() ?? createReadStream2(ref.absPath);
   for await (const chunk of stream) hash2.update(chunk);
   return hash2.digest("hex");
@@ -3732,7 +3861,7 @@ async function scanShard(ref, settings, analyzers) {
   const languageIndex = new Map(settings.languageKeys.map((k, i) => [k, i]));
   const otherIndex = settings.languageKeys.length;
   const contamination = analyzers.contamination ? { docs: 0, samples: [] } : void 0;
-  const hash2 = createHash2("sha256");
+  const hash2 = createHash3("sha256");
   const tapped = {
     ...ref,
     open: () => {
@@ -3744,15 +3873,44 @@ async function scanShard(ref, settings, analyzers) {
       return tap;
     }
   };
+  const sampling = settings.sampling;
+  let cutoff = HASH_SPACE;
+  if (sampling) {
+    if ("fraction" in sampling) cutoff = fractionCutoff(sampling.fraction);
+    else {
+      const smallest = new SmallestHashes(sampling.docsPerShard);
+      await readShard(ref, settings.read, (doc) => smallest.add(documentHash(doc.text)));
+      cutoff = smallest.cutoff();
+    }
+  }
+  const moments = sampling ? new MomentTally() : void 0;
+  const unsampledIndex = otherIndex + 1;
+  let measured = 0;
+  let offered = 0;
+  let fallback;
+  const measureOne = (doc) => {
+    const m = analyzers.measure(doc);
+    const tokens = analyzers.tokens?.(doc.text);
+    tally.add(doc.line, m, tokens);
+    moments?.add(m, tokens);
+    measured += 1;
+    return m;
+  };
   let ordinal = 0;
   let failure;
   const account = await readShard(tapped, settings.read, (doc) => {
     if (failure) return;
     try {
-      const m = analyzers.measure(doc);
-      const tokens = analyzers.tokens?.(doc.text);
-      tally.add(doc.line, m, tokens);
-      dup?.add({ ordinal, line: doc.line, language: languageIndex.get(m.language) ?? otherIndex, text: doc.text });
+      let language = unsampledIndex;
+      const hash3 = sampling ? documentHash(doc.text) : 0;
+      if (!sampling || hash3 <= cutoff) {
+        const m = measureOne(doc);
+        language = languageIndex.get(m.language) ?? otherIndex;
+        fallback = void 0;
+      } else if (measured === 0 && (!fallback || hash3 < fallback.hash)) {
+        fallback = { doc, hash: hash3 };
+      }
+      dup?.add({ ordinal, line: doc.line, language, text: doc.text });
       if (contamination) {
         const hit = analyzers.contamination(doc.text);
         if (hit) {
@@ -3763,10 +3921,20 @@ async function scanShard(ref, settings, analyzers) {
         }
       }
       ordinal += 1;
+      offered += 1;
     } catch (err) {
       failure = { line: doc.line, message: `measuring failed at line ${doc.line}: ${err.message}` };
     }
   });
+  let usedFallback = false;
+  if (sampling && measured === 0 && fallback && !failure) {
+    try {
+      measureOne(fallback.doc);
+      usedFallback = true;
+    } catch (err) {
+      failure = { line: fallback.doc.line, message: `measuring failed at line ${fallback.doc.line}: ${err.message}` };
+    }
+  }
   if (failure && !account.broken) account.broken = { afterLine: failure.line - 1, message: failure.message };
   const result = {
     schema: RESULT_SCHEMA,
@@ -3787,8 +3955,12 @@ async function scanShard(ref, settings, analyzers) {
     elapsedMs: Math.round(performance.now() - started)
   };
   if (ref.subset !== void 0) result.subset = ref.subset;
-  if (dup) result.duplicateIndex = Buffer.from(dup.finish()).toString("base64");
+  if (dup) result.duplicateIndex = dup.finish();
   if (contamination) result.contamination = contamination;
+  if (sampling && moments) {
+    result.sample = { ...describeSampling(sampling), docs: measured, of: offered, cutoff, moments: moments.moments };
+    if (usedFallback) result.sample.fallback = true;
+  }
   return result;
 }
 
@@ -13650,7 +13822,7 @@ function findContamination(index2, text) {
 }
 
 // src/measure/tokens/load.ts
-import { createHash as createHash3 } from "node:crypto";
+import { createHash as createHash4 } from "node:crypto";
 import { readFile as readFile3 } from "node:fs/promises";
 
 // src/measure/tokens/errors.ts
@@ -14415,7 +14587,7 @@ async function loadTokenizer(spec, options = {}) {
     const why = code === "ENOENT" ? `no such file (${spec.absPath})` : `cannot read ${spec.absPath}: ${cause.message}`;
     throw new TokenizerError("load", spec.file, why, { cause });
   }
-  const digest = createHash3("sha256").update(bytes2).digest("hex");
+  const digest = createHash4("sha256").update(bytes2).digest("hex");
   let text;
   try {
     text = new TextDecoder("utf-8", { fatal: true }).decode(bytes2);
@@ -14451,7 +14623,7 @@ function resolvePattern(pattern, file) {
   } catch (cause) {
     throw new TokenizerError("load", file, `split pattern is not a valid regular expression: ${cause.message}`, { cause });
   }
-  return { pattern: name, patternId: `sha256:${createHash3("sha256").update(name).digest("hex").slice(0, 16)}` };
+  return { pattern: name, patternId: `sha256:${createHash4("sha256").update(name).digest("hex").slice(0, 16)}` };
 }
 
 // src/measure/tokens/measure.ts
@@ -14552,7 +14724,7 @@ var CLUSTERS_LISTED = 20;
 function joinShardIndexes(shards, options, newShards) {
   const withIndex = shards.filter((s) => s.duplicateIndex !== void 0);
   return joinDuplicates(
-    withIndex.map((s) => ({ shard: s.path, index: new Uint8Array(Buffer.from(s.duplicateIndex, "base64")) })),
+    withIndex.map((s) => ({ shard: s.path, index: s.duplicateIndex })),
     { ...options, maxClusters: CLUSTERS_LISTED, ...newShards ? { newShards } : {} }
   );
 }
@@ -14601,9 +14773,6 @@ var AnalyzerSetupError = class extends Error {
   name = "AnalyzerSetupError";
 };
 async function prepareAnalyzers(policy) {
-  if (policy.sampling) {
-    throw new AnalyzerSetupError(`${policy.file}: sampling is not implemented in this version of sluice; remove \`sampling:\` to judge every document`);
-  }
   const measure = createMeasurer({ languages: policy.languages, detection: policy.detection });
   const read = readOptionsOf(policy);
   let main2;
@@ -14641,7 +14810,9 @@ async function prepareAnalyzers(policy) {
     tokenizer: main2?.id ?? null,
     baseline: baseline?.id ?? null,
     duplicates: dupOptions ?? null,
-    eval: evalIndex?.id ?? null
+    eval: evalIndex?.id ?? null,
+    // Only when set, so results measured without sampling keep their cache key.
+    ...policy.sampling ? { sampling: policy.sampling } : {}
   });
   const analyzers = { measure };
   if (main2) {
@@ -14660,7 +14831,7 @@ async function prepareAnalyzers(policy) {
   }
   return {
     settingsId,
-    scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId },
+    scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId, ...policy.sampling ? { sampling: policy.sampling } : {} },
     analyzers,
     async finish(corpus, newShards) {
       if (main2) corpus.tokenizer = { label: main2.label, hasUnknown: main2.unknownTokenId !== null };
@@ -14684,7 +14855,8 @@ async function prepareAnalyzers(policy) {
       }
       if (dupOptions) {
         const findings = joinShardIndexes(corpus.shards, dupOptions, newShards);
-        corpus.duplicates = summarizeDuplicates(findings, policy.languages.map((l) => l.key));
+        const keys = policy.languages.map((l) => l.key);
+        corpus.duplicates = summarizeDuplicates(findings, policy.sampling ? [...keys, "other", UNSAMPLED_LANGUAGE] : keys);
         if (findings.againstExisting) corpus.duplicatesAgainstExisting = findings.againstExisting;
       }
       if (evalIndex && policy.rules.contamination) {
@@ -14694,7 +14866,83 @@ async function prepareAnalyzers(policy) {
   };
 }
 
+// src/core/pool.ts
+import { existsSync } from "node:fs";
+import { availableParallelism } from "node:os";
+import { fileURLToPath } from "node:url";
+import { Worker } from "node:worker_threads";
+var ShardFailure = class extends Error {
+  constructor(shard, message) {
+    super(`${shard}: ${message}`);
+    this.shard = shard;
+  }
+  shard;
+  name = "ShardFailure";
+};
+function defaultWorkers() {
+  return availableParallelism();
+}
+function canRunWorkers(entry) {
+  if (!entry) return false;
+  const path5 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
+  return path5.endsWith(".js") && existsSync(path5);
+}
+async function measureInPool(refs, init, entry, workers, onResult) {
+  const queue = refs.map((ref, id) => ({ ref, id }));
+  const count3 = Math.max(1, Math.min(workers, queue.length));
+  let failed;
+  const all = [];
+  for (let w = 0; w < count3; w++) {
+    all.push(
+      new Promise((resolve, reject) => {
+        const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
+        let current;
+        let done = false;
+        const finish = (err) => {
+          if (done) return;
+          done = true;
+          void worker.terminate();
+          if (err) {
+            failed ??= err instanceof ShardFailure ? err : new ShardFailure(current?.ref.path ?? "(starting a worker)", err.message);
+            reject(failed);
+          } else resolve();
+        };
+        const next = () => {
+          if (failed) return finish();
+          current = queue.shift();
+          if (!current) {
+            worker.postMessage({ type: "close" });
+            return finish();
+          }
+          const { open: _open, ...ref } = current.ref;
+          worker.postMessage({ type: "scan", id: current.id, ref });
+        };
+        worker.on("message", (msg) => {
+          if (msg.type === "ready") {
+            if (msg.settingsId !== init.settingsId) return finish(new Error(`worker measured under other settings (${msg.settingsId} \u2260 ${init.settingsId})`));
+            return next();
+          }
+          if (msg.type === "result") {
+            onResult(msg.result);
+            return next();
+          }
+          finish(new ShardFailure(current?.ref.path ?? "(starting a worker)", `measuring failed in a worker: ${msg.message}`));
+        });
+        worker.on("error", (err) => finish(new ShardFailure(current?.ref.path ?? "(starting a worker)", `worker crashed: ${err.message}`)));
+        worker.on("exit", (code) => {
+          if (!done) finish(new ShardFailure(current?.ref.path ?? "(starting a worker)", `worker exited with code ${code} before finishing`));
+        });
+      })
+    );
+  }
+  const settled = await Promise.allSettled(all);
+  if (failed) throw failed;
+  const rejected = settled.find((s) => s.status === "rejected");
+  if (rejected) throw rejected.reason;
+}
+
 // src/core/check.ts
+var WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
 var ConfigError = class extends Error {
   name = "ConfigError";
 };
@@ -14727,37 +14975,73 @@ async function measureCorpus(policy, opts, shardsOverride) {
     if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
     throw err;
   }
-  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
-  const results = [];
-  const cached = /* @__PURE__ */ new Set();
-  let bytes2 = 0;
-  for (const ref of shards) {
-    let result;
-    if (cache) {
-      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
-      result = await cache.get(contentId, prepared.settingsId, ref);
-      if (result) cached.add(ref.path);
-      else {
-        result = await scanShard(ref, prepared.scan, prepared.analyzers);
-        await cache.put({ ...result, contentId });
-      }
-    }
-    if (!result) result = await scanShard(ref, prepared.scan, prepared.analyzers);
-    results.push(result);
-    bytes2 += result.read.bytes;
-    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes2, elapsedMs: performance.now() - started });
-  }
+  const { results, cached } = await measureShards(policy, shards, prepared, opts, started);
+  return assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
+}
+async function assembleCorpus(policy, prepared, results, cached, skipped, newShards, started) {
   results.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
   const corpus = {
     shards: results,
     cached,
-    skipped: discovery.skipped,
+    skipped,
     tally: mergeShardResults(results, policy.languages.map((l) => l.key)),
     elapsedMs: 0
   };
-  await prepared.finish(corpus, opts.newShards);
+  await prepared.finish(corpus, newShards);
   corpus.elapsedMs = Math.round(performance.now() - started);
   return corpus;
+}
+async function measureShards(policy, shards, prepared, opts, started = performance.now()) {
+  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
+  const results = [];
+  const cached = /* @__PURE__ */ new Set();
+  const keys = /* @__PURE__ */ new Map();
+  let bytes2 = 0;
+  const done = (r) => {
+    results.push(r);
+    bytes2 += r.read.bytes;
+    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes2, elapsedMs: performance.now() - started });
+  };
+  const todo = [];
+  for (const ref of shards) {
+    if (cache) {
+      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
+      keys.set(ref.path, contentId);
+      const hit = await cache.get(contentId, prepared.settingsId, ref);
+      if (hit) {
+        cached.add(ref.path);
+        done(hit);
+        continue;
+      }
+    }
+    todo.push(ref);
+  }
+  const store = async (r) => {
+    const key = keys.get(r.path);
+    if (cache && key) await cache.put({ ...r, contentId: key });
+  };
+  const diskBytes = todo.reduce((n, r) => n + r.sizeBytes, 0);
+  const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
+  const local = todo.filter((r) => r.open !== void 0);
+  const pooled = todo.filter((r) => r.open === void 0);
+  if (workers > 1 && pooled.length > 1 && canRunWorkers(opts.workerEntry)) {
+    const init = { role: "sluice-shard-worker", policyFile: policy.file, settingsId: prepared.settingsId };
+    if (opts.root !== void 0) init.root = opts.root;
+    const pending = [];
+    await measureInPool(pooled, init, opts.workerEntry, workers, (r) => {
+      done(r);
+      pending.push(store(r));
+    });
+    await Promise.all(pending);
+  } else {
+    local.unshift(...pooled);
+  }
+  for (const ref of local) {
+    const r = await scanShard(ref, prepared.scan, prepared.analyzers);
+    done(r);
+    await store(r);
+  }
+  return { results, cached };
 }
 async function runCheck(opts) {
   const reports = [];
@@ -14767,6 +15051,147 @@ async function runCheck(opts) {
     reports.push(buildReport(policy, corpus, opts.cwd));
   }
   return reports;
+}
+
+// src/core/partition.ts
+import { readFile as readFile5 } from "node:fs/promises";
+
+// src/results/partition.ts
+import { createHash as createHash5 } from "node:crypto";
+var PARTIAL_FORMAT = "sluice-partial";
+var PARTIAL_VERSION = 1;
+function partitionOf(path5, count3) {
+  const h = createHash5("sha256").update(path5).digest();
+  return h.readUInt32BE(0) % count3 + 1;
+}
+function partialToJson(p) {
+  return JSON.stringify({ ...p, results: p.results.map(storedShardResult) });
+}
+function partialFromJson(text) {
+  let v;
+  try {
+    v = JSON.parse(text);
+  } catch (err) {
+    return { ok: false, reason: `not JSON: ${err.message}` };
+  }
+  if (v.format !== PARTIAL_FORMAT) return { ok: false, reason: "not a sluice partial result (written by `sluice scan --partition`)" };
+  if (v.version !== PARTIAL_VERSION) return { ok: false, reason: `partial format version ${String(v.version)}, this sluice reads ${PARTIAL_VERSION}` };
+  const results = [];
+  for (const r of v.results ?? []) {
+    const parsed = shardResultFromStored(r);
+    if (!parsed) return { ok: false, reason: "holds a shard result of another result schema (written by another sluice version)" };
+    results.push(parsed);
+  }
+  return { ok: true, partial: { ...v, results } };
+}
+
+// src/core/partition.ts
+async function prepareOrThrow(policy) {
+  try {
+    return await prepareAnalyzers(policy);
+  } catch (err) {
+    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
+    throw err;
+  }
+}
+async function scanPartition(policyFile, index2, count3, opts) {
+  if (!Number.isInteger(count3) || count3 < 1 || !Number.isInteger(index2) || index2 < 1 || index2 > count3) {
+    throw new ConfigError(`--partition must be I/N with 1 \u2264 I \u2264 N, got ${index2}/${count3}`);
+  }
+  const started = performance.now();
+  const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
+  let discovery;
+  try {
+    discovery = await discoverShards(policy.root, policy.corpus);
+  } catch (err) {
+    throw new ConfigError(`${policy.file}: ${err.message}`);
+  }
+  if (discovery.shards.length === 0) throw new ConfigError(`${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(", ")}) under ${policy.root}`);
+  const mine = discovery.shards.filter((s) => partitionOf(s.path, count3) === index2);
+  const prepared = await prepareOrThrow(policy);
+  const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
+  results.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+  return {
+    format: PARTIAL_FORMAT,
+    version: PARTIAL_VERSION,
+    policy: policy.name,
+    settingsId: prepared.settingsId,
+    partition: { index: index2, count: count3 },
+    shardsInCorpus: discovery.shards.length,
+    results,
+    skipped: discovery.skipped.filter((s) => partitionOf(s.path, count3) === index2)
+  };
+}
+async function mergePartials(policyFile, partFiles, opts) {
+  const started = performance.now();
+  const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
+  const prepared = await prepareOrThrow(policy);
+  if (partFiles.length === 0) throw new ConfigError("merge: no partial result files given");
+  const parts = [];
+  for (const file of partFiles) {
+    let text;
+    try {
+      text = await readFile5(file, "utf8");
+    } catch (err) {
+      throw new ConfigError(`${file}: cannot read: ${err.message}`);
+    }
+    const parsed = partialFromJson(text);
+    if (!parsed.ok) throw new ConfigError(`${file}: ${parsed.reason}`);
+    if (parsed.partial.settingsId !== prepared.settingsId) {
+      throw new ConfigError(`${file}: measured under other settings (${parsed.partial.settingsId}) than ${policy.file} gives now (${prepared.settingsId}): scan it again with this policy and sluice version`);
+    }
+    parts.push({ file, partial: parsed.partial });
+  }
+  const count3 = parts[0].partial.partition.count;
+  const seen = /* @__PURE__ */ new Map();
+  for (const { file, partial } of parts) {
+    if (partial.partition.count !== count3) throw new ConfigError(`${file}: partition ${partial.partition.index}/${partial.partition.count}, but ${parts[0].file} is one of ${count3}`);
+    const other = seen.get(partial.partition.index);
+    if (other) throw new ConfigError(`${file}: partition ${partial.partition.index}/${count3} given twice (also ${other})`);
+    seen.set(partial.partition.index, file);
+  }
+  const missing = Array.from({ length: count3 }, (_, i) => i + 1).filter((i) => !seen.has(i));
+  if (missing.length) throw new ConfigError(`merge: partition${missing.length > 1 ? "s" : ""} ${missing.map((i) => `${i}/${count3}`).join(", ")} missing: the report would not cover the corpus`);
+  const shardsInCorpus = new Set(parts.map((p) => p.partial.shardsInCorpus));
+  const results = parts.flatMap((p) => p.partial.results);
+  const skipped = parts.flatMap((p) => p.partial.skipped).sort((a, b) => a.path < b.path ? -1 : 1);
+  if (shardsInCorpus.size > 1) throw new ConfigError(`merge: the parts saw different corpora (${[...shardsInCorpus].join(" vs ")} shards): scan all partitions of the same commit`);
+  if (results.length !== [...shardsInCorpus][0]) throw new ConfigError(`merge: the parts hold ${results.length} shards, the corpus has ${[...shardsInCorpus][0]}`);
+  const corpus = await assembleCorpus(policy, prepared, results, /* @__PURE__ */ new Set(), skipped, opts.newShards, started);
+  return buildReport(policy, corpus, opts.cwd);
+}
+
+// src/core/worker.ts
+import { parentPort, workerData, isMainThread } from "node:worker_threads";
+function isShardWorker() {
+  return !isMainThread && workerData?.role === "sluice-shard-worker";
+}
+async function runShardWorker() {
+  const port = parentPort;
+  const init = workerData;
+  const post = (m) => port.postMessage(m);
+  try {
+    const policy = await loadPolicyOrThrow(init.policyFile, init.root);
+    const prepared = await prepareAnalyzers(policy);
+    port.on("message", (msg) => {
+      if (msg.type === "close") {
+        port.close();
+        return;
+      }
+      void (async () => {
+        try {
+          if (process.env.SLUICE_FAULT_SHARD && msg.ref.path === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+          const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers);
+          post({ type: "result", id: msg.id, result });
+        } catch (err) {
+          post({ type: "error", id: msg.id, message: err.message });
+        }
+      })();
+    });
+    post({ type: "ready", settingsId: prepared.settingsId });
+  } catch (err) {
+    post({ type: "error", id: null, message: err.message });
+  }
 }
 
 // src/render/json.ts
@@ -15059,6 +15484,10 @@ var USAGE = `sluice: a merge gate for the quality of multilingual training corpo
 
 Usage:
   sluice check [--policy] FILE [FILE...] [options]   measure the corpus a policy names and judge it
+  sluice scan --policy FILE --partition I/N --out PART.json [options]
+                                                     measure partition I of N of the shards (one runner's share)
+  sluice merge PART.json [PART.json...] --policy FILE [options]
+                                                     merge every partition's result, join duplicates across them, judge
 
 Options for check:
   -p, --policy FILE      policy file (YAML); repeat for several; positional files work too
@@ -15067,6 +15496,7 @@ Options for check:
       --root DIR         judge the shards under DIR instead of the policy's root
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
+      --workers N        worker threads measuring shards (default: the available cores)
       --color / --no-color   force colour on or off (default: on for a terminal, off when NO_COLOR is set)
   -q, --quiet            print only the verdict line
   -h, --help             this text
@@ -15082,7 +15512,7 @@ function parseCli(argv, env, isTTY) {
   const [command, ...rest] = argv;
   if (command === void 0 || command === "-h" || command === "--help" || command === "help") return { command: "help" };
   if (command === "-v" || command === "--version") return { command: "version" };
-  if (command !== "check") throw new UsageError(`unknown command \`${command}\`; try \`sluice --help\``);
+  if (command !== "check" && command !== "scan" && command !== "merge") throw new UsageError(`unknown command \`${command}\`; try \`sluice --help\``);
   let parsed;
   try {
     parsed = parseArgs({
@@ -15098,7 +15528,10 @@ function parseCli(argv, env, isTTY) {
         color: { type: "boolean" },
         "no-color": { type: "boolean" },
         quiet: { type: "boolean", short: "q" },
-        help: { type: "boolean", short: "h" }
+        help: { type: "boolean", short: "h" },
+        workers: { type: "string" },
+        partition: { type: "string" },
+        out: { type: "string" }
       }
     });
   } catch (err) {
@@ -15106,16 +15539,40 @@ function parseCli(argv, env, isTTY) {
   }
   const v = parsed.values;
   if (v.help) return { command: "help" };
+  let workers;
+  if (v.workers !== void 0) {
+    workers = Number(v.workers);
+    if (!Number.isInteger(workers) || workers < 1) throw new UsageError(`--workers takes a whole number of at least 1, got \`${v.workers}\``);
+  }
+  const cacheDir = v["no-cache"] ? null : v["cache-dir"] ?? ".sluice-cache";
+  if (command === "scan") {
+    const m = /^(\d+)\/(\d+)$/.exec(v.partition ?? "");
+    if (!m) throw new UsageError("scan needs --partition I/N, e.g. --partition 1/8");
+    const [index2, count3] = [Number(m[1]), Number(m[2])];
+    if (count3 < 1 || index2 < 1 || index2 > count3) throw new UsageError(`--partition ${v.partition}: I must be between 1 and N`);
+    if (!v.out) throw new UsageError("scan needs --out FILE for the partial result");
+    const policy = [...v.policy ?? [], ...parsed.positionals];
+    if (policy.length !== 1) throw new UsageError("scan takes exactly one --policy");
+    const out2 = { command: "scan", policy: policy[0], partition: { index: index2, count: count3 }, out: v.out, cacheDir };
+    if (v.root !== void 0) out2.root = v.root;
+    if (workers !== void 0) out2.workers = workers;
+    return out2;
+  }
+  if (command === "merge") {
+    if (!v.policy || v.policy.length !== 1) throw new UsageError("merge takes exactly one --policy and the partial files as arguments");
+    if (parsed.positionals.length === 0) throw new UsageError("merge needs the partial result files written by `sluice scan --partition`");
+    const color2 = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
+    const out2 = { command: "merge", policy: v.policy[0], parts: parsed.positionals, cacheDir, color: color2, quiet: v.quiet ?? false };
+    if (v.json !== void 0) out2.json = v.json;
+    if (v.markdown !== void 0) out2.markdown = v.markdown;
+    if (v.root !== void 0) out2.root = v.root;
+    return out2;
+  }
   const policies = [...v.policy ?? [], ...parsed.positionals];
   if (policies.length === 0) throw new UsageError("no policy file given; usage: sluice check --policy policies/main.yaml");
   const color = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
-  const out = {
-    command: "check",
-    policies,
-    cacheDir: v["no-cache"] ? null : v["cache-dir"] ?? ".sluice-cache",
-    color,
-    quiet: v.quiet ?? false
-  };
+  const out = { command: "check", policies, cacheDir, color, quiet: v.quiet ?? false };
+  if (workers !== void 0) out.workers = workers;
   if (v.json !== void 0) out.json = v.json;
   if (v.markdown !== void 0) out.markdown = v.markdown;
   if (v.root !== void 0) out.root = v.root;
@@ -15131,9 +15588,41 @@ async function check(opts) {
     ...opts.root !== void 0 ? { root: opts.root } : {},
     onProgress: progress.update,
     onWarning: (m) => process.stderr.write(`warning: ${m}
-`)
+`),
+    workerEntry: import.meta.url,
+    ...opts.workers !== void 0 ? { workers: opts.workers } : {}
   });
   progress.clear();
+  return emit2(reports, opts);
+}
+async function scan2(opts) {
+  const progress = progressPrinter();
+  const partial = await scanPartition(opts.policy, opts.partition.index, opts.partition.count, {
+    cacheDir: opts.cacheDir,
+    ...opts.root !== void 0 ? { root: opts.root } : {},
+    ...opts.workers !== void 0 ? { workers: opts.workers } : {},
+    onProgress: progress.update,
+    onWarning: (m) => process.stderr.write(`warning: ${m}
+`),
+    workerEntry: import.meta.url
+  });
+  progress.clear();
+  await writeFile2(opts.out, partialToJson(partial));
+  const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
+  process.stdout.write(`partition ${opts.partition.index}/${opts.partition.count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents \u2192 ${opts.out}
+`);
+  return 0;
+}
+async function merge(opts) {
+  const report = await mergePartials(opts.policy, opts.parts, {
+    cacheDir: null,
+    ...opts.root !== void 0 ? { root: opts.root } : {},
+    onWarning: (m) => process.stderr.write(`warning: ${m}
+`)
+  });
+  return emit2([report], opts);
+}
+async function emit2(reports, opts) {
   for (const report of reports) {
     process.stdout.write(opts.quiet ? `${report.headline}
 ` : renderTerminal(report, { color: opts.color }));
@@ -15175,9 +15664,11 @@ async function main() {
 `);
       return 0;
     }
+    if (cmd.command === "scan") return await scan2(cmd);
+    if (cmd.command === "merge") return await merge(cmd);
     return await check(cmd);
   } catch (err) {
-    if (err instanceof UsageError || err instanceof ConfigError) {
+    if (err instanceof UsageError || err instanceof ConfigError || err instanceof ShardFailure) {
       process.stderr.write(`sluice: ${err.message}
 `);
       return 2;
@@ -15187,4 +15678,5 @@ async function main() {
     return 2;
   }
 }
-process.exitCode = await main();
+if (isShardWorker()) await runShardWorker();
+else process.exitCode = await main();

@@ -1,11 +1,16 @@
 // `sluice` on the command line: parse arguments, call the core, print, exit.
 import { writeFile } from 'node:fs/promises';
 import { ConfigError, runCheck, type Progress } from '../core/check.js';
+import { mergePartials, scanPartition } from '../core/partition.js';
+import { ShardFailure } from '../core/pool.js';
+import { isShardWorker, runShardWorker } from '../core/worker.js';
+import type { Report } from '../judge/types.js';
+import { partialToJson } from '../results/partition.js';
 import { TOOL_VERSION } from '../judge/report.js';
 import { renderJson } from '../render/json.js';
 import { renderMarkdown } from '../render/markdown.js';
 import { renderTerminal } from '../render/terminal.js';
-import { parseCli, USAGE, UsageError, type CheckCliOptions } from './options.js';
+import { parseCli, USAGE, UsageError, type CheckCliOptions, type MergeCliOptions, type ScanCliOptions } from './options.js';
 
 async function check(opts: CheckCliOptions): Promise<number> {
   const progress = progressPrinter();
@@ -15,8 +20,40 @@ async function check(opts: CheckCliOptions): Promise<number> {
     ...(opts.root !== undefined ? { root: opts.root } : {}),
     onProgress: progress.update,
     onWarning: (m) => process.stderr.write(`warning: ${m}\n`),
+    workerEntry: import.meta.url,
+    ...(opts.workers !== undefined ? { workers: opts.workers } : {}),
   });
   progress.clear();
+  return emit(reports, opts);
+}
+
+async function scan(opts: ScanCliOptions): Promise<number> {
+  const progress = progressPrinter();
+  const partial = await scanPartition(opts.policy, opts.partition.index, opts.partition.count, {
+    cacheDir: opts.cacheDir,
+    ...(opts.root !== undefined ? { root: opts.root } : {}),
+    ...(opts.workers !== undefined ? { workers: opts.workers } : {}),
+    onProgress: progress.update,
+    onWarning: (m) => process.stderr.write(`warning: ${m}\n`),
+    workerEntry: import.meta.url,
+  });
+  progress.clear();
+  await writeFile(opts.out, partialToJson(partial));
+  const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
+  process.stdout.write(`partition ${opts.partition.index}/${opts.partition.count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents → ${opts.out}\n`);
+  return 0;
+}
+
+async function merge(opts: MergeCliOptions): Promise<number> {
+  const report = await mergePartials(opts.policy, opts.parts, {
+    cacheDir: null,
+    ...(opts.root !== undefined ? { root: opts.root } : {}),
+    onWarning: (m) => process.stderr.write(`warning: ${m}\n`),
+  });
+  return emit([report], opts);
+}
+
+async function emit(reports: Report[], opts: Pick<CheckCliOptions, 'quiet' | 'color' | 'json' | 'markdown'>): Promise<number> {
   for (const report of reports) {
     process.stdout.write(opts.quiet ? `${report.headline}\n` : renderTerminal(report, { color: opts.color }));
   }
@@ -59,9 +96,11 @@ async function main(): Promise<number> {
       process.stdout.write(`${TOOL_VERSION}\n`);
       return 0;
     }
+    if (cmd.command === 'scan') return await scan(cmd);
+    if (cmd.command === 'merge') return await merge(cmd);
     return await check(cmd);
   } catch (err) {
-    if (err instanceof UsageError || err instanceof ConfigError) {
+    if (err instanceof UsageError || err instanceof ConfigError || err instanceof ShardFailure) {
       process.stderr.write(`sluice: ${err.message}\n`);
       return 2;
     }
@@ -70,4 +109,6 @@ async function main(): Promise<number> {
   }
 }
 
-process.exitCode = await main();
+// The same bundle serves as the worker threads' script.
+if (isShardWorker()) await runShardWorker();
+else process.exitCode = await main();

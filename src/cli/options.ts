@@ -6,6 +6,10 @@ export const USAGE = `sluice: a merge gate for the quality of multilingual train
 
 Usage:
   sluice check [--policy] FILE [FILE...] [options]   measure the corpus a policy names and judge it
+  sluice scan --policy FILE --partition I/N --out PART.json [options]
+                                                     measure partition I of N of the shards (one runner's share)
+  sluice merge PART.json [PART.json...] --policy FILE [options]
+                                                     merge every partition's result, join duplicates across them, judge
 
 Options for check:
   -p, --policy FILE      policy file (YAML); repeat for several; positional files work too
@@ -14,6 +18,7 @@ Options for check:
       --root DIR         judge the shards under DIR instead of the policy's root
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
+      --workers N        worker threads measuring shards (default: the available cores)
       --color / --no-color   force colour on or off (default: on for a terminal, off when NO_COLOR is set)
   -q, --quiet            print only the verdict line
   -h, --help             this text
@@ -32,9 +37,26 @@ export interface CheckCliOptions {
   cacheDir: string | null;
   color: boolean;
   quiet: boolean;
+  workers?: number;
 }
 
-export type CliCommand = CheckCliOptions | { command: 'help' } | { command: 'version' };
+export interface ScanCliOptions {
+  command: 'scan';
+  policy: string;
+  partition: { index: number; count: number };
+  out: string;
+  root?: string;
+  cacheDir: string | null;
+  workers?: number;
+}
+
+export interface MergeCliOptions extends Omit<CheckCliOptions, 'command' | 'policies'> {
+  command: 'merge';
+  policy: string;
+  parts: string[];
+}
+
+export type CliCommand = CheckCliOptions | ScanCliOptions | MergeCliOptions | { command: 'help' } | { command: 'version' };
 
 /** An argument the CLI cannot use: exit code 2 with this message. */
 export class UsageError extends Error {
@@ -46,7 +68,7 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
   const [command, ...rest] = argv;
   if (command === undefined || command === '-h' || command === '--help' || command === 'help') return { command: 'help' };
   if (command === '-v' || command === '--version') return { command: 'version' };
-  if (command !== 'check') throw new UsageError(`unknown command \`${command}\`; try \`sluice --help\``);
+  if (command !== 'check' && command !== 'scan' && command !== 'merge') throw new UsageError(`unknown command \`${command}\`; try \`sluice --help\``);
   let parsed;
   try {
     parsed = parseArgs({
@@ -63,6 +85,9 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
         'no-color': { type: 'boolean' },
         quiet: { type: 'boolean', short: 'q' },
         help: { type: 'boolean', short: 'h' },
+        workers: { type: 'string' },
+        partition: { type: 'string' },
+        out: { type: 'string' },
       },
     });
   } catch (err) {
@@ -70,16 +95,40 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
   }
   const v = parsed.values;
   if (v.help) return { command: 'help' };
+  let workers: number | undefined;
+  if (v.workers !== undefined) {
+    workers = Number(v.workers);
+    if (!Number.isInteger(workers) || workers < 1) throw new UsageError(`--workers takes a whole number of at least 1, got \`${v.workers}\``);
+  }
+  const cacheDir = v['no-cache'] ? null : (v['cache-dir'] ?? '.sluice-cache');
+  if (command === 'scan') {
+    const m = /^(\d+)\/(\d+)$/.exec(v.partition ?? '');
+    if (!m) throw new UsageError('scan needs --partition I/N, e.g. --partition 1/8');
+    const [index, count] = [Number(m[1]), Number(m[2])];
+    if (count < 1 || index < 1 || index > count) throw new UsageError(`--partition ${v.partition}: I must be between 1 and N`);
+    if (!v.out) throw new UsageError('scan needs --out FILE for the partial result');
+    const policy = [...(v.policy ?? []), ...parsed.positionals];
+    if (policy.length !== 1) throw new UsageError('scan takes exactly one --policy');
+    const out: ScanCliOptions = { command: 'scan', policy: policy[0]!, partition: { index, count }, out: v.out, cacheDir };
+    if (v.root !== undefined) out.root = v.root;
+    if (workers !== undefined) out.workers = workers;
+    return out;
+  }
+  if (command === 'merge') {
+    if (!v.policy || v.policy.length !== 1) throw new UsageError('merge takes exactly one --policy and the partial files as arguments');
+    if (parsed.positionals.length === 0) throw new UsageError('merge needs the partial result files written by `sluice scan --partition`');
+    const color = v['no-color'] ? false : v.color ? true : isTTY && !('NO_COLOR' in env && env.NO_COLOR !== '');
+    const out: MergeCliOptions = { command: 'merge', policy: v.policy[0]!, parts: parsed.positionals, cacheDir, color, quiet: v.quiet ?? false };
+    if (v.json !== undefined) out.json = v.json;
+    if (v.markdown !== undefined) out.markdown = v.markdown;
+    if (v.root !== undefined) out.root = v.root;
+    return out;
+  }
   const policies = [...(v.policy ?? []), ...parsed.positionals];
   if (policies.length === 0) throw new UsageError('no policy file given; usage: sluice check --policy policies/main.yaml');
   const color = v['no-color'] ? false : v.color ? true : isTTY && !('NO_COLOR' in env && env.NO_COLOR !== '');
-  const out: CheckCliOptions = {
-    command: 'check',
-    policies,
-    cacheDir: v['no-cache'] ? null : (v['cache-dir'] ?? '.sluice-cache'),
-    color,
-    quiet: v.quiet ?? false,
-  };
+  const out: CheckCliOptions = { command: 'check', policies, cacheDir, color, quiet: v.quiet ?? false };
+  if (workers !== undefined) out.workers = workers;
   if (v.json !== undefined) out.json = v.json;
   if (v.markdown !== undefined) out.markdown = v.markdown;
   if (v.root !== undefined) out.root = v.root;

@@ -6,13 +6,17 @@ import type { Report } from '../judge/types.js';
 import { formatProblem, loadPolicy } from '../policy/index.js';
 import type { Policy } from '../policy/types.js';
 import { discoverShards } from '../read/index.js';
-import type { ShardRef } from '../read/types.js';
+import type { ShardRef, SkippedFile } from '../read/types.js';
 import { ResultCache } from '../results/cache.js';
 import type { CorpusResult } from '../results/corpus.js';
 import { contentIdOf, scanShard } from '../results/scan.js';
 import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
-import { AnalyzerSetupError, prepareAnalyzers } from './analyzers.js';
+import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
+import { canRunWorkers, defaultWorkers, measureInPool, type WorkerInit } from './pool.js';
+
+/** Compressed bytes of unmeasured shards that justify one more worker thread by default. */
+const WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
 
 /** A run that cannot be judged (bad policy, no shards, unreadable root): exit code 2. */
 export class ConfigError extends Error {
@@ -44,6 +48,10 @@ export interface CheckOptions {
   contentKey?: (ref: ShardRef) => Promise<string>;
   /** Shards taken as new: duplicates they add against the other shards are reported separately. */
   newShards?: string[];
+  /** Worker threads measuring shards (default: the available cores); 1 measures in this thread. */
+  workers?: number;
+  /** The built script workers start from (the front end's own bundle, import.meta.url); without one, shards are measured in this thread. */
+  workerEntry?: string | URL;
 }
 
 /** Returns the loaded policy, or throws ConfigError listing every problem with file, line and key. */
@@ -79,37 +87,95 @@ export async function measureCorpus(policy: Policy, opts: CheckOptions, shardsOv
     if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
     throw err;
   }
-  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
-  const results: ShardResult[] = [];
-  const cached = new Set<string>();
-  let bytes = 0;
-  for (const ref of shards) {
-    let result: ShardResult | undefined;
-    if (cache) {
-      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
-      result = await cache.get(contentId, prepared.settingsId, ref);
-      if (result) cached.add(ref.path);
-      else {
-        result = await scanShard(ref, prepared.scan, prepared.analyzers);
-        await cache.put({ ...result, contentId });
-      }
-    }
-    if (!result) result = await scanShard(ref, prepared.scan, prepared.analyzers);
-    results.push(result);
-    bytes += result.read.bytes;
-    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes, elapsedMs: performance.now() - started });
-  }
+  const { results, cached } = await measureShards(policy, shards, prepared, opts, started);
+  return assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
+}
+
+/** Returns the corpus result of measured shards: sorted, summed, with the cross-shard figures added. */
+export async function assembleCorpus(
+  policy: Policy,
+  prepared: PreparedAnalyzers,
+  results: ShardResult[],
+  cached: Set<string>,
+  skipped: SkippedFile[],
+  newShards: string[] | undefined,
+  started: number,
+): Promise<CorpusResult> {
   results.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
   const corpus: CorpusResult = {
     shards: results,
     cached,
-    skipped: discovery.skipped,
+    skipped,
     tally: mergeShardResults(results, policy.languages.map((l) => l.key)),
     elapsedMs: 0,
   };
-  await prepared.finish(corpus, opts.newShards);
+  await prepared.finish(corpus, newShards);
   corpus.elapsedMs = Math.round(performance.now() - started);
   return corpus;
+}
+
+/** Returns every shard's result: from the cache where the content was measured before, else measured (on worker threads when there are several shards to do). */
+export async function measureShards(
+  policy: Policy,
+  shards: readonly ShardRef[],
+  prepared: PreparedAnalyzers,
+  opts: CheckOptions,
+  started = performance.now(),
+): Promise<{ results: ShardResult[]; cached: Set<string> }> {
+  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
+  const results: ShardResult[] = [];
+  const cached = new Set<string>();
+  const keys = new Map<string, string>();
+  let bytes = 0;
+  const done = (r: ShardResult): void => {
+    results.push(r);
+    bytes += r.read.bytes;
+    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes, elapsedMs: performance.now() - started });
+  };
+
+  const todo: ShardRef[] = [];
+  for (const ref of shards) {
+    if (cache) {
+      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
+      keys.set(ref.path, contentId);
+      const hit = await cache.get(contentId, prepared.settingsId, ref);
+      if (hit) {
+        cached.add(ref.path);
+        done(hit);
+        continue;
+      }
+    }
+    todo.push(ref);
+  }
+
+  const store = async (r: ShardResult): Promise<void> => {
+    const key = keys.get(r.path);
+    if (cache && key) await cache.put({ ...r, contentId: key });
+  };
+  // Starting a worker costs about a second (each loads the tokenizers), so by default only a corpus
+  // big enough to repay it is spread: one worker per WORK_PER_WORKER_BYTES on disk, at most one per core.
+  const diskBytes = todo.reduce((n, r) => n + r.sizeBytes, 0);
+  const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
+  const local = todo.filter((r) => r.open !== undefined);
+  const pooled = todo.filter((r) => r.open === undefined);
+  if (workers > 1 && pooled.length > 1 && canRunWorkers(opts.workerEntry)) {
+    const init: WorkerInit = { role: 'sluice-shard-worker', policyFile: policy.file, settingsId: prepared.settingsId };
+    if (opts.root !== undefined) init.root = opts.root;
+    const pending: Promise<void>[] = [];
+    await measureInPool(pooled, init, opts.workerEntry, workers, (r) => {
+      done(r);
+      pending.push(store(r));
+    });
+    await Promise.all(pending);
+  } else {
+    local.unshift(...pooled);
+  }
+  for (const ref of local) {
+    const r = await scanShard(ref, prepared.scan, prepared.analyzers);
+    done(r);
+    await store(r);
+  }
+  return { results, cached };
 }
 
 /** Returns one report per policy file. */

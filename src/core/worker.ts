@@ -1,0 +1,42 @@
+// The worker side of the pool: rebuild the policy's analyzers once, then measure
+// each shard the main thread sends. Started from the same bundle as the front end.
+import { parentPort, workerData, isMainThread } from 'node:worker_threads';
+import { scanShard } from '../results/scan.js';
+import { prepareAnalyzers } from './analyzers.js';
+import { loadPolicyOrThrow } from './check.js';
+import type { FromWorker, ToWorker, WorkerInit } from './pool.js';
+
+/** Returns whether this thread was started by the pool (the front end then runs `runShardWorker` instead of its main). */
+export function isShardWorker(): boolean {
+  return !isMainThread && (workerData as WorkerInit | undefined)?.role === 'sluice-shard-worker';
+}
+
+/** Serves scan requests until told to close. */
+export async function runShardWorker(): Promise<void> {
+  const port = parentPort!;
+  const init = workerData as WorkerInit;
+  const post = (m: FromWorker): void => port.postMessage(m);
+  try {
+    const policy = await loadPolicyOrThrow(init.policyFile, init.root);
+    const prepared = await prepareAnalyzers(policy);
+    port.on('message', (msg: ToWorker) => {
+      if (msg.type === 'close') {
+        port.close();
+        return;
+      }
+      void (async () => {
+        try {
+          // For the tests of worker failure: a worker that throws while measuring a named shard.
+          if (process.env.SLUICE_FAULT_SHARD && msg.ref.path === process.env.SLUICE_FAULT_SHARD) throw new Error('injected fault (SLUICE_FAULT_SHARD)');
+          const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers);
+          post({ type: 'result', id: msg.id, result });
+        } catch (err) {
+          post({ type: 'error', id: msg.id, message: (err as Error).message });
+        }
+      })();
+    });
+    post({ type: 'ready', settingsId: prepared.settingsId });
+  } catch (err) {
+    post({ type: 'error', id: null, message: (err as Error).message });
+  }
+}

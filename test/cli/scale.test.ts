@@ -1,0 +1,61 @@
+// All cores and many runners: the report is the same whatever the worker count,
+// a partitioned scan merged equals one scan, and a failure inside a worker fails
+// the run with the shard named instead of leaving the shard out.
+import { existsSync, mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Report } from '../../src/judge/types.js';
+import { REPO, sluice } from './helpers.js';
+
+const POLICY = 'examples/newsroom/policies/newsroom.yaml';
+const comparable = (r: Report): string => JSON.stringify({ ...r, timing: null });
+let single: Report;
+
+beforeAll(() => {
+  single = sluice(['check', POLICY, '--no-cache', '--workers', '1'], { json: true }).report!;
+}, 120_000);
+
+describe('worker threads', () => {
+  it('give a byte-identical report with 1 and 3 workers (timing aside)', () => {
+    const pooled = sluice(['check', POLICY, '--no-cache', '--workers', '3'], { json: true });
+    expect(pooled.status).toBe(1);
+    expect(comparable(pooled.report!)).toBe(comparable(single));
+  });
+
+  it('fail the run, naming the shard, when a worker throws', () => {
+    const out = mkdtempSync(join(tmpdir(), 'sluice-fault-'));
+    const r = sluice(['check', POLICY, '--no-cache', '--workers', '2', '--json', join(out, 'r.json')], {
+      env: { SLUICE_FAULT_SHARD: 'data/english/english-01.jsonl.gz' },
+    });
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('data/english/english-01.jsonl.gz');
+    expect(existsSync(join(out, 'r.json'))).toBe(false);
+  });
+});
+
+describe('partitioned scans', () => {
+  it('merge into the same report as one scan', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'sluice-parts-'));
+    const parts = [1, 2, 3].map((i) => join(dir, `part-${i}.json`));
+    let shards = 0;
+    parts.forEach((out, i) => {
+      const r = sluice(['scan', '--policy', POLICY, '--partition', `${i + 1}/3`, '--out', out, '--no-cache']);
+      expect(r.status).toBe(0);
+      shards += Number(/: (\d+) of \d+ shards/.exec(r.stdout)![1]);
+    });
+    expect(shards).toBe(single.input.shards);
+    const merged = sluice(['merge', ...parts, '--policy', POLICY], { json: true });
+    expect(merged.status).toBe(1);
+    expect(comparable(merged.report!)).toBe(comparable(single));
+  });
+
+  it('refuse to merge when a partition is missing', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'sluice-parts-'));
+    const out = join(dir, 'part-1.json');
+    sluice(['scan', '--policy', POLICY, '--partition', '1/2', '--out', out, '--no-cache']);
+    const r = sluice(['merge', out, '--policy', POLICY]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('partition 2/2 missing');
+  });
+});
