@@ -6,98 +6,157 @@ import { writeFile as writeFile2 } from "node:fs/promises";
 // src/judge/report.ts
 import { relative } from "node:path";
 
-// src/judge/figures.ts
-function ratio(a, b) {
-  return b === 0 ? null : a / b;
+// src/results/sample.ts
+import { createHash } from "node:crypto";
+var HASH_SPACE = 2 ** 53;
+var UNSAMPLED_LANGUAGE = "unsampled";
+function documentHash(text, seed = 0) {
+  const h = createHash("sha256");
+  if (seed !== 0) h.update(`${seed}\0`);
+  const d = h.update(text, "utf8").digest();
+  return d.readUInt32BE(0) * 2097152 + (d.readUInt32BE(4) >>> 11);
 }
-function amountIn(t, unit) {
-  switch (unit) {
-    case "docs":
-      return t.docs;
-    case "bytes":
-      return t.bytes;
-    case "chars":
-      return t.chars;
-    case "words":
-      return t.words;
-    case "tokens":
-      return t.tokens?.tokens ?? 0;
+function fractionCutoff(fraction) {
+  return Math.ceil(fraction * HASH_SPACE) - 1;
+}
+var SmallestHashes = class {
+  constructor(k) {
+    this.k = k;
   }
+  k;
+  heap = [];
+  /** Offers one document's hash. */
+  add(hash2) {
+    const h = this.heap;
+    if (h.length < this.k) {
+      h.push(hash2);
+      let i2 = h.length - 1;
+      while (i2 > 0) {
+        const p = i2 - 1 >> 1;
+        if (h[p] >= h[i2]) break;
+        [h[p], h[i2]] = [h[i2], h[p]];
+        i2 = p;
+      }
+      return;
+    }
+    if (hash2 >= h[0]) return;
+    h[0] = hash2;
+    let i = 0;
+    for (; ; ) {
+      const l = 2 * i + 1;
+      const r = l + 1;
+      let m = i;
+      if (l < h.length && h[l] > h[m]) m = l;
+      if (r < h.length && h[r] > h[m]) m = r;
+      if (m === i) break;
+      [h[m], h[i]] = [h[i], h[m]];
+      i = m;
+    }
+  }
+  /**
+   * Returns the cutoff: the k-th smallest hash, or HASH_SPACE when fewer than k were seen (all are measured).
+   * Copies of one text share a hash, so a cutoff on a repeated hash measures every copy: a few more than k.
+   */
+  cutoff() {
+    return this.heap.length < this.k ? HASH_SPACE : this.heap[0];
+  }
+};
+function describeSampling(spec) {
+  return "fraction" in spec ? { method: "fraction", setting: spec.fraction } : { method: "docs-per-shard", setting: spec.docsPerShard };
 }
-function docsBelowPurity(histogram, minPurity) {
-  const firstPure = Math.floor(minPurity * 100 + 1e-9);
-  let n = 0;
-  for (let i = 0; i < firstPure && i < histogram.length; i++) n += histogram[i];
-  return n;
-}
-function tokenFigures(t, tokens, tokenizer) {
+function emptyMoments() {
   return {
-    tokenizer: tokenizer.label,
-    tokens: tokens.tokens,
-    fertility: ratio(tokens.wordTokens, t.words),
-    continuedWords: ratio(tokens.continuedWords, t.words),
-    tokensPerWord: ratio(tokens.tokens, t.words),
-    charsPerToken: ratio(t.chars, tokens.tokens),
-    bytesPerToken: ratio(t.bytes, tokens.tokens),
-    unknownRate: tokenizer.hasUnknown ? ratio(tokens.unknown, tokens.tokens) : null
+    bytes2: 0,
+    chars2: 0,
+    words2: 0,
+    tokens2: 0,
+    baselineTokens2: 0,
+    wordTokens2: 0,
+    wordTokensWords: 0,
+    continued2: 0,
+    continuedWords: 0,
+    baselineWordTokens2: 0,
+    wordTokensBaseline: 0,
+    expected2: 0,
+    scriptChars2: 0,
+    expectedScriptChars: 0
   };
 }
-function languageFigures(policy, corpus) {
-  const keys = [...policy.languages.map((l) => l.key), "other", "und"];
-  const langs = corpus.tally.languages;
-  const total = (unit) => keys.reduce((s, k) => s + (langs[k] ? amountIn(langs[k], unit) : 0), 0);
-  const totals = { docs: total("docs"), bytes: total("bytes"), chars: total("chars"), words: total("words"), tokens: total("tokens") };
-  const out = {};
-  for (const key of keys) {
-    const t = langs[key];
-    if (!t) continue;
-    const share = {
-      docs: ratio(t.docs, totals.docs) ?? 0,
-      bytes: ratio(t.bytes, totals.bytes) ?? 0,
-      chars: ratio(t.chars, totals.chars) ?? 0,
-      words: ratio(t.words, totals.words) ?? 0
-    };
-    if (corpus.tokenizer) share.tokens = ratio(t.tokens?.tokens ?? 0, totals.tokens) ?? 0;
-    const spec = policy.languages.find((l) => l.key === key);
-    const f = {
-      key,
-      docs: t.docs,
-      bytes: t.bytes,
-      chars: t.chars,
-      words: t.words,
-      share,
-      purity: ratio(t.expectedScriptChars, t.scriptChars),
-      purityDocs: t.purityDocs
-    };
-    if (spec?.target !== void 0) f.target = spec.target;
-    if (policy.rules.script) f.impureDocs = docsBelowPurity(t.purityHistogram, policy.rules.script.minPurity);
-    const declaredRow = corpus.tally.declared[key];
-    if (declaredRow) {
-      const declaredDocs = Object.values(declaredRow).reduce((a, b) => a + b, 0);
-      f.declaredDocs = declaredDocs;
-      f.mismatchDocs = declaredDocs - (declaredRow[key] ?? 0) - (declaredRow["und"] ?? 0);
-      f.detectedAs = declaredRow;
-    }
-    if (corpus.tokenizer && t.tokens) {
-      f.tokens = t.tokens.tokens;
-      f.fertility = tokenFigures(t, t.tokens, corpus.tokenizer);
-      const dict = corpus.dictionary?.[key];
-      if (dict) f.fertility.dictionary = { entries: dict.main.entries, fertility: dict.main.fertility, continuedWords: dict.main.continued, list: dict.main.list };
-    }
-    if (corpus.baseline && t.baseline) {
-      f.baseline = tokenFigures(t, t.baseline, corpus.baseline);
-      const dict = corpus.dictionary?.[key]?.baseline;
-      if (dict) f.baseline.dictionary = { entries: dict.entries, fertility: dict.fertility, continuedWords: dict.continued, list: dict.list };
-    }
-    out[key] = f;
+var MomentTally = class {
+  moments = {};
+  of(key) {
+    return this.moments[key] ??= emptyMoments();
   }
-  return out;
+  /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
+  add(m, tokens) {
+    const t = this.of(m.language);
+    t.bytes2 += m.bytes * m.bytes;
+    t.chars2 += m.chars * m.chars;
+    t.words2 += m.words * m.words;
+    const main2 = tokens?.main;
+    const base = tokens?.baseline;
+    if (main2) {
+      t.tokens2 += main2.tokens * main2.tokens;
+      t.wordTokens2 += main2.wordTokens * main2.wordTokens;
+      t.wordTokensWords += main2.wordTokens * m.words;
+      t.continued2 += main2.continuedWords * main2.continuedWords;
+      t.continuedWords += main2.continuedWords * m.words;
+    }
+    if (base) {
+      t.baselineTokens2 += base.tokens * base.tokens;
+      t.baselineWordTokens2 += base.wordTokens * base.wordTokens;
+      if (main2) t.wordTokensBaseline += main2.wordTokens * base.wordTokens;
+    }
+    if (m.purity !== null) {
+      let scriptChars = 0;
+      for (const n of Object.values(m.scripts)) scriptChars += n;
+      const expected = Math.round(m.purity * scriptChars);
+      const b = this.of(m.declared !== void 0 && m.declared !== "other" ? m.declared : m.language);
+      b.expected2 += expected * expected;
+      b.scriptChars2 += scriptChars * scriptChars;
+      b.expectedScriptChars += expected * scriptChars;
+    }
+  }
+};
+function shardWeight(r) {
+  if (!r.sample) return 1;
+  return r.sample.docs > 0 ? r.sample.of / r.sample.docs : 0;
+}
+function scaleShardResult(r) {
+  const w = shardWeight(r);
+  if (!r.sample || w === 1) return r;
+  const scaleTokens = (t) => t && { tokens: t.tokens * w, unknown: t.unknown * w, wordTokens: t.wordTokens * w, continuedWords: t.continuedWords * w };
+  const scaleCounts = (c) => Object.fromEntries(Object.entries(c).map(([k, n]) => [k, n * w]));
+  const languages = {};
+  for (const [k, t] of Object.entries(r.languages)) {
+    const s = {
+      docs: t.docs * w,
+      bytes: t.bytes * w,
+      chars: t.chars * w,
+      words: t.words * w,
+      purityDocs: t.purityDocs * w,
+      scriptChars: t.scriptChars * w,
+      expectedScriptChars: t.expectedScriptChars * w,
+      purityHistogram: t.purityHistogram.map((n) => n * w)
+    };
+    const tokens = scaleTokens(t.tokens);
+    const baseline = scaleTokens(t.baseline);
+    if (tokens) s.tokens = tokens;
+    if (baseline) s.baseline = baseline;
+    languages[k] = s;
+  }
+  return {
+    ...r,
+    languages,
+    scripts: scaleCounts(r.scripts),
+    anomalyMasks: scaleCounts(r.anomalyMasks),
+    anomalyDocs: scaleCounts(r.anomalyDocs),
+    declared: Object.fromEntries(Object.entries(r.declared).map(([d, row]) => [d, scaleCounts(row)]))
+  };
 }
 
-// src/results/types.ts
-var RESULT_SCHEMA = 1;
-var PURITY_BINS = 101;
-var SAMPLES_PER_KIND = 5;
+// src/measure/encoding.ts
+import iconv from "iconv-lite";
 var ANOMALY_KINDS = [
   "replacement-char",
   "control-chars",
@@ -106,6 +165,136 @@ var ANOMALY_KINDS = [
   "private-use",
   "mojibake"
 ];
+var MOJIBAKE_LEAD_FIRST = 194;
+var MOJIBAKE_LEAD_LAST = 244;
+var IMPLAUSIBLE_2_BYTE = [
+  [576, 767],
+  [1984, 2047]
+];
+var MULTIPLICATION_SIGN = 215;
+var LOST_BYTE = 256;
+var UNMAPPED = -1;
+function emptyAnomalyCounts() {
+  return {
+    "replacement-char": 0,
+    "control-chars": 0,
+    "bidi-controls": 0,
+    "zero-width": 0,
+    "private-use": 0,
+    mojibake: 0
+  };
+}
+function emptyMarkCounts() {
+  return { joiners: 0, directionMarks: 0 };
+}
+function anomalyOf(cp, atStart) {
+  if (cp < 32) return cp === 9 || cp === 10 || cp === 13 ? null : "control-chars";
+  if (cp < 127) return null;
+  if (cp <= 159) return "control-chars";
+  if (cp < 8203) return null;
+  if (cp === 8203 || cp === 8288) return "zero-width";
+  if (cp >= 8234 && cp <= 8238 || cp >= 8294 && cp <= 8297) return "bidi-controls";
+  if (cp >= 55296 && cp <= 57343) return "replacement-char";
+  if (cp >= 57344 && cp <= 63743) return "private-use";
+  if (cp === 65279) return atStart ? null : "zero-width";
+  if (cp === 65533) return "replacement-char";
+  if (cp >= 983040 && cp <= 1048573 || cp >= 1048576 && cp <= 1114109) return "private-use";
+  return null;
+}
+function markOf(cp) {
+  if (cp === 8204 || cp === 8205) return "joiners";
+  if (cp === 8206 || cp === 8207 || cp === 1564) return "directionMarks";
+  return null;
+}
+function needsCloserLook(cp) {
+  return anomalyOf(cp, false) !== null || markOf(cp) !== null || cp >= MOJIBAKE_LEAD_FIRST && cp <= MOJIBAKE_LEAD_LAST;
+}
+var byteMap;
+function bytesOfChars() {
+  if (byteMap) return byteMap;
+  const map = new Int16Array(65536).fill(UNMAPPED);
+  for (let b = 128; b <= 255; b++) map[b] = b;
+  const cp1252 = iconv.decode(Buffer.from(Array.from({ length: 32 }, (_, k) => 128 + k)), "windows-1252");
+  for (let k = 0; k < cp1252.length; k++) {
+    const cp = cp1252.charCodeAt(k);
+    if (cp !== 65533) map[cp] = 128 + k;
+  }
+  map[65533] = LOST_BYTE;
+  byteMap = map;
+  return map;
+}
+var assigned = new RegExp("^\\p{Assigned}$", "u");
+var letter = new RegExp("^\\p{L}$", "u");
+var punctuationOrSpace = /^[\p{P}\p{Zs}]$/u;
+function isUpper(ch) {
+  return ch !== ch.toLowerCase() && ch === ch.toUpperCase();
+}
+function countsAlone(text, start, length, cp) {
+  if (length === 2) {
+    if (text.charCodeAt(start) === MULTIPLICATION_SIGN) return false;
+    if (start > 0 && isUpper(text[start - 1])) return false;
+    for (const [lo, hi] of IMPLAUSIBLE_2_BYTE) if (cp >= lo && cp <= hi) return false;
+    return assigned.test(String.fromCodePoint(cp));
+  }
+  let letters = 0;
+  let punctuation = 0;
+  for (let k = 1; k < length; k++) {
+    const ch = text[start + k];
+    if (letter.test(ch)) letters++;
+    else if (punctuationOrSpace.test(ch)) punctuation++;
+  }
+  if (letters === length - 1) return false;
+  if (punctuation === length - 1 && !letter.test(text[start + length] ?? " ")) return false;
+  return assigned.test(String.fromCodePoint(cp));
+}
+function countMojibake(text) {
+  const map = bytesOfChars();
+  const found = [];
+  const n = text.length;
+  for (let i = 0; i < n; i++) {
+    const lead = map[text.charCodeAt(i)];
+    if (lead < MOJIBAKE_LEAD_FIRST || lead > MOJIBAKE_LEAD_LAST) continue;
+    const length = lead < 224 ? 2 : lead < 240 ? 3 : 4;
+    if (i + length > n) continue;
+    const lo = lead === 224 ? 160 : lead === 240 ? 144 : 128;
+    const hi = lead === 237 ? 159 : lead === 244 ? 143 : 191;
+    let cp = lead & (length === 2 ? 31 : length === 3 ? 15 : 7);
+    let lossy = false;
+    let valid = true;
+    for (let k = 1; k < length; k++) {
+      const b = map[text.charCodeAt(i + k)];
+      const first = k === 1;
+      if (b === LOST_BYTE) {
+        if (first && lo > 157) {
+          valid = false;
+          break;
+        }
+        lossy = true;
+        cp = cp << 6;
+      } else if (b >= (first ? lo : 128) && b <= (first ? hi : 191)) {
+        cp = cp << 6 | b & 63;
+      } else {
+        valid = false;
+        break;
+      }
+    }
+    if (!valid) continue;
+    found.push({ start: i, end: i + length, alone: !lossy && countsAlone(text, i, length, cp) });
+    i += length - 1;
+  }
+  let count3 = 0;
+  for (let s = 0; s < found.length; s++) {
+    const seq = found[s];
+    const joined = found[s - 1]?.end === seq.start || found[s + 1]?.start === seq.end;
+    if (joined || seq.alone) count3++;
+  }
+  return count3;
+}
+
+// src/results/types.ts
+var RESULT_SCHEMA = 1;
+var PURITY_BINS = 101;
+var SAMPLES_PER_KIND = 5;
 
 // src/results/tally.ts
 function emptyLanguageTally() {
@@ -269,6 +458,302 @@ function addCounts(into, from) {
   for (const [k, n] of Object.entries(from)) into[k] = (into[k] ?? 0) + (n ?? 0);
 }
 
+// src/judge/figures.ts
+function ratio(a, b) {
+  return b === 0 ? null : a / b;
+}
+function amountIn(t, unit) {
+  switch (unit) {
+    case "docs":
+      return t.docs;
+    case "bytes":
+      return t.bytes;
+    case "chars":
+      return t.chars;
+    case "words":
+      return t.words;
+    case "tokens":
+      return t.tokens?.tokens ?? 0;
+  }
+}
+function docsBelowPurity(histogram, minPurity) {
+  const firstPure = Math.floor(minPurity * 100 + 1e-9);
+  let n = 0;
+  for (let i = 0; i < firstPure && i < histogram.length; i++) n += histogram[i];
+  return n;
+}
+function tokenFigures(t, tokens, tokenizer) {
+  return {
+    tokenizer: tokenizer.label,
+    tokens: tokens.tokens,
+    fertility: ratio(tokens.wordTokens, t.words),
+    continuedWords: ratio(tokens.continuedWords, t.words),
+    tokensPerWord: ratio(tokens.tokens, t.words),
+    charsPerToken: ratio(t.chars, tokens.tokens),
+    bytesPerToken: ratio(t.bytes, tokens.tokens),
+    unknownRate: tokenizer.hasUnknown ? ratio(tokens.unknown, tokens.tokens) : null
+  };
+}
+function languageFigures(policy, corpus) {
+  const keys = [...policy.languages.map((l) => l.key), "other", "und"];
+  const langs = corpus.tally.languages;
+  const total = (unit) => keys.reduce((s, k) => s + (langs[k] ? amountIn(langs[k], unit) : 0), 0);
+  const totals = { docs: total("docs"), bytes: total("bytes"), chars: total("chars"), words: total("words"), tokens: total("tokens") };
+  const out = {};
+  for (const key of keys) {
+    const t = langs[key];
+    if (!t) continue;
+    const share = {
+      docs: ratio(t.docs, totals.docs) ?? 0,
+      bytes: ratio(t.bytes, totals.bytes) ?? 0,
+      chars: ratio(t.chars, totals.chars) ?? 0,
+      words: ratio(t.words, totals.words) ?? 0
+    };
+    if (corpus.tokenizer) share.tokens = ratio(t.tokens?.tokens ?? 0, totals.tokens) ?? 0;
+    const spec = policy.languages.find((l) => l.key === key);
+    const f = {
+      key,
+      docs: t.docs,
+      bytes: t.bytes,
+      chars: t.chars,
+      words: t.words,
+      share,
+      purity: ratio(t.expectedScriptChars, t.scriptChars),
+      purityDocs: t.purityDocs
+    };
+    if (spec?.target !== void 0) f.target = spec.target;
+    if (policy.rules.script) f.impureDocs = docsBelowPurity(t.purityHistogram, policy.rules.script.minPurity);
+    const declaredRow = corpus.tally.declared[key];
+    if (declaredRow) {
+      const declaredDocs = Object.values(declaredRow).reduce((a, b) => a + b, 0);
+      f.declaredDocs = declaredDocs;
+      f.mismatchDocs = declaredDocs - (declaredRow[key] ?? 0) - (declaredRow["und"] ?? 0);
+      f.detectedAs = declaredRow;
+    }
+    if (corpus.tokenizer && t.tokens) {
+      f.tokens = t.tokens.tokens;
+      f.fertility = tokenFigures(t, t.tokens, corpus.tokenizer);
+      const dict = corpus.dictionary?.[key];
+      if (dict) f.fertility.dictionary = { entries: dict.main.entries, fertility: dict.main.fertility, continuedWords: dict.main.continued, list: dict.main.list };
+    }
+    if (corpus.baseline && t.baseline) {
+      f.baseline = tokenFigures(t, t.baseline, corpus.baseline);
+      const dict = corpus.dictionary?.[key]?.baseline;
+      if (dict) f.baseline.dictionary = { entries: dict.entries, fertility: dict.fertility, continuedWords: dict.continued, list: dict.list };
+    }
+    out[key] = f;
+  }
+  return out;
+}
+
+// src/judge/intervals.ts
+var CONFIDENCE = 0.95;
+var Z_95 = 1.959963984540054;
+var INTERVAL_METHODS = {
+  wilson: "Wilson score interval (Wilson, 1927) for a share of documents, at the effective sample size of the shard-stratified sample (documents weighted by shard documents \xF7 measured documents).",
+  "wilson-linearized": "Wilson score interval at the effective sample size R(1\u2212R)/Var(R) of a linearized (delta-method) variance of the stratified ratio estimator: documents are the sampled units, each a cluster of its tokens, words, bytes or characters; shards are strata, with finite-population correction.",
+  "linearized-normal": "Normal interval R \xB1 1.96\xB7\u221AVar(R) from the same linearized variance, for ratios that are not shares (fertility)."
+};
+function wilsonInterval(p, n, z = Z_95) {
+  if (n === Infinity) return { low: p, high: p };
+  if (!(n > 0)) return { low: 0, high: 1 };
+  const z2 = z * z;
+  const denom = 1 + z2 / n;
+  const center = (p + z2 / (2 * n)) / denom;
+  const half = z / denom * Math.sqrt(Math.max(0, p * (1 - p) / n + z2 / (4 * n * n)));
+  return { low: p === 0 ? 0 : Math.max(0, center - half), high: p === 1 ? 1 : Math.min(1, center + half) };
+}
+function ratioEstimate(strata, scale = 1) {
+  let Y = 0;
+  let X = 0;
+  for (const s of strata) {
+    if (s.n <= 0) continue;
+    const w = s.N / s.n;
+    Y += w * s.y;
+    X += w * s.x;
+  }
+  if (!(X > 0)) return { estimate: null, variance: 0, effectiveN: 0, strata };
+  const R = Y / X;
+  let v = 0;
+  let kish = 0;
+  for (const s of strata) {
+    if (s.n <= 0 || s.n >= s.N) continue;
+    const n = Math.min(s.N, s.n * scale);
+    const f = n / s.N;
+    if (f >= 1) continue;
+    const meanD2 = Math.max(0, s.yy - 2 * R * s.xy + R * R * s.xx) / s.n;
+    v += s.N * s.N * (1 - f) / n * meanD2;
+    kish += s.N * s.N * (1 - f) / n * (s.xx / s.n);
+  }
+  const variance = v / (X * X);
+  let effectiveN;
+  if (R > 0 && R < 1 && variance > 0) effectiveN = R * (1 - R) / variance;
+  else effectiveN = kish > 0 ? X * X / kish : Infinity;
+  return { estimate: R, variance, effectiveN, strata };
+}
+function intervalOf(e, method, offset = 0) {
+  if (e.estimate === null) return void 0;
+  if (method === "linearized-normal") {
+    const half = Z_95 * Math.sqrt(e.variance);
+    return { low: e.estimate - half + offset, high: e.estimate + half + offset, method };
+  }
+  const w = wilsonInterval(Math.min(1, Math.max(0, e.estimate)), e.effectiveN);
+  return { low: w.low + offset, high: w.high + offset, method };
+}
+function intervalAtScale(strata, method, scale, offset = 0) {
+  return intervalOf(ratioEstimate(strata, scale), method, offset);
+}
+function placeInterval(iv, bounds, eps = 1e-12) {
+  const lo = bounds.low ?? -Infinity;
+  if (iv.low >= lo - eps && iv.high <= bounds.high + eps) return "inside";
+  if (iv.high < lo - eps || iv.low > bounds.high + eps) return "outside";
+  return "straddles";
+}
+function scaleToSettle(strata, method, bounds, offset = 0, margin = 0) {
+  const full = Math.max(1, ...strata.filter((s) => s.n > 0).map((s) => s.N / s.n));
+  const e = ratioEstimate(strata).estimate;
+  if (e === null) return null;
+  const toward = (b) => b + margin * (e + offset - b);
+  const target = { high: toward(bounds.high), ...bounds.low !== void 0 ? { low: toward(bounds.low) } : {} };
+  const settled = (scale) => {
+    const iv = intervalAtScale(strata, method, scale, offset);
+    return iv !== void 0 && (scale >= full ? placeInterval(iv, bounds) !== "straddles" : placeInterval(iv, target) !== "straddles");
+  };
+  if (settled(1)) return 1;
+  if (!settled(full)) return null;
+  let lo = 1;
+  let hi = full;
+  for (let i = 0; i < 40; i++) {
+    const mid = (lo + hi) / 2;
+    if (settled(mid)) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
+// src/judge/estimates.ts
+var SampledCorpus = class {
+  constructor(shards) {
+    this.shards = shards;
+  }
+  shards;
+  strata(sums) {
+    return this.shards.map((r) => {
+      const n = r.sample ? r.sample.docs : measuredDocsOf(r);
+      const N = r.sample ? r.sample.of : n;
+      return { N, n, ...sums(r) };
+    });
+  }
+  /** Returns the strata of a language's share of the corpus in a unit (tokens: under the main tokenizer; `baseline`: under the baseline). */
+  share(key, unit) {
+    return this.strata((r) => {
+      let x = 0;
+      let xx = 0;
+      for (const [k, t2] of Object.entries(r.languages)) {
+        x += amount(t2, unit);
+        xx += amount2(t2, r.sample?.moments[k], unit);
+      }
+      const t = r.languages[key];
+      const y = t ? amount(t, unit) : 0;
+      const yy = t ? amount2(t, r.sample?.moments[key], unit) : 0;
+      return { y, x, yy, xx, xy: yy };
+    });
+  }
+  /** Returns the strata of a language's purity (expected-script characters ÷ script characters). */
+  purity(key) {
+    return this.strata((r) => {
+      const t = r.languages[key];
+      const m = r.sample?.moments[key] ?? emptyMoments();
+      return { y: t?.expectedScriptChars ?? 0, x: t?.scriptChars ?? 0, yy: m.expected2, xx: m.scriptChars2, xy: m.expectedScriptChars };
+    });
+  }
+  /** Returns the strata of the share of a language's purity-judged documents below `minPurity`. */
+  impure(key, minPurity) {
+    return this.strata((r) => {
+      const t = r.languages[key];
+      return indicator(t ? docsBelowPurity(t.purityHistogram, minPurity) : 0, t?.purityDocs ?? 0);
+    });
+  }
+  /** Returns the strata of the share of documents declaring `key` that the detector labels otherwise. */
+  mismatch(key) {
+    return this.strata((r) => {
+      const row = r.declared[key] ?? {};
+      const declared = Object.values(row).reduce((a, b) => a + b, 0);
+      return indicator(declared - (row[key] ?? 0) - (row["und"] ?? 0), declared);
+    });
+  }
+  /** Returns the strata of the share of documents with an anomaly in the mask. */
+  anomalous(forbidMask) {
+    return this.strata((r) => {
+      let docs = 0;
+      for (const [mask, n] of Object.entries(r.anomalyMasks)) if ((Number(mask) & forbidMask) !== 0) docs += n;
+      return indicator(docs, measuredDocsOf(r));
+    });
+  }
+  /** Returns the strata of a language's fertility (word tokens ÷ words) or continued words (continued ÷ words) under the main tokenizer. */
+  perWord(key, what) {
+    return this.strata((r) => {
+      const t = r.languages[key];
+      const m = r.sample?.moments[key] ?? emptyMoments();
+      if (what === "fertility") return { y: t?.tokens?.wordTokens ?? 0, x: t?.words ?? 0, yy: m.wordTokens2, xx: m.words2, xy: m.wordTokensWords };
+      return { y: t?.tokens?.continuedWords ?? 0, x: t?.words ?? 0, yy: m.continued2, xx: m.words2, xy: m.continuedWords };
+    });
+  }
+  /** Returns the strata of a language's word tokens under the main tokenizer ÷ under the baseline (fertility ratio). */
+  againstBaseline(key) {
+    return this.strata((r) => {
+      const t = r.languages[key];
+      const m = r.sample?.moments[key] ?? emptyMoments();
+      return { y: t?.tokens?.wordTokens ?? 0, x: t?.baseline?.wordTokens ?? 0, yy: m.wordTokens2, xx: m.baselineWordTokens2, xy: m.wordTokensBaseline };
+    });
+  }
+  /** Returns the strata of any document count (x = 1 per measured document): what the sample size is counted in. */
+  documents() {
+    return this.strata((r) => indicator(0, measuredDocsOf(r)));
+  }
+};
+function intervalFrom(strata, method, offset = 0) {
+  return intervalOf(ratioEstimate(strata), method, offset);
+}
+function measuredDocsOf(r) {
+  return Object.values(r.languages).reduce((s, t) => s + t.docs, 0);
+}
+function indicator(y, x) {
+  return { y, x, yy: y, xx: x, xy: y };
+}
+function amount(t, unit) {
+  switch (unit) {
+    case "docs":
+      return t.docs;
+    case "bytes":
+      return t.bytes;
+    case "chars":
+      return t.chars;
+    case "words":
+      return t.words;
+    case "tokens":
+      return t.tokens?.tokens ?? 0;
+    case "baseline":
+      return t.baseline?.tokens ?? 0;
+  }
+}
+function amount2(t, m, unit) {
+  if (unit === "docs") return t.docs;
+  if (!m) return 0;
+  switch (unit) {
+    case "bytes":
+      return m.bytes2;
+    case "chars":
+      return m.chars2;
+    case "words":
+      return m.words2;
+    case "tokens":
+      return m.tokens2;
+    case "baseline":
+      return m.baselineTokens2;
+  }
+}
+
 // src/judge/rules.ts
 var LOCATIONS_PER_RULE = 10;
 function pct(x) {
@@ -279,9 +764,51 @@ function outcome(policy, rule, scope, measured, limit, unit, failed, message, lo
   const verdict = !failed ? "pass" : severity === "error" ? "fail" : "warn";
   return { rule, scope, measured, limit, unit, severity, verdict, message, locations: locations.slice(0, LOCATIONS_PER_RULE) };
 }
-function judgeRules(policy, corpus, langs) {
+function onSample(policy, o, sampled, strata, method, bounds, offset = 0) {
+  const iv = intervalOf(ratioEstimate(strata), method, offset);
+  if (!iv) return o;
+  o.interval = iv;
+  const show = (x) => o.unit === "share" ? pct(x) : x.toFixed(3);
+  o.message += `; ${CONFIDENCE_LABEL} ${show(iv.low)} \u2013 ${show(iv.high)}`;
+  const place = placeInterval(iv, bounds);
+  if (place !== "straddles") {
+    o.verdict = place === "inside" ? "pass" : o.severity === "error" ? "fail" : "warn";
+    return o;
+  }
+  o.verdict = "uncertain";
+  const docs = sampled.documents();
+  const all = docs.reduce((n, s) => n + s.N, 0);
+  const scale = scaleToSettle(strata, method, bounds, offset, SETTLE_MARGIN);
+  const measuredDocs = docs.reduce((n, s) => n + s.n, 0);
+  const setting = scale === null ? null : settingAt(policy.sampling, scale, measuredDocs / Math.max(1, all));
+  const settleDocs = setting === null ? all : docsUnder(setting, docs);
+  o.settle = { docs: settleDocs, sampling: settleDocs >= all ? null : setting };
+  o.message += o.settle.sampling === null ? `; uncertain: the interval straddles the limit and only measuring every document settles it` : `; uncertain: the interval straddles the limit; about ${o.settle.docs} measured documents would settle it (sampling: ${"fraction" in o.settle.sampling ? `fraction ${o.settle.sampling.fraction}` : `docs-per-shard ${o.settle.sampling["docs-per-shard"]}`})`;
+  return o;
+}
+var SETTLE_MARGIN = 0.5;
+var CONFIDENCE_LABEL = "95 % CI";
+function settingAt(spec, scale, realizedRate) {
+  if (!spec) return null;
+  if ("fraction" in spec) {
+    const f = roundUp2(realizedRate * scale);
+    return f >= 1 ? null : { fraction: f };
+  }
+  return { "docs-per-shard": Math.ceil(roundUp2(spec.docsPerShard * scale)) };
+}
+function docsUnder(setting, docs) {
+  let n = 0;
+  for (const s of docs) n += "fraction" in setting ? Math.min(s.N, Math.ceil(s.N * setting.fraction)) : Math.min(s.N, setting["docs-per-shard"]);
+  return n;
+}
+function roundUp2(v) {
+  const step = 10 ** (Math.floor(Math.log10(v)) - 1);
+  return Number((Math.ceil(v / step - 1e-9) * step).toPrecision(2));
+}
+function judgeRules(policy, corpus, langs, sampled) {
   const out = [];
   const { rules } = policy;
+  const n = (x) => sampled ? `\u2248${Math.round(x)}` : `${x}`;
   const broken = [
     ...corpus.shards.filter((s) => s.read.broken).map((s) => ({ path: s.path, line: s.read.broken.afterLine + 1, detail: s.read.broken.message })),
     // Files the globs match but sluice cannot read make the report incomplete; links out of
@@ -337,13 +864,25 @@ function judgeRules(policy, corpus, langs) {
         `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} \xB1 ${(rules.mix.tolerance * 100).toFixed(1)} points (${off >= 0 ? "+" : ""}${(off * 100).toFixed(1)} points)`
       );
       o.tolerance = rules.mix.tolerance;
+      if (sampled) {
+        onSample(
+          policy,
+          o,
+          sampled,
+          sampled.share(spec.key, unit),
+          unit === "docs" ? "wilson" : "wilson-linearized",
+          { low: spec.target - rules.mix.tolerance, high: spec.target + rules.mix.tolerance }
+        );
+      }
       out.push(o);
     }
     for (const [key, limit] of [["other", rules.mix.maxOther], ["und", rules.mix.maxUndetermined]]) {
       if (limit === void 0) continue;
       const share = langs[key]?.share[unit] ?? 0;
       const what = key === "other" ? "in languages the policy does not list" : "too short or unclear to label";
-      out.push(outcome(policy, "mix", `language:${key}`, share, limit, "share", share > limit + 1e-12, `${pct(share)} of ${unit} ${what} (limit ${pct(limit)})`));
+      const o = outcome(policy, "mix", `language:${key}`, share, limit, "share", share > limit + 1e-12, `${pct(share)} of ${unit} ${what} (limit ${pct(limit)})`);
+      if (sampled) onSample(policy, o, sampled, sampled.share(key, unit), unit === "docs" ? "wilson" : "wilson-linearized", { high: limit });
+      out.push(o);
     }
   }
   if (rules.script) {
@@ -356,44 +895,44 @@ function judgeRules(policy, corpus, langs) {
       const locs = corpus.shards.flatMap(
         (s) => s.samples.impure.filter((x) => x.language === spec.key && x.purity < minPurity).map((x) => ({ path: s.path, line: x.line, detail: `purity ${pct(x.purity)}: ${x.detail}` }))
       );
-      out.push(
-        outcome(
-          policy,
-          "script",
-          `language:${spec.key}`,
-          share,
-          maxImpureDocs,
-          "share",
-          share > maxImpureDocs + 1e-12,
-          `${impure} of ${f.purityDocs} ${spec.key} documents have under ${pct(minPurity)} of their letters in ${spec.scripts.join("/")} (${pct(share)}; limit ${pct(maxImpureDocs)})`,
-          locs
-        )
+      const o = outcome(
+        policy,
+        "script",
+        `language:${spec.key}`,
+        share,
+        maxImpureDocs,
+        "share",
+        share > maxImpureDocs + 1e-12,
+        `${n(impure)} of ${n(f.purityDocs)} ${spec.key} documents have under ${pct(minPurity)} of their letters in ${spec.scripts.join("/")} (${pct(share)}; limit ${pct(maxImpureDocs)})`,
+        locs
       );
+      if (sampled) onSample(policy, o, sampled, sampled.impure(spec.key, minPurity), "wilson", { high: maxImpureDocs });
+      out.push(o);
     }
   }
   if (rules.encoding) {
     const forbid = maskOfKinds(rules.encoding.forbid);
     let docs = 0;
-    for (const [mask, n] of Object.entries(corpus.tally.anomalyMasks)) if ((Number(mask) & forbid) !== 0) docs += n;
+    for (const [mask, n2] of Object.entries(corpus.tally.anomalyMasks)) if ((Number(mask) & forbid) !== 0) docs += n2;
     const total = corpus.tally.input.docs;
     const share = ratio(docs, total) ?? 0;
-    const byKind = rules.encoding.forbid.filter((k) => corpus.tally.anomalyDocs[k] > 0).map((k) => `${k} ${corpus.tally.anomalyDocs[k]}`);
+    const byKind = rules.encoding.forbid.filter((k) => corpus.tally.anomalyDocs[k] > 0).map((k) => `${k} ${n(corpus.tally.anomalyDocs[k])}`);
     const locs = corpus.shards.flatMap(
       (s) => s.samples.anomalous.filter((a) => a.kinds.some((k) => rules.encoding.forbid.includes(k))).map((a) => ({ path: s.path, line: a.line, detail: a.detail }))
     );
-    out.push(
-      outcome(
-        policy,
-        "encoding",
-        "corpus",
-        share,
-        rules.encoding.maxAnomalousDocs,
-        "share",
-        share > rules.encoding.maxAnomalousDocs + 1e-12,
-        `${docs} of ${total} documents have forbidden characters or mojibake${byKind.length ? ` (${byKind.join(", ")})` : ""}; limit ${pct(rules.encoding.maxAnomalousDocs)}`,
-        locs
-      )
+    const o = outcome(
+      policy,
+      "encoding",
+      "corpus",
+      share,
+      rules.encoding.maxAnomalousDocs,
+      "share",
+      share > rules.encoding.maxAnomalousDocs + 1e-12,
+      `${n(docs)} of ${total} documents have forbidden characters or mojibake${byKind.length ? ` (${byKind.join(", ")})` : ""}; limit ${pct(rules.encoding.maxAnomalousDocs)}`,
+      locs
     );
+    if (sampled) onSample(policy, o, sampled, sampled.anomalous(forbid), "wilson", { high: rules.encoding.maxAnomalousDocs });
+    out.push(o);
   }
   if (rules.fertility) {
     const fr = rules.fertility;
@@ -403,7 +942,7 @@ function judgeRules(policy, corpus, langs) {
       if (!main2 || main2.fertility === null) continue;
       const max = fr.max[spec.key];
       if (max !== void 0) {
-        out.push(outcome(
+        const o = outcome(
           policy,
           "fertility",
           `language:${spec.key}`,
@@ -412,11 +951,13 @@ function judgeRules(policy, corpus, langs) {
           "ratio",
           main2.fertility > max,
           `${spec.key}: ${main2.fertility.toFixed(3)} tokens per word under ${main2.tokenizer} (limit ${max})`
-        ));
+        );
+        if (sampled) onSample(policy, o, sampled, sampled.perWord(spec.key, "fertility"), "linearized-normal", { high: max });
+        out.push(o);
       }
       const maxCont = fr.maxContinued[spec.key];
       if (maxCont !== void 0 && main2.continuedWords !== null) {
-        out.push(outcome(
+        const o = outcome(
           policy,
           "fertility",
           `language:${spec.key}`,
@@ -425,12 +966,14 @@ function judgeRules(policy, corpus, langs) {
           "share",
           main2.continuedWords > maxCont,
           `${spec.key}: ${pct(main2.continuedWords)} of words split into 2+ tokens under ${main2.tokenizer} (limit ${pct(maxCont)})`
-        ));
+        );
+        if (sampled) onSample(policy, o, sampled, sampled.perWord(spec.key, "continued"), "wilson-linearized", { high: maxCont });
+        out.push(o);
       }
       const base = f.baseline;
       if (fr.maxRegression !== void 0 && base && base.fertility) {
         const rise = main2.fertility / base.fertility - 1;
-        out.push(outcome(
+        const o = outcome(
           policy,
           "fertility",
           `language:${spec.key}`,
@@ -439,7 +982,9 @@ function judgeRules(policy, corpus, langs) {
           "share",
           rise > fr.maxRegression + 1e-12,
           `${spec.key}: fertility ${main2.fertility.toFixed(3)} under ${main2.tokenizer} vs ${base.fertility.toFixed(3)} under ${base.tokenizer} (${rise >= 0 ? "+" : ""}${pct(rise)}; limit +${pct(fr.maxRegression)})`
-        ));
+        );
+        if (sampled) onSample(policy, o, sampled, sampled.againstBaseline(spec.key), "linearized-normal", { high: fr.maxRegression }, -1);
+        out.push(o);
       }
     }
   }
@@ -494,7 +1039,7 @@ function judgeRules(policy, corpus, langs) {
 }
 function overallVerdict(outcomes) {
   if (outcomes.some((o) => o.verdict === "fail")) return "fail";
-  if (outcomes.some((o) => o.verdict === "warn")) return "warn";
+  if (outcomes.some((o) => o.verdict === "warn" || o.verdict === "uncertain")) return "warn";
   return "pass";
 }
 
@@ -502,9 +1047,17 @@ function overallVerdict(outcomes) {
 var TOOL_VERSION = "0.1.0";
 
 // src/judge/report.ts
-function buildReport(policy, corpus, cwd = process.cwd()) {
+function buildReport(policy, measured, cwd = process.cwd()) {
+  const isSampled = measured.shards.some((s) => s.sample);
+  const sampled = isSampled ? new SampledCorpus(measured.shards) : void 0;
+  let corpus = measured;
+  if (isSampled) {
+    const shards2 = measured.shards.map(scaleShardResult);
+    corpus = { ...measured, shards: shards2, tally: mergeShardResults(shards2, policy.languages.map((l) => l.key)) };
+  }
   const languages = languageFigures(policy, corpus);
-  const rules = judgeRules(policy, corpus, languages);
+  const rules = judgeRules(policy, corpus, languages, sampled);
+  if (sampled) addLanguageIntervals(policy, languages, sampled, corpus.tokenizer !== void 0);
   const verdict = overallVerdict(rules);
   const mixUnit = policy.rules.mix?.unit ?? (corpus.tokenizer ? "tokens" : "words");
   const totals = { docs: 0, bytes: 0, chars: 0, words: 0 };
@@ -530,6 +1083,7 @@ function buildReport(policy, corpus, cwd = process.cwd()) {
     if (s.subset !== void 0) fig.subset = s.subset;
     if (corpus.tokenizer) fig.tokens = Object.values(s.languages).reduce((n, t) => n + (t.tokens?.tokens ?? 0), 0);
     if (s.read.broken) fig.broken = s.read.broken;
+    if (s.sample) fig.measuredDocs = s.sample.docs;
     return fig;
   });
   const subsets = {};
@@ -580,6 +1134,15 @@ function buildReport(policy, corpus, cwd = process.cwd()) {
     report.tokenizer = { main: corpus.tokenizer.label };
     if (corpus.baseline) {
       report.tokenizer.baseline = corpus.baseline.label;
+      if (sampled) {
+        const intervals = {};
+        for (const [k, t] of Object.entries(corpus.tally.languages)) {
+          if (t.docs === 0) continue;
+          const iv = intervalFrom(sampled.share(k, "baseline"), "wilson-linearized");
+          if (iv) intervals[k] = iv;
+        }
+        report.tokenizer.mixUnderBaselineIntervals = intervals;
+      }
       const baseTotal = Object.values(corpus.tally.languages).reduce((n, t) => n + (t.baseline?.tokens ?? 0), 0);
       const under = {};
       const shift = {};
@@ -625,14 +1188,109 @@ function buildReport(policy, corpus, cwd = process.cwd()) {
       samples: corpus.shards.flatMap((s) => (s.contamination?.samples ?? []).map((x) => ({ path: s.path, line: x.line, detail: `${x.evalFile}:${x.evalLine}` })))
     };
   }
+  if (isSampled) {
+    report.sampling = samplingFigures(policy, measured, report);
+    roundEstimates(report);
+  }
   return report;
+}
+var METHOD_ORDER = ["wilson", "wilson-linearized", "linearized-normal"];
+function samplingFigures(policy, measured, report) {
+  const first = measured.shards.find((s) => s.sample).sample;
+  const { method, setting } = policy.sampling ? describeSampling(policy.sampling) : first;
+  const used = /* @__PURE__ */ new Set();
+  for (const r of report.rules) if (r.interval) used.add(r.interval.method);
+  for (const f of Object.values(report.languages)) {
+    const iv = f.intervals;
+    if (!iv) continue;
+    for (const x of [...Object.values(iv.share), iv.purity, iv.impureDocs, iv.mismatchDocs, iv.fertility, iv.continuedWords]) if (x) used.add(x.method);
+  }
+  const everyDocument = ["input lines"];
+  if (measured.duplicates) everyDocument.push("duplicates");
+  if (measured.contamination) everyDocument.push("contamination");
+  return {
+    method,
+    setting,
+    measuredDocs: measured.shards.reduce((n, s) => n + (s.sample ? s.sample.docs : s.read.docs), 0),
+    docs: measured.tally.input.docs,
+    completeShards: measured.shards.filter((s) => !s.sample || s.sample.docs >= s.sample.of).length,
+    confidence: CONFIDENCE,
+    methods: Object.fromEntries(METHOD_ORDER.filter((m) => used.has(m)).map((m) => [m, INTERVAL_METHODS[m]])),
+    everyDocument
+  };
+}
+function addLanguageIntervals(policy, languages, sampled, hasTokens) {
+  for (const f of Object.values(languages)) {
+    const iv = { share: {} };
+    for (const unit of ["docs", "bytes", "chars", "words", ...hasTokens ? ["tokens"] : []]) {
+      const x = intervalFrom(sampled.share(f.key, unit), unit === "docs" ? "wilson" : "wilson-linearized");
+      if (x) iv.share[unit] = x;
+    }
+    const purity = intervalFrom(sampled.purity(f.key), "wilson-linearized");
+    if (purity) iv.purity = purity;
+    if (policy.rules.script && f.purityDocs > 0) {
+      const x = intervalFrom(sampled.impure(f.key, policy.rules.script.minPurity), "wilson");
+      if (x) iv.impureDocs = x;
+    }
+    if (f.declaredDocs) {
+      const x = intervalFrom(sampled.mismatch(f.key), "wilson");
+      if (x) iv.mismatchDocs = x;
+    }
+    if (f.fertility) {
+      const fert = intervalFrom(sampled.perWord(f.key, "fertility"), "linearized-normal");
+      const cont = intervalFrom(sampled.perWord(f.key, "continued"), "wilson-linearized");
+      if (fert) iv.fertility = fert;
+      if (cont) iv.continuedWords = cont;
+    }
+    f.intervals = iv;
+  }
+}
+function roundEstimates(report) {
+  const r = Math.round;
+  const t = report.totals;
+  t.docs = r(t.docs);
+  t.bytes = r(t.bytes);
+  t.chars = r(t.chars);
+  t.words = r(t.words);
+  if (t.tokens !== void 0) t.tokens = r(t.tokens);
+  t.estimated = true;
+  for (const f of Object.values(report.languages)) {
+    f.docs = r(f.docs);
+    f.bytes = r(f.bytes);
+    f.chars = r(f.chars);
+    f.words = r(f.words);
+    if (f.tokens !== void 0) f.tokens = r(f.tokens);
+    f.purityDocs = r(f.purityDocs);
+    if (f.impureDocs !== void 0) f.impureDocs = r(f.impureDocs);
+    if (f.declaredDocs !== void 0) f.declaredDocs = r(f.declaredDocs);
+    if (f.mismatchDocs !== void 0) f.mismatchDocs = r(f.mismatchDocs);
+    if (f.detectedAs) f.detectedAs = Object.fromEntries(Object.entries(f.detectedAs).map(([k, n]) => [k, r(n)]));
+    for (const tf of [f.fertility, f.baseline]) if (tf) tf.tokens = r(tf.tokens);
+  }
+  for (const k of Object.keys(report.scripts)) report.scripts[k] = r(report.scripts[k]);
+  for (const s of Object.values(report.subsets)) {
+    s.docs = r(s.docs);
+    s.bytes = r(s.bytes);
+    s.words = r(s.words);
+    if (s.tokens !== void 0) s.tokens = r(s.tokens);
+    for (const k of Object.keys(s.languages)) s.languages[k] = r(s.languages[k]);
+  }
+  for (const s of report.shards) {
+    for (const k of Object.keys(s.languages)) s.languages[k] = r(s.languages[k]);
+    if (s.tokens !== void 0) s.tokens = r(s.tokens);
+  }
 }
 function headlineOf(verdict, rules) {
   const failing = rules.filter((r) => r.verdict === "fail");
   const warning = rules.filter((r) => r.verdict === "warn");
+  const uncertain = rules.filter((r) => r.verdict === "uncertain");
   const names = (list) => [...new Set(list.map((r) => r.scope === "corpus" ? r.rule : `${r.rule} (${r.scope.replace(/^language:/, "")})`))].join(", ");
-  if (verdict === "fail") return `FAIL: ${failing.length} rule${failing.length === 1 ? "" : "s"} at error severity failed: ${names(failing)}`;
-  if (verdict === "warn") return `PASS with warnings: ${names(warning)}`;
+  const unsure = uncertain.length ? `${uncertain.length} rule${uncertain.length === 1 ? "" : "s"} uncertain on the sample (a larger sample settles ${uncertain.length === 1 ? "it" : "them"}): ${names(uncertain)}` : "";
+  if (verdict === "fail") return `FAIL: ${failing.length} rule${failing.length === 1 ? "" : "s"} at error severity failed: ${names(failing)}${unsure ? `; ${unsure}` : ""}`;
+  if (verdict === "warn") {
+    if (warning.length === 0) return `PASS with warnings: ${unsure}`;
+    return `PASS with warnings: ${names(warning)}${unsure ? `; ${unsure}` : ""}`;
+  }
   return `PASS: all ${rules.length} judged rules hold`;
 }
 
@@ -1445,7 +2103,7 @@ function issueOf(e, root) {
 
 // src/policy/build.ts
 import path from "node:path";
-import iconv from "iconv-lite";
+import iconv2 from "iconv-lite";
 
 // src/policy/data/default-scripts.ts
 var DEFAULT_SCRIPTS = {
@@ -2500,7 +3158,7 @@ function buildCorpus(c, sink) {
     const where2 = ["corpus", "encodings", glob];
     checkGlob(glob, where2, sink);
     if (typeof enc !== "string" || enc.length === 0) continue;
-    if (!iconv.encodingExists(enc)) {
+    if (!iconv2.encodingExists(enc)) {
       sink.problem(where2, `unknown encoding \`${enc}\` (encoding names are those iconv-lite knows, e.g. \`windows-1256\`)`, {
         ...encodingSuggestion(enc)
       });
@@ -2520,7 +3178,7 @@ function buildCorpus(c, sink) {
 }
 function encodingSuggestion(enc) {
   const canonical = enc.toLowerCase().replace(/[^a-z0-9]/g, "");
-  const names = Object.keys(iconv.encodings ?? {}).filter((k) => !k.startsWith("_") && !/^\d+$/.test(k));
+  const names = Object.keys(iconv2.encodings ?? {}).filter((k) => !k.startsWith("_") && !/^\d+$/.test(k));
   const near = nearest(canonical, names);
   return near ? { suggestion: didYouMean(near) } : {};
 }
@@ -2950,7 +3608,7 @@ import path4 from "node:path";
 import fg from "fast-glob";
 
 // src/read/classify.ts
-import iconv2 from "iconv-lite";
+import iconv3 from "iconv-lite";
 import picomatch from "picomatch";
 var DEFAULT_ENCODING = "utf-8";
 var SUBSET_PLACEHOLDER = "{subset}";
@@ -2971,8 +3629,8 @@ function shardKindOf(filePath) {
   return format !== void 0 ? { format, compression: "none" } : { unsupported: last === "" ? "" : `.${last}` };
 }
 function isLineSplittableEncoding(encoding) {
-  if (!iconv2.encodingExists(encoding)) return false;
-  const probe = iconv2.encode("a\n{", encoding, { addBOM: false });
+  if (!iconv3.encodingExists(encoding)) return false;
+  const probe = iconv3.encode("a\n{", encoding, { addBOM: false });
   return probe.length === 3 && probe[0] === 97 && probe[1] === 10 && probe[2] === 123;
 }
 function subsetExtractor(pattern) {
@@ -2989,7 +3647,7 @@ function subsetExtractor(pattern) {
 }
 function pathClassifier(corpus) {
   const overrides = corpus.encodings.map(({ glob, encoding }) => {
-    if (!iconv2.encodingExists(encoding)) {
+    if (!iconv3.encodingExists(encoding)) {
       throw new Error(`corpus.encodings: glob \`${glob}\` names encoding \`${encoding}\`, which iconv-lite does not know`);
     }
     if (!isLineSplittableEncoding(encoding)) {
@@ -3210,7 +3868,7 @@ import { isUtf8 as isUtf82 } from "node:buffer";
 
 // src/read/decode.ts
 import { isUtf8 } from "node:buffer";
-import iconv3 from "iconv-lite";
+import iconv4 from "iconv-lite";
 function firstInvalidUtf8(bytes2) {
   const n = bytes2.length;
   let i = 0;
@@ -3263,13 +3921,13 @@ function legacyLineDecoder(encoding) {
       const nul = line.indexOf(0);
       if (nul !== -1) return { reason: "binary", at: nul };
     }
-    const text = iconv3.decode(line, encoding, { stripBOM: false });
+    const text = iconv4.decode(line, encoding, { stripBOM: false });
     if (!text.includes("\uFFFD")) return text;
     return { reason: "invalid-encoding", at: firstUndecodableByte(line, encoding) };
   };
 }
 function firstUndecodableByte(line, encoding) {
-  const decoder = iconv3.getDecoder(encoding, { stripBOM: false });
+  const decoder = iconv4.getDecoder(encoding, { stripBOM: false });
   for (let i = 0; i < line.length; i++) {
     if (decoder.write(line.subarray(i, i + 1)).includes("\uFFFD")) return i;
   }
@@ -3661,7 +4319,7 @@ var TextSink = class extends AccountingSink {
 };
 
 // src/results/cache.ts
-import { createHash } from "node:crypto";
+import { createHash as createHash2 } from "node:crypto";
 import { mkdir, readFile as readFile2, rename, writeFile } from "node:fs/promises";
 import { join } from "node:path";
 
@@ -3679,7 +4337,7 @@ function shardResultFromStored(value) {
 
 // src/results/cache.ts
 function settingsIdOf(settings) {
-  return createHash("sha256").update(canonicalJson(settings)).digest("hex").slice(0, 16);
+  return createHash2("sha256").update(canonicalJson(settings)).digest("hex").slice(0, 16);
 }
 function canonicalJson(value) {
   return JSON.stringify(value, (_key, v) => {
@@ -3732,121 +4390,6 @@ var ResultCache = class {
 import { createHash as createHash3 } from "node:crypto";
 import { createReadStream as createReadStream2 } from "node:fs";
 import { PassThrough } from "node:stream";
-
-// src/results/sample.ts
-import { createHash as createHash2 } from "node:crypto";
-var HASH_SPACE = 2 ** 53;
-var UNSAMPLED_LANGUAGE = "unsampled";
-function documentHash(text, seed = 0) {
-  const h = createHash2("sha256");
-  if (seed !== 0) h.update(`${seed}\0`);
-  const d = h.update(text, "utf8").digest();
-  return (d.readUInt32BE(0) & 2097151) * 4294967296 + d.readUInt32BE(4);
-}
-function fractionCutoff(fraction) {
-  return Math.ceil(fraction * HASH_SPACE) - 1;
-}
-var SmallestHashes = class {
-  constructor(k) {
-    this.k = k;
-  }
-  k;
-  heap = [];
-  /** Offers one document's hash. */
-  add(hash2) {
-    const h = this.heap;
-    if (h.length < this.k) {
-      h.push(hash2);
-      let i2 = h.length - 1;
-      while (i2 > 0) {
-        const p = i2 - 1 >> 1;
-        if (h[p] >= h[i2]) break;
-        [h[p], h[i2]] = [h[i2], h[p]];
-        i2 = p;
-      }
-      return;
-    }
-    if (hash2 >= h[0]) return;
-    h[0] = hash2;
-    let i = 0;
-    for (; ; ) {
-      const l = 2 * i + 1;
-      const r = l + 1;
-      let m = i;
-      if (l < h.length && h[l] > h[m]) m = l;
-      if (r < h.length && h[r] > h[m]) m = r;
-      if (m === i) break;
-      [h[m], h[i]] = [h[i], h[m]];
-      i = m;
-    }
-  }
-  /**
-   * Returns the cutoff: the k-th smallest hash, or HASH_SPACE when fewer than k were seen (all are measured).
-   * Copies of one text share a hash, so a cutoff on a repeated hash measures every copy: a few more than k.
-   */
-  cutoff() {
-    return this.heap.length < this.k ? HASH_SPACE : this.heap[0];
-  }
-};
-function describeSampling(spec) {
-  return "fraction" in spec ? { method: "fraction", setting: spec.fraction } : { method: "docs-per-shard", setting: spec.docsPerShard };
-}
-function emptyMoments() {
-  return {
-    bytes2: 0,
-    chars2: 0,
-    words2: 0,
-    tokens2: 0,
-    baselineTokens2: 0,
-    wordTokens2: 0,
-    wordTokensWords: 0,
-    continued2: 0,
-    continuedWords: 0,
-    baselineWordTokens2: 0,
-    wordTokensBaseline: 0,
-    expected2: 0,
-    scriptChars2: 0,
-    expectedScriptChars: 0
-  };
-}
-var MomentTally = class {
-  moments = {};
-  of(key) {
-    return this.moments[key] ??= emptyMoments();
-  }
-  /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
-  add(m, tokens) {
-    const t = this.of(m.language);
-    t.bytes2 += m.bytes * m.bytes;
-    t.chars2 += m.chars * m.chars;
-    t.words2 += m.words * m.words;
-    const main2 = tokens?.main;
-    const base = tokens?.baseline;
-    if (main2) {
-      t.tokens2 += main2.tokens * main2.tokens;
-      t.wordTokens2 += main2.wordTokens * main2.wordTokens;
-      t.wordTokensWords += main2.wordTokens * m.words;
-      t.continued2 += main2.continuedWords * main2.continuedWords;
-      t.continuedWords += main2.continuedWords * m.words;
-    }
-    if (base) {
-      t.baselineTokens2 += base.tokens * base.tokens;
-      t.baselineWordTokens2 += base.wordTokens * base.wordTokens;
-      if (main2) t.wordTokensBaseline += main2.wordTokens * base.wordTokens;
-    }
-    if (m.purity !== null) {
-      let scriptChars = 0;
-      for (const n of Object.values(m.scripts)) scriptChars += n;
-      const expected = Math.round(m.purity * scriptChars);
-      const b = this.of(m.declared !== void 0 && m.declared !== "other" ? m.declared : m.language);
-      b.expected2 += expected * expected;
-      b.scriptChars2 += scriptChars * scriptChars;
-      b.expectedScriptChars += expected * scriptChars;
-    }
-  }
-};
-
-// src/results/scan.ts
 var READ_CHUNK_BYTES2 = 256 * 1024;
 async function contentIdOf(ref) {
   const hash2 = createHash3("sha256");
@@ -3966,134 +4509,6 @@ async function scanShard(ref, settings, analyzers) {
 
 // src/core/analyzers.ts
 import { relative as relative2 } from "node:path";
-
-// src/measure/encoding.ts
-import iconv4 from "iconv-lite";
-var MOJIBAKE_LEAD_FIRST = 194;
-var MOJIBAKE_LEAD_LAST = 244;
-var IMPLAUSIBLE_2_BYTE = [
-  [576, 767],
-  [1984, 2047]
-];
-var MULTIPLICATION_SIGN = 215;
-var LOST_BYTE = 256;
-var UNMAPPED = -1;
-function emptyAnomalyCounts() {
-  return {
-    "replacement-char": 0,
-    "control-chars": 0,
-    "bidi-controls": 0,
-    "zero-width": 0,
-    "private-use": 0,
-    mojibake: 0
-  };
-}
-function emptyMarkCounts() {
-  return { joiners: 0, directionMarks: 0 };
-}
-function anomalyOf(cp, atStart) {
-  if (cp < 32) return cp === 9 || cp === 10 || cp === 13 ? null : "control-chars";
-  if (cp < 127) return null;
-  if (cp <= 159) return "control-chars";
-  if (cp < 8203) return null;
-  if (cp === 8203 || cp === 8288) return "zero-width";
-  if (cp >= 8234 && cp <= 8238 || cp >= 8294 && cp <= 8297) return "bidi-controls";
-  if (cp >= 55296 && cp <= 57343) return "replacement-char";
-  if (cp >= 57344 && cp <= 63743) return "private-use";
-  if (cp === 65279) return atStart ? null : "zero-width";
-  if (cp === 65533) return "replacement-char";
-  if (cp >= 983040 && cp <= 1048573 || cp >= 1048576 && cp <= 1114109) return "private-use";
-  return null;
-}
-function markOf(cp) {
-  if (cp === 8204 || cp === 8205) return "joiners";
-  if (cp === 8206 || cp === 8207 || cp === 1564) return "directionMarks";
-  return null;
-}
-function needsCloserLook(cp) {
-  return anomalyOf(cp, false) !== null || markOf(cp) !== null || cp >= MOJIBAKE_LEAD_FIRST && cp <= MOJIBAKE_LEAD_LAST;
-}
-var byteMap;
-function bytesOfChars() {
-  if (byteMap) return byteMap;
-  const map = new Int16Array(65536).fill(UNMAPPED);
-  for (let b = 128; b <= 255; b++) map[b] = b;
-  const cp1252 = iconv4.decode(Buffer.from(Array.from({ length: 32 }, (_, k) => 128 + k)), "windows-1252");
-  for (let k = 0; k < cp1252.length; k++) {
-    const cp = cp1252.charCodeAt(k);
-    if (cp !== 65533) map[cp] = 128 + k;
-  }
-  map[65533] = LOST_BYTE;
-  byteMap = map;
-  return map;
-}
-var assigned = new RegExp("^\\p{Assigned}$", "u");
-var letter = new RegExp("^\\p{L}$", "u");
-var punctuationOrSpace = /^[\p{P}\p{Zs}]$/u;
-function isUpper(ch) {
-  return ch !== ch.toLowerCase() && ch === ch.toUpperCase();
-}
-function countsAlone(text, start, length, cp) {
-  if (length === 2) {
-    if (text.charCodeAt(start) === MULTIPLICATION_SIGN) return false;
-    if (start > 0 && isUpper(text[start - 1])) return false;
-    for (const [lo, hi] of IMPLAUSIBLE_2_BYTE) if (cp >= lo && cp <= hi) return false;
-    return assigned.test(String.fromCodePoint(cp));
-  }
-  let letters = 0;
-  let punctuation = 0;
-  for (let k = 1; k < length; k++) {
-    const ch = text[start + k];
-    if (letter.test(ch)) letters++;
-    else if (punctuationOrSpace.test(ch)) punctuation++;
-  }
-  if (letters === length - 1) return false;
-  if (punctuation === length - 1 && !letter.test(text[start + length] ?? " ")) return false;
-  return assigned.test(String.fromCodePoint(cp));
-}
-function countMojibake(text) {
-  const map = bytesOfChars();
-  const found = [];
-  const n = text.length;
-  for (let i = 0; i < n; i++) {
-    const lead = map[text.charCodeAt(i)];
-    if (lead < MOJIBAKE_LEAD_FIRST || lead > MOJIBAKE_LEAD_LAST) continue;
-    const length = lead < 224 ? 2 : lead < 240 ? 3 : 4;
-    if (i + length > n) continue;
-    const lo = lead === 224 ? 160 : lead === 240 ? 144 : 128;
-    const hi = lead === 237 ? 159 : lead === 244 ? 143 : 191;
-    let cp = lead & (length === 2 ? 31 : length === 3 ? 15 : 7);
-    let lossy = false;
-    let valid = true;
-    for (let k = 1; k < length; k++) {
-      const b = map[text.charCodeAt(i + k)];
-      const first = k === 1;
-      if (b === LOST_BYTE) {
-        if (first && lo > 157) {
-          valid = false;
-          break;
-        }
-        lossy = true;
-        cp = cp << 6;
-      } else if (b >= (first ? lo : 128) && b <= (first ? hi : 191)) {
-        cp = cp << 6 | b & 63;
-      } else {
-        valid = false;
-        break;
-      }
-    }
-    if (!valid) continue;
-    found.push({ start: i, end: i + length, alone: !lossy && countsAlone(text, i, length, cp) });
-    i += length - 1;
-  }
-  let count3 = 0;
-  for (let s = 0; s < found.length; s++) {
-    const seq = found[s];
-    const joined = found[s - 1]?.end === seq.start || found[s + 1]?.start === seq.end;
-    if (joined || seq.alone) count3++;
-  }
-  return count3;
-}
 
 // src/measure/language.ts
 import { parse } from "bcp-47";
@@ -15211,10 +15626,10 @@ function bar(value, width = 20) {
 }
 
 // src/render/escape.ts
-var MARKDOWN_PUNCT = /[\\`*_{}[\]()#+\-.!|~>]/g;
+var MARKDOWN_PUNCT = /[\\`*_{}[\]()#+\-.!|~]/g;
 var HTML_SPECIAL = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" };
 function escapeMarkdown(text) {
-  return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, (c) => `U+${c.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`).replace(/[&<>"']/g, (c) => HTML_SPECIAL[c]).replace(MARKDOWN_PUNCT, (c) => `\\${c}`).replace(/@/g, "&#64;").replace(/:\/\//g, "&#58;//").replace(/\r?\n|\r/g, " ");
+  return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, (c) => `U+${c.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`).replace(MARKDOWN_PUNCT, (c) => `\\${c}`).replace(/[&<>"']/g, (c) => HTML_SPECIAL[c]).replace(/@/g, "&#64;").replace(/:\/\//g, "&#58;//").replace(/\r?\n|\r/g, " ");
 }
 function codePath(path5) {
   const safe = path5.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
@@ -15258,29 +15673,41 @@ function where(loc) {
 }
 
 // src/render/markdown.ts
-var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C" };
+var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\u2754" };
 function renderMarkdown(report, opts = {}) {
   const out = [];
   const loc = (path5, line) => {
     const text = codePath(line === void 0 ? path5 : `${path5}:${line}`);
     if (!opts.linkBase) return text;
-    const href = `${opts.linkBase}/${path5.split("/").map(encodeURIComponent).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
+    const href = `${opts.linkBase}/${path5.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
     return `[${text}](${href})`;
   };
   out.push(`## ${ICON[report.verdict]} sluice \xB7 ${escapeMarkdown(report.policy.name)}: ${report.verdict.toUpperCase()}`);
   out.push("");
   out.push(`**${escapeMarkdown(report.headline)}**`);
   out.push("");
+  const est = report.totals.estimated ? "\u2248" : "";
   out.push(
-    `${count2(report.totals.docs)} documents in ${count2(report.input.shards)} shards, ${bytes(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${count2(report.totals.tokens)} tokens (${escapeMarkdown(report.tokenizer?.main ?? "")})` : "") + `; policy ${codePath(report.policy.file)}.`
+    `${count2(report.totals.docs)} documents in ${count2(report.input.shards)} shards, ${est}${bytes(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${escapeMarkdown(report.tokenizer?.main ?? "")})` : "") + `; policy ${codePath(report.policy.file)}.`
   );
   out.push("");
+  if (report.sampling) {
+    const s = report.sampling;
+    out.push(
+      `**Sampled:** ${count2(s.measuredDocs)} of ${count2(s.docs)} documents measured (\`${s.method}: ${s.setting}\`; ${count2(s.completeShards)} of ${count2(report.input.shards)} shards in full). Sizes and shares are estimates; a rule fails only when its whole ${Math.round(s.confidence * 100)} % interval is past the limit, and is \u2754 uncertain when the interval straddles it. Computed over every document: ${s.everyDocument.join(", ")}.`
+    );
+    out.push("");
+    for (const [m, text] of Object.entries(s.methods)) out.push(`- \`${m}\`: ${escapeMarkdown(text)}`);
+    out.push("");
+  }
   const notPassing = report.rules.filter((r) => r.verdict !== "pass");
   const ordered = [...notPassing, ...report.rules.filter((r) => r.verdict === "pass")];
-  out.push("| | rule | scope | measured | limit | finding |");
-  out.push("|---|---|---|---:|---:|---|");
+  const withCi = report.sampling !== void 0;
+  out.push(`| | rule | scope | measured |${withCi ? " 95 % interval |" : ""} limit | finding |`);
+  out.push(`|---|---|---|---:|${withCi ? "---:|" : ""}---:|---|`);
   for (const r of ordered) {
-    out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === "warn" ? " (warn)" : ""} | ${escapeMarkdown(r.scope.replace(/^language:/, ""))} | ${inUnit(r.measured, r.unit)} | ${limitOf(r)} | ${escapeMarkdown(r.message)} |`);
+    const ci = withCi ? ` ${r.interval ? `${inUnit(r.interval.low, r.unit)} \u2013 ${inUnit(r.interval.high, r.unit)}` : "exact"} |` : "";
+    out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === "warn" ? " (warn)" : ""} | ${escapeMarkdown(r.scope.replace(/^language:/, ""))} | ${inUnit(r.measured, r.unit)} |${ci} ${limitOf(r)} | ${escapeMarkdown(r.message)} |`);
   }
   out.push("");
   for (const r of notPassing) {
@@ -15296,13 +15723,13 @@ function renderMarkdown(report, opts = {}) {
   const unit = report.mixUnit;
   out.push(`<details open><summary>Language mix (by ${unit})</summary>`);
   out.push("");
-  out.push(`| language | target | share of ${unit} | | docs | words${report.totals.tokens !== void 0 ? " | tokens" : ""} | purity |`);
-  out.push(`|---|---:|---:|---|---:|---:|${report.totals.tokens !== void 0 ? "---:|" : ""}---:|`);
+  out.push(`| language | target | share of ${unit} |${withCi ? " 95 % interval |" : ""} | docs | words${report.totals.tokens !== void 0 ? " | tokens" : ""} | purity |`);
+  out.push(`|---|---:|---:|${withCi ? "---:|" : ""}---|---:|---:|${report.totals.tokens !== void 0 ? "---:|" : ""}---:|`);
   for (const f of Object.values(report.languages)) {
     if (f.docs === 0 && f.target === void 0) continue;
     const share = f.share[unit] ?? 0;
     out.push(
-      `| ${escapeMarkdown(f.key)} | ${percent(f.target)} | ${percent(share)} | ${bar(share, 16)} | ${count2(f.docs)} | ${count2(f.words)}${report.totals.tokens !== void 0 ? ` | ${count2(f.tokens ?? 0)}` : ""} | ${percent(f.purity)} |`
+      `| ${escapeMarkdown(f.key)} | ${percent(f.target)} | ${percent(share)} |${withCi ? ` ${f.intervals?.share[unit] ? `${percent(f.intervals.share[unit].low)} \u2013 ${percent(f.intervals.share[unit].high)}` : "\u2013"} |` : ""} ${bar(share, 16)} | ${count2(f.docs)} | ${count2(f.words)}${report.totals.tokens !== void 0 ? ` | ${count2(f.tokens ?? 0)}` : ""} | ${percent(f.purity)} |`
     );
   }
   out.push("");
@@ -15390,16 +15817,18 @@ function renderMarkdown(report, opts = {}) {
 function renderTerminal(report, opts) {
   const c = (code) => (s) => opts.color ? `\x1B[${code}m${s}\x1B[0m` : s;
   const red = c(31), green = c(32), yellow = c(33), dim = c(2), bold = c(1);
-  const paint = { pass: green, warn: yellow, fail: red };
-  const mark = { pass: "ok  ", warn: "WARN", fail: "FAIL" };
+  const paint = { pass: green, warn: yellow, fail: red, uncertain: yellow };
+  const mark = { pass: "ok  ", warn: "WARN", fail: "FAIL", uncertain: "??  " };
+  const est = report.totals.estimated ? "\u2248" : "";
   const lines = [];
   lines.push(`${bold(`sluice \xB7 ${clean2(report.policy.name)}`)}  ${paint[report.verdict](bold(report.verdict.toUpperCase()))}`);
   lines.push(paint[report.verdict](report.headline));
   lines.push(
     dim(
-      `${count2(report.totals.docs)} documents, ${count2(report.input.shards)} shards, ${bytes(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${count2(report.totals.tokens)} tokens (${report.tokenizer?.main})` : "") + ` \xB7 policy ${report.policy.file}`
+      `${count2(report.totals.docs)} documents, ${count2(report.input.shards)} shards, ${est}${bytes(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${report.tokenizer?.main})` : "") + ` \xB7 policy ${report.policy.file}`
     )
   );
+  if (report.sampling) lines.push(dim(samplingLine(report)));
   lines.push("");
   const maxLoc = opts.maxLocations ?? 5;
   const ordered = [...report.rules].sort((a, b) => rank(a) - rank(b));
@@ -15416,13 +15845,13 @@ function renderTerminal(report, opts) {
   lines.push("");
   const unit = report.mixUnit;
   const hasTokens = report.totals.tokens !== void 0;
-  lines.push(bold(`Language mix by ${unit}`));
+  lines.push(bold(`Language mix by ${unit}`) + (report.sampling ? dim(`  (estimated; share ${Math.round(report.sampling.confidence * 100)} % interval after it)`) : ""));
   lines.push(dim(`  ${"language".padEnd(9)} ${"target".padStart(7)} ${"share".padStart(7)}  ${"".padEnd(20)} ${"docs".padStart(8)} ${"words".padStart(10)}${hasTokens ? ` ${"tokens".padStart(10)}` : ""} ${"purity".padStart(7)}`));
   for (const f of Object.values(report.languages)) {
     if (f.docs === 0 && f.target === void 0) continue;
     const share = f.share[unit] ?? 0;
     lines.push(
-      `  ${clean2(f.key).padEnd(9)} ${percent(f.target).padStart(7)} ${percent(share).padStart(7)}  ${bar(share, 20).padEnd(20)} ${count2(f.docs).padStart(8)} ${count2(f.words).padStart(10)}${hasTokens ? ` ${count2(f.tokens ?? 0).padStart(10)}` : ""} ${percent(f.purity).padStart(7)}`
+      `  ${clean2(f.key).padEnd(9)} ${percent(f.target).padStart(7)} ${percent(share).padStart(7)}  ${bar(share, 20).padEnd(20)} ${count2(f.docs).padStart(8)} ${count2(f.words).padStart(10)}${hasTokens ? ` ${count2(f.tokens ?? 0).padStart(10)}` : ""} ${percent(f.purity).padStart(7)}` + (f.intervals?.share[unit] ? dim(`  ${percent(f.intervals.share[unit].low)} \u2013 ${percent(f.intervals.share[unit].high)}`) : "")
     );
   }
   const declared = Object.values(report.languages).filter((f) => f.declaredDocs);
@@ -15472,7 +15901,11 @@ function renderTerminal(report, opts) {
 `;
 }
 function rank(r) {
-  return r.verdict === "fail" ? 0 : r.verdict === "warn" ? 1 : 2;
+  return r.verdict === "fail" ? 0 : r.verdict === "warn" ? 1 : r.verdict === "uncertain" ? 2 : 3;
+}
+function samplingLine(report) {
+  const s = report.sampling;
+  return `Sample: ${count2(s.measuredDocs)} of ${count2(s.docs)} documents measured (${s.method} ${s.setting}; ${count2(s.completeShards)} of ${count2(report.input.shards)} shards in full); sizes and shares are estimates with ${Math.round(s.confidence * 100)} % intervals (${Object.keys(s.methods).join(", ")}); ${s.everyDocument.join(", ")} over every document`;
 }
 function clean2(s) {
   return s.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u202A-\u202E\u2066-\u2069]/g, (ch) => `U+${ch.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`);

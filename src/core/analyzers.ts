@@ -11,6 +11,7 @@ import type { ReadOptions } from '../read/types.js';
 import { settingsIdOf } from '../results/cache.js';
 import type { CorpusResult } from '../results/corpus.js';
 import { joinShardIndexes, summarizeDuplicates } from '../results/duplicates.js';
+import { UNSAMPLED_LANGUAGE } from '../results/sample.js';
 import type { ScanAnalyzers, ScanSettings } from '../results/scan.js';
 import type { DocumentTokens } from '../results/tally.js';
 import { RESULT_SCHEMA } from '../results/types.js';
@@ -41,10 +42,6 @@ export class AnalyzerSetupError extends Error {
 
 /** Returns the analyzers of a policy, ready to scan shards. */
 export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzers> {
-  if (policy.sampling) {
-    // Judging on a sample without intervals would look like a full report: refuse rather than pretend.
-    throw new AnalyzerSetupError(`${policy.file}: sampling is not implemented in this version of sluice; remove \`sampling:\` to judge every document`);
-  }
   const measure = createMeasurer({ languages: policy.languages, detection: policy.detection });
   const read = readOptionsOf(policy);
 
@@ -87,6 +84,8 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
     baseline: baseline?.id ?? null,
     duplicates: dupOptions ?? null,
     eval: evalIndex?.id ?? null,
+    // Only when set, so results measured without sampling keep their cache key.
+    ...(policy.sampling ? { sampling: policy.sampling } : {}),
   });
 
   const analyzers: ScanAnalyzers = { measure };
@@ -107,7 +106,7 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
 
   return {
     settingsId,
-    scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId },
+    scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId, ...(policy.sampling ? { sampling: policy.sampling } : {}) },
     analyzers,
     async finish(corpus, newShards) {
       if (main) corpus.tokenizer = { label: main.label, hasUnknown: main.unknownTokenId !== null };
@@ -131,7 +130,9 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
       }
       if (dupOptions) {
         const findings = joinShardIndexes(corpus.shards, dupOptions, newShards);
-        corpus.duplicates = summarizeDuplicates(findings, policy.languages.map((l) => l.key));
+        const keys = policy.languages.map((l) => l.key);
+        // Under sampling, documents not measured have no language: the scan files them past `other`.
+        corpus.duplicates = summarizeDuplicates(findings, policy.sampling ? [...keys, 'other', UNSAMPLED_LANGUAGE] : keys);
         if (findings.againstExisting) corpus.duplicatesAgainstExisting = findings.againstExisting;
       }
       if (evalIndex && policy.rules.contamination) {

@@ -3,17 +3,31 @@
 import { relative } from 'node:path';
 import type { Policy } from '../policy/types.js';
 import type { CorpusResult } from '../results/corpus.js';
+import { describeSampling, scaleShardResult } from '../results/sample.js';
+import { mergeShardResults } from '../results/tally.js';
+import { SampledCorpus, intervalFrom } from './estimates.js';
 import { languageFigures, ratio } from './figures.js';
+import { CONFIDENCE, INTERVAL_METHODS, type IntervalMethod } from './intervals.js';
 import { judgeRules, overallVerdict } from './rules.js';
-import type { Report, ShardFigures } from './types.js';
+import type { LanguageFigures, LanguageIntervals, Report, SamplingFigures, ShardFigures } from './types.js';
 
 export { TOOL_VERSION } from '../version.js';
 import { TOOL_VERSION } from '../version.js';
 
 /** Returns the report of one policy over one corpus result. */
-export function buildReport(policy: Policy, corpus: CorpusResult, cwd: string = process.cwd()): Report {
+export function buildReport(policy: Policy, measured: CorpusResult, cwd: string = process.cwd()): Report {
+  // On a sample, every figure is computed from the shards' tallies scaled to whole-shard
+  // estimates (the stratified ratio estimator), and the rules judge their intervals.
+  const isSampled = measured.shards.some((s) => s.sample);
+  const sampled = isSampled ? new SampledCorpus(measured.shards) : undefined;
+  let corpus = measured;
+  if (isSampled) {
+    const shards = measured.shards.map(scaleShardResult);
+    corpus = { ...measured, shards, tally: mergeShardResults(shards, policy.languages.map((l) => l.key)) };
+  }
   const languages = languageFigures(policy, corpus);
-  const rules = judgeRules(policy, corpus, languages);
+  const rules = judgeRules(policy, corpus, languages, sampled);
+  if (sampled) addLanguageIntervals(policy, languages, sampled, corpus.tokenizer !== undefined);
   const verdict = overallVerdict(rules);
   const mixUnit = policy.rules.mix?.unit ?? (corpus.tokenizer ? 'tokens' : 'words');
 
@@ -41,6 +55,7 @@ export function buildReport(policy: Policy, corpus: CorpusResult, cwd: string = 
     if (s.subset !== undefined) fig.subset = s.subset;
     if (corpus.tokenizer) fig.tokens = Object.values(s.languages).reduce((n, t) => n + (t.tokens?.tokens ?? 0), 0);
     if (s.read.broken) fig.broken = s.read.broken;
+    if (s.sample) fig.measuredDocs = s.sample.docs;
     return fig;
   });
 
@@ -94,6 +109,15 @@ export function buildReport(policy: Policy, corpus: CorpusResult, cwd: string = 
     report.tokenizer = { main: corpus.tokenizer.label };
     if (corpus.baseline) {
       report.tokenizer.baseline = corpus.baseline.label;
+      if (sampled) {
+        const intervals: NonNullable<NonNullable<Report['tokenizer']>['mixUnderBaselineIntervals']> = {};
+        for (const [k, t] of Object.entries(corpus.tally.languages)) {
+          if (t.docs === 0) continue;
+          const iv = intervalFrom(sampled.share(k, 'baseline'), 'wilson-linearized');
+          if (iv) intervals[k] = iv;
+        }
+        report.tokenizer.mixUnderBaselineIntervals = intervals;
+      }
       const baseTotal = Object.values(corpus.tally.languages).reduce((n, t) => n + (t.baseline?.tokens ?? 0), 0);
       const under: Record<string, number> = {};
       const shift: Record<string, number> = {};
@@ -141,14 +165,118 @@ export function buildReport(policy: Policy, corpus: CorpusResult, cwd: string = 
       samples: corpus.shards.flatMap((s) => (s.contamination?.samples ?? []).map((x) => ({ path: s.path, line: x.line, detail: `${x.evalFile}:${x.evalLine}` }))),
     };
   }
+  if (isSampled) {
+    report.sampling = samplingFigures(policy, measured, report);
+    roundEstimates(report);
+  }
   return report;
+}
+
+// The methods a report's intervals use, in the order the README lists them.
+const METHOD_ORDER: readonly IntervalMethod[] = ['wilson', 'wilson-linearized', 'linearized-normal'];
+
+function samplingFigures(policy: Policy, measured: CorpusResult, report: Report): SamplingFigures {
+  const first = measured.shards.find((s) => s.sample)!.sample!;
+  const { method, setting } = policy.sampling ? describeSampling(policy.sampling) : first;
+  const used = new Set<IntervalMethod>();
+  for (const r of report.rules) if (r.interval) used.add(r.interval.method);
+  for (const f of Object.values(report.languages)) {
+    const iv = f.intervals;
+    if (!iv) continue;
+    for (const x of [...Object.values(iv.share), iv.purity, iv.impureDocs, iv.mismatchDocs, iv.fertility, iv.continuedWords]) if (x) used.add(x.method);
+  }
+  const everyDocument = ['input lines'];
+  if (measured.duplicates) everyDocument.push('duplicates');
+  if (measured.contamination) everyDocument.push('contamination');
+  return {
+    method,
+    setting,
+    measuredDocs: measured.shards.reduce((n, s) => n + (s.sample ? s.sample.docs : s.read.docs), 0),
+    docs: measured.tally.input.docs,
+    completeShards: measured.shards.filter((s) => !s.sample || s.sample.docs >= s.sample.of).length,
+    confidence: CONFIDENCE,
+    methods: Object.fromEntries(METHOD_ORDER.filter((m) => used.has(m)).map((m) => [m, INTERVAL_METHODS[m]])),
+    everyDocument,
+  };
+}
+
+function addLanguageIntervals(policy: Policy, languages: Record<string, LanguageFigures>, sampled: SampledCorpus, hasTokens: boolean): void {
+  for (const f of Object.values(languages)) {
+    const iv: LanguageIntervals = { share: {} };
+    for (const unit of ['docs', 'bytes', 'chars', 'words', ...(hasTokens ? (['tokens'] as const) : [])] as const) {
+      const x = intervalFrom(sampled.share(f.key, unit), unit === 'docs' ? 'wilson' : 'wilson-linearized');
+      if (x) iv.share[unit] = x;
+    }
+    const purity = intervalFrom(sampled.purity(f.key), 'wilson-linearized');
+    if (purity) iv.purity = purity;
+    if (policy.rules.script && f.purityDocs > 0) {
+      const x = intervalFrom(sampled.impure(f.key, policy.rules.script.minPurity), 'wilson');
+      if (x) iv.impureDocs = x;
+    }
+    if (f.declaredDocs) {
+      const x = intervalFrom(sampled.mismatch(f.key), 'wilson');
+      if (x) iv.mismatchDocs = x;
+    }
+    if (f.fertility) {
+      const fert = intervalFrom(sampled.perWord(f.key, 'fertility'), 'linearized-normal');
+      const cont = intervalFrom(sampled.perWord(f.key, 'continued'), 'wilson-linearized');
+      if (fert) iv.fertility = fert;
+      if (cont) iv.continuedWords = cont;
+    }
+    f.intervals = iv;
+  }
+}
+
+// Estimated counts are fractional; the report shows them as whole numbers (the shares keep full precision).
+function roundEstimates(report: Report): void {
+  const r = Math.round;
+  const t = report.totals;
+  t.docs = r(t.docs);
+  t.bytes = r(t.bytes);
+  t.chars = r(t.chars);
+  t.words = r(t.words);
+  if (t.tokens !== undefined) t.tokens = r(t.tokens);
+  t.estimated = true;
+  for (const f of Object.values(report.languages)) {
+    f.docs = r(f.docs);
+    f.bytes = r(f.bytes);
+    f.chars = r(f.chars);
+    f.words = r(f.words);
+    if (f.tokens !== undefined) f.tokens = r(f.tokens);
+    f.purityDocs = r(f.purityDocs);
+    if (f.impureDocs !== undefined) f.impureDocs = r(f.impureDocs);
+    if (f.declaredDocs !== undefined) f.declaredDocs = r(f.declaredDocs);
+    if (f.mismatchDocs !== undefined) f.mismatchDocs = r(f.mismatchDocs);
+    if (f.detectedAs) f.detectedAs = Object.fromEntries(Object.entries(f.detectedAs).map(([k, n]) => [k, r(n)]));
+    for (const tf of [f.fertility, f.baseline]) if (tf) tf.tokens = r(tf.tokens);
+  }
+  for (const k of Object.keys(report.scripts)) report.scripts[k] = r(report.scripts[k]!);
+  for (const s of Object.values(report.subsets)) {
+    s.docs = r(s.docs);
+    s.bytes = r(s.bytes);
+    s.words = r(s.words);
+    if (s.tokens !== undefined) s.tokens = r(s.tokens);
+    for (const k of Object.keys(s.languages)) s.languages[k] = r(s.languages[k]!);
+  }
+  for (const s of report.shards) {
+    for (const k of Object.keys(s.languages)) s.languages[k] = r(s.languages[k]!);
+    if (s.tokens !== undefined) s.tokens = r(s.tokens);
+  }
 }
 
 function headlineOf(verdict: Report['verdict'], rules: Report['rules']): string {
   const failing = rules.filter((r) => r.verdict === 'fail');
   const warning = rules.filter((r) => r.verdict === 'warn');
+  const uncertain = rules.filter((r) => r.verdict === 'uncertain');
   const names = (list: typeof rules): string => [...new Set(list.map((r) => (r.scope === 'corpus' ? r.rule : `${r.rule} (${r.scope.replace(/^language:/, '')})`)))].join(', ');
-  if (verdict === 'fail') return `FAIL: ${failing.length} rule${failing.length === 1 ? '' : 's'} at error severity failed: ${names(failing)}`;
-  if (verdict === 'warn') return `PASS with warnings: ${names(warning)}`;
+  // Only a sample has uncertain rules; without one the headline reads as it always has.
+  const unsure = uncertain.length
+    ? `${uncertain.length} rule${uncertain.length === 1 ? '' : 's'} uncertain on the sample (a larger sample settles ${uncertain.length === 1 ? 'it' : 'them'}): ${names(uncertain)}`
+    : '';
+  if (verdict === 'fail') return `FAIL: ${failing.length} rule${failing.length === 1 ? '' : 's'} at error severity failed: ${names(failing)}${unsure ? `; ${unsure}` : ''}`;
+  if (verdict === 'warn') {
+    if (warning.length === 0) return `PASS with warnings: ${unsure}`;
+    return `PASS with warnings: ${names(warning)}${unsure ? `; ${unsure}` : ''}`;
+  }
   return `PASS: all ${rules.length} judged rules hold`;
 }

@@ -2,8 +2,48 @@
 // comment) renders. No view computes a figure; they all come from here.
 import type { MixUnit, RuleName, Severity } from '../policy/types.js';
 import type { Rejection, SkippedFile } from '../read/types.js';
+import type { Interval, IntervalMethod } from './intervals.js';
+
+export type { Interval, IntervalMethod } from './intervals.js';
 
 export type Verdict = 'pass' | 'warn' | 'fail';
+
+/** A rule's verdict: `uncertain` when, on a sample, the figure's confidence interval straddles the limit (it does not block the merge). */
+export type RuleVerdict = Verdict | 'uncertain';
+
+/** A sampling setting as the policy spells it, ready to paste. */
+export type SamplingSetting = { 'docs-per-shard': number } | { fraction: number };
+
+/** Confidence intervals of a language's figures, present only when the report is made from a sample. */
+export interface LanguageIntervals {
+  /** Of each share in `share`. */
+  share: Partial<Record<MixUnit, Interval>>;
+  purity?: Interval;
+  /** Of impureDocs ÷ purityDocs. */
+  impureDocs?: Interval;
+  /** Of mismatchDocs ÷ declaredDocs. */
+  mismatchDocs?: Interval;
+  /** Of fertility.fertility and fertility.continuedWords, under the main tokenizer. */
+  fertility?: Interval;
+  continuedWords?: Interval;
+}
+
+/** How a sampled report was made; absent when every document was measured. */
+export interface SamplingFigures {
+  method: 'fraction' | 'docs-per-shard';
+  /** The policy's setting. */
+  setting: number;
+  /** Documents measured, of all documents read. */
+  measuredDocs: number;
+  docs: number;
+  /** Shards whose every document was measured. */
+  completeShards: number;
+  confidence: number;
+  /** Each interval method used, spelled out. */
+  methods: Partial<Record<IntervalMethod, string>>;
+  /** Figures computed over every document, not the sample (so exact, without intervals). */
+  everyDocument: string[];
+}
 
 /** Shares of the corpus, each over all documents of the corpus (other and und included). */
 export interface Shares {
@@ -53,6 +93,8 @@ export interface LanguageFigures {
   detectedAs?: Record<string, number>;
   fertility?: TokenFigures;
   baseline?: TokenFigures;
+  /** On a sample: the counts above are estimates for the whole corpus, and these are the intervals of its shares and rates. */
+  intervals?: LanguageIntervals;
 }
 
 export interface Location {
@@ -72,9 +114,13 @@ export interface RuleOutcome {
   /** How to read measured and limit: share (0..1), count, ratio. */
   unit: 'share' | 'count' | 'ratio' | 'points';
   severity: Severity;
-  verdict: Verdict;
+  verdict: RuleVerdict;
   message: string;
   locations: Location[];
+  /** On a sample: the confidence interval of `measured`. */
+  interval?: Interval;
+  /** When `uncertain`: the measured documents at which the interval would clear the limit by half the estimate's distance to it if the estimate stayed put, and the policy setting that gives about that many (null: only measuring every document settles it). */
+  settle?: { docs: number; sampling: SamplingSetting | null };
 }
 
 export interface ShardFigures {
@@ -91,6 +137,8 @@ export interface ShardFigures {
   broken?: { afterLine: number; message: string };
   rejections: Rejection[];
   fromCache: boolean;
+  /** On a sample: documents measured in this shard (its languages and tokens are estimates scaled from them). */
+  measuredDocs?: number;
 }
 
 export interface DuplicateCluster {
@@ -131,7 +179,8 @@ export interface Report {
   /** One line saying the verdict and why. */
   headline: string;
   mixUnit: MixUnit;
-  totals: { docs: number; bytes: number; chars: number; words: number; tokens?: number };
+  /** Sizes of the corpus; on a sample, all but `docs` are estimates (`estimated` is then set). */
+  totals: { docs: number; bytes: number; chars: number; words: number; tokens?: number; estimated?: true };
   languages: Record<string, LanguageFigures>;
   scripts: Record<string, number>;
   subsets: Record<string, { docs: number; bytes: number; words: number; tokens?: number; languages: Record<string, number> }>;
@@ -147,7 +196,9 @@ export interface Report {
     broken: Array<{ path: string; afterLine: number; message: string }>;
   };
   shards: ShardFigures[];
-  tokenizer?: { main: string; baseline?: string; mixUnderBaseline?: Record<string, number>; mixShiftPoints?: Record<string, number> };
+  tokenizer?: { main: string; baseline?: string; mixUnderBaseline?: Record<string, number>; mixShiftPoints?: Record<string, number>; mixUnderBaselineIntervals?: Record<string, Interval> };
+  /** Present when the policy samples: what was measured and how the intervals are made. */
+  sampling?: SamplingFigures;
   duplicates?: DuplicateFigures;
   contamination?: ContaminationFigures;
   /** Not part of any judgement; left out when reports are compared. */

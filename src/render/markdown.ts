@@ -14,7 +14,7 @@ export interface MarkdownOptions {
   maxShardRows?: number;
 }
 
-const ICON: Record<RuleOutcome['verdict'], string> = { pass: '✅', warn: '⚠️', fail: '❌' };
+const ICON: Record<RuleOutcome['verdict'], string> = { pass: '✅', warn: '⚠️', fail: '❌', uncertain: '❔' };
 
 /** Returns the report as GitHub-flavoured Markdown. */
 export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): string {
@@ -22,7 +22,7 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
   const loc = (path: string, line?: number): string => {
     const text = codePath(line === undefined ? path : `${path}:${line}`);
     if (!opts.linkBase) return text;
-    const href = `${opts.linkBase}/${path.split('/').map(encodeURIComponent).join('/')}${line !== undefined ? `#L${line}` : ''}`;
+    const href = `${opts.linkBase}/${path.split('/').map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join('/')}${line !== undefined ? `#L${line}` : ''}`;
     return `[${text}](${href})`;
   };
 
@@ -30,19 +30,33 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
   out.push('');
   out.push(`**${esc(report.headline)}**`);
   out.push('');
+  const est = report.totals.estimated ? '≈' : '';
   out.push(
-    `${count(report.totals.docs)} documents in ${count(report.input.shards)} shards, ${bytes(report.totals.bytes)} of text` +
-      (report.totals.tokens !== undefined ? `, ${count(report.totals.tokens)} tokens (${esc(report.tokenizer?.main ?? '')})` : '') +
+    `${count(report.totals.docs)} documents in ${count(report.input.shards)} shards, ${est}${bytes(report.totals.bytes)} of text` +
+      (report.totals.tokens !== undefined ? `, ${est}${count(report.totals.tokens)} tokens (${esc(report.tokenizer?.main ?? '')})` : '') +
       `; policy ${codePath(report.policy.file)}.`,
   );
   out.push('');
+  if (report.sampling) {
+    const s = report.sampling;
+    out.push(
+      `**Sampled:** ${count(s.measuredDocs)} of ${count(s.docs)} documents measured (\`${s.method}: ${s.setting}\`; ${count(s.completeShards)} of ${count(report.input.shards)} shards in full). ` +
+        `Sizes and shares are estimates; a rule fails only when its whole ${Math.round(s.confidence * 100)} % interval is past the limit, and is ❔ uncertain when the interval straddles it. ` +
+        `Computed over every document: ${s.everyDocument.join(', ')}.`,
+    );
+    out.push('');
+    for (const [m, text] of Object.entries(s.methods)) out.push(`- \`${m}\`: ${esc(text)}`);
+    out.push('');
+  }
 
   const notPassing = report.rules.filter((r) => r.verdict !== 'pass');
   const ordered = [...notPassing, ...report.rules.filter((r) => r.verdict === 'pass')];
-  out.push('| | rule | scope | measured | limit | finding |');
-  out.push('|---|---|---|---:|---:|---|');
+  const withCi = report.sampling !== undefined;
+  out.push(`| | rule | scope | measured |${withCi ? ' 95 % interval |' : ''} limit | finding |`);
+  out.push(`|---|---|---|---:|${withCi ? '---:|' : ''}---:|---|`);
   for (const r of ordered) {
-    out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === 'warn' ? ' (warn)' : ''} | ${esc(r.scope.replace(/^language:/, ''))} | ${inUnit(r.measured, r.unit)} | ${limitOf(r)} | ${esc(r.message)} |`);
+    const ci = withCi ? ` ${r.interval ? `${inUnit(r.interval.low, r.unit)} – ${inUnit(r.interval.high, r.unit)}` : 'exact'} |` : '';
+    out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === 'warn' ? ' (warn)' : ''} | ${esc(r.scope.replace(/^language:/, ''))} | ${inUnit(r.measured, r.unit)} |${ci} ${limitOf(r)} | ${esc(r.message)} |`);
   }
   out.push('');
   for (const r of notPassing) {
@@ -60,13 +74,13 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
   const unit = report.mixUnit;
   out.push(`<details open><summary>Language mix (by ${unit})</summary>`);
   out.push('');
-  out.push(`| language | target | share of ${unit} | | docs | words${report.totals.tokens !== undefined ? ' | tokens' : ''} | purity |`);
-  out.push(`|---|---:|---:|---|---:|---:|${report.totals.tokens !== undefined ? '---:|' : ''}---:|`);
+  out.push(`| language | target | share of ${unit} |${withCi ? ' 95 % interval |' : ''} | docs | words${report.totals.tokens !== undefined ? ' | tokens' : ''} | purity |`);
+  out.push(`|---|---:|---:|${withCi ? '---:|' : ''}---|---:|---:|${report.totals.tokens !== undefined ? '---:|' : ''}---:|`);
   for (const f of Object.values(report.languages)) {
     if (f.docs === 0 && f.target === undefined) continue;
     const share = f.share[unit] ?? 0;
     out.push(
-      `| ${esc(f.key)} | ${percent(f.target)} | ${percent(share)} | ${bar(share, 16)} | ${count(f.docs)} | ${count(f.words)}${report.totals.tokens !== undefined ? ` | ${count(f.tokens ?? 0)}` : ''} | ${percent(f.purity)} |`,
+      `| ${esc(f.key)} | ${percent(f.target)} | ${percent(share)} |${withCi ? ` ${f.intervals?.share[unit] ? `${percent(f.intervals.share[unit]!.low)} – ${percent(f.intervals.share[unit]!.high)}` : '–'} |` : ''} ${bar(share, 16)} | ${count(f.docs)} | ${count(f.words)}${report.totals.tokens !== undefined ? ` | ${count(f.tokens ?? 0)}` : ''} | ${percent(f.purity)} |`,
     );
   }
   out.push('');

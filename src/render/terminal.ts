@@ -16,19 +16,21 @@ type Paint = (s: string) => string;
 export function renderTerminal(report: Report, opts: TerminalOptions): string {
   const c = (code: number): Paint => (s) => (opts.color ? `\u001b[${code}m${s}\u001b[0m` : s);
   const red = c(31), green = c(32), yellow = c(33), dim = c(2), bold = c(1);
-  const paint: Record<RuleOutcome['verdict'], Paint> = { pass: green, warn: yellow, fail: red };
-  const mark: Record<RuleOutcome['verdict'], string> = { pass: 'ok  ', warn: 'WARN', fail: 'FAIL' };
+  const paint: Record<RuleOutcome['verdict'], Paint> = { pass: green, warn: yellow, fail: red, uncertain: yellow };
+  const mark: Record<RuleOutcome['verdict'], string> = { pass: 'ok  ', warn: 'WARN', fail: 'FAIL', uncertain: '??  ' };
+  const est = report.totals.estimated ? '≈' : '';
   const lines: string[] = [];
 
   lines.push(`${bold(`sluice · ${clean(report.policy.name)}`)}  ${paint[report.verdict](bold(report.verdict.toUpperCase()))}`);
   lines.push(paint[report.verdict](report.headline));
   lines.push(
     dim(
-      `${count(report.totals.docs)} documents, ${count(report.input.shards)} shards, ${bytes(report.totals.bytes)} of text` +
-        (report.totals.tokens !== undefined ? `, ${count(report.totals.tokens)} tokens (${report.tokenizer?.main})` : '') +
+      `${count(report.totals.docs)} documents, ${count(report.input.shards)} shards, ${est}${bytes(report.totals.bytes)} of text` +
+        (report.totals.tokens !== undefined ? `, ${est}${count(report.totals.tokens)} tokens (${report.tokenizer?.main})` : '') +
         ` · policy ${report.policy.file}`,
     ),
   );
+  if (report.sampling) lines.push(dim(samplingLine(report)));
   lines.push('');
 
   const maxLoc = opts.maxLocations ?? 5;
@@ -47,13 +49,14 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
 
   const unit = report.mixUnit;
   const hasTokens = report.totals.tokens !== undefined;
-  lines.push(bold(`Language mix by ${unit}`));
+  lines.push(bold(`Language mix by ${unit}`) + (report.sampling ? dim(`  (estimated; share ${Math.round(report.sampling.confidence * 100)} % interval after it)`) : ''));
   lines.push(dim(`  ${'language'.padEnd(9)} ${'target'.padStart(7)} ${'share'.padStart(7)}  ${''.padEnd(20)} ${'docs'.padStart(8)} ${'words'.padStart(10)}${hasTokens ? ` ${'tokens'.padStart(10)}` : ''} ${'purity'.padStart(7)}`));
   for (const f of Object.values(report.languages)) {
     if (f.docs === 0 && f.target === undefined) continue;
     const share = f.share[unit] ?? 0;
     lines.push(
-      `  ${clean(f.key).padEnd(9)} ${percent(f.target).padStart(7)} ${percent(share).padStart(7)}  ${bar(share, 20).padEnd(20)} ${count(f.docs).padStart(8)} ${count(f.words).padStart(10)}${hasTokens ? ` ${count(f.tokens ?? 0).padStart(10)}` : ''} ${percent(f.purity).padStart(7)}`,
+      `  ${clean(f.key).padEnd(9)} ${percent(f.target).padStart(7)} ${percent(share).padStart(7)}  ${bar(share, 20).padEnd(20)} ${count(f.docs).padStart(8)} ${count(f.words).padStart(10)}${hasTokens ? ` ${count(f.tokens ?? 0).padStart(10)}` : ''} ${percent(f.purity).padStart(7)}` +
+        (f.intervals?.share[unit] ? dim(`  ${percent(f.intervals.share[unit]!.low)} – ${percent(f.intervals.share[unit]!.high)}`) : ''),
     );
   }
 
@@ -112,7 +115,16 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
 }
 
 function rank(r: RuleOutcome): number {
-  return r.verdict === 'fail' ? 0 : r.verdict === 'warn' ? 1 : 2;
+  return r.verdict === 'fail' ? 0 : r.verdict === 'warn' ? 1 : r.verdict === 'uncertain' ? 2 : 3;
+}
+
+/** Returns the line saying what a sampled report measured and how its intervals are made. */
+export function samplingLine(report: Report): string {
+  const s = report.sampling!;
+  return (
+    `Sample: ${count(s.measuredDocs)} of ${count(s.docs)} documents measured (${s.method} ${s.setting}; ${count(s.completeShards)} of ${count(report.input.shards)} shards in full); ` +
+    `sizes and shares are estimates with ${Math.round(s.confidence * 100)} % intervals (${Object.keys(s.methods).join(', ')}); ${s.everyDocument.join(', ')} over every document`
+  );
 }
 
 // Data and file names may hold terminal escapes or bidi controls; show them as code points.

@@ -5,8 +5,10 @@ import { createHash } from 'node:crypto';
 import { createReadStream } from 'node:fs';
 import { PassThrough, type Readable } from 'node:stream';
 import type { DocumentMeasure } from '../measure/types.js';
+import type { SamplingSpec } from '../policy/types.js';
 import { readShard } from '../read/index.js';
-import type { ReadOptions, ShardRef } from '../read/types.js';
+import type { RawDocument, ReadOptions, ShardRef } from '../read/types.js';
+import { describeSampling, documentHash, fractionCutoff, HASH_SPACE, MomentTally, SmallestHashes } from './sample.js';
 import { ShardTally, type DocumentTokens } from './tally.js';
 import { RESULT_SCHEMA, SAMPLES_PER_KIND, type ShardResult } from './types.js';
 
@@ -30,6 +32,8 @@ export interface ScanSettings {
   /** Policy language keys, in policy order (the duplicate index stores their position). */
   languageKeys: readonly string[];
   settingsId: string;
+  /** Measure only a deterministic sample of documents (see sample.ts); duplicates and contamination still see every document. */
+  sampling?: SamplingSpec;
 }
 
 /** Returns the sha256 (hex) of a shard's raw bytes. */
@@ -63,15 +67,50 @@ export async function scanShard(ref: ShardRef, settings: ScanSettings, analyzers
     },
   };
 
+  // Under sampling, a document is measured when its text hash is at most the cutoff. For
+  // docs-per-shard the cutoff is the N-th smallest hash, found by a first, reading-only pass.
+  const sampling = settings.sampling;
+  let cutoff = HASH_SPACE;
+  if (sampling) {
+    if ('fraction' in sampling) cutoff = fractionCutoff(sampling.fraction);
+    else {
+      const smallest = new SmallestHashes(sampling.docsPerShard);
+      await readShard(ref, settings.read, (doc) => smallest.add(documentHash(doc.text)));
+      cutoff = smallest.cutoff();
+    }
+  }
+  const moments = sampling ? new MomentTally() : undefined;
+  // Duplicate-index language of a document not measured: past `other`, named UNSAMPLED_LANGUAGE by the summary.
+  const unsampledIndex = otherIndex + 1;
+  let measured = 0;
+  let offered = 0;
+  // While nothing falls under a fraction's cutoff, the smallest-hash document so far, so a small shard still has one measured.
+  let fallback: { doc: RawDocument; hash: number } | undefined;
+
+  const measureOne = (doc: RawDocument): DocumentMeasure => {
+    const m = analyzers.measure(doc);
+    const tokens = analyzers.tokens?.(doc.text);
+    tally.add(doc.line, m, tokens);
+    moments?.add(m, tokens);
+    measured += 1;
+    return m;
+  };
+
   let ordinal = 0;
   let failure: { line: number; message: string } | undefined;
   const account = await readShard(tapped, settings.read, (doc) => {
     if (failure) return;
     try {
-      const m = analyzers.measure(doc);
-      const tokens = analyzers.tokens?.(doc.text);
-      tally.add(doc.line, m, tokens);
-      dup?.add({ ordinal, line: doc.line, language: languageIndex.get(m.language) ?? otherIndex, text: doc.text });
+      let language = unsampledIndex;
+      const hash = sampling ? documentHash(doc.text) : 0;
+      if (!sampling || hash <= cutoff) {
+        const m = measureOne(doc);
+        language = languageIndex.get(m.language) ?? otherIndex;
+        fallback = undefined;
+      } else if (measured === 0 && (!fallback || hash < fallback.hash)) {
+        fallback = { doc, hash };
+      }
+      dup?.add({ ordinal, line: doc.line, language, text: doc.text });
       if (contamination) {
         const hit = analyzers.contamination!(doc.text);
         if (hit) {
@@ -82,10 +121,20 @@ export async function scanShard(ref: ShardRef, settings: ScanSettings, analyzers
         }
       }
       ordinal += 1;
+      offered += 1;
     } catch (err) {
       failure = { line: doc.line, message: `measuring failed at line ${doc.line}: ${(err as Error).message}` };
     }
   });
+  let usedFallback = false;
+  if (sampling && measured === 0 && fallback && !failure) {
+    try {
+      measureOne(fallback.doc);
+      usedFallback = true;
+    } catch (err) {
+      failure = { line: fallback.doc.line, message: `measuring failed at line ${fallback.doc.line}: ${(err as Error).message}` };
+    }
+  }
   if (failure && !account.broken) account.broken = { afterLine: failure.line - 1, message: failure.message };
 
   const result: ShardResult = {
@@ -109,5 +158,9 @@ export async function scanShard(ref: ShardRef, settings: ScanSettings, analyzers
   if (ref.subset !== undefined) result.subset = ref.subset;
   if (dup) result.duplicateIndex = dup.finish();
   if (contamination) result.contamination = contamination;
+  if (sampling && moments) {
+    result.sample = { ...describeSampling(sampling), docs: measured, of: offered, cutoff, moments: moments.moments };
+    if (usedFallback) result.sample.fallback = true;
+  }
   return result;
 }

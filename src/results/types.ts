@@ -80,15 +80,53 @@ export interface ShardResult {
   duplicateIndex?: Uint8Array;
   /** Training documents that overlap an evaluation item. */
   contamination?: { docs: number; samples: Array<{ line: number; evalFile: string; evalLine: number }> };
+  /** Present when the policy samples: which documents were measured, and the sums the judge's intervals need. Without it every document was measured. */
+  sample?: ShardSample;
   /** Wall time spent measuring, for progress and benchmarks; not part of any judgement. */
   elapsedMs: number;
 }
 
-export const ANOMALY_KINDS: readonly AnomalyKind[] = [
-  'replacement-char',
-  'control-chars',
-  'bidi-controls',
-  'zero-width',
-  'private-use',
-  'mojibake',
-];
+/**
+ * Second-order sums over a shard's measured documents, per language key (as in `languages`), for
+ * the variance of ratio estimates. Each is Σ over documents of the product named; the purity
+ * sums (`expected2`, `scriptChars2`, `expectedScriptChars`) are keyed by the purity basis.
+ */
+export interface LanguageMoments {
+  bytes2: number;
+  chars2: number;
+  words2: number;
+  tokens2: number;
+  baselineTokens2: number;
+  /** Σ wordTokens², Σ wordTokens·words: fertility. */
+  wordTokens2: number;
+  wordTokensWords: number;
+  /** Σ continuedWords², Σ continuedWords·words: continued words. */
+  continued2: number;
+  continuedWords: number;
+  /** Σ baseline wordTokens², Σ wordTokens·baseline wordTokens: fertility against the baseline. */
+  baselineWordTokens2: number;
+  wordTokensBaseline: number;
+  /** Σ expected-script chars², Σ script chars², Σ expected·script chars: purity. */
+  expected2: number;
+  scriptChars2: number;
+  expectedScriptChars: number;
+}
+
+/** How a sampled shard was measured. Tallies (languages, scripts, anomalies, declared, samples) cover the measured documents only; `read` still covers every line. */
+export interface ShardSample {
+  method: 'fraction' | 'docs-per-shard';
+  /** The policy's setting: the fraction, or documents per shard. */
+  setting: number;
+  /** Documents measured. */
+  docs: number;
+  /** Documents the shard handed on (before a measuring failure, if one stopped it): the stratum size. */
+  of: number;
+  /** A document was measured when its text hash was at most this (see sample.ts). */
+  cutoff: number;
+  /** True when no document fell under the cutoff and the one with the smallest hash was measured instead, so every shard with documents has one measured. */
+  fallback?: true;
+  moments: Record<string, LanguageMoments>;
+}
+
+/** Every anomaly kind, in the order of the bit masks in `anomalyMasks`. */
+export { ANOMALY_KINDS } from '../measure/encoding.js';

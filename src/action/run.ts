@@ -1,0 +1,227 @@
+// One run of the Action: judge each policy (against base on a pull request, the
+// whole corpus otherwise), write the reports, the job summary, the PR comment and
+// the file annotations, keep the shard cache, and say whether the step fails.
+import { createHash } from 'node:crypto';
+import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { ConfigError, loadPolicyOrThrow, measureCorpus, type CheckOptions } from '../core/check.js';
+import { baseMemoKey, compareWithBase, git, gitTopLevel, resolveCommit, rootInRepo, workingTreeKeys, writeBaseMemo, type Comparison } from '../core/compare.js';
+import { buildReport } from '../judge/report.js';
+import type { Report, Verdict } from '../judge/types.js';
+import type { Policy } from '../policy/types.js';
+import { renderJson } from '../render/json.js';
+import { contentIdOf } from '../results/scan.js';
+import { TOOL_VERSION } from '../version.js';
+import { annotationsOf, capAnnotations, type Annotation } from './annotations.js';
+import { pruneResults, restoreResults, saveResults } from './cache.js';
+import { upsertComment } from './comment.js';
+import type { ActionSettings } from './inputs.js';
+import { commentBody, commentMarker, renderActionMarkdown, summaryBody } from './markdown.js';
+import type { ActionIO } from './runner.js';
+import { writeSummary } from './summary.js';
+
+/** Bump when the layout of the saved cache changes, so old entries are not restored. */
+const CACHE_LAYOUT = 1;
+
+export interface ActionOutcome {
+  verdict: Verdict;
+  /** The message the step fails with, or null when it passes under `fail-on`. */
+  failure: string | null;
+  /** Paths of the JSON reports, one per policy. */
+  reports: string[];
+}
+
+interface Judged {
+  policy: Policy;
+  report: Report;
+  comparison: Comparison | null;
+  /** Policy root relative to the repository top (for annotations and links). */
+  rootRel: string;
+  baseBlobReads: number;
+}
+
+const RANK: Record<Verdict, number> = { pass: 0, warn: 1, fail: 2 };
+
+/** Returns a file-name-safe form of a policy name. */
+function fileNameOf(name: string): string {
+  return name.replace(/[^A-Za-z0-9._-]/g, '_') || 'policy';
+}
+
+function ruleNames(reports: Report[], verdict: Verdict): string {
+  const names = new Set<string>();
+  for (const r of reports) for (const o of r.rules) if (o.verdict === verdict) names.add(o.scope === 'corpus' ? o.rule : `${o.rule}:${o.scope.replace(/^language:/, '')}`);
+  return [...names].join(',');
+}
+
+/** Returns the failure message under `fail-on`, or null. */
+export function failureOf(failOn: ActionSettings['failOn'], reports: Report[]): string | null {
+  if (failOn === 'never') return null;
+  const failing = reports.filter((r) => r.verdict === 'fail' || (failOn === 'warn' && r.verdict === 'warn'));
+  if (failing.length === 0) return null;
+  return failing.map((r) => `sluice ${r.policy.name}: ${r.headline}`).join('\n');
+}
+
+/** Returns the outcome of the run; throws ConfigError when a policy cannot be judged. */
+export async function runAction(s: ActionSettings, io: ActionIO): Promise<ActionOutcome> {
+  const spent = { error: 0, warning: 0 };
+  const warn = (m: string): void => {
+    spent.warning += 1;
+    io.warning(m);
+  };
+  const policies: Policy[] = [];
+  for (const file of s.policies) policies.push(await loadPolicyOrThrow(file, undefined, (m) => warn(`sluice: ${m}`)));
+
+  const top = await gitTopLevel(s.workspace);
+  const pr = s.pullRequest;
+  const baseRef = s.base ?? pr?.baseSha ?? null;
+  let base: { commit: string; label: string } | null = null;
+  if (baseRef !== null) {
+    if (!top) throw new ConfigError(`a base comparison needs a git checkout, and ${s.workspace} is not in a git work tree`);
+    const commit = await resolveCommit(top, baseRef);
+    base = { commit, label: s.base ?? pr?.baseRef ?? commit.slice(0, 7) };
+  }
+  if (s.eventName === 'pull_request_target' && top && pr) {
+    const head = (await git(top, ['rev-parse', 'HEAD']).catch(() => '')).trim();
+    if (head === pr.headSha) {
+      warn('sluice: this pull_request_target run has the pull request\'s head checked out: its files run with a write token and the repository\'s secrets. Use the pull_request event (see the Action\'s documentation).');
+    }
+  }
+
+  // The cache directory: kept between runs when asked, else a scratch one so base and head still share results within the run.
+  const policyHash = createHash('sha256').update(TOOL_VERSION);
+  for (const p of policies) policyHash.update(p.file).update('\0').update(await readFile(p.file));
+  const keyPrefix = `sluice-results-${CACHE_LAYOUT}-${s.runnerOs}-`;
+  const cacheKey = `${keyPrefix}${policyHash.digest('hex').slice(0, 16)}-${s.sha || 'local'}`;
+  const cacheDir = s.cache ? s.cacheDir : await mkdtemp(path.join(tmpdir(), 'sluice-results-'));
+  await mkdir(cacheDir, { recursive: true });
+  // A limit changed in the policy does not change what is measured: fall back to any entry (results carry their own settings id).
+  const restored = s.cache ? await restoreResults(cacheDir, cacheKey, [cacheKey.slice(0, cacheKey.lastIndexOf('-') + 1), keyPrefix], io.info, warn) : undefined;
+
+  const usedKeys = new Set<string>();
+  const usedSettings = new Set<string>();
+  const check: CheckOptions = { policies: [], cacheDir, cwd: s.workspace, onWarning: (m) => warn(`sluice: ${m}`) };
+  const judged: Judged[] = [];
+  await mkdir(s.reportDir, { recursive: true });
+  // One file stem per policy; two policies with one name get -2, -3, ...
+  const seen = new Map<string, number>();
+  const stems = policies.map((p) => {
+    const n = (seen.get(p.name) ?? 0) + 1;
+    seen.set(p.name, n);
+    return path.join(s.reportDir, `${fileNameOf(p.name)}${n > 1 ? `-${n}` : ''}`);
+  });
+  for (const [i, policy] of policies.entries()) {
+    const stem = stems[i]!;
+    judged.push(
+      await io.group(`sluice: ${policy.name}`, async () => {
+        let j: Judged;
+        if (base && top) {
+          const r = await compareWithBase(policy, { check, top, baseCommit: base.commit, baseLabel: base.label, onKey: (k) => usedKeys.add(k) });
+          for (const side of [r.head, r.base]) for (const sh of side?.corpus?.shards ?? []) usedSettings.add(sh.settingsId);
+          j = { policy, report: r.head.report, comparison: r.comparison, rootRel: await rootInRepo(top, policy), baseBlobReads: r.baseBlobReads };
+          await writeFile(`${stem}.base.json`, r.base ? renderJson(r.base.report) : 'null\n');
+          await writeFile(`${stem}.comparison.json`, `${JSON.stringify(r.comparison, null, 2)}\n`);
+        } else {
+          const rootRel = top ? await rootInRepo(top, policy).catch(() => null) : null;
+          const keyOf = top && rootRel !== null ? await workingTreeKeys(top, rootRel) : contentIdOf;
+          const corpus = await measureCorpus(policy, {
+            ...check,
+            contentKey: async (ref) => {
+              const k = await keyOf(ref);
+              usedKeys.add(k);
+              return k;
+            },
+          });
+          for (const sh of corpus.shards) usedSettings.add(sh.settingsId);
+          const settingsId = corpus.shards[0]?.settingsId;
+          const report = buildReport(policy, corpus, s.workspace);
+          // A judged commit is remembered, so pull requests based on it need not judge it again.
+          if (top && settingsId && s.sha) {
+            const key = await baseMemoKey(policy, settingsId, await resolveCommit(top, 'HEAD'));
+            usedKeys.add(key);
+            await writeBaseMemo(cacheDir, settingsId, key, report, corpus);
+          }
+          j = { policy, report, comparison: null, rootRel: rootRel ?? path.relative(s.workspace, policy.root).split(path.sep).join('/'), baseBlobReads: 0 };
+        }
+        const t = j.report.timing;
+        io.info(`${j.report.headline}`);
+        io.info(`measured ${t.cacheMisses} of ${j.report.input.shards} shards, ${t.cacheHits} from cache${j.comparison ? `; ${j.baseBlobReads} base shards read from git` : ''}`);
+        return j;
+      }),
+    );
+  }
+
+  // Reports on disk: one JSON per policy (the output), plus its Markdown.
+  const reportPaths: string[] = [];
+  const markdowns: string[] = [];
+  const annotations: Annotation[] = [];
+  let commentWarned = false;
+  for (const [i, j] of judged.entries()) {
+    const stem = stems[i]!;
+    await writeFile(`${stem}.json`, renderJson(j.report));
+    reportPaths.push(`${stem}.json`);
+
+    const headSha = pr?.headSha || s.sha;
+    const linkBase =
+      s.repository && headSha
+        ? `${s.serverUrl}/${s.repository.owner}/${s.repository.repo}/blob/${headSha}${j.rootRel ? `/${j.rootRel.split('/').map(encodeURIComponent).join('/')}` : ''}`
+        : undefined;
+    const markdown = renderActionMarkdown(j.report, j.comparison, linkBase ? { linkBase } : {});
+    await writeFile(`${stem}.md`, markdown);
+    markdowns.push(markdown);
+
+    const changed = new Set((j.comparison?.changes ?? []).filter((c) => c.status !== 'deleted').map((c) => c.path));
+    annotations.push(...annotationsOf(j.report, j.rootRel, changed));
+
+    if (pr && s.repository && s.comment !== 'never') {
+      const c = j.comparison;
+      const create =
+        s.comment === 'always' ||
+        (s.comment === 'on-failure' && j.report.verdict === 'fail') ||
+        (s.comment === 'on-change' && (j.report.verdict !== 'pass' || (c !== null && (c.changes.length > 0 || c.flipped.length > 0))));
+      if (!s.token) {
+        if (!commentWarned) warn('sluice: no `github-token`: the pull request comment is skipped; the verdict and the job summary are unaffected');
+        commentWarned = true;
+        continue;
+      }
+      const outcome = await upsertComment({ apiUrl: s.apiUrl, token: s.token, owner: s.repository.owner, repo: s.repository.repo, issue: pr.number }, commentMarker(j.policy.name), commentBody(j.policy.name, markdown), create);
+      if (outcome.action === 'failed') {
+        if (!commentWarned) {
+          const why = outcome.status === 403 || outcome.status === 404
+            ? 'the token may not write to pull requests (a pull request from a fork gets a read-only token; see the permissions in the documentation)'
+            : 'the GitHub API refused';
+          warn(`sluice: could not comment on pull request #${pr.number} (${outcome.status ?? 'no response'}: ${outcome.message}): ${why}. The verdict and the job summary are unaffected.`);
+        }
+        commentWarned = true;
+      } else if (outcome.action === 'not-needed') io.info(`sluice ${j.policy.name}: no comment needed (comment: ${s.comment})`);
+      else io.info(`sluice ${j.policy.name}: comment ${outcome.action}: ${outcome.url}`);
+    }
+  }
+
+  if (!(await writeSummary(s.summaryFile, summaryBody(markdowns)))) io.info('sluice: no GITHUB_STEP_SUMMARY; the Markdown report is in the report directory');
+
+  const reports = judged.map((j) => j.report);
+  const failure = failureOf(s.failOn, reports);
+  // setFailed adds an error annotation of its own.
+  const { shown, omitted } = capAnnotations(annotations, { error: spent.error + (failure ? 1 : 0), warning: spent.warning });
+  for (const a of shown) io.annotate(a);
+  if (omitted.error + omitted.warning > 0) {
+    io.info(`sluice: ${omitted.error} more error and ${omitted.warning} more warning findings are not annotated (GitHub shows 10 of each per step); all are in the report`);
+  }
+
+  if (s.cache) {
+    const removed = await pruneResults(cacheDir, usedSettings, usedKeys);
+    if (removed > 0) io.info(`sluice: dropped ${removed} cached results no longer in the corpus`);
+    const measured = reports.some((r) => r.timing.cacheMisses > 0) || judged.some((j) => j.baseBlobReads > 0);
+    if (measured || restored !== cacheKey) await saveResults(cacheDir, cacheKey, io.info, warn);
+  } else {
+    await rm(cacheDir, { recursive: true, force: true });
+  }
+
+  const verdict = reports.reduce<Verdict>((v, r) => (RANK[r.verdict] > RANK[v] ? r.verdict : v), 'pass');
+  io.setOutput('verdict', verdict);
+  io.setOutput('report', reportPaths.join('\n'));
+  io.setOutput('failed-rules', ruleNames(reports, 'fail'));
+  io.setOutput('warned-rules', ruleNames(reports, 'warn'));
+  return { verdict, failure, reports: reportPaths };
+}

@@ -1,0 +1,447 @@
+// Base against head: the corpus as a git commit had it and as the working tree has
+// it, measured under one policy (head's), with every shard keyed by its git blob id
+// so an unchanged shard is measured once and its result reused for both sides.
+// Git is plumbing here (ls-tree, ls-files, status, cat-file, diff): nothing is
+// checked out or changed, and the base side is read from blob streams.
+import { execFile, spawn } from 'node:child_process';
+import { createHash } from 'node:crypto';
+import { mkdir, readFile, realpath, rename, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import type { Readable } from 'node:stream';
+import picomatch from 'picomatch';
+import { buildReport } from '../judge/report.js';
+import type { Report, RuleVerdict, Verdict } from '../judge/types.js';
+import type { Policy } from '../policy/types.js';
+import { discoverShards, pathClassifier } from '../read/index.js';
+import type { ShardRef } from '../read/types.js';
+import type { CorpusResult } from '../results/corpus.js';
+import { contentIdOf } from '../results/scan.js';
+import { ConfigError, measureCorpus, type CheckOptions } from './check.js';
+
+/** Largest git output read at once: ls-tree of a few hundred thousand shards is tens of MB. */
+const GIT_MAX_BUFFER_BYTES = 1024 * 1024 * 1024;
+
+/** Regular-file modes in git trees; links (120000) and submodules (160000) name no shard bytes. */
+const FILE_MODES = new Set(['100644', '100755']);
+
+/** A shard as it is in one commit. */
+export interface BaseShard {
+  /** Path relative to the policy root, as reports show it. */
+  path: string;
+  /** Path relative to the repository's top level, as git names it. */
+  gitPath: string;
+  blob: string;
+  sizeBytes: number;
+}
+
+/** What a pull request did to one shard. */
+export interface ShardChange {
+  status: 'added' | 'modified' | 'deleted' | 'renamed';
+  /** Path at head (at base for a deleted shard), relative to the policy root. */
+  path: string;
+  /** Path at base, for a renamed shard. */
+  from?: string;
+  /** A renamed shard whose bytes also changed. */
+  edited?: boolean;
+  docs: { base: number | null; head: number | null };
+}
+
+/** How a figure moved from base to head. */
+export interface Delta {
+  base: number | null;
+  head: number | null;
+}
+
+export interface LanguageDelta {
+  key: string;
+  target?: number;
+  /** Share of the mix unit, 0..1. */
+  share: Delta;
+  /** head − base, in percentage points. */
+  shiftPoints: number | null;
+  /** Running-text fertility under the policy's tokenizer. */
+  fertility: Delta;
+  /** head ÷ base − 1. */
+  fertilityChange: number | null;
+}
+
+export interface RuleFlip {
+  rule: string;
+  scope: string;
+  /** `none` when the rule had no outcome on that side (a shard-scoped rule of a new shard). */
+  from: RuleVerdict | 'none';
+  to: RuleVerdict | 'none';
+  message: string;
+}
+
+/** The comparison of one policy's report at base and at head; a view renders it, computing nothing. */
+export interface Comparison {
+  base: { commit: string; label: string };
+  mixUnit: string;
+  changes: ShardChange[];
+  /** Totals over the corpus. */
+  shards: Delta;
+  docs: Delta;
+  words: Delta;
+  tokens: Delta;
+  languages: LanguageDelta[];
+  verdict: { base: Verdict | null; head: Verdict };
+  flipped: RuleFlip[];
+  /** Duplicates the head's new and changed shards add against the rest of the corpus. */
+  addedDuplicates?: NonNullable<CorpusResult['duplicatesAgainstExisting']>;
+}
+
+/** One side of a run, as measured. */
+export interface Side {
+  report: Report;
+  /** Absent when the side's report came from the base memo (see baseMemoKey) rather than from measuring. */
+  corpus?: CorpusResult;
+}
+
+/** What is kept of a judged commit so that a later comparison against it measures nothing: its report and documents per shard. */
+interface BaseMemo {
+  report: Report;
+  docs: Record<string, number>;
+}
+
+/**
+ * Returns the memo key of a policy's report at a commit. The key covers the policy's text and
+ * the settings id (tokenizers, evaluation sets, sluice version), so a memo is reused only for
+ * the same judgement; it is stored beside the shard results (`<settingsId>-<key>.json`).
+ */
+export async function baseMemoKey(policy: Policy, settingsId: string, commit: string): Promise<string> {
+  const text = await readFile(policy.file, 'utf8');
+  return `base${createHash('sha256').update(`${text}\0${settingsId}\0${commit}`).digest('hex').slice(0, 32)}`;
+}
+
+/** Returns the memo of a judged commit, if one is stored. */
+async function readBaseMemo(cacheDir: string, settingsId: string, key: string): Promise<BaseMemo | undefined> {
+  try {
+    return JSON.parse(await readFile(path.join(cacheDir, `${settingsId}-${key}.json`), 'utf8')) as BaseMemo;
+  } catch {
+    return undefined;
+  }
+}
+
+/** Stores the memo of a judged commit: a push to the default branch writes it, and pull requests against that commit read it. */
+export async function writeBaseMemo(cacheDir: string, settingsId: string, key: string, report: Report, corpus: CorpusResult): Promise<void> {
+  const memo: BaseMemo = { report, docs: Object.fromEntries(corpus.shards.map((s) => [s.path, s.read.docs])) };
+  await mkdir(cacheDir, { recursive: true });
+  const file = path.join(cacheDir, `${settingsId}-${key}.json`);
+  await writeFile(`${file}.tmp`, JSON.stringify(memo));
+  await rename(`${file}.tmp`, file);
+}
+
+export interface CompareResult {
+  head: Side;
+  /** Null when the base commit has no shard the policy covers. */
+  base: Side | null;
+  comparison: Comparison;
+  /** Base blobs streamed from git (shards measured at base rather than taken from the cache). */
+  baseBlobReads: number;
+}
+
+/** Git failed: a message naming the command and what git said. */
+export class GitError extends Error {
+  override name = 'GitError';
+}
+
+/** Returns git's standard output for a command run in `cwd`; throws GitError with git's message. */
+export function git(cwd: string, args: string[]): Promise<string> {
+  return new Promise((resolve, reject) => {
+    execFile('git', args, { cwd, maxBuffer: GIT_MAX_BUFFER_BYTES, encoding: 'utf8' }, (err, stdout, stderr) => {
+      if (err) reject(new GitError(`git ${args.join(' ')}: ${(stderr || err.message).trim()}`));
+      else resolve(stdout);
+    });
+  });
+}
+
+/** Returns the top level of the git work tree containing `dir`, or null when it is not in one. */
+export async function gitTopLevel(dir: string): Promise<string | null> {
+  try {
+    return await realpath((await git(dir, ['rev-parse', '--show-toplevel'])).trim());
+  } catch {
+    return null;
+  }
+}
+
+/** Returns the full commit id a ref names; throws ConfigError saying how to make it available. */
+export async function resolveCommit(top: string, ref: string): Promise<string> {
+  try {
+    return (await git(top, ['rev-parse', '--verify', '--quiet', `${ref}^{commit}`])).trim();
+  } catch {
+    throw new ConfigError(
+      `base \`${ref}\` is not a commit in this clone; check out with enough history to contain it ` +
+        '(actions/checkout with `fetch-depth: 0`, or fetch the base ref before running sluice)',
+    );
+  }
+}
+
+/** Returns the policy root relative to the repository top (`''` when they are the same); throws ConfigError when the root is outside the repository. */
+export async function rootInRepo(top: string, policy: Policy): Promise<string> {
+  const rel = path.relative(top, await realpath(policy.root)).split(path.sep).join('/');
+  if (rel === '..' || rel.startsWith('../') || path.isAbsolute(rel)) {
+    throw new ConfigError(`${policy.file}: root ${policy.root} is outside the git repository ${top}; a base comparison needs the corpus in the repository`);
+  }
+  return rel;
+}
+
+/** Returns a matcher of policy-root-relative paths by corpus.include/exclude, with the same hidden-file rule as discovery (dot files only when a glob names them). */
+export function corpusMatcher(policy: Policy): (relPath: string) => boolean {
+  const include = picomatch(policy.corpus.include, { dot: false });
+  const exclude = policy.corpus.exclude.length ? picomatch(policy.corpus.exclude, { dot: false }) : () => false;
+  return (p) => include(p) && !exclude(p);
+}
+
+/** Returns the shards the policy covers in a commit, read from the tree without a checkout. */
+export async function listCommitShards(top: string, commit: string, policy: Policy, rootRel: string): Promise<BaseShard[]> {
+  const out = await git(top, ['ls-tree', '-r', '-l', '-z', '--full-tree', commit, '--', rootRel === '' ? '.' : rootRel]);
+  const matches = corpusMatcher(policy);
+  const shards: BaseShard[] = [];
+  for (const entry of out.split('\0')) {
+    if (!entry) continue;
+    const tab = entry.indexOf('\t');
+    const [mode, type, blob, size] = entry.slice(0, tab).split(/ +/);
+    const gitPath = entry.slice(tab + 1);
+    if (type !== 'blob' || !FILE_MODES.has(mode ?? '')) continue;
+    const rel = rootRel === '' ? gitPath : gitPath.slice(rootRel.length + 1);
+    if (!matches(rel)) continue;
+    shards.push({ path: rel, gitPath, blob: blob!, sizeBytes: Number(size) });
+  }
+  return shards.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
+}
+
+/** Returns a stream of a blob's bytes from `git cat-file`; a git failure destroys the stream with git's message. */
+export function blobStream(top: string, blob: string): Readable {
+  const child = spawn('git', ['cat-file', 'blob', blob], { cwd: top, stdio: ['ignore', 'pipe', 'pipe'] });
+  let stderr = '';
+  child.stderr.on('data', (c: Buffer) => (stderr += c.toString()));
+  child.on('close', (code) => {
+    if (code !== 0) child.stdout.destroy(new GitError(`git cat-file blob ${blob}: ${stderr.trim() || `exit ${code}`}`));
+  });
+  child.on('error', (err) => child.stdout.destroy(err));
+  return child.stdout;
+}
+
+/** Returns ShardRefs for base shards, classified by the policy's path rules and read from git; `onRead` is called each time a blob is opened. */
+export function baseShardRefs(top: string, commit: string, policy: Policy, shards: BaseShard[], onRead?: () => void): ShardRef[] {
+  const classify = pathClassifier(policy.corpus);
+  const refs: ShardRef[] = [];
+  for (const s of shards) {
+    const c = classify(s.path);
+    // An extension sluice does not read: discovery reports such files at head; at base they only matter as a change.
+    if (!c.supported) continue;
+    const ref: ShardRef = {
+      path: s.path,
+      absPath: `${commit.slice(0, 12)}:${s.gitPath}`,
+      format: c.format,
+      compression: c.compression,
+      encoding: c.encoding,
+      sizeBytes: s.sizeBytes,
+      open: () => {
+        onRead?.();
+        return blobStream(top, s.blob);
+      },
+    };
+    if (c.subset !== undefined) ref.subset = c.subset;
+    refs.push(ref);
+  }
+  return refs;
+}
+
+/** Returns the content key of working-tree shards: the index's blob id when the file is as the index has it, else sha256 of its bytes. */
+export async function workingTreeKeys(top: string, rootRel: string): Promise<(ref: ShardRef) => Promise<string>> {
+  const scope = rootRel === '' ? '.' : rootRel;
+  const [staged, status] = await Promise.all([
+    git(top, ['ls-files', '-s', '-z', '--full-name', '--', scope]),
+    // status refreshes stat data first, so a touched but unchanged file is not taken as changed.
+    git(top, ['status', '--porcelain=v1', '-z', '--untracked-files=all', '--no-renames', '--', scope]),
+  ]);
+  const blobs = new Map<string, string>();
+  for (const entry of staged.split('\0')) {
+    if (!entry) continue;
+    const tab = entry.indexOf('\t');
+    const [mode, blob, stage] = entry.slice(0, tab).split(' ');
+    if (stage === '0' && FILE_MODES.has(mode ?? '')) blobs.set(entry.slice(tab + 1), blob!);
+  }
+  for (const entry of status.split('\0')) {
+    if (entry.length < 4) continue;
+    // XY path: Y is the work tree against the index; `??` is untracked.
+    if (entry[1] !== ' ' || entry.startsWith('??')) blobs.delete(entry.slice(3));
+  }
+  return async (ref) => blobs.get(rootRel === '' ? ref.path : `${rootRel}/${ref.path}`) ?? (await contentIdOf(ref));
+}
+
+/** Returns each base→head rename git finds (similarity, not only equal bytes), as policy-root-relative paths. */
+async function renamesBetween(top: string, commit: string, rootRel: string): Promise<Map<string, string>> {
+  const out = await git(top, ['diff', '--name-status', '-z', '-M', '--no-ext-diff', commit, 'HEAD', '--', rootRel === '' ? '.' : rootRel]);
+  const parts = out.split('\0');
+  const renames = new Map<string, string>();
+  const strip = (p: string): string => (rootRel === '' ? p : p.slice(rootRel.length + 1));
+  for (let i = 0; i < parts.length; ) {
+    const status = parts[i] ?? '';
+    if (!status) break;
+    if (status.startsWith('R') || status.startsWith('C')) {
+      if (status.startsWith('R')) renames.set(strip(parts[i + 2]!), strip(parts[i + 1]!));
+      i += 3;
+    } else i += 2;
+  }
+  return renames;
+}
+
+/** Returns the shard changes from the content keys on each side (path → key), pairing deletions with additions as renames when git or equal bytes say so; document counts are looked up in `docs` when given. */
+export function shardChanges(
+  base: Map<string, string>,
+  head: Map<string, string>,
+  gitRenames: Map<string, string>,
+  docs: { base: Map<string, number>; head: Map<string, number> } = { base: new Map(), head: new Map() },
+): ShardChange[] {
+  const changes: ShardChange[] = [];
+  const added = [...head.keys()].filter((p) => !base.has(p));
+  const deleted = new Set([...base.keys()].filter((p) => !head.has(p)));
+  const deletedByKey = new Map<string, string>();
+  for (const p of deleted) deletedByKey.set(base.get(p)!, p);
+  const d = (b: string | undefined, h: string | undefined): ShardChange['docs'] => ({ base: b === undefined ? null : (docs.base.get(b) ?? null), head: h === undefined ? null : (docs.head.get(h) ?? null) });
+  for (const p of added) {
+    const from = [gitRenames.get(p), deletedByKey.get(head.get(p)!)].find((f) => f !== undefined && deleted.has(f));
+    if (from !== undefined) {
+      deleted.delete(from);
+      changes.push({ status: 'renamed', path: p, from, edited: base.get(from) !== head.get(p), docs: d(from, p) });
+    } else changes.push({ status: 'added', path: p, docs: d(undefined, p) });
+  }
+  for (const [p, key] of head) if (base.has(p) && base.get(p) !== key) changes.push({ status: 'modified', path: p, docs: d(p, p) });
+  for (const p of deleted) changes.push({ status: 'deleted', path: p, docs: d(p, undefined) });
+  return changes.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
+}
+
+/** Returns the figures of base and head side by side, and the rules whose verdict changed. */
+export function compareReports(base: Report | null, head: Report, commit: string, label: string, changes: ShardChange[], addedDuplicates?: Comparison['addedDuplicates']): Comparison {
+  const unit = head.mixUnit;
+  const keys = [...new Set([...Object.keys(head.languages), ...Object.keys(base?.languages ?? {})])];
+  const languages: LanguageDelta[] = [];
+  for (const key of keys) {
+    const h = head.languages[key];
+    const b = base?.languages[key];
+    if (!h?.docs && !b?.docs && h?.target === undefined) continue;
+    const share = { base: b ? (b.share[unit] ?? null) : base ? 0 : null, head: h ? (h.share[unit] ?? null) : 0 };
+    const fertility = { base: b?.fertility?.fertility ?? null, head: h?.fertility?.fertility ?? null };
+    const row: LanguageDelta = {
+      key,
+      share,
+      shiftPoints: share.base !== null && share.head !== null ? (share.head - share.base) * 100 : null,
+      fertility,
+      fertilityChange: fertility.base && fertility.head !== null ? fertility.head / fertility.base - 1 : null,
+    };
+    const target = h?.target ?? b?.target;
+    if (target !== undefined) row.target = target;
+    languages.push(row);
+  }
+
+  const id = (r: { rule: string; scope: string }): string => `${r.rule}\u0000${r.scope}`;
+  const baseRules = new Map<string, RuleVerdict>();
+  // A rule may have several outcomes per scope (input: broken and rejected); the worst stands for the pair.
+  const RANK: Record<RuleVerdict, number> = { pass: 0, uncertain: 1, warn: 2, fail: 3 };
+  const worst = (a: RuleVerdict | undefined, b: RuleVerdict): RuleVerdict => (a !== undefined && RANK[a] > RANK[b] ? a : b);
+  for (const r of base?.rules ?? []) baseRules.set(id(r), worst(baseRules.get(id(r)), r.verdict));
+  const headRules = new Map<string, { verdict: RuleVerdict; message: string; rule: string; scope: string }>();
+  for (const r of head.rules) {
+    const prev = headRules.get(id(r));
+    const verdict = worst(prev?.verdict, r.verdict);
+    headRules.set(id(r), { verdict, message: prev && prev.verdict === verdict ? prev.message : r.message, rule: r.rule, scope: r.scope });
+  }
+  const flipped: RuleFlip[] = [];
+  if (base) {
+    for (const [k, h] of headRules) {
+      const from = baseRules.get(k) ?? 'none';
+      if (from !== h.verdict) flipped.push({ rule: h.rule, scope: h.scope, from, to: h.verdict, message: h.message });
+    }
+    for (const r of base.rules) {
+      if (!headRules.has(id(r)) && r.verdict !== 'pass' && !flipped.some((f) => id(f) === id(r))) flipped.push({ rule: r.rule, scope: r.scope, from: baseRules.get(id(r))!, to: 'none', message: r.message });
+    }
+  }
+
+  const comparison: Comparison = {
+    base: { commit, label },
+    mixUnit: unit,
+    changes,
+    shards: { base: base?.input.shards ?? null, head: head.input.shards },
+    docs: { base: base?.totals.docs ?? null, head: head.totals.docs },
+    words: { base: base?.totals.words ?? null, head: head.totals.words },
+    tokens: { base: base?.totals.tokens ?? null, head: head.totals.tokens ?? null },
+    languages,
+    verdict: { base: base?.verdict ?? null, head: head.verdict },
+    flipped,
+  };
+  if (addedDuplicates) comparison.addedDuplicates = addedDuplicates;
+  return comparison;
+}
+
+export interface CompareOptions {
+  /** Options for measuring (cache directory, warnings, cwd); contentKey and newShards are set here. */
+  check: CheckOptions;
+  /** Repository top level (from gitTopLevel). */
+  top: string;
+  /** Full base commit id (from resolveCommit). */
+  baseCommit: string;
+  /** How the base is named to readers (`main`, or a short commit id). */
+  baseLabel: string;
+  /** Called with every content key used, head and base, so a persistent cache can drop the rest. */
+  onKey?: (key: string) => void;
+}
+
+/** Returns the policy's report at head (the working tree) and at a base commit, and their comparison; unchanged shards are measured once. */
+export async function compareWithBase(policy: Policy, opts: CompareOptions): Promise<CompareResult> {
+  const rootRel = await rootInRepo(opts.top, policy);
+  const [headKeyOf, baseShards, renames] = await Promise.all([
+    workingTreeKeys(opts.top, rootRel),
+    listCommitShards(opts.top, opts.baseCommit, policy, rootRel),
+    renamesBetween(opts.top, opts.baseCommit, rootRel),
+  ]);
+
+  let discovery;
+  try {
+    discovery = await discoverShards(policy.root, policy.corpus);
+  } catch (err) {
+    throw new ConfigError(`${policy.file}: ${(err as Error).message}`);
+  }
+  const headKeys = new Map<string, string>();
+  for (const ref of discovery.shards) headKeys.set(ref.path, await headKeyOf(ref));
+  const baseKeys = new Map(baseShards.map((s) => [s.path, s.blob] as const));
+  for (const k of [...headKeys.values(), ...baseKeys.values()]) opts.onKey?.(k);
+
+  // New to the corpus: added, changed and edited-while-renamed shards (a pure rename adds nothing; a copy at a new path does).
+  const isNew = (c: ShardChange): boolean => c.status === 'added' || c.status === 'modified' || (c.status === 'renamed' && c.edited === true);
+  const newShards = shardChanges(baseKeys, headKeys, renames).filter(isNew).map((c) => c.path);
+
+  const headCorpus = await measureCorpus(policy, { ...opts.check, contentKey: async (ref) => headKeys.get(ref.path) ?? headKeyOf(ref), newShards }, discovery.shards);
+  const headReport = buildReport(policy, headCorpus, opts.check.cwd);
+
+  let base: Side | null = null;
+  let baseDocs = new Map<string, number>();
+  let baseBlobReads = 0;
+  const refs = baseShardRefs(opts.top, opts.baseCommit, policy, baseShards, () => (baseBlobReads += 1));
+  if (refs.length > 0) {
+    // The base was judged before (a push to the default branch, or an earlier run of this PR) under the same
+    // policy and settings: reuse that judgement, so the run costs what the PR changed, not the corpus size.
+    const settingsId = headCorpus.shards[0]?.settingsId;
+    const memoKey = settingsId && opts.check.cacheDir ? await baseMemoKey(policy, settingsId, opts.baseCommit) : undefined;
+    if (memoKey) opts.onKey?.(memoKey);
+    const memo = memoKey && settingsId ? await readBaseMemo(opts.check.cacheDir!, settingsId, memoKey) : undefined;
+    if (memo) {
+      base = { report: memo.report };
+      baseDocs = new Map(Object.entries(memo.docs));
+    } else {
+      const { newShards: _unused, ...baseCheck } = opts.check;
+      const corpus = await measureCorpus(policy, { ...baseCheck, contentKey: async (ref) => baseKeys.get(ref.path)! }, refs);
+      base = { corpus, report: buildReport(policy, corpus, opts.check.cwd) };
+      baseDocs = new Map(corpus.shards.map((s) => [s.path, s.read.docs] as const));
+      if (memoKey && settingsId) await writeBaseMemo(opts.check.cacheDir!, settingsId, memoKey, base.report, corpus);
+    }
+  }
+
+  const docsOf = (corpus: CorpusResult | undefined): Map<string, number> => new Map((corpus?.shards ?? []).map((s) => [s.path, s.read.docs] as const));
+  const changes = shardChanges(baseKeys, headKeys, renames, { base: baseDocs, head: docsOf(headCorpus) });
+
+  const comparison = compareReports(base?.report ?? null, headReport, opts.baseCommit, opts.baseLabel, changes, headCorpus.duplicatesAgainstExisting);
+  return { head: { report: headReport, corpus: headCorpus }, base, comparison, baseBlobReads };
+}
