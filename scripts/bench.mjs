@@ -240,10 +240,10 @@ function runCli(args, label) {
 }
 
 /** Runs `sluice check` on a policy and returns the run's figures and its JSON report. */
-async function sluice(policy, { cacheDir = null, label }) {
+async function sluice(policy, { cacheDir = null, label, workers = 1 }) {
   const report = path.join(outDir, `bench-report-${label}.json`);
   rmSync(report, { force: true });
-  const args = ['check', policy, '--json', report, '--quiet', '--no-color', ...(cacheDir ? ['--cache-dir', cacheDir] : ['--no-cache'])];
+  const args = ['check', policy, '--json', report, '--quiet', '--no-color', '--workers', String(workers), ...(cacheDir ? ['--cache-dir', cacheDir] : ['--no-cache'])];
   const run = await runCli(args, label);
   // Exit 1 is a failed gate, still a complete run; 2 means it could not be judged.
   if (run.code !== 0 && run.code !== 1) throw new Error(`sluice ${label} exited with ${run.code}:\n${run.stderr}${run.stdout}`);
@@ -340,6 +340,7 @@ const sluiceCases = [
   { key: 'duplicates', name: '(c) sluice: + duplicates only', policy: policies.duplicates, note: '--no-cache' },
   { key: 'contamination', name: '(c) sluice: + contamination only', policy: policies.contamination, note: '--no-cache' },
   { key: 'full', name: '(c) sluice: full check', policy: policies.full, note: '--no-cache' },
+  { key: 'full2', name: '(c) sluice: full check, 2 workers', policy: policies.full, workers: 2, note: '--no-cache --workers 2' },
   { key: 'cold', name: '(d) sluice: full check, empty --cache-dir', policy: policies.full, cache: 'empty', note: 'measures, writes the cache' },
   { key: 'warm', name: '(d) sluice: full check, warm --cache-dir', policy: policies.full, cache: 'warm' },
 ];
@@ -350,7 +351,7 @@ for (let round = 1; round <= rounds; round++) {
   for (const c of sluiceCases) {
     log(`round ${round}/${rounds}: ${c.name} ...`);
     if (c.cache === 'empty') rmSync(cacheDir, { recursive: true, force: true });
-    const run = await sluice(c.policy, { cacheDir: c.cache ? cacheDir : null, label: c.key });
+    const run = await sluice(c.policy, { cacheDir: c.cache ? cacheDir : null, label: c.key, workers: c.workers ?? 1 });
     (allSeconds[c.key] ??= []).push(run.seconds);
     if (!runs[c.key] || run.seconds < runs[c.key].seconds) runs[c.key] = run;
   }

@@ -273,10 +273,10 @@ function headlineOf(verdict: Report['verdict'], rules: Report['rules']): string 
   const unsure = uncertain.length
     ? `${uncertain.length} rule${uncertain.length === 1 ? '' : 's'} uncertain on the sample (a larger sample settles ${uncertain.length === 1 ? 'it' : 'them'}): ${names(uncertain)}`
     : '';
-  if (verdict === 'fail') return `FAIL: ${failing.length} rule${failing.length === 1 ? '' : 's'} at error severity failed: ${names(failing)}${unsure ? `; ${unsure}` : ''}`;
+  if (verdict === 'fail') return `FAIL: ${failing.length} check${failing.length === 1 ? '' : 's'} at error severity failed: ${names(failing)}${unsure ? `; ${unsure}` : ''}`;
   if (verdict === 'warn') {
     if (warning.length === 0) return `PASS with warnings: ${unsure}`;
     return `PASS with warnings: ${names(warning)}${unsure ? `; ${unsure}` : ''}`;
   }
-  return `PASS: all ${rules.length} judged rules hold`;
+  return `PASS: all ${rules.length} judged checks hold`;
 }

@@ -246,7 +246,7 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
     const docs = corpus.shards.reduce((s, r) => s + (r.contamination?.docs ?? 0), 0);
     const locs = corpus.shards.flatMap((s) => (s.contamination?.samples ?? []).map((x) => ({ path: s.path, line: x.line, detail: `shares a ${corpus.contamination!.ngram}-gram with ${x.evalFile}:${x.evalLine}` })));
     out.push(outcome(policy, 'contamination', 'corpus', docs, rules.contamination.maxDocs, 'count', docs > rules.contamination.maxDocs,
-      `${docs} training document${docs === 1 ? '' : 's'} share a ${corpus.contamination.ngram}-word sequence with the evaluation sets (limit ${rules.contamination.maxDocs})`, locs));
+      `${docs} training document${docs === 1 ? ' shares' : 's share'} a ${corpus.contamination.ngram}-word sequence with the evaluation sets (limit ${rules.contamination.maxDocs})`, locs));
   }
   return out;
 }
