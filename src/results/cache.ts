@@ -4,6 +4,7 @@
 import { createHash } from 'node:crypto';
 import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
+import { inspectIndex } from '../measure/duplicates/index.js';
 import { shardResultFromStored, storedShardResult } from './serialize.js';
 import type { ShardResult } from './types.js';
 
@@ -43,6 +44,11 @@ export class ResultCache {
       }
       this.hits += 1;
       // The same bytes may sit at another path (a rename): report them where they are now.
+      // A damaged duplicate index would make the cross-shard join fail: measure the shard again instead.
+      if (r.duplicateIndex && !inspectIndex(r.duplicateIndex).ok) {
+        this.misses += 1;
+        return undefined;
+      }
       const moved: ShardResult = { ...r, path: at.path };
       if (at.subset === undefined) delete moved.subset;
       else moved.subset = at.subset;

@@ -122,3 +122,26 @@ describe('the command line', () => {
     expect(strip(second)).toEqual(strip(first));
   });
 });
+
+describe('a damaged cache entry', () => {
+  it('is measured again instead of failing the duplicate join', async () => {
+    const { readdirSync, readFileSync: read, writeFileSync: write } = await import('node:fs');
+    const root = corpus({
+      'p.yaml': policyYaml('  duplicates: { max-exact: 0.5 }\n'),
+      'data/a.jsonl': lines(20, ENGLISH),
+      'data/b.jsonl': lines(20, HINDI),
+    });
+    const cacheDir = join(root, '.cache');
+    const first = sluice(['check', join(root, 'p.yaml'), '--cache-dir', cacheDir], { json: true }).report!;
+    const entry = join(cacheDir, readdirSync(cacheDir)[0]!);
+    const stored = JSON.parse(read(entry, 'utf8'));
+    // Flip bytes in the middle of the stored duplicate index.
+    const blob = Buffer.from(stored.duplicateIndex, 'base64');
+    blob[Math.floor(blob.length / 2)] ^= 0xff;
+    write(entry, JSON.stringify({ ...stored, duplicateIndex: blob.toString('base64') }));
+    const second = sluice(['check', join(root, 'p.yaml'), '--cache-dir', cacheDir], { json: true });
+    expect(second.status).toBe(0);
+    expect(second.report!.timing).toMatchObject({ cacheHits: 1, cacheMisses: 1 });
+    expect(second.report!.duplicates).toEqual(first.duplicates);
+  });
+});
