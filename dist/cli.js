@@ -1031,7 +1031,7 @@ function judgeRules(policy, corpus, langs, sampled) {
       rules.contamination.maxDocs,
       "count",
       docs > rules.contamination.maxDocs,
-      `${docs} training document${docs === 1 ? "" : "s"} share a ${corpus.contamination.ngram}-word sequence with the evaluation sets (limit ${rules.contamination.maxDocs})`,
+      `${docs} training document${docs === 1 ? " shares" : "s share"} a ${corpus.contamination.ngram}-word sequence with the evaluation sets (limit ${rules.contamination.maxDocs})`,
       locs
     ));
   }
@@ -1286,12 +1286,12 @@ function headlineOf(verdict, rules) {
   const uncertain = rules.filter((r) => r.verdict === "uncertain");
   const names = (list) => [...new Set(list.map((r) => r.scope === "corpus" ? r.rule : `${r.rule} (${r.scope.replace(/^language:/, "")})`))].join(", ");
   const unsure = uncertain.length ? `${uncertain.length} rule${uncertain.length === 1 ? "" : "s"} uncertain on the sample (a larger sample settles ${uncertain.length === 1 ? "it" : "them"}): ${names(uncertain)}` : "";
-  if (verdict === "fail") return `FAIL: ${failing.length} rule${failing.length === 1 ? "" : "s"} at error severity failed: ${names(failing)}${unsure ? `; ${unsure}` : ""}`;
+  if (verdict === "fail") return `FAIL: ${failing.length} check${failing.length === 1 ? "" : "s"} at error severity failed: ${names(failing)}${unsure ? `; ${unsure}` : ""}`;
   if (verdict === "warn") {
     if (warning.length === 0) return `PASS with warnings: ${unsure}`;
     return `PASS with warnings: ${names(warning)}${unsure ? `; ${unsure}` : ""}`;
   }
-  return `PASS: all ${rules.length} judged rules hold`;
+  return `PASS: all ${rules.length} judged checks hold`;
 }
 
 // src/policy/load.ts
@@ -4323,6 +4323,1358 @@ import { createHash as createHash2 } from "node:crypto";
 import { mkdir, readFile as readFile2, rename, writeFile } from "node:fs/promises";
 import { join } from "node:path";
 
+// src/measure/duplicates/hash.ts
+function mix32(h) {
+  h ^= h >>> 16;
+  h = Math.imul(h, 2246822507);
+  h ^= h >>> 13;
+  h = Math.imul(h, 3266489909);
+  return h ^ h >>> 16;
+}
+function mix32b(h) {
+  h ^= h >>> 16;
+  h = Math.imul(h, 2146121005);
+  h ^= h >>> 15;
+  h = Math.imul(h, 2221713035);
+  return h ^ h >>> 16;
+}
+function fmix32(h) {
+  return mix32(h) >>> 0;
+}
+var EXACT_BASIS_1 = 2166136261 | 0;
+var EXACT_BASIS_2 = 1818371886 | 0;
+var EXACT_PRIME_1 = 16777619;
+var EXACT_PRIME_2 = 1540483477;
+function finishExact(h1, h2, length, out) {
+  h1 ^= length;
+  h2 = h2 + length | 0;
+  h1 = h1 + h2 | 0;
+  h2 = h2 + h1 | 0;
+  h1 = mix32(h1);
+  h2 = mix32b(h2);
+  h1 = h1 + h2 | 0;
+  h2 = h2 + h1 | 0;
+  out.exactHigh = h1 >>> 0;
+  out.exactLow = h2 >>> 0;
+}
+function hex64(hi, lo) {
+  return (hi >>> 0).toString(16).padStart(8, "0") + (lo >>> 0).toString(16).padStart(8, "0");
+}
+
+// src/measure/duplicates/minhash.ts
+var mix32b2 = mix32b;
+var ROLL_BASE = 625341585;
+var FILL_ROUNDS = 8;
+var PROBE_TABLE = 32;
+var MAX_HASHES = 65535;
+var Sketcher = class {
+  shingle;
+  hashes;
+  /** The last signature: one 32-bit value per bin, valid until the next call. */
+  values;
+  rounds;
+  shingles;
+  lengthSeed;
+  fillRounds;
+  /** `fillRounds` is for experiments (scripts/bench-duplicates.mjs): 1 is plain one-permutation hashing with densification, Infinity fills every bin by rounds. Signatures are comparable only at equal values. */
+  constructor(shingle, hashes, fillRounds = FILL_ROUNDS) {
+    if (!Number.isInteger(hashes) || hashes < 1 || hashes > MAX_HASHES) throw new RangeError(`hashes must be an integer from 1 to ${MAX_HASHES}, got ${hashes}`);
+    if (!Number.isInteger(shingle) || shingle < 1) throw new RangeError(`shingle must be a positive integer, got ${shingle}`);
+    if (!(fillRounds >= 1)) throw new RangeError(`fillRounds must be at least 1, got ${fillRounds}`);
+    this.shingle = shingle;
+    this.hashes = hashes;
+    this.fillRounds = fillRounds;
+    this.values = new Int32Array(hashes);
+    this.rounds = new Int32Array(hashes);
+    this.shingles = new Int32Array(1024);
+    this.lengthSeed = new Int32Array(shingle + 1);
+    for (let m = 0; m <= shingle; m++) this.lengthSeed[m] = mix32b2(1663821227 + m);
+  }
+  /**
+   * Returns the number of shingles of a document given its word hashes (0 when it has no words,
+   * and then `values` is untouched), leaving its signature in `values`. A document with fewer
+   * words than one shingle gets one shingle made of all its words.
+   */
+  sketch(words, count3) {
+    if (count3 === 0) return 0;
+    const n = this.shingle;
+    const m = count3 < n ? count3 : n;
+    const shingleCount = count3 < n ? 1 : count3 - n + 1;
+    if (this.shingles.length < shingleCount) this.shingles = new Int32Array(shingleCount * 2);
+    const sh = this.shingles;
+    let top = 1;
+    for (let j = 1; j < m; j++) top = Math.imul(top, ROLL_BASE);
+    let h = 0;
+    for (let j = 0; j < m; j++) h = Math.imul(h, ROLL_BASE) + words[j] | 0;
+    const seed = this.lengthSeed[m];
+    sh[0] = mix(h ^ seed);
+    for (let i = 1; i < shingleCount; i++) {
+      h = Math.imul(h - Math.imul(words[i - 1], top) | 0, ROLL_BASE) + words[i + m - 1] | 0;
+      sh[i] = mix(h ^ seed);
+    }
+    this.fill(sh, shingleCount);
+    return shingleCount;
+  }
+  /** Returns `values` filled with the signature of a set given as `count` 32-bit hashes in `set` (duplicates allowed; count ≥ 1). */
+  fill(set, count3) {
+    const k = this.hashes;
+    const val = this.values;
+    const rnd = this.rounds;
+    rnd.fill(-1);
+    let empty = k;
+    for (let i = 0; i < count3; i++) {
+      const x = set[i];
+      const b = Math.imul(x >>> 16, k) >>> 16;
+      const r = rnd[b];
+      if (r < 0) {
+        rnd[b] = 0;
+        val[b] = x;
+        empty--;
+      } else if (x < val[b]) {
+        val[b] = x;
+      }
+    }
+    const rounds = this.fillRounds;
+    for (let t = 1; empty > 0 && t < rounds; t++) {
+      const ts = Math.imul(t, 2654435761);
+      for (let i = 0; i < count3; i++) {
+        const x = mix(set[i] ^ ts);
+        const b = Math.imul(x >>> 16, k) >>> 16;
+        const r = rnd[b];
+        if (r < 0) {
+          rnd[b] = t;
+          val[b] = x;
+          empty--;
+        } else if (r === t && x < val[b]) {
+          val[b] = x;
+        }
+      }
+    }
+    if (empty > 0) this.densify();
+    return val;
+  }
+  /**
+   * Fills each still-empty bin with the value of the first filled bin along a probe sequence
+   * that depends only on the bin (optimal densification, Shrivastava 2017): two sets copy from
+   * the same bin exactly when it is the first one filled in both, so agreement stays ∝ Jaccard.
+   */
+  densify() {
+    const k = this.hashes;
+    const val = this.values;
+    const rnd = this.rounds;
+    const probes = this.probes();
+    for (let i = 0; i < k; i++) {
+      if (rnd[i] >= 0) continue;
+      let from = -1;
+      for (let a = 0; a < PROBE_TABLE; a++) {
+        const j = probes[i * PROBE_TABLE + a];
+        if (rnd[j] >= 0) {
+          from = j;
+          break;
+        }
+      }
+      for (let a = PROBE_TABLE; from < 0; a++) {
+        const j = probeBin(i, a, k);
+        if (rnd[j] >= 0) from = j;
+      }
+      val[i] = val[from];
+    }
+  }
+  probeTable;
+  /** Returns the first PROBE_TABLE probes of every bin, computed once per sketcher. */
+  probes() {
+    if (this.probeTable) return this.probeTable;
+    const k = this.hashes;
+    const t = new Int32Array(k * PROBE_TABLE);
+    for (let i = 0; i < k; i++) for (let a = 0; a < PROBE_TABLE; a++) t[i * PROBE_TABLE + a] = probeBin(i, a, k);
+    this.probeTable = t;
+    return t;
+  }
+};
+function probeBin(bin, attempt, k) {
+  const x = mix(Math.imul(bin + 1, 2654435761) ^ Math.imul(attempt + 1, 2246822519) ^ 668265263);
+  return Math.imul(x >>> 16, k) >>> 16;
+}
+function mix(h) {
+  h ^= h >>> 16;
+  h = Math.imul(h, 2246822507);
+  h ^= h >>> 13;
+  h = Math.imul(h, 3266489909);
+  return h ^ h >>> 16;
+}
+
+// src/measure/duplicates/scan.ts
+var mix322 = mix32;
+var mix32b3 = mix32b;
+var finishExact2 = finishExact;
+var EXACT_BASIS_12 = EXACT_BASIS_1;
+var EXACT_BASIS_22 = EXACT_BASIS_2;
+var EXACT_PRIME_12 = EXACT_PRIME_1;
+var EXACT_PRIME_22 = EXACT_PRIME_2;
+var WORD_CHAR = /^[\p{L}\p{M}\p{N}]$/u;
+var PUNCT_CHAR = new RegExp("^\\p{P}$", "u");
+var SPACE_CHAR = /^\s$/u;
+var CLASS_RUNS = [
+  [/[\p{L}\p{M}\p{N}]+/gu, 1],
+  [/\s+/gu, 3],
+  [new RegExp("\\p{P}+", "gu"), 4]
+];
+var OTHER = 0;
+var WORD = 1;
+var HIGH_SURROGATE = 2;
+var SPACE = 3;
+var PUNCT = 4;
+var table;
+function classTable() {
+  if (table) return table;
+  const t = new Uint8Array(65536);
+  const units = new Uint16Array(65536);
+  for (let c = 0; c < 65536; c++) units[c] = c >= 55296 && c < 57344 ? 0 : c;
+  let all = "";
+  for (let c = 0; c < 65536; c += 4096) all += String.fromCharCode(...units.subarray(c, c + 4096));
+  for (const [re, cls] of CLASS_RUNS) {
+    for (const m of all.matchAll(re)) {
+      for (let i = m.index, end = m.index + m[0].length; i < end; i++) t[i] = cls;
+    }
+  }
+  for (let c = 55296; c < 56320; c++) t[c] = HIGH_SURROGATE;
+  for (let c = 56320; c < 57344; c++) t[c] = OTHER;
+  table = t;
+  return t;
+}
+function astralClass(text, i) {
+  const cp = text.slice(i, i + 2);
+  if (WORD_CHAR.test(cp)) return WORD;
+  if (PUNCT_CHAR.test(cp)) return PUNCT;
+  if (SPACE_CHAR.test(cp)) return SPACE;
+  return OTHER;
+}
+function prepareText(text) {
+  return text.normalize("NFC").toLowerCase();
+}
+function wordBuffer(lanes, capacity = 1024) {
+  return { lane1: new Int32Array(capacity), lane2: lanes === 2 ? new Int32Array(capacity) : null };
+}
+function grow(buf) {
+  const l1 = new Int32Array(buf.lane1.length * 2);
+  l1.set(buf.lane1);
+  buf.lane1 = l1;
+  if (buf.lane2) {
+    const l2 = new Int32Array(buf.lane2.length * 2);
+    l2.set(buf.lane2);
+    buf.lane2 = l2;
+  }
+}
+function hashWords(prepared, buf) {
+  const t = classTable();
+  const two = buf.lane2 !== null;
+  const n = prepared.length;
+  let count3 = 0;
+  let inWord = false;
+  let h1 = 0;
+  let h2 = 0;
+  let len = 0;
+  for (let i = 0; i < n; i++) {
+    const c = prepared.charCodeAt(i);
+    let cls = t[c];
+    let c2 = -1;
+    if (cls === HIGH_SURROGATE) {
+      const lo = i + 1 < n ? prepared.charCodeAt(i + 1) : 0;
+      if (lo >= 56320 && lo < 57344) {
+        cls = astralClass(prepared, i);
+        c2 = lo;
+        i++;
+      } else {
+        cls = OTHER;
+      }
+    }
+    if (cls === WORD) {
+      if (!inWord) {
+        inWord = true;
+        h1 = 2166136261;
+        h2 = 84696351;
+        len = 0;
+      }
+      h1 = Math.imul(h1 ^ c, 16777619);
+      if (two) h2 = Math.imul(h2 ^ c, 739982445);
+      len++;
+      if (c2 >= 0) {
+        h1 = Math.imul(h1 ^ c2, 16777619);
+        if (two) h2 = Math.imul(h2 ^ c2, 739982445);
+        len++;
+      }
+    } else if (inWord) {
+      inWord = false;
+      if (count3 === buf.lane1.length) grow(buf);
+      buf.lane1[count3] = mix322(h1 ^ len);
+      if (two) buf.lane2[count3] = mix32b3(h2 + len);
+      count3++;
+    }
+  }
+  if (inWord) {
+    if (count3 === buf.lane1.length) grow(buf);
+    buf.lane1[count3] = mix322(h1 ^ len);
+    if (two) buf.lane2[count3] = mix32b3(h2 + len);
+    count3++;
+  }
+  return count3;
+}
+var DocumentScanner = class {
+  /** Code units of the exact normal form (0: empty document). */
+  exactLength = 0;
+  /** The 64-bit exact hash as two unsigned 32-bit lanes. */
+  exactHigh = 0;
+  exactLow = 0;
+  /** Words found; their hashes are words[0 .. wordCount). */
+  wordCount = 0;
+  words = new Int32Array(1024);
+  /**
+   * Scans `prepared` (see prepareText) once, computing both the exact hash of its normal form
+   * (see normalizeForExact; punctuation deleted when `strip`) and one hash per word.
+   * One fused pass: classifying each code unit once is most of the cost.
+   */
+  scan(prepared, strip) {
+    const t = classTable();
+    let words = this.words;
+    let count3 = 0;
+    let inWord = false;
+    let wh = 0;
+    let wlen = 0;
+    let h1 = EXACT_BASIS_12;
+    let h2 = EXACT_BASIS_22;
+    let emitted = 0;
+    let space = false;
+    const n = prepared.length;
+    for (let i = 0; i < n; i++) {
+      const c = prepared.charCodeAt(i);
+      let cls = t[c];
+      let lo = -1;
+      if (cls === HIGH_SURROGATE) {
+        const next = i + 1 < n ? prepared.charCodeAt(i + 1) : 0;
+        if (next >= 56320 && next < 57344) {
+          cls = astralClass(prepared, i);
+          lo = next;
+          i++;
+        } else {
+          cls = OTHER;
+        }
+      }
+      if (cls === WORD) {
+        if (!inWord) {
+          inWord = true;
+          wh = 2166136261 | 0;
+          wlen = 0;
+        }
+        wh = Math.imul(wh ^ c, 16777619);
+        wlen++;
+        if (lo >= 0) {
+          wh = Math.imul(wh ^ lo, 16777619);
+          wlen++;
+        }
+      } else {
+        if (inWord) {
+          inWord = false;
+          if (count3 === words.length) {
+            const w = new Int32Array(words.length * 2);
+            w.set(words);
+            words = w;
+          }
+          words[count3++] = mix322(wh ^ wlen);
+        }
+        if (cls === SPACE) {
+          space = true;
+          continue;
+        }
+        if (strip && cls === PUNCT) continue;
+      }
+      if (space) {
+        if (emitted > 0) {
+          h1 = Math.imul(h1 ^ 32, EXACT_PRIME_12);
+          h2 = Math.imul(h2 ^ 32, EXACT_PRIME_22);
+          emitted++;
+        }
+        space = false;
+      }
+      h1 = Math.imul(h1 ^ c, EXACT_PRIME_12);
+      h2 = Math.imul(h2 ^ c, EXACT_PRIME_22);
+      emitted++;
+      if (lo >= 0) {
+        h1 = Math.imul(h1 ^ lo, EXACT_PRIME_12);
+        h2 = Math.imul(h2 ^ lo, EXACT_PRIME_22);
+        emitted++;
+      }
+    }
+    if (inWord) {
+      if (count3 === words.length) {
+        const w = new Int32Array(words.length * 2);
+        w.set(words);
+        words = w;
+      }
+      words[count3++] = mix322(wh ^ wlen);
+    }
+    finishExact2(h1, h2, emitted, this);
+    this.words = words;
+    this.wordCount = count3;
+    this.exactLength = emitted;
+  }
+};
+var oneOff = new DocumentScanner();
+
+// src/measure/duplicates/lsh.ts
+var MISS_WEIGHT = 0.9;
+var STEPS = 200;
+var BAND_KEY_BITS = 32;
+var WIDTHS = [4, 8, 16, 32];
+function candidateProbability(p, bands, rows) {
+  return 1 - Math.pow(1 - Math.pow(p, rows), bands);
+}
+function signatureBits(rows) {
+  for (const w of WIDTHS) if (w * rows >= BAND_KEY_BITS) return w;
+  return 32;
+}
+function rowAgreement(s, bits) {
+  if (bits >= 32) return s;
+  const c = Math.pow(2, -bits);
+  return s + (1 - s) * c;
+}
+function lshBands(threshold, hashes) {
+  if (!(threshold > 0 && threshold <= 1)) throw new RangeError(`threshold must be in (0, 1], got ${threshold}`);
+  if (!Number.isInteger(hashes) || hashes < 1) throw new RangeError(`hashes must be a positive integer, got ${hashes}`);
+  const key = `${threshold}/${hashes}`;
+  const known = chosen.get(key);
+  if (known) return { ...known };
+  let best = { bands: 1, rows: hashes };
+  let bestCost = Infinity;
+  for (let rows = 1; rows <= hashes; rows++) {
+    const bits = signatureBits(rows);
+    for (let bands = 1; bands * rows <= hashes; bands++) {
+      let falseArea = 0;
+      let missArea = 0;
+      const h = 1 / STEPS;
+      for (let i = 0; i < STEPS; i++) {
+        const s = (i + 0.5) * h;
+        const p = candidateProbability(rowAgreement(s, bits), bands, rows);
+        if (s < threshold) falseArea += p * h;
+        else missArea += (1 - p) * h;
+      }
+      const cost = (1 - MISS_WEIGHT) * falseArea + MISS_WEIGHT * missArea;
+      if (cost < bestCost - 1e-12) {
+        bestCost = cost;
+        best = { bands, rows };
+      }
+    }
+  }
+  chosen.set(key, best);
+  return { ...best };
+}
+var chosen = /* @__PURE__ */ new Map();
+function jaccardFromAgreement(agreeing, hashes, bits) {
+  const p = agreeing / hashes;
+  if (bits >= 32) return p;
+  const c = Math.pow(2, -bits);
+  const j = (p - c) / (1 - c);
+  return j < 0 ? 0 : j > 1 ? 1 : j;
+}
+
+// src/measure/duplicates/format.ts
+var MAGIC = [83, 76, 68, 88];
+var FORMAT_VERSION = 1;
+var HEADER_BYTES = 32;
+var EXACT_BYTES = 8;
+var KIND_EMPTY = 0;
+var KIND_WORDLESS = 1;
+var KIND_FULL = 2;
+function signatureBytes(hashes, bits) {
+  return Math.ceil(hashes * bits / 8);
+}
+function bitsFor(opts) {
+  return signatureBits(lshBands(opts.threshold, opts.hashes).rows);
+}
+function checksum32(bytes2, start, end) {
+  let h = 789265437 ^ end - start;
+  let i = start;
+  for (; i + 3 < end; i += 4) {
+    let k2 = bytes2[i] | bytes2[i + 1] << 8 | bytes2[i + 2] << 16 | bytes2[i + 3] << 24;
+    k2 = Math.imul(k2, 3432918353);
+    k2 = k2 << 15 | k2 >>> 17;
+    h ^= Math.imul(k2, 461845907);
+    h = h << 13 | h >>> 19;
+    h = Math.imul(h, 5) + 3864292196 | 0;
+  }
+  let k = 0;
+  for (let s = 0; i < end; i++, s += 8) k |= bytes2[i] << s;
+  h ^= Math.imul(k, 3432918353);
+  return fmix32(h);
+}
+function parseIndex(blob, verifyChecksum = true) {
+  if (!(blob instanceof Uint8Array)) return { ok: false, reason: "not a byte array" };
+  if (blob.length < HEADER_BYTES) return { ok: false, reason: `truncated: ${blob.length} bytes, shorter than the ${HEADER_BYTES}-byte header` };
+  for (let i = 0; i < 4; i++) {
+    if (blob[i] !== MAGIC[i]) return { ok: false, reason: "not a duplicate index (bad magic bytes)" };
+  }
+  const view = new DataView(blob.buffer, blob.byteOffset, blob.byteLength);
+  const version = view.getUint8(4);
+  if (version !== FORMAT_VERSION) return { ok: false, reason: `format version ${version}, this build reads version ${FORMAT_VERSION}` };
+  const punct = view.getUint8(5);
+  const shingle = view.getUint8(6);
+  const bits = view.getUint8(7);
+  const hashes = view.getUint16(8, true);
+  const threshold = view.getFloat32(12, true);
+  const documents = view.getUint32(16, true);
+  const streamBytes = view.getUint32(20, true);
+  const checksum = view.getUint32(24, true);
+  if (punct > 1 || shingle < 1 || hashes < 1 || ![4, 8, 16, 32].includes(bits)) {
+    return { ok: false, reason: "corrupt header (parameters out of range)" };
+  }
+  const sigBytes = signatureBytes(hashes, bits);
+  const exactOffset = HEADER_BYTES;
+  const signatureOffset = exactOffset + documents * EXACT_BYTES;
+  const streamOffset = signatureOffset + documents * sigBytes;
+  const expected = streamOffset + streamBytes;
+  if (blob.length !== expected) {
+    return {
+      ok: false,
+      reason: blob.length < expected ? `truncated: ${blob.length} bytes, the header announces ${expected} for ${documents} documents` : `${blob.length - expected} unexpected bytes after the ${expected} the header announces`
+    };
+  }
+  if (verifyChecksum && checksum32(blob, HEADER_BYTES, blob.length) !== checksum) {
+    return { ok: false, reason: "corrupt: checksum mismatch" };
+  }
+  return {
+    ok: true,
+    layout: {
+      formatVersion: version,
+      shingle,
+      hashes,
+      signatureBits: bits,
+      punctuation: punct === 1 ? "strip" : "keep",
+      threshold,
+      documents,
+      bytes: blob.length,
+      exactOffset,
+      signatureOffset,
+      signatureBytes: sigBytes,
+      streamOffset,
+      streamBytes
+    }
+  };
+}
+function incompatibility(header, opts) {
+  if (header.shingle !== opts.shingle) return `built with ${header.shingle}-word shingles, joined with ${opts.shingle}`;
+  if (header.hashes !== opts.hashes) return `built with ${header.hashes} hashes, joined with ${opts.hashes}`;
+  if (header.punctuation !== opts.punctuation) return `built with punctuation '${header.punctuation}', joined with '${opts.punctuation}'`;
+  const bits = bitsFor(opts);
+  if (header.signatureBits !== bits) {
+    return `built for threshold ${round(header.threshold)} (${header.signatureBits}-bit values), joined at threshold ${opts.threshold}, which needs ${bits}-bit values`;
+  }
+  return null;
+}
+function round(x) {
+  return Math.round(x * 1e6) / 1e6;
+}
+function inspectIndex(blob) {
+  const r = parseIndex(blob);
+  if (!r.ok) return r;
+  const { formatVersion, shingle, hashes, signatureBits: bits, punctuation, threshold, documents, bytes: bytes2 } = r.layout;
+  return { ok: true, header: { formatVersion, shingle, hashes, signatureBits: bits, punctuation, threshold, documents, bytes: bytes2 } };
+}
+
+// src/measure/duplicates/builder.ts
+var MAX_SHINGLE = 255;
+var MAX_HASHES2 = 65535;
+var MAX_LANGUAGE = (1 << 24) - 1;
+function checkOptions(opts) {
+  const { shingle, hashes, threshold, punctuation } = opts;
+  if (!Number.isInteger(shingle) || shingle < 1 || shingle > MAX_SHINGLE) {
+    throw new RangeError(`duplicates: shingle must be an integer from 1 to ${MAX_SHINGLE} words, got ${shingle}`);
+  }
+  if (!Number.isInteger(hashes) || hashes < 1 || hashes > MAX_HASHES2) {
+    throw new RangeError(`duplicates: hashes must be an integer from 1 to ${MAX_HASHES2}, got ${hashes}`);
+  }
+  if (typeof threshold !== "number" || !(threshold > 0 && threshold <= 1)) {
+    throw new RangeError(`duplicates: threshold must be a number in (0, 1], got ${threshold}`);
+  }
+  if (punctuation !== "keep" && punctuation !== "strip") {
+    throw new RangeError(`duplicates: punctuation must be 'keep' or 'strip', got ${String(punctuation)}`);
+  }
+  return { shingle, hashes, threshold, punctuation };
+}
+function duplicateOptionsFrom(rule) {
+  return checkOptions({ shingle: rule.near.shingle, hashes: rule.near.hashes, threshold: rule.near.threshold, punctuation: rule.punctuation });
+}
+var Bytes = class {
+  data;
+  length = 0;
+  constructor(capacity) {
+    this.data = new Uint8Array(Math.max(16, capacity));
+  }
+  reserve(extra) {
+    if (this.length + extra <= this.data.length) return;
+    let cap = this.data.length * 2;
+    while (cap < this.length + extra) cap *= 2;
+    const d = new Uint8Array(cap);
+    d.set(this.data.subarray(0, this.length));
+    this.data = d;
+  }
+  varint(v) {
+    this.reserve(10);
+    while (v >= 128) {
+      this.data[this.length++] = v % 128 | 128;
+      v = Math.floor(v / 128);
+    }
+    this.data[this.length++] = v;
+  }
+};
+var DuplicateIndexBuilder = class {
+  options;
+  signatureBits;
+  sigBytes;
+  sketcher;
+  scanner = new DocumentScanner();
+  exact;
+  signatures;
+  stream;
+  documents = 0;
+  lastOrdinal = -1;
+  lastLine = 0;
+  finished = false;
+  constructor(opts) {
+    this.options = checkOptions(opts);
+    this.signatureBits = bitsFor(this.options);
+    this.sigBytes = signatureBytes(this.options.hashes, this.signatureBits);
+    this.sketcher = new Sketcher(this.options.shingle, this.options.hashes);
+    this.exact = new Bytes(1024 * EXACT_BYTES);
+    this.signatures = new Bytes(1024 * this.sigBytes);
+    this.stream = new Bytes(4096);
+  }
+  /** Indexes one document; documents must come in increasing ordinal order. */
+  add(doc) {
+    if (this.finished) throw new Error("DuplicateIndexBuilder: add() after finish()");
+    const { ordinal, line, language, text } = doc;
+    if (!Number.isInteger(ordinal) || ordinal <= this.lastOrdinal) {
+      throw new RangeError(`DuplicateIndexBuilder: ordinal ${ordinal} after ${this.lastOrdinal}; documents must be added in increasing ordinal order`);
+    }
+    if (!Number.isInteger(line) || line < 0) throw new RangeError(`DuplicateIndexBuilder: line must be a non-negative integer, got ${line} (ordinal ${ordinal})`);
+    if (!Number.isInteger(language) || language < 0 || language > MAX_LANGUAGE) {
+      throw new RangeError(`DuplicateIndexBuilder: language must be an integer from 0 to ${MAX_LANGUAGE}, got ${language} (ordinal ${ordinal})`);
+    }
+    if (typeof text !== "string") throw new TypeError(`DuplicateIndexBuilder: text must be a string (ordinal ${ordinal})`);
+    this.lastOrdinal = ordinal;
+    const prepared = prepareText(text);
+    const exact = this.exact;
+    exact.reserve(EXACT_BYTES);
+    const sigs = this.signatures;
+    sigs.reserve(this.sigBytes);
+    const sc = this.scanner;
+    sc.scan(prepared, this.options.punctuation === "strip");
+    let kind = KIND_EMPTY;
+    if (sc.exactLength > 0) {
+      writeU32(exact.data, exact.length, sc.exactHigh);
+      writeU32(exact.data, exact.length + 4, sc.exactLow);
+      const count3 = sc.wordCount;
+      if (count3 > 0) {
+        this.sketcher.sketch(sc.words, count3);
+        packSignature(this.sketcher.values, this.signatureBits, sigs.data, sigs.length);
+        kind = KIND_FULL;
+      } else {
+        sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
+        kind = KIND_WORDLESS;
+      }
+    } else {
+      exact.data.fill(0, exact.length, exact.length + EXACT_BYTES);
+      sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
+    }
+    exact.length += EXACT_BYTES;
+    sigs.length += this.sigBytes;
+    const delta = line - this.lastLine;
+    this.lastLine = line;
+    this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
+    this.stream.varint(language * 4 + kind);
+    this.documents++;
+  }
+  /** Returns the number of documents added so far. */
+  get size() {
+    return this.documents;
+  }
+  /** Returns the index blob; the builder cannot be used afterwards. */
+  finish() {
+    if (this.finished) throw new Error("DuplicateIndexBuilder: finish() called twice");
+    this.finished = true;
+    const n = this.documents;
+    const total = HEADER_BYTES + this.exact.length + this.signatures.length + this.stream.length;
+    const blob = new Uint8Array(total);
+    const view = new DataView(blob.buffer);
+    for (let i = 0; i < 4; i++) blob[i] = MAGIC[i];
+    view.setUint8(4, FORMAT_VERSION);
+    view.setUint8(5, this.options.punctuation === "strip" ? 1 : 0);
+    view.setUint8(6, this.options.shingle);
+    view.setUint8(7, this.signatureBits);
+    view.setUint16(8, this.options.hashes, true);
+    view.setFloat32(12, this.options.threshold, true);
+    view.setUint32(16, n, true);
+    view.setUint32(20, this.stream.length, true);
+    let at2 = HEADER_BYTES;
+    blob.set(this.exact.data.subarray(0, this.exact.length), at2);
+    at2 += this.exact.length;
+    blob.set(this.signatures.data.subarray(0, this.signatures.length), at2);
+    at2 += this.signatures.length;
+    blob.set(this.stream.data.subarray(0, this.stream.length), at2);
+    view.setUint32(24, checksum32(blob, HEADER_BYTES, total), true);
+    return blob;
+  }
+};
+function writeU32(d, at2, v) {
+  d[at2] = v & 255;
+  d[at2 + 1] = v >>> 8 & 255;
+  d[at2 + 2] = v >>> 16 & 255;
+  d[at2 + 3] = v >>> 24;
+}
+function packSignature(values, bits, d, at2) {
+  const k = values.length;
+  if (bits === 4) {
+    let i = 0;
+    for (; i + 1 < k; i += 2) d[at2++] = values[i] & 15 | (values[i + 1] & 15) << 4;
+    if (i < k) d[at2] = values[i] & 15;
+  } else if (bits === 8) {
+    for (let i = 0; i < k; i++) d[at2 + i] = values[i] & 255;
+  } else if (bits === 16) {
+    for (let i = 0; i < k; i++) {
+      const v = values[i];
+      d[at2 + 2 * i] = v & 255;
+      d[at2 + 2 * i + 1] = v >>> 8 & 255;
+    }
+  } else {
+    for (let i = 0; i < k; i++) writeU32(d, at2 + 4 * i, values[i]);
+  }
+}
+
+// src/measure/duplicates/join.ts
+var DEFAULT_MAX_CLUSTERS = 20;
+var DEFAULT_MAX_COPIES = 10;
+var DEFAULT_MAX_BUCKET_COMPARISONS = 64;
+var KIND_MASK = 3;
+var IN_NEW_SHARD = 1 << 2;
+var CLASS_HAS_NEW = 1 << 3;
+var CLASS_HAS_EXISTING = 1 << 4;
+var NEAR = 1 << 5;
+var NEAR_EXISTING = 1 << 6;
+var PARTICIPANT = 1 << 7;
+var DuplicateIndexError = class extends Error {
+  shard;
+  reason;
+  constructor(shard, reason) {
+    super(`duplicate index of ${shard}: ${reason}`);
+    this.name = "DuplicateIndexError";
+    this.shard = shard;
+    this.reason = reason;
+  }
+};
+var EQUAL_NIBBLES = new Uint8Array(256);
+for (let x = 0; x < 256; x++) EQUAL_NIBBLES[x] = ((x & 15) === 0 ? 1 : 0) + (x >>> 4 === 0 ? 1 : 0);
+function joinDuplicates(shards, opts) {
+  const options = checkOptions(opts);
+  const maxClusters = opts.maxClusters ?? DEFAULT_MAX_CLUSTERS;
+  const maxCopies = opts.maxCopies ?? DEFAULT_MAX_COPIES;
+  const cap = opts.maxBucketComparisons ?? DEFAULT_MAX_BUCKET_COMPARISONS;
+  for (const [name, v] of [["maxClusters", maxClusters], ["maxCopies", maxCopies], ["maxBucketComparisons", cap]]) {
+    if (!Number.isInteger(v) || v < 0) throw new RangeError(`joinDuplicates: ${name} must be a non-negative integer, got ${v}`);
+  }
+  const { bands, rows } = lshBands(options.threshold, options.hashes);
+  const bits = signatureBits(rows);
+  const k = options.hashes;
+  const indexes = [];
+  const seen = /* @__PURE__ */ new Set();
+  let total = 0;
+  let indexBytes = 0;
+  for (const { shard, index: index2 } of shards) {
+    if (seen.has(shard)) throw new DuplicateIndexError(shard, "shard listed twice");
+    seen.add(shard);
+    const parsed = parseIndex(index2);
+    if (!parsed.ok) throw new DuplicateIndexError(shard, parsed.reason);
+    const why = incompatibility(parsed.layout, options);
+    if (why) throw new DuplicateIndexError(shard, why);
+    indexes.push({ shard, blob: index2, layout: parsed.layout, start: total });
+    total += parsed.layout.documents;
+    indexBytes += index2.length;
+  }
+  const n = total;
+  const starts2 = new Int32Array(indexes.length + 1);
+  indexes.forEach((s, i) => starts2[i] = s.start);
+  starts2[indexes.length] = n;
+  const newNames = new Set(opts.newShards ?? []);
+  const trackExisting = opts.newShards !== void 0;
+  const isNew = indexes.map((s) => newNames.has(s.shard));
+  const flags = new Uint8Array(n);
+  indexes.forEach((s, si) => {
+    const newBit = isNew[si] ? IN_NEW_SHARD : 0;
+    readLocations(s, (i, _line, _language, kind) => {
+      flags[s.start + i] = kind | newBit;
+    });
+  });
+  const hi = new Int32Array(n);
+  let lo = new Int32Array(n);
+  for (const s of indexes) {
+    const view = new DataView(s.blob.buffer, s.blob.byteOffset, s.blob.byteLength);
+    for (let i = 0, at2 = s.layout.exactOffset; i < s.layout.documents; i++, at2 += EXACT_BYTES) {
+      hi[s.start + i] = view.getInt32(at2, true);
+      lo[s.start + i] = view.getInt32(at2 + 4, true);
+    }
+  }
+  const order = new Int32Array(n);
+  const scratch3 = new Int32Array(n);
+  const counts = new Int32Array(65536);
+  radixSort(hi, n, order, scratch3, counts);
+  const rep = new Int32Array(n).fill(-1);
+  for (let p = 0; p < n; ) {
+    let q = p + 1;
+    const h = hi[order[p]];
+    while (q < n && hi[order[q]] === h) q++;
+    let run2 = null;
+    for (let x = p + 1; x < q; x++) {
+      if (lo[order[x]] !== lo[order[p]]) {
+        run2 = Array.from(order.subarray(p, q)).sort((a, b) => lo[a] - lo[b] || a - b);
+        break;
+      }
+    }
+    const members = run2 ?? order.subarray(p, q);
+    for (let x = 0; x < members.length; ) {
+      let y = x + 1;
+      const l = lo[members[x]];
+      while (y < members.length && lo[members[y]] === l) y++;
+      let first = -1;
+      for (let z = x; z < y; z++) {
+        const g = members[z];
+        if ((flags[g] & KIND_MASK) === KIND_EMPTY) continue;
+        if (first < 0) first = g;
+        rep[g] = first;
+        flags[first] = flags[first] | (flags[g] & IN_NEW_SHARD ? CLASS_HAS_NEW : CLASS_HAS_EXISTING);
+      }
+      x = y;
+    }
+    p = q;
+  }
+  const workingExact = flags.byteLength + hi.byteLength + lo.byteLength + order.byteLength + scratch3.byteLength + rep.byteLength + counts.byteLength;
+  const bufA = hi.buffer;
+  const bufB = order.buffer;
+  const bufC = scratch3.buffer;
+  for (let g = 0; g < n; g++) if (rep[g] === g && (flags[g] & KIND_MASK) === KIND_FULL) flags[g] = flags[g] | PARTICIPANT;
+  const keys = hi;
+  lo = new Int32Array(0);
+  const nearOf = new Int32Array(n).fill(-1);
+  const sig = new SignatureReader(indexes, starts2, k, bits);
+  let comparedPairs = 0;
+  let verifiedPairs = 0;
+  let cappedBuckets = 0;
+  const threshold = options.threshold;
+  for (let band = 0; band < bands; band++) {
+    sig.bandKeys(flags, band * rows, rows, keys);
+    radixSort(keys, n, order, scratch3, counts);
+    for (let p = 0; p < n; ) {
+      let q = p + 1;
+      const key = keys[order[p]];
+      while (q < n && keys[order[q]] === key) q++;
+      if (key === 0 || q - p === 1) {
+        p = q;
+        continue;
+      }
+      if (q - p > cap + 1) cappedBuckets++;
+      for (let x = p + 1; x < q; x++) {
+        const i = order[x];
+        const fi = flags[i];
+        if (fi & NEAR && !(trackExisting && fi & (CLASS_HAS_EXISTING | CLASS_HAS_NEW))) continue;
+        const stop = Math.max(p, x - cap);
+        for (let y = x - 1; y >= stop; y--) {
+          const j = order[y];
+          const f = flags[i];
+          const fj = flags[j];
+          const needNear = (f & NEAR) === 0;
+          const wantI = trackExisting && wantsExisting(f) && (fj & CLASS_HAS_EXISTING) !== 0;
+          const wantJ = trackExisting && wantsExisting(fj) && (f & CLASS_HAS_EXISTING) !== 0;
+          if (!needNear && !wantI && !wantJ) {
+            if (!trackExisting) break;
+            continue;
+          }
+          comparedPairs++;
+          if (sig.jaccard(i, j) < threshold) continue;
+          verifiedPairs++;
+          if (needNear) {
+            flags[i] = flags[i] | NEAR;
+            nearOf[i] = j;
+          }
+          if (wantI) flags[i] = flags[i] | NEAR_EXISTING;
+          if (wantJ) flags[j] = flags[j] | NEAR_EXISTING;
+        }
+      }
+      p = q;
+    }
+  }
+  const workingBytes = Math.max(
+    workingExact,
+    flags.byteLength + rep.byteLength + nearOf.byteLength + bufA.byteLength + bufB.byteLength + bufC.byteLength + counts.byteLength
+  );
+  const rootOf = new Int32Array(bufA, 0, n);
+  const nearSize = new Int32Array(bufB, 0, n).fill(0);
+  const exactSize = new Int32Array(bufC, 0, n).fill(0);
+  for (let g = 0; g < n; g++) {
+    const r = rep[g];
+    if (r >= 0) exactSize[r] = exactSize[r] + 1;
+    if (r === g && (flags[g] & KIND_MASK) === KIND_FULL) {
+      const j = nearOf[g];
+      rootOf[g] = j < 0 ? g : rootOf[j];
+      nearSize[rootOf[g]] = nearSize[rootOf[g]] + 1;
+    } else {
+      rootOf[g] = -1;
+    }
+  }
+  const tallyOf = () => ({ docs: 0, emptyDocs: 0, wordlessDocs: 0, exactDocs: 0, nearDocs: 0 });
+  const totalTally = tallyOf();
+  const perShard = [];
+  const perLanguage2 = /* @__PURE__ */ new Map();
+  const against = trackExisting ? {
+    newShards: [...newNames],
+    unknownShards: [...newNames].filter((s) => !seen.has(s)),
+    docs: 0,
+    exactDocs: 0,
+    nearDocs: 0,
+    perShard: []
+  } : void 0;
+  indexes.forEach((s, si) => {
+    const st = tallyOf();
+    const ag = { shard: s.shard, docs: 0, exactDocs: 0, nearDocs: 0 };
+    readLocations(s, (i, _line, language, kind) => {
+      const g = s.start + i;
+      let lt = perLanguage2.get(language);
+      if (!lt) perLanguage2.set(language, lt = tallyOf());
+      const r = rep[g];
+      const exact = r >= 0 && r !== g;
+      const near = !exact && r === g && (flags[g] & NEAR) !== 0;
+      count(st, kind, exact, near);
+      count(lt, kind, exact, near);
+      count(totalTally, kind, exact, near);
+      if (against && isNew[si]) {
+        ag.docs++;
+        if (r >= 0) {
+          const fr = flags[r];
+          if (fr & CLASS_HAS_EXISTING) ag.exactDocs++;
+          else if (fr & NEAR_EXISTING) ag.nearDocs++;
+        }
+      }
+    });
+    perShard.push({ shard: s.shard, ...st });
+    if (against && isNew[si]) {
+      against.perShard.push(ag);
+      against.docs += ag.docs;
+      against.exactDocs += ag.exactDocs;
+      against.nearDocs += ag.nearDocs;
+    }
+  });
+  let exactClusters = 0;
+  let nearClusters = 0;
+  const top = new TopClusters(maxClusters);
+  for (let g = 0; g < n; g++) {
+    if (exactSize[g] >= 2) {
+      exactClusters++;
+      top.offer(g, exactSize[g], "exact");
+    }
+    if (nearSize[g] >= 2) {
+      nearClusters++;
+      top.offer(g, nearSize[g], "near");
+    }
+  }
+  const chosen2 = top.sorted();
+  const exactSlot = /* @__PURE__ */ new Map();
+  const nearSlot = /* @__PURE__ */ new Map();
+  chosen2.forEach((c, idx) => (c.kind === "exact" ? exactSlot : nearSlot).set(c.first, idx));
+  const copies = chosen2.map(() => []);
+  for (let g = 0; g < n; g++) {
+    const r = rep[g];
+    if (r >= 0 && r !== g) {
+      const slot = exactSlot.get(r);
+      if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
+    }
+    const t = rootOf[g];
+    if (t >= 0 && t !== g) {
+      const slot = nearSlot.get(t);
+      if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
+    }
+  }
+  const wanted = /* @__PURE__ */ new Set();
+  chosen2.forEach((c, idx) => {
+    wanted.add(c.first);
+    for (const g of copies[idx]) {
+      wanted.add(g);
+      if (c.kind === "near") wanted.add(nearOf[g]);
+    }
+  });
+  const where2 = locate(indexes, starts2, wanted);
+  const clusters = chosen2.map((c, idx) => ({
+    kind: c.kind,
+    first: where2.get(c.first),
+    size: c.size,
+    copies: copies[idx].map((g) => {
+      const at2 = where2.get(g);
+      if (c.kind === "exact") return { ...at2 };
+      const of = nearOf[g];
+      return { ...at2, jaccard: round4(sig.jaccard(g, of)), of: where2.get(of) };
+    }),
+    copiesOmitted: c.size - 1 - copies[idx].length
+  }));
+  return {
+    options,
+    total: totalTally,
+    exactDocs: totalTally.exactDocs,
+    nearDocs: totalTally.nearDocs,
+    perShard,
+    perLanguage: [...perLanguage2].sort((a, b) => a[0] - b[0]).map(([language, t]) => ({ language, ...t })),
+    clusters,
+    exactClusters,
+    nearClusters,
+    clustersOmitted: exactClusters + nearClusters - clusters.length,
+    ...against ? { againstExisting: against } : {},
+    statistics: {
+      bands,
+      rows,
+      signatureBits: bits,
+      comparedPairs,
+      verifiedPairs,
+      cappedBuckets,
+      workingBytes,
+      workingBytesPerDocument: n ? round4(workingBytes / n) : 0,
+      indexBytes,
+      indexBytesPerDocument: n ? round4(indexBytes / n) : 0
+    }
+  };
+}
+function count(t, kind, exact, near) {
+  t.docs++;
+  if (kind === KIND_EMPTY) t.emptyDocs++;
+  if (kind === KIND_WORDLESS) t.wordlessDocs++;
+  if (exact) t.exactDocs++;
+  if (near) t.nearDocs++;
+}
+function wantsExisting(f) {
+  return (f & (CLASS_HAS_NEW | CLASS_HAS_EXISTING | NEAR_EXISTING)) === CLASS_HAS_NEW;
+}
+function round4(x) {
+  return Math.round(x * 1e4) / 1e4;
+}
+function readLocations(s, visit) {
+  const b = s.blob;
+  let at2 = s.layout.streamOffset;
+  const end = at2 + s.layout.streamBytes;
+  let line = 0;
+  const varint = () => {
+    let v = 0;
+    let scale = 1;
+    for (let shift = 0; shift < 49; shift += 7) {
+      if (at2 >= end) throw new DuplicateIndexError(s.shard, "corrupt: location stream ends inside a record");
+      const byte = b[at2++];
+      v += (byte & 127) * scale;
+      if (byte < 128) return v;
+      scale *= 128;
+    }
+    throw new DuplicateIndexError(s.shard, "corrupt: over-long number in the location stream");
+  };
+  for (let i = 0; i < s.layout.documents; i++) {
+    const z = varint();
+    line += z % 2 === 0 ? z / 2 : -(z + 1) / 2;
+    const tag = varint();
+    const kind = tag % 4;
+    if (kind > KIND_FULL) throw new DuplicateIndexError(s.shard, `corrupt: unknown document kind ${kind}`);
+    visit(i, line, Math.floor(tag / 4), kind);
+  }
+  if (at2 !== end) throw new DuplicateIndexError(s.shard, `corrupt: ${end - at2} bytes left after the last location record`);
+}
+function locate(indexes, starts2, wanted) {
+  const out = /* @__PURE__ */ new Map();
+  const byShard = /* @__PURE__ */ new Map();
+  for (const g of wanted) {
+    const si = shardOf(starts2, g);
+    let set = byShard.get(si);
+    if (!set) byShard.set(si, set = /* @__PURE__ */ new Set());
+    set.add(g);
+  }
+  for (const [si, set] of byShard) {
+    const s = indexes[si];
+    readLocations(s, (i, line, language) => {
+      const g = s.start + i;
+      if (set.has(g)) out.set(g, { shard: s.shard, line, language });
+    });
+  }
+  return out;
+}
+function shardOf(starts2, g) {
+  let a = 0;
+  let b = starts2.length - 2;
+  while (a < b) {
+    const mid = a + b + 1 >>> 1;
+    if (starts2[mid] <= g) a = mid;
+    else b = mid - 1;
+  }
+  while (a + 1 < starts2.length - 1 && starts2[a + 1] <= g) a++;
+  return a;
+}
+function radixSort(keys, n, out, scratch3, counts) {
+  counts.fill(0);
+  for (let i = 0; i < n; i++) counts[keys[i] & 65535]++;
+  let sum = 0;
+  for (let d = 0; d < 65536; d++) {
+    const c = counts[d];
+    counts[d] = sum;
+    sum += c;
+  }
+  for (let i = 0; i < n; i++) scratch3[counts[keys[i] & 65535]++] = i;
+  counts.fill(0);
+  for (let i = 0; i < n; i++) counts[keys[i] >>> 16]++;
+  sum = 0;
+  for (let d = 0; d < 65536; d++) {
+    const c = counts[d];
+    counts[d] = sum;
+    sum += c;
+  }
+  for (let p = 0; p < n; p++) {
+    const i = scratch3[p];
+    out[counts[keys[i] >>> 16]++] = i;
+  }
+}
+var SignatureReader = class {
+  constructor(indexes, starts2, k, bits) {
+    this.starts = starts2;
+    this.k = k;
+    this.bits = bits;
+    this.blobs = indexes.map((s) => s.blob);
+    this.offsets = indexes.map((s) => s.layout.signatureOffset);
+    this.bytes = indexes[0]?.layout.signatureBytes ?? 0;
+  }
+  starts;
+  k;
+  bits;
+  blobs;
+  offsets;
+  bytes;
+  lastShard = 0;
+  /** Returns [blob, byte offset] of global document g's signature. */
+  find(g) {
+    const st = this.starts;
+    let s = this.lastShard;
+    if (!(st[s] <= g && g < st[s + 1])) s = this.lastShard = shardOf(st, g);
+    return s;
+  }
+  /** Returns the estimated Jaccard similarity of two documents from their stored values. */
+  jaccard(a, b) {
+    const sa = this.find(a);
+    const oa = this.offsets[sa] + (a - this.starts[sa]) * this.bytes;
+    const sb = this.find(b);
+    const ob = this.offsets[sb] + (b - this.starts[sb]) * this.bytes;
+    const same = agreement(this.blobs[sa], oa, this.blobs[sb], ob, this.bytes, this.k, this.bits);
+    return jaccardFromAgreement(same, this.k, this.bits);
+  }
+  /** Writes into keys[g] the band key (values [first, first + rows)) of every document taking part in near detection, and 0 into the others'. */
+  bandKeys(flags, first, rows, keys) {
+    const bits = this.bits;
+    const nb = this.bytes;
+    for (let s = 0; s < this.blobs.length; s++) {
+      const blob = this.blobs[s];
+      const end = this.starts[s + 1];
+      for (let g = this.starts[s], off = this.offsets[s]; g < end; g++, off += nb) {
+        keys[g] = flags[g] & PARTICIPANT ? bandKey(blob, off, bits, first, rows) || 1 : 0;
+      }
+    }
+  }
+};
+function agreement(a, oa, b, ob, bytes2, k, bits) {
+  let same = 0;
+  if (bits === 4) {
+    for (let i = 0; i < bytes2; i++) same += EQUAL_NIBBLES[a[oa + i] ^ b[ob + i]];
+    if (k % 2 === 1) same--;
+  } else {
+    const w = bits / 8;
+    for (let i = 0; i < bytes2; i += w) {
+      let eq = true;
+      for (let j = 0; j < w; j++) if (a[oa + i + j] !== b[ob + i + j]) eq = false;
+      if (eq) same++;
+    }
+  }
+  return same;
+}
+function bandKey(blob, off, bits, first, rows) {
+  let h = 1013904242 ^ first;
+  for (let v = first; v < first + rows; v++) {
+    let x;
+    if (bits === 4) x = blob[off + (v >>> 1)] >>> ((v & 1) << 2) & 15;
+    else if (bits === 8) x = blob[off + v];
+    else if (bits === 16) x = blob[off + 2 * v] | blob[off + 2 * v + 1] << 8;
+    else x = blob[off + 4 * v] | blob[off + 4 * v + 1] << 8 | blob[off + 4 * v + 2] << 16 | blob[off + 4 * v + 3] << 24;
+    h = Math.imul(h ^ x, 16777619);
+    h = h << 13 | h >>> 19;
+  }
+  h ^= h >>> 16;
+  h = Math.imul(h, 2246822507);
+  h ^= h >>> 13;
+  h = Math.imul(h, 3266489909);
+  return h ^ h >>> 16;
+}
+var TopClusters = class {
+  constructor(limit) {
+    this.limit = limit;
+  }
+  limit;
+  items = [];
+  offer(first, size, kind) {
+    if (this.limit === 0) return;
+    this.items.push({ first, size, kind });
+    if (this.items.length >= 2 * this.limit && this.items.length >= 1024) this.cut();
+  }
+  sorted() {
+    this.cut();
+    return this.items;
+  }
+  cut() {
+    this.items.sort((a, b) => b.size - a.size || a.first - b.first || (a.kind === b.kind ? 0 : a.kind === "exact" ? -1 : 1));
+    if (this.items.length > this.limit) this.items.length = this.limit;
+  }
+};
+
+// src/measure/duplicates/contamination.ts
+var mix323 = mix32;
+var mix32b4 = mix32b;
+var DEFAULT_NGRAM2 = 13;
+var BASE_1 = 625341585;
+var BASE_2 = 1481765933;
+var LOAD = 0.5;
+var INDEX_VERSION = 1;
+function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
+  if (!Number.isInteger(ngram) || ngram < 1) throw new RangeError(`contamination: ngram must be a positive integer, got ${ngram}`);
+  const buf = wordBuffer(2);
+  const grams = [];
+  const lengths = /* @__PURE__ */ new Set();
+  let total = 0;
+  let shortItems = 0;
+  let emptyItems = 0;
+  let id1 = Math.imul(2654435769 ^ INDEX_VERSION, 16777619) ^ ngram;
+  let id2 = Math.imul(2135587861 ^ INDEX_VERSION, 1540483477) ^ ngram;
+  const fold2 = (x) => {
+    id1 = Math.imul(id1 ^ x, 16777619);
+    id1 = id1 << 13 | id1 >>> 19;
+    id2 = Math.imul(id2 ^ x, 1540483477);
+    id2 = id2 << 11 | id2 >>> 21;
+  };
+  items.forEach((item2, idx) => {
+    if (typeof item2?.text !== "string") throw new TypeError(`contamination: item ${idx} (${item2?.file}:${item2?.line}) has no text`);
+    const words = hashWords(prepareText(item2.text), buf);
+    for (let i = 0; i < item2.file.length; i++) fold2(item2.file.charCodeAt(i));
+    fold2(65534);
+    fold2(item2.line);
+    for (let i = 0; i < words; i++) fold2(buf.lane1[i]);
+    fold2(65535);
+    if (words === 0) {
+      emptyItems++;
+      grams.push({ l1: new Int32Array(0), l2: new Int32Array(0), count: 0 });
+      return;
+    }
+    const m = Math.min(ngram, words);
+    if (words < ngram) shortItems++;
+    lengths.add(m);
+    const count3 = words - m + 1;
+    const l1 = new Int32Array(count3);
+    const l2 = new Int32Array(count3);
+    rollGrams(buf, words, m, l1, l2);
+    grams.push({ l1, l2, count: count3 });
+    total += count3;
+  });
+  let size = 16;
+  while (size * LOAD < total) size *= 2;
+  const lane1 = new Int32Array(size);
+  const lane2 = new Int32Array(size);
+  const item = new Int32Array(size).fill(-1);
+  const mask = size - 1;
+  let distinct = 0;
+  grams.forEach((g, idx) => {
+    for (let i = 0; i < g.count; i++) {
+      const a = g.l1[i];
+      const b = g.l2[i];
+      let slot = a & mask;
+      while (item[slot] >= 0 && !(lane1[slot] === a && lane2[slot] === b)) slot = slot + 1 & mask;
+      if (item[slot] < 0) {
+        lane1[slot] = a;
+        lane2[slot] = b;
+        item[slot] = idx;
+        distinct++;
+      }
+    }
+  });
+  return {
+    id: hex64(mix323(id1 ^ items.length), mix32b4(id2 + items.length)),
+    ngram,
+    items: items.length,
+    grams: distinct,
+    shortItems,
+    emptyItems,
+    lengths: [...lengths].sort((a, b) => b - a),
+    table: { lane1, lane2, item, mask },
+    sources: items.map((it) => ({ file: it.file, line: it.line }))
+  };
+}
+function rollGrams(buf, count3, m, l1, l2) {
+  const w1 = buf.lane1;
+  const w2 = buf.lane2;
+  let top1 = 1;
+  let top2 = 1;
+  for (let j = 1; j < m; j++) {
+    top1 = Math.imul(top1, BASE_1);
+    top2 = Math.imul(top2, BASE_2);
+  }
+  let h1 = 0;
+  let h2 = 0;
+  for (let j = 0; j < m; j++) {
+    h1 = Math.imul(h1, BASE_1) + w1[j] | 0;
+    h2 = Math.imul(h2, BASE_2) + w2[j] | 0;
+  }
+  l1[0] = mix323(h1 ^ m);
+  l2[0] = mix32b4(h2 + m);
+  for (let i = 1; i + m <= count3; i++) {
+    h1 = Math.imul(h1 - Math.imul(w1[i - 1], top1) | 0, BASE_1) + w1[i + m - 1] | 0;
+    h2 = Math.imul(h2 - Math.imul(w2[i - 1], top2) | 0, BASE_2) + w2[i + m - 1] | 0;
+    l1[i] = mix323(h1 ^ m);
+    l2[i] = mix32b4(h2 + m);
+  }
+}
+var scratch = { buf: wordBuffer(2), l1: new Int32Array(1024), l2: new Int32Array(1024) };
+function findContamination(index2, text) {
+  const buf = scratch.buf;
+  const words = hashWords(prepareText(text), buf);
+  const { lane1, lane2, item, mask } = index2.table;
+  let best = -1;
+  for (const m of index2.lengths) {
+    if (words < m) continue;
+    const count3 = words - m + 1;
+    if (scratch.l1.length < count3) {
+      scratch.l1 = new Int32Array(count3 * 2);
+      scratch.l2 = new Int32Array(count3 * 2);
+    }
+    const l1 = scratch.l1;
+    const l2 = scratch.l2;
+    rollGrams(buf, words, m, l1, l2);
+    for (let i = 0; i < count3; i++) {
+      const a = l1[i];
+      const b = l2[i];
+      let slot = a & mask;
+      for (; ; ) {
+        const it = item[slot];
+        if (it < 0) break;
+        if (lane1[slot] === a && lane2[slot] === b) {
+          if (best < 0 || it < best) best = it;
+          break;
+        }
+        slot = slot + 1 & mask;
+      }
+      if (best === 0) break;
+    }
+    if (best === 0) break;
+  }
+  return best < 0 ? null : { ...index2.sources[best] };
+}
+
 // src/results/serialize.ts
 function storedShardResult(r) {
   const { duplicateIndex, ...rest } = r;
@@ -4366,6 +5718,10 @@ var ResultCache = class {
         return void 0;
       }
       this.hits += 1;
+      if (r.duplicateIndex && !inspectIndex(r.duplicateIndex).ok) {
+        this.misses += 1;
+        return void 0;
+      }
       const moved = { ...r, path: at2.path };
       if (at2.subset === void 0) delete moved.subset;
       else moved.subset = at2.subset;
@@ -6183,7 +7539,7 @@ var francAstralClasses;
 function francClasses() {
   if (francClassBmp) return francClassBmp;
   const table2 = new Uint8Array(65536);
-  const starts = [];
+  const starts2 = [];
   const classes2 = [];
   for (let r = 0; r < FRANC_RANGE_STARTS.length; r++) {
     const start = FRANC_RANGE_STARTS[r];
@@ -6191,22 +7547,22 @@ function francClasses() {
     const cls = FRANC_RANGE_CLASSES[r];
     if (start < 65536) table2.fill(cls, start, Math.min(end, 65536));
     if (end > 65536) {
-      starts.push(Math.max(start, 65536));
+      starts2.push(Math.max(start, 65536));
       classes2.push(cls);
     }
   }
-  francAstralStarts = Int32Array.from(starts);
+  francAstralStarts = Int32Array.from(starts2);
   francAstralClasses = Uint8Array.from(classes2);
   francClassBmp = table2;
   return table2;
 }
 function astralFrancClass(cp) {
-  const starts = francAstralStarts;
+  const starts2 = francAstralStarts;
   let lo = 0;
-  let hi = starts.length - 1;
+  let hi = starts2.length - 1;
   while (lo < hi) {
     const midpoint = lo + hi + 1 >> 1;
-    if (starts[midpoint] <= cp) lo = midpoint;
+    if (starts2[midpoint] <= cp) lo = midpoint;
     else hi = midpoint - 1;
   }
   return francAstralClasses[lo];
@@ -6326,21 +7682,21 @@ function loadProfiles() {
 function invert(group, languages) {
   const models = profiles.get(group);
   const perLanguage2 = languages.map((language) => {
-    const rankOf2 = /* @__PURE__ */ new Map();
+    const rankOf = /* @__PURE__ */ new Map();
     const model = models.get(language).split("|");
     for (let r = model.length - 1; r >= 0; r--) {
       const t = model[r];
-      rankOf2.set(internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), false), r);
+      rankOf.set(internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), false), r);
     }
-    return rankOf2;
+    return rankOf;
   });
   const offsets2 = new Int32Array(internCount + 1);
-  for (const rankOf2 of perLanguage2) for (const id of rankOf2.keys()) offsets2[id + 1] = offsets2[id + 1] + 1;
+  for (const rankOf of perLanguage2) for (const id of rankOf.keys()) offsets2[id + 1] = offsets2[id + 1] + 1;
   for (let t = 0; t < internCount; t++) offsets2[t + 1] = offsets2[t + 1] + offsets2[t];
   const fill = offsets2.slice(0, internCount);
   const entries = new Int32Array(offsets2[internCount]);
-  perLanguage2.forEach((rankOf2, l) => {
-    for (const [id, rank2] of rankOf2) {
+  perLanguage2.forEach((rankOf, l) => {
+    for (const [id, rank2] of rankOf) {
       const at2 = fill[id];
       fill[id] = at2 + 1;
       entries[at2] = l << 16 | rank2 + 1;
@@ -9986,7 +11342,7 @@ var astralIds;
 function bmpScriptIds() {
   if (bmp) return bmp;
   const table2 = new Uint8Array(65536);
-  const starts = [];
+  const starts2 = [];
   const ids = [];
   for (let r = 0; r < SCRIPT_RANGE_STARTS.length; r++) {
     const start = SCRIPT_RANGE_STARTS[r];
@@ -9994,23 +11350,23 @@ function bmpScriptIds() {
     const id = SCRIPT_RANGE_IDS[r];
     if (start < 65536) table2.fill(id, start, Math.min(end, 65536));
     if (end > 65536) {
-      starts.push(Math.max(start, 65536));
+      starts2.push(Math.max(start, 65536));
       ids.push(id);
     }
   }
-  astralStarts = Int32Array.from(starts);
+  astralStarts = Int32Array.from(starts2);
   astralIds = Uint8Array.from(ids);
   bmp = table2;
   return table2;
 }
 function astralScriptId(cp) {
   if (!astralStarts) bmpScriptIds();
-  const starts = astralStarts;
+  const starts2 = astralStarts;
   let lo = 0;
-  let hi = starts.length - 1;
+  let hi = starts2.length - 1;
   while (lo < hi) {
     const midpoint = lo + hi + 1 >> 1;
-    if (starts[midpoint] <= cp) lo = midpoint;
+    if (starts2[midpoint] <= cp) lo = midpoint;
     else hi = midpoint - 1;
   }
   return astralIds[lo];
@@ -10054,7 +11410,7 @@ function dominantScriptOf(profile) {
 }
 
 // src/measure/language.ts
-var OTHER = "other";
+var OTHER2 = "other";
 var UNDETERMINED = "und";
 var twoLetterCodes;
 var bibliographicCodes;
@@ -10099,13 +11455,13 @@ function createLanguageDetector(languages, detection) {
   const labelWith = (route, text) => route === null ? UNDETERMINED : "direct" in route ? route.direct : route.labeller(text);
   const decide = (detected) => ({
     detected,
-    language: detected === UNDETERMINED ? UNDETERMINED : keyOfLabel.get(detected) ?? OTHER
+    language: detected === UNDETERMINED ? UNDETERMINED : keyOfLabel.get(detected) ?? OTHER2
   });
   return {
     detect(text, dominantScript, letters) {
       if (dominantScript === null || letters < detection.minChars) return { detected: UNDETERMINED, language: UNDETERMINED };
       const route = routeOf(dominantScript);
-      if (route === null) return { detected: UNDETERMINED, language: OTHER };
+      if (route === null) return { detected: UNDETERMINED, language: OTHER2 };
       let detected = labelWith(route, text);
       if (detected === UNDETERMINED && text.length > MAX_LENGTH) {
         const sampleScript = dominantScriptOf(scriptProfile(text.slice(0, MAX_LENGTH)));
@@ -10121,7 +11477,7 @@ function createLanguageDetector(languages, detection) {
       if (key === void 0) {
         const subtag = parse(trimmed.replace(/_/g, "-"), { forgiving: true }).language;
         const code = subtag ? iso6393Of(subtag) : void 0;
-        key = code && keyOfLabel.get(code) || OTHER;
+        key = code && keyOfLabel.get(code) || OTHER2;
       }
       if (declaredCache.size < 1e4) declaredCache.set(value, key);
       return key;
@@ -12625,7 +13981,7 @@ var WORD_BREAK_RANGE_VALUES = [
 ];
 
 // src/measure/words.ts
-var OTHER2 = 0;
+var OTHER3 = 0;
 var ALETTER = 1;
 var HEBREW_LETTER = 2;
 var NUMERIC = 3;
@@ -12646,7 +14002,7 @@ var PENDING = 2;
 var SEGMENTER_LOCALE = "und";
 var segmenter;
 var classes;
-function classTable() {
+function classTable2() {
   if (classes) return classes;
   const table2 = new Uint8Array(65536);
   for (let r = 0; r < WORD_BREAK_RANGE_STARTS.length; r++) {
@@ -12656,7 +14012,7 @@ function classTable() {
   let probe = "";
   for (let cp = 0; cp < 65536; cp++) {
     const cls = table2[cp] & CLASS_MASK;
-    if (cls !== OTHER2 && cls !== NEEDS_SEGMENTER) probe += String.fromCharCode(cp);
+    if (cls !== OTHER3 && cls !== NEEDS_SEGMENTER) probe += String.fromCharCode(cp);
   }
   for (const m of probe.matchAll(new RegExp("\\P{Assigned}", "gu"))) {
     const cp = m[0].charCodeAt(0);
@@ -12671,7 +14027,7 @@ function wordSegmenter() {
 }
 var offsets = new Int32Array(1024);
 function scan(text, record) {
-  const table2 = classTable();
+  const table2 = classTable2();
   const n = text.length;
   let count3 = 0;
   let state = OUT;
@@ -12680,8 +14036,8 @@ function scan(text, record) {
   let coreEnd = 0;
   let midAt = 0;
   let midEnd = 0;
-  let last = OTHER2;
-  let mid = OTHER2;
+  let last = OTHER3;
+  let mid = OTHER3;
   let hasCore = false;
   let connectors = 0;
   for (let i = 0; i < n; i++) {
@@ -12865,9 +14221,9 @@ function createMeasurer(settings) {
     const dominantScript = letters === 0 ? null : SCRIPT_NAMES[dominant];
     const { detected, language } = detector.detect(text, dominantScript, letters);
     const declared = doc.declaredLanguage === void 0 ? void 0 : detector.declared(doc.declaredLanguage);
-    const expected = declared !== void 0 && declared !== OTHER ? declared : language;
+    const expected = declared !== void 0 && declared !== OTHER2 ? declared : language;
     let purity = null;
-    const expectedScripts = expected === OTHER || expected === UNDETERMINED ? void 0 : detector.scriptsOf(expected);
+    const expectedScripts = expected === OTHER2 || expected === UNDETERMINED ? void 0 : detector.scriptsOf(expected);
     if (expectedScripts !== void 0 && letters > 0) {
       let own = 0;
       for (const name of expectedScripts) own += scripts[name] ?? 0;
@@ -12888,1352 +14244,6 @@ function createMeasurer(settings) {
     if (declared !== void 0) measure.declared = declared;
     return measure;
   };
-}
-
-// src/measure/duplicates/hash.ts
-function mix32(h) {
-  h ^= h >>> 16;
-  h = Math.imul(h, 2246822507);
-  h ^= h >>> 13;
-  h = Math.imul(h, 3266489909);
-  return h ^ h >>> 16;
-}
-function mix32b(h) {
-  h ^= h >>> 16;
-  h = Math.imul(h, 2146121005);
-  h ^= h >>> 15;
-  h = Math.imul(h, 2221713035);
-  return h ^ h >>> 16;
-}
-function fmix32(h) {
-  return mix32(h) >>> 0;
-}
-var EXACT_BASIS_1 = 2166136261 | 0;
-var EXACT_BASIS_2 = 1818371886 | 0;
-var EXACT_PRIME_1 = 16777619;
-var EXACT_PRIME_2 = 1540483477;
-function finishExact(h1, h2, length, out) {
-  h1 ^= length;
-  h2 = h2 + length | 0;
-  h1 = h1 + h2 | 0;
-  h2 = h2 + h1 | 0;
-  h1 = mix32(h1);
-  h2 = mix32b(h2);
-  h1 = h1 + h2 | 0;
-  h2 = h2 + h1 | 0;
-  out.exactHigh = h1 >>> 0;
-  out.exactLow = h2 >>> 0;
-}
-function hex64(hi, lo) {
-  return (hi >>> 0).toString(16).padStart(8, "0") + (lo >>> 0).toString(16).padStart(8, "0");
-}
-
-// src/measure/duplicates/minhash.ts
-var mix32b2 = mix32b;
-var ROLL_BASE = 625341585;
-var FILL_ROUNDS = 8;
-var PROBE_TABLE = 32;
-var MAX_HASHES = 65535;
-var Sketcher = class {
-  shingle;
-  hashes;
-  /** The last signature: one 32-bit value per bin, valid until the next call. */
-  values;
-  rounds;
-  shingles;
-  lengthSeed;
-  fillRounds;
-  /** `fillRounds` is for experiments (scripts/bench-duplicates.mjs): 1 is plain one-permutation hashing with densification, Infinity fills every bin by rounds. Signatures are comparable only at equal values. */
-  constructor(shingle, hashes, fillRounds = FILL_ROUNDS) {
-    if (!Number.isInteger(hashes) || hashes < 1 || hashes > MAX_HASHES) throw new RangeError(`hashes must be an integer from 1 to ${MAX_HASHES}, got ${hashes}`);
-    if (!Number.isInteger(shingle) || shingle < 1) throw new RangeError(`shingle must be a positive integer, got ${shingle}`);
-    if (!(fillRounds >= 1)) throw new RangeError(`fillRounds must be at least 1, got ${fillRounds}`);
-    this.shingle = shingle;
-    this.hashes = hashes;
-    this.fillRounds = fillRounds;
-    this.values = new Int32Array(hashes);
-    this.rounds = new Int32Array(hashes);
-    this.shingles = new Int32Array(1024);
-    this.lengthSeed = new Int32Array(shingle + 1);
-    for (let m = 0; m <= shingle; m++) this.lengthSeed[m] = mix32b2(1663821227 + m);
-  }
-  /**
-   * Returns the number of shingles of a document given its word hashes (0 when it has no words,
-   * and then `values` is untouched), leaving its signature in `values`. A document with fewer
-   * words than one shingle gets one shingle made of all its words.
-   */
-  sketch(words, count3) {
-    if (count3 === 0) return 0;
-    const n = this.shingle;
-    const m = count3 < n ? count3 : n;
-    const shingleCount = count3 < n ? 1 : count3 - n + 1;
-    if (this.shingles.length < shingleCount) this.shingles = new Int32Array(shingleCount * 2);
-    const sh = this.shingles;
-    let top = 1;
-    for (let j = 1; j < m; j++) top = Math.imul(top, ROLL_BASE);
-    let h = 0;
-    for (let j = 0; j < m; j++) h = Math.imul(h, ROLL_BASE) + words[j] | 0;
-    const seed = this.lengthSeed[m];
-    sh[0] = mix(h ^ seed);
-    for (let i = 1; i < shingleCount; i++) {
-      h = Math.imul(h - Math.imul(words[i - 1], top) | 0, ROLL_BASE) + words[i + m - 1] | 0;
-      sh[i] = mix(h ^ seed);
-    }
-    this.fill(sh, shingleCount);
-    return shingleCount;
-  }
-  /** Returns `values` filled with the signature of a set given as `count` 32-bit hashes in `set` (duplicates allowed; count ≥ 1). */
-  fill(set, count3) {
-    const k = this.hashes;
-    const val = this.values;
-    const rnd = this.rounds;
-    rnd.fill(-1);
-    let empty = k;
-    for (let i = 0; i < count3; i++) {
-      const x = set[i];
-      const b = Math.imul(x >>> 16, k) >>> 16;
-      const r = rnd[b];
-      if (r < 0) {
-        rnd[b] = 0;
-        val[b] = x;
-        empty--;
-      } else if (x < val[b]) {
-        val[b] = x;
-      }
-    }
-    const rounds = this.fillRounds;
-    for (let t = 1; empty > 0 && t < rounds; t++) {
-      const ts = Math.imul(t, 2654435761);
-      for (let i = 0; i < count3; i++) {
-        const x = mix(set[i] ^ ts);
-        const b = Math.imul(x >>> 16, k) >>> 16;
-        const r = rnd[b];
-        if (r < 0) {
-          rnd[b] = t;
-          val[b] = x;
-          empty--;
-        } else if (r === t && x < val[b]) {
-          val[b] = x;
-        }
-      }
-    }
-    if (empty > 0) this.densify();
-    return val;
-  }
-  /**
-   * Fills each still-empty bin with the value of the first filled bin along a probe sequence
-   * that depends only on the bin (optimal densification, Shrivastava 2017): two sets copy from
-   * the same bin exactly when it is the first one filled in both, so agreement stays ∝ Jaccard.
-   */
-  densify() {
-    const k = this.hashes;
-    const val = this.values;
-    const rnd = this.rounds;
-    const probes = this.probes();
-    for (let i = 0; i < k; i++) {
-      if (rnd[i] >= 0) continue;
-      let from = -1;
-      for (let a = 0; a < PROBE_TABLE; a++) {
-        const j = probes[i * PROBE_TABLE + a];
-        if (rnd[j] >= 0) {
-          from = j;
-          break;
-        }
-      }
-      for (let a = PROBE_TABLE; from < 0; a++) {
-        const j = probeBin(i, a, k);
-        if (rnd[j] >= 0) from = j;
-      }
-      val[i] = val[from];
-    }
-  }
-  probeTable;
-  /** Returns the first PROBE_TABLE probes of every bin, computed once per sketcher. */
-  probes() {
-    if (this.probeTable) return this.probeTable;
-    const k = this.hashes;
-    const t = new Int32Array(k * PROBE_TABLE);
-    for (let i = 0; i < k; i++) for (let a = 0; a < PROBE_TABLE; a++) t[i * PROBE_TABLE + a] = probeBin(i, a, k);
-    this.probeTable = t;
-    return t;
-  }
-};
-function probeBin(bin, attempt, k) {
-  const x = mix(Math.imul(bin + 1, 2654435761) ^ Math.imul(attempt + 1, 2246822519) ^ 668265263);
-  return Math.imul(x >>> 16, k) >>> 16;
-}
-function mix(h) {
-  h ^= h >>> 16;
-  h = Math.imul(h, 2246822507);
-  h ^= h >>> 13;
-  h = Math.imul(h, 3266489909);
-  return h ^ h >>> 16;
-}
-
-// src/measure/duplicates/scan.ts
-var mix322 = mix32;
-var mix32b3 = mix32b;
-var finishExact2 = finishExact;
-var EXACT_BASIS_12 = EXACT_BASIS_1;
-var EXACT_BASIS_22 = EXACT_BASIS_2;
-var EXACT_PRIME_12 = EXACT_PRIME_1;
-var EXACT_PRIME_22 = EXACT_PRIME_2;
-var WORD_CHAR = /^[\p{L}\p{M}\p{N}]$/u;
-var PUNCT_CHAR = new RegExp("^\\p{P}$", "u");
-var SPACE_CHAR = /^\s$/u;
-var CLASS_RUNS = [
-  [/[\p{L}\p{M}\p{N}]+/gu, 1],
-  [/\s+/gu, 3],
-  [new RegExp("\\p{P}+", "gu"), 4]
-];
-var OTHER3 = 0;
-var WORD = 1;
-var HIGH_SURROGATE = 2;
-var SPACE = 3;
-var PUNCT = 4;
-var table;
-function classTable2() {
-  if (table) return table;
-  const t = new Uint8Array(65536);
-  const units = new Uint16Array(65536);
-  for (let c = 0; c < 65536; c++) units[c] = c >= 55296 && c < 57344 ? 0 : c;
-  let all = "";
-  for (let c = 0; c < 65536; c += 4096) all += String.fromCharCode(...units.subarray(c, c + 4096));
-  for (const [re, cls] of CLASS_RUNS) {
-    for (const m of all.matchAll(re)) {
-      for (let i = m.index, end = m.index + m[0].length; i < end; i++) t[i] = cls;
-    }
-  }
-  for (let c = 55296; c < 56320; c++) t[c] = HIGH_SURROGATE;
-  for (let c = 56320; c < 57344; c++) t[c] = OTHER3;
-  table = t;
-  return t;
-}
-function astralClass(text, i) {
-  const cp = text.slice(i, i + 2);
-  if (WORD_CHAR.test(cp)) return WORD;
-  if (PUNCT_CHAR.test(cp)) return PUNCT;
-  if (SPACE_CHAR.test(cp)) return SPACE;
-  return OTHER3;
-}
-function prepareText(text) {
-  return text.normalize("NFC").toLowerCase();
-}
-function wordBuffer(lanes, capacity = 1024) {
-  return { lane1: new Int32Array(capacity), lane2: lanes === 2 ? new Int32Array(capacity) : null };
-}
-function grow(buf) {
-  const l1 = new Int32Array(buf.lane1.length * 2);
-  l1.set(buf.lane1);
-  buf.lane1 = l1;
-  if (buf.lane2) {
-    const l2 = new Int32Array(buf.lane2.length * 2);
-    l2.set(buf.lane2);
-    buf.lane2 = l2;
-  }
-}
-function hashWords(prepared, buf) {
-  const t = classTable2();
-  const two = buf.lane2 !== null;
-  const n = prepared.length;
-  let count3 = 0;
-  let inWord = false;
-  let h1 = 0;
-  let h2 = 0;
-  let len = 0;
-  for (let i = 0; i < n; i++) {
-    const c = prepared.charCodeAt(i);
-    let cls = t[c];
-    let c2 = -1;
-    if (cls === HIGH_SURROGATE) {
-      const lo = i + 1 < n ? prepared.charCodeAt(i + 1) : 0;
-      if (lo >= 56320 && lo < 57344) {
-        cls = astralClass(prepared, i);
-        c2 = lo;
-        i++;
-      } else {
-        cls = OTHER3;
-      }
-    }
-    if (cls === WORD) {
-      if (!inWord) {
-        inWord = true;
-        h1 = 2166136261;
-        h2 = 84696351;
-        len = 0;
-      }
-      h1 = Math.imul(h1 ^ c, 16777619);
-      if (two) h2 = Math.imul(h2 ^ c, 739982445);
-      len++;
-      if (c2 >= 0) {
-        h1 = Math.imul(h1 ^ c2, 16777619);
-        if (two) h2 = Math.imul(h2 ^ c2, 739982445);
-        len++;
-      }
-    } else if (inWord) {
-      inWord = false;
-      if (count3 === buf.lane1.length) grow(buf);
-      buf.lane1[count3] = mix322(h1 ^ len);
-      if (two) buf.lane2[count3] = mix32b3(h2 + len);
-      count3++;
-    }
-  }
-  if (inWord) {
-    if (count3 === buf.lane1.length) grow(buf);
-    buf.lane1[count3] = mix322(h1 ^ len);
-    if (two) buf.lane2[count3] = mix32b3(h2 + len);
-    count3++;
-  }
-  return count3;
-}
-var DocumentScanner = class {
-  /** Code units of the exact normal form (0: empty document). */
-  exactLength = 0;
-  /** The 64-bit exact hash as two unsigned 32-bit lanes. */
-  exactHigh = 0;
-  exactLow = 0;
-  /** Words found; their hashes are words[0 .. wordCount). */
-  wordCount = 0;
-  words = new Int32Array(1024);
-  /**
-   * Scans `prepared` (see prepareText) once, computing both the exact hash of its normal form
-   * (see normalizeForExact; punctuation deleted when `strip`) and one hash per word.
-   * One fused pass: classifying each code unit once is most of the cost.
-   */
-  scan(prepared, strip) {
-    const t = classTable2();
-    let words = this.words;
-    let count3 = 0;
-    let inWord = false;
-    let wh = 0;
-    let wlen = 0;
-    let h1 = EXACT_BASIS_12;
-    let h2 = EXACT_BASIS_22;
-    let emitted = 0;
-    let space = false;
-    const n = prepared.length;
-    for (let i = 0; i < n; i++) {
-      const c = prepared.charCodeAt(i);
-      let cls = t[c];
-      let lo = -1;
-      if (cls === HIGH_SURROGATE) {
-        const next = i + 1 < n ? prepared.charCodeAt(i + 1) : 0;
-        if (next >= 56320 && next < 57344) {
-          cls = astralClass(prepared, i);
-          lo = next;
-          i++;
-        } else {
-          cls = OTHER3;
-        }
-      }
-      if (cls === WORD) {
-        if (!inWord) {
-          inWord = true;
-          wh = 2166136261 | 0;
-          wlen = 0;
-        }
-        wh = Math.imul(wh ^ c, 16777619);
-        wlen++;
-        if (lo >= 0) {
-          wh = Math.imul(wh ^ lo, 16777619);
-          wlen++;
-        }
-      } else {
-        if (inWord) {
-          inWord = false;
-          if (count3 === words.length) {
-            const w = new Int32Array(words.length * 2);
-            w.set(words);
-            words = w;
-          }
-          words[count3++] = mix322(wh ^ wlen);
-        }
-        if (cls === SPACE) {
-          space = true;
-          continue;
-        }
-        if (strip && cls === PUNCT) continue;
-      }
-      if (space) {
-        if (emitted > 0) {
-          h1 = Math.imul(h1 ^ 32, EXACT_PRIME_12);
-          h2 = Math.imul(h2 ^ 32, EXACT_PRIME_22);
-          emitted++;
-        }
-        space = false;
-      }
-      h1 = Math.imul(h1 ^ c, EXACT_PRIME_12);
-      h2 = Math.imul(h2 ^ c, EXACT_PRIME_22);
-      emitted++;
-      if (lo >= 0) {
-        h1 = Math.imul(h1 ^ lo, EXACT_PRIME_12);
-        h2 = Math.imul(h2 ^ lo, EXACT_PRIME_22);
-        emitted++;
-      }
-    }
-    if (inWord) {
-      if (count3 === words.length) {
-        const w = new Int32Array(words.length * 2);
-        w.set(words);
-        words = w;
-      }
-      words[count3++] = mix322(wh ^ wlen);
-    }
-    finishExact2(h1, h2, emitted, this);
-    this.words = words;
-    this.wordCount = count3;
-    this.exactLength = emitted;
-  }
-};
-var oneOff = new DocumentScanner();
-
-// src/measure/duplicates/lsh.ts
-var MISS_WEIGHT = 0.9;
-var STEPS = 200;
-var BAND_KEY_BITS = 32;
-var WIDTHS = [4, 8, 16, 32];
-function candidateProbability(p, bands, rows) {
-  return 1 - Math.pow(1 - Math.pow(p, rows), bands);
-}
-function signatureBits(rows) {
-  for (const w of WIDTHS) if (w * rows >= BAND_KEY_BITS) return w;
-  return 32;
-}
-function rowAgreement(s, bits) {
-  if (bits >= 32) return s;
-  const c = Math.pow(2, -bits);
-  return s + (1 - s) * c;
-}
-function lshBands(threshold, hashes) {
-  if (!(threshold > 0 && threshold <= 1)) throw new RangeError(`threshold must be in (0, 1], got ${threshold}`);
-  if (!Number.isInteger(hashes) || hashes < 1) throw new RangeError(`hashes must be a positive integer, got ${hashes}`);
-  const key = `${threshold}/${hashes}`;
-  const known = chosen.get(key);
-  if (known) return { ...known };
-  let best = { bands: 1, rows: hashes };
-  let bestCost = Infinity;
-  for (let rows = 1; rows <= hashes; rows++) {
-    const bits = signatureBits(rows);
-    for (let bands = 1; bands * rows <= hashes; bands++) {
-      let falseArea = 0;
-      let missArea = 0;
-      const h = 1 / STEPS;
-      for (let i = 0; i < STEPS; i++) {
-        const s = (i + 0.5) * h;
-        const p = candidateProbability(rowAgreement(s, bits), bands, rows);
-        if (s < threshold) falseArea += p * h;
-        else missArea += (1 - p) * h;
-      }
-      const cost = (1 - MISS_WEIGHT) * falseArea + MISS_WEIGHT * missArea;
-      if (cost < bestCost - 1e-12) {
-        bestCost = cost;
-        best = { bands, rows };
-      }
-    }
-  }
-  chosen.set(key, best);
-  return { ...best };
-}
-var chosen = /* @__PURE__ */ new Map();
-function jaccardFromAgreement(agreeing, hashes, bits) {
-  const p = agreeing / hashes;
-  if (bits >= 32) return p;
-  const c = Math.pow(2, -bits);
-  const j = (p - c) / (1 - c);
-  return j < 0 ? 0 : j > 1 ? 1 : j;
-}
-
-// src/measure/duplicates/format.ts
-var MAGIC = [83, 76, 68, 88];
-var FORMAT_VERSION = 1;
-var HEADER_BYTES = 32;
-var EXACT_BYTES = 8;
-var KIND_EMPTY = 0;
-var KIND_WORDLESS = 1;
-var KIND_FULL = 2;
-function signatureBytes(hashes, bits) {
-  return Math.ceil(hashes * bits / 8);
-}
-function bitsFor(opts) {
-  return signatureBits(lshBands(opts.threshold, opts.hashes).rows);
-}
-function checksum32(bytes2, start, end) {
-  let h = 789265437 ^ end - start;
-  let i = start;
-  for (; i + 3 < end; i += 4) {
-    let k2 = bytes2[i] | bytes2[i + 1] << 8 | bytes2[i + 2] << 16 | bytes2[i + 3] << 24;
-    k2 = Math.imul(k2, 3432918353);
-    k2 = k2 << 15 | k2 >>> 17;
-    h ^= Math.imul(k2, 461845907);
-    h = h << 13 | h >>> 19;
-    h = Math.imul(h, 5) + 3864292196 | 0;
-  }
-  let k = 0;
-  for (let s = 0; i < end; i++, s += 8) k |= bytes2[i] << s;
-  h ^= Math.imul(k, 3432918353);
-  return fmix32(h);
-}
-function parseIndex(blob, verifyChecksum = true) {
-  if (!(blob instanceof Uint8Array)) return { ok: false, reason: "not a byte array" };
-  if (blob.length < HEADER_BYTES) return { ok: false, reason: `truncated: ${blob.length} bytes, shorter than the ${HEADER_BYTES}-byte header` };
-  for (let i = 0; i < 4; i++) {
-    if (blob[i] !== MAGIC[i]) return { ok: false, reason: "not a duplicate index (bad magic bytes)" };
-  }
-  const view = new DataView(blob.buffer, blob.byteOffset, blob.byteLength);
-  const version = view.getUint8(4);
-  if (version !== FORMAT_VERSION) return { ok: false, reason: `format version ${version}, this build reads version ${FORMAT_VERSION}` };
-  const punct = view.getUint8(5);
-  const shingle = view.getUint8(6);
-  const bits = view.getUint8(7);
-  const hashes = view.getUint16(8, true);
-  const threshold = view.getFloat32(12, true);
-  const documents = view.getUint32(16, true);
-  const streamBytes = view.getUint32(20, true);
-  const checksum = view.getUint32(24, true);
-  if (punct > 1 || shingle < 1 || hashes < 1 || ![4, 8, 16, 32].includes(bits)) {
-    return { ok: false, reason: "corrupt header (parameters out of range)" };
-  }
-  const sigBytes = signatureBytes(hashes, bits);
-  const exactOffset = HEADER_BYTES;
-  const signatureOffset = exactOffset + documents * EXACT_BYTES;
-  const streamOffset = signatureOffset + documents * sigBytes;
-  const expected = streamOffset + streamBytes;
-  if (blob.length !== expected) {
-    return {
-      ok: false,
-      reason: blob.length < expected ? `truncated: ${blob.length} bytes, the header announces ${expected} for ${documents} documents` : `${blob.length - expected} unexpected bytes after the ${expected} the header announces`
-    };
-  }
-  if (verifyChecksum && checksum32(blob, HEADER_BYTES, blob.length) !== checksum) {
-    return { ok: false, reason: "corrupt: checksum mismatch" };
-  }
-  return {
-    ok: true,
-    layout: {
-      formatVersion: version,
-      shingle,
-      hashes,
-      signatureBits: bits,
-      punctuation: punct === 1 ? "strip" : "keep",
-      threshold,
-      documents,
-      bytes: blob.length,
-      exactOffset,
-      signatureOffset,
-      signatureBytes: sigBytes,
-      streamOffset,
-      streamBytes
-    }
-  };
-}
-function incompatibility(header, opts) {
-  if (header.shingle !== opts.shingle) return `built with ${header.shingle}-word shingles, joined with ${opts.shingle}`;
-  if (header.hashes !== opts.hashes) return `built with ${header.hashes} hashes, joined with ${opts.hashes}`;
-  if (header.punctuation !== opts.punctuation) return `built with punctuation '${header.punctuation}', joined with '${opts.punctuation}'`;
-  const bits = bitsFor(opts);
-  if (header.signatureBits !== bits) {
-    return `built for threshold ${round(header.threshold)} (${header.signatureBits}-bit values), joined at threshold ${opts.threshold}, which needs ${bits}-bit values`;
-  }
-  return null;
-}
-function round(x) {
-  return Math.round(x * 1e6) / 1e6;
-}
-
-// src/measure/duplicates/builder.ts
-var MAX_SHINGLE = 255;
-var MAX_HASHES2 = 65535;
-var MAX_LANGUAGE = (1 << 24) - 1;
-function checkOptions(opts) {
-  const { shingle, hashes, threshold, punctuation } = opts;
-  if (!Number.isInteger(shingle) || shingle < 1 || shingle > MAX_SHINGLE) {
-    throw new RangeError(`duplicates: shingle must be an integer from 1 to ${MAX_SHINGLE} words, got ${shingle}`);
-  }
-  if (!Number.isInteger(hashes) || hashes < 1 || hashes > MAX_HASHES2) {
-    throw new RangeError(`duplicates: hashes must be an integer from 1 to ${MAX_HASHES2}, got ${hashes}`);
-  }
-  if (typeof threshold !== "number" || !(threshold > 0 && threshold <= 1)) {
-    throw new RangeError(`duplicates: threshold must be a number in (0, 1], got ${threshold}`);
-  }
-  if (punctuation !== "keep" && punctuation !== "strip") {
-    throw new RangeError(`duplicates: punctuation must be 'keep' or 'strip', got ${String(punctuation)}`);
-  }
-  return { shingle, hashes, threshold, punctuation };
-}
-function duplicateOptionsFrom(rule) {
-  return checkOptions({ shingle: rule.near.shingle, hashes: rule.near.hashes, threshold: rule.near.threshold, punctuation: rule.punctuation });
-}
-var Bytes = class {
-  data;
-  length = 0;
-  constructor(capacity) {
-    this.data = new Uint8Array(Math.max(16, capacity));
-  }
-  reserve(extra) {
-    if (this.length + extra <= this.data.length) return;
-    let cap = this.data.length * 2;
-    while (cap < this.length + extra) cap *= 2;
-    const d = new Uint8Array(cap);
-    d.set(this.data.subarray(0, this.length));
-    this.data = d;
-  }
-  varint(v) {
-    this.reserve(10);
-    while (v >= 128) {
-      this.data[this.length++] = v % 128 | 128;
-      v = Math.floor(v / 128);
-    }
-    this.data[this.length++] = v;
-  }
-};
-var DuplicateIndexBuilder = class {
-  options;
-  signatureBits;
-  sigBytes;
-  sketcher;
-  scanner = new DocumentScanner();
-  exact;
-  signatures;
-  stream;
-  documents = 0;
-  lastOrdinal = -1;
-  lastLine = 0;
-  finished = false;
-  constructor(opts) {
-    this.options = checkOptions(opts);
-    this.signatureBits = bitsFor(this.options);
-    this.sigBytes = signatureBytes(this.options.hashes, this.signatureBits);
-    this.sketcher = new Sketcher(this.options.shingle, this.options.hashes);
-    this.exact = new Bytes(1024 * EXACT_BYTES);
-    this.signatures = new Bytes(1024 * this.sigBytes);
-    this.stream = new Bytes(4096);
-  }
-  /** Indexes one document; documents must come in increasing ordinal order. */
-  add(doc) {
-    if (this.finished) throw new Error("DuplicateIndexBuilder: add() after finish()");
-    const { ordinal, line, language, text } = doc;
-    if (!Number.isInteger(ordinal) || ordinal <= this.lastOrdinal) {
-      throw new RangeError(`DuplicateIndexBuilder: ordinal ${ordinal} after ${this.lastOrdinal}; documents must be added in increasing ordinal order`);
-    }
-    if (!Number.isInteger(line) || line < 0) throw new RangeError(`DuplicateIndexBuilder: line must be a non-negative integer, got ${line} (ordinal ${ordinal})`);
-    if (!Number.isInteger(language) || language < 0 || language > MAX_LANGUAGE) {
-      throw new RangeError(`DuplicateIndexBuilder: language must be an integer from 0 to ${MAX_LANGUAGE}, got ${language} (ordinal ${ordinal})`);
-    }
-    if (typeof text !== "string") throw new TypeError(`DuplicateIndexBuilder: text must be a string (ordinal ${ordinal})`);
-    this.lastOrdinal = ordinal;
-    const prepared = prepareText(text);
-    const exact = this.exact;
-    exact.reserve(EXACT_BYTES);
-    const sigs = this.signatures;
-    sigs.reserve(this.sigBytes);
-    const sc = this.scanner;
-    sc.scan(prepared, this.options.punctuation === "strip");
-    let kind = KIND_EMPTY;
-    if (sc.exactLength > 0) {
-      writeU32(exact.data, exact.length, sc.exactHigh);
-      writeU32(exact.data, exact.length + 4, sc.exactLow);
-      const count3 = sc.wordCount;
-      if (count3 > 0) {
-        this.sketcher.sketch(sc.words, count3);
-        packSignature(this.sketcher.values, this.signatureBits, sigs.data, sigs.length);
-        kind = KIND_FULL;
-      } else {
-        sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
-        kind = KIND_WORDLESS;
-      }
-    } else {
-      exact.data.fill(0, exact.length, exact.length + EXACT_BYTES);
-      sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
-    }
-    exact.length += EXACT_BYTES;
-    sigs.length += this.sigBytes;
-    const delta = line - this.lastLine;
-    this.lastLine = line;
-    this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
-    this.stream.varint(language * 4 + kind);
-    this.documents++;
-  }
-  /** Returns the number of documents added so far. */
-  get size() {
-    return this.documents;
-  }
-  /** Returns the index blob; the builder cannot be used afterwards. */
-  finish() {
-    if (this.finished) throw new Error("DuplicateIndexBuilder: finish() called twice");
-    this.finished = true;
-    const n = this.documents;
-    const total = HEADER_BYTES + this.exact.length + this.signatures.length + this.stream.length;
-    const blob = new Uint8Array(total);
-    const view = new DataView(blob.buffer);
-    for (let i = 0; i < 4; i++) blob[i] = MAGIC[i];
-    view.setUint8(4, FORMAT_VERSION);
-    view.setUint8(5, this.options.punctuation === "strip" ? 1 : 0);
-    view.setUint8(6, this.options.shingle);
-    view.setUint8(7, this.signatureBits);
-    view.setUint16(8, this.options.hashes, true);
-    view.setFloat32(12, this.options.threshold, true);
-    view.setUint32(16, n, true);
-    view.setUint32(20, this.stream.length, true);
-    let at2 = HEADER_BYTES;
-    blob.set(this.exact.data.subarray(0, this.exact.length), at2);
-    at2 += this.exact.length;
-    blob.set(this.signatures.data.subarray(0, this.signatures.length), at2);
-    at2 += this.signatures.length;
-    blob.set(this.stream.data.subarray(0, this.stream.length), at2);
-    view.setUint32(24, checksum32(blob, HEADER_BYTES, total), true);
-    return blob;
-  }
-};
-function writeU32(d, at2, v) {
-  d[at2] = v & 255;
-  d[at2 + 1] = v >>> 8 & 255;
-  d[at2 + 2] = v >>> 16 & 255;
-  d[at2 + 3] = v >>> 24;
-}
-function packSignature(values, bits, d, at2) {
-  const k = values.length;
-  if (bits === 4) {
-    let i = 0;
-    for (; i + 1 < k; i += 2) d[at2++] = values[i] & 15 | (values[i + 1] & 15) << 4;
-    if (i < k) d[at2] = values[i] & 15;
-  } else if (bits === 8) {
-    for (let i = 0; i < k; i++) d[at2 + i] = values[i] & 255;
-  } else if (bits === 16) {
-    for (let i = 0; i < k; i++) {
-      const v = values[i];
-      d[at2 + 2 * i] = v & 255;
-      d[at2 + 2 * i + 1] = v >>> 8 & 255;
-    }
-  } else {
-    for (let i = 0; i < k; i++) writeU32(d, at2 + 4 * i, values[i]);
-  }
-}
-
-// src/measure/duplicates/join.ts
-var DEFAULT_MAX_CLUSTERS = 20;
-var DEFAULT_MAX_COPIES = 10;
-var DEFAULT_MAX_BUCKET_COMPARISONS = 64;
-var KIND_MASK = 3;
-var IN_NEW_SHARD = 1 << 2;
-var CLASS_HAS_NEW = 1 << 3;
-var CLASS_HAS_EXISTING = 1 << 4;
-var NEAR = 1 << 5;
-var NEAR_EXISTING = 1 << 6;
-var PARTICIPANT = 1 << 7;
-var DuplicateIndexError = class extends Error {
-  shard;
-  reason;
-  constructor(shard, reason) {
-    super(`duplicate index of ${shard}: ${reason}`);
-    this.name = "DuplicateIndexError";
-    this.shard = shard;
-    this.reason = reason;
-  }
-};
-var EQUAL_NIBBLES = new Uint8Array(256);
-for (let x = 0; x < 256; x++) EQUAL_NIBBLES[x] = ((x & 15) === 0 ? 1 : 0) + (x >>> 4 === 0 ? 1 : 0);
-function joinDuplicates(shards, opts) {
-  const options = checkOptions(opts);
-  const maxClusters = opts.maxClusters ?? DEFAULT_MAX_CLUSTERS;
-  const maxCopies = opts.maxCopies ?? DEFAULT_MAX_COPIES;
-  const cap = opts.maxBucketComparisons ?? DEFAULT_MAX_BUCKET_COMPARISONS;
-  for (const [name, v] of [["maxClusters", maxClusters], ["maxCopies", maxCopies], ["maxBucketComparisons", cap]]) {
-    if (!Number.isInteger(v) || v < 0) throw new RangeError(`joinDuplicates: ${name} must be a non-negative integer, got ${v}`);
-  }
-  const { bands, rows } = lshBands(options.threshold, options.hashes);
-  const bits = signatureBits(rows);
-  const k = options.hashes;
-  const indexes = [];
-  const seen = /* @__PURE__ */ new Set();
-  let total = 0;
-  let indexBytes = 0;
-  for (const { shard, index: index2 } of shards) {
-    if (seen.has(shard)) throw new DuplicateIndexError(shard, "shard listed twice");
-    seen.add(shard);
-    const parsed = parseIndex(index2);
-    if (!parsed.ok) throw new DuplicateIndexError(shard, parsed.reason);
-    const why = incompatibility(parsed.layout, options);
-    if (why) throw new DuplicateIndexError(shard, why);
-    indexes.push({ shard, blob: index2, layout: parsed.layout, start: total });
-    total += parsed.layout.documents;
-    indexBytes += index2.length;
-  }
-  const n = total;
-  const starts = new Int32Array(indexes.length + 1);
-  indexes.forEach((s, i) => starts[i] = s.start);
-  starts[indexes.length] = n;
-  const newNames = new Set(opts.newShards ?? []);
-  const trackExisting = opts.newShards !== void 0;
-  const isNew = indexes.map((s) => newNames.has(s.shard));
-  const flags = new Uint8Array(n);
-  indexes.forEach((s, si) => {
-    const newBit = isNew[si] ? IN_NEW_SHARD : 0;
-    readLocations(s, (i, _line, _language, kind) => {
-      flags[s.start + i] = kind | newBit;
-    });
-  });
-  const hi = new Int32Array(n);
-  let lo = new Int32Array(n);
-  for (const s of indexes) {
-    const view = new DataView(s.blob.buffer, s.blob.byteOffset, s.blob.byteLength);
-    for (let i = 0, at2 = s.layout.exactOffset; i < s.layout.documents; i++, at2 += EXACT_BYTES) {
-      hi[s.start + i] = view.getInt32(at2, true);
-      lo[s.start + i] = view.getInt32(at2 + 4, true);
-    }
-  }
-  const order = new Int32Array(n);
-  const scratch2 = new Int32Array(n);
-  const counts = new Int32Array(65536);
-  radixSort(hi, n, order, scratch2, counts);
-  const rep = new Int32Array(n).fill(-1);
-  for (let p = 0; p < n; ) {
-    let q = p + 1;
-    const h = hi[order[p]];
-    while (q < n && hi[order[q]] === h) q++;
-    let run2 = null;
-    for (let x = p + 1; x < q; x++) {
-      if (lo[order[x]] !== lo[order[p]]) {
-        run2 = Array.from(order.subarray(p, q)).sort((a, b) => lo[a] - lo[b] || a - b);
-        break;
-      }
-    }
-    const members = run2 ?? order.subarray(p, q);
-    for (let x = 0; x < members.length; ) {
-      let y = x + 1;
-      const l = lo[members[x]];
-      while (y < members.length && lo[members[y]] === l) y++;
-      let first = -1;
-      for (let z = x; z < y; z++) {
-        const g = members[z];
-        if ((flags[g] & KIND_MASK) === KIND_EMPTY) continue;
-        if (first < 0) first = g;
-        rep[g] = first;
-        flags[first] = flags[first] | (flags[g] & IN_NEW_SHARD ? CLASS_HAS_NEW : CLASS_HAS_EXISTING);
-      }
-      x = y;
-    }
-    p = q;
-  }
-  const workingExact = flags.byteLength + hi.byteLength + lo.byteLength + order.byteLength + scratch2.byteLength + rep.byteLength + counts.byteLength;
-  const bufA = hi.buffer;
-  const bufB = order.buffer;
-  const bufC = scratch2.buffer;
-  for (let g = 0; g < n; g++) if (rep[g] === g && (flags[g] & KIND_MASK) === KIND_FULL) flags[g] = flags[g] | PARTICIPANT;
-  const keys = hi;
-  lo = new Int32Array(0);
-  const nearOf = new Int32Array(n).fill(-1);
-  const sig = new SignatureReader(indexes, starts, k, bits);
-  let comparedPairs = 0;
-  let verifiedPairs = 0;
-  let cappedBuckets = 0;
-  const threshold = options.threshold;
-  for (let band = 0; band < bands; band++) {
-    sig.bandKeys(flags, band * rows, rows, keys);
-    radixSort(keys, n, order, scratch2, counts);
-    for (let p = 0; p < n; ) {
-      let q = p + 1;
-      const key = keys[order[p]];
-      while (q < n && keys[order[q]] === key) q++;
-      if (key === 0 || q - p === 1) {
-        p = q;
-        continue;
-      }
-      if (q - p > cap + 1) cappedBuckets++;
-      for (let x = p + 1; x < q; x++) {
-        const i = order[x];
-        const fi = flags[i];
-        if (fi & NEAR && !(trackExisting && fi & (CLASS_HAS_EXISTING | CLASS_HAS_NEW))) continue;
-        const stop = Math.max(p, x - cap);
-        for (let y = x - 1; y >= stop; y--) {
-          const j = order[y];
-          const f = flags[i];
-          const fj = flags[j];
-          const needNear = (f & NEAR) === 0;
-          const wantI = trackExisting && wantsExisting(f) && (fj & CLASS_HAS_EXISTING) !== 0;
-          const wantJ = trackExisting && wantsExisting(fj) && (f & CLASS_HAS_EXISTING) !== 0;
-          if (!needNear && !wantI && !wantJ) {
-            if (!trackExisting) break;
-            continue;
-          }
-          comparedPairs++;
-          if (sig.jaccard(i, j) < threshold) continue;
-          verifiedPairs++;
-          if (needNear) {
-            flags[i] = flags[i] | NEAR;
-            nearOf[i] = j;
-          }
-          if (wantI) flags[i] = flags[i] | NEAR_EXISTING;
-          if (wantJ) flags[j] = flags[j] | NEAR_EXISTING;
-        }
-      }
-      p = q;
-    }
-  }
-  const workingBytes = Math.max(
-    workingExact,
-    flags.byteLength + rep.byteLength + nearOf.byteLength + bufA.byteLength + bufB.byteLength + bufC.byteLength + counts.byteLength
-  );
-  const rootOf = new Int32Array(bufA, 0, n);
-  const nearSize = new Int32Array(bufB, 0, n).fill(0);
-  const exactSize = new Int32Array(bufC, 0, n).fill(0);
-  for (let g = 0; g < n; g++) {
-    const r = rep[g];
-    if (r >= 0) exactSize[r] = exactSize[r] + 1;
-    if (r === g && (flags[g] & KIND_MASK) === KIND_FULL) {
-      const j = nearOf[g];
-      rootOf[g] = j < 0 ? g : rootOf[j];
-      nearSize[rootOf[g]] = nearSize[rootOf[g]] + 1;
-    } else {
-      rootOf[g] = -1;
-    }
-  }
-  const tallyOf = () => ({ docs: 0, emptyDocs: 0, wordlessDocs: 0, exactDocs: 0, nearDocs: 0 });
-  const totalTally = tallyOf();
-  const perShard = [];
-  const perLanguage2 = /* @__PURE__ */ new Map();
-  const against = trackExisting ? {
-    newShards: [...newNames],
-    unknownShards: [...newNames].filter((s) => !seen.has(s)),
-    docs: 0,
-    exactDocs: 0,
-    nearDocs: 0,
-    perShard: []
-  } : void 0;
-  indexes.forEach((s, si) => {
-    const st = tallyOf();
-    const ag = { shard: s.shard, docs: 0, exactDocs: 0, nearDocs: 0 };
-    readLocations(s, (i, _line, language, kind) => {
-      const g = s.start + i;
-      let lt = perLanguage2.get(language);
-      if (!lt) perLanguage2.set(language, lt = tallyOf());
-      const r = rep[g];
-      const exact = r >= 0 && r !== g;
-      const near = !exact && r === g && (flags[g] & NEAR) !== 0;
-      count(st, kind, exact, near);
-      count(lt, kind, exact, near);
-      count(totalTally, kind, exact, near);
-      if (against && isNew[si]) {
-        ag.docs++;
-        if (r >= 0) {
-          const fr = flags[r];
-          if (fr & CLASS_HAS_EXISTING) ag.exactDocs++;
-          else if (fr & NEAR_EXISTING) ag.nearDocs++;
-        }
-      }
-    });
-    perShard.push({ shard: s.shard, ...st });
-    if (against && isNew[si]) {
-      against.perShard.push(ag);
-      against.docs += ag.docs;
-      against.exactDocs += ag.exactDocs;
-      against.nearDocs += ag.nearDocs;
-    }
-  });
-  let exactClusters = 0;
-  let nearClusters = 0;
-  const top = new TopClusters(maxClusters);
-  for (let g = 0; g < n; g++) {
-    if (exactSize[g] >= 2) {
-      exactClusters++;
-      top.offer(g, exactSize[g], "exact");
-    }
-    if (nearSize[g] >= 2) {
-      nearClusters++;
-      top.offer(g, nearSize[g], "near");
-    }
-  }
-  const chosen2 = top.sorted();
-  const exactSlot = /* @__PURE__ */ new Map();
-  const nearSlot = /* @__PURE__ */ new Map();
-  chosen2.forEach((c, idx) => (c.kind === "exact" ? exactSlot : nearSlot).set(c.first, idx));
-  const copies = chosen2.map(() => []);
-  for (let g = 0; g < n; g++) {
-    const r = rep[g];
-    if (r >= 0 && r !== g) {
-      const slot = exactSlot.get(r);
-      if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
-    }
-    const t = rootOf[g];
-    if (t >= 0 && t !== g) {
-      const slot = nearSlot.get(t);
-      if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
-    }
-  }
-  const wanted = /* @__PURE__ */ new Set();
-  chosen2.forEach((c, idx) => {
-    wanted.add(c.first);
-    for (const g of copies[idx]) {
-      wanted.add(g);
-      if (c.kind === "near") wanted.add(nearOf[g]);
-    }
-  });
-  const where2 = locate(indexes, starts, wanted);
-  const clusters = chosen2.map((c, idx) => ({
-    kind: c.kind,
-    first: where2.get(c.first),
-    size: c.size,
-    copies: copies[idx].map((g) => {
-      const at2 = where2.get(g);
-      if (c.kind === "exact") return { ...at2 };
-      const of = nearOf[g];
-      return { ...at2, jaccard: round4(sig.jaccard(g, of)), of: where2.get(of) };
-    }),
-    copiesOmitted: c.size - 1 - copies[idx].length
-  }));
-  return {
-    options,
-    total: totalTally,
-    exactDocs: totalTally.exactDocs,
-    nearDocs: totalTally.nearDocs,
-    perShard,
-    perLanguage: [...perLanguage2].sort((a, b) => a[0] - b[0]).map(([language, t]) => ({ language, ...t })),
-    clusters,
-    exactClusters,
-    nearClusters,
-    clustersOmitted: exactClusters + nearClusters - clusters.length,
-    ...against ? { againstExisting: against } : {},
-    statistics: {
-      bands,
-      rows,
-      signatureBits: bits,
-      comparedPairs,
-      verifiedPairs,
-      cappedBuckets,
-      workingBytes,
-      workingBytesPerDocument: n ? round4(workingBytes / n) : 0,
-      indexBytes,
-      indexBytesPerDocument: n ? round4(indexBytes / n) : 0
-    }
-  };
-}
-function count(t, kind, exact, near) {
-  t.docs++;
-  if (kind === KIND_EMPTY) t.emptyDocs++;
-  if (kind === KIND_WORDLESS) t.wordlessDocs++;
-  if (exact) t.exactDocs++;
-  if (near) t.nearDocs++;
-}
-function wantsExisting(f) {
-  return (f & (CLASS_HAS_NEW | CLASS_HAS_EXISTING | NEAR_EXISTING)) === CLASS_HAS_NEW;
-}
-function round4(x) {
-  return Math.round(x * 1e4) / 1e4;
-}
-function readLocations(s, visit) {
-  const b = s.blob;
-  let at2 = s.layout.streamOffset;
-  const end = at2 + s.layout.streamBytes;
-  let line = 0;
-  const varint = () => {
-    let v = 0;
-    let scale = 1;
-    for (let shift = 0; shift < 49; shift += 7) {
-      if (at2 >= end) throw new DuplicateIndexError(s.shard, "corrupt: location stream ends inside a record");
-      const byte = b[at2++];
-      v += (byte & 127) * scale;
-      if (byte < 128) return v;
-      scale *= 128;
-    }
-    throw new DuplicateIndexError(s.shard, "corrupt: over-long number in the location stream");
-  };
-  for (let i = 0; i < s.layout.documents; i++) {
-    const z = varint();
-    line += z % 2 === 0 ? z / 2 : -(z + 1) / 2;
-    const tag = varint();
-    const kind = tag % 4;
-    if (kind > KIND_FULL) throw new DuplicateIndexError(s.shard, `corrupt: unknown document kind ${kind}`);
-    visit(i, line, Math.floor(tag / 4), kind);
-  }
-  if (at2 !== end) throw new DuplicateIndexError(s.shard, `corrupt: ${end - at2} bytes left after the last location record`);
-}
-function locate(indexes, starts, wanted) {
-  const out = /* @__PURE__ */ new Map();
-  const byShard = /* @__PURE__ */ new Map();
-  for (const g of wanted) {
-    const si = shardOf(starts, g);
-    let set = byShard.get(si);
-    if (!set) byShard.set(si, set = /* @__PURE__ */ new Set());
-    set.add(g);
-  }
-  for (const [si, set] of byShard) {
-    const s = indexes[si];
-    readLocations(s, (i, line, language) => {
-      const g = s.start + i;
-      if (set.has(g)) out.set(g, { shard: s.shard, line, language });
-    });
-  }
-  return out;
-}
-function shardOf(starts, g) {
-  let a = 0;
-  let b = starts.length - 2;
-  while (a < b) {
-    const mid = a + b + 1 >>> 1;
-    if (starts[mid] <= g) a = mid;
-    else b = mid - 1;
-  }
-  while (a + 1 < starts.length - 1 && starts[a + 1] <= g) a++;
-  return a;
-}
-function radixSort(keys, n, out, scratch2, counts) {
-  counts.fill(0);
-  for (let i = 0; i < n; i++) counts[keys[i] & 65535]++;
-  let sum = 0;
-  for (let d = 0; d < 65536; d++) {
-    const c = counts[d];
-    counts[d] = sum;
-    sum += c;
-  }
-  for (let i = 0; i < n; i++) scratch2[counts[keys[i] & 65535]++] = i;
-  counts.fill(0);
-  for (let i = 0; i < n; i++) counts[keys[i] >>> 16]++;
-  sum = 0;
-  for (let d = 0; d < 65536; d++) {
-    const c = counts[d];
-    counts[d] = sum;
-    sum += c;
-  }
-  for (let p = 0; p < n; p++) {
-    const i = scratch2[p];
-    out[counts[keys[i] >>> 16]++] = i;
-  }
-}
-var SignatureReader = class {
-  constructor(indexes, starts, k, bits) {
-    this.starts = starts;
-    this.k = k;
-    this.bits = bits;
-    this.blobs = indexes.map((s) => s.blob);
-    this.offsets = indexes.map((s) => s.layout.signatureOffset);
-    this.bytes = indexes[0]?.layout.signatureBytes ?? 0;
-  }
-  starts;
-  k;
-  bits;
-  blobs;
-  offsets;
-  bytes;
-  lastShard = 0;
-  /** Returns [blob, byte offset] of global document g's signature. */
-  find(g) {
-    const st = this.starts;
-    let s = this.lastShard;
-    if (!(st[s] <= g && g < st[s + 1])) s = this.lastShard = shardOf(st, g);
-    return s;
-  }
-  /** Returns the estimated Jaccard similarity of two documents from their stored values. */
-  jaccard(a, b) {
-    const sa = this.find(a);
-    const oa = this.offsets[sa] + (a - this.starts[sa]) * this.bytes;
-    const sb = this.find(b);
-    const ob = this.offsets[sb] + (b - this.starts[sb]) * this.bytes;
-    const same = agreement(this.blobs[sa], oa, this.blobs[sb], ob, this.bytes, this.k, this.bits);
-    return jaccardFromAgreement(same, this.k, this.bits);
-  }
-  /** Writes into keys[g] the band key (values [first, first + rows)) of every document taking part in near detection, and 0 into the others'. */
-  bandKeys(flags, first, rows, keys) {
-    const bits = this.bits;
-    const nb = this.bytes;
-    for (let s = 0; s < this.blobs.length; s++) {
-      const blob = this.blobs[s];
-      const end = this.starts[s + 1];
-      for (let g = this.starts[s], off = this.offsets[s]; g < end; g++, off += nb) {
-        keys[g] = flags[g] & PARTICIPANT ? bandKey(blob, off, bits, first, rows) || 1 : 0;
-      }
-    }
-  }
-};
-function agreement(a, oa, b, ob, bytes2, k, bits) {
-  let same = 0;
-  if (bits === 4) {
-    for (let i = 0; i < bytes2; i++) same += EQUAL_NIBBLES[a[oa + i] ^ b[ob + i]];
-    if (k % 2 === 1) same--;
-  } else {
-    const w = bits / 8;
-    for (let i = 0; i < bytes2; i += w) {
-      let eq = true;
-      for (let j = 0; j < w; j++) if (a[oa + i + j] !== b[ob + i + j]) eq = false;
-      if (eq) same++;
-    }
-  }
-  return same;
-}
-function bandKey(blob, off, bits, first, rows) {
-  let h = 1013904242 ^ first;
-  for (let v = first; v < first + rows; v++) {
-    let x;
-    if (bits === 4) x = blob[off + (v >>> 1)] >>> ((v & 1) << 2) & 15;
-    else if (bits === 8) x = blob[off + v];
-    else if (bits === 16) x = blob[off + 2 * v] | blob[off + 2 * v + 1] << 8;
-    else x = blob[off + 4 * v] | blob[off + 4 * v + 1] << 8 | blob[off + 4 * v + 2] << 16 | blob[off + 4 * v + 3] << 24;
-    h = Math.imul(h ^ x, 16777619);
-    h = h << 13 | h >>> 19;
-  }
-  h ^= h >>> 16;
-  h = Math.imul(h, 2246822507);
-  h ^= h >>> 13;
-  h = Math.imul(h, 3266489909);
-  return h ^ h >>> 16;
-}
-var TopClusters = class {
-  constructor(limit) {
-    this.limit = limit;
-  }
-  limit;
-  items = [];
-  offer(first, size, kind) {
-    if (this.limit === 0) return;
-    this.items.push({ first, size, kind });
-    if (this.items.length >= 2 * this.limit && this.items.length >= 1024) this.cut();
-  }
-  sorted() {
-    this.cut();
-    return this.items;
-  }
-  cut() {
-    this.items.sort((a, b) => b.size - a.size || a.first - b.first || (a.kind === b.kind ? 0 : a.kind === "exact" ? -1 : 1));
-    if (this.items.length > this.limit) this.items.length = this.limit;
-  }
-};
-
-// src/measure/duplicates/contamination.ts
-var mix323 = mix32;
-var mix32b4 = mix32b;
-var DEFAULT_NGRAM2 = 13;
-var BASE_1 = 625341585;
-var BASE_2 = 1481765933;
-var LOAD = 0.5;
-var INDEX_VERSION = 1;
-function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
-  if (!Number.isInteger(ngram) || ngram < 1) throw new RangeError(`contamination: ngram must be a positive integer, got ${ngram}`);
-  const buf = wordBuffer(2);
-  const grams = [];
-  const lengths = /* @__PURE__ */ new Set();
-  let total = 0;
-  let shortItems = 0;
-  let emptyItems = 0;
-  let id1 = Math.imul(2654435769 ^ INDEX_VERSION, 16777619) ^ ngram;
-  let id2 = Math.imul(2135587861 ^ INDEX_VERSION, 1540483477) ^ ngram;
-  const fold2 = (x) => {
-    id1 = Math.imul(id1 ^ x, 16777619);
-    id1 = id1 << 13 | id1 >>> 19;
-    id2 = Math.imul(id2 ^ x, 1540483477);
-    id2 = id2 << 11 | id2 >>> 21;
-  };
-  items.forEach((item2, idx) => {
-    if (typeof item2?.text !== "string") throw new TypeError(`contamination: item ${idx} (${item2?.file}:${item2?.line}) has no text`);
-    const words = hashWords(prepareText(item2.text), buf);
-    for (let i = 0; i < item2.file.length; i++) fold2(item2.file.charCodeAt(i));
-    fold2(65534);
-    fold2(item2.line);
-    for (let i = 0; i < words; i++) fold2(buf.lane1[i]);
-    fold2(65535);
-    if (words === 0) {
-      emptyItems++;
-      grams.push({ l1: new Int32Array(0), l2: new Int32Array(0), count: 0 });
-      return;
-    }
-    const m = Math.min(ngram, words);
-    if (words < ngram) shortItems++;
-    lengths.add(m);
-    const count3 = words - m + 1;
-    const l1 = new Int32Array(count3);
-    const l2 = new Int32Array(count3);
-    rollGrams(buf, words, m, l1, l2);
-    grams.push({ l1, l2, count: count3 });
-    total += count3;
-  });
-  let size = 16;
-  while (size * LOAD < total) size *= 2;
-  const lane1 = new Int32Array(size);
-  const lane2 = new Int32Array(size);
-  const item = new Int32Array(size).fill(-1);
-  const mask = size - 1;
-  let distinct = 0;
-  grams.forEach((g, idx) => {
-    for (let i = 0; i < g.count; i++) {
-      const a = g.l1[i];
-      const b = g.l2[i];
-      let slot = a & mask;
-      while (item[slot] >= 0 && !(lane1[slot] === a && lane2[slot] === b)) slot = slot + 1 & mask;
-      if (item[slot] < 0) {
-        lane1[slot] = a;
-        lane2[slot] = b;
-        item[slot] = idx;
-        distinct++;
-      }
-    }
-  });
-  return {
-    id: hex64(mix323(id1 ^ items.length), mix32b4(id2 + items.length)),
-    ngram,
-    items: items.length,
-    grams: distinct,
-    shortItems,
-    emptyItems,
-    lengths: [...lengths].sort((a, b) => b - a),
-    table: { lane1, lane2, item, mask },
-    sources: items.map((it) => ({ file: it.file, line: it.line }))
-  };
-}
-function rollGrams(buf, count3, m, l1, l2) {
-  const w1 = buf.lane1;
-  const w2 = buf.lane2;
-  let top1 = 1;
-  let top2 = 1;
-  for (let j = 1; j < m; j++) {
-    top1 = Math.imul(top1, BASE_1);
-    top2 = Math.imul(top2, BASE_2);
-  }
-  let h1 = 0;
-  let h2 = 0;
-  for (let j = 0; j < m; j++) {
-    h1 = Math.imul(h1, BASE_1) + w1[j] | 0;
-    h2 = Math.imul(h2, BASE_2) + w2[j] | 0;
-  }
-  l1[0] = mix323(h1 ^ m);
-  l2[0] = mix32b4(h2 + m);
-  for (let i = 1; i + m <= count3; i++) {
-    h1 = Math.imul(h1 - Math.imul(w1[i - 1], top1) | 0, BASE_1) + w1[i + m - 1] | 0;
-    h2 = Math.imul(h2 - Math.imul(w2[i - 1], top2) | 0, BASE_2) + w2[i + m - 1] | 0;
-    l1[i] = mix323(h1 ^ m);
-    l2[i] = mix32b4(h2 + m);
-  }
-}
-var scratch = { buf: wordBuffer(2), l1: new Int32Array(1024), l2: new Int32Array(1024) };
-function findContamination(index2, text) {
-  const buf = scratch.buf;
-  const words = hashWords(prepareText(text), buf);
-  const { lane1, lane2, item, mask } = index2.table;
-  let best = -1;
-  for (const m of index2.lengths) {
-    if (words < m) continue;
-    const count3 = words - m + 1;
-    if (scratch.l1.length < count3) {
-      scratch.l1 = new Int32Array(count3 * 2);
-      scratch.l2 = new Int32Array(count3 * 2);
-    }
-    const l1 = scratch.l1;
-    const l2 = scratch.l2;
-    rollGrams(buf, words, m, l1, l2);
-    for (let i = 0; i < count3; i++) {
-      const a = l1[i];
-      const b = l2[i];
-      let slot = a & mask;
-      for (; ; ) {
-        const it = item[slot];
-        if (it < 0) break;
-        if (lane1[slot] === a && lane2[slot] === b) {
-          if (best < 0 || it < best) best = it;
-          break;
-        }
-        slot = slot + 1 & mask;
-      }
-      if (best === 0) break;
-    }
-    if (best === 0) break;
-  }
-  return best < 0 ? null : { ...index2.sources[best] };
 }
 
 // src/measure/tokens/load.ts
@@ -14611,8 +14621,23 @@ function isBuiltinName(name) {
 // src/measure/tokens/ranks.ts
 var BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
 var RANK = /^(?:0|[1-9][0-9]*)$/;
+var pairTables = /* @__PURE__ */ new WeakMap();
+var newPairTable = () => new Float64Array(1 << 16).fill(Infinity);
+function notePair(table2, bytes2, rank2) {
+  if (bytes2.length === 2) table2[bytes2.charCodeAt(0) << 8 | bytes2.charCodeAt(1)] = rank2;
+}
+function pairRanks(ranks) {
+  let table2 = pairTables.get(ranks);
+  if (table2 === void 0) {
+    table2 = newPairTable();
+    for (const [bytes2, rank2] of ranks) notePair(table2, bytes2, rank2);
+    pairTables.set(ranks, table2);
+  }
+  return table2;
+}
 function parseRankFile(text, file) {
   const ranks = /* @__PURE__ */ new Map();
+  const pairs = newPairTable();
   const lines = text.split("\n");
   for (let i = 0; i < lines.length; i++) {
     const line = lines[i].endsWith("\r") ? lines[i].slice(0, -1) : lines[i];
@@ -14636,22 +14661,32 @@ function parseRankFile(text, file) {
       throw new TokenizerError("load", file, `token ${quote(token)} is listed twice`, { line: i + 1 });
     }
     ranks.set(bytes2, Number(rank2));
+    notePair(pairs, bytes2, Number(rank2));
   }
   requireEveryByte(ranks, file);
+  pairTables.set(ranks, pairs);
   return ranks;
 }
 function parseBuiltinRanks(bpeRanks, name) {
   const ranks = /* @__PURE__ */ new Map();
+  const pairs = newPairTable();
   for (const line of bpeRanks.split("\n")) {
     if (line.length === 0) continue;
     const parts = line.split(" ");
     const first = Number.parseInt(parts[1] ?? "", 10);
     if (!Number.isSafeInteger(first)) throw new TokenizerError("load", name, "builtin rank table is damaged");
-    for (let i = 2; i < parts.length; i++) {
-      ranks.set(Buffer.from(parts[i], "base64").toString("latin1"), first + i - 2);
+    try {
+      for (let i = 2; i < parts.length; i++) {
+        const bytes2 = atob(parts[i]);
+        ranks.set(bytes2, first + i - 2);
+        notePair(pairs, bytes2, first + i - 2);
+      }
+    } catch (cause) {
+      throw new TokenizerError("load", name, "builtin rank table is damaged (bad base64)", { cause });
     }
   }
   requireEveryByte(ranks, name);
+  pairTables.set(ranks, pairs);
   return ranks;
 }
 function requireEveryByte(ranks, file) {
@@ -14844,36 +14879,41 @@ var splitCl100k = (text, p) => {
 };
 
 // src/measure/tokens/bpe.ts
+var NONE = Infinity;
+var starts = new Int32Array(256);
+var pairRank = new Float64Array(256);
 function bytePairCount(bytes2, ranks) {
   const n = bytes2.length;
   if (n <= 1) return n;
   if (ranks.has(bytes2)) return 1;
-  const starts = new Array(n + 1);
-  for (let i = 0; i <= n; i++) starts[i] = i;
-  const pairRank = new Array(n - 1);
-  for (let i = 0; i < n - 1; i++) pairRank[i] = ranks.get(bytes2.slice(i, i + 2)) ?? Infinity;
+  const pairs = pairRanks(ranks);
+  if (starts.length <= n) {
+    starts = new Int32Array(n * 2);
+    pairRank = new Float64Array(n * 2);
+  }
+  const s = starts;
+  const pr = pairRank;
+  for (let i = 0; i <= n; i++) s[i] = i;
+  for (let i = 0; i < n - 1; i++) pr[i] = pairs[bytes2.charCodeAt(i) << 8 | bytes2.charCodeAt(i + 1)];
   let parts = n;
   while (parts > 1) {
-    let best = Infinity;
+    let best = NONE;
     let at2 = -1;
     for (let i = 0; i < parts - 1; i++) {
-      const r = pairRank[i];
+      const r = pr[i];
       if (r < best) {
         best = r;
         at2 = i;
       }
     }
     if (at2 < 0) break;
-    starts.splice(at2 + 1, 1);
-    pairRank.splice(at2, 1);
+    s.copyWithin(at2 + 1, at2 + 2, parts + 1);
+    pr.copyWithin(at2, at2 + 1, parts - 1);
     parts--;
-    if (at2 < parts - 1) pairRank[at2] = rankOf(bytes2, starts, at2, ranks);
-    if (at2 > 0) pairRank[at2 - 1] = rankOf(bytes2, starts, at2 - 1, ranks);
+    if (at2 < parts - 1) pr[at2] = ranks.get(bytes2.slice(s[at2], s[at2 + 2])) ?? NONE;
+    if (at2 > 0) pr[at2 - 1] = ranks.get(bytes2.slice(s[at2 - 1], s[at2 + 1])) ?? NONE;
   }
   return parts;
-}
-function rankOf(bytes2, starts, i, ranks) {
-  return ranks.get(bytes2.slice(starts[i], starts[i + 2])) ?? Infinity;
 }
 
 // src/measure/tokens/tiktoken.ts
@@ -14892,9 +14932,11 @@ function utf8Bytes(piece) {
 function createRankCounter(options) {
   const { ranks, label } = options;
   const split = new RegExp(options.pattern, "gu");
+  const sticky = new RegExp(options.pattern, "guy");
   const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
   const cache = new PieceCache(options.generationSize);
   const words = new PieceCache(options.generationSize);
+  const builtinPattern = Object.values(BUILTIN_PATTERNS).includes(options.pattern);
   const countRange = (text, start, end) => {
     if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(utf8Bytes(text.slice(start, end)), ranks);
     const hash2 = hashRange(text, start, end);
@@ -14905,7 +14947,7 @@ function createRankCounter(options) {
     cache.add(piece, hash2, n);
     return n;
   };
-  const countByRegex = (text, from) => {
+  const countByRegex = (text, from, pieces) => {
     let tokens = 0;
     split.lastIndex = from;
     let m;
@@ -14916,31 +14958,34 @@ function createRankCounter(options) {
         split.lastIndex += code >= 55296 && code <= 56319 ? 2 : 1;
         continue;
       }
-      tokens += countRange(text, m.index, m.index + length);
+      const n = countRange(text, m.index, m.index + length);
+      tokens += n;
+      pieces?.push(m.index + length, n);
     }
     return tokens;
   };
-  const countText = (text) => {
-    if (ascii === null) return countByRegex(text, 0);
+  const countText = (text, pieces) => {
+    if (ascii === null) return countByRegex(text, 0, pieces);
     let tokens = 0;
     const n = text.length;
     let p = 0;
     while (p < n) {
       let e = ascii(text, p);
       if (e < 0) {
-        split.lastIndex = p;
-        const m = split.exec(text);
-        if (m === null || m.index !== p || m[0].length === 0) return tokens + countByRegex(text, p);
-        e = p + m[0].length;
+        sticky.lastIndex = p;
+        if (!sticky.test(text) || sticky.lastIndex <= p) return tokens + countByRegex(text, p, pieces);
+        e = sticky.lastIndex;
       }
-      tokens += countRange(text, p, e);
+      const c = countRange(text, p, e);
+      tokens += c;
+      pieces?.push(e, c);
       p = e;
     }
     return tokens;
   };
-  const guarded = (text) => {
+  const guarded = (text, pieces = null) => {
     try {
-      return countText(text);
+      return countText(text, pieces);
     } catch (cause) {
       throw new TokenizerError("count", label, `cannot encode text: ${cause.message}`, { cause });
     }
@@ -14959,6 +15004,12 @@ function createRankCounter(options) {
       words.set(piece, n);
       return n;
     },
+    ...builtinPattern ? {
+      countWithPieces: (text, pieces) => {
+        pieces.reset();
+        return { tokens: guarded(text, pieces), unknown: 0 };
+      }
+    } : {},
     cacheStats: () => cache.stats()
   };
 }
@@ -15041,9 +15092,36 @@ function resolvePattern(pattern, file) {
   return { pattern: name, patternId: `sha256:${createHash4("sha256").update(name).digest("hex").slice(0, 16)}` };
 }
 
+// src/measure/tokens/pieces.ts
+var INITIAL_PIECES = 4096;
+var PieceList = class {
+  ends = new Int32Array(INITIAL_PIECES);
+  counts = new Int32Array(INITIAL_PIECES);
+  length = 0;
+  /** Forgets the pieces of the previous text. */
+  reset() {
+    this.length = 0;
+  }
+  /** Appends a piece ending at `end` that counts `count` tokens. */
+  push(end, count3) {
+    if (this.length === this.ends.length) {
+      const ends = new Int32Array(this.length * 2);
+      ends.set(this.ends);
+      this.ends = ends;
+      const counts = new Int32Array(this.length * 2);
+      counts.set(this.counts);
+      this.counts = counts;
+    }
+    this.ends[this.length] = end;
+    this.counts[this.length] = count3;
+    this.length++;
+  }
+};
+
 // src/measure/tokens/measure.ts
 var SPACE3 = 32;
 function measureTokens(counter, text, forEachWord2) {
+  if (counter.countWithPieces !== void 0) return measureByPieces(counter, text, forEachWord2);
   const { tokens, unknown } = counter.count(text);
   let words = 0;
   let wordTokens = 0;
@@ -15051,6 +15129,28 @@ function measureTokens(counter, text, forEachWord2) {
   forEachWord2(text, (start, end) => {
     const from = start > 0 && text.charCodeAt(start - 1) === SPACE3 ? start - 1 : start;
     const n = counter.countPiece(text.slice(from, end));
+    words++;
+    wordTokens += n;
+    if (n >= 2) continuedWords++;
+  });
+  return { tokens, unknown, words, wordTokens, continuedWords };
+}
+var scratch2 = new PieceList();
+function measureByPieces(counter, text, forEachWord2) {
+  const pieces = scratch2;
+  const { tokens, unknown } = counter.countWithPieces(text, pieces);
+  const { ends, counts, length } = pieces;
+  let words = 0;
+  let wordTokens = 0;
+  let continuedWords = 0;
+  let k = 0;
+  let last = 0;
+  forEachWord2(text, (start, end) => {
+    const from = start > 0 && text.charCodeAt(start - 1) === SPACE3 ? start - 1 : start;
+    if (from < last) k = 0;
+    last = from;
+    while (k < length && ends[k] <= from) k++;
+    const n = k < length && ends[k] === end && (k === 0 ? 0 : ends[k - 1]) === from ? counts[k] : counter.countPiece(text.slice(from, end));
     words++;
     wordTokens += n;
     if (n >= 2) continuedWords++;

@@ -4,7 +4,8 @@
 // real run loads one or two tokenizers; sharing one process between many skews V8's
 // optimizations and the heap), one after the other; the machine is shared, so read the
 // figures as ratios. Totals are checked: each counter against the library on the same
-// texts, and every o200k counter against the others on the whole corpora.
+// texts, and every o200k counter against the others on the whole corpora. The measure
+// cases time measureTokens with words taken from the pieces against every word counted alone.
 //
 //   node --import tsx scripts/bench-tokens.mjs [--quick]
 
@@ -47,6 +48,16 @@ if (caseArg < 0) {
   }
   console.log(info);
   console.table(rows);
+  // measureTokens: words taken from the pieces (fast path) against every word counted alone.
+  const measureRows = [];
+  for (const corpus of ['brown', 'hindi']) {
+    const fast = run('measure', 'o200k_base', corpus);
+    const plain = run('measure-plain', 'o200k_base', corpus);
+    for (const [what, r] of [['measureTokens o200k_base, words from pieces', fast], ['measureTokens o200k_base, every word counted alone', plain]]) {
+      measureRows.push({ what, corpus, 'MB/s (2nd pass)': r.mbps.toFixed(1), countPiece: r.countPiece, check: r === fast ? same(JSON.stringify(fast.sums), JSON.stringify(plain.sums)) : '' });
+    }
+  }
+  console.table(measureRows);
   const micro = run('micro', '-', 'brown');
   console.log(micro.bpe);
   console.log(micro.cache);
@@ -111,6 +122,26 @@ if (kind === 'js-tiktoken') {
   const s = time(half, (d) => counter.count(d).tokens);
   counter = await loadTokenizer(spec);
   out = { fastPath: counter.exactFastPath, slice: s, ...passes((d) => counter.count(d).tokens) };
+} else if (kind === 'measure' || kind === 'measure-plain') {
+  const { loadTokenizer, measureTokens } = await import('../src/measure/tokens/index.js');
+  const { forEachWord } = await import('../src/measure/words.js');
+  const loaded = await loadTokenizer({ kind: 'builtin', name });
+  let calls = 0;
+  const spy = (p) => (calls++, loaded.countPiece(p));
+  const counter = kind === 'measure' ? { ...loaded, countPiece: spy } : { ...loaded, countWithPieces: undefined, countPiece: spy };
+  const sums = { words: 0, wordTokens: 0, continuedWords: 0, tokens: 0 };
+  const pass = () => {
+    for (const k of Object.keys(sums)) sums[k] = 0;
+    calls = 0;
+    return time(all, (d) => {
+      const m = measureTokens(counter, d, forEachWord);
+      for (const k of Object.keys(sums)) sums[k] += m[k];
+      return m.tokens;
+    });
+  };
+  pass(); // warm the caches: the second pass measures the per-document work
+  const second = pass();
+  out = { mbps: second.mbps, sums, countPiece: calls };
 } else if (kind === 'micro') {
   const { Tiktoken } = await import('js-tiktoken/lite');
   const o200k = (await import('js-tiktoken/ranks/o200k_base')).default;

@@ -137,7 +137,8 @@ describe('a damaged cache entry', () => {
     const stored = JSON.parse(read(entry, 'utf8'));
     // Flip bytes in the middle of the stored duplicate index.
     const blob = Buffer.from(stored.duplicateIndex, 'base64');
-    blob[Math.floor(blob.length / 2)] ^= 0xff;
+    const mid = Math.floor(blob.length / 2);
+    blob[mid] = blob[mid]! ^ 0xff;
     write(entry, JSON.stringify({ ...stored, duplicateIndex: blob.toString('base64') }));
     const second = sluice(['check', join(root, 'p.yaml'), '--cache-dir', cacheDir], { json: true });
     expect(second.status).toBe(0);

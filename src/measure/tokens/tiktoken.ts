@@ -6,6 +6,15 @@
 // matches in ASCII stretches and the regex takes over for each piece that touches
 // another character. Special-token strings in the text count as ordinary text, like
 // `encode(text, [], [])`: corpus text that happens to contain "<|endoftext|>" is text.
+//
+// countWithPieces (builtin patterns only) also records the pieces, so that a word whose
+// span (with its leading space) is exactly one piece takes that piece's count. Why that
+// equals splitting the word alone: the span holds a non-space character, so the
+// alternative that matched it comes before the builtins' only lookahead (`\s+(?!\S)`),
+// and without lookaround or anchors the first successful backtracking path depends only
+// on the characters it reads, all inside the span; so the span alone splits into that
+// one piece. A user's pattern may have lookaround, so rank files with one are measured
+// word by word. test/measure/tokens-fertility.test.ts compares both on Brown and UDHR.
 
 import { splitCl100k, splitGpt2, splitO200k, type AsciiSplitter } from './ascii-split.js';
 import { bytePairCount } from './bpe.js';
@@ -13,6 +22,7 @@ import { hashRange, MAX_CACHED_PIECE_LENGTH, PieceCache } from './cache.js';
 import { TokenizerError } from './errors.js';
 import { BUILTIN_PATTERNS } from './patterns.js';
 import type { RankTable } from './ranks.js';
+import type { PieceList } from './pieces.js';
 import type { TokenCounter } from './types.js';
 
 export interface RankCounterOptions {
@@ -46,9 +56,11 @@ function utf8Bytes(piece: string): string {
 export function createRankCounter(options: RankCounterOptions): TokenCounter {
   const { ranks, label } = options;
   const split = new RegExp(options.pattern, 'gu');
+  const sticky = new RegExp(options.pattern, 'guy');
   const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
   const cache = new PieceCache<number>(options.generationSize);
   const words = new PieceCache<number>(options.generationSize);
+  const builtinPattern = (Object.values(BUILTIN_PATTERNS) as string[]).includes(options.pattern);
 
   const countRange = (text: string, start: number, end: number): number => {
     if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(utf8Bytes(text.slice(start, end)), ranks);
@@ -62,7 +74,7 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
   };
 
   // Every match of the regex from lastIndex `from` on, as String.prototype.matchAll gives them.
-  const countByRegex = (text: string, from: number): number => {
+  const countByRegex = (text: string, from: number, pieces: PieceList | null): number => {
     let tokens = 0;
     split.lastIndex = from;
     let m: RegExpExecArray | null;
@@ -74,34 +86,38 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
         split.lastIndex += code >= 0xd800 && code <= 0xdbff ? 2 : 1;
         continue;
       }
-      tokens += countRange(text, m.index, m.index + length);
+      const n = countRange(text, m.index, m.index + length);
+      tokens += n;
+      pieces?.push(m.index + length, n);
     }
     return tokens;
   };
 
-  const countText = (text: string): number => {
-    if (ascii === null) return countByRegex(text, 0);
+  const countText = (text: string, pieces: PieceList | null): number => {
+    if (ascii === null) return countByRegex(text, 0, pieces);
     let tokens = 0;
     const n = text.length;
     let p = 0;
     while (p < n) {
       let e = ascii(text, p);
       if (e < 0) {
-        split.lastIndex = p;
-        const m = split.exec(text);
-        // The builtin patterns match at every position with at least one character.
-        if (m === null || m.index !== p || m[0].length === 0) return tokens + countByRegex(text, p);
-        e = p + m[0].length;
+        // Sticky test() instead of exec: the same match (the builtin patterns match at every
+        // position, never empty) without a match array and substring per piece.
+        sticky.lastIndex = p;
+        if (!sticky.test(text) || sticky.lastIndex <= p) return tokens + countByRegex(text, p, pieces);
+        e = sticky.lastIndex;
       }
-      tokens += countRange(text, p, e);
+      const c = countRange(text, p, e);
+      tokens += c;
+      pieces?.push(e, c);
       p = e;
     }
     return tokens;
   };
 
-  const guarded = (text: string): number => {
+  const guarded = (text: string, pieces: PieceList | null = null): number => {
     try {
-      return countText(text);
+      return countText(text, pieces);
     } catch (cause) {
       throw new TokenizerError('count', label, `cannot encode text: ${(cause as Error).message}`, { cause });
     }
@@ -121,6 +137,14 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
       words.set(piece, n);
       return n;
     },
+    ...(builtinPattern
+      ? {
+          countWithPieces: (text: string, pieces: PieceList) => {
+            pieces.reset();
+            return { tokens: guarded(text, pieces), unknown: 0 };
+          },
+        }
+      : {}),
     cacheStats: () => cache.stats(),
   };
 }

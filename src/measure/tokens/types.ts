@@ -1,6 +1,8 @@
 // The contract of the tokens stage: a loaded tokenizer that counts tokens, and what
 // one document's text measures in it. Fertility figures are folded from these sums.
 
+import type { PieceList } from './pieces.js';
+
 /** Hit and miss counts of a counter's piece cache, for benchmarks and tests. */
 export interface CacheStats {
   hits: number;
@@ -35,6 +37,13 @@ export interface TokenCounter {
   count(text: string): { tokens: number; unknown: number };
   /** Tokens of one word as it occurs in text, e.g. `" काम"` with its leading space. */
   countPiece(piece: string): number;
+  /**
+   * Returns the same as count(text) and records each pre-token piece (end and tokens) in
+   * `pieces`. Present only where a piece that is a whole word span (with its leading
+   * space) provably counts the same as countPiece of that span, so measureTokens may
+   * reuse it; absent counters are measured word by word.
+   */
+  countWithPieces?(text: string, pieces: PieceList): { tokens: number; unknown: number };
   cacheStats(): CacheStats;
 }
 
