@@ -15403,7 +15403,7 @@ function canRunWorkers(entry) {
   return path5.endsWith(".js") && existsSync(path5);
 }
 async function measureInPool(refs, init, entry, workers, onResult) {
-  const queue = refs.map((ref, id) => ({ ref, id }));
+  const queue = refs.map((ref, id) => ({ ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
   const count3 = Math.max(1, Math.min(workers, queue.length));
   let failed;
   const all = [];

@@ -26,6 +26,8 @@ export interface PullRequestContext {
 export interface ActionSettings {
   /** Policy files, absolute. */
   policies: string[];
+  /** The bundle worker threads start from (the entry point's own file); shards are measured in this thread without it. */
+  workerEntry?: string;
   token: string;
   /** The `base` input, when set: a ref or commit to compare against instead of the PR's base. */
   base: string | null;

@@ -54,7 +54,8 @@ export async function measureInPool(
   workers: number,
   onResult: (r: ShardResult) => void,
 ): Promise<void> {
-  const queue = refs.map((ref, id) => ({ ref, id }));
+  // Largest shards first: the last shard to finish is then a small one, so workers end together.
+  const queue = refs.map((ref, id) => ({ ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
   const count = Math.max(1, Math.min(workers, queue.length));
   let failed: ShardFailure | undefined;
   const all: Promise<void>[] = [];
