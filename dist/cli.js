@@ -15457,6 +15457,7 @@ async function measureInPool(refs, init, entry, workers, onResult) {
 }
 
 // src/core/check.ts
+var CACHE_LOOKUPS_AT_ONCE = 16;
 var WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
 var ConfigError = class extends Error {
   name = "ConfigError";
@@ -15518,18 +15519,26 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes2, elapsedMs: performance.now() - started });
   };
   const todo = [];
-  for (const ref of shards) {
-    if (cache) {
-      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
-      keys.set(ref.path, contentId);
-      const hit = await cache.get(contentId, prepared.settingsId, ref);
+  if (!cache) todo.push(...shards);
+  else {
+    const lookups = new Array(shards.length);
+    let nextIndex = 0;
+    const lookUp = async () => {
+      for (let i = nextIndex++; i < shards.length; i = nextIndex++) {
+        const ref = shards[i];
+        const contentId = await (opts.contentKey ?? contentIdOf)(ref);
+        keys.set(ref.path, contentId);
+        lookups[i] = await cache.get(contentId, prepared.settingsId, ref);
+      }
+    };
+    await Promise.all(Array.from({ length: Math.min(CACHE_LOOKUPS_AT_ONCE, shards.length) }, lookUp));
+    shards.forEach((ref, i) => {
+      const hit = lookups[i];
       if (hit) {
         cached.add(ref.path);
         done(hit);
-        continue;
-      }
-    }
-    todo.push(ref);
+      } else todo.push(ref);
+    });
   }
   const store = async (r) => {
     const key = keys.get(r.path);

@@ -15,6 +15,9 @@ import type { ShardResult } from '../results/types.js';
 import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
 import { canRunWorkers, defaultWorkers, measureInPool, type WorkerInit } from './pool.js';
 
+/** Cache look-ups in flight at once: enough to hide file-system latency, few enough to keep memory flat. */
+const CACHE_LOOKUPS_AT_ONCE = 16;
+
 /** Compressed bytes of unmeasured shards that justify one more worker thread by default. */
 const WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
 
@@ -134,18 +137,28 @@ export async function measureShards(
   };
 
   const todo: ShardRef[] = [];
-  for (const ref of shards) {
-    if (cache) {
-      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
-      keys.set(ref.path, contentId);
-      const hit = await cache.get(contentId, prepared.settingsId, ref);
+  if (!cache) todo.push(...shards);
+  else {
+    // Cache look-ups are small file reads: overlap them, so a PR over a large corpus does not
+    // wait for hundreds of reads in a row. Results keep the shards' order.
+    const lookups: Array<ShardResult | undefined> = new Array(shards.length);
+    let nextIndex = 0;
+    const lookUp = async (): Promise<void> => {
+      for (let i = nextIndex++; i < shards.length; i = nextIndex++) {
+        const ref = shards[i]!;
+        const contentId = await (opts.contentKey ?? contentIdOf)(ref);
+        keys.set(ref.path, contentId);
+        lookups[i] = await cache.get(contentId, prepared.settingsId, ref);
+      }
+    };
+    await Promise.all(Array.from({ length: Math.min(CACHE_LOOKUPS_AT_ONCE, shards.length) }, lookUp));
+    shards.forEach((ref, i) => {
+      const hit = lookups[i];
       if (hit) {
         cached.add(ref.path);
         done(hit);
-        continue;
-      }
-    }
-    todo.push(ref);
+      } else todo.push(ref);
+    });
   }
 
   const store = async (r: ShardResult): Promise<void> => {
