@@ -15402,12 +15402,27 @@ function canRunWorkers(entry) {
   const path5 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
   return path5.endsWith(".js") && existsSync(path5);
 }
-async function measureInPool(refs, init, entry, workers, onResult) {
+async function measureInPool(refs, init, entry, workers, onResult, here) {
   const queue = refs.map((ref, id) => ({ ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
   const count3 = Math.max(1, Math.min(workers, queue.length));
   let failed;
   const all = [];
-  for (let w = 0; w < count3; w++) {
+  if (here) {
+    all.push(
+      (async () => {
+        for (let item = queue.shift(); item && !failed; item = queue.shift()) {
+          try {
+            onResult(await here(item.ref));
+          } catch (err) {
+            failed ??= new ShardFailure(item.ref.path, `measuring failed: ${err.message}`);
+            throw failed;
+          }
+          await new Promise((r) => setImmediate(r));
+        }
+      })()
+    );
+  }
+  for (let w = here ? 1 : 0; w < count3; w++) {
     all.push(
       new Promise((resolve, reject) => {
         const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
@@ -15552,10 +15567,20 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     const init = { role: "sluice-shard-worker", policyFile: policy.file, settingsId: prepared.settingsId };
     if (opts.root !== void 0) init.root = opts.root;
     const pending = [];
-    await measureInPool(pooled, init, opts.workerEntry, workers, (r) => {
-      done(r);
-      pending.push(store(r));
-    });
+    await measureInPool(
+      pooled,
+      init,
+      opts.workerEntry,
+      workers,
+      (r) => {
+        done(r);
+        pending.push(store(r));
+      },
+      (ref) => {
+        if (process.env.SLUICE_FAULT_SHARD && ref.path === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+        return scanShard(ref, prepared.scan, prepared.analyzers);
+      }
+    );
     await Promise.all(pending);
   } else {
     local.unshift(...pooled);

@@ -175,10 +175,21 @@ export async function measureShards(
     const init: WorkerInit = { role: 'sluice-shard-worker', policyFile: policy.file, settingsId: prepared.settingsId };
     if (opts.root !== undefined) init.root = opts.root;
     const pending: Promise<void>[] = [];
-    await measureInPool(pooled, init, opts.workerEntry, workers, (r) => {
-      done(r);
-      pending.push(store(r));
-    });
+    await measureInPool(
+      pooled,
+      init,
+      opts.workerEntry,
+      workers,
+      (r) => {
+        done(r);
+        pending.push(store(r));
+      },
+      (ref) => {
+        // For the tests of failure during a pooled run: the shard named fails wherever it is measured.
+        if (process.env.SLUICE_FAULT_SHARD && ref.path === process.env.SLUICE_FAULT_SHARD) throw new Error('injected fault (SLUICE_FAULT_SHARD)');
+        return scanShard(ref, prepared.scan, prepared.analyzers);
+      },
+    );
     await Promise.all(pending);
   } else {
     local.unshift(...pooled);

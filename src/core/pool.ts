@@ -53,13 +53,31 @@ export async function measureInPool(
   entry: string | URL,
   workers: number,
   onResult: (r: ShardResult) => void,
+  /** Measures a shard in this thread: the main thread then takes shards from the same queue, so `workers` threads do the work with one fewer start-up and heap. */
+  here?: (ref: ShardRef) => Promise<ShardResult>,
 ): Promise<void> {
   // Largest shards first: the last shard to finish is then a small one, so workers end together.
   const queue = refs.map((ref, id) => ({ ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
   const count = Math.max(1, Math.min(workers, queue.length));
   let failed: ShardFailure | undefined;
   const all: Promise<void>[] = [];
-  for (let w = 0; w < count; w++) {
+  if (here) {
+    all.push(
+      (async () => {
+        for (let item = queue.shift(); item && !failed; item = queue.shift()) {
+          try {
+            onResult(await here(item.ref));
+          } catch (err) {
+            failed ??= new ShardFailure(item.ref.path, `measuring failed: ${(err as Error).message}`);
+            throw failed;
+          }
+          // Let the workers' messages in between shards.
+          await new Promise((r) => setImmediate(r));
+        }
+      })(),
+    );
+  }
+  for (let w = here ? 1 : 0; w < count; w++) {
     all.push(
       new Promise<void>((resolve, reject) => {
         const worker = new Worker(typeof entry === 'string' && entry.startsWith('file:') ? new URL(entry) : entry, { workerData: init });
