@@ -5,7 +5,10 @@
 // checked out or changed, and the base side is read from blob streams.
 import { execFile, spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { mkdir, readFile, realpath, rename, writeFile } from 'node:fs/promises';
+import { createWriteStream } from 'node:fs';
+import { mkdir, mkdtemp, readFile, realpath, rename, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { pipeline } from 'node:stream/promises';
 import path from 'node:path';
 import type { Readable } from 'node:stream';
 import picomatch from 'picomatch';
@@ -389,8 +392,38 @@ export interface CompareOptions {
   onKey?: (key: string) => void;
 }
 
+/**
+ * Returns the policy with the base commit's version of its tokenizer file as the baseline, when
+ * the pull request changed that file and the policy names no baseline of its own: fertility and
+ * the token-weighted mix are then compared across the tokenizer change, and `max-regression`
+ * is judged against the base branch's tokenizer. Returns the policy unchanged otherwise.
+ */
+export async function withBaseTokenizer(policy: Policy, top: string, baseCommit: string, baseLabel: string): Promise<Policy> {
+  const tok = policy.tokenizer;
+  if (!tok || tok.kind !== 'file' || policy.baseline) return policy;
+  const rel = path.relative(top, await realpath(tok.absPath).catch(() => tok.absPath)).split(path.sep).join('/');
+  if (rel.startsWith('..')) return policy;
+  let baseBlob: string;
+  let headBlob: string;
+  try {
+    baseBlob = (await git(top, ['rev-parse', `${baseCommit}:${rel}`])).trim();
+    headBlob = (await git(top, ['hash-object', '--', rel])).trim();
+  } catch {
+    return policy; // the file is new in this PR: there is no base tokenizer to compare with
+  }
+  if (baseBlob === headBlob) return policy;
+  const dir = await mkdtemp(path.join(tmpdir(), 'sluice-base-tokenizer-'));
+  const file = path.join(dir, path.basename(rel));
+  await pipeline(blobStream(top, baseBlob), createWriteStream(file));
+  const baseline: NonNullable<Policy['baseline']> = { ...tok, file: `${tok.file} at ${baseLabel}`, absPath: file };
+  return { ...policy, baseline };
+}
+
 /** Returns the policy's report at head (the working tree) and at a base commit, and their comparison; unchanged shards are measured once. */
-export async function compareWithBase(policy: Policy, opts: CompareOptions): Promise<CompareResult> {
+export async function compareWithBase(givenPolicy: Policy, opts: CompareOptions): Promise<CompareResult> {
+  const policy = await withBaseTokenizer(givenPolicy, opts.top, opts.baseCommit, opts.baseLabel);
+  // Worker threads load the policy from its file, which does not name the base tokenizer: measure here instead.
+  if (policy !== givenPolicy) opts = { ...opts, check: { ...opts.check, workers: 1 } };
   const rootRel = await rootInRepo(opts.top, policy);
   const [headKeyOf, baseShards, renames] = await Promise.all([
     workingTreeKeys(opts.top, rootRel),
