@@ -365,7 +365,10 @@ var ShardTally = class {
       basis.scriptChars += scriptChars;
       basis.expectedScriptChars += Math.round(m.purity * scriptChars);
       basis.purityHistogram[purityBin(m.purity)] += 1;
-      keepLowest(this.impure, { line, language: m.declared ?? m.language, purity: m.purity, detail: describeScripts(m.scripts) });
+      const list = this.impure;
+      if (list.length < SAMPLES_PER_KIND || m.purity < list[list.length - 1].purity) {
+        keepLowest(list, { line, language: m.declared ?? m.language, purity: m.purity, detail: describeScripts(m.scripts) });
+      }
     }
     const mask = anomalyMask(m.anomalies);
     if (mask !== 0) {
