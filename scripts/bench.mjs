@@ -360,6 +360,28 @@ for (const c of sluiceCases) {
   const note = c.cache === 'warm' ? `${runs.warm.report.timing.cacheHits} of ${manifest.shards.length} shards from cache` : c.note;
   row(c.name, corpusMb, runs[c.key].seconds, { cpuSeconds: runs[c.key].cpuSeconds, run: runs[c.key], all: allSeconds[c.key], note: rounds > 1 ? `${note}; best of ${rounds}` : note });
 }
+// Many runners, simulated one after another on this machine: each `scan --partition i/2` is
+// what one runner would do; the wall time of two runners is the slower part, then `merge`.
+{
+  const parts = [1, 2].map((i) => path.join(outDir, `bench-part-${i}.json`));
+  const scans = [];
+  for (const [i, out] of parts.entries()) {
+    log(`partition ${i + 1}/2: sluice scan ...`);
+    const run = await runCli(['scan', '--policy', policies.full, '--partition', `${i + 1}/2`, '--out', out, '--no-cache', '--workers', '1'], `scan-${i + 1}`);
+    if (run.code !== 0) throw new Error(`scan ${i + 1}/2 exited with ${run.code}:\n${run.stderr}${run.stdout}`);
+    scans.push(run);
+  }
+  log('sluice merge ...');
+  const mergeReport = path.join(outDir, 'bench-report-merge.json');
+  const merged = await runCli(['merge', ...parts, '--policy', policies.full, '--json', mergeReport, '--quiet', '--no-color'], 'merge');
+  if (merged.code !== 0 && merged.code !== 1) throw new Error(`merge exited with ${merged.code}:\n${merged.stderr}`);
+  const slower = Math.max(...scans.map((r) => r.seconds));
+  row('(e) full check on 2 runners: slower scan --partition + merge', corpusMb, slower + merged.seconds, {
+    cpuSeconds: scans.reduce((n, r) => n + r.cpuSeconds, 0) + merged.cpuSeconds,
+    note: `scans ${scans.map((r) => r.seconds.toFixed(2)).join(' s, ')} s; merge ${merged.seconds.toFixed(2)} s`,
+  });
+}
+
 const footprint = cacheFootprint(cacheDir);
 
 // ---- the table ----
