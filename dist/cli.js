@@ -11436,6 +11436,11 @@ function createLanguageDetector(languages, detection) {
   for (const spec of languages) {
     for (const code of [spec.iso6393, ...spec.covers]) if (!keyOfLabel.has(code)) keyOfLabel.set(code, spec.key);
   }
+  const keyOfMacrolanguage = /* @__PURE__ */ new Map();
+  for (const [macro, members] of Object.entries(MACROLANGUAGE_MEMBERS)) {
+    const keys = new Set(members.map((m) => keyOfLabel.get(m)).filter((k) => k !== void 0));
+    if (keys.size === 1 && !keyOfLabel.has(macro)) keyOfMacrolanguage.set(macro, [...keys][0]);
+  }
   const scriptsOfKey = new Map(languages.map((spec) => [spec.key, spec.scripts]));
   const keyOfLowerKey = new Map(languages.map((spec) => [spec.key.toLowerCase(), spec.key]));
   const routes = /* @__PURE__ */ new Map();
@@ -11480,7 +11485,7 @@ function createLanguageDetector(languages, detection) {
       if (key === void 0) {
         const subtag = parse(trimmed.replace(/_/g, "-"), { forgiving: true }).language;
         const code = subtag ? iso6393Of(subtag) : void 0;
-        key = code && keyOfLabel.get(code) || OTHER2;
+        key = code && (keyOfLabel.get(code) ?? keyOfMacrolanguage.get(code)) || OTHER2;
       }
       if (declaredCache.size < 1e4) declaredCache.set(value, key);
       return key;

@@ -11,6 +11,7 @@ import type { DetectionSpec, LanguageSpec } from '../policy/types.js';
 import { MAJOR_LANGUAGES } from './language-candidates.js';
 import { createFrancLabeller, francLanguages, MAX_LENGTH, type FrancLabeller } from './language-franc.js';
 import { dominantScriptOf, scriptProfile } from './script.js';
+import { MACROLANGUAGE_MEMBERS } from '../policy/data/macrolanguages.js';
 
 /** Label for text in a language the policy does not list. */
 export const OTHER = 'other';
@@ -69,6 +70,13 @@ export function createLanguageDetector(languages: readonly LanguageSpec[], detec
   for (const spec of languages) {
     for (const code of [spec.iso6393, ...spec.covers]) if (!keyOfLabel.has(code)) keyOfLabel.set(code, spec.key);
   }
+  // A shard may declare a macrolanguage (`ar`, `zh`) where the policy lists one member (`arb`, `cmn`):
+  // the declaration then means that member, when exactly one policy language is a member.
+  const keyOfMacrolanguage = new Map<string, string>();
+  for (const [macro, members] of Object.entries(MACROLANGUAGE_MEMBERS)) {
+    const keys = new Set(members.map((m) => keyOfLabel.get(m)).filter((k): k is string => k !== undefined));
+    if (keys.size === 1 && !keyOfLabel.has(macro)) keyOfMacrolanguage.set(macro, [...keys][0]!);
+  }
   const scriptsOfKey = new Map(languages.map((spec) => [spec.key, spec.scripts]));
   const keyOfLowerKey = new Map(languages.map((spec) => [spec.key.toLowerCase(), spec.key]));
   const routes = new Map<string, Route>();
@@ -126,7 +134,7 @@ export function createLanguageDetector(languages: readonly LanguageSpec[], detec
       if (key === undefined) {
         const subtag = parse(trimmed.replace(/_/g, '-'), { forgiving: true }).language;
         const code = subtag ? iso6393Of(subtag) : undefined;
-        key = (code && keyOfLabel.get(code)) || OTHER;
+        key = (code && (keyOfLabel.get(code) ?? keyOfMacrolanguage.get(code))) || OTHER;
       }
       if (declaredCache.size < 10_000) declaredCache.set(value, key);
       return key;

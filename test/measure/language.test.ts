@@ -127,6 +127,15 @@ describe('declared languages', () => {
     expect(detector.declared('arb')).toBe('ar');
   });
 
+  it('maps a declared macrolanguage to the one policy language that is its member (ISO 639-3 macrolanguage mappings)', () => {
+    const arbOnly = createLanguageDetector([ENG, spec('arb', ['Arabic'], ['arb'])], { minChars: 20 });
+    for (const value of ['ar', 'ara', 'ar-EG']) expect(arbOnly.declared(value), value).toBe('arb');
+    // Two policy languages in one macrolanguage: the declaration does not say which, so it is `other`.
+    const both = createLanguageDetector([spec('cmn', ['Han'], ['cmn']), spec('yue', ['Han'], ['yue'])], { minChars: 20 });
+    expect(both.declared('zh')).toBe('other');
+    expect(both.declared('cmn')).toBe('cmn');
+  });
+
   it('maps anything else to `other`', () => {
     for (const value of ['fr', 'fra', 'Hindi', '', 'x-private', 'und', '12']) expect(detector.declared(value), value).toBe('other');
   });
