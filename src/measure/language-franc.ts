@@ -24,6 +24,7 @@
 // and would give other labels than franc on long documents.
 import { data } from 'franc/data.js';
 import { FRANC_CLASS_MASKS, FRANC_EXPRESSIONS, FRANC_RANGE_CLASSES, FRANC_RANGE_STARTS } from './data/franc-scripts.generated.js';
+import { lazyRangeTable } from './range-table.js';
 
 /** franc's sample: the first 2048 UTF-16 units are enough to tell languages apart. */
 export const MAX_LENGTH = 2048;
@@ -47,43 +48,16 @@ const UND = 'und';
 
 // ---- franc's script choice -------------------------------------------------------
 
-let francClassBmp: Uint8Array | undefined;
-let francAstralStarts: Int32Array | undefined;
-let francAstralClasses: Uint8Array | undefined;
+const francTable = lazyRangeTable(FRANC_RANGE_STARTS, FRANC_RANGE_CLASSES);
 
 /** Returns the BMP part of the franc expression-class table, expanded on first use. */
 function francClasses(): Uint8Array {
-  if (francClassBmp) return francClassBmp;
-  const table = new Uint8Array(0x10000);
-  const starts: number[] = [];
-  const classes: number[] = [];
-  for (let r = 0; r < FRANC_RANGE_STARTS.length; r++) {
-    const start = FRANC_RANGE_STARTS[r] as number;
-    const end = FRANC_RANGE_STARTS[r + 1] ?? 0x110000;
-    const cls = FRANC_RANGE_CLASSES[r] as number;
-    if (start < 0x10000) table.fill(cls, start, Math.min(end, 0x10000));
-    if (end > 0x10000) {
-      starts.push(Math.max(start, 0x10000));
-      classes.push(cls);
-    }
-  }
-  francAstralStarts = Int32Array.from(starts);
-  francAstralClasses = Uint8Array.from(classes);
-  francClassBmp = table;
-  return table;
+  return francTable().bmp;
 }
 
 /** Returns the franc expression class of a supplementary-plane code point. */
 function astralFrancClass(cp: number): number {
-  const starts = francAstralStarts as Int32Array;
-  let lo = 0;
-  let hi = starts.length - 1;
-  while (lo < hi) {
-    const midpoint = (lo + hi + 1) >> 1;
-    if ((starts[midpoint] as number) <= cp) lo = midpoint;
-    else hi = midpoint - 1;
-  }
-  return (francAstralClasses as Uint8Array)[lo] as number;
+  return francTable().astral(cp);
 }
 
 const classCounts = new Int32Array(FRANC_CLASS_MASKS.length);

@@ -2,6 +2,7 @@
 // characters counted per script, with Common, Inherited and Unknown left out because
 // they belong to no language (digits, punctuation, combining marks shared by scripts).
 import { SCRIPT_CODES, SCRIPT_NAMES, SCRIPT_RANGE_IDS, SCRIPT_RANGE_STARTS } from './data/scripts.generated.js';
+import { lazyRangeTable } from './range-table.js';
 
 export { SCRIPT_CODES, SCRIPT_NAMES };
 
@@ -12,44 +13,16 @@ export const INHERITED_ID = 2;
 /** Ids below this are Unknown, Common and Inherited. */
 export const FIRST_COUNTED_ID = 3;
 
-let bmp: Uint8Array | undefined;
-let astralStarts: Int32Array | undefined;
-let astralIds: Uint8Array | undefined;
+const scriptTable = lazyRangeTable(SCRIPT_RANGE_STARTS, SCRIPT_RANGE_IDS);
 
 /** Returns the Script id of every BMP code point (index = code point), expanded from the generated ranges on first use. */
 export function bmpScriptIds(): Uint8Array {
-  if (bmp) return bmp;
-  const table = new Uint8Array(0x10000);
-  const starts: number[] = [];
-  const ids: number[] = [];
-  for (let r = 0; r < SCRIPT_RANGE_STARTS.length; r++) {
-    const start = SCRIPT_RANGE_STARTS[r] as number;
-    const end = SCRIPT_RANGE_STARTS[r + 1] ?? 0x110000;
-    const id = SCRIPT_RANGE_IDS[r] as number;
-    if (start < 0x10000) table.fill(id, start, Math.min(end, 0x10000));
-    if (end > 0x10000) {
-      starts.push(Math.max(start, 0x10000));
-      ids.push(id);
-    }
-  }
-  astralStarts = Int32Array.from(starts);
-  astralIds = Uint8Array.from(ids);
-  bmp = table;
-  return table;
+  return scriptTable().bmp;
 }
 
 /** Returns the Script id of a code point outside the BMP, by binary search over the generated ranges. */
 export function astralScriptId(cp: number): number {
-  if (!astralStarts) bmpScriptIds();
-  const starts = astralStarts as Int32Array;
-  let lo = 0;
-  let hi = starts.length - 1;
-  while (lo < hi) {
-    const midpoint = (lo + hi + 1) >> 1;
-    if ((starts[midpoint] as number) <= cp) lo = midpoint;
-    else hi = midpoint - 1;
-  }
-  return (astralIds as Uint8Array)[lo] as number;
+  return scriptTable().astral(cp);
 }
 
 /** Returns the Script id of any code point. */
