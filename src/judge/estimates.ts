@@ -3,7 +3,7 @@
 import type { MixUnit } from '../policy/types.js';
 import { emptyMoments } from '../results/sample.js';
 import type { LanguageMoments, LanguageTally, ShardResult } from '../results/types.js';
-import { docsBelowPurity } from './figures.js';
+import { amountIn, docsBelowPurity } from './figures.js';
 import { intervalOf, ratioEstimate, type Interval, type IntervalMethod, type Stratum } from './intervals.js';
 
 /** Per-document values of one shard, summed: what a stratum is built from. */
@@ -112,20 +112,7 @@ function indicator(y: number, x: number): Sums {
 }
 
 function amount(t: LanguageTally, unit: MixUnit | 'baseline'): number {
-  switch (unit) {
-    case 'docs':
-      return t.docs;
-    case 'bytes':
-      return t.bytes;
-    case 'chars':
-      return t.chars;
-    case 'words':
-      return t.words;
-    case 'tokens':
-      return t.tokens?.tokens ?? 0;
-    case 'baseline':
-      return t.baseline?.tokens ?? 0;
-  }
+  return unit === 'baseline' ? (t.baseline?.tokens ?? 0) : amountIn(t, unit);
 }
 
 function amount2(t: LanguageTally, m: LanguageMoments | undefined, unit: MixUnit | 'baseline'): number {
