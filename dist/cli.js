@@ -725,20 +725,7 @@ function indicator(y, x) {
   return { y, x, yy: y, xx: x, xy: y };
 }
 function amount(t, unit) {
-  switch (unit) {
-    case "docs":
-      return t.docs;
-    case "bytes":
-      return t.bytes;
-    case "chars":
-      return t.chars;
-    case "words":
-      return t.words;
-    case "tokens":
-      return t.tokens?.tokens ?? 0;
-    case "baseline":
-      return t.baseline?.tokens ?? 0;
-  }
+  return unit === "baseline" ? t.baseline?.tokens ?? 0 : amountIn(t, unit);
 }
 function amount2(t, m, unit) {
   if (unit === "docs") return t.docs;
@@ -7528,6 +7515,42 @@ var FRANC_RANGE_CLASSES = [
   0
 ];
 
+// src/measure/range-table.ts
+function lazyRangeTable(starts2, values) {
+  let table2;
+  return () => table2 ??= rangeTable(starts2, values);
+}
+function rangeTable(starts2, values) {
+  const bmp = new Uint8Array(65536);
+  const astralStartList = [];
+  const astralValueList = [];
+  for (let r = 0; r < starts2.length; r++) {
+    const start = starts2[r];
+    const end = starts2[r + 1] ?? 1114112;
+    const value = values[r];
+    if (start < 65536) bmp.fill(value, start, Math.min(end, 65536));
+    if (end > 65536) {
+      astralStartList.push(Math.max(start, 65536));
+      astralValueList.push(value);
+    }
+  }
+  const astralStarts = Int32Array.from(astralStartList);
+  const astralValues = Uint8Array.from(astralValueList);
+  return {
+    bmp,
+    astral(cp) {
+      let lo = 0;
+      let hi = astralStarts.length - 1;
+      while (lo < hi) {
+        const midpoint = lo + hi + 1 >> 1;
+        if (astralStarts[midpoint] <= cp) lo = midpoint;
+        else hi = midpoint - 1;
+      }
+      return astralValues[lo];
+    }
+  };
+}
+
 // src/measure/language-franc.ts
 var MAX_LENGTH = 2048;
 var MIN_LENGTH = 10;
@@ -7536,39 +7559,12 @@ var SLOT_BITS = 13;
 var SLOTS = 1 << SLOT_BITS;
 var DIRECT = 27 * 27 * 27;
 var UND = "und";
-var francClassBmp;
-var francAstralStarts;
-var francAstralClasses;
+var francTable = lazyRangeTable(FRANC_RANGE_STARTS, FRANC_RANGE_CLASSES);
 function francClasses() {
-  if (francClassBmp) return francClassBmp;
-  const table2 = new Uint8Array(65536);
-  const starts2 = [];
-  const classes2 = [];
-  for (let r = 0; r < FRANC_RANGE_STARTS.length; r++) {
-    const start = FRANC_RANGE_STARTS[r];
-    const end = FRANC_RANGE_STARTS[r + 1] ?? 1114112;
-    const cls = FRANC_RANGE_CLASSES[r];
-    if (start < 65536) table2.fill(cls, start, Math.min(end, 65536));
-    if (end > 65536) {
-      starts2.push(Math.max(start, 65536));
-      classes2.push(cls);
-    }
-  }
-  francAstralStarts = Int32Array.from(starts2);
-  francAstralClasses = Uint8Array.from(classes2);
-  francClassBmp = table2;
-  return table2;
+  return francTable().bmp;
 }
 function astralFrancClass(cp) {
-  const starts2 = francAstralStarts;
-  let lo = 0;
-  let hi = starts2.length - 1;
-  while (lo < hi) {
-    const midpoint = lo + hi + 1 >> 1;
-    if (starts2[midpoint] <= cp) lo = midpoint;
-    else hi = midpoint - 1;
-  }
-  return francAstralClasses[lo];
+  return francTable().astral(cp);
 }
 var classCounts = new Int32Array(FRANC_CLASS_MASKS.length);
 var expressionCounts = new Int32Array(FRANC_EXPRESSIONS.length);
@@ -11339,40 +11335,12 @@ var SCRIPT_RANGE_IDS = [
 
 // src/measure/script.ts
 var FIRST_COUNTED_ID = 3;
-var bmp;
-var astralStarts;
-var astralIds;
+var scriptTable = lazyRangeTable(SCRIPT_RANGE_STARTS, SCRIPT_RANGE_IDS);
 function bmpScriptIds() {
-  if (bmp) return bmp;
-  const table2 = new Uint8Array(65536);
-  const starts2 = [];
-  const ids = [];
-  for (let r = 0; r < SCRIPT_RANGE_STARTS.length; r++) {
-    const start = SCRIPT_RANGE_STARTS[r];
-    const end = SCRIPT_RANGE_STARTS[r + 1] ?? 1114112;
-    const id = SCRIPT_RANGE_IDS[r];
-    if (start < 65536) table2.fill(id, start, Math.min(end, 65536));
-    if (end > 65536) {
-      starts2.push(Math.max(start, 65536));
-      ids.push(id);
-    }
-  }
-  astralStarts = Int32Array.from(starts2);
-  astralIds = Uint8Array.from(ids);
-  bmp = table2;
-  return table2;
+  return scriptTable().bmp;
 }
 function astralScriptId(cp) {
-  if (!astralStarts) bmpScriptIds();
-  const starts2 = astralStarts;
-  let lo = 0;
-  let hi = starts2.length - 1;
-  while (lo < hi) {
-    const midpoint = lo + hi + 1 >> 1;
-    if (starts2[midpoint] <= cp) lo = midpoint;
-    else hi = midpoint - 1;
-  }
-  return astralIds[lo];
+  return scriptTable().astral(cp);
 }
 function scriptProfile(text) {
   const counts = new Int32Array(SCRIPT_NAMES.length);
@@ -15402,6 +15370,9 @@ var ShardFailure = class extends Error {
   shard;
   name = "ShardFailure";
 };
+function throwIfFaultInjected(path5) {
+  if (process.env.SLUICE_FAULT_SHARD && path5 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+}
 function defaultWorkers() {
   return availableParallelism();
 }
@@ -15493,28 +15464,35 @@ async function loadPolicyOrThrow(file, root, onWarning) {
   for (const w of loaded.warnings) onWarning?.(formatProblem(w));
   return loaded.policy;
 }
-async function measureCorpus(policy, opts, shardsOverride) {
-  const started = performance.now();
+async function discoverOrThrow(policy) {
   let discovery;
   try {
     discovery = await discoverShards(policy.root, policy.corpus);
   } catch (err) {
     throw new ConfigError(`${policy.file}: ${err.message}`);
   }
-  const shards = shardsOverride ?? discovery.shards;
-  if (shards.length === 0) {
-    throw new ConfigError(
-      `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(", ")}) under ${policy.root}` + (discovery.skipped.length ? `; ${discovery.skipped.length} files matched but were skipped, e.g. ${discovery.skipped[0].path} (${discovery.skipped[0].reason})` : "")
-    );
-  }
-  let prepared;
+  if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
+  return discovery;
+}
+function noShards(policy, skipped) {
+  return new ConfigError(
+    `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(", ")}) under ${policy.root}` + (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0].path} (${skipped[0].reason})` : "")
+  );
+}
+async function prepareOrThrow(policy) {
   try {
-    prepared = await prepareAnalyzers(policy);
+    return await prepareAnalyzers(policy);
   } catch (err) {
     if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
     throw err;
   }
-  const { results, cached } = await measureShards(policy, shards, prepared, opts, started);
+}
+async function measureCorpus(policy, opts, given = {}) {
+  const started = performance.now();
+  const discovery = given.discovery ?? await discoverOrThrow(policy);
+  if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
+  const prepared = given.prepared ?? await prepareOrThrow(policy);
+  const { results, cached } = await measureShards(policy, discovery.shards, prepared, opts, started);
   return assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
 }
 async function assembleCorpus(policy, prepared, results, cached, skipped, newShards, started) {
@@ -15585,7 +15563,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
         pending.push(store(r));
       },
       (ref) => {
-        if (process.env.SLUICE_FAULT_SHARD && ref.path === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+        throwIfFaultInjected(ref.path);
         return scanShard(ref, prepared.scan, prepared.analyzers);
       }
     );
@@ -15643,27 +15621,13 @@ function partialFromJson(text) {
 }
 
 // src/core/partition.ts
-async function prepareOrThrow(policy) {
-  try {
-    return await prepareAnalyzers(policy);
-  } catch (err) {
-    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
-    throw err;
-  }
-}
 async function scanPartition(policyFile, index2, count3, opts) {
   if (!Number.isInteger(count3) || count3 < 1 || !Number.isInteger(index2) || index2 < 1 || index2 > count3) {
     throw new ConfigError(`--partition must be I/N with 1 \u2264 I \u2264 N, got ${index2}/${count3}`);
   }
   const started = performance.now();
   const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
-  let discovery;
-  try {
-    discovery = await discoverShards(policy.root, policy.corpus);
-  } catch (err) {
-    throw new ConfigError(`${policy.file}: ${err.message}`);
-  }
-  if (discovery.shards.length === 0) throw new ConfigError(`${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(", ")}) under ${policy.root}`);
+  const discovery = await discoverOrThrow(policy);
   const mine = discovery.shards.filter((s) => partitionOf(s.path, count3) === index2);
   const prepared = await prepareOrThrow(policy);
   const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
@@ -15737,7 +15701,7 @@ async function runShardWorker() {
       }
       void (async () => {
         try {
-          if (process.env.SLUICE_FAULT_SHARD && msg.ref.path === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+          throwIfFaultInjected(msg.ref.path);
           const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers);
           post({ type: "result", id: msg.id, result });
         } catch (err) {
@@ -16120,6 +16084,7 @@ function parseCli(argv, env, isTTY) {
     if (!Number.isInteger(workers) || workers < 1) throw new UsageError(`--workers takes a whole number of at least 1, got \`${v.workers}\``);
   }
   const cacheDir = v["no-cache"] ? null : v["cache-dir"] ?? ".sluice-cache";
+  const color = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
   if (command === "scan") {
     const m = /^(\d+)\/(\d+)$/.exec(v.partition ?? "");
     if (!m) throw new UsageError("scan needs --partition I/N, e.g. --partition 1/8");
@@ -16136,8 +16101,7 @@ function parseCli(argv, env, isTTY) {
   if (command === "merge") {
     if (!v.policy || v.policy.length !== 1) throw new UsageError("merge takes exactly one --policy and the partial files as arguments");
     if (parsed.positionals.length === 0) throw new UsageError("merge needs the partial result files written by `sluice scan --partition`");
-    const color2 = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
-    const out2 = { command: "merge", policy: v.policy[0], parts: parsed.positionals, cacheDir, color: color2, quiet: v.quiet ?? false };
+    const out2 = { command: "merge", policy: v.policy[0], parts: parsed.positionals, cacheDir, color, quiet: v.quiet ?? false };
     if (v.json !== void 0) out2.json = v.json;
     if (v.markdown !== void 0) out2.markdown = v.markdown;
     if (v.root !== void 0) out2.root = v.root;
@@ -16145,7 +16109,6 @@ function parseCli(argv, env, isTTY) {
   }
   const policies = [...v.policy ?? [], ...parsed.positionals];
   if (policies.length === 0) throw new UsageError("no policy file given; usage: sluice check --policy policies/main.yaml");
-  const color = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
   const out = { command: "check", policies, cacheDir, color, quiet: v.quiet ?? false };
   if (workers !== void 0) out.workers = workers;
   if (v.json !== void 0) out.json = v.json;

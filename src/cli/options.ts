@@ -101,6 +101,7 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
     if (!Number.isInteger(workers) || workers < 1) throw new UsageError(`--workers takes a whole number of at least 1, got \`${v.workers}\``);
   }
   const cacheDir = v['no-cache'] ? null : (v['cache-dir'] ?? '.sluice-cache');
+  const color = v['no-color'] ? false : v.color ? true : isTTY && !('NO_COLOR' in env && env.NO_COLOR !== '');
   if (command === 'scan') {
     const m = /^(\d+)\/(\d+)$/.exec(v.partition ?? '');
     if (!m) throw new UsageError('scan needs --partition I/N, e.g. --partition 1/8');
@@ -117,7 +118,6 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
   if (command === 'merge') {
     if (!v.policy || v.policy.length !== 1) throw new UsageError('merge takes exactly one --policy and the partial files as arguments');
     if (parsed.positionals.length === 0) throw new UsageError('merge needs the partial result files written by `sluice scan --partition`');
-    const color = v['no-color'] ? false : v.color ? true : isTTY && !('NO_COLOR' in env && env.NO_COLOR !== '');
     const out: MergeCliOptions = { command: 'merge', policy: v.policy[0]!, parts: parsed.positionals, cacheDir, color, quiet: v.quiet ?? false };
     if (v.json !== undefined) out.json = v.json;
     if (v.markdown !== undefined) out.markdown = v.markdown;
@@ -126,7 +126,6 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
   }
   const policies = [...(v.policy ?? []), ...parsed.positionals];
   if (policies.length === 0) throw new UsageError('no policy file given; usage: sluice check --policy policies/main.yaml');
-  const color = v['no-color'] ? false : v.color ? true : isTTY && !('NO_COLOR' in env && env.NO_COLOR !== '');
   const out: CheckCliOptions = { command: 'check', policies, cacheDir, color, quiet: v.quiet ?? false };
   if (workers !== undefined) out.workers = workers;
   if (v.json !== undefined) out.json = v.json;

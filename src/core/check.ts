@@ -6,14 +6,14 @@ import type { Report } from '../judge/types.js';
 import { formatProblem, loadPolicy } from '../policy/index.js';
 import type { Policy } from '../policy/types.js';
 import { discoverShards } from '../read/index.js';
-import type { ShardRef, SkippedFile } from '../read/types.js';
+import type { Discovery, ShardRef, SkippedFile } from '../read/types.js';
 import { ResultCache } from '../results/cache.js';
 import type { CorpusResult } from '../results/corpus.js';
 import { contentIdOf, scanShard } from '../results/scan.js';
 import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
 import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
-import { canRunWorkers, defaultWorkers, measureInPool, type WorkerInit } from './pool.js';
+import { canRunWorkers, defaultWorkers, measureInPool, throwIfFaultInjected, type WorkerInit } from './pool.js';
 
 /** Cache look-ups in flight at once: enough to hide file-system latency, few enough to keep memory flat. */
 const CACHE_LOOKUPS_AT_ONCE = 16;
@@ -67,30 +67,50 @@ export async function loadPolicyOrThrow(file: string, root?: string, onWarning?:
   return loaded.policy;
 }
 
-/** Returns the measured corpus of one policy: every shard's result, cached by content where possible. */
-export async function measureCorpus(policy: Policy, opts: CheckOptions, shardsOverride?: ShardRef[]): Promise<CorpusResult> {
-  const started = performance.now();
+/** Returns the shards a policy names, or throws ConfigError when the root cannot be read or nothing matched. */
+export async function discoverOrThrow(policy: Policy): Promise<Discovery> {
   let discovery;
   try {
     discovery = await discoverShards(policy.root, policy.corpus);
   } catch (err) {
     throw new ConfigError(`${policy.file}: ${(err as Error).message}`);
   }
-  const shards = shardsOverride ?? discovery.shards;
-  if (shards.length === 0) {
-    throw new ConfigError(
-      `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(', ')}) under ${policy.root}` +
-        (discovery.skipped.length ? `; ${discovery.skipped.length} files matched but were skipped, e.g. ${discovery.skipped[0]!.path} (${discovery.skipped[0]!.reason})` : ''),
-    );
-  }
-  let prepared;
+  if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
+  return discovery;
+}
+
+function noShards(policy: Policy, skipped: readonly SkippedFile[]): ConfigError {
+  return new ConfigError(
+    `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(', ')}) under ${policy.root}` +
+      (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0]!.path} (${skipped[0]!.reason})` : ''),
+  );
+}
+
+/** Returns the analyzers of a policy, or throws ConfigError when a tokenizer or evaluation file cannot be used. */
+export async function prepareOrThrow(policy: Policy): Promise<PreparedAnalyzers> {
   try {
-    prepared = await prepareAnalyzers(policy);
+    return await prepareAnalyzers(policy);
   } catch (err) {
     if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
     throw err;
   }
-  const { results, cached } = await measureShards(policy, shards, prepared, opts, started);
+}
+
+/**
+ * Returns the measured corpus of one policy: every shard's result, cached by content where possible.
+ * A caller that measures the same policy twice (the Action's head and base) passes the discovery
+ * and the prepared analyzers in, so neither the tree walk nor the tokenizer load is repeated.
+ */
+export async function measureCorpus(
+  policy: Policy,
+  opts: CheckOptions,
+  given: { discovery?: Discovery; prepared?: PreparedAnalyzers } = {},
+): Promise<CorpusResult> {
+  const started = performance.now();
+  const discovery = given.discovery ?? (await discoverOrThrow(policy));
+  if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
+  const prepared = given.prepared ?? (await prepareOrThrow(policy));
+  const { results, cached } = await measureShards(policy, discovery.shards, prepared, opts, started);
   return assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
 }
 
@@ -185,8 +205,7 @@ export async function measureShards(
         pending.push(store(r));
       },
       (ref) => {
-        // For the tests of failure during a pooled run: the shard named fails wherever it is measured.
-        if (process.env.SLUICE_FAULT_SHARD && ref.path === process.env.SLUICE_FAULT_SHARD) throw new Error('injected fault (SLUICE_FAULT_SHARD)');
+        throwIfFaultInjected(ref.path);
         return scanShard(ref, prepared.scan, prepared.analyzers);
       },
     );

@@ -15,11 +15,11 @@ import picomatch from 'picomatch';
 import { buildReport } from '../judge/report.js';
 import type { Report, RuleVerdict, Verdict } from '../judge/types.js';
 import type { Policy } from '../policy/types.js';
-import { discoverShards, pathClassifier } from '../read/index.js';
+import { pathClassifier } from '../read/index.js';
 import type { ShardRef } from '../read/types.js';
 import type { CorpusResult } from '../results/corpus.js';
 import { contentIdOf } from '../results/scan.js';
-import { ConfigError, measureCorpus, type CheckOptions } from './check.js';
+import { ConfigError, discoverOrThrow, measureCorpus, prepareOrThrow, type CheckOptions } from './check.js';
 
 /** Largest git output read at once: ls-tree of a few hundred thousand shards is tens of MB. */
 const GIT_MAX_BUFFER_BYTES = 1024 * 1024 * 1024;
@@ -431,12 +431,9 @@ export async function compareWithBase(givenPolicy: Policy, opts: CompareOptions)
     renamesBetween(opts.top, opts.baseCommit, rootRel),
   ]);
 
-  let discovery;
-  try {
-    discovery = await discoverShards(policy.root, policy.corpus);
-  } catch (err) {
-    throw new ConfigError(`${policy.file}: ${(err as Error).message}`);
-  }
+  const discovery = await discoverOrThrow(policy);
+  // Head and base are measured under the same analyzers: load the tokenizers and evaluation sets once.
+  const prepared = await prepareOrThrow(policy);
   const headKeys = new Map<string, string>();
   for (const ref of discovery.shards) headKeys.set(ref.path, await headKeyOf(ref));
   const baseKeys = new Map(baseShards.map((s) => [s.path, s.blob] as const));
@@ -446,7 +443,7 @@ export async function compareWithBase(givenPolicy: Policy, opts: CompareOptions)
   const isNew = (c: ShardChange): boolean => c.status === 'added' || c.status === 'modified' || (c.status === 'renamed' && c.edited === true);
   const newShards = shardChanges(baseKeys, headKeys, renames).filter(isNew).map((c) => c.path);
 
-  const headCorpus = await measureCorpus(policy, { ...opts.check, contentKey: async (ref) => headKeys.get(ref.path) ?? headKeyOf(ref), newShards }, discovery.shards);
+  const headCorpus = await measureCorpus(policy, { ...opts.check, contentKey: async (ref) => headKeys.get(ref.path) ?? headKeyOf(ref), newShards }, { discovery, prepared });
   const headReport = buildReport(policy, headCorpus, opts.check.cwd);
 
   let base: Side | null = null;
@@ -456,19 +453,19 @@ export async function compareWithBase(givenPolicy: Policy, opts: CompareOptions)
   if (refs.length > 0) {
     // The base was judged before (a push to the default branch, or an earlier run of this PR) under the same
     // policy and settings: reuse that judgement, so the run costs what the PR changed, not the corpus size.
-    const settingsId = headCorpus.shards[0]?.settingsId;
-    const memoKey = settingsId && opts.check.cacheDir ? await baseMemoKey(policy, settingsId, opts.baseCommit) : undefined;
+    const { settingsId } = prepared;
+    const memoKey = opts.check.cacheDir ? await baseMemoKey(policy, settingsId, opts.baseCommit) : undefined;
     if (memoKey) opts.onKey?.(memoKey);
-    const memo = memoKey && settingsId ? await readBaseMemo(opts.check.cacheDir!, settingsId, memoKey) : undefined;
+    const memo = memoKey ? await readBaseMemo(opts.check.cacheDir!, settingsId, memoKey) : undefined;
     if (memo) {
       base = { report: memo.report };
       baseDocs = new Map(Object.entries(memo.docs));
     } else {
       const { newShards: _unused, ...baseCheck } = opts.check;
-      const corpus = await measureCorpus(policy, { ...baseCheck, contentKey: async (ref) => baseKeys.get(ref.path)! }, refs);
+      const corpus = await measureCorpus(policy, { ...baseCheck, contentKey: async (ref) => baseKeys.get(ref.path)! }, { discovery: { shards: refs, skipped: discovery.skipped }, prepared });
       base = { corpus, report: buildReport(policy, corpus, opts.check.cwd) };
       baseDocs = new Map(corpus.shards.map((s) => [s.path, s.read.docs] as const));
-      if (memoKey && settingsId) await writeBaseMemo(opts.check.cacheDir!, settingsId, memoKey, base.report, corpus);
+      if (memoKey) await writeBaseMemo(opts.check.cacheDir!, settingsId, memoKey, base.report, corpus);
     }
   }
 

@@ -5,21 +5,10 @@
 import { readFile } from 'node:fs/promises';
 import { buildReport } from '../judge/report.js';
 import type { Report } from '../judge/types.js';
-import { discoverShards } from '../read/index.js';
 import { partitionOf, PARTIAL_FORMAT, PARTIAL_VERSION, partialFromJson, type Partial } from '../results/partition.js';
 import type { ShardResult } from '../results/types.js';
 import type { SkippedFile } from '../read/types.js';
-import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
-import { assembleCorpus, ConfigError, loadPolicyOrThrow, measureShards, type CheckOptions } from './check.js';
-
-async function prepareOrThrow(policy: Parameters<typeof prepareAnalyzers>[0]): Promise<PreparedAnalyzers> {
-  try {
-    return await prepareAnalyzers(policy);
-  } catch (err) {
-    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
-    throw err;
-  }
-}
+import { assembleCorpus, ConfigError, discoverOrThrow, loadPolicyOrThrow, measureShards, prepareOrThrow, type CheckOptions } from './check.js';
 
 /** Returns the partial result of partition `index` of `count` (1-based). */
 export async function scanPartition(policyFile: string, index: number, count: number, opts: Omit<CheckOptions, 'policies'>): Promise<Partial> {
@@ -28,13 +17,7 @@ export async function scanPartition(policyFile: string, index: number, count: nu
   }
   const started = performance.now();
   const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
-  let discovery;
-  try {
-    discovery = await discoverShards(policy.root, policy.corpus);
-  } catch (err) {
-    throw new ConfigError(`${policy.file}: ${(err as Error).message}`);
-  }
-  if (discovery.shards.length === 0) throw new ConfigError(`${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(', ')}) under ${policy.root}`);
+  const discovery = await discoverOrThrow(policy);
   const mine = discovery.shards.filter((s) => partitionOf(s.path, count) === index);
   const prepared = await prepareOrThrow(policy);
   const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);

@@ -34,6 +34,11 @@ export class ShardFailure extends Error {
   }
 }
 
+/** Throws when the tests of failure during a pooled run name this shard (SLUICE_FAULT_SHARD), wherever it is measured. */
+export function throwIfFaultInjected(path: string): void {
+  if (process.env.SLUICE_FAULT_SHARD && path === process.env.SLUICE_FAULT_SHARD) throw new Error('injected fault (SLUICE_FAULT_SHARD)');
+}
+
 /** Returns the default worker count: the cores this process may use. */
 export function defaultWorkers(): number {
   return availableParallelism();

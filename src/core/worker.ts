@@ -4,7 +4,7 @@ import { parentPort, workerData, isMainThread } from 'node:worker_threads';
 import { scanShard } from '../results/scan.js';
 import { prepareAnalyzers } from './analyzers.js';
 import { loadPolicyOrThrow } from './check.js';
-import type { FromWorker, ToWorker, WorkerInit } from './pool.js';
+import { throwIfFaultInjected, type FromWorker, type ToWorker, type WorkerInit } from './pool.js';
 
 /** Returns whether this thread was started by the pool (the front end then runs `runShardWorker` instead of its main). */
 export function isShardWorker(): boolean {
@@ -26,8 +26,7 @@ export async function runShardWorker(): Promise<void> {
       }
       void (async () => {
         try {
-          // For the tests of worker failure: a worker that throws while measuring a named shard.
-          if (process.env.SLUICE_FAULT_SHARD && msg.ref.path === process.env.SLUICE_FAULT_SHARD) throw new Error('injected fault (SLUICE_FAULT_SHARD)');
+          throwIfFaultInjected(msg.ref.path);
           const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers);
           post({ type: 'result', id: msg.id, result });
         } catch (err) {
