@@ -87,6 +87,13 @@ var MomentTally = class {
   of(key) {
     return this.moments[key] ??= emptyMoments();
   }
+  /** Adds the sums of the documents that follow (a batch measured elsewhere); new keys come after the ones already seen. */
+  absorb(o) {
+    for (const [key, m] of Object.entries(o)) {
+      const into = this.of(key);
+      for (const field of Object.keys(m)) into[field] += m[field];
+    }
+  }
   /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
   add(m, tokens) {
     const t = this.of(m.language);
@@ -386,6 +393,41 @@ var ShardTally = class {
         this.mismatch.push({ line, declared: m.declared, detected: m.language, detail: `detector label ${m.detected}` });
       }
     }
+  }
+  /** Returns the tally's contents as plain data (shared, not copied). */
+  state() {
+    const { languages, scripts, anomalyMasks, anomalyDocs, declared, impure, anomalous, mismatch } = this;
+    return { languages, scripts, anomalyMasks, anomalyDocs, declared, impure, anomalous, mismatch };
+  }
+  /**
+   * Adds the tally of the documents that follow this one's (a batch measured elsewhere): the sums
+   * add, new keys come after the ones already seen, and the example lists keep what adding each
+   * document here would have kept (the first N by line; for impure, the N lowest by purity, then line).
+   */
+  absorb(o) {
+    for (const [key, t] of Object.entries(o.languages)) {
+      const into = this.lang(key);
+      into.docs += t.docs;
+      into.bytes += t.bytes;
+      into.chars += t.chars;
+      into.words += t.words;
+      if (t.tokens) addTokens(into.tokens ??= emptyTokenTally(), t.tokens);
+      if (t.baseline) addTokens(into.baseline ??= emptyTokenTally(), t.baseline);
+      into.purityDocs += t.purityDocs;
+      into.scriptChars += t.scriptChars;
+      into.expectedScriptChars += t.expectedScriptChars;
+      for (let i = 0; i < into.purityHistogram.length; i++) into.purityHistogram[i] += t.purityHistogram[i] ?? 0;
+    }
+    addCounts(this.scripts, o.scripts);
+    addCounts(this.anomalyMasks, o.anomalyMasks);
+    addCounts(this.anomalyDocs, o.anomalyDocs);
+    for (const [d, row] of Object.entries(o.declared)) addCounts(this.declared[d] ??= {}, row);
+    for (const item of o.impure) {
+      const list = this.impure;
+      if (list.length < SAMPLES_PER_KIND || item.purity < list[list.length - 1].purity) keepLowest(list, item);
+    }
+    for (const item of o.anomalous) if (this.anomalous.length < SAMPLES_PER_KIND) this.anomalous.push(item);
+    for (const item of o.mismatch) if (this.mismatch.length < SAMPLES_PER_KIND) this.mismatch.push(item);
   }
 };
 function addTokens(into, d) {
@@ -4090,7 +4132,7 @@ import { createGunzip } from "node:zlib";
 import { Decompress } from "fzstd";
 var READ_CHUNK_BYTES = 256 * 1024;
 var GUNZIP_CHUNK_BYTES = 128 * 1024;
-async function pumpShard(ref, write) {
+async function pumpShard(ref, write, pace) {
   let source;
   try {
     source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
@@ -4099,33 +4141,37 @@ async function pumpShard(ref, write) {
   }
   switch (ref.compression) {
     case "none":
-      return pumpPlain(source, write);
+      return pumpPlain(source, write, pace);
     case "gzip":
-      return pumpGzip(source, write);
+      return pumpGzip(source, write, pace);
     case "zstd":
-      return pumpZstd(source, write);
+      return pumpZstd(source, write, pace);
   }
 }
-async function pumpPlain(source, write) {
+async function pumpPlain(source, write, pace) {
   let compressedBytes = 0;
-  const error = await drain(source, (chunk) => {
-    compressedBytes += chunk.length;
-    write(chunk);
-  });
+  const error = await drain(
+    source,
+    (chunk) => {
+      compressedBytes += chunk.length;
+      write(chunk);
+    },
+    pace
+  );
   return error === void 0 ? { compressedBytes } : { compressedBytes, error: `read failed: ${error}` };
 }
-async function pumpGzip(source, write) {
+async function pumpGzip(source, write, pace) {
   const gunzip = createGunzip({ chunkSize: GUNZIP_CHUNK_BYTES });
   let readFailed = false;
   source.once("error", () => readFailed = true);
   pipeline(source, gunzip, () => {
   });
-  const error = await drain(gunzip, write);
+  const error = await drain(gunzip, write, pace);
   const compressedBytes = gunzip.bytesWritten;
   if (error === void 0) return { compressedBytes };
   return { compressedBytes, error: readFailed ? `read failed: ${error}` : `gzip: ${error}` };
 }
-async function pumpZstd(source, write) {
+async function pumpZstd(source, write, pace) {
   let compressedBytes = 0;
   let consumerError;
   const decompressor = new Decompress((data2) => {
@@ -4147,18 +4193,22 @@ async function pumpZstd(source, write) {
     }
   };
   let broken;
-  const readError = await drain(source, (chunk) => {
-    compressedBytes += chunk.length;
-    broken = push(chunk, false);
-    if (broken !== void 0) throw new StopSignal();
-  });
+  const readError = await drain(
+    source,
+    (chunk) => {
+      compressedBytes += chunk.length;
+      broken = push(chunk, false);
+      if (broken !== void 0) throw new StopSignal();
+    },
+    pace
+  );
   if (readError === void 0 && broken === void 0) broken = push(new Uint8Array(0), true);
   if (readError !== void 0) return { compressedBytes, error: `read failed: ${readError}` };
   return broken === void 0 ? { compressedBytes } : { compressedBytes, error: `zstd: ${broken}` };
 }
 var StopSignal = class extends Error {
 };
-async function drain(stream, body) {
+async function drain(stream, body, pace) {
   const iterator = stream[Symbol.asyncIterator]();
   for (; ; ) {
     let step;
@@ -4175,6 +4225,15 @@ async function drain(stream, body) {
       if (error instanceof StopSignal) return void 0;
       throw error;
     }
+    const wait = pace?.();
+    if (wait !== void 0) {
+      try {
+        await wait;
+      } catch (error) {
+        stream.destroy();
+        throw error;
+      }
+    }
   }
 }
 function messageOf2(error) {
@@ -4187,7 +4246,7 @@ var OPEN_BRACE = 123;
 function emptyAccount() {
   return { lines: 0, docs: 0, docLines: 0, empty: 0, rejected: { count: 0, byReason: {}, samples: [] }, bytes: 0, compressedBytes: 0 };
 }
-async function readShard(ref, opts, onDocument) {
+async function readShard(ref, opts, onDocument, pace) {
   const account = emptyAccount();
   const sink = ref.format === "jsonl" ? new JsonlSink(account, opts, onDocument, ref.encoding) : new TextSink(account, opts, onDocument, ref.encoding);
   const utf8 = isUtf8Name(ref.encoding);
@@ -4196,7 +4255,7 @@ async function readShard(ref, opts, onDocument) {
     stripBom: utf8,
     blockIsClean: utf8 ? (block) => block.indexOf(0) === -1 && isUtf82(block) : (block) => block.indexOf(0) === -1
   });
-  const { compressedBytes, error } = await pumpShard(ref, (chunk) => splitter.write(chunk));
+  const { compressedBytes, error } = await pumpShard(ref, (chunk) => splitter.write(chunk), pace);
   if (error === void 0) {
     splitter.end();
     sink.finish();
@@ -4982,6 +5041,65 @@ var DuplicateIndexBuilder = class {
     this.stream.varint(language * 4 + kind);
     this.documents++;
   }
+  /**
+   * Returns the documents added so far as a part for another builder's `addPart`; this builder
+   * cannot be used afterwards. The part's arrays are its own (transferable to another thread).
+   */
+  takePart() {
+    if (this.finished) throw new Error("DuplicateIndexBuilder: takePart() after finish()");
+    this.finished = true;
+    return {
+      built: this.builtWith(),
+      documents: this.documents,
+      exact: this.exact.data.slice(0, this.exact.length),
+      signatures: this.signatures.data.slice(0, this.signatures.length),
+      stream: this.stream.data.slice(0, this.stream.length)
+    };
+  }
+  /** Appends a part taken from a builder with the same options, as if its documents had been added here one by one. */
+  addPart(part) {
+    if (this.finished) throw new Error("DuplicateIndexBuilder: addPart() after finish()");
+    const { documents, exact, signatures, stream } = part;
+    if (part.built !== this.builtWith()) throw new RangeError(`DuplicateIndexBuilder: a part built with other options (${part.built}) than this index (${this.builtWith()})`);
+    if (exact.length !== documents * EXACT_BYTES || signatures.length !== documents * this.sigBytes) {
+      throw new RangeError(`DuplicateIndexBuilder: a part of ${documents} documents has ${exact.length} exact and ${signatures.length} signature bytes`);
+    }
+    this.exact.reserve(exact.length);
+    this.exact.data.set(exact, this.exact.length);
+    this.exact.length += exact.length;
+    this.signatures.reserve(signatures.length);
+    this.signatures.data.set(signatures, this.signatures.length);
+    this.signatures.length += signatures.length;
+    let at2 = 0;
+    let partLine = 0;
+    const next = () => {
+      let v = 0;
+      let scale = 1;
+      for (; ; ) {
+        if (at2 >= stream.length) throw new RangeError("DuplicateIndexBuilder: a part's location stream ends inside a record");
+        const b = stream[at2++];
+        v += (b & 127) * scale;
+        if (b < 128) return v;
+        scale *= 128;
+      }
+    };
+    for (let i = 0; i < documents; i++) {
+      const zig = next();
+      partLine += zig % 2 === 0 ? zig / 2 : -(zig + 1) / 2;
+      const code = next();
+      const delta = partLine - this.lastLine;
+      this.lastLine = partLine;
+      this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
+      this.stream.varint(code);
+    }
+    if (at2 !== stream.length) throw new RangeError(`DuplicateIndexBuilder: a part's location stream holds more than its ${documents} documents`);
+    this.documents += documents;
+    this.lastOrdinal += documents;
+  }
+  builtWith() {
+    const o = this.options;
+    return `${o.punctuation}/${o.shingle}/${o.hashes}/${this.signatureBits}`;
+  }
   /** Returns the number of documents added so far. */
   get size() {
     return this.documents;
@@ -5743,15 +5861,151 @@ async function contentIdOf(ref) {
   for await (const chunk of stream) hash2.update(chunk);
   return hash2.digest("hex");
 }
-async function scanShard(ref, settings, analyzers) {
-  const started = performance.now();
-  const tally = new ShardTally(settings.languageKeys);
-  const dup = analyzers.duplicates?.();
-  const languageIndex = new Map(settings.languageKeys.map((k, i) => [k, i]));
-  const otherIndex = settings.languageKeys.length;
-  const contamination = analyzers.contamination ? { docs: 0, samples: [] } : void 0;
-  const hash2 = createHash3("sha256");
-  const tapped = {
+var ShardFold = class {
+  constructor(settings, analyzers, cutoff) {
+    this.settings = settings;
+    this.analyzers = analyzers;
+    this.cutoff = cutoff;
+    this.tally = new ShardTally(settings.languageKeys);
+    this.moments = settings.sampling ? new MomentTally() : void 0;
+    this.dup = analyzers.duplicates?.();
+    this.contamination = analyzers.contamination ? { docs: 0, samples: [] } : void 0;
+    this.languageIndex = new Map(settings.languageKeys.map((k, i) => [k, i]));
+    this.otherIndex = settings.languageKeys.length;
+    this.unsampledIndex = this.otherIndex + 1;
+  }
+  settings;
+  analyzers;
+  cutoff;
+  tally;
+  moments;
+  dup;
+  contamination;
+  languageIndex;
+  otherIndex;
+  /** Duplicate-index language of a document not measured: past `other`, named UNSAMPLED_LANGUAGE by the summary. */
+  unsampledIndex;
+  measured = 0;
+  offered = 0;
+  ordinal = 0;
+  /** While nothing falls under a fraction's cutoff, the smallest-hash document so far, so a small shard still has one measured. */
+  fallback;
+  failure;
+  /** Measures one document into the tallies. */
+  measureOne(doc) {
+    const m = this.analyzers.measure(doc);
+    const tokens = this.analyzers.tokens?.(doc.text);
+    this.tally.add(doc.line, m, tokens);
+    this.moments?.add(m, tokens);
+    this.measured += 1;
+    return m;
+  }
+  /** Folds in the next document; after a failure, documents are ignored. */
+  offer(doc) {
+    if (this.failure) return;
+    try {
+      const sampling = this.settings.sampling;
+      let language = this.unsampledIndex;
+      const hash2 = sampling ? documentHash(doc.text) : 0;
+      if (!sampling || hash2 <= this.cutoff) {
+        const m = this.measureOne(doc);
+        language = this.languageIndex.get(m.language) ?? this.otherIndex;
+        this.fallback = void 0;
+      } else if (this.measured === 0 && (!this.fallback || hash2 < this.fallback.hash)) {
+        this.fallback = { doc, hash: hash2 };
+      }
+      this.dup?.add({ ordinal: this.ordinal, line: doc.line, language, text: doc.text });
+      if (this.contamination) {
+        const hit = this.analyzers.contamination(doc.text);
+        if (hit) {
+          this.contamination.docs += 1;
+          if (this.contamination.samples.length < SAMPLES_PER_KIND) {
+            this.contamination.samples.push({ line: doc.line, evalFile: hit.file, evalLine: hit.line });
+          }
+        }
+      }
+      this.ordinal += 1;
+      this.offered += 1;
+    } catch (err) {
+      this.failure = { line: doc.line, message: `measuring failed at line ${doc.line}: ${err.message}` };
+    }
+  }
+  /** Returns this fold as a batch result (the fold cannot be used afterwards). */
+  toBatch() {
+    const out = { tally: this.tally.state(), measured: this.measured, offered: this.offered };
+    if (this.moments) out.moments = this.moments.moments;
+    if (this.dup) out.duplicates = this.dup.takePart();
+    if (this.contamination) out.contamination = this.contamination;
+    if (this.fallback && this.measured === 0) out.fallback = this.fallback;
+    if (this.failure) out.failure = this.failure;
+    return out;
+  }
+  /** Folds in the next batch's result, as if its documents had been offered here one by one. */
+  absorb(b) {
+    if (this.failure) return;
+    this.tally.absorb(b.tally);
+    if (this.moments && b.moments) this.moments.absorb(b.moments);
+    if (this.dup && b.duplicates) this.dup.addPart(b.duplicates);
+    if (this.contamination && b.contamination) {
+      this.contamination.docs += b.contamination.docs;
+      for (const s of b.contamination.samples) {
+        if (this.contamination.samples.length < SAMPLES_PER_KIND) this.contamination.samples.push(s);
+      }
+    }
+    if (this.settings.sampling && this.measured === 0) {
+      if (b.measured > 0) this.fallback = void 0;
+      else if (b.fallback && (!this.fallback || b.fallback.hash < this.fallback.hash)) this.fallback = b.fallback;
+    }
+    this.measured += b.measured;
+    this.offered += b.offered;
+    this.ordinal += b.offered;
+    if (b.failure) this.failure = b.failure;
+  }
+  /** Returns the shard's result over everything folded in, with the reader's account of its lines. */
+  finish(ref, account, contentId, started) {
+    const sampling = this.settings.sampling;
+    let usedFallback = false;
+    if (sampling && this.measured === 0 && this.fallback && !this.failure) {
+      const doc = this.fallback.doc;
+      try {
+        this.measureOne(doc);
+        usedFallback = true;
+      } catch (err) {
+        this.failure = { line: doc.line, message: `measuring failed at line ${doc.line}: ${err.message}` };
+      }
+    }
+    if (this.failure && !account.broken) account.broken = { afterLine: this.failure.line - 1, message: this.failure.message };
+    const tally = this.tally;
+    const result = {
+      schema: RESULT_SCHEMA,
+      path: ref.path,
+      format: ref.format,
+      compression: ref.compression,
+      encoding: ref.encoding,
+      sizeBytes: ref.sizeBytes,
+      contentId,
+      settingsId: this.settings.settingsId,
+      read: account,
+      languages: tally.languages,
+      scripts: tally.scripts,
+      anomalyMasks: tally.anomalyMasks,
+      anomalyDocs: tally.anomalyDocs,
+      declared: tally.declared,
+      samples: { impure: tally.impure, anomalous: tally.anomalous, mismatch: tally.mismatch },
+      elapsedMs: Math.round(performance.now() - started)
+    };
+    if (ref.subset !== void 0) result.subset = ref.subset;
+    if (this.dup) result.duplicateIndex = this.dup.finish();
+    if (this.contamination) result.contamination = this.contamination;
+    if (sampling && this.moments) {
+      result.sample = { ...describeSampling(sampling), docs: this.measured, of: this.offered, cutoff: this.cutoff, moments: this.moments.moments };
+      if (usedFallback) result.sample.fallback = true;
+    }
+    return result;
+  }
+};
+function hashedWhileRead(ref, hash2) {
+  return {
     ...ref,
     open: () => {
       const source = ref.open?.() ?? createReadStream2(ref.absPath, { highWaterMark: READ_CHUNK_BYTES2 });
@@ -5762,95 +6016,95 @@ async function scanShard(ref, settings, analyzers) {
       return tap;
     }
   };
+}
+async function cutoffOf(ref, settings) {
   const sampling = settings.sampling;
-  let cutoff = HASH_SPACE;
-  if (sampling) {
-    if ("fraction" in sampling) cutoff = fractionCutoff(sampling.fraction);
-    else {
-      const smallest = new SmallestHashes(sampling.docsPerShard);
-      await readShard(ref, settings.read, (doc) => smallest.add(documentHash(doc.text)));
-      cutoff = smallest.cutoff();
-    }
+  if (!sampling) return HASH_SPACE;
+  if ("fraction" in sampling) return fractionCutoff(sampling.fraction);
+  const smallest = new SmallestHashes(sampling.docsPerShard);
+  await readShard(ref, settings.read, (doc) => smallest.add(documentHash(doc.text)));
+  return smallest.cutoff();
+}
+async function scanShard(ref, settings, analyzers) {
+  const started = performance.now();
+  const cutoff = await cutoffOf(ref, settings);
+  const fold2 = new ShardFold(settings, analyzers, cutoff);
+  const hash2 = createHash3("sha256");
+  const account = await readShard(hashedWhileRead(ref, hash2), settings.read, (doc) => fold2.offer(doc));
+  return fold2.finish(ref, account, hash2.digest("hex"), started);
+}
+function measureBatch(batch, settings, analyzers) {
+  const fold2 = new ShardFold(settings, analyzers, batch.cutoff);
+  const { lines, texts, declared } = batch;
+  for (let i = 0; i < texts.length; i++) {
+    const doc = { line: lines[i], lineEnd: lines[i], text: texts[i] };
+    const d = declared[i];
+    if (d !== null && d !== void 0) doc.declaredLanguage = d;
+    fold2.offer(doc);
+    if (fold2.failure) break;
   }
-  const moments = sampling ? new MomentTally() : void 0;
-  const unsampledIndex = otherIndex + 1;
-  let measured = 0;
-  let offered = 0;
-  let fallback;
-  const measureOne = (doc) => {
-    const m = analyzers.measure(doc);
-    const tokens = analyzers.tokens?.(doc.text);
-    tally.add(doc.line, m, tokens);
-    moments?.add(m, tokens);
-    measured += 1;
-    return m;
+  return fold2.toBatch();
+}
+async function scanShardInBatches(ref, settings, analyzers, measure, plan) {
+  const started = performance.now();
+  const cutoff = await cutoffOf(ref, settings);
+  const fold2 = new ShardFold(settings, analyzers, cutoff);
+  const hash2 = createHash3("sha256");
+  const pending = [];
+  const done = /* @__PURE__ */ new Map();
+  let handedOut = 0;
+  let absorbed = 0;
+  let failed;
+  const absorbReady = () => {
+    for (let r = done.get(absorbed); r !== void 0; r = done.get(absorbed)) {
+      done.delete(absorbed);
+      fold2.absorb(r);
+      absorbed += 1;
+    }
   };
-  let ordinal = 0;
-  let failure;
-  const account = await readShard(tapped, settings.read, (doc) => {
-    if (failure) return;
-    try {
-      let language = unsampledIndex;
-      const hash3 = sampling ? documentHash(doc.text) : 0;
-      if (!sampling || hash3 <= cutoff) {
-        const m = measureOne(doc);
-        language = languageIndex.get(m.language) ?? otherIndex;
-        fallback = void 0;
-      } else if (measured === 0 && (!fallback || hash3 < fallback.hash)) {
-        fallback = { doc, hash: hash3 };
+  const handOut = (batch2) => {
+    const index2 = handedOut++;
+    pending[index2] = measure(batch2).then(
+      (r) => {
+        done.set(index2, r);
+        absorbReady();
+      },
+      (error) => {
+        failed ??= { error };
       }
-      dup?.add({ ordinal, line: doc.line, language, text: doc.text });
-      if (contamination) {
-        const hit = analyzers.contamination(doc.text);
-        if (hit) {
-          contamination.docs += 1;
-          if (contamination.samples.length < SAMPLES_PER_KIND) {
-            contamination.samples.push({ line: doc.line, evalFile: hit.file, evalLine: hit.line });
-          }
-        }
-      }
-      ordinal += 1;
-      offered += 1;
-    } catch (err) {
-      failure = { line: doc.line, message: `measuring failed at line ${doc.line}: ${err.message}` };
-    }
-  });
-  let usedFallback = false;
-  if (sampling && measured === 0 && fallback && !failure) {
-    try {
-      measureOne(fallback.doc);
-      usedFallback = true;
-    } catch (err) {
-      failure = { line: fallback.doc.line, message: `measuring failed at line ${fallback.doc.line}: ${err.message}` };
-    }
-  }
-  if (failure && !account.broken) account.broken = { afterLine: failure.line - 1, message: failure.message };
-  const result = {
-    schema: RESULT_SCHEMA,
-    path: ref.path,
-    format: ref.format,
-    compression: ref.compression,
-    encoding: ref.encoding,
-    sizeBytes: ref.sizeBytes,
-    contentId: hash2.digest("hex"),
-    settingsId: settings.settingsId,
-    read: account,
-    languages: tally.languages,
-    scripts: tally.scripts,
-    anomalyMasks: tally.anomalyMasks,
-    anomalyDocs: tally.anomalyDocs,
-    declared: tally.declared,
-    samples: { impure: tally.impure, anomalous: tally.anomalous, mismatch: tally.mismatch },
-    elapsedMs: Math.round(performance.now() - started)
+    );
   };
-  if (ref.subset !== void 0) result.subset = ref.subset;
-  if (dup) result.duplicateIndex = dup.finish();
-  if (contamination) result.contamination = contamination;
-  if (sampling && moments) {
-    result.sample = { ...describeSampling(sampling), docs: measured, of: offered, cutoff, moments: moments.moments };
-    if (usedFallback) result.sample.fallback = true;
-  }
-  return result;
+  let batch = { lines: [], texts: [], declared: [], cutoff };
+  let chars = 0;
+  const flush = () => {
+    if (batch.texts.length === 0) return;
+    handOut(batch);
+    batch = { lines: [], texts: [], declared: [], cutoff };
+    chars = 0;
+  };
+  const account = await readShard(
+    hashedWhileRead(ref, hash2),
+    settings.read,
+    (doc) => {
+      if (fold2.failure || failed) return;
+      batch.lines.push(doc.line);
+      batch.texts.push(doc.text);
+      batch.declared.push(doc.declaredLanguage ?? null);
+      chars += doc.text.length;
+      if (chars >= plan.batchChars) flush();
+    },
+    () => {
+      if (failed) throw failed.error;
+      if (handedOut - absorbed < plan.inFlight) return void 0;
+      return pending[absorbed];
+    }
+  );
+  flush();
+  await Promise.all(pending);
+  if (failed) throw failed.error;
+  absorbReady();
+  if (absorbed !== handedOut) throw new Error(`${ref.path}: ${handedOut - absorbed} of ${handedOut} batches were not absorbed`);
+  return fold2.finish(ref, account, hash2.digest("hex"), started);
 }
 
 // src/core/analyzers.ts
@@ -15381,27 +15635,87 @@ function canRunWorkers(entry) {
   const path5 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
   return path5.endsWith(".js") && existsSync(path5);
 }
-async function measureInPool(refs, init, entry, workers, onResult, here) {
-  const queue = refs.map((ref, id) => ({ ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
-  const count3 = Math.max(1, Math.min(workers, queue.length));
+function transferablesOf(r) {
+  const d = r.duplicates;
+  return d ? [d.exact.buffer, d.signatures.buffer, d.stream.buffer] : [];
+}
+async function measureInPool(work, init, entry, workers, onResult, here) {
+  const shardQueue = work.whole.map((ref, id) => ({ kind: "shard", ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
+  const batchQueue = [];
+  let producing = work.split.length > 0;
   let failed;
+  let nextId = shardQueue.length;
+  let waiters = [];
+  const wake = () => {
+    const w = waiters;
+    waiters = [];
+    for (const f of w) f();
+  };
+  const fail = (err) => {
+    failed ??= err;
+    for (const t of batchQueue.splice(0)) t.reject(failed);
+    wake();
+    return failed;
+  };
+  const take = (main2) => {
+    if (failed) return null;
+    if (batchQueue.length > 0 && (!main2 || batchQueue.length >= 2 || !producing)) return batchQueue.shift();
+    if (shardQueue.length > 0) return shardQueue.shift();
+    return producing || batchQueue.length > 0 ? "wait" : null;
+  };
+  const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
   const all = [];
-  if (here) {
+  if (work.split.length > 0) {
     all.push(
       (async () => {
-        for (let item = queue.shift(); item && !failed; item = queue.shift()) {
-          try {
-            onResult(await here(item.ref));
-          } catch (err) {
-            failed ??= new ShardFailure(item.ref.path, `measuring failed: ${err.message}`);
-            throw failed;
+        const split = [...work.split].sort((a, b) => b.sizeBytes - a.sizeBytes || (a.path < b.path ? -1 : 1));
+        try {
+          for (const ref of split) {
+            if (failed) break;
+            let result;
+            try {
+              result = await here.split(
+                ref,
+                (batch) => new Promise((resolve, reject) => {
+                  if (failed) return reject(failed);
+                  batchQueue.push({ kind: "batch", ref, batch, resolve, reject });
+                  wake();
+                })
+              );
+            } catch (err) {
+              throw fail(err instanceof ShardFailure ? err : new ShardFailure(ref.path, `measuring failed: ${err.message}`));
+            }
+            onResult(result);
           }
-          await new Promise((r) => setImmediate(r));
+        } finally {
+          producing = false;
+          wake();
         }
       })()
     );
   }
-  for (let w = here ? 1 : 0; w < count3; w++) {
+  all.push(
+    (async () => {
+      for (; ; ) {
+        const task = take(true);
+        if (task === null) return;
+        if (task === "wait") {
+          await new Promise((r) => waiters.push(r));
+          continue;
+        }
+        try {
+          if (task.kind === "shard") onResult(await here.shard(task.ref));
+          else task.resolve(here.batch(task.ref, task.batch));
+        } catch (err) {
+          const failure = fail(new ShardFailure(task.ref.path, `measuring failed: ${err.message}`));
+          if (task.kind === "batch") task.reject(failure);
+          throw failure;
+        }
+        await new Promise((r) => setImmediate(r));
+      }
+    })()
+  );
+  for (let w = 1; w < threads; w++) {
     all.push(
       new Promise((resolve, reject) => {
         const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
@@ -15412,34 +15726,50 @@ async function measureInPool(refs, init, entry, workers, onResult, here) {
           done = true;
           void worker.terminate();
           if (err) {
-            failed ??= err instanceof ShardFailure ? err : new ShardFailure(current?.ref.path ?? "(starting a worker)", err.message);
-            reject(failed);
+            const failure = fail(err);
+            if (current?.kind === "batch") current.reject(failure);
+            reject(failure);
           } else resolve();
         };
+        const where2 = () => current?.ref.path ?? "(starting a worker)";
         const next = () => {
-          if (failed) return finish();
-          current = queue.shift();
-          if (!current) {
+          current = void 0;
+          const task = take(false);
+          if (task === "wait") {
+            waiters.push(next);
+            return;
+          }
+          if (task === null) {
             worker.postMessage({ type: "close" });
             return finish();
           }
-          const { open: _open, ...ref } = current.ref;
-          worker.postMessage({ type: "scan", id: current.id, ref });
+          current = task;
+          if (task.kind === "batch") {
+            worker.postMessage({ type: "batch", id: nextId++, path: task.ref.path, batch: task.batch });
+            return;
+          }
+          const { open: _open, ...ref } = task.ref;
+          worker.postMessage({ type: "scan", id: task.id, ref });
         };
         worker.on("message", (msg) => {
           if (msg.type === "ready") {
-            if (msg.settingsId !== init.settingsId) return finish(new Error(`worker measured under other settings (${msg.settingsId} \u2260 ${init.settingsId})`));
+            if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where2(), `worker measured under other settings (${msg.settingsId} \u2260 ${init.settingsId})`));
             return next();
           }
-          if (msg.type === "result") {
+          if (msg.type === "result" && current?.kind === "shard") {
             onResult(msg.result);
             return next();
           }
-          finish(new ShardFailure(current?.ref.path ?? "(starting a worker)", `measuring failed in a worker: ${msg.message}`));
+          if (msg.type === "batch-result" && current?.kind === "batch") {
+            current.resolve(msg.result);
+            return next();
+          }
+          const message = msg.type === "error" ? msg.message : `unexpected ${msg.type} message`;
+          finish(new ShardFailure(where2(), `measuring failed in a worker: ${message}`));
         });
-        worker.on("error", (err) => finish(new ShardFailure(current?.ref.path ?? "(starting a worker)", `worker crashed: ${err.message}`)));
+        worker.on("error", (err) => finish(new ShardFailure(where2(), `worker crashed: ${err.message}`)));
         worker.on("exit", (code) => {
-          if (!done) finish(new ShardFailure(current?.ref.path ?? "(starting a worker)", `worker exited with code ${code} before finishing`));
+          if (!done) finish(new ShardFailure(where2(), `worker exited with code ${code} before finishing`));
         });
       })
     );
@@ -15453,6 +15783,15 @@ async function measureInPool(refs, init, entry, workers, onResult, here) {
 // src/core/check.ts
 var CACHE_LOOKUPS_AT_ONCE = 16;
 var WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
+var MIN_SPLIT_BYTES = 4 * 1024 * 1024;
+var BATCH_CHARS = 1 << 20;
+var BATCHES_IN_FLIGHT_PER_THREAD = 4;
+function shardsToSplit(shards, workers, minBytes = MIN_SPLIT_BYTES) {
+  if (workers <= 1) return /* @__PURE__ */ new Set();
+  const total = shards.reduce((n, r) => n + r.sizeBytes, 0);
+  const limit = Math.max(minBytes, total / (workers * 4));
+  return new Set(shards.filter((r) => r.sizeBytes >= limit));
+}
 var ConfigError = class extends Error {
   name = "ConfigError";
 };
@@ -15549,12 +15888,14 @@ async function measureShards(policy, shards, prepared, opts, started = performan
   const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
   const local = todo.filter((r) => r.open !== void 0);
   const pooled = todo.filter((r) => r.open === void 0);
-  if (workers > 1 && pooled.length > 1 && canRunWorkers(opts.workerEntry)) {
+  const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
+  if (workers > 1 && (pooled.length > 1 || split.size > 0) && canRunWorkers(opts.workerEntry)) {
     const init = { role: "sluice-shard-worker", policyFile: policy.file, settingsId: prepared.settingsId };
     if (opts.root !== void 0) init.root = opts.root;
     const pending = [];
+    const plan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(
-      pooled,
+      { whole: pooled.filter((r) => !split.has(r)), split: pooled.filter((r) => split.has(r)) },
       init,
       opts.workerEntry,
       workers,
@@ -15562,9 +15903,16 @@ async function measureShards(policy, shards, prepared, opts, started = performan
         done(r);
         pending.push(store(r));
       },
-      (ref) => {
-        throwIfFaultInjected(ref.path);
-        return scanShard(ref, prepared.scan, prepared.analyzers);
+      {
+        shard: (ref) => {
+          throwIfFaultInjected(ref.path);
+          return scanShard(ref, prepared.scan, prepared.analyzers);
+        },
+        batch: (ref, batch) => {
+          throwIfFaultInjected(ref.path);
+          return measureBatch(batch, prepared.scan, prepared.analyzers);
+        },
+        split: (ref, measure) => scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, plan)
       }
     );
     await Promise.all(pending);
@@ -15697,6 +16045,16 @@ async function runShardWorker() {
     port.on("message", (msg) => {
       if (msg.type === "close") {
         port.close();
+        return;
+      }
+      if (msg.type === "batch") {
+        try {
+          throwIfFaultInjected(msg.path);
+          const result = measureBatch(msg.batch, prepared.scan, prepared.analyzers);
+          port.postMessage({ type: "batch-result", id: msg.id, result }, transferablesOf(result));
+        } catch (err) {
+          post({ type: "error", id: msg.id, message: err.message });
+        }
         return;
       }
       void (async () => {
@@ -16036,6 +16394,9 @@ Options for check:
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
       --workers N        worker threads measuring shards (default: the available cores)
+      --split-mb N       with several workers, a shard of at least N MB on disk (and over a quarter
+                         of a worker's share) is read once and measured in batches by all of them
+                         (default 4; the results are the same either way, only the time changes)
       --color / --no-color   force colour on or off (default: on for a terminal, off when NO_COLOR is set)
   -q, --quiet            print only the verdict line
   -h, --help             this text
@@ -16069,6 +16430,7 @@ function parseCli(argv, env, isTTY) {
         quiet: { type: "boolean", short: "q" },
         help: { type: "boolean", short: "h" },
         workers: { type: "string" },
+        "split-mb": { type: "string" },
         partition: { type: "string" },
         out: { type: "string" }
       }
@@ -16083,6 +16445,12 @@ function parseCli(argv, env, isTTY) {
     workers = Number(v.workers);
     if (!Number.isInteger(workers) || workers < 1) throw new UsageError(`--workers takes a whole number of at least 1, got \`${v.workers}\``);
   }
+  let minSplitBytes;
+  if (v["split-mb"] !== void 0) {
+    const mb = Number(v["split-mb"]);
+    if (!Number.isFinite(mb) || mb < 0 || v["split-mb"].trim() === "") throw new UsageError(`--split-mb takes a number of MB of at least 0, got \`${v["split-mb"]}\``);
+    minSplitBytes = Math.round(mb * 1024 * 1024);
+  }
   const cacheDir = v["no-cache"] ? null : v["cache-dir"] ?? ".sluice-cache";
   const color = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
   if (command === "scan") {
@@ -16096,6 +16464,7 @@ function parseCli(argv, env, isTTY) {
     const out2 = { command: "scan", policy: policy[0], partition: { index: index2, count: count3 }, out: v.out, cacheDir };
     if (v.root !== void 0) out2.root = v.root;
     if (workers !== void 0) out2.workers = workers;
+    if (minSplitBytes !== void 0) out2.minSplitBytes = minSplitBytes;
     return out2;
   }
   if (command === "merge") {
@@ -16111,6 +16480,7 @@ function parseCli(argv, env, isTTY) {
   if (policies.length === 0) throw new UsageError("no policy file given; usage: sluice check --policy policies/main.yaml");
   const out = { command: "check", policies, cacheDir, color, quiet: v.quiet ?? false };
   if (workers !== void 0) out.workers = workers;
+  if (minSplitBytes !== void 0) out.minSplitBytes = minSplitBytes;
   if (v.json !== void 0) out.json = v.json;
   if (v.markdown !== void 0) out.markdown = v.markdown;
   if (v.root !== void 0) out.root = v.root;
@@ -16128,7 +16498,8 @@ async function check(opts) {
     onWarning: (m) => process.stderr.write(`warning: ${m}
 `),
     workerEntry: import.meta.url,
-    ...opts.workers !== void 0 ? { workers: opts.workers } : {}
+    ...opts.workers !== void 0 ? { workers: opts.workers } : {},
+    ...opts.minSplitBytes !== void 0 ? { minSplitBytes: opts.minSplitBytes } : {}
   });
   progress.clear();
   return emit2(reports, opts);
@@ -16139,6 +16510,7 @@ async function scan2(opts) {
     cacheDir: opts.cacheDir,
     ...opts.root !== void 0 ? { root: opts.root } : {},
     ...opts.workers !== void 0 ? { workers: opts.workers } : {},
+    ...opts.minSplitBytes !== void 0 ? { minSplitBytes: opts.minSplitBytes } : {},
     onProgress: progress.update,
     onWarning: (m) => process.stderr.write(`warning: ${m}
 `),

@@ -22,6 +22,7 @@ async function check(opts: CheckCliOptions): Promise<number> {
     onWarning: (m) => process.stderr.write(`warning: ${m}\n`),
     workerEntry: import.meta.url,
     ...(opts.workers !== undefined ? { workers: opts.workers } : {}),
+    ...(opts.minSplitBytes !== undefined ? { minSplitBytes: opts.minSplitBytes } : {}),
   });
   progress.clear();
   return emit(reports, opts);
@@ -33,6 +34,7 @@ async function scan(opts: ScanCliOptions): Promise<number> {
     cacheDir: opts.cacheDir,
     ...(opts.root !== undefined ? { root: opts.root } : {}),
     ...(opts.workers !== undefined ? { workers: opts.workers } : {}),
+    ...(opts.minSplitBytes !== undefined ? { minSplitBytes: opts.minSplitBytes } : {}),
     onProgress: progress.update,
     onWarning: (m) => process.stderr.write(`warning: ${m}\n`),
     workerEntry: import.meta.url,

@@ -9,7 +9,7 @@ import { discoverShards } from '../read/index.js';
 import type { Discovery, ShardRef, SkippedFile } from '../read/types.js';
 import { ResultCache } from '../results/cache.js';
 import type { CorpusResult } from '../results/corpus.js';
-import { contentIdOf, scanShard } from '../results/scan.js';
+import { contentIdOf, measureBatch, scanShard, scanShardInBatches, type BatchPlan } from '../results/scan.js';
 import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
 import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
@@ -20,6 +20,29 @@ const CACHE_LOOKUPS_AT_ONCE = 16;
 
 /** Compressed bytes of unmeasured shards that justify one more worker thread by default. */
 const WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
+
+/** A shard smaller than this on disk is never split into batches: handing its text across threads would cost more than its tail. */
+const MIN_SPLIT_BYTES = 4 * 1024 * 1024;
+
+/**
+ * Batches of a split shard: about 1 MB of text each (a fifth of a second of measuring, long enough
+ * that handing it over is a small cost, short enough that threads end together), and at most four
+ * per thread out at once, so the reader holds a few MB of text whatever the shard's size.
+ */
+const BATCH_CHARS = 1 << 20;
+const BATCHES_IN_FLIGHT_PER_THREAD = 4;
+
+/**
+ * Returns the shards worth splitting across `workers` threads: those larger than a quarter of a
+ * thread's fair share, whose tail would otherwise leave the other threads idle (one 50 GB shard
+ * among small ones, say). What is split changes the time a run takes, never its results.
+ */
+export function shardsToSplit(shards: readonly ShardRef[], workers: number, minBytes = MIN_SPLIT_BYTES): Set<ShardRef> {
+  if (workers <= 1) return new Set();
+  const total = shards.reduce((n, r) => n + r.sizeBytes, 0);
+  const limit = Math.max(minBytes, total / (workers * 4));
+  return new Set(shards.filter((r) => r.sizeBytes >= limit));
+}
 
 /** A run that cannot be judged (bad policy, no shards, unreadable root): exit code 2. */
 export class ConfigError extends Error {
@@ -55,6 +78,8 @@ export interface CheckOptions {
   workers?: number;
   /** The built script workers start from (the front end's own bundle, import.meta.url); without one, shards are measured in this thread. */
   workerEntry?: string | URL;
+  /** Shards at least this large on disk may be split into batches across the workers (default 4 MiB; the tests lower it). */
+  minSplitBytes?: number;
 }
 
 /** Returns the loaded policy, or throws ConfigError listing every problem with file, line and key. */
@@ -191,12 +216,14 @@ export async function measureShards(
   const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
   const local = todo.filter((r) => r.open !== undefined);
   const pooled = todo.filter((r) => r.open === undefined);
-  if (workers > 1 && pooled.length > 1 && canRunWorkers(opts.workerEntry)) {
+  const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
+  if (workers > 1 && (pooled.length > 1 || split.size > 0) && canRunWorkers(opts.workerEntry)) {
     const init: WorkerInit = { role: 'sluice-shard-worker', policyFile: policy.file, settingsId: prepared.settingsId };
     if (opts.root !== undefined) init.root = opts.root;
     const pending: Promise<void>[] = [];
+    const plan: BatchPlan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(
-      pooled,
+      { whole: pooled.filter((r) => !split.has(r)), split: pooled.filter((r) => split.has(r)) },
       init,
       opts.workerEntry,
       workers,
@@ -204,9 +231,16 @@ export async function measureShards(
         done(r);
         pending.push(store(r));
       },
-      (ref) => {
-        throwIfFaultInjected(ref.path);
-        return scanShard(ref, prepared.scan, prepared.analyzers);
+      {
+        shard: (ref) => {
+          throwIfFaultInjected(ref.path);
+          return scanShard(ref, prepared.scan, prepared.analyzers);
+        },
+        batch: (ref, batch) => {
+          throwIfFaultInjected(ref.path);
+          return measureBatch(batch, prepared.scan, prepared.analyzers);
+        },
+        split: (ref, measure) => scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, plan),
       },
     );
     await Promise.all(pending);

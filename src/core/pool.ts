@@ -1,12 +1,15 @@
 // Shards measured in parallel on worker threads. Each worker loads the same policy
-// and analyzers and measures whole shards; results come back in any order and are
-// sorted by path afterwards, so the report is the same whatever the worker count.
+// and analyzers and measures whole shards, or batches of a large shard that the main
+// thread reads and hands out (so one big shard does not leave the other cores idle);
+// results come back in any order and are sorted by path afterwards, and batches are
+// absorbed in reading order, so the report is the same whatever the worker count.
 // A worker that throws or dies fails the run with the shard it was measuring.
 import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { ShardRef } from '../read/types.js';
+import type { BatchResult, DocumentBatch } from '../results/scan.js';
 import type { ShardResult } from '../results/types.js';
 
 /** What a worker needs to rebuild the analyzers the main thread has. */
@@ -17,10 +20,14 @@ export interface WorkerInit {
   settingsId: string;
 }
 
-export type ToWorker = { type: 'scan'; id: number; ref: ShardRef } | { type: 'close' };
+export type ToWorker =
+  | { type: 'scan'; id: number; ref: ShardRef }
+  | { type: 'batch'; id: number; path: string; batch: DocumentBatch }
+  | { type: 'close' };
 export type FromWorker =
   | { type: 'ready'; settingsId: string }
   | { type: 'result'; id: number; result: ShardResult }
+  | { type: 'batch-result'; id: number; result: BatchResult }
   | { type: 'error'; id: number | null; message: string };
 
 /** A shard that could not be measured: the run fails with its path. */
@@ -51,77 +58,189 @@ export function canRunWorkers(entry: string | URL | undefined): entry is string 
   return path.endsWith('.js') && existsSync(path);
 }
 
-/** Measures shards on `workers` threads started from `entry`; calls `onResult` as each finishes. Rejects with ShardFailure on the first failure. */
+/** The shards of a pooled run: measured whole by one thread each, or read here and measured in batches by all. */
+export interface PoolWork {
+  whole: readonly ShardRef[];
+  split: readonly ShardRef[];
+}
+
+/** How the main thread takes part: it measures whole shards and batches like a worker, and reads the split shards. */
+export interface HereMeasurer {
+  shard(ref: ShardRef): Promise<ShardResult>;
+  batch(ref: ShardRef, batch: DocumentBatch): BatchResult;
+  /** Reads a split shard here, handing each batch to `measure` (which settles when some thread has measured it). */
+  split(ref: ShardRef, measure: (batch: DocumentBatch) => Promise<BatchResult>): Promise<ShardResult>;
+}
+
+type ShardTask = { kind: 'shard'; ref: ShardRef; id: number };
+type BatchTask = { kind: 'batch'; ref: ShardRef; batch: DocumentBatch; resolve: (r: BatchResult) => void; reject: (e: Error) => void };
+type Task = ShardTask | BatchTask;
+
+/** Returns the buffers of a batch result that can move to another thread instead of being copied. */
+export function transferablesOf(r: BatchResult): ArrayBuffer[] {
+  const d = r.duplicates;
+  return d ? [d.exact.buffer as ArrayBuffer, d.signatures.buffer as ArrayBuffer, d.stream.buffer as ArrayBuffer] : [];
+}
+
+/**
+ * Measures shards on `workers` threads (this one included) started from `entry`; calls `onResult` as each
+ * shard finishes. Rejects with ShardFailure, naming the shard, on the first failure.
+ */
 export async function measureInPool(
-  refs: readonly ShardRef[],
+  work: PoolWork,
   init: WorkerInit,
   entry: string | URL,
   workers: number,
   onResult: (r: ShardResult) => void,
-  /** Measures a shard in this thread: the main thread then takes shards from the same queue, so `workers` threads do the work with one fewer start-up and heap. */
-  here?: (ref: ShardRef) => Promise<ShardResult>,
+  here: HereMeasurer,
 ): Promise<void> {
   // Largest shards first: the last shard to finish is then a small one, so workers end together.
-  const queue = refs.map((ref, id) => ({ ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
-  const count = Math.max(1, Math.min(workers, queue.length));
+  const shardQueue: ShardTask[] = work.whole
+    .map((ref, id) => ({ kind: 'shard' as const, ref, id }))
+    .sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
+  const batchQueue: BatchTask[] = [];
+  let producing = work.split.length > 0;
   let failed: ShardFailure | undefined;
+  let nextId = shardQueue.length;
+  // Threads with nothing to take yet, woken when a batch comes, reading ends or the run fails.
+  let waiters: Array<() => void> = [];
+  const wake = (): void => {
+    const w = waiters;
+    waiters = [];
+    for (const f of w) f();
+  };
+  const fail = (err: ShardFailure): ShardFailure => {
+    failed ??= err;
+    for (const t of batchQueue.splice(0)) t.reject(failed);
+    wake();
+    return failed;
+  };
+  /**
+   * Returns the next task for a thread, 'wait' when batches may still come, or null when all is handed out.
+   * Batches go first (they hold text in memory); the main thread leaves the last queued batch to a worker
+   * while it is still reading, since it has the reading to do as well.
+   */
+  const take = (main: boolean): Task | 'wait' | null => {
+    if (failed) return null;
+    if (batchQueue.length > 0 && (!main || batchQueue.length >= 2 || !producing)) return batchQueue.shift()!;
+    if (shardQueue.length > 0) return shardQueue.shift()!;
+    return producing || batchQueue.length > 0 ? 'wait' : null;
+  };
+  const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
   const all: Promise<void>[] = [];
-  if (here) {
+
+  // The reader of split shards, one at a time, largest first.
+  if (work.split.length > 0) {
     all.push(
       (async () => {
-        for (let item = queue.shift(); item && !failed; item = queue.shift()) {
-          try {
-            onResult(await here(item.ref));
-          } catch (err) {
-            failed ??= new ShardFailure(item.ref.path, `measuring failed: ${(err as Error).message}`);
-            throw failed;
+        const split = [...work.split].sort((a, b) => b.sizeBytes - a.sizeBytes || (a.path < b.path ? -1 : 1));
+        try {
+          for (const ref of split) {
+            if (failed) break;
+            let result: ShardResult;
+            try {
+              result = await here.split(
+                ref,
+                (batch) =>
+                  new Promise<BatchResult>((resolve, reject) => {
+                    if (failed) return reject(failed);
+                    batchQueue.push({ kind: 'batch', ref, batch, resolve, reject });
+                    wake();
+                  }),
+              );
+            } catch (err) {
+              throw fail(err instanceof ShardFailure ? err : new ShardFailure(ref.path, `measuring failed: ${(err as Error).message}`));
+            }
+            onResult(result);
           }
-          // Let the workers' messages in between shards.
-          await new Promise((r) => setImmediate(r));
+        } finally {
+          producing = false;
+          wake();
         }
       })(),
     );
   }
-  for (let w = here ? 1 : 0; w < count; w++) {
+
+  // This thread takes tasks from the same queues as the workers.
+  all.push(
+    (async () => {
+      for (;;) {
+        const task = take(true);
+        if (task === null) return;
+        if (task === 'wait') {
+          await new Promise<void>((r) => waiters.push(r));
+          continue;
+        }
+        try {
+          if (task.kind === 'shard') onResult(await here.shard(task.ref));
+          else task.resolve(here.batch(task.ref, task.batch));
+        } catch (err) {
+          const failure = fail(new ShardFailure(task.ref.path, `measuring failed: ${(err as Error).message}`));
+          if (task.kind === 'batch') task.reject(failure);
+          throw failure;
+        }
+        // Let the workers' messages and the reader in between tasks.
+        await new Promise((r) => setImmediate(r));
+      }
+    })(),
+  );
+
+  for (let w = 1; w < threads; w++) {
     all.push(
       new Promise<void>((resolve, reject) => {
         const worker = new Worker(typeof entry === 'string' && entry.startsWith('file:') ? new URL(entry) : entry, { workerData: init });
-        let current: { ref: ShardRef; id: number } | undefined;
+        let current: Task | undefined;
         let done = false;
-        const finish = (err?: Error): void => {
+        const finish = (err?: ShardFailure): void => {
           if (done) return;
           done = true;
           void worker.terminate();
           if (err) {
-            failed ??= err instanceof ShardFailure ? err : new ShardFailure(current?.ref.path ?? '(starting a worker)', err.message);
-            reject(failed);
+            const failure = fail(err);
+            if (current?.kind === 'batch') current.reject(failure);
+            reject(failure);
           } else resolve();
         };
+        const where = (): string => current?.ref.path ?? '(starting a worker)';
         const next = (): void => {
-          if (failed) return finish();
-          current = queue.shift();
-          if (!current) {
+          current = undefined;
+          const task = take(false);
+          if (task === 'wait') {
+            waiters.push(next);
+            return;
+          }
+          if (task === null) {
             worker.postMessage({ type: 'close' } satisfies ToWorker);
             return finish();
           }
-          // Only plain data crosses threads: a ref that reads from elsewhere (open()) is measured in the main thread instead.
-          const { open: _open, ...ref } = current.ref;
-          worker.postMessage({ type: 'scan', id: current.id, ref } satisfies ToWorker);
+          current = task;
+          if (task.kind === 'batch') {
+            worker.postMessage({ type: 'batch', id: nextId++, path: task.ref.path, batch: task.batch } satisfies ToWorker);
+            return;
+          }
+          // Only plain data crosses threads (a ref that reads from elsewhere, with open(), is never pooled).
+          const { open: _open, ...ref } = task.ref;
+          worker.postMessage({ type: 'scan', id: task.id, ref } satisfies ToWorker);
         };
         worker.on('message', (msg: FromWorker) => {
           if (msg.type === 'ready') {
-            if (msg.settingsId !== init.settingsId) return finish(new Error(`worker measured under other settings (${msg.settingsId} ≠ ${init.settingsId})`));
+            if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where(), `worker measured under other settings (${msg.settingsId} ≠ ${init.settingsId})`));
             return next();
           }
-          if (msg.type === 'result') {
+          if (msg.type === 'result' && current?.kind === 'shard') {
             onResult(msg.result);
             return next();
           }
-          finish(new ShardFailure(current?.ref.path ?? '(starting a worker)', `measuring failed in a worker: ${msg.message}`));
+          if (msg.type === 'batch-result' && current?.kind === 'batch') {
+            current.resolve(msg.result);
+            return next();
+          }
+          const message = msg.type === 'error' ? msg.message : `unexpected ${msg.type} message`;
+          finish(new ShardFailure(where(), `measuring failed in a worker: ${message}`));
         });
-        worker.on('error', (err) => finish(new ShardFailure(current?.ref.path ?? '(starting a worker)', `worker crashed: ${err.message}`)));
+        worker.on('error', (err) => finish(new ShardFailure(where(), `worker crashed: ${err.message}`)));
         worker.on('exit', (code) => {
-          if (!done) finish(new ShardFailure(current?.ref.path ?? '(starting a worker)', `worker exited with code ${code} before finishing`));
+          if (!done) finish(new ShardFailure(where(), `worker exited with code ${code} before finishing`));
         });
       }),
     );

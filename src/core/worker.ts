@@ -1,10 +1,10 @@
 // The worker side of the pool: rebuild the policy's analyzers once, then measure
-// each shard the main thread sends. Started from the same bundle as the front end.
+// each shard, or batch of a shard's documents, the main thread sends. Started from the same bundle as the front end.
 import { parentPort, workerData, isMainThread } from 'node:worker_threads';
-import { scanShard } from '../results/scan.js';
+import { measureBatch, scanShard } from '../results/scan.js';
 import { prepareAnalyzers } from './analyzers.js';
 import { loadPolicyOrThrow } from './check.js';
-import { throwIfFaultInjected, type FromWorker, type ToWorker, type WorkerInit } from './pool.js';
+import { throwIfFaultInjected, transferablesOf, type FromWorker, type ToWorker, type WorkerInit } from './pool.js';
 
 /** Returns whether this thread was started by the pool (the front end then runs `runShardWorker` instead of its main). */
 export function isShardWorker(): boolean {
@@ -22,6 +22,16 @@ export async function runShardWorker(): Promise<void> {
     port.on('message', (msg: ToWorker) => {
       if (msg.type === 'close') {
         port.close();
+        return;
+      }
+      if (msg.type === 'batch') {
+        try {
+          throwIfFaultInjected(msg.path);
+          const result = measureBatch(msg.batch, prepared.scan, prepared.analyzers);
+          port.postMessage({ type: 'batch-result', id: msg.id, result } satisfies FromWorker, transferablesOf(result));
+        } catch (err) {
+          post({ type: 'error', id: msg.id, message: (err as Error).message });
+        }
         return;
       }
       void (async () => {

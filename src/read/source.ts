@@ -19,8 +19,11 @@ export interface PumpResult {
   error?: string;
 }
 
+/** Called between raw chunks; a promise it returns holds the next read back until it settles (backpressure from a slower consumer). */
+export type Pace = () => Promise<void> | undefined;
+
 /** Streams the shard's decompressed bytes into `write` and returns the raw byte count and, when the stream broke, why. */
-export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void): Promise<PumpResult> {
+export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void, pace?: Pace): Promise<PumpResult> {
   let source: Readable;
   try {
     source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
@@ -29,24 +32,28 @@ export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void): 
   }
   switch (ref.compression) {
     case 'none':
-      return pumpPlain(source, write);
+      return pumpPlain(source, write, pace);
     case 'gzip':
-      return pumpGzip(source, write);
+      return pumpGzip(source, write, pace);
     case 'zstd':
-      return pumpZstd(source, write);
+      return pumpZstd(source, write, pace);
   }
 }
 
-async function pumpPlain(source: Readable, write: (chunk: Buffer) => void): Promise<PumpResult> {
+async function pumpPlain(source: Readable, write: (chunk: Buffer) => void, pace?: Pace): Promise<PumpResult> {
   let compressedBytes = 0;
-  const error = await drain(source, (chunk) => {
-    compressedBytes += chunk.length;
-    write(chunk);
-  });
+  const error = await drain(
+    source,
+    (chunk) => {
+      compressedBytes += chunk.length;
+      write(chunk);
+    },
+    pace,
+  );
   return error === undefined ? { compressedBytes } : { compressedBytes, error: `read failed: ${error}` };
 }
 
-async function pumpGzip(source: Readable, write: (chunk: Buffer) => void): Promise<PumpResult> {
+async function pumpGzip(source: Readable, write: (chunk: Buffer) => void, pace?: Pace): Promise<PumpResult> {
   // createGunzip reads concatenated members (multi-member files, as `cat a.gz b.gz` makes) and reports a
   // stream cut short as "unexpected end of file".
   const gunzip = createGunzip({ chunkSize: GUNZIP_CHUNK_BYTES });
@@ -54,14 +61,14 @@ async function pumpGzip(source: Readable, write: (chunk: Buffer) => void): Promi
   source.once('error', () => (readFailed = true));
   // pipeline forwards a read error on the source into gunzip, where the iteration below sees it.
   pipeline(source, gunzip, () => {});
-  const error = await drain(gunzip, write);
+  const error = await drain(gunzip, write, pace);
   // bytesWritten: compressed bytes taken in by the engine.
   const compressedBytes = gunzip.bytesWritten;
   if (error === undefined) return { compressedBytes };
   return { compressedBytes, error: readFailed ? `read failed: ${error}` : `gzip: ${error}` };
 }
 
-async function pumpZstd(source: Readable, write: (chunk: Buffer) => void): Promise<PumpResult> {
+async function pumpZstd(source: Readable, write: (chunk: Buffer) => void, pace?: Pace): Promise<PumpResult> {
   let compressedBytes = 0;
   let consumerError: { error: unknown } | undefined;
   // Output is handed on block by block (at most 128 KiB each) from inside push(), so a highly compressed
@@ -85,11 +92,15 @@ async function pumpZstd(source: Readable, write: (chunk: Buffer) => void): Promi
     }
   };
   let broken: string | undefined;
-  const readError = await drain(source, (chunk) => {
-    compressedBytes += chunk.length;
-    broken = push(chunk, false);
-    if (broken !== undefined) throw new StopSignal();
-  });
+  const readError = await drain(
+    source,
+    (chunk) => {
+      compressedBytes += chunk.length;
+      broken = push(chunk, false);
+      if (broken !== undefined) throw new StopSignal();
+    },
+    pace,
+  );
   // fzstd stops quietly on a stream cut at a block or frame edge; only the final push, which
   // checks that the last frame (and its checksum bytes) is complete, reports it: "unexpected EOF".
   // fzstd skips the XXH64 checksum without verifying it, so corruption that still parses reaches
@@ -102,8 +113,8 @@ async function pumpZstd(source: Readable, write: (chunk: Buffer) => void): Promi
 /** Thrown by a drain body to stop reading without it counting as the consumer's error. */
 class StopSignal extends Error {}
 
-/** Feeds every chunk to `body`; returns the stream's error message, or undefined when it ended normally. Errors thrown by `body` are thrown on, after closing the stream. */
-async function drain(stream: Readable, body: (chunk: Buffer) => void): Promise<string | undefined> {
+/** Feeds every chunk to `body` (waiting on `pace` after each); returns the stream's error message, or undefined when it ended normally. Errors thrown by `body` or `pace` are thrown on, after closing the stream. */
+async function drain(stream: Readable, body: (chunk: Buffer) => void, pace?: Pace): Promise<string | undefined> {
   const iterator = stream[Symbol.asyncIterator]() as AsyncIterator<Buffer | string>;
   for (;;) {
     let step: IteratorResult<Buffer | string>;
@@ -120,6 +131,15 @@ async function drain(stream: Readable, body: (chunk: Buffer) => void): Promise<s
       stream.destroy();
       if (error instanceof StopSignal) return undefined;
       throw error;
+    }
+    const wait = pace?.();
+    if (wait !== undefined) {
+      try {
+        await wait;
+      } catch (error) {
+        stream.destroy();
+        throw error;
+      }
     }
   }
 }

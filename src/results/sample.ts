@@ -120,6 +120,14 @@ export class MomentTally {
     return (this.moments[key] ??= emptyMoments());
   }
 
+  /** Adds the sums of the documents that follow (a batch measured elsewhere); new keys come after the ones already seen. */
+  absorb(o: Record<string, LanguageMoments>): void {
+    for (const [key, m] of Object.entries(o)) {
+      const into = this.of(key);
+      for (const field of Object.keys(m) as Array<keyof LanguageMoments>) into[field] += m[field];
+    }
+  }
+
   /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
   add(m: DocumentMeasure, tokens?: DocumentTokens): void {
     const t = this.of(m.language);

@@ -61,6 +61,18 @@ export interface DocumentTokens {
   baseline?: { tokens: number; unknown: number; wordTokens: number; continuedWords: number };
 }
 
+/** A tally's contents as plain data: what a batch measured on another thread sends back. */
+export interface TallyState {
+  languages: Record<string, LanguageTally>;
+  scripts: Record<string, number>;
+  anomalyMasks: Record<string, number>;
+  anomalyDocs: Record<AnomalyKind, number>;
+  declared: Record<string, Record<string, number>>;
+  impure: Array<LineSample & { language: string; purity: number }>;
+  anomalous: Array<LineSample & { kinds: AnomalyKind[] }>;
+  mismatch: Array<LineSample & { declared: string; detected: string }>;
+}
+
 /** Accumulates one shard's documents; `finish` hands back the tallies. */
 export class ShardTally {
   readonly languages: Record<string, LanguageTally> = {};
@@ -127,6 +139,43 @@ export class ShardTally {
         this.mismatch.push({ line, declared: m.declared, detected: m.language, detail: `detector label ${m.detected}` });
       }
     }
+  }
+
+  /** Returns the tally's contents as plain data (shared, not copied). */
+  state(): TallyState {
+    const { languages, scripts, anomalyMasks, anomalyDocs, declared, impure, anomalous, mismatch } = this;
+    return { languages, scripts, anomalyMasks, anomalyDocs, declared, impure, anomalous, mismatch };
+  }
+
+  /**
+   * Adds the tally of the documents that follow this one's (a batch measured elsewhere): the sums
+   * add, new keys come after the ones already seen, and the example lists keep what adding each
+   * document here would have kept (the first N by line; for impure, the N lowest by purity, then line).
+   */
+  absorb(o: TallyState): void {
+    for (const [key, t] of Object.entries(o.languages)) {
+      const into = this.lang(key);
+      into.docs += t.docs;
+      into.bytes += t.bytes;
+      into.chars += t.chars;
+      into.words += t.words;
+      if (t.tokens) addTokens((into.tokens ??= emptyTokenTally()), t.tokens);
+      if (t.baseline) addTokens((into.baseline ??= emptyTokenTally()), t.baseline);
+      into.purityDocs += t.purityDocs;
+      into.scriptChars += t.scriptChars;
+      into.expectedScriptChars += t.expectedScriptChars;
+      for (let i = 0; i < into.purityHistogram.length; i++) into.purityHistogram[i]! += t.purityHistogram[i] ?? 0;
+    }
+    addCounts(this.scripts, o.scripts);
+    addCounts(this.anomalyMasks, o.anomalyMasks);
+    addCounts(this.anomalyDocs, o.anomalyDocs);
+    for (const [d, row] of Object.entries(o.declared)) addCounts((this.declared[d] ??= {}), row);
+    for (const item of o.impure) {
+      const list = this.impure;
+      if (list.length < SAMPLES_PER_KIND || item.purity < list[list.length - 1]!.purity) keepLowest(list, item);
+    }
+    for (const item of o.anomalous) if (this.anomalous.length < SAMPLES_PER_KIND) this.anomalous.push(item);
+    for (const item of o.mismatch) if (this.mismatch.length < SAMPLES_PER_KIND) this.mismatch.push(item);
   }
 }
 

@@ -1,7 +1,7 @@
 // All cores and many runners: the report is the same whatever the worker count,
 // a partitioned scan merged equals one scan, and a failure inside a worker fails
 // the run with the shard named instead of leaving the shard out.
-import { existsSync, mkdtempSync } from 'node:fs';
+import { cpSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -30,6 +30,42 @@ describe('worker threads', () => {
     });
     expect(r.status).toBe(2);
     expect(r.stderr).toContain('data/english/english-01.jsonl.gz');
+    expect(existsSync(join(out, 'r.json'))).toBe(false);
+  });
+});
+
+describe('one large shard', () => {
+  // The whole demo corpus as one shard: gzip members one after another, as `cat a.gz b.gz` makes.
+  let root: string;
+  beforeAll(() => {
+    root = mkdtempSync(join(tmpdir(), 'sluice-one-shard-'));
+    mkdirSync(join(root, 'data', 'all'), { recursive: true });
+    cpSync(join(REPO, 'examples/newsroom/evals'), join(root, 'evals'), { recursive: true });
+    const data = join(REPO, 'examples/newsroom/data');
+    const members = readdirSync(data, { recursive: true, encoding: 'utf8' })
+      .filter((f) => f.endsWith('.jsonl.gz'))
+      .sort()
+      .map((f) => readFileSync(join(data, f)));
+    writeFileSync(join(root, 'data', 'all', 'all-00.jsonl.gz'), Buffer.concat(members));
+  });
+
+  it('is measured in batches across workers, with the report of one worker (timing aside)', () => {
+    const one = sluice(['check', POLICY, '--root', root, '--no-cache', '--workers', '1'], { json: true });
+    expect(one.report!.input.shards).toBe(1);
+    const split = sluice(['check', POLICY, '--root', root, '--no-cache', '--workers', '3', '--split-mb', '0'], { json: true });
+    expect(split.status).toBe(one.status);
+    expect(comparable(split.report!)).toBe(comparable(one.report!));
+    // The same documents as the demo's shards one by one: the split lost nothing.
+    expect(one.report!.input.docs).toBe(single.input.docs);
+  });
+
+  it('fails the run, naming the shard, when a worker throws on one of its batches', () => {
+    const out = mkdtempSync(join(tmpdir(), 'sluice-fault-'));
+    const r = sluice(['check', POLICY, '--root', root, '--no-cache', '--workers', '2', '--split-mb', '0', '--json', join(out, 'r.json')], {
+      env: { SLUICE_FAULT_SHARD: 'data/all/all-00.jsonl.gz' },
+    });
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('data/all/all-00.jsonl.gz');
     expect(existsSync(join(out, 'r.json'))).toBe(false);
   });
 });

@@ -72,6 +72,20 @@ class Bytes {
   }
 }
 
+/**
+ * A run of consecutive documents indexed by another builder (on another thread): its columns as
+ * they would sit in a blob, and its location stream written from line 0. `addPart` appends it
+ * so that the finished blob is byte for byte the one that adding each document would give.
+ */
+export interface DuplicateIndexPart {
+  /** The options the part was built with (punctuation/shingle/hashes/bits): only a builder with the same ones takes it. */
+  built: string;
+  documents: number;
+  exact: Uint8Array;
+  signatures: Uint8Array;
+  stream: Uint8Array;
+}
+
 /** Collects one shard's documents and returns its duplicate index blob. */
 export class DuplicateIndexBuilder {
   readonly options: DuplicateOptions;
@@ -142,6 +156,69 @@ export class DuplicateIndexBuilder {
     this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
     this.stream.varint(language * 4 + kind);
     this.documents++;
+  }
+
+  /**
+   * Returns the documents added so far as a part for another builder's `addPart`; this builder
+   * cannot be used afterwards. The part's arrays are its own (transferable to another thread).
+   */
+  takePart(): DuplicateIndexPart {
+    if (this.finished) throw new Error('DuplicateIndexBuilder: takePart() after finish()');
+    this.finished = true;
+    return {
+      built: this.builtWith(),
+      documents: this.documents,
+      exact: this.exact.data.slice(0, this.exact.length),
+      signatures: this.signatures.data.slice(0, this.signatures.length),
+      stream: this.stream.data.slice(0, this.stream.length),
+    };
+  }
+
+  /** Appends a part taken from a builder with the same options, as if its documents had been added here one by one. */
+  addPart(part: DuplicateIndexPart): void {
+    if (this.finished) throw new Error('DuplicateIndexBuilder: addPart() after finish()');
+    const { documents, exact, signatures, stream } = part;
+    if (part.built !== this.builtWith()) throw new RangeError(`DuplicateIndexBuilder: a part built with other options (${part.built}) than this index (${this.builtWith()})`);
+    if (exact.length !== documents * EXACT_BYTES || signatures.length !== documents * this.sigBytes) {
+      throw new RangeError(`DuplicateIndexBuilder: a part of ${documents} documents has ${exact.length} exact and ${signatures.length} signature bytes`);
+    }
+    this.exact.reserve(exact.length);
+    this.exact.data.set(exact, this.exact.length);
+    this.exact.length += exact.length;
+    this.signatures.reserve(signatures.length);
+    this.signatures.data.set(signatures, this.signatures.length);
+    this.signatures.length += signatures.length;
+    // The part's lines are deltas from line 0: decode each and write it again relative to this builder's last line.
+    let at = 0;
+    let partLine = 0;
+    const next = (): number => {
+      let v = 0;
+      let scale = 1;
+      for (;;) {
+        if (at >= stream.length) throw new RangeError('DuplicateIndexBuilder: a part\'s location stream ends inside a record');
+        const b = stream[at++]!;
+        v += (b & 0x7f) * scale;
+        if (b < 0x80) return v;
+        scale *= 0x80;
+      }
+    };
+    for (let i = 0; i < documents; i++) {
+      const zig = next();
+      partLine += zig % 2 === 0 ? zig / 2 : -(zig + 1) / 2;
+      const code = next();
+      const delta = partLine - this.lastLine;
+      this.lastLine = partLine;
+      this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
+      this.stream.varint(code);
+    }
+    if (at !== stream.length) throw new RangeError(`DuplicateIndexBuilder: a part's location stream holds more than its ${documents} documents`);
+    this.documents += documents;
+    this.lastOrdinal += documents;
+  }
+
+  private builtWith(): string {
+    const o = this.options;
+    return `${o.punctuation}/${o.shingle}/${o.hashes}/${this.signatureBits}`;
   }
 
   /** Returns the number of documents added so far. */

@@ -13,7 +13,7 @@ export type {
   JoinOptions,
   JoinStatistics,
 } from './types.js';
-export { DuplicateIndexBuilder, checkOptions, duplicateOptionsFrom } from './builder.js';
+export { DuplicateIndexBuilder, checkOptions, duplicateOptionsFrom, type DuplicateIndexPart } from './builder.js';
 export { joinDuplicates, estimateJaccard, bandKeysOf, DuplicateIndexError } from './join.js';
 export { bytesPerDocument, inspectIndex, FORMAT_VERSION } from './format.js';
 export { lshBands, candidateProbability, rowAgreement, signatureBits, jaccardFromAgreement } from './lsh.js';
