@@ -15611,6 +15611,9 @@ async function prepareAnalyzers(policy) {
   };
 }
 
+// src/core/check.ts
+import { existsSync as existsSync2 } from "node:fs";
+
 // src/core/pool.ts
 import { existsSync } from "node:fs";
 import { availableParallelism } from "node:os";
@@ -15635,11 +15638,30 @@ function canRunWorkers(entry) {
   const path5 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
   return path5.endsWith(".js") && existsSync(path5);
 }
+function startWorker(entry, init) {
+  const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
+  const held = [];
+  let handlers;
+  const deliver = (kind, value) => {
+    if (handlers) handlers[kind](value);
+    else held.push(() => handlers[kind](value));
+  };
+  worker.on("message", (m) => deliver("message", m));
+  worker.on("error", (e) => deliver("error", e));
+  worker.on("exit", (code) => deliver("exit", code));
+  return {
+    worker,
+    listen(h) {
+      handlers = h;
+      for (const f of held.splice(0)) f();
+    }
+  };
+}
 function transferablesOf(r) {
   const d = r.duplicates;
   return d ? [d.exact.buffer, d.signatures.buffer, d.stream.buffer] : [];
 }
-async function measureInPool(work, init, entry, workers, onResult, here) {
+async function measureInPool(work, init, entry, workers, onResult, here, started = []) {
   const shardQueue = work.whole.map((ref, id) => ({ kind: "shard", ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
   const batchQueue = [];
   let producing = work.split.length > 0;
@@ -15715,10 +15737,13 @@ async function measureInPool(work, init, entry, workers, onResult, here) {
       }
     })()
   );
+  const spare = started.splice(0);
+  for (const unused of spare.splice(Math.max(0, threads - 1))) void unused.worker.terminate();
   for (let w = 1; w < threads; w++) {
+    const thread = spare.shift() ?? startWorker(entry, init);
     all.push(
       new Promise((resolve, reject) => {
-        const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
+        const worker = thread.worker;
         let current;
         let done = false;
         const finish = (err) => {
@@ -15751,7 +15776,7 @@ async function measureInPool(work, init, entry, workers, onResult, here) {
           const { open: _open, ...ref } = task.ref;
           worker.postMessage({ type: "scan", id: task.id, ref });
         };
-        worker.on("message", (msg) => {
+        const message = (msg) => {
           if (msg.type === "ready") {
             if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where2(), `worker measured under other settings (${msg.settingsId} \u2260 ${init.settingsId})`));
             return next();
@@ -15764,12 +15789,15 @@ async function measureInPool(work, init, entry, workers, onResult, here) {
             current.resolve(msg.result);
             return next();
           }
-          const message = msg.type === "error" ? msg.message : `unexpected ${msg.type} message`;
-          finish(new ShardFailure(where2(), `measuring failed in a worker: ${message}`));
-        });
-        worker.on("error", (err) => finish(new ShardFailure(where2(), `worker crashed: ${err.message}`)));
-        worker.on("exit", (code) => {
-          if (!done) finish(new ShardFailure(where2(), `worker exited with code ${code} before finishing`));
+          const what = msg.type === "error" ? msg.message : `unexpected ${msg.type} message`;
+          finish(new ShardFailure(where2(), `measuring failed in a worker: ${what}`));
+        };
+        thread.listen({
+          message,
+          error: (err) => finish(new ShardFailure(where2(), `worker crashed: ${err.message}`)),
+          exit: (code) => {
+            if (!done) finish(new ShardFailure(where2(), `worker exited with code ${code} before finishing`));
+          }
         });
       })
     );
@@ -15830,9 +15858,30 @@ async function measureCorpus(policy, opts, given = {}) {
   const started = performance.now();
   const discovery = given.discovery ?? await discoverOrThrow(policy);
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
-  const prepared = given.prepared ?? await prepareOrThrow(policy);
-  const { results, cached } = await measureShards(policy, discovery.shards, prepared, opts, started);
-  return assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
+  const early = [];
+  const entry = opts.workerEntry;
+  if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && existsSync2(opts.cacheDir))) {
+    const threads = threadsFor(discovery.shards.filter((r) => r.open === void 0), opts);
+    for (let w = 1; w < threads; w++) early.push(startWorker(entry, workerInitOf(policy, opts, "not yet known")));
+  }
+  try {
+    const prepared = given.prepared ?? await prepareOrThrow(policy);
+    const { results, cached } = await measureShards(policy, discovery.shards, prepared, opts, started, early);
+    return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
+  } finally {
+    for (const w of early) void w.worker.terminate();
+  }
+}
+function workerInitOf(policy, opts, settingsId) {
+  const init = { role: "sluice-shard-worker", policyFile: policy.file, settingsId };
+  if (opts.root !== void 0) init.root = opts.root;
+  return init;
+}
+function threadsFor(pooled, opts) {
+  const diskBytes = pooled.reduce((n, r) => n + r.sizeBytes, 0);
+  const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
+  if (workers <= 1) return 1;
+  return pooled.length > 1 || shardsToSplit(pooled, workers, opts.minSplitBytes).size > 0 ? workers : 1;
 }
 async function assembleCorpus(policy, prepared, results, cached, skipped, newShards, started) {
   results.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
@@ -15847,7 +15896,7 @@ async function assembleCorpus(policy, prepared, results, cached, skipped, newSha
   corpus.elapsedMs = Math.round(performance.now() - started);
   return corpus;
 }
-async function measureShards(policy, shards, prepared, opts, started = performance.now()) {
+async function measureShards(policy, shards, prepared, opts, started = performance.now(), early = []) {
   const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
   const results = [];
   const cached = /* @__PURE__ */ new Set();
@@ -15884,14 +15933,12 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     const key = keys.get(r.path);
     if (cache && key) await cache.put({ ...r, contentId: key });
   };
-  const diskBytes = todo.reduce((n, r) => n + r.sizeBytes, 0);
-  const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
   const local = todo.filter((r) => r.open !== void 0);
   const pooled = todo.filter((r) => r.open === void 0);
+  const workers = threadsFor(pooled, opts);
   const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
-  if (workers > 1 && (pooled.length > 1 || split.size > 0) && canRunWorkers(opts.workerEntry)) {
-    const init = { role: "sluice-shard-worker", policyFile: policy.file, settingsId: prepared.settingsId };
-    if (opts.root !== void 0) init.root = opts.root;
+  if (workers > 1 && canRunWorkers(opts.workerEntry)) {
+    const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending = [];
     const plan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(
@@ -15913,7 +15960,8 @@ async function measureShards(policy, shards, prepared, opts, started = performan
           return measureBatch(batch, prepared.scan, prepared.analyzers);
         },
         split: (ref, measure) => scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, plan)
-      }
+      },
+      early
     );
     await Promise.all(pending);
   } else {

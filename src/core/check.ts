@@ -13,7 +13,8 @@ import { contentIdOf, measureBatch, scanShard, scanShardInBatches, type BatchPla
 import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
 import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
-import { canRunWorkers, defaultWorkers, measureInPool, throwIfFaultInjected, type WorkerInit } from './pool.js';
+import { existsSync } from 'node:fs';
+import { canRunWorkers, defaultWorkers, measureInPool, startWorker, throwIfFaultInjected, type StartedWorker, type WorkerInit } from './pool.js';
 
 /** Cache look-ups in flight at once: enough to hide file-system latency, few enough to keep memory flat. */
 const CACHE_LOOKUPS_AT_ONCE = 16;
@@ -134,9 +135,40 @@ export async function measureCorpus(
   const started = performance.now();
   const discovery = given.discovery ?? (await discoverOrThrow(policy));
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
-  const prepared = given.prepared ?? (await prepareOrThrow(policy));
-  const { results, cached } = await measureShards(policy, discovery.shards, prepared, opts, started);
-  return assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
+  // Workers load the policy and tokenizers themselves (about half a second each): when the run will
+  // need them and no cache can spare the work, they start now, alongside this thread's own loading.
+  const early: StartedWorker[] = [];
+  const entry = opts.workerEntry;
+  if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && existsSync(opts.cacheDir))) {
+    const threads = threadsFor(discovery.shards.filter((r) => r.open === undefined), opts);
+    for (let w = 1; w < threads; w++) early.push(startWorker(entry, workerInitOf(policy, opts, 'not yet known')));
+  }
+  try {
+    const prepared = given.prepared ?? (await prepareOrThrow(policy));
+    const { results, cached } = await measureShards(policy, discovery.shards, prepared, opts, started, early);
+    return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
+  } finally {
+    for (const w of early) void w.worker.terminate();
+  }
+}
+
+/** Returns what a worker needs to rebuild this policy's analyzers. */
+function workerInitOf(policy: Policy, opts: CheckOptions, settingsId: string): WorkerInit {
+  const init: WorkerInit = { role: 'sluice-shard-worker', policyFile: policy.file, settingsId };
+  if (opts.root !== undefined) init.root = opts.root;
+  return init;
+}
+
+/**
+ * Returns the threads that measure these (poolable) shards: the --workers count, or by default one per
+ * WORK_PER_WORKER_BYTES on disk up to the cores (starting a worker costs about a second: each loads the
+ * tokenizers); 1 when there is nothing to spread (a single shard too small to split).
+ */
+function threadsFor(pooled: readonly ShardRef[], opts: CheckOptions): number {
+  const diskBytes = pooled.reduce((n, r) => n + r.sizeBytes, 0);
+  const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
+  if (workers <= 1) return 1;
+  return pooled.length > 1 || shardsToSplit(pooled, workers, opts.minSplitBytes).size > 0 ? workers : 1;
 }
 
 /** Returns the corpus result of measured shards: sorted, summed, with the cross-shard figures added. */
@@ -169,6 +201,8 @@ export async function measureShards(
   prepared: PreparedAnalyzers,
   opts: CheckOptions,
   started = performance.now(),
+  /** Workers started earlier for this run (taken when the pool needs them; the caller stops any left). */
+  early: StartedWorker[] = [],
 ): Promise<{ results: ShardResult[]; cached: Set<string> }> {
   const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
   const results: ShardResult[] = [];
@@ -210,16 +244,12 @@ export async function measureShards(
     const key = keys.get(r.path);
     if (cache && key) await cache.put({ ...r, contentId: key });
   };
-  // Starting a worker costs about a second (each loads the tokenizers), so by default only a corpus
-  // big enough to repay it is spread: one worker per WORK_PER_WORKER_BYTES on disk, at most one per core.
-  const diskBytes = todo.reduce((n, r) => n + r.sizeBytes, 0);
-  const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
   const local = todo.filter((r) => r.open !== undefined);
   const pooled = todo.filter((r) => r.open === undefined);
+  const workers = threadsFor(pooled, opts);
   const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
-  if (workers > 1 && (pooled.length > 1 || split.size > 0) && canRunWorkers(opts.workerEntry)) {
-    const init: WorkerInit = { role: 'sluice-shard-worker', policyFile: policy.file, settingsId: prepared.settingsId };
-    if (opts.root !== undefined) init.root = opts.root;
+  if (workers > 1 && canRunWorkers(opts.workerEntry)) {
+    const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending: Promise<void>[] = [];
     const plan: BatchPlan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(
@@ -242,6 +272,7 @@ export async function measureShards(
         },
         split: (ref, measure) => scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, plan),
       },
+      early,
     );
     await Promise.all(pending);
   } else {

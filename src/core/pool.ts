@@ -58,6 +58,38 @@ export function canRunWorkers(entry: string | URL | undefined): entry is string 
   return path.endsWith('.js') && existsSync(path);
 }
 
+type WorkerEvents = { message: (m: FromWorker) => void; error: (e: Error) => void; exit: (code: number) => void };
+
+/**
+ * A worker thread started ahead of its use (while the main thread loads the tokenizers and looks up
+ * the cache, the worker loads its own), keeping what it says until someone listens.
+ */
+export interface StartedWorker {
+  worker: Worker;
+  listen(handlers: WorkerEvents): void;
+}
+
+/** Starts a worker from `entry`; its first message (ready, or an error) waits for `listen`. */
+export function startWorker(entry: string | URL, init: WorkerInit): StartedWorker {
+  const worker = new Worker(typeof entry === 'string' && entry.startsWith('file:') ? new URL(entry) : entry, { workerData: init });
+  const held: Array<() => void> = [];
+  let handlers: WorkerEvents | undefined;
+  const deliver = <K extends keyof WorkerEvents>(kind: K, value: Parameters<WorkerEvents[K]>[0]): void => {
+    if (handlers) (handlers[kind] as (v: typeof value) => void)(value);
+    else held.push(() => (handlers![kind] as (v: typeof value) => void)(value));
+  };
+  worker.on('message', (m: FromWorker) => deliver('message', m));
+  worker.on('error', (e: Error) => deliver('error', e));
+  worker.on('exit', (code: number) => deliver('exit', code));
+  return {
+    worker,
+    listen(h) {
+      handlers = h;
+      for (const f of held.splice(0)) f();
+    },
+  };
+}
+
 /** The shards of a pooled run: measured whole by one thread each, or read here and measured in batches by all. */
 export interface PoolWork {
   whole: readonly ShardRef[];
@@ -83,8 +115,9 @@ export function transferablesOf(r: BatchResult): ArrayBuffer[] {
 }
 
 /**
- * Measures shards on `workers` threads (this one included) started from `entry`; calls `onResult` as each
- * shard finishes. Rejects with ShardFailure, naming the shard, on the first failure.
+ * Measures shards on `workers` threads (this one included) started from `entry`, or taken from `started`
+ * (workers started earlier; those not needed are stopped); calls `onResult` as each shard finishes.
+ * Rejects with ShardFailure, naming the shard, on the first failure.
  */
 export async function measureInPool(
   work: PoolWork,
@@ -93,6 +126,7 @@ export async function measureInPool(
   workers: number,
   onResult: (r: ShardResult) => void,
   here: HereMeasurer,
+  started: StartedWorker[] = [],
 ): Promise<void> {
   // Largest shards first: the last shard to finish is then a small one, so workers end together.
   const shardQueue: ShardTask[] = work.whole
@@ -185,10 +219,13 @@ export async function measureInPool(
     })(),
   );
 
+  const spare = started.splice(0);
+  for (const unused of spare.splice(Math.max(0, threads - 1))) void unused.worker.terminate();
   for (let w = 1; w < threads; w++) {
+    const thread = spare.shift() ?? startWorker(entry, init);
     all.push(
       new Promise<void>((resolve, reject) => {
-        const worker = new Worker(typeof entry === 'string' && entry.startsWith('file:') ? new URL(entry) : entry, { workerData: init });
+        const worker = thread.worker;
         let current: Task | undefined;
         let done = false;
         const finish = (err?: ShardFailure): void => {
@@ -222,7 +259,7 @@ export async function measureInPool(
           const { open: _open, ...ref } = task.ref;
           worker.postMessage({ type: 'scan', id: task.id, ref } satisfies ToWorker);
         };
-        worker.on('message', (msg: FromWorker) => {
+        const message = (msg: FromWorker): void => {
           if (msg.type === 'ready') {
             if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where(), `worker measured under other settings (${msg.settingsId} ≠ ${init.settingsId})`));
             return next();
@@ -235,12 +272,15 @@ export async function measureInPool(
             current.resolve(msg.result);
             return next();
           }
-          const message = msg.type === 'error' ? msg.message : `unexpected ${msg.type} message`;
-          finish(new ShardFailure(where(), `measuring failed in a worker: ${message}`));
-        });
-        worker.on('error', (err) => finish(new ShardFailure(where(), `worker crashed: ${err.message}`)));
-        worker.on('exit', (code) => {
-          if (!done) finish(new ShardFailure(where(), `worker exited with code ${code} before finishing`));
+          const what = msg.type === 'error' ? msg.message : `unexpected ${msg.type} message`;
+          finish(new ShardFailure(where(), `measuring failed in a worker: ${what}`));
+        };
+        thread.listen({
+          message,
+          error: (err) => finish(new ShardFailure(where(), `worker crashed: ${err.message}`)),
+          exit: (code) => {
+            if (!done) finish(new ShardFailure(where(), `worker exited with code ${code} before finishing`));
+          },
         });
       }),
     );

@@ -34,6 +34,18 @@ describe('worker threads', () => {
   });
 });
 
+describe('workers started while the main thread loads the policy', () => {
+  it('are stopped, and the run ends with exit 2 naming the problem, when loading fails', () => {
+    // The demo's shards without its evaluation files: rules.contamination.eval matches nothing.
+    const root = mkdtempSync(join(tmpdir(), 'sluice-no-evals-'));
+    cpSync(join(REPO, 'examples/newsroom/data'), join(root, 'data'), { recursive: true });
+    // A worker left running would keep the process alive past the test's time limit.
+    const r = sluice(['check', POLICY, '--root', root, '--no-cache', '--workers', '3']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('rules.contamination.eval');
+  });
+});
+
 describe('one large shard', () => {
   // The whole demo corpus as one shard: gzip members one after another, as `cat a.gz b.gz` makes.
   let root: string;
