@@ -15665,6 +15665,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
   const shardQueue = work.whole.map((ref, id) => ({ kind: "shard", ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
   const batchQueue = [];
   let producing = work.split.length > 0;
+  const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
   let failed;
   let nextId = shardQueue.length;
   let waiters = [];
@@ -15681,11 +15682,10 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
   };
   const take = (main2) => {
     if (failed) return null;
-    if (batchQueue.length > 0 && (!main2 || batchQueue.length >= 2 || !producing)) return batchQueue.shift();
+    if (batchQueue.length > 0 && (!main2 || !producing || batchQueue.length > 2 * (threads - 1))) return batchQueue.shift();
     if (shardQueue.length > 0) return shardQueue.shift();
     return producing || batchQueue.length > 0 ? "wait" : null;
   };
-  const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
   const all = [];
   if (work.split.length > 0) {
     all.push(
@@ -15744,31 +15744,22 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
     all.push(
       new Promise((resolve, reject) => {
         const worker = thread.worker;
-        let current;
+        const current = [];
         let done = false;
+        let ready = false;
         const finish = (err) => {
           if (done) return;
           done = true;
           void worker.terminate();
           if (err) {
             const failure = fail(err);
-            if (current?.kind === "batch") current.reject(failure);
+            for (const t of current.splice(0)) if (t.kind === "batch") t.reject(failure);
             reject(failure);
           } else resolve();
         };
-        const where2 = () => current?.ref.path ?? "(starting a worker)";
-        const next = () => {
-          current = void 0;
-          const task = take(false);
-          if (task === "wait") {
-            waiters.push(next);
-            return;
-          }
-          if (task === null) {
-            worker.postMessage({ type: "close" });
-            return finish();
-          }
-          current = task;
+        const where2 = () => current[0]?.ref.path ?? "(starting a worker)";
+        const send = (task) => {
+          current.push(task);
           if (task.kind === "batch") {
             worker.postMessage({ type: "batch", id: nextId++, path: task.ref.path, batch: task.batch });
             return;
@@ -15776,17 +15767,37 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
           const { open: _open, ...ref } = task.ref;
           worker.postMessage({ type: "scan", id: task.id, ref });
         };
+        const next = () => {
+          if (done || !ready) return;
+          if (current.length === 0) {
+            const task = take(false);
+            if (task === "wait") {
+              waiters.push(next);
+              return;
+            }
+            if (task === null) {
+              worker.postMessage({ type: "close" });
+              return finish();
+            }
+            send(task);
+          }
+          if (current.length === 1 && current[0].kind === "batch" && batchQueue.length > 0 && !failed) send(batchQueue.shift());
+        };
         const message = (msg) => {
           if (msg.type === "ready") {
             if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where2(), `worker measured under other settings (${msg.settingsId} \u2260 ${init.settingsId})`));
+            ready = true;
             return next();
           }
-          if (msg.type === "result" && current?.kind === "shard") {
+          const answered = current[0];
+          if (msg.type === "result" && answered?.kind === "shard") {
+            current.shift();
             onResult(msg.result);
             return next();
           }
-          if (msg.type === "batch-result" && current?.kind === "batch") {
-            current.resolve(msg.result);
+          if (msg.type === "batch-result" && answered?.kind === "batch") {
+            current.shift();
+            answered.resolve(msg.result);
             return next();
           }
           const what = msg.type === "error" ? msg.message : `unexpected ${msg.type} message`;
@@ -15812,8 +15823,8 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
 var CACHE_LOOKUPS_AT_ONCE = 16;
 var WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
 var MIN_SPLIT_BYTES = 4 * 1024 * 1024;
-var BATCH_CHARS = 1 << 20;
-var BATCHES_IN_FLIGHT_PER_THREAD = 4;
+var BATCH_CHARS = 1 << 18;
+var BATCHES_IN_FLIGHT_PER_THREAD = 8;
 function shardsToSplit(shards, workers, minBytes = MIN_SPLIT_BYTES) {
   if (workers <= 1) return /* @__PURE__ */ new Set();
   const total = shards.reduce((n, r) => n + r.sizeBytes, 0);

@@ -11,7 +11,7 @@
 // on one optional analyzer each, and the full check; (d) the full check with an empty, then
 // a warm --cache-dir. MB are uncompressed JSONL bytes throughout.
 import { spawn } from 'node:child_process';
-import { createReadStream, existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { cpSync, createReadStream, existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { createInterface } from 'node:readline';
@@ -240,10 +240,10 @@ function runCli(args, label) {
 }
 
 /** Runs `sluice check` on a policy and returns the run's figures and its JSON report. */
-async function sluice(policy, { cacheDir = null, label, workers = 1 }) {
+async function sluice(policy, { cacheDir = null, label, workers = 1, extra = [] }) {
   const report = path.join(outDir, `bench-report-${label}.json`);
   rmSync(report, { force: true });
-  const args = ['check', policy, '--json', report, '--quiet', '--no-color', '--workers', String(workers), ...(cacheDir ? ['--cache-dir', cacheDir] : ['--no-cache'])];
+  const args = ['check', policy, '--json', report, '--quiet', '--no-color', '--workers', String(workers), ...(cacheDir ? ['--cache-dir', cacheDir] : ['--no-cache']), ...extra];
   const run = await runCli(args, label);
   // Exit 1 is a failed gate, still a complete run; 2 means it could not be judged.
   if (run.code !== 0 && run.code !== 1) throw new Error(`sluice ${label} exited with ${run.code}:\n${run.stderr}${run.stdout}`);
@@ -295,6 +295,19 @@ log(`building corpus (${mb} MB) in ${path.relative(ROOT, corpusDir)} ...`);
 const manifest = buildBenchCorpus({ dir: corpusDir, mb, seed, rebuild: flag('rebuild') });
 const policies = writeBenchPolicies(corpusDir, manifest);
 const corpusMb = manifest.bytes / 1e6;
+// The same corpus as one shard (its gzip members one after another, as `cat *.gz` makes), judged
+// with --root: the case where only splitting a shard into batches lets a second worker help.
+const oneShardRoot = path.join(corpusDir, 'one-shard');
+{
+  const target = path.join(oneShardRoot, 'data', 'all', 'all-00.jsonl.gz');
+  if (!existsSync(target) || flag('rebuild')) {
+    rmSync(oneShardRoot, { recursive: true, force: true });
+    mkdirSync(path.dirname(target), { recursive: true });
+    const members = manifest.shards.map((s) => readFileSync(path.join(corpusDir, s.path)));
+    writeFileSync(target, Buffer.concat(members));
+    cpSync(path.join(corpusDir, 'evals'), path.join(oneShardRoot, 'evals'), { recursive: true });
+  }
+}
 
 const cpus = os.cpus();
 const machine = `${cpus.length} × ${cpus[0]?.model?.trim() ?? 'unknown CPU'}, ${(os.totalmem() / 2 ** 30).toFixed(0)} GiB, Node ${process.version}, ${os.platform()} ${os.release()}`;
@@ -341,6 +354,7 @@ const sluiceCases = [
   { key: 'contamination', name: '(c) sluice: + contamination only', policy: policies.contamination, note: '--no-cache' },
   { key: 'full', name: '(c) sluice: full check', policy: policies.full, note: '--no-cache' },
   { key: 'full2', name: '(c) sluice: full check, 2 workers', policy: policies.full, workers: 2, note: '--no-cache --workers 2' },
+  { key: 'one2', name: '(c) sluice: full check, corpus as 1 shard, 2 workers', policy: policies.full, workers: 2, extra: ['--root', oneShardRoot, '--split-mb', '0'], note: '--no-cache --workers 2 --split-mb 0: read once, measured in batches' },
   { key: 'cold', name: '(d) sluice: full check, empty --cache-dir', policy: policies.full, cache: 'empty', note: 'measures, writes the cache' },
   { key: 'warm', name: '(d) sluice: full check, warm --cache-dir', policy: policies.full, cache: 'warm' },
 ];
@@ -351,7 +365,7 @@ for (let round = 1; round <= rounds; round++) {
   for (const c of sluiceCases) {
     log(`round ${round}/${rounds}: ${c.name} ...`);
     if (c.cache === 'empty') rmSync(cacheDir, { recursive: true, force: true });
-    const run = await sluice(c.policy, { cacheDir: c.cache ? cacheDir : null, label: c.key, workers: c.workers ?? 1 });
+    const run = await sluice(c.policy, { cacheDir: c.cache ? cacheDir : null, label: c.key, workers: c.workers ?? 1, extra: c.extra ?? [] });
     (allSeconds[c.key] ??= []).push(run.seconds);
     if (!runs[c.key] || run.seconds < runs[c.key].seconds) runs[c.key] = run;
   }
@@ -379,6 +393,20 @@ for (const c of sluiceCases) {
   row('(e) full check on 2 runners: slower scan --partition + merge', corpusMb, slower + merged.seconds, {
     cpuSeconds: scans.reduce((n, r) => n + r.cpuSeconds, 0) + merged.cpuSeconds,
     note: `scans ${scans.map((r) => r.seconds.toFixed(2)).join(' s, ')} s; merge ${merged.seconds.toFixed(2)} s`,
+  });
+}
+
+// What two threads can give on this machine at best: two independent one-worker full checks at the
+// same time share nothing but the hardware, so their combined rate bounds what 2 workers can reach.
+let pairRun;
+{
+  log('(f) two 1-worker full checks at the same time ...');
+  const pair = await Promise.all(['pair-a', 'pair-b'].map((label) => sluice(policies.full, { label, workers: 1 })));
+  const slower = Math.max(...pair.map((r) => r.seconds));
+  pairRun = { seconds: slower, all: pair.map((r) => r.seconds) };
+  row('(f) machine: two 1-worker full checks at once', 2 * corpusMb, slower, {
+    cpuSeconds: pair.reduce((n, r) => n + r.cpuSeconds, 0),
+    note: `${pair.map((r) => r.seconds.toFixed(2)).join(' s, ')} s: the most 2 threads can give here`,
   });
 }
 
@@ -434,6 +462,21 @@ const sumOf = (k) => parts.reduce((a, [, of]) => a + of(k), 0);
 console.log(`  ${'sum of the parts'.padEnd(48)} ${sumOf('seconds').toFixed(2).padStart(7)} ${share(sumOf('seconds'), 'seconds')} ${sumOf('cpuSeconds').toFixed(2).padStart(7)} ${share(sumOf('cpuSeconds'), 'cpuSeconds')}`);
 console.log(`  ${'full check, measured'.padEnd(48)} ${runs.full.seconds.toFixed(2).padStart(7)} ${'100 %'} ${runs.full.cpuSeconds.toFixed(2).padStart(7)} ${'100 %'}`);
 console.log('  (a sum away from 100 % is noise, or cost that appears only when the analyzers run together, such as collecting a larger heap)');
+
+// ---- scaling ----
+{
+  const rate = (mbs, secs) => mbs / secs;
+  const one = rate(corpusMb, runs.full.seconds);
+  const two = rate(corpusMb, runs.full2.seconds);
+  const split = rate(corpusMb, runs.one2.seconds);
+  const ceiling = rate(2 * corpusMb, pairRun.seconds);
+  console.log('');
+  console.log(
+    `Scaling: 2 workers ${(two / one).toFixed(2)}× one worker; the corpus as one shard on 2 workers ${(split / one).toFixed(2)}×; ` +
+      `two independent one-worker runs at once ${(ceiling / one).toFixed(2)}× (the machine's own limit for two threads of this work), ` +
+      `so 2 workers reach ${((two / ceiling) * 100).toFixed(0)} % of it.`,
+  );
+}
 
 // ---- other figures ----
 const fullReport = runs.full.report;

@@ -26,12 +26,13 @@ const WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
 const MIN_SPLIT_BYTES = 4 * 1024 * 1024;
 
 /**
- * Batches of a split shard: about 1 MB of text each (a fifth of a second of measuring, long enough
- * that handing it over is a small cost, short enough that threads end together), and at most four
- * per thread out at once, so the reader holds a few MB of text whatever the shard's size.
+ * Batches of a split shard: about 256 K characters of text each (some 50 ms of measuring: long enough
+ * that handing one over is a small cost, short enough that the main thread, which reads nothing while it
+ * measures one, leaves the workers waiting little), and at most eight per thread out at once, so the
+ * reader holds a few MB of text whatever the shard's size.
  */
-const BATCH_CHARS = 1 << 20;
-const BATCHES_IN_FLIGHT_PER_THREAD = 4;
+const BATCH_CHARS = 1 << 18;
+const BATCHES_IN_FLIGHT_PER_THREAD = 8;
 
 /**
  * Returns the shards worth splitting across `workers` threads: those larger than a quarter of a

@@ -134,6 +134,7 @@ export async function measureInPool(
     .sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
   const batchQueue: BatchTask[] = [];
   let producing = work.split.length > 0;
+  const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
   let failed: ShardFailure | undefined;
   let nextId = shardQueue.length;
   // Threads with nothing to take yet, woken when a batch comes, reading ends or the run fails.
@@ -151,16 +152,16 @@ export async function measureInPool(
   };
   /**
    * Returns the next task for a thread, 'wait' when batches may still come, or null when all is handed out.
-   * Batches go first (they hold text in memory); the main thread leaves the last queued batch to a worker
-   * while it is still reading, since it has the reading to do as well.
+   * Batches go first (they hold text in memory). While it is still reading, the main thread takes a batch
+   * only when two per worker are left queued: it reads nothing while it measures, and the workers must
+   * not run dry meanwhile.
    */
   const take = (main: boolean): Task | 'wait' | null => {
     if (failed) return null;
-    if (batchQueue.length > 0 && (!main || batchQueue.length >= 2 || !producing)) return batchQueue.shift()!;
+    if (batchQueue.length > 0 && (!main || !producing || batchQueue.length > 2 * (threads - 1))) return batchQueue.shift()!;
     if (shardQueue.length > 0) return shardQueue.shift()!;
     return producing || batchQueue.length > 0 ? 'wait' : null;
   };
-  const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
   const all: Promise<void>[] = [];
 
   // The reader of split shards, one at a time, largest first.
@@ -226,31 +227,25 @@ export async function measureInPool(
     all.push(
       new Promise<void>((resolve, reject) => {
         const worker = thread.worker;
-        let current: Task | undefined;
+        // Tasks sent and not yet answered, oldest first (a worker answers in order). A worker busy with a
+        // batch gets the next batch ahead, so it need not wait for this thread to read its answer, which
+        // waits while this thread measures a batch of its own.
+        const current: Task[] = [];
         let done = false;
+        let ready = false;
         const finish = (err?: ShardFailure): void => {
           if (done) return;
           done = true;
           void worker.terminate();
           if (err) {
             const failure = fail(err);
-            if (current?.kind === 'batch') current.reject(failure);
+            for (const t of current.splice(0)) if (t.kind === 'batch') t.reject(failure);
             reject(failure);
           } else resolve();
         };
-        const where = (): string => current?.ref.path ?? '(starting a worker)';
-        const next = (): void => {
-          current = undefined;
-          const task = take(false);
-          if (task === 'wait') {
-            waiters.push(next);
-            return;
-          }
-          if (task === null) {
-            worker.postMessage({ type: 'close' } satisfies ToWorker);
-            return finish();
-          }
-          current = task;
+        const where = (): string => current[0]?.ref.path ?? '(starting a worker)';
+        const send = (task: Task): void => {
+          current.push(task);
           if (task.kind === 'batch') {
             worker.postMessage({ type: 'batch', id: nextId++, path: task.ref.path, batch: task.batch } satisfies ToWorker);
             return;
@@ -259,17 +254,38 @@ export async function measureInPool(
           const { open: _open, ...ref } = task.ref;
           worker.postMessage({ type: 'scan', id: task.id, ref } satisfies ToWorker);
         };
+        const next = (): void => {
+          if (done || !ready) return;
+          if (current.length === 0) {
+            const task = take(false);
+            if (task === 'wait') {
+              waiters.push(next);
+              return;
+            }
+            if (task === null) {
+              worker.postMessage({ type: 'close' } satisfies ToWorker);
+              return finish();
+            }
+            send(task);
+          }
+          // One batch ahead, never a whole shard (that would undo the largest-first order).
+          if (current.length === 1 && current[0]!.kind === 'batch' && batchQueue.length > 0 && !failed) send(batchQueue.shift()!);
+        };
         const message = (msg: FromWorker): void => {
           if (msg.type === 'ready') {
             if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where(), `worker measured under other settings (${msg.settingsId} ≠ ${init.settingsId})`));
+            ready = true;
             return next();
           }
-          if (msg.type === 'result' && current?.kind === 'shard') {
+          const answered = current[0];
+          if (msg.type === 'result' && answered?.kind === 'shard') {
+            current.shift();
             onResult(msg.result);
             return next();
           }
-          if (msg.type === 'batch-result' && current?.kind === 'batch') {
-            current.resolve(msg.result);
+          if (msg.type === 'batch-result' && answered?.kind === 'batch') {
+            current.shift();
+            answered.resolve(msg.result);
             return next();
           }
           const what = msg.type === 'error' ? msg.message : `unexpected ${msg.type} message`;
