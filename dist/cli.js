@@ -4599,8 +4599,14 @@ function astralClass(text, i) {
   return OTHER;
 }
 function prepareText(text) {
-  return text.normalize("NFC").toLowerCase();
+  if (text === lastRaw) return lastPrepared;
+  const prepared = text.normalize("NFC").toLowerCase();
+  lastRaw = text;
+  lastPrepared = prepared;
+  return prepared;
 }
+var lastRaw = null;
+var lastPrepared = "";
 function wordBuffer(lanes, capacity = 1024) {
   return { lane1: new Int32Array(capacity), lane2: lanes === 2 ? new Int32Array(capacity) : null };
 }
@@ -14362,14 +14368,31 @@ function countWordsWithSegmenter(text) {
   for (const s of wordSegmenter().segment(text)) if (s.isWordLike) count3++;
   return count3;
 }
+var memoText = null;
+var memoCount = 0;
+var memoOffsets = new Int32Array(0);
 function countWords(text) {
-  const fast = scan(text, false);
-  return fast >= 0 ? fast : countWordsWithSegmenter(text);
+  const fast = scan(text, true);
+  if (fast < 0) {
+    memoText = null;
+    return countWordsWithSegmenter(text);
+  }
+  memoOffsets = offsets.slice(0, fast * 2);
+  memoCount = fast;
+  memoText = text;
+  return fast;
 }
 function forEachWord(text, onWord) {
-  const fast = scan(text, true);
+  let found;
+  let fast;
+  if (memoText !== null && text === memoText) {
+    found = memoOffsets;
+    fast = memoCount;
+  } else {
+    fast = scan(text, true);
+    found = fast >= 0 ? offsets.slice(0, fast * 2) : offsets;
+  }
   if (fast >= 0) {
-    const found = offsets.slice(0, fast * 2);
     for (let w = 0; w < fast; w++) onWord(found[w * 2], found[w * 2 + 1]);
     return;
   }

@@ -73,8 +73,15 @@ function astralClass(text: string, i: number): number {
 
 /** Returns `text` in the form both scanners expect: Unicode NFC, then `toLowerCase()` (the locale-independent default case mapping; close to, but not exactly, Unicode case folding: `ß` stays `ß`). */
 export function prepareText(text: string): string {
-  return text.normalize('NFC').toLowerCase();
+  // The duplicate index and the evaluation overlap both prepare each document, one after the other.
+  if (text === lastRaw) return lastPrepared;
+  const prepared = text.normalize('NFC').toLowerCase();
+  lastRaw = text;
+  lastPrepared = prepared;
+  return prepared;
 }
+let lastRaw: string | null = null;
+let lastPrepared = '';
 
 /** Growable buffers of word hashes; `lane2` is filled only when the buffer was made with two lanes. */
 export interface WordBuffer {
