@@ -5273,8 +5273,8 @@ function joinDuplicates(shards, opts) {
   const bufC = scratch3.buffer;
   for (let g = 0; g < n; g++) if (rep[g] === g && (flags[g] & KIND_MASK) === KIND_FULL) flags[g] = flags[g] | PARTICIPANT;
   const keys = hi;
+  const nearOf = new Int32Array(lo.buffer, 0, n).fill(-1);
   lo = new Int32Array(0);
-  const nearOf = new Int32Array(n).fill(-1);
   const sig = new SignatureReader(indexes, starts2, k, bits);
   let comparedPairs = 0;
   let verifiedPairs = 0;

@@ -192,8 +192,10 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
   for (let g = 0; g < n; g++) if (rep[g] === g && (flags[g]! & KIND_MASK) === KIND_FULL) flags[g] = flags[g]! | PARTICIPANT;
   // The exact stage's arrays are reused: hash halves become band keys and sort buffers.
   const keys = hi;
-  lo = new Int32Array(0); // free the low halves before the band passes
-  const nearOf = new Int32Array(n).fill(-1);
+  // The low halves' buffer becomes the near links: a fresh array here would add 4 bytes per
+  // document until the collector got round to freeing the low halves.
+  const nearOf = new Int32Array(lo.buffer, 0, n).fill(-1);
+  lo = new Int32Array(0);
   const sig = new SignatureReader(indexes, starts, k, bits);
   let comparedPairs = 0;
   let verifiedPairs = 0;
