@@ -4127,11 +4127,26 @@ function recordParser(textField, declaredLanguageField) {
 
 // src/read/source.ts
 import { createReadStream } from "node:fs";
+import { open } from "node:fs/promises";
 import { pipeline } from "node:stream";
 import { createGunzip } from "node:zlib";
 import { Decompress } from "fzstd";
 var READ_CHUNK_BYTES = 256 * 1024;
 var GUNZIP_CHUNK_BYTES = 128 * 1024;
+async function textSizeHint(ref) {
+  if (ref.compression !== "gzip" || ref.open !== void 0 || ref.sizeBytes < 18) return ref.sizeBytes;
+  let handle;
+  try {
+    handle = await open(ref.absPath, "r");
+    const tail = Buffer.alloc(4);
+    const { bytesRead } = await handle.read(tail, 0, 4, ref.sizeBytes - 4);
+    return bytesRead === 4 ? Math.max(tail.readUInt32LE(0), ref.sizeBytes) : ref.sizeBytes;
+  } catch {
+    return ref.sizeBytes;
+  } finally {
+    await handle?.close();
+  }
+}
 async function pumpShard(ref, write, pace) {
   let source;
   try {
@@ -15653,6 +15668,9 @@ var ShardFailure = class extends Error {
 function throwIfFaultInjected(path5) {
   if (process.env.SLUICE_FAULT_SHARD && path5 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
 }
+function workOf(ref) {
+  return ref.textBytesHint ?? ref.sizeBytes;
+}
 function defaultWorkers() {
   return availableParallelism();
 }
@@ -15685,7 +15703,7 @@ function transferablesOf(r) {
   return d ? [d.exact.buffer, d.signatures.buffer, d.stream.buffer] : [];
 }
 async function measureInPool(work, init, entry, workers, onResult, here, started = []) {
-  const shardQueue = work.whole.map((ref, id) => ({ kind: "shard", ref, id })).sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
+  const shardQueue = work.whole.map((ref, id) => ({ kind: "shard", ref, id })).sort((a, b) => workOf(b.ref) - workOf(a.ref) || a.id - b.id);
   const batchQueue = [];
   let producing = work.split.length > 0;
   const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
@@ -15713,7 +15731,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
   if (work.split.length > 0) {
     all.push(
       (async () => {
-        const split = [...work.split].sort((a, b) => b.sizeBytes - a.sizeBytes || (a.path < b.path ? -1 : 1));
+        const split = [...work.split].sort((a, b) => workOf(b) - workOf(a) || (a.path < b.path ? -1 : 1));
         try {
           for (const ref of split) {
             if (failed) break;
@@ -15845,14 +15863,23 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
 // src/core/check.ts
 var CACHE_LOOKUPS_AT_ONCE = 16;
 var WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
-var MIN_SPLIT_BYTES = 4 * 1024 * 1024;
+var MIN_SPLIT_BYTES = 16 * 1024 * 1024;
 var BATCH_CHARS = 1 << 18;
 var BATCHES_IN_FLIGHT_PER_THREAD = 8;
 function shardsToSplit(shards, workers, minBytes = MIN_SPLIT_BYTES) {
   if (workers <= 1) return /* @__PURE__ */ new Set();
-  const total = shards.reduce((n, r) => n + r.sizeBytes, 0);
+  const total = shards.reduce((n, r) => n + workOf(r), 0);
   const limit = Math.max(minBytes, total / (workers * 4));
-  return new Set(shards.filter((r) => r.sizeBytes >= limit));
+  return new Set(shards.filter((r) => workOf(r) >= limit));
+}
+async function withTextHints(refs) {
+  const out = new Array(refs.length);
+  let next = 0;
+  const hint = async () => {
+    for (let i = next++; i < refs.length; i = next++) out[i] = { ...refs[i], textBytesHint: await textSizeHint(refs[i]) };
+  };
+  await Promise.all(Array.from({ length: Math.min(CACHE_LOOKUPS_AT_ONCE, refs.length) }, hint));
+  return out;
 }
 var ConfigError = class extends Error {
   name = "ConfigError";
@@ -15968,10 +15995,11 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     if (cache && key) await cache.put({ ...r, contentId: key });
   };
   const local = todo.filter((r) => r.open !== void 0);
-  const pooled = todo.filter((r) => r.open === void 0);
+  let pooled = todo.filter((r) => r.open === void 0);
   const workers = threadsFor(pooled, opts);
-  const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
   if (workers > 1 && canRunWorkers(opts.workerEntry)) {
+    pooled = await withTextHints(pooled);
+    const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
     const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending = [];
     const plan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
@@ -16476,9 +16504,9 @@ Options for check:
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
       --workers N        worker threads measuring shards (default: the available cores)
-      --split-mb N       with several workers, a shard of at least N MB on disk (and over a quarter
-                         of a worker's share) is read once and measured in batches by all of them
-                         (default 4; the results are the same either way, only the time changes)
+      --split-mb N       with several workers, a shard holding at least N MB of text (and over a
+                         quarter of a worker's share) is read once and measured in batches by all
+                         of them (default 16; the results are the same either way, only the time changes)
       --color / --no-color   force colour on or off (default: on for a terminal, off when NO_COLOR is set)
   -q, --quiet            print only the verdict line
   -h, --help             this text

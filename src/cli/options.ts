@@ -19,9 +19,9 @@ Options for check:
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
       --workers N        worker threads measuring shards (default: the available cores)
-      --split-mb N       with several workers, a shard of at least N MB on disk (and over a quarter
-                         of a worker's share) is read once and measured in batches by all of them
-                         (default 4; the results are the same either way, only the time changes)
+      --split-mb N       with several workers, a shard holding at least N MB of text (and over a
+                         quarter of a worker's share) is read once and measured in batches by all
+                         of them (default 16; the results are the same either way, only the time changes)
       --color / --no-color   force colour on or off (default: on for a terminal, off when NO_COLOR is set)
   -q, --quiet            print only the verdict line
   -h, --help             this text
@@ -41,7 +41,7 @@ export interface CheckCliOptions {
   color: boolean;
   quiet: boolean;
   workers?: number;
-  /** Bytes on disk from which a shard may be split into batches across the workers. */
+  /** Bytes of text (decompressed) from which a shard may be split into batches across the workers. */
   minSplitBytes?: number;
 }
 

@@ -5,7 +5,7 @@ import { buildReport } from '../judge/report.js';
 import type { Report } from '../judge/types.js';
 import { formatProblem, loadPolicy } from '../policy/index.js';
 import type { Policy } from '../policy/types.js';
-import { discoverShards } from '../read/index.js';
+import { discoverShards, textSizeHint } from '../read/index.js';
 import type { Discovery, ShardRef, SkippedFile } from '../read/types.js';
 import { ResultCache } from '../results/cache.js';
 import type { CorpusResult } from '../results/corpus.js';
@@ -14,7 +14,7 @@ import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
 import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
 import { existsSync } from 'node:fs';
-import { canRunWorkers, defaultWorkers, measureInPool, startWorker, throwIfFaultInjected, type StartedWorker, type WorkerInit } from './pool.js';
+import { canRunWorkers, defaultWorkers, measureInPool, startWorker, throwIfFaultInjected, workOf, type StartedWorker, type WorkerInit } from './pool.js';
 
 /** Cache look-ups in flight at once: enough to hide file-system latency, few enough to keep memory flat. */
 const CACHE_LOOKUPS_AT_ONCE = 16;
@@ -22,8 +22,8 @@ const CACHE_LOOKUPS_AT_ONCE = 16;
 /** Compressed bytes of unmeasured shards that justify one more worker thread by default. */
 const WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
 
-/** A shard smaller than this on disk is never split into batches: handing its text across threads would cost more than its tail. */
-const MIN_SPLIT_BYTES = 4 * 1024 * 1024;
+/** A shard holding less text than this is never split into batches: handing its text across threads would cost more than its tail. */
+const MIN_SPLIT_BYTES = 16 * 1024 * 1024;
 
 /**
  * Batches of a split shard: about 256 K characters of text each (some 50 ms of measuring: long enough
@@ -41,9 +41,20 @@ const BATCHES_IN_FLIGHT_PER_THREAD = 8;
  */
 export function shardsToSplit(shards: readonly ShardRef[], workers: number, minBytes = MIN_SPLIT_BYTES): Set<ShardRef> {
   if (workers <= 1) return new Set();
-  const total = shards.reduce((n, r) => n + r.sizeBytes, 0);
+  const total = shards.reduce((n, r) => n + workOf(r), 0);
   const limit = Math.max(minBytes, total / (workers * 4));
-  return new Set(shards.filter((r) => r.sizeBytes >= limit));
+  return new Set(shards.filter((r) => workOf(r) >= limit));
+}
+
+/** Returns the shards with the text each holds estimated from its own metadata (a few bytes read per shard), to share out work. */
+async function withTextHints(refs: readonly ShardRef[]): Promise<ShardRef[]> {
+  const out: ShardRef[] = new Array(refs.length);
+  let next = 0;
+  const hint = async (): Promise<void> => {
+    for (let i = next++; i < refs.length; i = next++) out[i] = { ...refs[i]!, textBytesHint: await textSizeHint(refs[i]!) };
+  };
+  await Promise.all(Array.from({ length: Math.min(CACHE_LOOKUPS_AT_ONCE, refs.length) }, hint));
+  return out;
 }
 
 /** A run that cannot be judged (bad policy, no shards, unreadable root): exit code 2. */
@@ -80,7 +91,7 @@ export interface CheckOptions {
   workers?: number;
   /** The built script workers start from (the front end's own bundle, import.meta.url); without one, shards are measured in this thread. */
   workerEntry?: string | URL;
-  /** Shards at least this large on disk may be split into batches across the workers (default 4 MiB; the tests lower it). */
+  /** Shards holding at least this many bytes of text (decompressed) may be split into batches across the workers (default 16 MiB; the tests lower it). */
   minSplitBytes?: number;
 }
 
@@ -246,10 +257,11 @@ export async function measureShards(
     if (cache && key) await cache.put({ ...r, contentId: key });
   };
   const local = todo.filter((r) => r.open !== undefined);
-  const pooled = todo.filter((r) => r.open === undefined);
+  let pooled = todo.filter((r) => r.open === undefined);
   const workers = threadsFor(pooled, opts);
-  const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
   if (workers > 1 && canRunWorkers(opts.workerEntry)) {
+    pooled = await withTextHints(pooled);
+    const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
     const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending: Promise<void>[] = [];
     const plan: BatchPlan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };

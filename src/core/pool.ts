@@ -46,6 +46,11 @@ export function throwIfFaultInjected(path: string): void {
   if (process.env.SLUICE_FAULT_SHARD && path === process.env.SLUICE_FAULT_SHARD) throw new Error('injected fault (SLUICE_FAULT_SHARD)');
 }
 
+/** Returns the work a shard is expected to be: the bytes it decompresses to when known, else its size on disk. */
+export function workOf(ref: ShardRef): number {
+  return ref.textBytesHint ?? ref.sizeBytes;
+}
+
 /** Returns the default worker count: the cores this process may use. */
 export function defaultWorkers(): number {
   return availableParallelism();
@@ -128,10 +133,11 @@ export async function measureInPool(
   here: HereMeasurer,
   started: StartedWorker[] = [],
 ): Promise<void> {
-  // Largest shards first: the last shard to finish is then a small one, so workers end together.
+  // Largest shards first (by the text they hold: repetitive text compresses far better than other
+  // text, so size on disk misleads): the last shard to finish is then a small one, so workers end together.
   const shardQueue: ShardTask[] = work.whole
     .map((ref, id) => ({ kind: 'shard' as const, ref, id }))
-    .sort((a, b) => b.ref.sizeBytes - a.ref.sizeBytes || a.id - b.id);
+    .sort((a, b) => workOf(b.ref) - workOf(a.ref) || a.id - b.id);
   const batchQueue: BatchTask[] = [];
   let producing = work.split.length > 0;
   const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
@@ -168,7 +174,7 @@ export async function measureInPool(
   if (work.split.length > 0) {
     all.push(
       (async () => {
-        const split = [...work.split].sort((a, b) => b.sizeBytes - a.sizeBytes || (a.path < b.path ? -1 : 1));
+        const split = [...work.split].sort((a, b) => workOf(b) - workOf(a) || (a.path < b.path ? -1 : 1));
         try {
           for (const ref of split) {
             if (failed) break;

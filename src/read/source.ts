@@ -2,6 +2,7 @@
 // corrupt or truncated stream or an I/O error ends the flow with an error value, never
 // a throw; an error thrown by the consumer is the consumer's and is thrown on.
 import { createReadStream } from 'node:fs';
+import { open } from 'node:fs/promises';
 import { pipeline, type Readable } from 'node:stream';
 import { createGunzip } from 'node:zlib';
 import { Decompress } from 'fzstd';
@@ -17,6 +18,27 @@ const GUNZIP_CHUNK_BYTES = 128 * 1024;
 export interface PumpResult {
   compressedBytes: number;
   error?: string;
+}
+
+/**
+ * Returns about how many bytes a shard decompresses to, from what the file itself states, to order and
+ * share out work (never for a figure): a gzip file's trailer gives its last member's size (RFC 1952,
+ * ISIZE: modulo 2^32, so a member over 4 GiB or a multi-member file reads low, and then the size on disk
+ * is taken if larger); anything else, or a file that cannot be read, gives its size on disk.
+ */
+export async function textSizeHint(ref: ShardRef): Promise<number> {
+  if (ref.compression !== 'gzip' || ref.open !== undefined || ref.sizeBytes < 18) return ref.sizeBytes;
+  let handle;
+  try {
+    handle = await open(ref.absPath, 'r');
+    const tail = Buffer.alloc(4);
+    const { bytesRead } = await handle.read(tail, 0, 4, ref.sizeBytes - 4);
+    return bytesRead === 4 ? Math.max(tail.readUInt32LE(0), ref.sizeBytes) : ref.sizeBytes;
+  } catch {
+    return ref.sizeBytes;
+  } finally {
+    await handle?.close();
+  }
 }
 
 /** Called between raw chunks; a promise it returns holds the next read back until it settles (backpressure from a slower consumer). */

@@ -28,6 +28,8 @@ export interface ShardRef {
   subset?: string;
   /** Size on disk (compressed), bytes. */
   sizeBytes: number;
+  /** About how many bytes it decompresses to (see textSizeHint), when known: orders and shares out work, never a figure. */
+  textBytesHint?: number;
   /** Opens the raw (still compressed) bytes; defaults to the file at absPath. Lets other sources (a git blob) be read the same way. */
   open?: () => Readable;
 }
