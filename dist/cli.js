@@ -4972,27 +4972,73 @@ function checkOptions(opts) {
 function duplicateOptionsFrom(rule) {
   return checkOptions({ shingle: rule.near.shingle, hashes: rule.near.hashes, threshold: rule.near.threshold, punctuation: rule.punctuation });
 }
-var Bytes = class {
-  data;
-  length = 0;
-  constructor(capacity) {
-    this.data = new Uint8Array(Math.max(16, capacity));
+var MAX_PAGE_BYTES = 1 << 20;
+var Pages = class {
+  constructor(record, firstRecords) {
+    this.record = record;
+    this.data = new Uint8Array(record * firstRecords);
+    this.nextPage = this.data.length * 2;
   }
-  reserve(extra) {
-    if (this.length + extra <= this.data.length) return;
-    let cap = this.data.length * 2;
-    while (cap < this.length + extra) cap *= 2;
-    const d = new Uint8Array(cap);
-    d.set(this.data.subarray(0, this.length));
-    this.data = d;
+  record;
+  full = [];
+  fullBytes = 0;
+  nextPage;
+  /** The page being written, and the write position in it. */
+  data;
+  at = 0;
+  /** Makes room for `bytes` contiguous bytes at data[at]. */
+  reserve(bytes2) {
+    if (this.at + bytes2 <= this.data.length) return;
+    if (this.at > 0) {
+      this.full.push(this.data.subarray(0, this.at));
+      this.fullBytes += this.at;
+    }
+    const size = Math.max(bytes2, this.record * Math.max(1, Math.floor(Math.min(this.nextPage, MAX_PAGE_BYTES) / this.record)));
+    this.nextPage = Math.min(this.nextPage * 2, MAX_PAGE_BYTES);
+    this.data = new Uint8Array(size);
+    this.at = 0;
+  }
+  /** Bytes written in all. */
+  get length() {
+    return this.fullBytes + this.at;
+  }
+  /** Appends whole records, page by page. */
+  append(src) {
+    for (let from = 0; from < src.length; ) {
+      let room = Math.floor((this.data.length - this.at) / this.record) * this.record;
+      if (room === 0) {
+        this.reserve(this.record);
+        room = Math.floor((this.data.length - this.at) / this.record) * this.record;
+      }
+      const n = Math.min(room, src.length - from);
+      this.data.set(src.subarray(from, from + n), this.at);
+      this.at += n;
+      from += n;
+    }
   }
   varint(v) {
     this.reserve(10);
+    const d = this.data;
     while (v >= 128) {
-      this.data[this.length++] = v % 128 | 128;
+      d[this.at++] = v % 128 | 128;
       v = Math.floor(v / 128);
     }
-    this.data[this.length++] = v;
+    d[this.at++] = v;
+  }
+  /** Copies everything written into `dest` at `offset`. */
+  copyTo(dest, offset) {
+    let at2 = offset;
+    for (const page of this.full) {
+      dest.set(page, at2);
+      at2 += page.length;
+    }
+    dest.set(this.data.subarray(0, this.at), at2);
+  }
+  /** Returns everything written as one array of its own. */
+  toArray() {
+    const out = new Uint8Array(this.length);
+    this.copyTo(out, 0);
+    return out;
   }
 };
 var DuplicateIndexBuilder = class {
@@ -5013,9 +5059,9 @@ var DuplicateIndexBuilder = class {
     this.signatureBits = bitsFor(this.options);
     this.sigBytes = signatureBytes(this.options.hashes, this.signatureBits);
     this.sketcher = new Sketcher(this.options.shingle, this.options.hashes);
-    this.exact = new Bytes(1024 * EXACT_BYTES);
-    this.signatures = new Bytes(1024 * this.sigBytes);
-    this.stream = new Bytes(4096);
+    this.exact = new Pages(EXACT_BYTES, 64);
+    this.signatures = new Pages(this.sigBytes, 64);
+    this.stream = new Pages(1, 256);
   }
   /** Indexes one document; documents must come in increasing ordinal order. */
   add(doc) {
@@ -5039,23 +5085,23 @@ var DuplicateIndexBuilder = class {
     sc.scan(prepared, this.options.punctuation === "strip");
     let kind = KIND_EMPTY;
     if (sc.exactLength > 0) {
-      writeU32(exact.data, exact.length, sc.exactHigh);
-      writeU32(exact.data, exact.length + 4, sc.exactLow);
+      writeU32(exact.data, exact.at, sc.exactHigh);
+      writeU32(exact.data, exact.at + 4, sc.exactLow);
       const count3 = sc.wordCount;
       if (count3 > 0) {
         this.sketcher.sketch(sc.words, count3);
-        packSignature(this.sketcher.values, this.signatureBits, sigs.data, sigs.length);
+        packSignature(this.sketcher.values, this.signatureBits, sigs.data, sigs.at);
         kind = KIND_FULL;
       } else {
-        sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
+        sigs.data.fill(0, sigs.at, sigs.at + this.sigBytes);
         kind = KIND_WORDLESS;
       }
     } else {
-      exact.data.fill(0, exact.length, exact.length + EXACT_BYTES);
-      sigs.data.fill(0, sigs.length, sigs.length + this.sigBytes);
+      exact.data.fill(0, exact.at, exact.at + EXACT_BYTES);
+      sigs.data.fill(0, sigs.at, sigs.at + this.sigBytes);
     }
-    exact.length += EXACT_BYTES;
-    sigs.length += this.sigBytes;
+    exact.at += EXACT_BYTES;
+    sigs.at += this.sigBytes;
     const delta = line - this.lastLine;
     this.lastLine = line;
     this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
@@ -5072,9 +5118,9 @@ var DuplicateIndexBuilder = class {
     return {
       built: this.builtWith(),
       documents: this.documents,
-      exact: this.exact.data.slice(0, this.exact.length),
-      signatures: this.signatures.data.slice(0, this.signatures.length),
-      stream: this.stream.data.slice(0, this.stream.length)
+      exact: this.exact.toArray(),
+      signatures: this.signatures.toArray(),
+      stream: this.stream.toArray()
     };
   }
   /** Appends a part taken from a builder with the same options, as if its documents had been added here one by one. */
@@ -5085,12 +5131,8 @@ var DuplicateIndexBuilder = class {
     if (exact.length !== documents * EXACT_BYTES || signatures.length !== documents * this.sigBytes) {
       throw new RangeError(`DuplicateIndexBuilder: a part of ${documents} documents has ${exact.length} exact and ${signatures.length} signature bytes`);
     }
-    this.exact.reserve(exact.length);
-    this.exact.data.set(exact, this.exact.length);
-    this.exact.length += exact.length;
-    this.signatures.reserve(signatures.length);
-    this.signatures.data.set(signatures, this.signatures.length);
-    this.signatures.length += signatures.length;
+    this.exact.append(exact);
+    this.signatures.append(signatures);
     let at2 = 0;
     let partLine = 0;
     const next = () => {
@@ -5143,11 +5185,11 @@ var DuplicateIndexBuilder = class {
     view.setUint32(16, n, true);
     view.setUint32(20, this.stream.length, true);
     let at2 = HEADER_BYTES;
-    blob.set(this.exact.data.subarray(0, this.exact.length), at2);
+    this.exact.copyTo(blob, at2);
     at2 += this.exact.length;
-    blob.set(this.signatures.data.subarray(0, this.signatures.length), at2);
+    this.signatures.copyTo(blob, at2);
     at2 += this.signatures.length;
-    blob.set(this.stream.data.subarray(0, this.stream.length), at2);
+    this.stream.copyTo(blob, at2);
     view.setUint32(24, checksum32(blob, HEADER_BYTES, total), true);
     return blob;
   }
@@ -5198,6 +5240,15 @@ var DuplicateIndexError = class extends Error {
     this.reason = reason;
   }
 };
+var NEAR_LINK_BASE = -2;
+function linkRep(link, g) {
+  const l = link[g];
+  return l >= 0 ? l : l <= NEAR_LINK_BASE ? g : -1;
+}
+function linkNear(link, g) {
+  const l = link[g];
+  return l <= NEAR_LINK_BASE ? NEAR_LINK_BASE - l : -1;
+}
 var EQUAL_NIBBLES = new Uint8Array(256);
 for (let x = 0; x < 256; x++) EQUAL_NIBBLES[x] = ((x & 15) === 0 ? 1 : 0) + (x >>> 4 === 0 ? 1 : 0);
 function joinDuplicates(shards, opts) {
@@ -5240,56 +5291,57 @@ function joinDuplicates(shards, opts) {
       flags[s.start + i] = kind | newBit;
     });
   });
+  const views = indexes.map((s) => new DataView(s.blob.buffer, s.blob.byteOffset, s.blob.byteLength));
   const hi = new Int32Array(n);
-  let lo = new Int32Array(n);
-  for (const s of indexes) {
-    const view = new DataView(s.blob.buffer, s.blob.byteOffset, s.blob.byteLength);
-    for (let i = 0, at2 = s.layout.exactOffset; i < s.layout.documents; i++, at2 += EXACT_BYTES) {
-      hi[s.start + i] = view.getInt32(at2, true);
-      lo[s.start + i] = view.getInt32(at2 + 4, true);
-    }
-  }
+  indexes.forEach((s, si) => {
+    const view = views[si];
+    for (let i = 0, at2 = s.layout.exactOffset; i < s.layout.documents; i++, at2 += EXACT_BYTES) hi[s.start + i] = view.getInt32(at2, true);
+  });
+  const loOf = (g) => {
+    const si = shardOf(starts2, g);
+    const s = indexes[si];
+    return views[si].getInt32(s.layout.exactOffset + (g - s.start) * EXACT_BYTES + 4, true);
+  };
   const order = new Int32Array(n);
   const scratch3 = new Int32Array(n);
   const counts = new Int32Array(65536);
   radixSort(hi, n, order, scratch3, counts);
-  const rep = new Int32Array(n).fill(-1);
+  const link = new Int32Array(n).fill(-1);
   for (let p = 0; p < n; ) {
     let q = p + 1;
     const h = hi[order[p]];
     while (q < n && hi[order[q]] === h) q++;
-    let run2 = null;
-    for (let x = p + 1; x < q; x++) {
-      if (lo[order[x]] !== lo[order[p]]) {
-        run2 = Array.from(order.subarray(p, q)).sort((a, b) => lo[a] - lo[b] || a - b);
-        break;
-      }
+    let members = order.subarray(p, q);
+    let lows = null;
+    if (q - p > 1) {
+      const l = Array.from(members, loOf);
+      if (l.some((v) => v !== l[0])) {
+        const sorted2 = Array.from(members, (g, x) => [l[x], g]).sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+        members = sorted2.map((e) => e[1]);
+        lows = sorted2.map((e) => e[0]);
+      } else lows = l;
     }
-    const members = run2 ?? order.subarray(p, q);
     for (let x = 0; x < members.length; ) {
       let y = x + 1;
-      const l = lo[members[x]];
-      while (y < members.length && lo[members[y]] === l) y++;
+      if (lows) while (y < members.length && lows[y] === lows[x]) y++;
       let first = -1;
       for (let z = x; z < y; z++) {
         const g = members[z];
         if ((flags[g] & KIND_MASK) === KIND_EMPTY) continue;
         if (first < 0) first = g;
-        rep[g] = first;
+        link[g] = first;
         flags[first] = flags[first] | (flags[g] & IN_NEW_SHARD ? CLASS_HAS_NEW : CLASS_HAS_EXISTING);
       }
       x = y;
     }
     p = q;
   }
-  const workingExact = flags.byteLength + hi.byteLength + lo.byteLength + order.byteLength + scratch3.byteLength + rep.byteLength + counts.byteLength;
+  const workingExact = flags.byteLength + hi.byteLength + order.byteLength + scratch3.byteLength + link.byteLength + counts.byteLength;
   const bufA = hi.buffer;
   const bufB = order.buffer;
   const bufC = scratch3.buffer;
-  for (let g = 0; g < n; g++) if (rep[g] === g && (flags[g] & KIND_MASK) === KIND_FULL) flags[g] = flags[g] | PARTICIPANT;
+  for (let g = 0; g < n; g++) if (link[g] === g && (flags[g] & KIND_MASK) === KIND_FULL) flags[g] = flags[g] | PARTICIPANT;
   const keys = hi;
-  const nearOf = new Int32Array(lo.buffer, 0, n).fill(-1);
-  lo = new Int32Array(0);
   const sig = new SignatureReader(indexes, starts2, k, bits);
   let comparedPairs = 0;
   let verifiedPairs = 0;
@@ -5328,7 +5380,7 @@ function joinDuplicates(shards, opts) {
           verifiedPairs++;
           if (needNear) {
             flags[i] = flags[i] | NEAR;
-            nearOf[i] = j;
+            link[i] = NEAR_LINK_BASE - j;
           }
           if (wantI) flags[i] = flags[i] | NEAR_EXISTING;
           if (wantJ) flags[j] = flags[j] | NEAR_EXISTING;
@@ -5339,16 +5391,16 @@ function joinDuplicates(shards, opts) {
   }
   const workingBytes = Math.max(
     workingExact,
-    flags.byteLength + rep.byteLength + nearOf.byteLength + bufA.byteLength + bufB.byteLength + bufC.byteLength + counts.byteLength
+    flags.byteLength + link.byteLength + bufA.byteLength + bufB.byteLength + bufC.byteLength + counts.byteLength
   );
   const rootOf = new Int32Array(bufA, 0, n);
   const nearSize = new Int32Array(bufB, 0, n).fill(0);
   const exactSize = new Int32Array(bufC, 0, n).fill(0);
   for (let g = 0; g < n; g++) {
-    const r = rep[g];
+    const r = linkRep(link, g);
     if (r >= 0) exactSize[r] = exactSize[r] + 1;
     if (r === g && (flags[g] & KIND_MASK) === KIND_FULL) {
-      const j = nearOf[g];
+      const j = linkNear(link, g);
       rootOf[g] = j < 0 ? g : rootOf[j];
       nearSize[rootOf[g]] = nearSize[rootOf[g]] + 1;
     } else {
@@ -5374,7 +5426,7 @@ function joinDuplicates(shards, opts) {
       const g = s.start + i;
       let lt = perLanguage2.get(language);
       if (!lt) perLanguage2.set(language, lt = tallyOf());
-      const r = rep[g];
+      const r = linkRep(link, g);
       const exact = r >= 0 && r !== g;
       const near = !exact && r === g && (flags[g] & NEAR) !== 0;
       count(st, kind, exact, near);
@@ -5416,7 +5468,7 @@ function joinDuplicates(shards, opts) {
   chosen2.forEach((c, idx) => (c.kind === "exact" ? exactSlot : nearSlot).set(c.first, idx));
   const copies = chosen2.map(() => []);
   for (let g = 0; g < n; g++) {
-    const r = rep[g];
+    const r = linkRep(link, g);
     if (r >= 0 && r !== g) {
       const slot = exactSlot.get(r);
       if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
@@ -5432,7 +5484,7 @@ function joinDuplicates(shards, opts) {
     wanted.add(c.first);
     for (const g of copies[idx]) {
       wanted.add(g);
-      if (c.kind === "near") wanted.add(nearOf[g]);
+      if (c.kind === "near") wanted.add(linkNear(link, g));
     }
   });
   const where2 = locate(indexes, starts2, wanted);
@@ -5443,7 +5495,7 @@ function joinDuplicates(shards, opts) {
     copies: copies[idx].map((g) => {
       const at2 = where2.get(g);
       if (c.kind === "exact") return { ...at2 };
-      const of = nearOf[g];
+      const of = linkNear(link, g);
       return { ...at2, jaccard: round4(sig.jaccard(g, of)), of: where2.get(of) };
     }),
     copiesOmitted: c.size - 1 - copies[idx].length

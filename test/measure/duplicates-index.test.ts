@@ -25,6 +25,7 @@ import {
 } from '../../src/measure/duplicates/index.js';
 import { DocumentScanner, hashWords, prepareText, wordBuffer } from '../../src/measure/duplicates/scan.js';
 import { hashString64 } from '../../src/measure/duplicates/hash.js';
+import { checksum32 } from '../../src/measure/duplicates/format.js';
 
 const OPTS: DuplicateOptions = { shingle: 5, hashes: 128, threshold: 0.8, punctuation: 'keep' };
 
@@ -129,6 +130,32 @@ describe('near duplicates in other scripts and at the edges', () => {
     expect(f.clusters.map((c) => [c.kind, c.first.line, c.copies.map((x) => x.line)])).toEqual([
       ['near', 1, [3]],
       ['near', 2, [4]],
+    ]);
+  });
+
+  it('tells exact hashes apart by their low half when the high halves are equal, across shards', () => {
+    // Exact hashes patched into the blobs (checksum recomputed): documents sharing only the high 32
+    // bits of their hash are not copies; one sharing all 64 bits is, wherever it sits.
+    const texts = (tag: string) => Array.from({ length: 6 }, (_, i) => `${tag} desk note ${i}: the ward office moved the ${i} o'clock briefing to the river hall.`);
+    const a = index(texts('first'));
+    const b = index(texts('second'));
+    const patch = (blob: Uint8Array, doc: number, hi: number, lo: number): void => {
+      const view = new DataView(blob.buffer, blob.byteOffset, blob.byteLength);
+      view.setInt32(32 + doc * 8, hi, true);
+      view.setInt32(32 + doc * 8 + 4, lo, true);
+      view.setUint32(24, checksum32(blob, 32, blob.length), true);
+    };
+    patch(a, 0, 0x1234567, 11);
+    patch(a, 2, 0x1234567, -5); // same high half, another low half
+    patch(b, 1, 0x1234567, 11); // the same 64 bits as the first shard's document 0
+    patch(b, 3, 0x1234567, 2 ** 31 - 1);
+    patch(b, 5, 0x1234567, -5); // the same 64 bits as the first shard's document 2
+    const f = joinDuplicates([{ shard: 'a.jsonl', index: a }, { shard: 'b.jsonl', index: b }], OPTS);
+    expect(f.exactDocs).toBe(2);
+    const exact = f.clusters.filter((c) => c.kind === 'exact').map((c) => [c.first.shard, c.first.line, c.copies.map((x) => `${x.shard}:${x.line}`)]);
+    expect(exact).toEqual([
+      ['a.jsonl', 1, ['b.jsonl:2']],
+      ['a.jsonl', 3, ['b.jsonl:6']],
     ]);
   });
 

@@ -18,10 +18,12 @@
 //   duplicate. (Connected components of all verified pairs would chain documents through
 //   intermediates, A ~ B ~ C with A ≁ C, and cluster sizes would no longer add up to the count.)
 //
-// Memory: the join keeps, per document, 4 bytes (exact class) + 4 (earlier match) + 1 (flags)
-// + 12 for the band passes (key, sort order, sort scratch; the exact stage's hash halves before
-// them): 21 bytes per document beyond the input blobs (74 bytes per document at the defaults),
-// so 10 million documents need ~0.9 GiB in all. Band keys are computed one band at a
+// Memory: the join keeps, per document, 1 byte of flags and 4 of links (its exact class's first
+// document, or for such a first document the earlier one it is a near copy of), and 12 bytes of
+// working arrays: the high hash halves, sort order and sort scratch in the exact stage (low halves
+// are read from the blobs, only within runs of equal high halves); band key, order and scratch in
+// the band passes; tree roots and cluster sizes after them. 17 bytes per document beyond the
+// input blobs (74 bytes per document at the defaults) in every stage. Band keys are computed one band at a
 // time and grouped by a radix sort rather than kept in maps. Work is bounded by
 // maxBucketComparisons per document per band; buckets larger than that are counted in
 // statistics.cappedBuckets.
@@ -86,6 +88,25 @@ interface ShardIndex {
 }
 
 // Number of equal 4-bit values in a byte of XORed signatures (0, 1 or 2).
+/**
+ * One link per document, in one array: -1 for an empty document; for an exact copy, the first
+ * document of its class (an earlier id); for a first document, its own id, or, once it is found to
+ * be a near copy of an earlier document j, NEAR_LINK_BASE − j (≤ −2).
+ */
+const NEAR_LINK_BASE = -2;
+
+/** Returns the first document of g's exact class, or -1 for an empty document. */
+function linkRep(link: Int32Array, g: number): number {
+  const l = link[g]!;
+  return l >= 0 ? l : l <= NEAR_LINK_BASE ? g : -1;
+}
+
+/** Returns the earlier document g is a near copy of, or -1. */
+function linkNear(link: Int32Array, g: number): number {
+  const l = link[g]!;
+  return l <= NEAR_LINK_BASE ? NEAR_LINK_BASE - l : -1;
+}
+
 const EQUAL_NIBBLES = new Uint8Array(256);
 for (let x = 0; x < 256; x++) EQUAL_NIBBLES[x] = ((x & 15) === 0 ? 1 : 0) + ((x >>> 4) === 0 ? 1 : 0);
 
@@ -137,50 +158,56 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
   });
 
   // Exact classes: sort documents by their 64-bit hash, the first of each run is the class.
+  const views = indexes.map((s) => new DataView(s.blob.buffer, s.blob.byteOffset, s.blob.byteLength));
   const hi = new Int32Array(n);
-  let lo = new Int32Array(n);
-  for (const s of indexes) {
-    const view = new DataView(s.blob.buffer, s.blob.byteOffset, s.blob.byteLength);
-    for (let i = 0, at = s.layout.exactOffset; i < s.layout.documents; i++, at += EXACT_BYTES) {
-      hi[s.start + i] = view.getInt32(at, true);
-      lo[s.start + i] = view.getInt32(at + 4, true);
-    }
-  }
+  indexes.forEach((s, si) => {
+    const view = views[si]!;
+    for (let i = 0, at = s.layout.exactOffset; i < s.layout.documents; i++, at += EXACT_BYTES) hi[s.start + i] = view.getInt32(at, true);
+  });
+  /** The low half of document g's exact hash, read from its shard's blob. */
+  const loOf = (g: number): number => {
+    const si = shardOf(starts, g);
+    const s = indexes[si]!;
+    return views[si]!.getInt32(s.layout.exactOffset + (g - s.start) * EXACT_BYTES + 4, true);
+  };
   const order = new Int32Array(n);
   const scratch = new Int32Array(n);
   const counts = new Int32Array(65536);
   radixSort(hi, n, order, scratch, counts);
-  const rep = new Int32Array(n).fill(-1);
+  // Links (see linkRep, linkNear): -1 for a document outside both stages (empty), else its exact
+  // class's first document; the band passes later turn a first document's own id into its near link.
+  const link = new Int32Array(n).fill(-1);
   for (let p = 0; p < n; ) {
     let q = p + 1;
     const h = hi[order[p]!]!;
     while (q < n && hi[order[q]!]! === h) q++;
     // Within a run of equal high halves, group by the low half, keeping corpus order.
-    let run: number[] | null = null;
-    for (let x = p + 1; x < q; x++) {
-      if (lo[order[x]!]! !== lo[order[p]!]!) {
-        run = Array.from(order.subarray(p, q)).sort((a, b) => lo[a]! - lo[b]! || a - b);
-        break;
-      }
+    let members: ArrayLike<number> = order.subarray(p, q);
+    let lows: ArrayLike<number> | null = null;
+    if (q - p > 1) {
+      const l = Array.from(members, loOf);
+      if (l.some((v) => v !== l[0])) {
+        const sorted = Array.from(members, (g, x) => [l[x]!, g] as const).sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+        members = sorted.map((e) => e[1]);
+        lows = sorted.map((e) => e[0]);
+      } else lows = l;
     }
-    const members = run ?? order.subarray(p, q);
     for (let x = 0; x < members.length; ) {
       let y = x + 1;
-      const l = lo[members[x]!]!;
-      while (y < members.length && lo[members[y]!]! === l) y++;
+      if (lows) while (y < members.length && lows[y] === lows[x]) y++;
       let first = -1;
       for (let z = x; z < y; z++) {
         const g = members[z]!;
         if ((flags[g]! & KIND_MASK) === KIND_EMPTY) continue;
         if (first < 0) first = g;
-        rep[g] = first;
+        link[g] = first;
         flags[first] = flags[first]! | (flags[g]! & IN_NEW_SHARD ? CLASS_HAS_NEW : CLASS_HAS_EXISTING);
       }
       x = y;
     }
     p = q;
   }
-  const workingExact = flags.byteLength + hi.byteLength + lo.byteLength + order.byteLength + scratch.byteLength + rep.byteLength + counts.byteLength;
+  const workingExact = flags.byteLength + hi.byteLength + order.byteLength + scratch.byteLength + link.byteLength + counts.byteLength;
   // Three n-sized buffers live on after the exact stage: band keys, then cluster bookkeeping.
   const bufA = hi.buffer;
   const bufB = order.buffer;
@@ -189,13 +216,9 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
   // Near detection over the first document of each exact class that has words. Band keys are
   // kept for every document (0 for the others, never 0 for participants), so sort positions are
   // global ids and no list of participants is needed.
-  for (let g = 0; g < n; g++) if (rep[g] === g && (flags[g]! & KIND_MASK) === KIND_FULL) flags[g] = flags[g]! | PARTICIPANT;
+  for (let g = 0; g < n; g++) if (link[g] === g && (flags[g]! & KIND_MASK) === KIND_FULL) flags[g] = flags[g]! | PARTICIPANT;
   // The exact stage's arrays are reused: hash halves become band keys and sort buffers.
   const keys = hi;
-  // The low halves' buffer becomes the near links: a fresh array here would add 4 bytes per
-  // document until the collector got round to freeing the low halves.
-  const nearOf = new Int32Array(lo.buffer, 0, n).fill(-1);
-  lo = new Int32Array(0);
   const sig = new SignatureReader(indexes, starts, k, bits);
   let comparedPairs = 0;
   let verifiedPairs = 0;
@@ -234,7 +257,7 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
           verifiedPairs++;
           if (needNear) {
             flags[i] = flags[i]! | NEAR;
-            nearOf[i] = j;
+            link[i] = NEAR_LINK_BASE - j;
           }
           if (wantI) flags[i] = flags[i]! | NEAR_EXISTING;
           if (wantJ) flags[j] = flags[j]! | NEAR_EXISTING;
@@ -245,7 +268,7 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
   }
   const workingBytes = Math.max(
     workingExact,
-    flags.byteLength + rep.byteLength + nearOf.byteLength + bufA.byteLength + bufB.byteLength + bufC.byteLength + counts.byteLength,
+    flags.byteLength + link.byteLength + bufA.byteLength + bufB.byteLength + bufC.byteLength + counts.byteLength,
   );
 
   // Roots of the near trees (links always point earlier, so one forward pass), then sizes.
@@ -253,10 +276,10 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
   const nearSize = new Int32Array(bufB, 0, n).fill(0);
   const exactSize = new Int32Array(bufC, 0, n).fill(0);
   for (let g = 0; g < n; g++) {
-    const r = rep[g]!;
+    const r = linkRep(link, g);
     if (r >= 0) exactSize[r] = exactSize[r]! + 1;
     if (r === g && (flags[g]! & KIND_MASK) === KIND_FULL) {
-      const j = nearOf[g]!;
+      const j = linkNear(link, g);
       rootOf[g] = j < 0 ? g : rootOf[j]!;
       nearSize[rootOf[g]!] = nearSize[rootOf[g]!]! + 1;
     } else {
@@ -286,7 +309,7 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
       const g = s.start + i;
       let lt = perLanguage.get(language);
       if (!lt) perLanguage.set(language, (lt = tallyOf()));
-      const r = rep[g]!;
+      const r = linkRep(link, g);
       const exact = r >= 0 && r !== g;
       const near = !exact && r === g && (flags[g]! & NEAR) !== 0;
       count(st, kind, exact, near);
@@ -330,7 +353,7 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
   chosen.forEach((c, idx) => (c.kind === 'exact' ? exactSlot : nearSlot).set(c.first, idx));
   const copies: number[][] = chosen.map(() => []);
   for (let g = 0; g < n; g++) {
-    const r = rep[g]!;
+    const r = linkRep(link, g);
     if (r >= 0 && r !== g) {
       const slot = exactSlot.get(r);
       if (slot !== undefined && copies[slot]!.length < maxCopies) copies[slot]!.push(g);
@@ -346,7 +369,7 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
     wanted.add(c.first);
     for (const g of copies[idx]!) {
       wanted.add(g);
-      if (c.kind === 'near') wanted.add(nearOf[g]!);
+      if (c.kind === 'near') wanted.add(linkNear(link, g));
     }
   });
   const where = locate(indexes, starts, wanted);
@@ -357,7 +380,7 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
     copies: copies[idx]!.map((g): DuplicateCopy => {
       const at = where.get(g)!;
       if (c.kind === 'exact') return { ...at };
-      const of = nearOf[g]!;
+      const of = linkNear(link, g);
       return { ...at, jaccard: round4(sig.jaccard(g, of)), of: where.get(of)! };
     }),
     copiesOmitted: c.size - 1 - copies[idx]!.length,
