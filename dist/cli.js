@@ -15915,7 +15915,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
 // src/core/check.ts
 var CACHE_LOOKUPS_AT_ONCE = 16;
 var WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
-var MIN_SPLIT_BYTES = 16 * 1024 * 1024;
+var MIN_SPLIT_BYTES = 4 * 1024 * 1024;
 var BATCH_CHARS = 1 << 18;
 var BATCHES_IN_FLIGHT_PER_THREAD = 8;
 function shardsToSplit(shards, workers, minBytes = MIN_SPLIT_BYTES) {
@@ -16558,7 +16558,7 @@ Options for check:
       --workers N        worker threads measuring shards (default: the available cores)
       --split-mb N       with several workers, a shard holding at least N MB of text (and over a
                          quarter of a worker's share) is read once and measured in batches by all
-                         of them (default 16; the results are the same either way, only the time changes)
+                         of them (default 4; the results are the same either way, only the time changes)
       --color / --no-color   force colour on or off (default: on for a terminal, off when NO_COLOR is set)
   -q, --quiet            print only the verdict line
   -h, --help             this text

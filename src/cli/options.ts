@@ -21,7 +21,7 @@ Options for check:
       --workers N        worker threads measuring shards (default: the available cores)
       --split-mb N       with several workers, a shard holding at least N MB of text (and over a
                          quarter of a worker's share) is read once and measured in batches by all
-                         of them (default 16; the results are the same either way, only the time changes)
+                         of them (default 4; the results are the same either way, only the time changes)
       --color / --no-color   force colour on or off (default: on for a terminal, off when NO_COLOR is set)
   -q, --quiet            print only the verdict line
   -h, --help             this text
