@@ -4240,10 +4240,10 @@ async function drain(stream, body, pace) {
       if (error instanceof StopSignal) return void 0;
       throw error;
     }
-    const wait = pace?.();
-    if (wait !== void 0) {
+    if (pace) {
       try {
-        await wait;
+        const wait = pace();
+        if (wait !== void 0) await wait;
       } catch (error) {
         stream.destroy();
         throw error;

@@ -154,10 +154,10 @@ async function drain(stream: Readable, body: (chunk: Buffer) => void, pace?: Pac
       if (error instanceof StopSignal) return undefined;
       throw error;
     }
-    const wait = pace?.();
-    if (wait !== undefined) {
+    if (pace) {
       try {
-        await wait;
+        const wait = pace();
+        if (wait !== undefined) await wait;
       } catch (error) {
         stream.destroy();
         throw error;

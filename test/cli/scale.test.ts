@@ -17,8 +17,8 @@ beforeAll(() => {
 }, 120_000);
 
 describe('worker threads', () => {
-  it('give a byte-identical report with 1 and 3 workers (timing aside)', () => {
-    const pooled = sluice(['check', POLICY, '--no-cache', '--workers', '3'], { json: true });
+  it('give a byte-identical report with 1 and 4 workers (timing aside)', () => {
+    const pooled = sluice(['check', POLICY, '--no-cache', '--workers', '4'], { json: true });
     expect(pooled.status).toBe(1);
     expect(comparable(pooled.report!)).toBe(comparable(single));
   });
@@ -64,7 +64,7 @@ describe('one large shard', () => {
   it('is measured in batches across workers, with the report of one worker (timing aside)', () => {
     const one = sluice(['check', POLICY, '--root', root, '--no-cache', '--workers', '1'], { json: true });
     expect(one.report!.input.shards).toBe(1);
-    const split = sluice(['check', POLICY, '--root', root, '--no-cache', '--workers', '3', '--split-mb', '0'], { json: true });
+    const split = sluice(['check', POLICY, '--root', root, '--no-cache', '--workers', '4', '--split-mb', '0'], { json: true });
     expect(split.status).toBe(one.status);
     expect(comparable(split.report!)).toBe(comparable(one.report!));
     // The same documents as the demo's shards one by one: the split lost nothing.
