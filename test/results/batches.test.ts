@@ -4,6 +4,10 @@
 // the demo corpus (invented newsroom data with mojibake, romanised Hindi, duplicates and a
 // leaked evaluation item), with batches of one document and of a few thousand characters,
 // settling in a shuffled order as results from other threads do.
+import { mkdtempSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { gunzipSync } from 'node:zlib';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { prepareAnalyzers, type PreparedAnalyzers } from '../../src/core/analyzers.js';
 import { DuplicateIndexBuilder } from '../../src/measure/duplicates/index.js';
@@ -97,6 +101,44 @@ describe('a shard measured in batches', () => {
     await bothWays(undefined, 2500, wrap);
     const one = await scanShard(shards[0]!, prepared.scan, wrap(prepared.analyzers));
     expect(one.read.broken?.message).toContain('poisoned document');
+  });
+
+  it('gives it on a shard cut short and on a plain-text shard of paragraphs', async () => {
+    const prepared = await prepareAnalyzers(policy);
+    const dir = mkdtempSync(join(tmpdir(), 'sluice-batches-'));
+    const big = shards.reduce((a, b) => (a.sizeBytes >= b.sizeBytes ? a : b));
+    const bytes = readFileSync(big.absPath);
+    // The gzip stream cut at 70 %: the reader counts what came before the break and marks the shard broken.
+    const cut = join(dir, 'cut.jsonl.gz');
+    writeFileSync(cut, bytes.subarray(0, Math.floor(bytes.length * 0.7)));
+    // The same stories as plain text, a paragraph each, with a line that is not valid UTF-8 among them.
+    const stories = gunzipSync(bytes)
+      .toString('utf8')
+      .split('\n')
+      .flatMap((l) => {
+        try {
+          const text = (JSON.parse(l) as { text?: unknown }).text;
+          return typeof text === 'string' && text.trim() ? [text.replace(/\s*\n\s*/g, ' ')] : [];
+        } catch {
+          return []; // the demo's planted broken lines
+        }
+      });
+    const txt = join(dir, 'stories.txt');
+    writeFileSync(txt, Buffer.concat([Buffer.from(stories.slice(0, 20).join('\n\n') + '\n\n'), Buffer.from([0xc3, 0x28, 0x0a]), Buffer.from(stories.slice(20).join('\n\n'))]));
+    const refs: ShardRef[] = [
+      { ...big, path: 'cut.jsonl.gz', absPath: cut, sizeBytes: statSync(cut).size },
+      { ...big, path: 'stories.txt', absPath: txt, format: 'txt', compression: 'none', sizeBytes: statSync(txt).size },
+    ];
+    for (const [i, ref] of refs.entries()) {
+      const one = await scanShard(ref, prepared.scan, prepared.analyzers);
+      const batched = await scanShardInBatches(ref, prepared.scan, prepared.analyzers, shuffledMeasurer(prepared, prepared.analyzers, 40 + i), { batchChars: 3000, inFlight: 4 });
+      expect(comparable(batched), ref.path).toBe(comparable(one));
+    }
+    const cutResult = await scanShard(refs[0]!, prepared.scan, prepared.analyzers);
+    expect(cutResult.read.broken).toBeDefined();
+    const txtResult = await scanShard(refs[1]!, prepared.scan, prepared.analyzers);
+    expect(txtResult.read.rejected.byReason['invalid-encoding']).toBe(1);
+    expect(txtResult.read.docs).toBe(stories.length);
   });
 
   it('rejects, instead of leaving documents out, when a batch is lost (a thread died)', async () => {
