@@ -374,6 +374,7 @@ for (const c of sluiceCases) {
   const note = c.cache === 'warm' ? `${runs.warm.report.timing.cacheHits} of ${manifest.shards.length} shards from cache` : c.note;
   row(c.name, corpusMb, runs[c.key].seconds, { cpuSeconds: runs[c.key].cpuSeconds, run: runs[c.key], all: allSeconds[c.key], note: rounds > 1 ? `${note}; best of ${rounds}` : note });
 }
+let partBytesPerDoc = NaN;
 // Many runners, simulated one after another on this machine: each `scan --partition i/2` is
 // what one runner would do; the wall time of two runners is the slower part, then `merge`.
 {
@@ -390,6 +391,7 @@ for (const c of sluiceCases) {
   const merged = await runCli(['merge', ...parts, '--policy', policies.full, '--json', mergeReport, '--quiet', '--no-color'], 'merge');
   if (merged.code !== 0 && merged.code !== 1) throw new Error(`merge exited with ${merged.code}:\n${merged.stderr}`);
   const slower = Math.max(...scans.map((r) => r.seconds));
+  partBytesPerDoc = parts.reduce((n, f) => n + statSync(f).size, 0) / manifest.docs;
   row('(e) full check on 2 runners: slower scan --partition + merge', corpusMb, slower + merged.seconds, {
     cpuSeconds: scans.reduce((n, r) => n + r.cpuSeconds, 0) + merged.cpuSeconds,
     note: `scans ${scans.map((r) => r.seconds.toFixed(2)).join(' s, ')} s; merge ${merged.seconds.toFixed(2)} s`,
@@ -489,6 +491,9 @@ console.log(
     `(decoded from the cache files; the report itself does not give it).`,
 );
 console.log(
+  `Partial results (scan --partition): ${partBytesPerDoc.toFixed(0)} bytes per document in the two part files together: what the runners upload and the merging job downloads (the duplicate index as base64 inside JSON, and each shard's tallies).`,
+);
+console.log(
   `Full report: verdict ${fullReport.verdict} (exit ${runs.full.exitCode}): ${runs.full.headline}; ` +
     `exact duplicates ${(dup.exactRate * 100).toFixed(1)} %, near ${(dup.nearRate * 100).toFixed(1)} % (the UDHR part repeats by construction); ` +
     `contamination ${fullReport.contamination?.docs ?? 0} documents (${manifest.leakedEvalItems} evaluation items planted).`,
@@ -510,6 +515,7 @@ writeFileSync(
       startup: { wallSeconds: startup.seconds, cpuSeconds: startup.cpuSeconds, maxRssKb: startup.maxRssKb },
       breakdown,
       cache: footprint,
+      partialBytesPerDocument: partBytesPerDoc,
       timing: Object.fromEntries(Object.entries(runs).map(([k, r]) => [k, { wallSeconds: r.seconds, cpuSeconds: r.cpuSeconds, allRoundsSeconds: allSeconds[k], maxRssKb: r.maxRssKb, reportTiming: r.report.timing }])),
     },
     null,
