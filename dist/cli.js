@@ -1488,9 +1488,6 @@ function findDuplicates(doc, node, path5, pos, out) {
   }
 }
 
-// src/policy/schema-check.ts
-import { Ajv2020 } from "ajv/dist/2020.js";
-
 // schemas/policy.schema.json
 var policy_schema_default = {
   $schema: "https://json-schema.org/draft/2020-12/schema",
@@ -1888,6 +1885,2039 @@ var policy_schema_default = {
   }
 };
 
+// src/policy/policy-validator.generated.ts
+import runtime_ucs2length from "ajv/dist/runtime/ucs2length.js";
+import runtime_equal from "ajv/dist/runtime/equal.js";
+var pick = (m) => typeof m === "function" ? m : m.default;
+var validate = validate20;
+var schema31 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "title": "sluice policy", "description": "What a corpus must satisfy to merge: where its shards are, which languages it holds, and the rules a pull request is judged by. Keys are kebab-case.", "type": "object", "additionalProperties": false, "required": ["version", "corpus", "languages"], "properties": { "version": { "description": "Policy format version. This sluice reads version 1; a higher number means the policy was written for a newer sluice.", "type": "integer", "const": 1 }, "name": { "description": "Name shown in reports. Default: the policy file name without its extension.", "type": "string", "minLength": 1 }, "root": { "description": "Directory all globs and files are relative to, itself relative to the policy file's directory. Default: the nearest directory above the policy file that holds a `.git` entry, else the policy file's directory.", "type": "string", "minLength": 1 }, "corpus": { "description": "Where the shards are and how to read them.", "type": "object", "additionalProperties": false, "required": ["include"], "properties": { "include": { "description": "Glob or list of globs (relative to root) matching the shards: .jsonl, .txt, optionally .gz or .zst compressed.", "type": ["string", "array"], "minLength": 1, "minItems": 1, "items": { "type": "string", "minLength": 1 }, "examples": [["data/**/*.jsonl.gz"]] }, "exclude": { "description": "Glob or list of globs (relative to root) of files to leave out even when `include` matches them.", "type": ["string", "array"], "minLength": 1, "items": { "type": "string", "minLength": 1 }, "default": [] }, "text": { "description": "Dot path of the text field in JSONL records, e.g. `text` or `meta.body`.", "type": "string", "minLength": 1, "default": "text" }, "declared-language": { "description": "Dot path of a field in JSONL records that declares the document's language, when the shards carry one; it is compared with the detected language.", "type": "string", "minLength": 1 }, "subset": { "description": "Pattern with exactly one `{subset}` placeholder that names a shard's subset from its path, e.g. `data/{subset}/**`.", "type": "string", "minLength": 1, "examples": ["data/{subset}/**"] }, "encodings": { "description": "Shards not in UTF-8: glob (relative to root) \u2192 encoding name as iconv-lite knows it (e.g. `windows-1256`). A shard that matches several globs takes the first, in the order written.", "type": "object", "additionalProperties": { "type": "string", "minLength": 1 }, "default": {} }, "max-line-bytes": { "description": "Lines longer than this many bytes (after decompression) are rejected without being buffered. Default 8 MiB.", "type": "integer", "minimum": 1, "default": 8388608 } } }, "languages": { "description": "The languages the corpus is meant to hold, keyed by ISO 639-1 (`hi`), ISO 639-3 (`hin`) or BCP 47 (`hi-IN`, `sr-Latn`) codes. `other` and `und` are reserved for text in unlisted languages and text too short to label.", "type": "object", "minProperties": 1, "additionalProperties": { "$ref": "#/$defs/language" }, "examples": [{ "hin": { "scripts": ["Devanagari"], "target": 0.4 }, "eng": { "scripts": ["Latin"], "target": 0.6 } }] }, "detection": { "description": "Language identification settings.", "type": "object", "additionalProperties": false, "properties": { "min-chars": { "description": "Texts with fewer letters than this are labelled `und` (too short to judge). Default 20.", "type": "integer", "minimum": 0, "default": 20 } } }, "tokenizer": { "$ref": "#/$defs/tokenizer", "description": "The model's tokenizer: token counts for the mix and fertility are measured with it. Either `builtin` or `file`." }, "baseline": { "$ref": "#/$defs/tokenizer", "description": "A second tokenizer to compare fertility against (e.g. the one in use before a vocabulary change). Either `builtin` or `file`." }, "sampling": { "description": "Judge a deterministic sample of documents (picked by document hash) instead of all of them. Either `docs-per-shard` or `fraction`.", "type": "object", "additionalProperties": false, "minProperties": 1, "properties": { "docs-per-shard": { "description": "At most this many documents from each shard.", "type": "integer", "minimum": 1 }, "fraction": { "description": "This share of each shard's documents, in (0, 1].", "type": "number", "exclusiveMinimum": 0, "maximum": 1 } }, "dependentSchemas": { "docs-per-shard": { "properties": { "fraction": false } } } }, "rules": { "description": "What the corpus is judged by. `input` is always judged; the other rules only when listed.", "type": "object", "additionalProperties": false, "properties": { "input": { "description": "Input that could not be read: rejected lines and broken shards. Always judged, because a report over broken shards is incomplete.", "type": "object", "additionalProperties": false, "properties": { "max-rejected": { "description": "Highest share of input lines that may be rejected (invalid JSON, bad encoding, missing text field, ...). No limit when absent; rejections are still counted and reported.", "$ref": "#/$defs/share" }, "max-broken-shards": { "description": "How many shards may be unreadable or broken (corrupt or truncated compression). Default 0.", "type": "integer", "minimum": 0, "default": 0 } } }, "mix": { "description": "Each language's share of the corpus against its `target`. Needs at least one language with a `target`.", "type": "object", "additionalProperties": false, "properties": { "unit": { "description": "What a share is counted in. Default `tokens` when a tokenizer is set, else `words` (UAX #29 word boundaries).", "enum": ["docs", "bytes", "chars", "words", "tokens"] }, "tolerance": { "description": "Allowed absolute distance between a language's share and its target (0.03 = 3 points). Default 0.03.", "$ref": "#/$defs/share", "default": 0.03 }, "max-other": { "description": "Highest share of text in languages the policy does not list (`other`).", "$ref": "#/$defs/share" }, "max-und": { "description": "Highest share of text too short or unclear to label (`und`).", "$ref": "#/$defs/share" } } }, "script": { "description": "Script purity: the share of a document's letters that are in its language's own scripts.", "type": "object", "additionalProperties": false, "properties": { "min-purity": { "description": "A document whose purity is below this is impure. Default 0.9.", "$ref": "#/$defs/share", "default": 0.9 }, "max-impure-docs": { "description": "Highest share of impure documents, per language. Default 0.02.", "$ref": "#/$defs/share", "default": 0.02 } } }, "encoding": { "description": "Encoding anomalies in the text: replacement characters, control characters, bidirectional controls, zero-width characters, private-use characters, mojibake.", "type": "object", "additionalProperties": false, "properties": { "max-anomalous-docs": { "description": "Highest share of documents with any forbidden anomaly. Default 0.", "$ref": "#/$defs/share", "default": 0 }, "forbid": { "description": "Anomaly kinds that make a document anomalous. Default: replacement-char, control-chars, bidi-controls, mojibake. `zero-width` is not in the default because joiners are part of correct spelling in several scripts.", "type": "array", "uniqueItems": true, "items": { "enum": ["replacement-char", "control-chars", "bidi-controls", "zero-width", "private-use", "mojibake"] }, "default": ["replacement-char", "control-chars", "bidi-controls", "mojibake"] } } }, "fertility": { "description": "Tokenizer fertility (subword tokens per word) and the share of continued words (words split into two or more tokens), per language. Needs `tokenizer`.", "type": "object", "additionalProperties": false, "properties": { "max": { "description": "Per language key (as written under `languages`): highest running-text fertility.", "type": "object", "additionalProperties": { "type": "number", "exclusiveMinimum": 0 }, "default": {} }, "max-regression": { "description": "Highest relative rise of fertility against the base branch or the baseline tokenizer (0.03 = 3 %).", "type": "number", "minimum": 0 }, "max-continued": { "description": "Per language key: highest share of continued words.", "type": "object", "additionalProperties": { "$ref": "#/$defs/share" }, "default": {} }, "word-lists": { "description": "Per language key: a word list (one entry a line, or a hunspell .dic), relative to root, for dictionary fertility.", "type": "object", "additionalProperties": { "type": "string", "minLength": 1 }, "default": {} } } }, "duplicates": { "description": "Exact duplicates (hash of normalized text) and near duplicates (MinHash estimate of the Jaccard similarity of word shingles).", "type": "object", "additionalProperties": false, "properties": { "max-exact": { "description": "Highest share of documents that exactly repeat an earlier one.", "$ref": "#/$defs/share" }, "near": { "description": "Near-duplicate detection settings.", "type": "object", "additionalProperties": false, "properties": { "threshold": { "description": "Estimated Jaccard similarity at or above which two documents are near duplicates, in (0, 1). Default 0.8.", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.8 }, "max": { "description": "Highest share of documents that nearly repeat another.", "$ref": "#/$defs/share" }, "shingle": { "description": "Words per shingle. Default 5.", "type": "integer", "minimum": 1, "default": 5 }, "hashes": { "description": "MinHash functions per document, 16 to 1024. Default 128. The estimate's standard error is sqrt(J(1-J)/k) for k hashes: below 16 it is too coarse to judge a threshold (common practice), and above 1024 the cost grows with little gain.", "type": "integer", "minimum": 16, "maximum": 1024, "default": 128 } } }, "punctuation": { "description": "Exact-duplicate normalization: keep punctuation (default) or strip it before hashing.", "enum": ["keep", "strip"], "default": "keep" } } }, "contamination": { "description": "Training documents that contain text of an evaluation item (n-gram overlap).", "type": "object", "additionalProperties": false, "required": ["eval"], "properties": { "eval": { "description": "Glob or list of globs (relative to root) matching the evaluation sets (.jsonl or .txt).", "type": ["string", "array"], "minLength": 1, "minItems": 1, "items": { "type": "string", "minLength": 1 } }, "ngram": { "description": "Words per n-gram; a document sharing any n-gram with an evaluation item is contaminated. Default 13, the length used for the overlap test in Brown et al. (2020).", "type": "integer", "minimum": 1, "default": 13 }, "max-docs": { "description": "Highest number of contaminated documents. Default 0.", "type": "integer", "minimum": 0, "default": 0 } } } } }, "severity": { "description": "Per rule: `error` blocks the merge, `warn` only reports. A rule not listed is `error`.", "type": "object", "additionalProperties": false, "properties": { "input": { "$ref": "#/$defs/severity" }, "mix": { "$ref": "#/$defs/severity" }, "script": { "$ref": "#/$defs/severity" }, "encoding": { "$ref": "#/$defs/severity" }, "fertility": { "$ref": "#/$defs/severity" }, "duplicates": { "$ref": "#/$defs/severity" }, "contamination": { "$ref": "#/$defs/severity" } } } }, "$defs": { "share": { "description": "A share, from 0 to 1 (0.02 = 2 %).", "type": "number", "minimum": 0, "maximum": 1 }, "severity": { "description": "`error` blocks the merge; `warn` only reports.", "enum": ["error", "warn"], "default": "error" }, "language": { "description": "One language of the corpus. An entry with nothing after the colon takes the defaults.", "type": ["object", "null"], "additionalProperties": false, "properties": { "scripts": { "description": "Unicode scripts that count as this language's own, as Script property names (`Devanagari`) or ISO 15924 codes (`Deva`). Optional for common languages and for BCP 47 keys with a script subtag (`sr-Latn`).", "type": "array", "minItems": 1, "uniqueItems": true, "items": { "type": "string", "minLength": 1 }, "examples": [["Devanagari"], ["Han", "Hiragana", "Katakana"]] }, "target": { "description": "Target share of the mix, 0 to 1 (0.40 = 40 %). Targets of all languages sum to at most 1.", "$ref": "#/$defs/share" } } }, "tokenizer": { "type": "object", "additionalProperties": false, "minProperties": 1, "properties": { "builtin": { "description": "An encoding shipped with sluice (from js-tiktoken).", "enum": ["gpt2", "r50k_base", "p50k_base", "cl100k_base", "o200k_base"] }, "file": { "description": "A tokenizer file relative to root: a Hugging Face `tokenizer.json`, or tiktoken ranks (`.tiktoken`: base64 token and rank per line).", "type": "string", "minLength": 1 }, "format": { "description": "Format of `file`. Default: from the file name (`.json` \u2192 tokenizer.json, `.tiktoken` \u2192 tiktoken).", "enum": ["tokenizer.json", "tiktoken"] }, "pattern": { "description": "For tiktoken rank files, which carry no pre-tokenization pattern: the builtin whose pattern to use (e.g. `cl100k_base`), or a JavaScript regular expression (Unicode mode).", "type": "string", "minLength": 1 } }, "dependentRequired": { "format": ["file"], "pattern": ["file"] }, "dependentSchemas": { "builtin": { "properties": { "file": false } } } } } };
+var schema34 = { "type": "object", "additionalProperties": false, "minProperties": 1, "properties": { "builtin": { "description": "An encoding shipped with sluice (from js-tiktoken).", "enum": ["gpt2", "r50k_base", "p50k_base", "cl100k_base", "o200k_base"] }, "file": { "description": "A tokenizer file relative to root: a Hugging Face `tokenizer.json`, or tiktoken ranks (`.tiktoken`: base64 token and rank per line).", "type": "string", "minLength": 1 }, "format": { "description": "Format of `file`. Default: from the file name (`.json` \u2192 tokenizer.json, `.tiktoken` \u2192 tiktoken).", "enum": ["tokenizer.json", "tiktoken"] }, "pattern": { "description": "For tiktoken rank files, which carry no pre-tokenization pattern: the builtin whose pattern to use (e.g. `cl100k_base`), or a JavaScript regular expression (Unicode mode).", "type": "string", "minLength": 1 } }, "dependentRequired": { "format": ["file"], "pattern": ["file"] }, "dependentSchemas": { "builtin": { "properties": { "file": false } } } };
+var schema33 = { "description": "A share, from 0 to 1 (0.02 = 2 %).", "type": "number", "minimum": 0, "maximum": 1 };
+var schema46 = { "description": "`error` blocks the merge; `warn` only reports.", "enum": ["error", "warn"], "default": "error" };
+var func1 = Object.prototype.hasOwnProperty;
+var func2 = pick(runtime_ucs2length);
+var func0 = pick(runtime_equal);
+var schema32 = { "description": "One language of the corpus. An entry with nothing after the colon takes the defaults.", "type": ["object", "null"], "additionalProperties": false, "properties": { "scripts": { "description": "Unicode scripts that count as this language's own, as Script property names (`Devanagari`) or ISO 15924 codes (`Deva`). Optional for common languages and for BCP 47 keys with a script subtag (`sr-Latn`).", "type": "array", "minItems": 1, "uniqueItems": true, "items": { "type": "string", "minLength": 1 }, "examples": [["Devanagari"], ["Han", "Hiragana", "Katakana"]] }, "target": { "description": "Target share of the mix, 0 to 1 (0.40 = 40 %). Targets of all languages sum to at most 1.", "$ref": "#/$defs/share" } } };
+function validate21(data2, { instancePath = "", parentData, parentDataProperty, rootData = data2, dynamicAnchors = {} } = {}) {
+  let vErrors = null;
+  let errors = 0;
+  const evaluated0 = validate21.evaluated;
+  if (evaluated0.dynamicProps) {
+    evaluated0.props = void 0;
+  }
+  if (evaluated0.dynamicItems) {
+    evaluated0.items = void 0;
+  }
+  if (!(data2 && typeof data2 == "object" && !Array.isArray(data2)) && data2 !== null) {
+    const err0 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: schema32.type }, message: "must be object,null", schema: schema32.type, parentSchema: schema32, data: data2 };
+    if (vErrors === null) {
+      vErrors = [err0];
+    } else {
+      vErrors.push(err0);
+    }
+    errors++;
+  }
+  if (data2 && typeof data2 == "object" && !Array.isArray(data2)) {
+    for (const key0 in data2) {
+      if (!(key0 === "scripts" || key0 === "target")) {
+        const err1 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema32, data: data2 };
+        if (vErrors === null) {
+          vErrors = [err1];
+        } else {
+          vErrors.push(err1);
+        }
+        errors++;
+      }
+    }
+    if (data2.scripts !== void 0) {
+      let data0 = data2.scripts;
+      if (Array.isArray(data0)) {
+        if (data0.length < 1) {
+          const err2 = { instancePath: instancePath + "/scripts", schemaPath: "#/properties/scripts/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema32.properties.scripts, data: data0 };
+          if (vErrors === null) {
+            vErrors = [err2];
+          } else {
+            vErrors.push(err2);
+          }
+          errors++;
+        }
+        const len0 = data0.length;
+        for (let i0 = 0; i0 < len0; i0++) {
+          let data1 = data0[i0];
+          if (typeof data1 === "string") {
+            if (func2(data1) < 1) {
+              const err3 = { instancePath: instancePath + "/scripts/" + i0, schemaPath: "#/properties/scripts/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema32.properties.scripts.items, data: data1 };
+              if (vErrors === null) {
+                vErrors = [err3];
+              } else {
+                vErrors.push(err3);
+              }
+              errors++;
+            }
+          } else {
+            const err4 = { instancePath: instancePath + "/scripts/" + i0, schemaPath: "#/properties/scripts/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema32.properties.scripts.items.type, parentSchema: schema32.properties.scripts.items, data: data1 };
+            if (vErrors === null) {
+              vErrors = [err4];
+            } else {
+              vErrors.push(err4);
+            }
+            errors++;
+          }
+        }
+        let i1 = data0.length;
+        let j0;
+        if (i1 > 1) {
+          const indices0 = {};
+          for (; i1--; ) {
+            let item0 = data0[i1];
+            if (typeof item0 !== "string") {
+              continue;
+            }
+            if (typeof indices0[item0] == "number") {
+              j0 = indices0[item0];
+              const err5 = { instancePath: instancePath + "/scripts", schemaPath: "#/properties/scripts/uniqueItems", keyword: "uniqueItems", params: { i: i1, j: j0 }, message: "must NOT have duplicate items (items ## " + j0 + " and " + i1 + " are identical)", schema: true, parentSchema: schema32.properties.scripts, data: data0 };
+              if (vErrors === null) {
+                vErrors = [err5];
+              } else {
+                vErrors.push(err5);
+              }
+              errors++;
+              break;
+            }
+            indices0[item0] = i1;
+          }
+        }
+      } else {
+        const err6 = { instancePath: instancePath + "/scripts", schemaPath: "#/properties/scripts/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema32.properties.scripts.type, parentSchema: schema32.properties.scripts, data: data0 };
+        if (vErrors === null) {
+          vErrors = [err6];
+        } else {
+          vErrors.push(err6);
+        }
+        errors++;
+      }
+    }
+    if (data2.target !== void 0) {
+      let data22 = data2.target;
+      if (typeof data22 == "number" && isFinite(data22)) {
+        if (data22 > 1 || isNaN(data22)) {
+          const err7 = { instancePath: instancePath + "/target", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data22 };
+          if (vErrors === null) {
+            vErrors = [err7];
+          } else {
+            vErrors.push(err7);
+          }
+          errors++;
+        }
+        if (data22 < 0 || isNaN(data22)) {
+          const err8 = { instancePath: instancePath + "/target", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data22 };
+          if (vErrors === null) {
+            vErrors = [err8];
+          } else {
+            vErrors.push(err8);
+          }
+          errors++;
+        }
+      } else {
+        const err9 = { instancePath: instancePath + "/target", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data22 };
+        if (vErrors === null) {
+          vErrors = [err9];
+        } else {
+          vErrors.push(err9);
+        }
+        errors++;
+      }
+    }
+  }
+  validate21.errors = vErrors;
+  return errors === 0;
+}
+validate21.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+function validate20(data2, { instancePath = "", parentData, parentDataProperty, rootData = data2, dynamicAnchors = {} } = {}) {
+  let vErrors = null;
+  let errors = 0;
+  const evaluated0 = validate20.evaluated;
+  if (evaluated0.dynamicProps) {
+    evaluated0.props = void 0;
+  }
+  if (evaluated0.dynamicItems) {
+    evaluated0.items = void 0;
+  }
+  if (data2 && typeof data2 == "object" && !Array.isArray(data2)) {
+    if (data2.version === void 0) {
+      const err0 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "version" }, message: "must have required property 'version'", schema: schema31.required, parentSchema: schema31, data: data2 };
+      if (vErrors === null) {
+        vErrors = [err0];
+      } else {
+        vErrors.push(err0);
+      }
+      errors++;
+    }
+    if (data2.corpus === void 0) {
+      const err1 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "corpus" }, message: "must have required property 'corpus'", schema: schema31.required, parentSchema: schema31, data: data2 };
+      if (vErrors === null) {
+        vErrors = [err1];
+      } else {
+        vErrors.push(err1);
+      }
+      errors++;
+    }
+    if (data2.languages === void 0) {
+      const err2 = { instancePath, schemaPath: "#/required", keyword: "required", params: { missingProperty: "languages" }, message: "must have required property 'languages'", schema: schema31.required, parentSchema: schema31, data: data2 };
+      if (vErrors === null) {
+        vErrors = [err2];
+      } else {
+        vErrors.push(err2);
+      }
+      errors++;
+    }
+    for (const key0 in data2) {
+      if (!func1.call(schema31.properties, key0)) {
+        const err3 = { instancePath, schemaPath: "#/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key0 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31, data: data2 };
+        if (vErrors === null) {
+          vErrors = [err3];
+        } else {
+          vErrors.push(err3);
+        }
+        errors++;
+      }
+    }
+    if (data2.version !== void 0) {
+      let data0 = data2.version;
+      if (!(typeof data0 == "number" && (!(data0 % 1) && !isNaN(data0)) && isFinite(data0))) {
+        const err4 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.version.type, parentSchema: schema31.properties.version, data: data0 };
+        if (vErrors === null) {
+          vErrors = [err4];
+        } else {
+          vErrors.push(err4);
+        }
+        errors++;
+      }
+      if (1 !== data0) {
+        const err5 = { instancePath: instancePath + "/version", schemaPath: "#/properties/version/const", keyword: "const", params: { allowedValue: 1 }, message: "must be equal to constant", schema: 1, parentSchema: schema31.properties.version, data: data0 };
+        if (vErrors === null) {
+          vErrors = [err5];
+        } else {
+          vErrors.push(err5);
+        }
+        errors++;
+      }
+    }
+    if (data2.name !== void 0) {
+      let data1 = data2.name;
+      if (typeof data1 === "string") {
+        if (func2(data1) < 1) {
+          const err6 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.name, data: data1 };
+          if (vErrors === null) {
+            vErrors = [err6];
+          } else {
+            vErrors.push(err6);
+          }
+          errors++;
+        }
+      } else {
+        const err7 = { instancePath: instancePath + "/name", schemaPath: "#/properties/name/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.name.type, parentSchema: schema31.properties.name, data: data1 };
+        if (vErrors === null) {
+          vErrors = [err7];
+        } else {
+          vErrors.push(err7);
+        }
+        errors++;
+      }
+    }
+    if (data2.root !== void 0) {
+      let data22 = data2.root;
+      if (typeof data22 === "string") {
+        if (func2(data22) < 1) {
+          const err8 = { instancePath: instancePath + "/root", schemaPath: "#/properties/root/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.root, data: data22 };
+          if (vErrors === null) {
+            vErrors = [err8];
+          } else {
+            vErrors.push(err8);
+          }
+          errors++;
+        }
+      } else {
+        const err9 = { instancePath: instancePath + "/root", schemaPath: "#/properties/root/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.root.type, parentSchema: schema31.properties.root, data: data22 };
+        if (vErrors === null) {
+          vErrors = [err9];
+        } else {
+          vErrors.push(err9);
+        }
+        errors++;
+      }
+    }
+    if (data2.corpus !== void 0) {
+      let data3 = data2.corpus;
+      if (data3 && typeof data3 == "object" && !Array.isArray(data3)) {
+        if (data3.include === void 0) {
+          const err10 = { instancePath: instancePath + "/corpus", schemaPath: "#/properties/corpus/required", keyword: "required", params: { missingProperty: "include" }, message: "must have required property 'include'", schema: schema31.properties.corpus.required, parentSchema: schema31.properties.corpus, data: data3 };
+          if (vErrors === null) {
+            vErrors = [err10];
+          } else {
+            vErrors.push(err10);
+          }
+          errors++;
+        }
+        for (const key1 in data3) {
+          if (!(key1 === "include" || key1 === "exclude" || key1 === "text" || key1 === "declared-language" || key1 === "subset" || key1 === "encodings" || key1 === "max-line-bytes")) {
+            const err11 = { instancePath: instancePath + "/corpus", schemaPath: "#/properties/corpus/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key1 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.corpus, data: data3 };
+            if (vErrors === null) {
+              vErrors = [err11];
+            } else {
+              vErrors.push(err11);
+            }
+            errors++;
+          }
+        }
+        if (data3.include !== void 0) {
+          let data4 = data3.include;
+          if (typeof data4 !== "string" && !Array.isArray(data4)) {
+            const err12 = { instancePath: instancePath + "/corpus/include", schemaPath: "#/properties/corpus/properties/include/type", keyword: "type", params: { type: schema31.properties.corpus.properties.include.type }, message: "must be string,array", schema: schema31.properties.corpus.properties.include.type, parentSchema: schema31.properties.corpus.properties.include, data: data4 };
+            if (vErrors === null) {
+              vErrors = [err12];
+            } else {
+              vErrors.push(err12);
+            }
+            errors++;
+          }
+          if (typeof data4 === "string") {
+            if (func2(data4) < 1) {
+              const err13 = { instancePath: instancePath + "/corpus/include", schemaPath: "#/properties/corpus/properties/include/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.corpus.properties.include, data: data4 };
+              if (vErrors === null) {
+                vErrors = [err13];
+              } else {
+                vErrors.push(err13);
+              }
+              errors++;
+            }
+          }
+          if (Array.isArray(data4)) {
+            if (data4.length < 1) {
+              const err14 = { instancePath: instancePath + "/corpus/include", schemaPath: "#/properties/corpus/properties/include/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema31.properties.corpus.properties.include, data: data4 };
+              if (vErrors === null) {
+                vErrors = [err14];
+              } else {
+                vErrors.push(err14);
+              }
+              errors++;
+            }
+            const len0 = data4.length;
+            for (let i0 = 0; i0 < len0; i0++) {
+              let data5 = data4[i0];
+              if (typeof data5 === "string") {
+                if (func2(data5) < 1) {
+                  const err15 = { instancePath: instancePath + "/corpus/include/" + i0, schemaPath: "#/properties/corpus/properties/include/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.corpus.properties.include.items, data: data5 };
+                  if (vErrors === null) {
+                    vErrors = [err15];
+                  } else {
+                    vErrors.push(err15);
+                  }
+                  errors++;
+                }
+              } else {
+                const err16 = { instancePath: instancePath + "/corpus/include/" + i0, schemaPath: "#/properties/corpus/properties/include/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.corpus.properties.include.items.type, parentSchema: schema31.properties.corpus.properties.include.items, data: data5 };
+                if (vErrors === null) {
+                  vErrors = [err16];
+                } else {
+                  vErrors.push(err16);
+                }
+                errors++;
+              }
+            }
+          }
+        }
+        if (data3.exclude !== void 0) {
+          let data6 = data3.exclude;
+          if (typeof data6 !== "string" && !Array.isArray(data6)) {
+            const err17 = { instancePath: instancePath + "/corpus/exclude", schemaPath: "#/properties/corpus/properties/exclude/type", keyword: "type", params: { type: schema31.properties.corpus.properties.exclude.type }, message: "must be string,array", schema: schema31.properties.corpus.properties.exclude.type, parentSchema: schema31.properties.corpus.properties.exclude, data: data6 };
+            if (vErrors === null) {
+              vErrors = [err17];
+            } else {
+              vErrors.push(err17);
+            }
+            errors++;
+          }
+          if (typeof data6 === "string") {
+            if (func2(data6) < 1) {
+              const err18 = { instancePath: instancePath + "/corpus/exclude", schemaPath: "#/properties/corpus/properties/exclude/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.corpus.properties.exclude, data: data6 };
+              if (vErrors === null) {
+                vErrors = [err18];
+              } else {
+                vErrors.push(err18);
+              }
+              errors++;
+            }
+          }
+          if (Array.isArray(data6)) {
+            const len1 = data6.length;
+            for (let i1 = 0; i1 < len1; i1++) {
+              let data7 = data6[i1];
+              if (typeof data7 === "string") {
+                if (func2(data7) < 1) {
+                  const err19 = { instancePath: instancePath + "/corpus/exclude/" + i1, schemaPath: "#/properties/corpus/properties/exclude/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.corpus.properties.exclude.items, data: data7 };
+                  if (vErrors === null) {
+                    vErrors = [err19];
+                  } else {
+                    vErrors.push(err19);
+                  }
+                  errors++;
+                }
+              } else {
+                const err20 = { instancePath: instancePath + "/corpus/exclude/" + i1, schemaPath: "#/properties/corpus/properties/exclude/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.corpus.properties.exclude.items.type, parentSchema: schema31.properties.corpus.properties.exclude.items, data: data7 };
+                if (vErrors === null) {
+                  vErrors = [err20];
+                } else {
+                  vErrors.push(err20);
+                }
+                errors++;
+              }
+            }
+          }
+        }
+        if (data3.text !== void 0) {
+          let data8 = data3.text;
+          if (typeof data8 === "string") {
+            if (func2(data8) < 1) {
+              const err21 = { instancePath: instancePath + "/corpus/text", schemaPath: "#/properties/corpus/properties/text/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.corpus.properties.text, data: data8 };
+              if (vErrors === null) {
+                vErrors = [err21];
+              } else {
+                vErrors.push(err21);
+              }
+              errors++;
+            }
+          } else {
+            const err22 = { instancePath: instancePath + "/corpus/text", schemaPath: "#/properties/corpus/properties/text/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.corpus.properties.text.type, parentSchema: schema31.properties.corpus.properties.text, data: data8 };
+            if (vErrors === null) {
+              vErrors = [err22];
+            } else {
+              vErrors.push(err22);
+            }
+            errors++;
+          }
+        }
+        if (data3["declared-language"] !== void 0) {
+          let data9 = data3["declared-language"];
+          if (typeof data9 === "string") {
+            if (func2(data9) < 1) {
+              const err23 = { instancePath: instancePath + "/corpus/declared-language", schemaPath: "#/properties/corpus/properties/declared-language/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.corpus.properties["declared-language"], data: data9 };
+              if (vErrors === null) {
+                vErrors = [err23];
+              } else {
+                vErrors.push(err23);
+              }
+              errors++;
+            }
+          } else {
+            const err24 = { instancePath: instancePath + "/corpus/declared-language", schemaPath: "#/properties/corpus/properties/declared-language/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.corpus.properties["declared-language"].type, parentSchema: schema31.properties.corpus.properties["declared-language"], data: data9 };
+            if (vErrors === null) {
+              vErrors = [err24];
+            } else {
+              vErrors.push(err24);
+            }
+            errors++;
+          }
+        }
+        if (data3.subset !== void 0) {
+          let data10 = data3.subset;
+          if (typeof data10 === "string") {
+            if (func2(data10) < 1) {
+              const err25 = { instancePath: instancePath + "/corpus/subset", schemaPath: "#/properties/corpus/properties/subset/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.corpus.properties.subset, data: data10 };
+              if (vErrors === null) {
+                vErrors = [err25];
+              } else {
+                vErrors.push(err25);
+              }
+              errors++;
+            }
+          } else {
+            const err26 = { instancePath: instancePath + "/corpus/subset", schemaPath: "#/properties/corpus/properties/subset/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.corpus.properties.subset.type, parentSchema: schema31.properties.corpus.properties.subset, data: data10 };
+            if (vErrors === null) {
+              vErrors = [err26];
+            } else {
+              vErrors.push(err26);
+            }
+            errors++;
+          }
+        }
+        if (data3.encodings !== void 0) {
+          let data11 = data3.encodings;
+          if (data11 && typeof data11 == "object" && !Array.isArray(data11)) {
+            for (const key2 in data11) {
+              let data12 = data11[key2];
+              if (typeof data12 === "string") {
+                if (func2(data12) < 1) {
+                  const err27 = { instancePath: instancePath + "/corpus/encodings/" + key2.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/properties/corpus/properties/encodings/additionalProperties/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.corpus.properties.encodings.additionalProperties, data: data12 };
+                  if (vErrors === null) {
+                    vErrors = [err27];
+                  } else {
+                    vErrors.push(err27);
+                  }
+                  errors++;
+                }
+              } else {
+                const err28 = { instancePath: instancePath + "/corpus/encodings/" + key2.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/properties/corpus/properties/encodings/additionalProperties/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.corpus.properties.encodings.additionalProperties.type, parentSchema: schema31.properties.corpus.properties.encodings.additionalProperties, data: data12 };
+                if (vErrors === null) {
+                  vErrors = [err28];
+                } else {
+                  vErrors.push(err28);
+                }
+                errors++;
+              }
+            }
+          } else {
+            const err29 = { instancePath: instancePath + "/corpus/encodings", schemaPath: "#/properties/corpus/properties/encodings/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.corpus.properties.encodings.type, parentSchema: schema31.properties.corpus.properties.encodings, data: data11 };
+            if (vErrors === null) {
+              vErrors = [err29];
+            } else {
+              vErrors.push(err29);
+            }
+            errors++;
+          }
+        }
+        if (data3["max-line-bytes"] !== void 0) {
+          let data13 = data3["max-line-bytes"];
+          if (!(typeof data13 == "number" && (!(data13 % 1) && !isNaN(data13)) && isFinite(data13))) {
+            const err30 = { instancePath: instancePath + "/corpus/max-line-bytes", schemaPath: "#/properties/corpus/properties/max-line-bytes/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.corpus.properties["max-line-bytes"].type, parentSchema: schema31.properties.corpus.properties["max-line-bytes"], data: data13 };
+            if (vErrors === null) {
+              vErrors = [err30];
+            } else {
+              vErrors.push(err30);
+            }
+            errors++;
+          }
+          if (typeof data13 == "number" && isFinite(data13)) {
+            if (data13 < 1 || isNaN(data13)) {
+              const err31 = { instancePath: instancePath + "/corpus/max-line-bytes", schemaPath: "#/properties/corpus/properties/max-line-bytes/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.corpus.properties["max-line-bytes"], data: data13 };
+              if (vErrors === null) {
+                vErrors = [err31];
+              } else {
+                vErrors.push(err31);
+              }
+              errors++;
+            }
+          }
+        }
+      } else {
+        const err32 = { instancePath: instancePath + "/corpus", schemaPath: "#/properties/corpus/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.corpus.type, parentSchema: schema31.properties.corpus, data: data3 };
+        if (vErrors === null) {
+          vErrors = [err32];
+        } else {
+          vErrors.push(err32);
+        }
+        errors++;
+      }
+    }
+    if (data2.languages !== void 0) {
+      let data14 = data2.languages;
+      if (data14 && typeof data14 == "object" && !Array.isArray(data14)) {
+        if (Object.keys(data14).length < 1) {
+          const err33 = { instancePath: instancePath + "/languages", schemaPath: "#/properties/languages/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema31.properties.languages, data: data14 };
+          if (vErrors === null) {
+            vErrors = [err33];
+          } else {
+            vErrors.push(err33);
+          }
+          errors++;
+        }
+        for (const key3 in data14) {
+          if (!validate21(data14[key3], { instancePath: instancePath + "/languages/" + key3.replace(/~/g, "~0").replace(/\//g, "~1"), parentData: data14, parentDataProperty: key3, rootData, dynamicAnchors })) {
+            vErrors = vErrors === null ? validate21.errors : vErrors.concat(validate21.errors);
+            errors = vErrors.length;
+          }
+        }
+      } else {
+        const err34 = { instancePath: instancePath + "/languages", schemaPath: "#/properties/languages/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.languages.type, parentSchema: schema31.properties.languages, data: data14 };
+        if (vErrors === null) {
+          vErrors = [err34];
+        } else {
+          vErrors.push(err34);
+        }
+        errors++;
+      }
+    }
+    if (data2.detection !== void 0) {
+      let data16 = data2.detection;
+      if (data16 && typeof data16 == "object" && !Array.isArray(data16)) {
+        for (const key4 in data16) {
+          if (!(key4 === "min-chars")) {
+            const err35 = { instancePath: instancePath + "/detection", schemaPath: "#/properties/detection/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key4 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.detection, data: data16 };
+            if (vErrors === null) {
+              vErrors = [err35];
+            } else {
+              vErrors.push(err35);
+            }
+            errors++;
+          }
+        }
+        if (data16["min-chars"] !== void 0) {
+          let data17 = data16["min-chars"];
+          if (!(typeof data17 == "number" && (!(data17 % 1) && !isNaN(data17)) && isFinite(data17))) {
+            const err36 = { instancePath: instancePath + "/detection/min-chars", schemaPath: "#/properties/detection/properties/min-chars/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.detection.properties["min-chars"].type, parentSchema: schema31.properties.detection.properties["min-chars"], data: data17 };
+            if (vErrors === null) {
+              vErrors = [err36];
+            } else {
+              vErrors.push(err36);
+            }
+            errors++;
+          }
+          if (typeof data17 == "number" && isFinite(data17)) {
+            if (data17 < 0 || isNaN(data17)) {
+              const err37 = { instancePath: instancePath + "/detection/min-chars", schemaPath: "#/properties/detection/properties/min-chars/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema31.properties.detection.properties["min-chars"], data: data17 };
+              if (vErrors === null) {
+                vErrors = [err37];
+              } else {
+                vErrors.push(err37);
+              }
+              errors++;
+            }
+          }
+        }
+      } else {
+        const err38 = { instancePath: instancePath + "/detection", schemaPath: "#/properties/detection/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.detection.type, parentSchema: schema31.properties.detection, data: data16 };
+        if (vErrors === null) {
+          vErrors = [err38];
+        } else {
+          vErrors.push(err38);
+        }
+        errors++;
+      }
+    }
+    if (data2.tokenizer !== void 0) {
+      let data18 = data2.tokenizer;
+      if (data18 && typeof data18 == "object" && !Array.isArray(data18)) {
+        if (Object.keys(data18).length < 1) {
+          const err39 = { instancePath: instancePath + "/tokenizer", schemaPath: "#/$defs/tokenizer/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema34, data: data18 };
+          if (vErrors === null) {
+            vErrors = [err39];
+          } else {
+            vErrors.push(err39);
+          }
+          errors++;
+        }
+        for (const key5 in data18) {
+          if (!(key5 === "builtin" || key5 === "file" || key5 === "format" || key5 === "pattern")) {
+            const err40 = { instancePath: instancePath + "/tokenizer", schemaPath: "#/$defs/tokenizer/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key5 }, message: "must NOT have additional properties", schema: false, parentSchema: schema34, data: data18 };
+            if (vErrors === null) {
+              vErrors = [err40];
+            } else {
+              vErrors.push(err40);
+            }
+            errors++;
+          }
+        }
+        if (data18.builtin !== void 0) {
+          let data19 = data18.builtin;
+          if (!(data19 === "gpt2" || data19 === "r50k_base" || data19 === "p50k_base" || data19 === "cl100k_base" || data19 === "o200k_base")) {
+            const err41 = { instancePath: instancePath + "/tokenizer/builtin", schemaPath: "#/$defs/tokenizer/properties/builtin/enum", keyword: "enum", params: { allowedValues: schema34.properties.builtin.enum }, message: "must be equal to one of the allowed values", schema: schema34.properties.builtin.enum, parentSchema: schema34.properties.builtin, data: data19 };
+            if (vErrors === null) {
+              vErrors = [err41];
+            } else {
+              vErrors.push(err41);
+            }
+            errors++;
+          }
+        }
+        if (data18.file !== void 0) {
+          let data20 = data18.file;
+          if (typeof data20 === "string") {
+            if (func2(data20) < 1) {
+              const err42 = { instancePath: instancePath + "/tokenizer/file", schemaPath: "#/$defs/tokenizer/properties/file/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema34.properties.file, data: data20 };
+              if (vErrors === null) {
+                vErrors = [err42];
+              } else {
+                vErrors.push(err42);
+              }
+              errors++;
+            }
+          } else {
+            const err43 = { instancePath: instancePath + "/tokenizer/file", schemaPath: "#/$defs/tokenizer/properties/file/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema34.properties.file.type, parentSchema: schema34.properties.file, data: data20 };
+            if (vErrors === null) {
+              vErrors = [err43];
+            } else {
+              vErrors.push(err43);
+            }
+            errors++;
+          }
+        }
+        if (data18.format !== void 0) {
+          let data21 = data18.format;
+          if (!(data21 === "tokenizer.json" || data21 === "tiktoken")) {
+            const err44 = { instancePath: instancePath + "/tokenizer/format", schemaPath: "#/$defs/tokenizer/properties/format/enum", keyword: "enum", params: { allowedValues: schema34.properties.format.enum }, message: "must be equal to one of the allowed values", schema: schema34.properties.format.enum, parentSchema: schema34.properties.format, data: data21 };
+            if (vErrors === null) {
+              vErrors = [err44];
+            } else {
+              vErrors.push(err44);
+            }
+            errors++;
+          }
+        }
+        if (data18.pattern !== void 0) {
+          let data22 = data18.pattern;
+          if (typeof data22 === "string") {
+            if (func2(data22) < 1) {
+              const err45 = { instancePath: instancePath + "/tokenizer/pattern", schemaPath: "#/$defs/tokenizer/properties/pattern/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema34.properties.pattern, data: data22 };
+              if (vErrors === null) {
+                vErrors = [err45];
+              } else {
+                vErrors.push(err45);
+              }
+              errors++;
+            }
+          } else {
+            const err46 = { instancePath: instancePath + "/tokenizer/pattern", schemaPath: "#/$defs/tokenizer/properties/pattern/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema34.properties.pattern.type, parentSchema: schema34.properties.pattern, data: data22 };
+            if (vErrors === null) {
+              vErrors = [err46];
+            } else {
+              vErrors.push(err46);
+            }
+            errors++;
+          }
+        }
+        if (data18.format !== void 0) {
+          if (data18.file === void 0) {
+            const err47 = { instancePath: instancePath + "/tokenizer", schemaPath: "#/$defs/tokenizer/dependentRequired", keyword: "dependentRequired", params: {
+              property: "format",
+              missingProperty: "file",
+              depsCount: 1,
+              deps: "file"
+            }, message: "must have property file when property format is present", schema: schema34.dependentRequired, parentSchema: schema34, data: data18 };
+            if (vErrors === null) {
+              vErrors = [err47];
+            } else {
+              vErrors.push(err47);
+            }
+            errors++;
+          }
+        }
+        if (data18.pattern !== void 0) {
+          if (data18.file === void 0) {
+            const err48 = { instancePath: instancePath + "/tokenizer", schemaPath: "#/$defs/tokenizer/dependentRequired", keyword: "dependentRequired", params: {
+              property: "pattern",
+              missingProperty: "file",
+              depsCount: 1,
+              deps: "file"
+            }, message: "must have property file when property pattern is present", schema: schema34.dependentRequired, parentSchema: schema34, data: data18 };
+            if (vErrors === null) {
+              vErrors = [err48];
+            } else {
+              vErrors.push(err48);
+            }
+            errors++;
+          }
+        }
+        if (data18.builtin !== void 0) {
+          if (data18 && typeof data18 == "object" && !Array.isArray(data18)) {
+            if (data18.file !== void 0) {
+              const err49 = { instancePath: instancePath + "/tokenizer/file", schemaPath: "#/$defs/tokenizer/dependentSchemas/builtin/properties/file/false schema", keyword: "false schema", params: {}, message: "boolean schema is false", schema: false, parentSchema: schema34.dependentSchemas.builtin.properties.file, data: data18.file };
+              if (vErrors === null) {
+                vErrors = [err49];
+              } else {
+                vErrors.push(err49);
+              }
+              errors++;
+            }
+          }
+        }
+      } else {
+        const err50 = { instancePath: instancePath + "/tokenizer", schemaPath: "#/$defs/tokenizer/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema34.type, parentSchema: schema34, data: data18 };
+        if (vErrors === null) {
+          vErrors = [err50];
+        } else {
+          vErrors.push(err50);
+        }
+        errors++;
+      }
+    }
+    if (data2.baseline !== void 0) {
+      let data24 = data2.baseline;
+      if (data24 && typeof data24 == "object" && !Array.isArray(data24)) {
+        if (Object.keys(data24).length < 1) {
+          const err51 = { instancePath: instancePath + "/baseline", schemaPath: "#/$defs/tokenizer/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema34, data: data24 };
+          if (vErrors === null) {
+            vErrors = [err51];
+          } else {
+            vErrors.push(err51);
+          }
+          errors++;
+        }
+        for (const key6 in data24) {
+          if (!(key6 === "builtin" || key6 === "file" || key6 === "format" || key6 === "pattern")) {
+            const err52 = { instancePath: instancePath + "/baseline", schemaPath: "#/$defs/tokenizer/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key6 }, message: "must NOT have additional properties", schema: false, parentSchema: schema34, data: data24 };
+            if (vErrors === null) {
+              vErrors = [err52];
+            } else {
+              vErrors.push(err52);
+            }
+            errors++;
+          }
+        }
+        if (data24.builtin !== void 0) {
+          let data25 = data24.builtin;
+          if (!(data25 === "gpt2" || data25 === "r50k_base" || data25 === "p50k_base" || data25 === "cl100k_base" || data25 === "o200k_base")) {
+            const err53 = { instancePath: instancePath + "/baseline/builtin", schemaPath: "#/$defs/tokenizer/properties/builtin/enum", keyword: "enum", params: { allowedValues: schema34.properties.builtin.enum }, message: "must be equal to one of the allowed values", schema: schema34.properties.builtin.enum, parentSchema: schema34.properties.builtin, data: data25 };
+            if (vErrors === null) {
+              vErrors = [err53];
+            } else {
+              vErrors.push(err53);
+            }
+            errors++;
+          }
+        }
+        if (data24.file !== void 0) {
+          let data26 = data24.file;
+          if (typeof data26 === "string") {
+            if (func2(data26) < 1) {
+              const err54 = { instancePath: instancePath + "/baseline/file", schemaPath: "#/$defs/tokenizer/properties/file/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema34.properties.file, data: data26 };
+              if (vErrors === null) {
+                vErrors = [err54];
+              } else {
+                vErrors.push(err54);
+              }
+              errors++;
+            }
+          } else {
+            const err55 = { instancePath: instancePath + "/baseline/file", schemaPath: "#/$defs/tokenizer/properties/file/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema34.properties.file.type, parentSchema: schema34.properties.file, data: data26 };
+            if (vErrors === null) {
+              vErrors = [err55];
+            } else {
+              vErrors.push(err55);
+            }
+            errors++;
+          }
+        }
+        if (data24.format !== void 0) {
+          let data27 = data24.format;
+          if (!(data27 === "tokenizer.json" || data27 === "tiktoken")) {
+            const err56 = { instancePath: instancePath + "/baseline/format", schemaPath: "#/$defs/tokenizer/properties/format/enum", keyword: "enum", params: { allowedValues: schema34.properties.format.enum }, message: "must be equal to one of the allowed values", schema: schema34.properties.format.enum, parentSchema: schema34.properties.format, data: data27 };
+            if (vErrors === null) {
+              vErrors = [err56];
+            } else {
+              vErrors.push(err56);
+            }
+            errors++;
+          }
+        }
+        if (data24.pattern !== void 0) {
+          let data28 = data24.pattern;
+          if (typeof data28 === "string") {
+            if (func2(data28) < 1) {
+              const err57 = { instancePath: instancePath + "/baseline/pattern", schemaPath: "#/$defs/tokenizer/properties/pattern/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema34.properties.pattern, data: data28 };
+              if (vErrors === null) {
+                vErrors = [err57];
+              } else {
+                vErrors.push(err57);
+              }
+              errors++;
+            }
+          } else {
+            const err58 = { instancePath: instancePath + "/baseline/pattern", schemaPath: "#/$defs/tokenizer/properties/pattern/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema34.properties.pattern.type, parentSchema: schema34.properties.pattern, data: data28 };
+            if (vErrors === null) {
+              vErrors = [err58];
+            } else {
+              vErrors.push(err58);
+            }
+            errors++;
+          }
+        }
+        if (data24.format !== void 0) {
+          if (data24.file === void 0) {
+            const err59 = { instancePath: instancePath + "/baseline", schemaPath: "#/$defs/tokenizer/dependentRequired", keyword: "dependentRequired", params: {
+              property: "format",
+              missingProperty: "file",
+              depsCount: 1,
+              deps: "file"
+            }, message: "must have property file when property format is present", schema: schema34.dependentRequired, parentSchema: schema34, data: data24 };
+            if (vErrors === null) {
+              vErrors = [err59];
+            } else {
+              vErrors.push(err59);
+            }
+            errors++;
+          }
+        }
+        if (data24.pattern !== void 0) {
+          if (data24.file === void 0) {
+            const err60 = { instancePath: instancePath + "/baseline", schemaPath: "#/$defs/tokenizer/dependentRequired", keyword: "dependentRequired", params: {
+              property: "pattern",
+              missingProperty: "file",
+              depsCount: 1,
+              deps: "file"
+            }, message: "must have property file when property pattern is present", schema: schema34.dependentRequired, parentSchema: schema34, data: data24 };
+            if (vErrors === null) {
+              vErrors = [err60];
+            } else {
+              vErrors.push(err60);
+            }
+            errors++;
+          }
+        }
+        if (data24.builtin !== void 0) {
+          if (data24 && typeof data24 == "object" && !Array.isArray(data24)) {
+            if (data24.file !== void 0) {
+              const err61 = { instancePath: instancePath + "/baseline/file", schemaPath: "#/$defs/tokenizer/dependentSchemas/builtin/properties/file/false schema", keyword: "false schema", params: {}, message: "boolean schema is false", schema: false, parentSchema: schema34.dependentSchemas.builtin.properties.file, data: data24.file };
+              if (vErrors === null) {
+                vErrors = [err61];
+              } else {
+                vErrors.push(err61);
+              }
+              errors++;
+            }
+          }
+        }
+      } else {
+        const err62 = { instancePath: instancePath + "/baseline", schemaPath: "#/$defs/tokenizer/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema34.type, parentSchema: schema34, data: data24 };
+        if (vErrors === null) {
+          vErrors = [err62];
+        } else {
+          vErrors.push(err62);
+        }
+        errors++;
+      }
+    }
+    if (data2.sampling !== void 0) {
+      let data30 = data2.sampling;
+      if (data30 && typeof data30 == "object" && !Array.isArray(data30)) {
+        if (Object.keys(data30).length < 1) {
+          const err63 = { instancePath: instancePath + "/sampling", schemaPath: "#/properties/sampling/minProperties", keyword: "minProperties", params: { limit: 1 }, message: "must NOT have fewer than 1 properties", schema: 1, parentSchema: schema31.properties.sampling, data: data30 };
+          if (vErrors === null) {
+            vErrors = [err63];
+          } else {
+            vErrors.push(err63);
+          }
+          errors++;
+        }
+        for (const key7 in data30) {
+          if (!(key7 === "docs-per-shard" || key7 === "fraction")) {
+            const err64 = { instancePath: instancePath + "/sampling", schemaPath: "#/properties/sampling/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key7 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.sampling, data: data30 };
+            if (vErrors === null) {
+              vErrors = [err64];
+            } else {
+              vErrors.push(err64);
+            }
+            errors++;
+          }
+        }
+        if (data30["docs-per-shard"] !== void 0) {
+          let data31 = data30["docs-per-shard"];
+          if (!(typeof data31 == "number" && (!(data31 % 1) && !isNaN(data31)) && isFinite(data31))) {
+            const err65 = { instancePath: instancePath + "/sampling/docs-per-shard", schemaPath: "#/properties/sampling/properties/docs-per-shard/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.sampling.properties["docs-per-shard"].type, parentSchema: schema31.properties.sampling.properties["docs-per-shard"], data: data31 };
+            if (vErrors === null) {
+              vErrors = [err65];
+            } else {
+              vErrors.push(err65);
+            }
+            errors++;
+          }
+          if (typeof data31 == "number" && isFinite(data31)) {
+            if (data31 < 1 || isNaN(data31)) {
+              const err66 = { instancePath: instancePath + "/sampling/docs-per-shard", schemaPath: "#/properties/sampling/properties/docs-per-shard/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.sampling.properties["docs-per-shard"], data: data31 };
+              if (vErrors === null) {
+                vErrors = [err66];
+              } else {
+                vErrors.push(err66);
+              }
+              errors++;
+            }
+          }
+        }
+        if (data30.fraction !== void 0) {
+          let data32 = data30.fraction;
+          if (typeof data32 == "number" && isFinite(data32)) {
+            if (data32 > 1 || isNaN(data32)) {
+              const err67 = { instancePath: instancePath + "/sampling/fraction", schemaPath: "#/properties/sampling/properties/fraction/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema31.properties.sampling.properties.fraction, data: data32 };
+              if (vErrors === null) {
+                vErrors = [err67];
+              } else {
+                vErrors.push(err67);
+              }
+              errors++;
+            }
+            if (data32 <= 0 || isNaN(data32)) {
+              const err68 = { instancePath: instancePath + "/sampling/fraction", schemaPath: "#/properties/sampling/properties/fraction/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema31.properties.sampling.properties.fraction, data: data32 };
+              if (vErrors === null) {
+                vErrors = [err68];
+              } else {
+                vErrors.push(err68);
+              }
+              errors++;
+            }
+          } else {
+            const err69 = { instancePath: instancePath + "/sampling/fraction", schemaPath: "#/properties/sampling/properties/fraction/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema31.properties.sampling.properties.fraction.type, parentSchema: schema31.properties.sampling.properties.fraction, data: data32 };
+            if (vErrors === null) {
+              vErrors = [err69];
+            } else {
+              vErrors.push(err69);
+            }
+            errors++;
+          }
+        }
+        if (data30["docs-per-shard"] !== void 0) {
+          if (data30 && typeof data30 == "object" && !Array.isArray(data30)) {
+            if (data30.fraction !== void 0) {
+              const err70 = { instancePath: instancePath + "/sampling/fraction", schemaPath: "#/properties/sampling/dependentSchemas/docs-per-shard/properties/fraction/false schema", keyword: "false schema", params: {}, message: "boolean schema is false", schema: false, parentSchema: schema31.properties.sampling.dependentSchemas["docs-per-shard"].properties.fraction, data: data30.fraction };
+              if (vErrors === null) {
+                vErrors = [err70];
+              } else {
+                vErrors.push(err70);
+              }
+              errors++;
+            }
+          }
+        }
+      } else {
+        const err71 = { instancePath: instancePath + "/sampling", schemaPath: "#/properties/sampling/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.sampling.type, parentSchema: schema31.properties.sampling, data: data30 };
+        if (vErrors === null) {
+          vErrors = [err71];
+        } else {
+          vErrors.push(err71);
+        }
+        errors++;
+      }
+    }
+    if (data2.rules !== void 0) {
+      let data34 = data2.rules;
+      if (data34 && typeof data34 == "object" && !Array.isArray(data34)) {
+        for (const key8 in data34) {
+          if (!(key8 === "input" || key8 === "mix" || key8 === "script" || key8 === "encoding" || key8 === "fertility" || key8 === "duplicates" || key8 === "contamination")) {
+            const err72 = { instancePath: instancePath + "/rules", schemaPath: "#/properties/rules/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key8 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules, data: data34 };
+            if (vErrors === null) {
+              vErrors = [err72];
+            } else {
+              vErrors.push(err72);
+            }
+            errors++;
+          }
+        }
+        if (data34.input !== void 0) {
+          let data35 = data34.input;
+          if (data35 && typeof data35 == "object" && !Array.isArray(data35)) {
+            for (const key9 in data35) {
+              if (!(key9 === "max-rejected" || key9 === "max-broken-shards")) {
+                const err73 = { instancePath: instancePath + "/rules/input", schemaPath: "#/properties/rules/properties/input/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key9 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.input, data: data35 };
+                if (vErrors === null) {
+                  vErrors = [err73];
+                } else {
+                  vErrors.push(err73);
+                }
+                errors++;
+              }
+            }
+            if (data35["max-rejected"] !== void 0) {
+              let data36 = data35["max-rejected"];
+              if (typeof data36 == "number" && isFinite(data36)) {
+                if (data36 > 1 || isNaN(data36)) {
+                  const err74 = { instancePath: instancePath + "/rules/input/max-rejected", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data36 };
+                  if (vErrors === null) {
+                    vErrors = [err74];
+                  } else {
+                    vErrors.push(err74);
+                  }
+                  errors++;
+                }
+                if (data36 < 0 || isNaN(data36)) {
+                  const err75 = { instancePath: instancePath + "/rules/input/max-rejected", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data36 };
+                  if (vErrors === null) {
+                    vErrors = [err75];
+                  } else {
+                    vErrors.push(err75);
+                  }
+                  errors++;
+                }
+              } else {
+                const err76 = { instancePath: instancePath + "/rules/input/max-rejected", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data36 };
+                if (vErrors === null) {
+                  vErrors = [err76];
+                } else {
+                  vErrors.push(err76);
+                }
+                errors++;
+              }
+            }
+            if (data35["max-broken-shards"] !== void 0) {
+              let data37 = data35["max-broken-shards"];
+              if (!(typeof data37 == "number" && (!(data37 % 1) && !isNaN(data37)) && isFinite(data37))) {
+                const err77 = { instancePath: instancePath + "/rules/input/max-broken-shards", schemaPath: "#/properties/rules/properties/input/properties/max-broken-shards/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.input.properties["max-broken-shards"].type, parentSchema: schema31.properties.rules.properties.input.properties["max-broken-shards"], data: data37 };
+                if (vErrors === null) {
+                  vErrors = [err77];
+                } else {
+                  vErrors.push(err77);
+                }
+                errors++;
+              }
+              if (typeof data37 == "number" && isFinite(data37)) {
+                if (data37 < 0 || isNaN(data37)) {
+                  const err78 = { instancePath: instancePath + "/rules/input/max-broken-shards", schemaPath: "#/properties/rules/properties/input/properties/max-broken-shards/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema31.properties.rules.properties.input.properties["max-broken-shards"], data: data37 };
+                  if (vErrors === null) {
+                    vErrors = [err78];
+                  } else {
+                    vErrors.push(err78);
+                  }
+                  errors++;
+                }
+              }
+            }
+          } else {
+            const err79 = { instancePath: instancePath + "/rules/input", schemaPath: "#/properties/rules/properties/input/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.input.type, parentSchema: schema31.properties.rules.properties.input, data: data35 };
+            if (vErrors === null) {
+              vErrors = [err79];
+            } else {
+              vErrors.push(err79);
+            }
+            errors++;
+          }
+        }
+        if (data34.mix !== void 0) {
+          let data38 = data34.mix;
+          if (data38 && typeof data38 == "object" && !Array.isArray(data38)) {
+            for (const key10 in data38) {
+              if (!(key10 === "unit" || key10 === "tolerance" || key10 === "max-other" || key10 === "max-und")) {
+                const err80 = { instancePath: instancePath + "/rules/mix", schemaPath: "#/properties/rules/properties/mix/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key10 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.mix, data: data38 };
+                if (vErrors === null) {
+                  vErrors = [err80];
+                } else {
+                  vErrors.push(err80);
+                }
+                errors++;
+              }
+            }
+            if (data38.unit !== void 0) {
+              let data39 = data38.unit;
+              if (!(data39 === "docs" || data39 === "bytes" || data39 === "chars" || data39 === "words" || data39 === "tokens")) {
+                const err81 = { instancePath: instancePath + "/rules/mix/unit", schemaPath: "#/properties/rules/properties/mix/properties/unit/enum", keyword: "enum", params: { allowedValues: schema31.properties.rules.properties.mix.properties.unit.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.rules.properties.mix.properties.unit.enum, parentSchema: schema31.properties.rules.properties.mix.properties.unit, data: data39 };
+                if (vErrors === null) {
+                  vErrors = [err81];
+                } else {
+                  vErrors.push(err81);
+                }
+                errors++;
+              }
+            }
+            if (data38.tolerance !== void 0) {
+              let data40 = data38.tolerance;
+              if (typeof data40 == "number" && isFinite(data40)) {
+                if (data40 > 1 || isNaN(data40)) {
+                  const err82 = { instancePath: instancePath + "/rules/mix/tolerance", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data40 };
+                  if (vErrors === null) {
+                    vErrors = [err82];
+                  } else {
+                    vErrors.push(err82);
+                  }
+                  errors++;
+                }
+                if (data40 < 0 || isNaN(data40)) {
+                  const err83 = { instancePath: instancePath + "/rules/mix/tolerance", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data40 };
+                  if (vErrors === null) {
+                    vErrors = [err83];
+                  } else {
+                    vErrors.push(err83);
+                  }
+                  errors++;
+                }
+              } else {
+                const err84 = { instancePath: instancePath + "/rules/mix/tolerance", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data40 };
+                if (vErrors === null) {
+                  vErrors = [err84];
+                } else {
+                  vErrors.push(err84);
+                }
+                errors++;
+              }
+            }
+            if (data38["max-other"] !== void 0) {
+              let data41 = data38["max-other"];
+              if (typeof data41 == "number" && isFinite(data41)) {
+                if (data41 > 1 || isNaN(data41)) {
+                  const err85 = { instancePath: instancePath + "/rules/mix/max-other", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data41 };
+                  if (vErrors === null) {
+                    vErrors = [err85];
+                  } else {
+                    vErrors.push(err85);
+                  }
+                  errors++;
+                }
+                if (data41 < 0 || isNaN(data41)) {
+                  const err86 = { instancePath: instancePath + "/rules/mix/max-other", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data41 };
+                  if (vErrors === null) {
+                    vErrors = [err86];
+                  } else {
+                    vErrors.push(err86);
+                  }
+                  errors++;
+                }
+              } else {
+                const err87 = { instancePath: instancePath + "/rules/mix/max-other", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data41 };
+                if (vErrors === null) {
+                  vErrors = [err87];
+                } else {
+                  vErrors.push(err87);
+                }
+                errors++;
+              }
+            }
+            if (data38["max-und"] !== void 0) {
+              let data42 = data38["max-und"];
+              if (typeof data42 == "number" && isFinite(data42)) {
+                if (data42 > 1 || isNaN(data42)) {
+                  const err88 = { instancePath: instancePath + "/rules/mix/max-und", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data42 };
+                  if (vErrors === null) {
+                    vErrors = [err88];
+                  } else {
+                    vErrors.push(err88);
+                  }
+                  errors++;
+                }
+                if (data42 < 0 || isNaN(data42)) {
+                  const err89 = { instancePath: instancePath + "/rules/mix/max-und", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data42 };
+                  if (vErrors === null) {
+                    vErrors = [err89];
+                  } else {
+                    vErrors.push(err89);
+                  }
+                  errors++;
+                }
+              } else {
+                const err90 = { instancePath: instancePath + "/rules/mix/max-und", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data42 };
+                if (vErrors === null) {
+                  vErrors = [err90];
+                } else {
+                  vErrors.push(err90);
+                }
+                errors++;
+              }
+            }
+          } else {
+            const err91 = { instancePath: instancePath + "/rules/mix", schemaPath: "#/properties/rules/properties/mix/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.mix.type, parentSchema: schema31.properties.rules.properties.mix, data: data38 };
+            if (vErrors === null) {
+              vErrors = [err91];
+            } else {
+              vErrors.push(err91);
+            }
+            errors++;
+          }
+        }
+        if (data34.script !== void 0) {
+          let data43 = data34.script;
+          if (data43 && typeof data43 == "object" && !Array.isArray(data43)) {
+            for (const key11 in data43) {
+              if (!(key11 === "min-purity" || key11 === "max-impure-docs")) {
+                const err92 = { instancePath: instancePath + "/rules/script", schemaPath: "#/properties/rules/properties/script/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key11 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.script, data: data43 };
+                if (vErrors === null) {
+                  vErrors = [err92];
+                } else {
+                  vErrors.push(err92);
+                }
+                errors++;
+              }
+            }
+            if (data43["min-purity"] !== void 0) {
+              let data44 = data43["min-purity"];
+              if (typeof data44 == "number" && isFinite(data44)) {
+                if (data44 > 1 || isNaN(data44)) {
+                  const err93 = { instancePath: instancePath + "/rules/script/min-purity", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data44 };
+                  if (vErrors === null) {
+                    vErrors = [err93];
+                  } else {
+                    vErrors.push(err93);
+                  }
+                  errors++;
+                }
+                if (data44 < 0 || isNaN(data44)) {
+                  const err94 = { instancePath: instancePath + "/rules/script/min-purity", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data44 };
+                  if (vErrors === null) {
+                    vErrors = [err94];
+                  } else {
+                    vErrors.push(err94);
+                  }
+                  errors++;
+                }
+              } else {
+                const err95 = { instancePath: instancePath + "/rules/script/min-purity", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data44 };
+                if (vErrors === null) {
+                  vErrors = [err95];
+                } else {
+                  vErrors.push(err95);
+                }
+                errors++;
+              }
+            }
+            if (data43["max-impure-docs"] !== void 0) {
+              let data45 = data43["max-impure-docs"];
+              if (typeof data45 == "number" && isFinite(data45)) {
+                if (data45 > 1 || isNaN(data45)) {
+                  const err96 = { instancePath: instancePath + "/rules/script/max-impure-docs", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data45 };
+                  if (vErrors === null) {
+                    vErrors = [err96];
+                  } else {
+                    vErrors.push(err96);
+                  }
+                  errors++;
+                }
+                if (data45 < 0 || isNaN(data45)) {
+                  const err97 = { instancePath: instancePath + "/rules/script/max-impure-docs", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data45 };
+                  if (vErrors === null) {
+                    vErrors = [err97];
+                  } else {
+                    vErrors.push(err97);
+                  }
+                  errors++;
+                }
+              } else {
+                const err98 = { instancePath: instancePath + "/rules/script/max-impure-docs", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data45 };
+                if (vErrors === null) {
+                  vErrors = [err98];
+                } else {
+                  vErrors.push(err98);
+                }
+                errors++;
+              }
+            }
+          } else {
+            const err99 = { instancePath: instancePath + "/rules/script", schemaPath: "#/properties/rules/properties/script/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.script.type, parentSchema: schema31.properties.rules.properties.script, data: data43 };
+            if (vErrors === null) {
+              vErrors = [err99];
+            } else {
+              vErrors.push(err99);
+            }
+            errors++;
+          }
+        }
+        if (data34.encoding !== void 0) {
+          let data46 = data34.encoding;
+          if (data46 && typeof data46 == "object" && !Array.isArray(data46)) {
+            for (const key12 in data46) {
+              if (!(key12 === "max-anomalous-docs" || key12 === "forbid")) {
+                const err100 = { instancePath: instancePath + "/rules/encoding", schemaPath: "#/properties/rules/properties/encoding/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key12 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.encoding, data: data46 };
+                if (vErrors === null) {
+                  vErrors = [err100];
+                } else {
+                  vErrors.push(err100);
+                }
+                errors++;
+              }
+            }
+            if (data46["max-anomalous-docs"] !== void 0) {
+              let data47 = data46["max-anomalous-docs"];
+              if (typeof data47 == "number" && isFinite(data47)) {
+                if (data47 > 1 || isNaN(data47)) {
+                  const err101 = { instancePath: instancePath + "/rules/encoding/max-anomalous-docs", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data47 };
+                  if (vErrors === null) {
+                    vErrors = [err101];
+                  } else {
+                    vErrors.push(err101);
+                  }
+                  errors++;
+                }
+                if (data47 < 0 || isNaN(data47)) {
+                  const err102 = { instancePath: instancePath + "/rules/encoding/max-anomalous-docs", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data47 };
+                  if (vErrors === null) {
+                    vErrors = [err102];
+                  } else {
+                    vErrors.push(err102);
+                  }
+                  errors++;
+                }
+              } else {
+                const err103 = { instancePath: instancePath + "/rules/encoding/max-anomalous-docs", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data47 };
+                if (vErrors === null) {
+                  vErrors = [err103];
+                } else {
+                  vErrors.push(err103);
+                }
+                errors++;
+              }
+            }
+            if (data46.forbid !== void 0) {
+              let data48 = data46.forbid;
+              if (Array.isArray(data48)) {
+                const len2 = data48.length;
+                for (let i2 = 0; i2 < len2; i2++) {
+                  let data49 = data48[i2];
+                  if (!(data49 === "replacement-char" || data49 === "control-chars" || data49 === "bidi-controls" || data49 === "zero-width" || data49 === "private-use" || data49 === "mojibake")) {
+                    const err104 = { instancePath: instancePath + "/rules/encoding/forbid/" + i2, schemaPath: "#/properties/rules/properties/encoding/properties/forbid/items/enum", keyword: "enum", params: { allowedValues: schema31.properties.rules.properties.encoding.properties.forbid.items.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.rules.properties.encoding.properties.forbid.items.enum, parentSchema: schema31.properties.rules.properties.encoding.properties.forbid.items, data: data49 };
+                    if (vErrors === null) {
+                      vErrors = [err104];
+                    } else {
+                      vErrors.push(err104);
+                    }
+                    errors++;
+                  }
+                }
+                let i3 = data48.length;
+                let j0;
+                if (i3 > 1) {
+                  outer0: for (; i3--; ) {
+                    for (j0 = i3; j0--; ) {
+                      if (func0(data48[i3], data48[j0])) {
+                        const err105 = { instancePath: instancePath + "/rules/encoding/forbid", schemaPath: "#/properties/rules/properties/encoding/properties/forbid/uniqueItems", keyword: "uniqueItems", params: { i: i3, j: j0 }, message: "must NOT have duplicate items (items ## " + j0 + " and " + i3 + " are identical)", schema: true, parentSchema: schema31.properties.rules.properties.encoding.properties.forbid, data: data48 };
+                        if (vErrors === null) {
+                          vErrors = [err105];
+                        } else {
+                          vErrors.push(err105);
+                        }
+                        errors++;
+                        break outer0;
+                      }
+                    }
+                  }
+                }
+              } else {
+                const err106 = { instancePath: instancePath + "/rules/encoding/forbid", schemaPath: "#/properties/rules/properties/encoding/properties/forbid/type", keyword: "type", params: { type: "array" }, message: "must be array", schema: schema31.properties.rules.properties.encoding.properties.forbid.type, parentSchema: schema31.properties.rules.properties.encoding.properties.forbid, data: data48 };
+                if (vErrors === null) {
+                  vErrors = [err106];
+                } else {
+                  vErrors.push(err106);
+                }
+                errors++;
+              }
+            }
+          } else {
+            const err107 = { instancePath: instancePath + "/rules/encoding", schemaPath: "#/properties/rules/properties/encoding/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.encoding.type, parentSchema: schema31.properties.rules.properties.encoding, data: data46 };
+            if (vErrors === null) {
+              vErrors = [err107];
+            } else {
+              vErrors.push(err107);
+            }
+            errors++;
+          }
+        }
+        if (data34.fertility !== void 0) {
+          let data50 = data34.fertility;
+          if (data50 && typeof data50 == "object" && !Array.isArray(data50)) {
+            for (const key13 in data50) {
+              if (!(key13 === "max" || key13 === "max-regression" || key13 === "max-continued" || key13 === "word-lists")) {
+                const err108 = { instancePath: instancePath + "/rules/fertility", schemaPath: "#/properties/rules/properties/fertility/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key13 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.fertility, data: data50 };
+                if (vErrors === null) {
+                  vErrors = [err108];
+                } else {
+                  vErrors.push(err108);
+                }
+                errors++;
+              }
+            }
+            if (data50.max !== void 0) {
+              let data51 = data50.max;
+              if (data51 && typeof data51 == "object" && !Array.isArray(data51)) {
+                for (const key14 in data51) {
+                  let data52 = data51[key14];
+                  if (typeof data52 == "number" && isFinite(data52)) {
+                    if (data52 <= 0 || isNaN(data52)) {
+                      const err109 = { instancePath: instancePath + "/rules/fertility/max/" + key14.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/properties/rules/properties/fertility/properties/max/additionalProperties/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema31.properties.rules.properties.fertility.properties.max.additionalProperties, data: data52 };
+                      if (vErrors === null) {
+                        vErrors = [err109];
+                      } else {
+                        vErrors.push(err109);
+                      }
+                      errors++;
+                    }
+                  } else {
+                    const err110 = { instancePath: instancePath + "/rules/fertility/max/" + key14.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/properties/rules/properties/fertility/properties/max/additionalProperties/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema31.properties.rules.properties.fertility.properties.max.additionalProperties.type, parentSchema: schema31.properties.rules.properties.fertility.properties.max.additionalProperties, data: data52 };
+                    if (vErrors === null) {
+                      vErrors = [err110];
+                    } else {
+                      vErrors.push(err110);
+                    }
+                    errors++;
+                  }
+                }
+              } else {
+                const err111 = { instancePath: instancePath + "/rules/fertility/max", schemaPath: "#/properties/rules/properties/fertility/properties/max/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.fertility.properties.max.type, parentSchema: schema31.properties.rules.properties.fertility.properties.max, data: data51 };
+                if (vErrors === null) {
+                  vErrors = [err111];
+                } else {
+                  vErrors.push(err111);
+                }
+                errors++;
+              }
+            }
+            if (data50["max-regression"] !== void 0) {
+              let data53 = data50["max-regression"];
+              if (typeof data53 == "number" && isFinite(data53)) {
+                if (data53 < 0 || isNaN(data53)) {
+                  const err112 = { instancePath: instancePath + "/rules/fertility/max-regression", schemaPath: "#/properties/rules/properties/fertility/properties/max-regression/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema31.properties.rules.properties.fertility.properties["max-regression"], data: data53 };
+                  if (vErrors === null) {
+                    vErrors = [err112];
+                  } else {
+                    vErrors.push(err112);
+                  }
+                  errors++;
+                }
+              } else {
+                const err113 = { instancePath: instancePath + "/rules/fertility/max-regression", schemaPath: "#/properties/rules/properties/fertility/properties/max-regression/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema31.properties.rules.properties.fertility.properties["max-regression"].type, parentSchema: schema31.properties.rules.properties.fertility.properties["max-regression"], data: data53 };
+                if (vErrors === null) {
+                  vErrors = [err113];
+                } else {
+                  vErrors.push(err113);
+                }
+                errors++;
+              }
+            }
+            if (data50["max-continued"] !== void 0) {
+              let data54 = data50["max-continued"];
+              if (data54 && typeof data54 == "object" && !Array.isArray(data54)) {
+                for (const key15 in data54) {
+                  let data55 = data54[key15];
+                  if (typeof data55 == "number" && isFinite(data55)) {
+                    if (data55 > 1 || isNaN(data55)) {
+                      const err114 = { instancePath: instancePath + "/rules/fertility/max-continued/" + key15.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data55 };
+                      if (vErrors === null) {
+                        vErrors = [err114];
+                      } else {
+                        vErrors.push(err114);
+                      }
+                      errors++;
+                    }
+                    if (data55 < 0 || isNaN(data55)) {
+                      const err115 = { instancePath: instancePath + "/rules/fertility/max-continued/" + key15.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data55 };
+                      if (vErrors === null) {
+                        vErrors = [err115];
+                      } else {
+                        vErrors.push(err115);
+                      }
+                      errors++;
+                    }
+                  } else {
+                    const err116 = { instancePath: instancePath + "/rules/fertility/max-continued/" + key15.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data55 };
+                    if (vErrors === null) {
+                      vErrors = [err116];
+                    } else {
+                      vErrors.push(err116);
+                    }
+                    errors++;
+                  }
+                }
+              } else {
+                const err117 = { instancePath: instancePath + "/rules/fertility/max-continued", schemaPath: "#/properties/rules/properties/fertility/properties/max-continued/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.fertility.properties["max-continued"].type, parentSchema: schema31.properties.rules.properties.fertility.properties["max-continued"], data: data54 };
+                if (vErrors === null) {
+                  vErrors = [err117];
+                } else {
+                  vErrors.push(err117);
+                }
+                errors++;
+              }
+            }
+            if (data50["word-lists"] !== void 0) {
+              let data56 = data50["word-lists"];
+              if (data56 && typeof data56 == "object" && !Array.isArray(data56)) {
+                for (const key16 in data56) {
+                  let data57 = data56[key16];
+                  if (typeof data57 === "string") {
+                    if (func2(data57) < 1) {
+                      const err118 = { instancePath: instancePath + "/rules/fertility/word-lists/" + key16.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/properties/rules/properties/fertility/properties/word-lists/additionalProperties/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.rules.properties.fertility.properties["word-lists"].additionalProperties, data: data57 };
+                      if (vErrors === null) {
+                        vErrors = [err118];
+                      } else {
+                        vErrors.push(err118);
+                      }
+                      errors++;
+                    }
+                  } else {
+                    const err119 = { instancePath: instancePath + "/rules/fertility/word-lists/" + key16.replace(/~/g, "~0").replace(/\//g, "~1"), schemaPath: "#/properties/rules/properties/fertility/properties/word-lists/additionalProperties/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.rules.properties.fertility.properties["word-lists"].additionalProperties.type, parentSchema: schema31.properties.rules.properties.fertility.properties["word-lists"].additionalProperties, data: data57 };
+                    if (vErrors === null) {
+                      vErrors = [err119];
+                    } else {
+                      vErrors.push(err119);
+                    }
+                    errors++;
+                  }
+                }
+              } else {
+                const err120 = { instancePath: instancePath + "/rules/fertility/word-lists", schemaPath: "#/properties/rules/properties/fertility/properties/word-lists/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.fertility.properties["word-lists"].type, parentSchema: schema31.properties.rules.properties.fertility.properties["word-lists"], data: data56 };
+                if (vErrors === null) {
+                  vErrors = [err120];
+                } else {
+                  vErrors.push(err120);
+                }
+                errors++;
+              }
+            }
+          } else {
+            const err121 = { instancePath: instancePath + "/rules/fertility", schemaPath: "#/properties/rules/properties/fertility/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.fertility.type, parentSchema: schema31.properties.rules.properties.fertility, data: data50 };
+            if (vErrors === null) {
+              vErrors = [err121];
+            } else {
+              vErrors.push(err121);
+            }
+            errors++;
+          }
+        }
+        if (data34.duplicates !== void 0) {
+          let data58 = data34.duplicates;
+          if (data58 && typeof data58 == "object" && !Array.isArray(data58)) {
+            for (const key17 in data58) {
+              if (!(key17 === "max-exact" || key17 === "near" || key17 === "punctuation")) {
+                const err122 = { instancePath: instancePath + "/rules/duplicates", schemaPath: "#/properties/rules/properties/duplicates/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key17 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.duplicates, data: data58 };
+                if (vErrors === null) {
+                  vErrors = [err122];
+                } else {
+                  vErrors.push(err122);
+                }
+                errors++;
+              }
+            }
+            if (data58["max-exact"] !== void 0) {
+              let data59 = data58["max-exact"];
+              if (typeof data59 == "number" && isFinite(data59)) {
+                if (data59 > 1 || isNaN(data59)) {
+                  const err123 = { instancePath: instancePath + "/rules/duplicates/max-exact", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data59 };
+                  if (vErrors === null) {
+                    vErrors = [err123];
+                  } else {
+                    vErrors.push(err123);
+                  }
+                  errors++;
+                }
+                if (data59 < 0 || isNaN(data59)) {
+                  const err124 = { instancePath: instancePath + "/rules/duplicates/max-exact", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data59 };
+                  if (vErrors === null) {
+                    vErrors = [err124];
+                  } else {
+                    vErrors.push(err124);
+                  }
+                  errors++;
+                }
+              } else {
+                const err125 = { instancePath: instancePath + "/rules/duplicates/max-exact", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data59 };
+                if (vErrors === null) {
+                  vErrors = [err125];
+                } else {
+                  vErrors.push(err125);
+                }
+                errors++;
+              }
+            }
+            if (data58.near !== void 0) {
+              let data60 = data58.near;
+              if (data60 && typeof data60 == "object" && !Array.isArray(data60)) {
+                for (const key18 in data60) {
+                  if (!(key18 === "threshold" || key18 === "max" || key18 === "shingle" || key18 === "hashes")) {
+                    const err126 = { instancePath: instancePath + "/rules/duplicates/near", schemaPath: "#/properties/rules/properties/duplicates/properties/near/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key18 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.duplicates.properties.near, data: data60 };
+                    if (vErrors === null) {
+                      vErrors = [err126];
+                    } else {
+                      vErrors.push(err126);
+                    }
+                    errors++;
+                  }
+                }
+                if (data60.threshold !== void 0) {
+                  let data61 = data60.threshold;
+                  if (typeof data61 == "number" && isFinite(data61)) {
+                    if (data61 >= 1 || isNaN(data61)) {
+                      const err127 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data61 };
+                      if (vErrors === null) {
+                        vErrors = [err127];
+                      } else {
+                        vErrors.push(err127);
+                      }
+                      errors++;
+                    }
+                    if (data61 <= 0 || isNaN(data61)) {
+                      const err128 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data61 };
+                      if (vErrors === null) {
+                        vErrors = [err128];
+                      } else {
+                        vErrors.push(err128);
+                      }
+                      errors++;
+                    }
+                  } else {
+                    const err129 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data61 };
+                    if (vErrors === null) {
+                      vErrors = [err129];
+                    } else {
+                      vErrors.push(err129);
+                    }
+                    errors++;
+                  }
+                }
+                if (data60.max !== void 0) {
+                  let data62 = data60.max;
+                  if (typeof data62 == "number" && isFinite(data62)) {
+                    if (data62 > 1 || isNaN(data62)) {
+                      const err130 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data62 };
+                      if (vErrors === null) {
+                        vErrors = [err130];
+                      } else {
+                        vErrors.push(err130);
+                      }
+                      errors++;
+                    }
+                    if (data62 < 0 || isNaN(data62)) {
+                      const err131 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data62 };
+                      if (vErrors === null) {
+                        vErrors = [err131];
+                      } else {
+                        vErrors.push(err131);
+                      }
+                      errors++;
+                    }
+                  } else {
+                    const err132 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data62 };
+                    if (vErrors === null) {
+                      vErrors = [err132];
+                    } else {
+                      vErrors.push(err132);
+                    }
+                    errors++;
+                  }
+                }
+                if (data60.shingle !== void 0) {
+                  let data63 = data60.shingle;
+                  if (!(typeof data63 == "number" && (!(data63 % 1) && !isNaN(data63)) && isFinite(data63))) {
+                    const err133 = { instancePath: instancePath + "/rules/duplicates/near/shingle", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/shingle/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle, data: data63 };
+                    if (vErrors === null) {
+                      vErrors = [err133];
+                    } else {
+                      vErrors.push(err133);
+                    }
+                    errors++;
+                  }
+                  if (typeof data63 == "number" && isFinite(data63)) {
+                    if (data63 < 1 || isNaN(data63)) {
+                      const err134 = { instancePath: instancePath + "/rules/duplicates/near/shingle", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/shingle/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle, data: data63 };
+                      if (vErrors === null) {
+                        vErrors = [err134];
+                      } else {
+                        vErrors.push(err134);
+                      }
+                      errors++;
+                    }
+                  }
+                }
+                if (data60.hashes !== void 0) {
+                  let data64 = data60.hashes;
+                  if (!(typeof data64 == "number" && (!(data64 % 1) && !isNaN(data64)) && isFinite(data64))) {
+                    const err135 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data64 };
+                    if (vErrors === null) {
+                      vErrors = [err135];
+                    } else {
+                      vErrors.push(err135);
+                    }
+                    errors++;
+                  }
+                  if (typeof data64 == "number" && isFinite(data64)) {
+                    if (data64 > 1024 || isNaN(data64)) {
+                      const err136 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1024 }, message: "must be <= 1024", schema: 1024, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data64 };
+                      if (vErrors === null) {
+                        vErrors = [err136];
+                      } else {
+                        vErrors.push(err136);
+                      }
+                      errors++;
+                    }
+                    if (data64 < 16 || isNaN(data64)) {
+                      const err137 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/minimum", keyword: "minimum", params: { comparison: ">=", limit: 16 }, message: "must be >= 16", schema: 16, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data64 };
+                      if (vErrors === null) {
+                        vErrors = [err137];
+                      } else {
+                        vErrors.push(err137);
+                      }
+                      errors++;
+                    }
+                  }
+                }
+              } else {
+                const err138 = { instancePath: instancePath + "/rules/duplicates/near", schemaPath: "#/properties/rules/properties/duplicates/properties/near/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.duplicates.properties.near.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near, data: data60 };
+                if (vErrors === null) {
+                  vErrors = [err138];
+                } else {
+                  vErrors.push(err138);
+                }
+                errors++;
+              }
+            }
+            if (data58.punctuation !== void 0) {
+              let data65 = data58.punctuation;
+              if (!(data65 === "keep" || data65 === "strip")) {
+                const err139 = { instancePath: instancePath + "/rules/duplicates/punctuation", schemaPath: "#/properties/rules/properties/duplicates/properties/punctuation/enum", keyword: "enum", params: { allowedValues: schema31.properties.rules.properties.duplicates.properties.punctuation.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.rules.properties.duplicates.properties.punctuation.enum, parentSchema: schema31.properties.rules.properties.duplicates.properties.punctuation, data: data65 };
+                if (vErrors === null) {
+                  vErrors = [err139];
+                } else {
+                  vErrors.push(err139);
+                }
+                errors++;
+              }
+            }
+          } else {
+            const err140 = { instancePath: instancePath + "/rules/duplicates", schemaPath: "#/properties/rules/properties/duplicates/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.duplicates.type, parentSchema: schema31.properties.rules.properties.duplicates, data: data58 };
+            if (vErrors === null) {
+              vErrors = [err140];
+            } else {
+              vErrors.push(err140);
+            }
+            errors++;
+          }
+        }
+        if (data34.contamination !== void 0) {
+          let data66 = data34.contamination;
+          if (data66 && typeof data66 == "object" && !Array.isArray(data66)) {
+            if (data66.eval === void 0) {
+              const err141 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/required", keyword: "required", params: { missingProperty: "eval" }, message: "must have required property 'eval'", schema: schema31.properties.rules.properties.contamination.required, parentSchema: schema31.properties.rules.properties.contamination, data: data66 };
+              if (vErrors === null) {
+                vErrors = [err141];
+              } else {
+                vErrors.push(err141);
+              }
+              errors++;
+            }
+            for (const key19 in data66) {
+              if (!(key19 === "eval" || key19 === "ngram" || key19 === "max-docs")) {
+                const err142 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key19 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.contamination, data: data66 };
+                if (vErrors === null) {
+                  vErrors = [err142];
+                } else {
+                  vErrors.push(err142);
+                }
+                errors++;
+              }
+            }
+            if (data66.eval !== void 0) {
+              let data67 = data66.eval;
+              if (typeof data67 !== "string" && !Array.isArray(data67)) {
+                const err143 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/type", keyword: "type", params: { type: schema31.properties.rules.properties.contamination.properties.eval.type }, message: "must be string,array", schema: schema31.properties.rules.properties.contamination.properties.eval.type, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data67 };
+                if (vErrors === null) {
+                  vErrors = [err143];
+                } else {
+                  vErrors.push(err143);
+                }
+                errors++;
+              }
+              if (typeof data67 === "string") {
+                if (func2(data67) < 1) {
+                  const err144 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data67 };
+                  if (vErrors === null) {
+                    vErrors = [err144];
+                  } else {
+                    vErrors.push(err144);
+                  }
+                  errors++;
+                }
+              }
+              if (Array.isArray(data67)) {
+                if (data67.length < 1) {
+                  const err145 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data67 };
+                  if (vErrors === null) {
+                    vErrors = [err145];
+                  } else {
+                    vErrors.push(err145);
+                  }
+                  errors++;
+                }
+                const len3 = data67.length;
+                for (let i4 = 0; i4 < len3; i4++) {
+                  let data68 = data67[i4];
+                  if (typeof data68 === "string") {
+                    if (func2(data68) < 1) {
+                      const err146 = { instancePath: instancePath + "/rules/contamination/eval/" + i4, schemaPath: "#/properties/rules/properties/contamination/properties/eval/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval.items, data: data68 };
+                      if (vErrors === null) {
+                        vErrors = [err146];
+                      } else {
+                        vErrors.push(err146);
+                      }
+                      errors++;
+                    }
+                  } else {
+                    const err147 = { instancePath: instancePath + "/rules/contamination/eval/" + i4, schemaPath: "#/properties/rules/properties/contamination/properties/eval/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.rules.properties.contamination.properties.eval.items.type, parentSchema: schema31.properties.rules.properties.contamination.properties.eval.items, data: data68 };
+                    if (vErrors === null) {
+                      vErrors = [err147];
+                    } else {
+                      vErrors.push(err147);
+                    }
+                    errors++;
+                  }
+                }
+              }
+            }
+            if (data66.ngram !== void 0) {
+              let data69 = data66.ngram;
+              if (!(typeof data69 == "number" && (!(data69 % 1) && !isNaN(data69)) && isFinite(data69))) {
+                const err148 = { instancePath: instancePath + "/rules/contamination/ngram", schemaPath: "#/properties/rules/properties/contamination/properties/ngram/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.contamination.properties.ngram.type, parentSchema: schema31.properties.rules.properties.contamination.properties.ngram, data: data69 };
+                if (vErrors === null) {
+                  vErrors = [err148];
+                } else {
+                  vErrors.push(err148);
+                }
+                errors++;
+              }
+              if (typeof data69 == "number" && isFinite(data69)) {
+                if (data69 < 1 || isNaN(data69)) {
+                  const err149 = { instancePath: instancePath + "/rules/contamination/ngram", schemaPath: "#/properties/rules/properties/contamination/properties/ngram/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.ngram, data: data69 };
+                  if (vErrors === null) {
+                    vErrors = [err149];
+                  } else {
+                    vErrors.push(err149);
+                  }
+                  errors++;
+                }
+              }
+            }
+            if (data66["max-docs"] !== void 0) {
+              let data70 = data66["max-docs"];
+              if (!(typeof data70 == "number" && (!(data70 % 1) && !isNaN(data70)) && isFinite(data70))) {
+                const err150 = { instancePath: instancePath + "/rules/contamination/max-docs", schemaPath: "#/properties/rules/properties/contamination/properties/max-docs/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.contamination.properties["max-docs"].type, parentSchema: schema31.properties.rules.properties.contamination.properties["max-docs"], data: data70 };
+                if (vErrors === null) {
+                  vErrors = [err150];
+                } else {
+                  vErrors.push(err150);
+                }
+                errors++;
+              }
+              if (typeof data70 == "number" && isFinite(data70)) {
+                if (data70 < 0 || isNaN(data70)) {
+                  const err151 = { instancePath: instancePath + "/rules/contamination/max-docs", schemaPath: "#/properties/rules/properties/contamination/properties/max-docs/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema31.properties.rules.properties.contamination.properties["max-docs"], data: data70 };
+                  if (vErrors === null) {
+                    vErrors = [err151];
+                  } else {
+                    vErrors.push(err151);
+                  }
+                  errors++;
+                }
+              }
+            }
+          } else {
+            const err152 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.contamination.type, parentSchema: schema31.properties.rules.properties.contamination, data: data66 };
+            if (vErrors === null) {
+              vErrors = [err152];
+            } else {
+              vErrors.push(err152);
+            }
+            errors++;
+          }
+        }
+      } else {
+        const err153 = { instancePath: instancePath + "/rules", schemaPath: "#/properties/rules/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.type, parentSchema: schema31.properties.rules, data: data34 };
+        if (vErrors === null) {
+          vErrors = [err153];
+        } else {
+          vErrors.push(err153);
+        }
+        errors++;
+      }
+    }
+    if (data2.severity !== void 0) {
+      let data71 = data2.severity;
+      if (data71 && typeof data71 == "object" && !Array.isArray(data71)) {
+        for (const key20 in data71) {
+          if (!(key20 === "input" || key20 === "mix" || key20 === "script" || key20 === "encoding" || key20 === "fertility" || key20 === "duplicates" || key20 === "contamination")) {
+            const err154 = { instancePath: instancePath + "/severity", schemaPath: "#/properties/severity/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key20 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.severity, data: data71 };
+            if (vErrors === null) {
+              vErrors = [err154];
+            } else {
+              vErrors.push(err154);
+            }
+            errors++;
+          }
+        }
+        if (data71.input !== void 0) {
+          let data72 = data71.input;
+          if (!(data72 === "error" || data72 === "warn")) {
+            const err155 = { instancePath: instancePath + "/severity/input", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data72 };
+            if (vErrors === null) {
+              vErrors = [err155];
+            } else {
+              vErrors.push(err155);
+            }
+            errors++;
+          }
+        }
+        if (data71.mix !== void 0) {
+          let data73 = data71.mix;
+          if (!(data73 === "error" || data73 === "warn")) {
+            const err156 = { instancePath: instancePath + "/severity/mix", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data73 };
+            if (vErrors === null) {
+              vErrors = [err156];
+            } else {
+              vErrors.push(err156);
+            }
+            errors++;
+          }
+        }
+        if (data71.script !== void 0) {
+          let data74 = data71.script;
+          if (!(data74 === "error" || data74 === "warn")) {
+            const err157 = { instancePath: instancePath + "/severity/script", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data74 };
+            if (vErrors === null) {
+              vErrors = [err157];
+            } else {
+              vErrors.push(err157);
+            }
+            errors++;
+          }
+        }
+        if (data71.encoding !== void 0) {
+          let data75 = data71.encoding;
+          if (!(data75 === "error" || data75 === "warn")) {
+            const err158 = { instancePath: instancePath + "/severity/encoding", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data75 };
+            if (vErrors === null) {
+              vErrors = [err158];
+            } else {
+              vErrors.push(err158);
+            }
+            errors++;
+          }
+        }
+        if (data71.fertility !== void 0) {
+          let data76 = data71.fertility;
+          if (!(data76 === "error" || data76 === "warn")) {
+            const err159 = { instancePath: instancePath + "/severity/fertility", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data76 };
+            if (vErrors === null) {
+              vErrors = [err159];
+            } else {
+              vErrors.push(err159);
+            }
+            errors++;
+          }
+        }
+        if (data71.duplicates !== void 0) {
+          let data77 = data71.duplicates;
+          if (!(data77 === "error" || data77 === "warn")) {
+            const err160 = { instancePath: instancePath + "/severity/duplicates", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data77 };
+            if (vErrors === null) {
+              vErrors = [err160];
+            } else {
+              vErrors.push(err160);
+            }
+            errors++;
+          }
+        }
+        if (data71.contamination !== void 0) {
+          let data78 = data71.contamination;
+          if (!(data78 === "error" || data78 === "warn")) {
+            const err161 = { instancePath: instancePath + "/severity/contamination", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data78 };
+            if (vErrors === null) {
+              vErrors = [err161];
+            } else {
+              vErrors.push(err161);
+            }
+            errors++;
+          }
+        }
+      } else {
+        const err162 = { instancePath: instancePath + "/severity", schemaPath: "#/properties/severity/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.severity.type, parentSchema: schema31.properties.severity, data: data71 };
+        if (vErrors === null) {
+          vErrors = [err162];
+        } else {
+          vErrors.push(err162);
+        }
+        errors++;
+      }
+    }
+  } else {
+    const err163 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.type, parentSchema: schema31, data: data2 };
+    if (vErrors === null) {
+      vErrors = [err163];
+    } else {
+      vErrors.push(err163);
+    }
+    errors++;
+  }
+  validate20.errors = vErrors;
+  return errors === 0;
+}
+validate20.evaluated = { "props": true, "dynamicProps": false, "dynamicItems": false };
+
 // src/policy/suggest.ts
 var MAX_DISTANCE = 2;
 var MIN_PREFIX_LENGTH = 4;
@@ -1953,18 +3983,16 @@ function didYouMean(candidate) {
 // src/policy/schema-check.ts
 var MAX_LISTED_KEYS = 12;
 var POLICY_SCHEMA = policy_schema_default;
-var validator;
 function policyValidator() {
-  validator ??= new Ajv2020({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true }).compile(POLICY_SCHEMA);
-  return validator;
+  return validate;
 }
 function checkAgainstSchema(value) {
-  const validate = policyValidator();
-  if (validate(value)) return [];
+  const validate2 = policyValidator();
+  if (validate2(value)) return [];
   const issues = [];
   const seen = /* @__PURE__ */ new Set();
-  const wrongType = new Set((validate.errors ?? []).filter((e) => e.keyword === "type").map((e) => e.instancePath));
-  for (const e of validate.errors ?? []) {
+  const wrongType = new Set((validate2.errors ?? []).filter((e) => e.keyword === "type").map((e) => e.instancePath));
+  for (const e of validate2.errors ?? []) {
     if (e.keyword !== "type" && wrongType.has(e.instancePath)) continue;
     const issue = issueOf(e, value);
     const id = `${issue.path.join("\0")}${issue.message}`;
@@ -15357,13 +17385,17 @@ async function loadTokenizer(spec, options = {}) {
       throw new TokenizerError("load", name, `unknown builtin tokenizer; the builtins are ${BUILTIN_NAMES.join(", ")}`);
     }
     const data2 = await importBuiltin(name);
-    return createRankCounter({
-      id: `builtin:${name}`,
-      label: name,
-      ranks: parseBuiltinRanks(data2.bpe_ranks, name),
-      pattern: data2.pat_str,
-      ...generationSize === void 0 ? {} : { generationSize }
-    });
+    return lazyCounter(
+      `builtin:${name}`,
+      name,
+      () => createRankCounter({
+        id: `builtin:${name}`,
+        label: name,
+        ranks: parseBuiltinRanks(data2.bpe_ranks, name),
+        pattern: data2.pat_str,
+        ...generationSize === void 0 ? {} : { generationSize }
+      })
+    );
   }
   let bytes2;
   try {
@@ -15410,6 +17442,21 @@ function resolvePattern(pattern, file) {
     throw new TokenizerError("load", file, `split pattern is not a valid regular expression: ${cause.message}`, { cause });
   }
   return { pattern: name, patternId: `sha256:${createHash4("sha256").update(name).digest("hex").slice(0, 16)}` };
+}
+function lazyCounter(id, label, make) {
+  let real;
+  const get = () => real ??= make();
+  return {
+    id,
+    label,
+    kind: "tiktoken",
+    unknownTokenId: null,
+    exactFastPath: true,
+    count: (text) => get().count(text),
+    countPiece: (piece) => get().countPiece(piece),
+    countWithPieces: (text, pieces) => get().countWithPieces(text, pieces),
+    cacheStats: () => real ? real.cacheStats() : { hits: 0, misses: 0, evictions: 0, entries: 0 }
+  };
 }
 
 // src/measure/tokens/pieces.ts

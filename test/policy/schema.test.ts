@@ -93,6 +93,29 @@ describe('the policy schema', () => {
     expect(() => ajv.compile(schema)).not.toThrow();
   });
 
+  it('is checked at run time by a validator generated from the schema as it is now', async () => {
+    // The generator's own output, made again here: a schema edit without regenerating fails this test.
+    const { generatedValidator } = (await import('../../scripts/gen-policy-validator.mjs')) as { generatedValidator: () => string };
+    const file = readFileSync(path.join(path.dirname(fileURLToPath(import.meta.url)), '../../src/policy/policy-validator.generated.ts'), 'utf8');
+    expect(file === generatedValidator(), 'run node scripts/gen-policy-validator.mjs').toBe(true);
+    // And it reports what ajv compiling the schema at run time reports, error for error.
+    const { validate } = (await import('../../src/policy/policy-validator.generated.js')) as unknown as { validate: ((v: unknown) => boolean) & { errors?: unknown } };
+    const live = new Ajv2020({ allErrors: true, verbose: true, strict: true, allowUnionTypes: true }).compile(schema);
+    const values: unknown[] = [
+      parseYaml(readFileSync(path.join(REPO, 'policies/example.yaml'), 'utf8')),
+      { version: 1 },
+      { version: 2, corpus: { include: 'data/*.jsonl' }, languages: { hin: { target: 2, scripts: ['Devanagari', 7] } }, rules: { mix: { tolerance: -1 } }, extra: true },
+      { version: 1, corpus: { include: ['a'] }, languages: {}, sampling: { fraction: 0.5, 'docs-per-shard': 3 }, severity: { mix: 'loud' } },
+      'not a mapping',
+    ];
+    for (const v of values) {
+      const a = validate(v);
+      const b = live(v);
+      expect(a).toBe(b);
+      expect(JSON.stringify(validate.errors ?? null)).toBe(JSON.stringify(live.errors ?? null));
+    }
+  });
+
   it('describes every property and closes every mapping it lists keys for', () => {
     const undocumented: string[] = [];
     const open: string[] = [];

@@ -153,35 +153,6 @@ describe('readShard on JSONL', () => {
     await expect(readShard(ref, OPTIONS, () => { throw new Error('consumer failed'); })).rejects.toThrow('consumer failed');
   });
 
-  it('waits on the pace between chunks, for every compression, and stops reading when the pace throws', async () => {
-    const lines = Array.from({ length: 400 }, (_, i) => JSON.stringify({ text: `wire copy ${i}` })).join('\n');
-    const plain = Buffer.from(lines);
-    await zstdInit();
-    for (const [compression, bytes] of [['none', plain], ['gzip', gzipSync(plain)], ['zstd', Buffer.from(zstdCompress(plain, 3))]] as const) {
-      const ref = memoryShard(bytes, { compression, chunkBytes: 64 });
-      // A pace that holds every chunk back a turn still lets every document through, in order.
-      let paced = 0;
-      const docs: number[] = [];
-      const account = await readShard(ref, OPTIONS, (d) => docs.push(d.line), () => {
-        paced++;
-        return new Promise<void>((r) => setImmediate(r));
-      });
-      expect(account.docs, compression).toBe(400);
-      expect(docs, compression).toEqual(Array.from({ length: 400 }, (_, i) => i + 1));
-      expect(paced, compression).toBeGreaterThan(1);
-      // A pace that throws ends the read with its error, before the shard's end.
-      let seen = 0;
-      let calls = 0;
-      await expect(
-        readShard(ref, OPTIONS, () => seen++, () => {
-          if (++calls === 3) throw new Error('a batch was lost');
-          return undefined;
-        }),
-      ).rejects.toThrow('a batch was lost');
-      expect(seen, compression).toBeLessThan(400);
-    }
-  });
-
   it('reports a file that cannot be opened as broken, not as a throw', async () => {
     const ref: ShardRef = { path: 'gone.jsonl', absPath: path.join(tmpdir(), 'sluice-no-such-dir', 'gone.jsonl'), format: 'jsonl', compression: 'none', encoding: 'utf-8', sizeBytes: 0 };
     const { account } = await readAll(ref);
@@ -253,6 +224,35 @@ describe('compressed shards', () => {
 
   const records = (from: number, to: number): string =>
     Array.from({ length: to - from }, (_, i) => JSON.stringify({ text: `bulletin ${from + i}: ward ${(from + i) % 97} results`, lang: 'eng' }) + '\n').join('');
+
+  it('waits on the pace between chunks, for every compression, and stops reading when the pace throws', async () => {
+    const lines = Array.from({ length: 400 }, (_, i) => JSON.stringify({ text: `wire copy ${i}` })).join('\n');
+    const plain = Buffer.from(lines);
+    for (const [compression, bytes] of [['none', plain], ['gzip', gzipSync(plain)], ['zstd', Buffer.from(zstdCompress(plain, 3))]] as const) {
+      const ref = memoryShard(bytes, { compression, chunkBytes: 64 });
+      // A pace that holds every chunk back a turn still lets every document through, in order.
+      let paced = 0;
+      const docs: number[] = [];
+      const account = await readShard(ref, OPTIONS, (d) => docs.push(d.line), () => {
+        paced++;
+        return new Promise<void>((r) => setImmediate(r));
+      });
+      expect(account.docs, compression).toBe(400);
+      expect(docs, compression).toEqual(Array.from({ length: 400 }, (_, i) => i + 1));
+      expect(paced, compression).toBeGreaterThan(1);
+      // A pace that throws ends the read with its error, before the shard's end.
+      let seen = 0;
+      let calls = 0;
+      await expect(
+        readShard(ref, OPTIONS, () => seen++, () => {
+          if (++calls === 3) throw new Error('a batch was lost');
+          return undefined;
+        }),
+      ).rejects.toThrow('a batch was lost');
+      expect(seen, compression).toBeLessThan(400);
+    }
+  });
+
 
   function fileShard(name: string, data: Buffer, compression: ShardRef['compression']): ShardRef {
     const absPath = path.join(dir, name);
