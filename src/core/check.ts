@@ -92,7 +92,7 @@ export interface CheckOptions {
   contentKey?: (ref: ShardRef) => Promise<string>;
   /** Shards taken as new: duplicates they add against the other shards are reported separately. */
   newShards?: string[];
-  /** Worker threads measuring shards (default: the available cores); 1 measures in this thread. */
+  /** Threads measuring shards (default: one per WORK_PER_WORKER_BYTES of compressed shards to measure, up to the available cores); 1 measures in this thread. */
   workers?: number;
   /** The built script workers start from (the front end's own bundle, import.meta.url); without one, shards are measured in this thread. */
   workerEntry?: string | URL;
