@@ -6160,6 +6160,10 @@ import { pipeline } from "node:stream";
 import { createGunzip } from "node:zlib";
 import { Decompress } from "fzstd";
 var READ_CHUNK_BYTES = 256 * 1024;
+var ZSTD_READ_CHUNK_BYTES = 64 * 1024;
+function readChunkBytes(ref) {
+  return ref.compression === "zstd" ? ZSTD_READ_CHUNK_BYTES : READ_CHUNK_BYTES;
+}
 var GUNZIP_CHUNK_BYTES = 128 * 1024;
 async function textSizeHint(ref) {
   if (ref.compression !== "gzip" || ref.open !== void 0 || ref.sizeBytes < 18) return ref.sizeBytes;
@@ -6178,7 +6182,7 @@ async function textSizeHint(ref) {
 async function pumpShard(ref, write, pace) {
   let source;
   try {
-    source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
+    source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: readChunkBytes(ref) });
   } catch (error) {
     return { compressedBytes: 0, error: `cannot open: ${messageOf2(error)}` };
   }
@@ -7955,7 +7959,6 @@ var ResultCache = class {
 import { createHash as createHash3 } from "node:crypto";
 import { createReadStream as createReadStream2 } from "node:fs";
 import { PassThrough } from "node:stream";
-var READ_CHUNK_BYTES2 = 256 * 1024;
 async function contentIdOf(ref) {
   const hash2 = createHash3("sha256");
   const stream = ref.open?.() ?? createReadStream2(ref.absPath);
@@ -8109,7 +8112,7 @@ function hashedWhileRead(ref, hash2) {
   return {
     ...ref,
     open: () => {
-      const source = ref.open?.() ?? createReadStream2(ref.absPath, { highWaterMark: READ_CHUNK_BYTES2 });
+      const source = ref.open?.() ?? createReadStream2(ref.absPath, { highWaterMark: readChunkBytes(ref) });
       const tap = new PassThrough();
       source.on("data", (chunk) => hash2.update(chunk));
       source.on("error", (err) => tap.destroy(err));

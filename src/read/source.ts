@@ -11,6 +11,18 @@ import type { ShardRef } from './types.js';
 /** Bytes per read from disk: large enough that per-chunk costs vanish next to per-line work, small enough to stay cache-friendly. */
 const READ_CHUNK_BYTES = 256 * 1024;
 
+/**
+ * Bytes per read of a zstd file. fzstd hands out a whole read's output at once, and `pace` is asked
+ * between reads, so a read's size times the compression ratio is what can pile up before a slower
+ * consumer gets a say: 64 KiB keeps that near a megabyte for text (ratios of 3–20).
+ */
+const ZSTD_READ_CHUNK_BYTES = 64 * 1024;
+
+/** Returns the read size for a shard's raw bytes. */
+export function readChunkBytes(ref: Pick<ShardRef, 'compression'>): number {
+  return ref.compression === 'zstd' ? ZSTD_READ_CHUNK_BYTES : READ_CHUNK_BYTES;
+}
+
 /** Bytes per gunzip output chunk: zlib's default of 16 KiB costs a thread-pool round trip per 16 KiB (scripts/bench-read.mjs, runs minutes apart: ~96 MB/s at 16 KiB, ~245 MB/s at 128 KiB). */
 const GUNZIP_CHUNK_BYTES = 128 * 1024;
 
@@ -48,7 +60,7 @@ export type Pace = () => Promise<void> | undefined;
 export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void, pace?: Pace): Promise<PumpResult> {
   let source: Readable;
   try {
-    source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
+    source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: readChunkBytes(ref) });
   } catch (error) {
     return { compressedBytes: 0, error: `cannot open: ${messageOf(error)}` };
   }

@@ -13,14 +13,12 @@ import { PassThrough, type Readable } from 'node:stream';
 import type { DocumentMeasure } from '../measure/types.js';
 import type { DuplicateIndexPart } from '../measure/duplicates/index.js';
 import type { SamplingSpec } from '../policy/types.js';
-import { readShard } from '../read/index.js';
+import { readChunkBytes, readShard } from '../read/index.js';
 import type { RawDocument, ReadAccount, ReadOptions, ShardRef } from '../read/types.js';
 import { describeSampling, documentHash, fractionCutoff, HASH_SPACE, MomentTally, SmallestHashes } from './sample.js';
 import { ShardTally, type DocumentTokens, type TallyState } from './tally.js';
 import { RESULT_SCHEMA, SAMPLES_PER_KIND, type LanguageMoments, type ShardResult } from './types.js';
 
-/** Read buffer for shard files: large reads keep the floor fast (the read stage measured 256 KiB best). */
-const READ_CHUNK_BYTES = 256 * 1024;
 
 /** A per-shard duplicate-index builder, as the scan uses it. */
 export interface ScanDuplicateBuilder {
@@ -244,7 +242,7 @@ function hashedWhileRead(ref: ShardRef, hash: Hash): ShardRef {
   return {
     ...ref,
     open: () => {
-      const source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: READ_CHUNK_BYTES });
+      const source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: readChunkBytes(ref) });
       const tap = new PassThrough();
       source.on('data', (chunk: Buffer) => hash.update(chunk));
       source.on('error', (err: Error) => tap.destroy(err));
