@@ -17964,7 +17964,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
 
 // src/core/check.ts
 var CACHE_LOOKUPS_AT_ONCE = 16;
-var WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
+var WORK_PER_WORKER_BYTES = 2 * 1024 * 1024;
 var MIN_SPLIT_BYTES = 4 * 1024 * 1024;
 var BATCH_CHARS = 1 << 18;
 var BATCHES_IN_FLIGHT_PER_THREAD = 8;
@@ -18605,7 +18605,7 @@ Options for check:
       --root DIR         judge the shards under DIR instead of the policy's root
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
-      --workers N        threads measuring shards (default: one per 16 MB of compressed shards
+      --workers N        threads measuring shards (default: one per 2 MB of compressed shards
                          to measure, up to the available cores)
       --split-mb N       with several workers, a shard holding at least N MB of text (and over a
                          quarter of a worker's share) is read once and measured in batches by all

@@ -18,7 +18,7 @@ Options for check:
       --root DIR         judge the shards under DIR instead of the policy's root
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
-      --workers N        threads measuring shards (default: one per 16 MB of compressed shards
+      --workers N        threads measuring shards (default: one per 2 MB of compressed shards
                          to measure, up to the available cores)
       --split-mb N       with several workers, a shard holding at least N MB of text (and over a
                          quarter of a worker's share) is read once and measured in batches by all

@@ -19,8 +19,13 @@ import { canRunWorkers, defaultWorkers, measureInPool, startWorker, throwIfFault
 /** Cache look-ups in flight at once: enough to hide file-system latency, few enough to keep memory flat. */
 const CACHE_LOOKUPS_AT_ONCE = 16;
 
-/** Compressed bytes of unmeasured shards that justify one more worker thread by default. */
-const WORK_PER_WORKER_BYTES = 16 * 1024 * 1024;
+/**
+ * Compressed bytes of unmeasured shards that justify one more worker thread by default: about 8 MB
+ * of text, over a second of measuring, against a worker's start (about 0.3 s, overlapped with the
+ * main thread's own loading) and its cold token cache. On the 9 MB bench corpus this gives 2 threads,
+ * which the benchmark measured at 1.5× one; a demo-sized corpus stays on one thread.
+ */
+const WORK_PER_WORKER_BYTES = 2 * 1024 * 1024;
 
 /**
  * A shard holding less text than this is never split into batches: handing its text across threads
@@ -178,7 +183,7 @@ function workerInitOf(policy: Policy, opts: CheckOptions, settingsId: string): W
 
 /**
  * Returns the threads that measure these (poolable) shards: the --workers count, or by default one per
- * WORK_PER_WORKER_BYTES on disk up to the cores (starting a worker costs about a second: each loads the
+ * WORK_PER_WORKER_BYTES on disk up to the cores (each worker loads the
  * tokenizers); 1 when there is nothing to spread (a single shard too small to split).
  */
 function threadsFor(pooled: readonly ShardRef[], opts: CheckOptions): number {
