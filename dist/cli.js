@@ -17752,7 +17752,7 @@ async function prepareAnalyzers(policy) {
 }
 
 // src/core/check.ts
-import { existsSync as existsSync2 } from "node:fs";
+import { existsSync as existsSync2, opendirSync } from "node:fs";
 
 // src/core/pool.ts
 import { existsSync } from "node:fs";
@@ -18023,7 +18023,7 @@ async function measureCorpus(policy, opts, given = {}) {
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
   const early = [];
   const entry = opts.workerEntry;
-  if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && existsSync2(opts.cacheDir))) {
+  if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && holdsAnything(opts.cacheDir))) {
     const threads = threadsFor(discovery.shards.filter((r) => r.open === void 0), opts);
     for (let w = 1; w < threads; w++) early.push(startWorker(entry, workerInitOf(policy, opts, "not yet known")));
   }
@@ -18033,6 +18033,19 @@ async function measureCorpus(policy, opts, given = {}) {
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
     for (const w of early) void w.worker.terminate();
+  }
+}
+function holdsAnything(dir) {
+  if (!existsSync2(dir)) return false;
+  try {
+    const d = opendirSync(dir);
+    try {
+      return d.readSync() !== null;
+    } finally {
+      d.closeSync();
+    }
+  } catch {
+    return true;
   }
 }
 function workerInitOf(policy, opts, settingsId) {

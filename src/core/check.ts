@@ -13,7 +13,7 @@ import { contentIdOf, measureBatch, scanShard, scanShardInBatches, type BatchPla
 import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
 import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
-import { existsSync } from 'node:fs';
+import { existsSync, opendirSync } from 'node:fs';
 import { canRunWorkers, defaultWorkers, measureInPool, startWorker, throwIfFaultInjected, workOf, type StartedWorker, type WorkerInit } from './pool.js';
 
 /** Cache look-ups in flight at once: enough to hide file-system latency, few enough to keep memory flat. */
@@ -161,7 +161,7 @@ export async function measureCorpus(
   // need them and no cache can spare the work, they start now, alongside this thread's own loading.
   const early: StartedWorker[] = [];
   const entry = opts.workerEntry;
-  if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && existsSync(opts.cacheDir))) {
+  if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && holdsAnything(opts.cacheDir))) {
     const threads = threadsFor(discovery.shards.filter((r) => r.open === undefined), opts);
     for (let w = 1; w < threads; w++) early.push(startWorker(entry, workerInitOf(policy, opts, 'not yet known')));
   }
@@ -171,6 +171,21 @@ export async function measureCorpus(
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
     for (const w of early) void w.worker.terminate();
+  }
+}
+
+/** Returns whether a directory exists and has an entry (one is read, however many it holds). */
+function holdsAnything(dir: string): boolean {
+  if (!existsSync(dir)) return false;
+  try {
+    const d = opendirSync(dir);
+    try {
+      return d.readSync() !== null;
+    } finally {
+      d.closeSync();
+    }
+  } catch {
+    return true; // unreadable: the cache will say why; start no workers on a guess
   }
 }
 
