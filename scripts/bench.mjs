@@ -8,8 +8,10 @@
 // (b) a naive pipeline calling franc, js-tiktoken, Intl.Segmenter and a 128-function MinHash
 // per document, on an even sample (the rate is extrapolated, never the total);
 // (c) the real CLI bundle (bin/sluice.js, as users run it) with --no-cache on policies that turn
-// on one optional analyzer each, and the full check; (d) the full check with an empty, then
-// a warm --cache-dir. MB are uncompressed JSONL bytes throughout.
+// on one optional analyzer each, and the full check, on one worker and on all cores (also with the
+// corpus as one shard, split into batches); (d) the full check with an empty, then a warm
+// --cache-dir; (e) two partitioned scans and a merge; (f) one one-worker full check per core at the
+// same time, the machine's own limit for the pool. MB are uncompressed JSONL bytes throughout.
 import { spawn } from 'node:child_process';
 import { cpSync, createReadStream, existsSync, mkdirSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
@@ -77,6 +79,8 @@ for (const [name, v] of [['mb', mb], ['sample-mb', sampleMb], ['rounds', rounds]
   if (!Number.isFinite(v) || v <= 0) fail(`--${name} must be a positive number, got ${v}`);
 }
 const outDir = path.join(ROOT, 'bench-out');
+/** The pool rows use every core this process may (at least 2, so the rows exist on a 1-core machine too). */
+const ALL = Math.max(2, os.availableParallelism());
 const corpusDir = path.join(outDir, `corpus-${mb}mb-seed${seed}`);
 const jsonOut = path.resolve(option('json', path.join(outDir, 'bench-last.json')));
 
@@ -353,8 +357,8 @@ const sluiceCases = [
   { key: 'duplicates', name: '(c) sluice: + duplicates only', policy: policies.duplicates, note: '--no-cache' },
   { key: 'contamination', name: '(c) sluice: + contamination only', policy: policies.contamination, note: '--no-cache' },
   { key: 'full', name: '(c) sluice: full check', policy: policies.full, note: '--no-cache' },
-  { key: 'full2', name: '(c) sluice: full check, 2 workers', policy: policies.full, workers: 2, note: '--no-cache --workers 2' },
-  { key: 'one2', name: '(c) sluice: full check, corpus as 1 shard, 2 workers', policy: policies.full, workers: 2, extra: ['--root', oneShardRoot, '--split-mb', '0'], note: '--no-cache --workers 2 --split-mb 0: read once, measured in batches' },
+  { key: 'full2', name: `(c) sluice: full check, ${ALL} workers`, policy: policies.full, workers: ALL, note: `--no-cache --workers ${ALL}` },
+  { key: 'one2', name: `(c) sluice: full check, corpus as 1 shard, ${ALL} workers`, policy: policies.full, workers: ALL, extra: ['--root', oneShardRoot, '--split-mb', '0'], note: `--no-cache --workers ${ALL} --split-mb 0: read once, measured in batches` },
   { key: 'cold', name: '(d) sluice: full check, empty --cache-dir', policy: policies.full, cache: 'empty', note: 'measures, writes the cache' },
   { key: 'warm', name: '(d) sluice: full check, warm --cache-dir', policy: policies.full, cache: 'warm' },
 ];
@@ -398,17 +402,18 @@ let partBytesPerDoc = NaN;
   });
 }
 
-// What two threads can give on this machine at best: two independent one-worker full checks at the
-// same time share nothing but the hardware, so their combined rate bounds what 2 workers can reach.
+// What all the cores can give on this machine at best: as many independent one-worker full checks
+// as there are workers, at the same time, share nothing but the hardware, so their combined rate
+// bounds what the pool can reach.
 let pairRun;
 {
-  log('(f) two 1-worker full checks at the same time ...');
-  const pair = await Promise.all(['pair-a', 'pair-b'].map((label) => sluice(policies.full, { label, workers: 1 })));
+  log(`(f) ${ALL} one-worker full checks at the same time ...`);
+  const pair = await Promise.all(Array.from({ length: ALL }, (_, i) => sluice(policies.full, { label: `pair-${i + 1}`, workers: 1 })));
   const slower = Math.max(...pair.map((r) => r.seconds));
   pairRun = { seconds: slower, all: pair.map((r) => r.seconds) };
-  row('(f) machine: two 1-worker full checks at once', 2 * corpusMb, slower, {
+  row(`(f) machine: ${ALL} one-worker full checks at once`, ALL * corpusMb, slower, {
     cpuSeconds: pair.reduce((n, r) => n + r.cpuSeconds, 0),
-    note: `${pair.map((r) => r.seconds.toFixed(2)).join(' s, ')} s: the most 2 threads can give here`,
+    note: `${pair.map((r) => r.seconds.toFixed(2)).join(' s, ')} s: the most ${ALL} threads can give here`,
   });
 }
 
@@ -471,12 +476,12 @@ console.log('  (a sum away from 100 % is noise, or cost that appears only when t
   const one = rate(corpusMb, runs.full.seconds);
   const two = rate(corpusMb, runs.full2.seconds);
   const split = rate(corpusMb, runs.one2.seconds);
-  const ceiling = rate(2 * corpusMb, pairRun.seconds);
+  const ceiling = rate(ALL * corpusMb, pairRun.seconds);
   console.log('');
   console.log(
-    `Scaling: 2 workers ${(two / one).toFixed(2)}× one worker; the corpus as one shard on 2 workers ${(split / one).toFixed(2)}×; ` +
-      `two independent one-worker runs at once ${(ceiling / one).toFixed(2)}× (the machine's own limit for two threads of this work), ` +
-      `so 2 workers reach ${((two / ceiling) * 100).toFixed(0)} % of it.`,
+    `Scaling: ${ALL} workers ${(two / one).toFixed(2)}× one worker; the corpus as one shard on ${ALL} workers ${(split / one).toFixed(2)}×; ` +
+      `${ALL} independent one-worker runs at once ${(ceiling / one).toFixed(2)}× (the machine's own limit for ${ALL} threads of this work), ` +
+      `so ${ALL} workers reach ${((two / ceiling) * 100).toFixed(0)} % of it.`,
   );
 }
 
