@@ -18024,7 +18024,7 @@ async function measureCorpus(policy, opts, given = {}) {
   const early = [];
   const entry = opts.workerEntry;
   if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && holdsAnything(opts.cacheDir))) {
-    const threads = threadsFor(discovery.shards.filter((r) => r.open === void 0), opts);
+    const threads = threadsFor(discovery.shards, opts);
     for (let w = 1; w < threads; w++) early.push(startWorker(entry, workerInitOf(policy, opts, "not yet known")));
   }
   try {
@@ -18053,11 +18053,11 @@ function workerInitOf(policy, opts, settingsId) {
   if (opts.root !== void 0) init.root = opts.root;
   return init;
 }
-function threadsFor(pooled, opts) {
-  const diskBytes = pooled.reduce((n, r) => n + r.sizeBytes, 0);
+function threadsFor(shards, opts) {
+  const diskBytes = shards.reduce((n, r) => n + r.sizeBytes, 0);
   const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
   if (workers <= 1) return 1;
-  return pooled.length > 1 || shardsToSplit(pooled, workers, opts.minSplitBytes).size > 0 ? workers : 1;
+  return shards.length > 1 || shards.some((r) => r.open !== void 0) || shardsToSplit(shards, workers, opts.minSplitBytes).size > 0 ? workers : 1;
 }
 async function assembleCorpus(policy, prepared, results, cached, skipped, newShards, started) {
   results.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
@@ -18109,12 +18109,15 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     const key = keys.get(r.path);
     if (cache && key) await cache.put({ ...r, contentId: key });
   };
-  const local = todo.filter((r) => r.open !== void 0);
+  let local = todo.filter((r) => r.open !== void 0);
   let pooled = todo.filter((r) => r.open === void 0);
-  const workers = threadsFor(pooled, opts);
+  const workers = threadsFor(todo, opts);
   if (workers > 1 && canRunWorkers(opts.workerEntry)) {
     pooled = await withTextHints(pooled);
     const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
+    for (const r of local) split.add(r);
+    pooled.push(...local);
+    local = [];
     const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending = [];
     const plan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };

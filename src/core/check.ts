@@ -162,7 +162,7 @@ export async function measureCorpus(
   const early: StartedWorker[] = [];
   const entry = opts.workerEntry;
   if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && holdsAnything(opts.cacheDir))) {
-    const threads = threadsFor(discovery.shards.filter((r) => r.open === undefined), opts);
+    const threads = threadsFor(discovery.shards, opts);
     for (let w = 1; w < threads; w++) early.push(startWorker(entry, workerInitOf(policy, opts, 'not yet known')));
   }
   try {
@@ -201,11 +201,12 @@ function workerInitOf(policy: Policy, opts: CheckOptions, settingsId: string): W
  * WORK_PER_WORKER_BYTES on disk up to the cores (each worker loads the
  * tokenizers); 1 when there is nothing to spread (a single shard too small to split).
  */
-function threadsFor(pooled: readonly ShardRef[], opts: CheckOptions): number {
-  const diskBytes = pooled.reduce((n, r) => n + r.sizeBytes, 0);
+function threadsFor(shards: readonly ShardRef[], opts: CheckOptions): number {
+  const diskBytes = shards.reduce((n, r) => n + r.sizeBytes, 0);
   const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
   if (workers <= 1) return 1;
-  return pooled.length > 1 || shardsToSplit(pooled, workers, opts.minSplitBytes).size > 0 ? workers : 1;
+  // One shard is worth spreading only in batches: when it is large, or when only this thread can open it anyway.
+  return shards.length > 1 || shards.some((r) => r.open !== undefined) || shardsToSplit(shards, workers, opts.minSplitBytes).size > 0 ? workers : 1;
 }
 
 /** Returns the corpus result of measured shards: sorted, summed, with the cross-shard figures added. */
@@ -281,12 +282,17 @@ export async function measureShards(
     const key = keys.get(r.path);
     if (cache && key) await cache.put({ ...r, contentId: key });
   };
-  const local = todo.filter((r) => r.open !== undefined);
+  // Shards that only this thread can open (git blobs, in the Action's base tree) are never sent whole
+  // to a worker; with workers, this thread reads them and the workers measure their batches.
+  let local = todo.filter((r) => r.open !== undefined);
   let pooled = todo.filter((r) => r.open === undefined);
-  const workers = threadsFor(pooled, opts);
+  const workers = threadsFor(todo, opts);
   if (workers > 1 && canRunWorkers(opts.workerEntry)) {
     pooled = await withTextHints(pooled);
     const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
+    for (const r of local) split.add(r);
+    pooled.push(...local);
+    local = [];
     const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending: Promise<void>[] = [];
     const plan: BatchPlan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };

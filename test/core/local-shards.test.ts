@@ -1,0 +1,55 @@
+// Shards that only the main thread can open (the Action reads the base tree's shards from git) are
+// read there and measured in batches by the workers: the results are those of one thread, and a
+// failure inside a worker still fails the run with the shard named.
+import { createReadStream } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { afterEach, describe, expect, it } from 'vitest';
+import { discoverOrThrow, loadPolicyOrThrow, measureShards, prepareOrThrow, type CheckOptions } from '../../src/core/check.js';
+import { ShardFailure } from '../../src/core/pool.js';
+import type { ShardRef } from '../../src/read/types.js';
+import type { ShardResult } from '../../src/results/types.js';
+
+const REPO = resolve(__dirname, '..', '..');
+const POLICY = join(REPO, 'examples/newsroom/policies/newsroom.yaml');
+// The built bundle doubles as the worker script (test/global-setup.ts builds it).
+const ENTRY = join(REPO, 'dist', 'cli.js');
+
+const comparable = (results: ShardResult[]): string =>
+  JSON.stringify(
+    [...results].sort((a, b) => (a.path < b.path ? -1 : 1)).map((r) => ({ ...r, elapsedMs: 0, duplicateIndex: r.duplicateIndex ? Buffer.from(r.duplicateIndex).toString('base64') : null })),
+  );
+
+async function setUp(): Promise<{ run: (opts: Partial<CheckOptions>) => Promise<ShardResult[]> }> {
+  const policy = await loadPolicyOrThrow(POLICY);
+  const prepared = await prepareOrThrow(policy);
+  const { shards } = await discoverOrThrow(policy);
+  // As the Action's base tree gives them: each shard opened by a function, not by a path a worker could read.
+  const refs: ShardRef[] = shards.map((r) => ({ ...r, absPath: `(blob) ${r.path}`, open: () => createReadStream(r.absPath) }));
+  return { run: async (opts) => (await measureShards(policy, refs, prepared, { policies: [POLICY], cacheDir: null, ...opts })).results };
+}
+
+describe('shards only the main thread can open', () => {
+  afterEach(() => {
+    delete process.env.SLUICE_FAULT_SHARD;
+  });
+
+  it('are measured in batches by the workers, with the results of one thread', async () => {
+    const { run } = await setUp();
+    const one = await run({ workers: 1 });
+    const pooled = await run({ workers: 3, workerEntry: ENTRY });
+    expect(pooled.length).toBe(one.length);
+    expect(comparable(pooled)).toBe(comparable(one));
+  });
+
+  it('fail the run with the shard named when a worker fails on one of their batches', async () => {
+    const { run } = await setUp();
+    // Only the pooled path checks for injected faults: a ShardFailure here shows the batches went to the pool.
+    process.env.SLUICE_FAULT_SHARD = 'data/english/english-01.jsonl.gz';
+    const failure = await run({ workers: 2, workerEntry: ENTRY }).then(
+      () => null,
+      (e: unknown) => e,
+    );
+    expect(failure).toBeInstanceOf(ShardFailure);
+    expect((failure as ShardFailure).shard).toBe('data/english/english-01.jsonl.gz');
+  });
+});
