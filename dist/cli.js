@@ -6302,7 +6302,7 @@ async function readShard(ref, opts, onDocument, pace) {
     stripBom: utf8,
     blockIsClean: utf8 ? (block) => block.indexOf(0) === -1 && isUtf82(block) : (block) => block.indexOf(0) === -1
   });
-  const { compressedBytes, error } = await pumpShard(ref, (chunk) => splitter.write(chunk), pace);
+  const { compressedBytes, error } = await pumpShard(ref, (chunk) => splitter.write(chunk), pace ? () => pace(splitter.bytes) : void 0);
   if (error === void 0) {
     splitter.end();
     sink.finish();
@@ -8197,7 +8197,8 @@ async function scanShardInBatches(ref, settings, analyzers, measure, plan) {
       chars += doc.text.length;
       if (chars >= plan.batchChars) flush();
     },
-    () => {
+    (bytes2) => {
+      plan.onRead?.(bytes2);
       if (failed) throw failed.error;
       if (handedOut - absorbed < plan.inFlight) return void 0;
       return pending[absorbed];
@@ -18078,10 +18079,17 @@ async function measureShards(policy, shards, prepared, opts, started = performan
   const cached = /* @__PURE__ */ new Set();
   const keys = /* @__PURE__ */ new Map();
   let bytes2 = 0;
+  const reading = /* @__PURE__ */ new Map();
+  const report = () => {
+    let inFlight = 0;
+    for (const b of reading.values()) inFlight += b;
+    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes2 + inFlight, elapsedMs: performance.now() - started });
+  };
   const done = (r) => {
     results.push(r);
     bytes2 += r.read.bytes;
-    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes2, elapsedMs: performance.now() - started });
+    reading.delete(r.path);
+    report();
   };
   const todo = [];
   if (!cache) todo.push(...shards);
@@ -18139,7 +18147,13 @@ async function measureShards(policy, shards, prepared, opts, started = performan
           throwIfFaultInjected(ref.path);
           return measureBatch(batch, prepared.scan, prepared.analyzers);
         },
-        split: (ref, measure) => scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, plan)
+        split: (ref, measure) => scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, {
+          ...plan,
+          onRead: (b) => {
+            reading.set(ref.path, b);
+            if (opts.onProgress) report();
+          }
+        })
       },
       early
     );

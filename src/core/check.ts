@@ -247,10 +247,18 @@ export async function measureShards(
   const cached = new Set<string>();
   const keys = new Map<string, string>();
   let bytes = 0;
+  // Bytes read so far of shards being read here for batches: a long shard shows progress before it ends.
+  const reading = new Map<string, number>();
+  const report = (): void => {
+    let inFlight = 0;
+    for (const b of reading.values()) inFlight += b;
+    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes + inFlight, elapsedMs: performance.now() - started });
+  };
   const done = (r: ShardResult): void => {
     results.push(r);
     bytes += r.read.bytes;
-    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes, elapsedMs: performance.now() - started });
+    reading.delete(r.path);
+    report();
   };
 
   const todo: ShardRef[] = [];
@@ -314,7 +322,14 @@ export async function measureShards(
           throwIfFaultInjected(ref.path);
           return measureBatch(batch, prepared.scan, prepared.analyzers);
         },
-        split: (ref, measure) => scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, plan),
+        split: (ref, measure) =>
+          scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, {
+            ...plan,
+            onRead: (b) => {
+              reading.set(ref.path, b);
+              if (opts.onProgress) report();
+            },
+          }),
       },
       early,
     );

@@ -1,8 +1,7 @@
 // The read stage: find a policy's shards, and read each to documents with an account of every line.
 export { discoverShards } from './discover.js';
-export { readShard, emptyAccount } from './shard.js';
+export { readShard, emptyAccount, type ReadPace } from './shard.js';
 export { readChunkBytes, textSizeHint } from './source.js';
-export type { Pace } from './source.js';
 export { pathClassifier, shardKindOf, subsetExtractor, isLineSplittableEncoding, DEFAULT_ENCODING } from './classify.js';
 export type { PathClass, ShardKind } from './classify.js';
 export { firstInvalidUtf8 } from './decode.js';

@@ -10,13 +10,16 @@ import { isUtf8 } from 'node:buffer';
 import { isUtf8Name, lineDecoder, type LineDecoder, type LineFault } from './decode.js';
 import { LineSplitter, type LineSink } from './lines.js';
 import { recordParser, type RecordResult } from './records.js';
-import { pumpShard, type Pace } from './source.js';
+import { pumpShard } from './source.js';
 import type { RawDocument, ReadAccount, ReadOptions, RejectReason, ShardRef } from './types.js';
 
 /** Matches a line of only whitespace (JavaScript's \s: Unicode White_Space plus U+FEFF), which is blank in both formats. */
 const BLANK = /^\s*$/;
 
 const OPEN_BRACE = 0x7b;
+
+/** Called between raw chunks with the decompressed bytes read so far; a promise it returns holds reading back until it settles. */
+export type ReadPace = (bytesRead: number) => Promise<void> | undefined;
 
 /** Returns an account with every count at zero. */
 export function emptyAccount(): ReadAccount {
@@ -28,7 +31,7 @@ export function emptyAccount(): ReadAccount {
  * Never throws for bad input (a corrupt stream gives `broken`); an error thrown by `onDocument` is thrown on.
  * `pace`, called between raw chunks, can hold reading back while a consumer catches up.
  */
-export async function readShard(ref: ShardRef, opts: ReadOptions, onDocument: (doc: RawDocument) => void, pace?: Pace): Promise<ReadAccount> {
+export async function readShard(ref: ShardRef, opts: ReadOptions, onDocument: (doc: RawDocument) => void, pace?: ReadPace): Promise<ReadAccount> {
   const account = emptyAccount();
   const sink = ref.format === 'jsonl' ? new JsonlSink(account, opts, onDocument, ref.encoding) : new TextSink(account, opts, onDocument, ref.encoding);
   const utf8 = isUtf8Name(ref.encoding);
@@ -37,7 +40,7 @@ export async function readShard(ref: ShardRef, opts: ReadOptions, onDocument: (d
     stripBom: utf8,
     blockIsClean: utf8 ? (block) => block.indexOf(0) === -1 && isUtf8(block) : (block) => block.indexOf(0) === -1,
   });
-  const { compressedBytes, error } = await pumpShard(ref, (chunk) => splitter.write(chunk), pace);
+  const { compressedBytes, error } = await pumpShard(ref, (chunk) => splitter.write(chunk), pace ? () => pace(splitter.bytes) : undefined);
   if (error === undefined) {
     splitter.end();
     sink.finish();

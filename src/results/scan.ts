@@ -295,6 +295,8 @@ export interface BatchPlan {
   batchChars: number;
   /** At most this many batches handed out and not yet absorbed; reading waits beyond it, so memory stays bounded. */
   inFlight: number;
+  /** Told the decompressed bytes read so far, between raw chunks (for progress on a long shard). */
+  onRead?: (bytes: number) => void;
 }
 
 /**
@@ -361,7 +363,8 @@ export async function scanShardInBatches(
       chars += doc.text.length;
       if (chars >= plan.batchChars) flush();
     },
-    () => {
+    (bytes) => {
+      plan.onRead?.(bytes);
       if (failed) throw (failed as { error: unknown }).error;
       // Wait for the oldest batch not yet absorbed once too many are out.
       if (handedOut - absorbed < plan.inFlight) return undefined;

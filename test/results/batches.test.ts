@@ -141,6 +141,20 @@ describe('a shard measured in batches', () => {
     expect(txtResult.read.docs).toBe(stories.length);
   });
 
+  it('tells the bytes read so far as it goes, ending at the decompressed size of the shard', async () => {
+    const prepared = await prepareAnalyzers(policy);
+    const big = shards.reduce((a, b) => (a.sizeBytes >= b.sizeBytes ? a : b));
+    const seen: number[] = [];
+    const r = await scanShardInBatches(big, prepared.scan, prepared.analyzers, (b) => Promise.resolve(measureBatch(b, prepared.scan, prepared.analyzers)), {
+      batchChars: 2000,
+      inFlight: 2,
+      onRead: (bytes) => seen.push(bytes),
+    });
+    expect(seen.length).toBeGreaterThan(0);
+    expect(seen.every((b, i) => i === 0 || b >= seen[i - 1]!)).toBe(true);
+    expect(seen.at(-1)).toBe(r.read.bytes);
+  });
+
   it('rejects, instead of leaving documents out, when a batch is lost (a thread died)', async () => {
     const prepared = await prepareAnalyzers(policy);
     let calls = 0;
