@@ -8129,12 +8129,16 @@ async function cutoffOf(ref, settings) {
   await readShard(ref, settings.read, (doc) => smallest.add(documentHash(doc.text)));
   return smallest.cutoff();
 }
-async function scanShard(ref, settings, analyzers) {
+async function scanShard(ref, settings, analyzers, onRead) {
   const started = performance.now();
   const cutoff = await cutoffOf(ref, settings);
   const fold2 = new ShardFold(settings, analyzers, cutoff);
   const hash2 = createHash3("sha256");
-  const account = await readShard(hashedWhileRead(ref, hash2), settings.read, (doc) => fold2.offer(doc));
+  const pace = onRead ? (bytes2) => {
+    onRead(bytes2);
+    return void 0;
+  } : void 0;
+  const account = await readShard(hashedWhileRead(ref, hash2), settings.read, (doc) => fold2.offer(doc), pace);
   return fold2.finish(ref, account, hash2.digest("hex"), started);
 }
 function measureBatch(batch, settings, analyzers) {
@@ -17934,6 +17938,10 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
             return next();
           }
           const answered = current[0];
+          if (msg.type === "progress") {
+            if (answered?.kind === "shard") here.reading?.(answered.ref.path, msg.bytes);
+            return;
+          }
           if (msg.type === "result" && answered?.kind === "shard") {
             current.shift();
             onResult(msg.result);
@@ -18085,6 +18093,10 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     for (const b of reading.values()) inFlight += b;
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes2 + inFlight, elapsedMs: performance.now() - started });
   };
+  const readingAt = (path5, b) => {
+    reading.set(path5, b);
+    if (opts.onProgress) report();
+  };
   const done = (r) => {
     results.push(r);
     bytes2 += r.read.bytes;
@@ -18141,18 +18153,16 @@ async function measureShards(policy, shards, prepared, opts, started = performan
       {
         shard: (ref) => {
           throwIfFaultInjected(ref.path);
-          return scanShard(ref, prepared.scan, prepared.analyzers);
+          return scanShard(ref, prepared.scan, prepared.analyzers, opts.onProgress ? (b) => readingAt(ref.path, b) : void 0);
         },
+        reading: readingAt,
         batch: (ref, batch) => {
           throwIfFaultInjected(ref.path);
           return measureBatch(batch, prepared.scan, prepared.analyzers);
         },
         split: (ref, measure) => scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, {
           ...plan,
-          onRead: (b) => {
-            reading.set(ref.path, b);
-            if (opts.onProgress) report();
-          }
+          onRead: (b) => readingAt(ref.path, b)
         })
       },
       early
@@ -18162,7 +18172,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     local.unshift(...pooled);
   }
   for (const ref of local) {
-    const r = await scanShard(ref, prepared.scan, prepared.analyzers);
+    const r = await scanShard(ref, prepared.scan, prepared.analyzers, opts.onProgress ? (b) => readingAt(ref.path, b) : void 0);
     done(r);
     await store(r);
   }
@@ -18274,6 +18284,7 @@ async function mergePartials(policyFile, partFiles, opts) {
 
 // src/core/worker.ts
 import { parentPort, workerData, isMainThread } from "node:worker_threads";
+var PROGRESS_STEP_BYTES = 8 * 1024 * 1024;
 function isShardWorker() {
   return !isMainThread && workerData?.role === "sluice-shard-worker";
 }
@@ -18302,7 +18313,12 @@ async function runShardWorker() {
       void (async () => {
         try {
           throwIfFaultInjected(msg.ref.path);
-          const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers);
+          let told = 0;
+          const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers, (bytes2) => {
+            if (bytes2 - told < PROGRESS_STEP_BYTES) return;
+            told = bytes2;
+            post({ type: "progress", id: msg.id, bytes: bytes2 });
+          });
           post({ type: "result", id: msg.id, result });
         } catch (err) {
           post({ type: "error", id: msg.id, message: err.message });

@@ -247,12 +247,16 @@ export async function measureShards(
   const cached = new Set<string>();
   const keys = new Map<string, string>();
   let bytes = 0;
-  // Bytes read so far of shards being read here for batches: a long shard shows progress before it ends.
+  // Bytes read so far of shards not finished yet (here, in batches or in a worker): a long shard shows progress before it ends.
   const reading = new Map<string, number>();
   const report = (): void => {
     let inFlight = 0;
     for (const b of reading.values()) inFlight += b;
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes + inFlight, elapsedMs: performance.now() - started });
+  };
+  const readingAt = (path: string, b: number): void => {
+    reading.set(path, b);
+    if (opts.onProgress) report();
   };
   const done = (r: ShardResult): void => {
     results.push(r);
@@ -316,8 +320,9 @@ export async function measureShards(
       {
         shard: (ref) => {
           throwIfFaultInjected(ref.path);
-          return scanShard(ref, prepared.scan, prepared.analyzers);
+          return scanShard(ref, prepared.scan, prepared.analyzers, opts.onProgress ? (b) => readingAt(ref.path, b) : undefined);
         },
+        reading: readingAt,
         batch: (ref, batch) => {
           throwIfFaultInjected(ref.path);
           return measureBatch(batch, prepared.scan, prepared.analyzers);
@@ -325,10 +330,7 @@ export async function measureShards(
         split: (ref, measure) =>
           scanShardInBatches(ref, prepared.scan, prepared.analyzers, measure, {
             ...plan,
-            onRead: (b) => {
-              reading.set(ref.path, b);
-              if (opts.onProgress) report();
-            },
+            onRead: (b) => readingAt(ref.path, b),
           }),
       },
       early,
@@ -338,7 +340,7 @@ export async function measureShards(
     local.unshift(...pooled);
   }
   for (const ref of local) {
-    const r = await scanShard(ref, prepared.scan, prepared.analyzers);
+    const r = await scanShard(ref, prepared.scan, prepared.analyzers, opts.onProgress ? (b) => readingAt(ref.path, b) : undefined);
     done(r);
     await store(r);
   }

@@ -28,6 +28,7 @@ export type FromWorker =
   | { type: 'ready'; settingsId: string }
   | { type: 'result'; id: number; result: ShardResult }
   | { type: 'batch-result'; id: number; result: BatchResult }
+  | { type: 'progress'; id: number; bytes: number }
   | { type: 'error'; id: number | null; message: string };
 
 /** A shard that could not be measured: the run fails with its path. */
@@ -104,6 +105,8 @@ export interface PoolWork {
 /** How the main thread takes part: it measures whole shards and batches like a worker, and reads the split shards. */
 export interface HereMeasurer {
   shard(ref: ShardRef): Promise<ShardResult>;
+  /** Told the bytes a worker has read so far of the whole shard it is measuring. */
+  reading?(path: string, bytes: number): void;
   batch(ref: ShardRef, batch: DocumentBatch): BatchResult;
   /** Reads a split shard here, handing each batch to `measure` (which settles when some thread has measured it). */
   split(ref: ShardRef, measure: (batch: DocumentBatch) => Promise<BatchResult>): Promise<ShardResult>;
@@ -284,6 +287,10 @@ export async function measureInPool(
             return next();
           }
           const answered = current[0];
+          if (msg.type === 'progress') {
+            if (answered?.kind === 'shard') here.reading?.(answered.ref.path, msg.bytes);
+            return;
+          }
           if (msg.type === 'result' && answered?.kind === 'shard') {
             current.shift();
             onResult(msg.result);

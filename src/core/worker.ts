@@ -6,6 +6,9 @@ import { prepareAnalyzers } from './analyzers.js';
 import { loadPolicyOrThrow } from './check.js';
 import { throwIfFaultInjected, transferablesOf, type FromWorker, type ToWorker, type WorkerInit } from './pool.js';
 
+/** A worker measuring a whole shard tells the main thread how far it has read every this many bytes. */
+const PROGRESS_STEP_BYTES = 8 * 1024 * 1024;
+
 /** Returns whether this thread was started by the pool (the front end then runs `runShardWorker` instead of its main). */
 export function isShardWorker(): boolean {
   return !isMainThread && (workerData as WorkerInit | undefined)?.role === 'sluice-shard-worker';
@@ -37,7 +40,12 @@ export async function runShardWorker(): Promise<void> {
       void (async () => {
         try {
           throwIfFaultInjected(msg.ref.path);
-          const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers);
+          let told = 0;
+          const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers, (bytes) => {
+            if (bytes - told < PROGRESS_STEP_BYTES) return;
+            told = bytes;
+            post({ type: 'progress', id: msg.id, bytes });
+          });
           post({ type: 'result', id: msg.id, result });
         } catch (err) {
           post({ type: 'error', id: msg.id, message: (err as Error).message });

@@ -265,13 +265,22 @@ async function cutoffOf(ref: ShardRef, settings: ScanSettings): Promise<number> 
   return smallest.cutoff();
 }
 
-/** Returns the measured result of one shard; a failure inside an analyzer marks the shard broken rather than throwing. */
-export async function scanShard(ref: ShardRef, settings: ScanSettings, analyzers: ScanAnalyzers): Promise<ShardResult> {
+/**
+ * Returns the measured result of one shard; a failure inside an analyzer marks the shard broken rather than
+ * throwing. `onRead` is told the decompressed bytes read so far, between raw chunks (for progress).
+ */
+export async function scanShard(ref: ShardRef, settings: ScanSettings, analyzers: ScanAnalyzers, onRead?: (bytes: number) => void): Promise<ShardResult> {
   const started = performance.now();
   const cutoff = await cutoffOf(ref, settings);
   const fold = new ShardFold(settings, analyzers, cutoff);
   const hash = createHash('sha256');
-  const account = await readShard(hashedWhileRead(ref, hash), settings.read, (doc) => fold.offer(doc));
+  const pace = onRead
+    ? (bytes: number): undefined => {
+        onRead(bytes);
+        return undefined;
+      }
+    : undefined;
+  const account = await readShard(hashedWhileRead(ref, hash), settings.read, (doc) => fold.offer(doc), pace);
   return fold.finish(ref, account, hash.digest('hex'), started);
 }
 

@@ -52,4 +52,15 @@ describe('shards only the main thread can open', () => {
     expect(failure).toBeInstanceOf(ShardFailure);
     expect((failure as ShardFailure).shard).toBe('data/english/english-01.jsonl.gz');
   });
+
+  it('report progress while a shard is read, not only when it ends, up to the bytes of all shards', async () => {
+    const { run } = await setUp();
+    const seen: Array<{ bytes: number; shardsDone: number }> = [];
+    const results = await run({ workers: 1, onProgress: (p) => seen.push({ bytes: p.bytes, shardsDone: p.shardsDone }) });
+    const total = results.reduce((n, r) => n + r.read.bytes, 0);
+    // Updates between a shard's chunks as well as one per finished shard.
+    expect(seen.length).toBeGreaterThan(results.length);
+    expect(seen.every((p, i) => i === 0 || p.bytes >= seen[i - 1]!.bytes)).toBe(true);
+    expect(seen.at(-1)).toEqual({ bytes: total, shardsDone: results.length });
+  });
 });
