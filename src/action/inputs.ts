@@ -28,6 +28,8 @@ export interface ActionSettings {
   policies: string[];
   /** The bundle worker threads start from (the entry point's own file); shards are measured in this thread without it. */
   workerEntry?: string;
+  /** The `workers` input: threads measuring shards, or null for the default (by the work, up to the cores). */
+  workers: number | null;
   token: string;
   /** The `base` input, when set: a ref or commit to compare against instead of the PR's base. */
   base: string | null;
@@ -75,6 +77,14 @@ function booleanInput(env: NodeJS.ProcessEnv, name: string, fallback: boolean): 
   throw new ConfigError(`input \`${name}\`: \`${inputOf(env, name)}\` is not \`true\` or \`false\``);
 }
 
+function workersInput(env: NodeJS.ProcessEnv): number | null {
+  const value = inputOf(env, 'workers');
+  if (value === '') return null;
+  const n = Number(value);
+  if (!Number.isInteger(n) || n < 1) throw new ConfigError(`input \`workers\`: \`${value}\` is not a whole number of at least 1 (leave it empty for the default)`);
+  return n;
+}
+
 /** Returns the pull request the event is about, or null for other events; throws ConfigError when a PR event's payload lacks what a comparison needs. */
 export function pullRequestOf(eventName: string, payload: unknown): PullRequestContext | null {
   if (eventName !== 'pull_request' && eventName !== 'pull_request_target') return null;
@@ -119,6 +129,7 @@ export function settingsFromEnv(env: NodeJS.ProcessEnv): ActionSettings {
     failOn: oneOf(env, 'fail-on', FAIL_ON, 'error'),
     reportDir: path.resolve(workspace, inputOf(env, 'report-dir') || 'sluice-report'),
     cache: booleanInput(env, 'cache', true),
+    workers: workersInput(env),
     workspace,
     eventName,
     pullRequest: pullRequestOf(eventName, payload),

@@ -100,7 +100,14 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
 
   const usedKeys = new Set<string>();
   const usedSettings = new Set<string>();
-  const check: CheckOptions = { policies: [], cacheDir, cwd: s.workspace, onWarning: (m) => warn(`sluice: ${m}`), ...(s.workerEntry ? { workerEntry: s.workerEntry } : {}) };
+  const check: CheckOptions = {
+    policies: [],
+    cacheDir,
+    cwd: s.workspace,
+    onWarning: (m) => warn(`sluice: ${m}`),
+    ...(s.workerEntry ? { workerEntry: s.workerEntry } : {}),
+    ...(s.workers !== null ? { workers: s.workers } : {}),
+  };
   const judged: Judged[] = [];
   await mkdir(s.reportDir, { recursive: true });
   // One file stem per policy; two policies with one name get -2, -3, ...

@@ -21,7 +21,7 @@ describe('action.yml', () => {
   });
 
   it('documents every input with a description and a default, and README.md lists the same', () => {
-    expect(Object.keys(action.inputs)).toEqual(['policy', 'github-token', 'base', 'comment', 'fail-on', 'report-dir', 'cache']);
+    expect(Object.keys(action.inputs)).toEqual(['policy', 'github-token', 'base', 'comment', 'fail-on', 'report-dir', 'cache', 'workers']);
     for (const [name, input] of Object.entries(action.inputs)) {
       expect(input.description.length, name).toBeGreaterThan(20);
       expect(typeof input.default, name).toBe('string');
@@ -43,6 +43,13 @@ describe('action.yml', () => {
     const empty = settingsFromEnv({ GITHUB_WORKSPACE: workspace });
     const declared = settingsFromEnv(withDefaults);
     expect(empty).toEqual(declared);
-    expect(declared).toMatchObject({ policies: [path.join(workspace, 'sluice.yaml')], comment: 'on-change', failOn: 'error', cache: true, base: null, reportDir: path.join(workspace, 'sluice-report') });
+    expect(declared).toMatchObject({ policies: [path.join(workspace, 'sluice.yaml')], comment: 'on-change', failOn: 'error', cache: true, base: null, reportDir: path.join(workspace, 'sluice-report'), workers: null });
+  });
+
+  it('takes a worker count, and names the input when it is not a whole number of at least 1', () => {
+    expect(settingsFromEnv({ GITHUB_WORKSPACE: '/tmp/ws', INPUT_WORKERS: ' 3 ' }).workers).toBe(3);
+    for (const bad of ['0', '2.5', 'four', '-1']) {
+      expect(() => settingsFromEnv({ GITHUB_WORKSPACE: '/tmp/ws', INPUT_WORKERS: bad }), bad).toThrow(/input `workers`/);
+    }
   });
 });
