@@ -82,49 +82,88 @@ function emptyMoments() {
     expectedScriptChars: 0
   };
 }
-var MomentTally = class {
-  moments = {};
+var MOMENT_FIELDS = Object.keys(emptyMoments());
+var LIMB = 2 ** 32;
+var MomentTally = class _MomentTally {
+  sums = {};
   of(key) {
-    return this.moments[key] ??= emptyMoments();
+    return this.sums[key] ??= new Array(MOMENT_FIELDS.length * 2).fill(0);
+  }
+  /** Adds a non-negative integer (a product of counts, exact below 2^53) to field `f` of `s`. */
+  static put(s, f, v) {
+    const high = Math.floor(v / LIMB);
+    let hi = s[2 * f] + high;
+    let lo = s[2 * f + 1] + (v - high * LIMB);
+    if (lo >= LIMB) {
+      hi += 1;
+      lo -= LIMB;
+    }
+    s[2 * f] = hi;
+    s[2 * f + 1] = lo;
+  }
+  /** The sums as moments (each rounded once, from its exact value). */
+  get moments() {
+    const out = {};
+    for (const [key, s] of Object.entries(this.sums)) {
+      const m = emptyMoments();
+      MOMENT_FIELDS.forEach((field, f) => m[field] = s[2 * f] * LIMB + s[2 * f + 1]);
+      out[key] = m;
+    }
+    return out;
+  }
+  /** The exact sums, for a batch measured elsewhere to hand back. */
+  state() {
+    return this.sums;
   }
   /** Adds the sums of the documents that follow (a batch measured elsewhere); new keys come after the ones already seen. */
   absorb(o) {
-    for (const [key, m] of Object.entries(o)) {
+    for (const [key, s] of Object.entries(o)) {
       const into = this.of(key);
-      for (const field of Object.keys(m)) into[field] += m[field];
+      for (let f = 0; f < MOMENT_FIELDS.length; f++) {
+        let hi = into[2 * f] + s[2 * f];
+        let lo = into[2 * f + 1] + s[2 * f + 1];
+        if (lo >= LIMB) {
+          hi += 1;
+          lo -= LIMB;
+        }
+        into[2 * f] = hi;
+        into[2 * f + 1] = lo;
+      }
     }
   }
   /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
   add(m, tokens) {
+    const put = _MomentTally.put;
     const t = this.of(m.language);
-    t.bytes2 += m.bytes * m.bytes;
-    t.chars2 += m.chars * m.chars;
-    t.words2 += m.words * m.words;
+    put(t, F.bytes2, m.bytes * m.bytes);
+    put(t, F.chars2, m.chars * m.chars);
+    put(t, F.words2, m.words * m.words);
     const main2 = tokens?.main;
     const base = tokens?.baseline;
     if (main2) {
-      t.tokens2 += main2.tokens * main2.tokens;
-      t.wordTokens2 += main2.wordTokens * main2.wordTokens;
-      t.wordTokensWords += main2.wordTokens * m.words;
-      t.continued2 += main2.continuedWords * main2.continuedWords;
-      t.continuedWords += main2.continuedWords * m.words;
+      put(t, F.tokens2, main2.tokens * main2.tokens);
+      put(t, F.wordTokens2, main2.wordTokens * main2.wordTokens);
+      put(t, F.wordTokensWords, main2.wordTokens * m.words);
+      put(t, F.continued2, main2.continuedWords * main2.continuedWords);
+      put(t, F.continuedWords, main2.continuedWords * m.words);
     }
     if (base) {
-      t.baselineTokens2 += base.tokens * base.tokens;
-      t.baselineWordTokens2 += base.wordTokens * base.wordTokens;
-      if (main2) t.wordTokensBaseline += main2.wordTokens * base.wordTokens;
+      put(t, F.baselineTokens2, base.tokens * base.tokens);
+      put(t, F.baselineWordTokens2, base.wordTokens * base.wordTokens);
+      if (main2) put(t, F.wordTokensBaseline, main2.wordTokens * base.wordTokens);
     }
     if (m.purity !== null) {
       let scriptChars = 0;
       for (const n of Object.values(m.scripts)) scriptChars += n;
       const expected = Math.round(m.purity * scriptChars);
       const b = this.of(m.declared !== void 0 && m.declared !== "other" ? m.declared : m.language);
-      b.expected2 += expected * expected;
-      b.scriptChars2 += scriptChars * scriptChars;
-      b.expectedScriptChars += expected * scriptChars;
+      put(b, F.expected2, expected * expected);
+      put(b, F.scriptChars2, scriptChars * scriptChars);
+      put(b, F.expectedScriptChars, expected * scriptChars);
     }
   }
 };
+var F = Object.fromEntries(MOMENT_FIELDS.map((f, i) => [f, i]));
 function shardWeight(r) {
   if (!r.sample) return 1;
   return r.sample.docs > 0 ? r.sample.of / r.sample.docs : 0;
@@ -8037,7 +8076,7 @@ var ShardFold = class {
   /** Returns this fold as a batch result (the fold cannot be used afterwards). */
   toBatch() {
     const out = { tally: this.tally.state(), measured: this.measured, offered: this.offered };
-    if (this.moments) out.moments = this.moments.moments;
+    if (this.moments) out.moments = this.moments.state();
     if (this.dup) out.duplicates = this.dup.takePart();
     if (this.contamination) out.contamination = this.contamination;
     if (this.fallback && this.measured === 0) out.fallback = this.fallback;

@@ -113,52 +113,106 @@ export function emptyMoments(): LanguageMoments {
 }
 
 /** Accumulates the second-order sums of a shard's measured documents, per language. */
-export class MomentTally {
-  readonly moments: Record<string, LanguageMoments> = {};
+/** The fields of LanguageMoments, in their order. */
+const MOMENT_FIELDS = Object.keys(emptyMoments()) as Array<keyof LanguageMoments>;
+const LIMB = 2 ** 32;
 
-  private of(key: string): LanguageMoments {
-    return (this.moments[key] ??= emptyMoments());
+/**
+ * Exact running sums of a shard's moments, per key: each field as two limbs (multiples of 2^32,
+ * remainder), so sums stay exact far past 2^53 and come out the same however the documents were
+ * split into batches and in what order the batches' sums were added (floats would differ in the
+ * last bits once a sum passed 2^53). Plain data, so it crosses threads.
+ */
+export type MomentSums = Record<string, number[]>;
+
+export class MomentTally {
+  private readonly sums: MomentSums = {};
+
+  private of(key: string): number[] {
+    return (this.sums[key] ??= new Array<number>(MOMENT_FIELDS.length * 2).fill(0));
+  }
+
+  /** Adds a non-negative integer (a product of counts, exact below 2^53) to field `f` of `s`. */
+  private static put(s: number[], f: number, v: number): void {
+    const high = Math.floor(v / LIMB);
+    let hi = s[2 * f]! + high;
+    let lo = s[2 * f + 1]! + (v - high * LIMB);
+    if (lo >= LIMB) {
+      hi += 1;
+      lo -= LIMB;
+    }
+    s[2 * f] = hi;
+    s[2 * f + 1] = lo;
+  }
+
+  /** The sums as moments (each rounded once, from its exact value). */
+  get moments(): Record<string, LanguageMoments> {
+    const out: Record<string, LanguageMoments> = {};
+    for (const [key, s] of Object.entries(this.sums)) {
+      const m = emptyMoments();
+      MOMENT_FIELDS.forEach((field, f) => (m[field] = s[2 * f]! * LIMB + s[2 * f + 1]!));
+      out[key] = m;
+    }
+    return out;
+  }
+
+  /** The exact sums, for a batch measured elsewhere to hand back. */
+  state(): MomentSums {
+    return this.sums;
   }
 
   /** Adds the sums of the documents that follow (a batch measured elsewhere); new keys come after the ones already seen. */
-  absorb(o: Record<string, LanguageMoments>): void {
-    for (const [key, m] of Object.entries(o)) {
+  absorb(o: MomentSums): void {
+    for (const [key, s] of Object.entries(o)) {
       const into = this.of(key);
-      for (const field of Object.keys(m) as Array<keyof LanguageMoments>) into[field] += m[field];
+      for (let f = 0; f < MOMENT_FIELDS.length; f++) {
+        let hi = into[2 * f]! + s[2 * f]!;
+        let lo = into[2 * f + 1]! + s[2 * f + 1]!;
+        if (lo >= LIMB) {
+          hi += 1;
+          lo -= LIMB;
+        }
+        into[2 * f] = hi;
+        into[2 * f + 1] = lo;
+      }
     }
   }
 
   /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
   add(m: DocumentMeasure, tokens?: DocumentTokens): void {
+    const put = MomentTally.put;
     const t = this.of(m.language);
-    t.bytes2 += m.bytes * m.bytes;
-    t.chars2 += m.chars * m.chars;
-    t.words2 += m.words * m.words;
+    put(t, F.bytes2, m.bytes * m.bytes);
+    put(t, F.chars2, m.chars * m.chars);
+    put(t, F.words2, m.words * m.words);
     const main = tokens?.main;
     const base = tokens?.baseline;
     if (main) {
-      t.tokens2 += main.tokens * main.tokens;
-      t.wordTokens2 += main.wordTokens * main.wordTokens;
-      t.wordTokensWords += main.wordTokens * m.words;
-      t.continued2 += main.continuedWords * main.continuedWords;
-      t.continuedWords += main.continuedWords * m.words;
+      put(t, F.tokens2, main.tokens * main.tokens);
+      put(t, F.wordTokens2, main.wordTokens * main.wordTokens);
+      put(t, F.wordTokensWords, main.wordTokens * m.words);
+      put(t, F.continued2, main.continuedWords * main.continuedWords);
+      put(t, F.continuedWords, main.continuedWords * m.words);
     }
     if (base) {
-      t.baselineTokens2 += base.tokens * base.tokens;
-      t.baselineWordTokens2 += base.wordTokens * base.wordTokens;
-      if (main) t.wordTokensBaseline += main.wordTokens * base.wordTokens;
+      put(t, F.baselineTokens2, base.tokens * base.tokens);
+      put(t, F.baselineWordTokens2, base.wordTokens * base.wordTokens);
+      if (main) put(t, F.wordTokensBaseline, main.wordTokens * base.wordTokens);
     }
     if (m.purity !== null) {
       let scriptChars = 0;
       for (const n of Object.values(m.scripts)) scriptChars += n;
       const expected = Math.round(m.purity * scriptChars);
       const b = this.of(m.declared !== undefined && m.declared !== 'other' ? m.declared : m.language);
-      b.expected2 += expected * expected;
-      b.scriptChars2 += scriptChars * scriptChars;
-      b.expectedScriptChars += expected * scriptChars;
+      put(b, F.expected2, expected * expected);
+      put(b, F.scriptChars2, scriptChars * scriptChars);
+      put(b, F.expectedScriptChars, expected * scriptChars);
     }
   }
 }
+
+/** Index of each moment field in MOMENT_FIELDS. */
+const F = Object.fromEntries(MOMENT_FIELDS.map((f, i) => [f, i])) as Record<keyof LanguageMoments, number>;
 
 /** Returns the weight that scales a shard's measured sums to the whole shard: documents ÷ measured documents (1 when not sampled). */
 export function shardWeight(r: ShardResult): number {

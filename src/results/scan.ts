@@ -15,7 +15,7 @@ import type { DuplicateIndexPart } from '../measure/duplicates/index.js';
 import type { SamplingSpec } from '../policy/types.js';
 import { readChunkBytes, readShard } from '../read/index.js';
 import type { RawDocument, ReadAccount, ReadOptions, ShardRef } from '../read/types.js';
-import { describeSampling, documentHash, fractionCutoff, HASH_SPACE, MomentTally, SmallestHashes } from './sample.js';
+import { describeSampling, documentHash, fractionCutoff, HASH_SPACE, MomentTally, SmallestHashes, type MomentSums } from './sample.js';
 import { ShardTally, type DocumentTokens, type TallyState } from './tally.js';
 import { RESULT_SCHEMA, SAMPLES_PER_KIND, type LanguageMoments, type ShardResult } from './types.js';
 
@@ -65,7 +65,7 @@ type ContaminationTally = { docs: number; samples: Array<{ line: number; evalFil
 /** The fold of one batch's documents, to be absorbed in reading order (plain data, so it crosses threads). */
 export interface BatchResult {
   tally: TallyState;
-  moments?: Record<string, LanguageMoments>;
+  moments?: MomentSums;
   duplicates?: DuplicateIndexPart;
   contamination?: ContaminationTally;
   measured: number;
@@ -162,7 +162,7 @@ class ShardFold {
   /** Returns this fold as a batch result (the fold cannot be used afterwards). */
   toBatch(): BatchResult {
     const out: BatchResult = { tally: this.tally.state(), measured: this.measured, offered: this.offered };
-    if (this.moments) out.moments = this.moments.moments;
+    if (this.moments) out.moments = this.moments.state();
     if (this.dup) out.duplicates = this.dup.takePart();
     if (this.contamination) out.contamination = this.contamination;
     if (this.fallback && this.measured === 0) out.fallback = this.fallback;
