@@ -6925,6 +6925,28 @@ var EXACT_BYTES = 8;
 var KIND_EMPTY = 0;
 var KIND_WORDLESS = 1;
 var KIND_FULL = 2;
+function readLocationRecords(bytes2, start, end, documents, visit, fail) {
+  let at2 = start;
+  let line = 0;
+  const varint = () => {
+    let v = 0;
+    let scale = 1;
+    for (let shift = 0; shift < 49; shift += 7) {
+      if (at2 >= end) fail("location stream ends inside a record");
+      const byte = bytes2[at2++];
+      v += (byte & 127) * scale;
+      if (byte < 128) return v;
+      scale *= 128;
+    }
+    return fail("over-long number in the location stream");
+  };
+  for (let i = 0; i < documents; i++) {
+    const z = varint();
+    line += z % 2 === 0 ? z / 2 : -(z + 1) / 2;
+    visit(i, line, varint());
+  }
+  if (at2 !== end) fail(`${end - at2} bytes left after the last location record`);
+}
 function signatureBytes(hashes, bits) {
   return Math.ceil(hashes * bits / 8);
 }
@@ -7173,10 +7195,7 @@ var DuplicateIndexBuilder = class {
     }
     exact.at += EXACT_BYTES;
     sigs.at += this.sigBytes;
-    const delta = line - this.lastLine;
-    this.lastLine = line;
-    this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
-    this.stream.varint(language * 4 + kind);
+    this.writeLocation(line, language * 4 + kind);
     this.documents++;
   }
   /**
@@ -7204,31 +7223,25 @@ var DuplicateIndexBuilder = class {
     }
     this.exact.append(exact);
     this.signatures.append(signatures);
-    let at2 = 0;
-    let partLine = 0;
-    const next = () => {
-      let v = 0;
-      let scale = 1;
-      for (; ; ) {
-        if (at2 >= stream.length) throw new RangeError("DuplicateIndexBuilder: a part's location stream ends inside a record");
-        const b = stream[at2++];
-        v += (b & 127) * scale;
-        if (b < 128) return v;
-        scale *= 128;
+    readLocationRecords(
+      stream,
+      0,
+      stream.length,
+      documents,
+      (_i, line, tag) => this.writeLocation(line, tag),
+      (reason) => {
+        throw new RangeError(`DuplicateIndexBuilder: a part's ${reason}`);
       }
-    };
-    for (let i = 0; i < documents; i++) {
-      const zig = next();
-      partLine += zig % 2 === 0 ? zig / 2 : -(zig + 1) / 2;
-      const code = next();
-      const delta = partLine - this.lastLine;
-      this.lastLine = partLine;
-      this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
-      this.stream.varint(code);
-    }
-    if (at2 !== stream.length) throw new RangeError(`DuplicateIndexBuilder: a part's location stream holds more than its ${documents} documents`);
+    );
     this.documents += documents;
     this.lastOrdinal += documents;
+  }
+  /** Writes a document's location record: its line as a zigzag delta from the previous one, then its tag (language · 4 + kind). */
+  writeLocation(line, tag) {
+    const delta = line - this.lastLine;
+    this.lastLine = line;
+    this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
+    this.stream.varint(tag);
   }
   builtWith() {
     const o = this.options;
@@ -7611,31 +7624,21 @@ function round4(x) {
   return Math.round(x * 1e4) / 1e4;
 }
 function readLocations(s, visit) {
-  const b = s.blob;
-  let at2 = s.layout.streamOffset;
-  const end = at2 + s.layout.streamBytes;
-  let line = 0;
-  const varint = () => {
-    let v = 0;
-    let scale = 1;
-    for (let shift = 0; shift < 49; shift += 7) {
-      if (at2 >= end) throw new DuplicateIndexError(s.shard, "corrupt: location stream ends inside a record");
-      const byte = b[at2++];
-      v += (byte & 127) * scale;
-      if (byte < 128) return v;
-      scale *= 128;
+  const start = s.layout.streamOffset;
+  readLocationRecords(
+    s.blob,
+    start,
+    start + s.layout.streamBytes,
+    s.layout.documents,
+    (i, line, tag) => {
+      const kind = tag % 4;
+      if (kind > KIND_FULL) throw new DuplicateIndexError(s.shard, `corrupt: unknown document kind ${kind}`);
+      visit(i, line, Math.floor(tag / 4), kind);
+    },
+    (reason) => {
+      throw new DuplicateIndexError(s.shard, `corrupt: ${reason}`);
     }
-    throw new DuplicateIndexError(s.shard, "corrupt: over-long number in the location stream");
-  };
-  for (let i = 0; i < s.layout.documents; i++) {
-    const z = varint();
-    line += z % 2 === 0 ? z / 2 : -(z + 1) / 2;
-    const tag = varint();
-    const kind = tag % 4;
-    if (kind > KIND_FULL) throw new DuplicateIndexError(s.shard, `corrupt: unknown document kind ${kind}`);
-    visit(i, line, Math.floor(tag / 4), kind);
-  }
-  if (at2 !== end) throw new DuplicateIndexError(s.shard, `corrupt: ${end - at2} bytes left after the last location record`);
+  );
 }
 function locate(indexes, starts2, wanted) {
   const out = /* @__PURE__ */ new Map();

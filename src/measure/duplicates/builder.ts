@@ -12,6 +12,7 @@ import {
   MAGIC,
   bitsFor,
   checksum32,
+  readLocationRecords,
   signatureBytes,
 } from './format.js';
 import type { DuplicatesRule } from '../../policy/types.js';
@@ -212,10 +213,7 @@ export class DuplicateIndexBuilder {
     }
     exact.at += EXACT_BYTES;
     sigs.at += this.sigBytes;
-    const delta = line - this.lastLine;
-    this.lastLine = line;
-    this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
-    this.stream.varint(language * 4 + kind);
+    this.writeLocation(line, language * 4 + kind);
     this.documents++;
   }
 
@@ -246,31 +244,26 @@ export class DuplicateIndexBuilder {
     this.exact.append(exact);
     this.signatures.append(signatures);
     // The part's lines are deltas from line 0: decode each and write it again relative to this builder's last line.
-    let at = 0;
-    let partLine = 0;
-    const next = (): number => {
-      let v = 0;
-      let scale = 1;
-      for (;;) {
-        if (at >= stream.length) throw new RangeError('DuplicateIndexBuilder: a part\'s location stream ends inside a record');
-        const b = stream[at++]!;
-        v += (b & 0x7f) * scale;
-        if (b < 0x80) return v;
-        scale *= 0x80;
-      }
-    };
-    for (let i = 0; i < documents; i++) {
-      const zig = next();
-      partLine += zig % 2 === 0 ? zig / 2 : -(zig + 1) / 2;
-      const code = next();
-      const delta = partLine - this.lastLine;
-      this.lastLine = partLine;
-      this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
-      this.stream.varint(code);
-    }
-    if (at !== stream.length) throw new RangeError(`DuplicateIndexBuilder: a part's location stream holds more than its ${documents} documents`);
+    readLocationRecords(
+      stream,
+      0,
+      stream.length,
+      documents,
+      (_i, line, tag) => this.writeLocation(line, tag),
+      (reason) => {
+        throw new RangeError(`DuplicateIndexBuilder: a part's ${reason}`);
+      },
+    );
     this.documents += documents;
     this.lastOrdinal += documents;
+  }
+
+  /** Writes a document's location record: its line as a zigzag delta from the previous one, then its tag (language · 4 + kind). */
+  private writeLocation(line: number, tag: number): void {
+    const delta = line - this.lastLine;
+    this.lastLine = line;
+    this.stream.varint(delta >= 0 ? delta * 2 : -delta * 2 - 1);
+    this.stream.varint(tag);
   }
 
   private builtWith(): string {

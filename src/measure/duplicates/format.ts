@@ -43,6 +43,41 @@ export const KIND_EMPTY = 0;
 export const KIND_WORDLESS = 1;
 export const KIND_FULL = 2;
 
+/**
+ * Reads `documents` location records from bytes[start, end) (the layout above), calling `visit` with
+ * each document's position, line and tag (language · 4 + kind). `fail` is called with what is wrong
+ * when the records do not fill the range exactly; it must throw.
+ */
+export function readLocationRecords(
+  bytes: Uint8Array,
+  start: number,
+  end: number,
+  documents: number,
+  visit: (i: number, line: number, tag: number) => void,
+  fail: (reason: string) => never,
+): void {
+  let at = start;
+  let line = 0;
+  const varint = (): number => {
+    let v = 0;
+    let scale = 1;
+    for (let shift = 0; shift < 49; shift += 7) {
+      if (at >= end) fail('location stream ends inside a record');
+      const byte = bytes[at++]!;
+      v += (byte & 0x7f) * scale;
+      if (byte < 0x80) return v;
+      scale *= 0x80;
+    }
+    return fail('over-long number in the location stream');
+  };
+  for (let i = 0; i < documents; i++) {
+    const z = varint();
+    line += z % 2 === 0 ? z / 2 : -(z + 1) / 2;
+    visit(i, line, varint());
+  }
+  if (at !== end) fail(`${end - at} bytes left after the last location record`);
+}
+
 /** Returns the bytes one signature takes at `hashes` values of `bits` bits. */
 export function signatureBytes(hashes: number, bits: number): number {
   return Math.ceil((hashes * bits) / 8);

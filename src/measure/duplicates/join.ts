@@ -35,6 +35,7 @@ import {
   KIND_WORDLESS,
   incompatibility,
   parseIndex,
+  readLocationRecords,
   type IndexLayout,
 } from './format.js';
 import { checkOptions } from './builder.js';
@@ -433,31 +434,21 @@ function round4(x: number): number {
 
 /** Calls `visit(i, line, language, kind)` for every document of a shard's location stream, or throws DuplicateIndexError when the stream is malformed. */
 function readLocations(s: ShardIndex, visit: (i: number, line: number, language: number, kind: number) => void): void {
-  const b = s.blob;
-  let at = s.layout.streamOffset;
-  const end = at + s.layout.streamBytes;
-  let line = 0;
-  const varint = (): number => {
-    let v = 0;
-    let scale = 1;
-    for (let shift = 0; shift < 49; shift += 7) {
-      if (at >= end) throw new DuplicateIndexError(s.shard, 'corrupt: location stream ends inside a record');
-      const byte = b[at++]!;
-      v += (byte & 0x7f) * scale;
-      if (byte < 0x80) return v;
-      scale *= 0x80;
-    }
-    throw new DuplicateIndexError(s.shard, 'corrupt: over-long number in the location stream');
-  };
-  for (let i = 0; i < s.layout.documents; i++) {
-    const z = varint();
-    line += z % 2 === 0 ? z / 2 : -(z + 1) / 2;
-    const tag = varint();
-    const kind = tag % 4;
-    if (kind > KIND_FULL) throw new DuplicateIndexError(s.shard, `corrupt: unknown document kind ${kind}`);
-    visit(i, line, Math.floor(tag / 4), kind);
-  }
-  if (at !== end) throw new DuplicateIndexError(s.shard, `corrupt: ${end - at} bytes left after the last location record`);
+  const start = s.layout.streamOffset;
+  readLocationRecords(
+    s.blob,
+    start,
+    start + s.layout.streamBytes,
+    s.layout.documents,
+    (i, line, tag) => {
+      const kind = tag % 4;
+      if (kind > KIND_FULL) throw new DuplicateIndexError(s.shard, `corrupt: unknown document kind ${kind}`);
+      visit(i, line, Math.floor(tag / 4), kind);
+    },
+    (reason) => {
+      throw new DuplicateIndexError(s.shard, `corrupt: ${reason}`);
+    },
+  );
 }
 
 /** Returns the location of each wanted global document id, reading only the shards that hold one. */
