@@ -92,14 +92,18 @@ var MomentTally = class _MomentTally {
   /** Adds a non-negative integer (a product of counts, exact below 2^53) to field `f` of `s`. */
   static put(s, f, v) {
     const high = Math.floor(v / LIMB);
-    let hi = s[2 * f] + high;
-    let lo = s[2 * f + 1] + (v - high * LIMB);
-    if (lo >= LIMB) {
-      hi += 1;
-      lo -= LIMB;
+    _MomentTally.addLimbs(s, f, high, v - high * LIMB);
+  }
+  /** Adds `hi` · 2^32 + `lo` (lo below 2^32) to field `f` of `s`, carrying into the high limb. */
+  static addLimbs(s, f, hi, lo) {
+    let h = s[2 * f] + hi;
+    let l = s[2 * f + 1] + lo;
+    if (l >= LIMB) {
+      h += 1;
+      l -= LIMB;
     }
-    s[2 * f] = hi;
-    s[2 * f + 1] = lo;
+    s[2 * f] = h;
+    s[2 * f + 1] = l;
   }
   /** The sums as moments (each rounded once, from its exact value). */
   get moments() {
@@ -119,16 +123,7 @@ var MomentTally = class _MomentTally {
   absorb(o) {
     for (const [key, s] of Object.entries(o)) {
       const into = this.of(key);
-      for (let f = 0; f < MOMENT_FIELDS.length; f++) {
-        let hi = into[2 * f] + s[2 * f];
-        let lo = into[2 * f + 1] + s[2 * f + 1];
-        if (lo >= LIMB) {
-          hi += 1;
-          lo -= LIMB;
-        }
-        into[2 * f] = hi;
-        into[2 * f + 1] = lo;
-      }
+      for (let f = 0; f < MOMENT_FIELDS.length; f++) _MomentTally.addLimbs(into, f, s[2 * f], s[2 * f + 1]);
     }
   }
   /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
@@ -444,27 +439,12 @@ var ShardTally = class {
    * document here would have kept (the first N by line; for impure, the N lowest by purity, then line).
    */
   absorb(o) {
-    for (const [key, t] of Object.entries(o.languages)) {
-      const into = this.lang(key);
-      into.docs += t.docs;
-      into.bytes += t.bytes;
-      into.chars += t.chars;
-      into.words += t.words;
-      if (t.tokens) addTokens(into.tokens ??= emptyTokenTally(), t.tokens);
-      if (t.baseline) addTokens(into.baseline ??= emptyTokenTally(), t.baseline);
-      into.purityDocs += t.purityDocs;
-      into.scriptChars += t.scriptChars;
-      into.expectedScriptChars += t.expectedScriptChars;
-      for (let i = 0; i < into.purityHistogram.length; i++) into.purityHistogram[i] += t.purityHistogram[i] ?? 0;
-    }
+    for (const [key, t] of Object.entries(o.languages)) this.languages[key] = addLanguageTallies(this.lang(key), t);
     addCounts(this.scripts, o.scripts);
     addCounts(this.anomalyMasks, o.anomalyMasks);
     addCounts(this.anomalyDocs, o.anomalyDocs);
     for (const [d, row] of Object.entries(o.declared)) addCounts(this.declared[d] ??= {}, row);
-    for (const item of o.impure) {
-      const list = this.impure;
-      if (list.length < SAMPLES_PER_KIND || item.purity < list[list.length - 1].purity) keepLowest(list, item);
-    }
+    for (const item of o.impure) keepLowest(this.impure, item);
     for (const item of o.anomalous) if (this.anomalous.length < SAMPLES_PER_KIND) this.anomalous.push(item);
     for (const item of o.mismatch) if (this.mismatch.length < SAMPLES_PER_KIND) this.mismatch.push(item);
   }

@@ -135,14 +135,19 @@ export class MomentTally {
   /** Adds a non-negative integer (a product of counts, exact below 2^53) to field `f` of `s`. */
   private static put(s: number[], f: number, v: number): void {
     const high = Math.floor(v / LIMB);
-    let hi = s[2 * f]! + high;
-    let lo = s[2 * f + 1]! + (v - high * LIMB);
-    if (lo >= LIMB) {
-      hi += 1;
-      lo -= LIMB;
+    MomentTally.addLimbs(s, f, high, v - high * LIMB);
+  }
+
+  /** Adds `hi` · 2^32 + `lo` (lo below 2^32) to field `f` of `s`, carrying into the high limb. */
+  private static addLimbs(s: number[], f: number, hi: number, lo: number): void {
+    let h = s[2 * f]! + hi;
+    let l = s[2 * f + 1]! + lo;
+    if (l >= LIMB) {
+      h += 1;
+      l -= LIMB;
     }
-    s[2 * f] = hi;
-    s[2 * f + 1] = lo;
+    s[2 * f] = h;
+    s[2 * f + 1] = l;
   }
 
   /** The sums as moments (each rounded once, from its exact value). */
@@ -165,16 +170,7 @@ export class MomentTally {
   absorb(o: MomentSums): void {
     for (const [key, s] of Object.entries(o)) {
       const into = this.of(key);
-      for (let f = 0; f < MOMENT_FIELDS.length; f++) {
-        let hi = into[2 * f]! + s[2 * f]!;
-        let lo = into[2 * f + 1]! + s[2 * f + 1]!;
-        if (lo >= LIMB) {
-          hi += 1;
-          lo -= LIMB;
-        }
-        into[2 * f] = hi;
-        into[2 * f + 1] = lo;
-      }
+      for (let f = 0; f < MOMENT_FIELDS.length; f++) MomentTally.addLimbs(into, f, s[2 * f]!, s[2 * f + 1]!);
     }
   }
 

@@ -153,27 +153,12 @@ export class ShardTally {
    * document here would have kept (the first N by line; for impure, the N lowest by purity, then line).
    */
   absorb(o: TallyState): void {
-    for (const [key, t] of Object.entries(o.languages)) {
-      const into = this.lang(key);
-      into.docs += t.docs;
-      into.bytes += t.bytes;
-      into.chars += t.chars;
-      into.words += t.words;
-      if (t.tokens) addTokens((into.tokens ??= emptyTokenTally()), t.tokens);
-      if (t.baseline) addTokens((into.baseline ??= emptyTokenTally()), t.baseline);
-      into.purityDocs += t.purityDocs;
-      into.scriptChars += t.scriptChars;
-      into.expectedScriptChars += t.expectedScriptChars;
-      for (let i = 0; i < into.purityHistogram.length; i++) into.purityHistogram[i]! += t.purityHistogram[i] ?? 0;
-    }
+    for (const [key, t] of Object.entries(o.languages)) this.languages[key] = addLanguageTallies(this.lang(key), t);
     addCounts(this.scripts, o.scripts);
     addCounts(this.anomalyMasks, o.anomalyMasks);
     addCounts(this.anomalyDocs, o.anomalyDocs);
     for (const [d, row] of Object.entries(o.declared)) addCounts((this.declared[d] ??= {}), row);
-    for (const item of o.impure) {
-      const list = this.impure;
-      if (list.length < SAMPLES_PER_KIND || item.purity < list[list.length - 1]!.purity) keepLowest(list, item);
-    }
+    for (const item of o.impure) keepLowest(this.impure, item);
     for (const item of o.anomalous) if (this.anomalous.length < SAMPLES_PER_KIND) this.anomalous.push(item);
     for (const item of o.mismatch) if (this.mismatch.length < SAMPLES_PER_KIND) this.mismatch.push(item);
   }
