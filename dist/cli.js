@@ -18005,14 +18005,17 @@ function shardsToSplit(shards, workers, minBytes = MIN_SPLIT_BYTES) {
   const limit = Math.max(minBytes, total / (workers * 4));
   return new Set(shards.filter((r) => workOf(r) >= limit));
 }
-async function withTextHints(refs) {
-  const out = new Array(refs.length);
+async function mapAtMost(items, limit, fn) {
+  const out = new Array(items.length);
   let next = 0;
-  const hint = async () => {
-    for (let i = next++; i < refs.length; i = next++) out[i] = { ...refs[i], textBytesHint: await textSizeHint(refs[i]) };
+  const run2 = async () => {
+    for (let i = next++; i < items.length; i = next++) out[i] = await fn(items[i]);
   };
-  await Promise.all(Array.from({ length: Math.min(CACHE_LOOKUPS_AT_ONCE, refs.length) }, hint));
+  await Promise.all(Array.from({ length: Math.min(limit, items.length) }, run2));
   return out;
+}
+function withTextHints(refs) {
+  return mapAtMost(refs, CACHE_LOOKUPS_AT_ONCE, async (ref) => ({ ...ref, textBytesHint: await textSizeHint(ref) }));
 }
 var ConfigError = class extends Error {
   name = "ConfigError";
@@ -18128,17 +18131,11 @@ async function measureShards(policy, shards, prepared, opts, started = performan
   const todo = [];
   if (!cache) todo.push(...shards);
   else {
-    const lookups = new Array(shards.length);
-    let nextIndex = 0;
-    const lookUp = async () => {
-      for (let i = nextIndex++; i < shards.length; i = nextIndex++) {
-        const ref = shards[i];
-        const contentId = await (opts.contentKey ?? contentIdOf)(ref);
-        keys.set(ref.path, contentId);
-        lookups[i] = await cache.get(contentId, prepared.settingsId, ref);
-      }
-    };
-    await Promise.all(Array.from({ length: Math.min(CACHE_LOOKUPS_AT_ONCE, shards.length) }, lookUp));
+    const lookups = await mapAtMost(shards, CACHE_LOOKUPS_AT_ONCE, async (ref) => {
+      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
+      keys.set(ref.path, contentId);
+      return cache.get(contentId, prepared.settingsId, ref);
+    });
     shards.forEach((ref, i) => {
       const hit = lookups[i];
       if (hit) {
@@ -18151,20 +18148,16 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     const key = keys.get(r.path);
     if (cache && key) await cache.put({ ...r, contentId: key });
   };
-  let local = todo.filter((r) => r.open !== void 0);
-  let pooled = todo.filter((r) => r.open === void 0);
+  const progressOf = (ref) => opts.onProgress ? (b) => readingAt(ref.path, b) : void 0;
   const workers = threadsFor(todo, opts);
   if (workers > 1 && canRunWorkers(opts.workerEntry)) {
-    pooled = await withTextHints(pooled);
-    const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
-    for (const r of local) split.add(r);
-    pooled.push(...local);
-    local = [];
+    const files = await withTextHints(todo.filter((r) => r.open === void 0));
+    const split = shardsToSplit(files, workers, opts.minSplitBytes);
     const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending = [];
     const plan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(
-      { whole: pooled.filter((r) => !split.has(r)), split: pooled.filter((r) => split.has(r)) },
+      { whole: files.filter((r) => !split.has(r)), split: [...files.filter((r) => split.has(r)), ...todo.filter((r) => r.open !== void 0)] },
       init,
       opts.workerEntry,
       workers,
@@ -18175,7 +18168,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
       {
         shard: (ref) => {
           throwIfFaultInjected(ref.path);
-          return scanShard(ref, prepared.scan, prepared.analyzers, opts.onProgress ? (b) => readingAt(ref.path, b) : void 0);
+          return scanShard(ref, prepared.scan, prepared.analyzers, progressOf(ref));
         },
         reading: readingAt,
         batch: (ref, batch) => {
@@ -18191,12 +18184,11 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     );
     await Promise.all(pending);
   } else {
-    local.unshift(...pooled);
-  }
-  for (const ref of local) {
-    const r = await scanShard(ref, prepared.scan, prepared.analyzers, opts.onProgress ? (b) => readingAt(ref.path, b) : void 0);
-    done(r);
-    await store(r);
+    for (const ref of todo) {
+      const r = await scanShard(ref, prepared.scan, prepared.analyzers, progressOf(ref));
+      done(r);
+      await store(r);
+    }
   }
   return { results, cached };
 }

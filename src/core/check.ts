@@ -56,15 +56,20 @@ export function shardsToSplit(shards: readonly ShardRef[], workers: number, minB
   return new Set(shards.filter((r) => workOf(r) >= limit));
 }
 
-/** Returns the shards with the text each holds estimated from its own metadata (a few bytes read per shard), to share out work. */
-async function withTextHints(refs: readonly ShardRef[]): Promise<ShardRef[]> {
-  const out: ShardRef[] = new Array(refs.length);
+/** Returns `fn` of every item, in the items' order, with at most `limit` calls in flight (small file reads: overlapped, memory flat). */
+async function mapAtMost<T, R>(items: readonly T[], limit: number, fn: (item: T) => Promise<R>): Promise<R[]> {
+  const out: R[] = new Array(items.length);
   let next = 0;
-  const hint = async (): Promise<void> => {
-    for (let i = next++; i < refs.length; i = next++) out[i] = { ...refs[i]!, textBytesHint: await textSizeHint(refs[i]!) };
+  const run = async (): Promise<void> => {
+    for (let i = next++; i < items.length; i = next++) out[i] = await fn(items[i]!);
   };
-  await Promise.all(Array.from({ length: Math.min(CACHE_LOOKUPS_AT_ONCE, refs.length) }, hint));
+  await Promise.all(Array.from({ length: Math.min(limit, items.length) }, run));
   return out;
+}
+
+/** Returns the shards with the text each holds estimated from its own metadata (a few bytes read per shard), to share out work. */
+function withTextHints(refs: readonly ShardRef[]): Promise<ShardRef[]> {
+  return mapAtMost(refs, CACHE_LOOKUPS_AT_ONCE, async (ref) => ({ ...ref, textBytesHint: await textSizeHint(ref) }));
 }
 
 /** A run that cannot be judged (bad policy, no shards, unreadable root): exit code 2. */
@@ -270,17 +275,11 @@ export async function measureShards(
   else {
     // Cache look-ups are small file reads: overlap them, so a PR over a large corpus does not
     // wait for hundreds of reads in a row. Results keep the shards' order.
-    const lookups: Array<ShardResult | undefined> = new Array(shards.length);
-    let nextIndex = 0;
-    const lookUp = async (): Promise<void> => {
-      for (let i = nextIndex++; i < shards.length; i = nextIndex++) {
-        const ref = shards[i]!;
-        const contentId = await (opts.contentKey ?? contentIdOf)(ref);
-        keys.set(ref.path, contentId);
-        lookups[i] = await cache.get(contentId, prepared.settingsId, ref);
-      }
-    };
-    await Promise.all(Array.from({ length: Math.min(CACHE_LOOKUPS_AT_ONCE, shards.length) }, lookUp));
+    const lookups = await mapAtMost(shards, CACHE_LOOKUPS_AT_ONCE, async (ref) => {
+      const contentId = await (opts.contentKey ?? contentIdOf)(ref);
+      keys.set(ref.path, contentId);
+      return cache.get(contentId, prepared.settingsId, ref);
+    });
     shards.forEach((ref, i) => {
       const hit = lookups[i];
       if (hit) {
@@ -294,22 +293,19 @@ export async function measureShards(
     const key = keys.get(r.path);
     if (cache && key) await cache.put({ ...r, contentId: key });
   };
-  // Shards that only this thread can open (git blobs, in the Action's base tree) are never sent whole
-  // to a worker; with workers, this thread reads them and the workers measure their batches.
-  let local = todo.filter((r) => r.open !== undefined);
-  let pooled = todo.filter((r) => r.open === undefined);
+  // Told the bytes read so far of a shard measured in this thread, when progress is shown.
+  const progressOf = (ref: ShardRef): ((b: number) => void) | undefined => (opts.onProgress ? (b) => readingAt(ref.path, b) : undefined);
   const workers = threadsFor(todo, opts);
   if (workers > 1 && canRunWorkers(opts.workerEntry)) {
-    pooled = await withTextHints(pooled);
-    const split = shardsToSplit(pooled, workers, opts.minSplitBytes);
-    for (const r of local) split.add(r);
-    pooled.push(...local);
-    local = [];
+    // Shards that only this thread can open (git blobs, in the Action's base tree) are never sent whole
+    // to a worker: this thread reads them and the workers measure their batches.
+    const files = await withTextHints(todo.filter((r) => r.open === undefined));
+    const split = shardsToSplit(files, workers, opts.minSplitBytes);
     const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending: Promise<void>[] = [];
     const plan: BatchPlan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(
-      { whole: pooled.filter((r) => !split.has(r)), split: pooled.filter((r) => split.has(r)) },
+      { whole: files.filter((r) => !split.has(r)), split: [...files.filter((r) => split.has(r)), ...todo.filter((r) => r.open !== undefined)] },
       init,
       opts.workerEntry,
       workers,
@@ -320,7 +316,7 @@ export async function measureShards(
       {
         shard: (ref) => {
           throwIfFaultInjected(ref.path);
-          return scanShard(ref, prepared.scan, prepared.analyzers, opts.onProgress ? (b) => readingAt(ref.path, b) : undefined);
+          return scanShard(ref, prepared.scan, prepared.analyzers, progressOf(ref));
         },
         reading: readingAt,
         batch: (ref, batch) => {
@@ -337,12 +333,11 @@ export async function measureShards(
     );
     await Promise.all(pending);
   } else {
-    local.unshift(...pooled);
-  }
-  for (const ref of local) {
-    const r = await scanShard(ref, prepared.scan, prepared.analyzers, opts.onProgress ? (b) => readingAt(ref.path, b) : undefined);
-    done(r);
-    await store(r);
+    for (const ref of todo) {
+      const r = await scanShard(ref, prepared.scan, prepared.analyzers, progressOf(ref));
+      done(r);
+      await store(r);
+    }
   }
   return { results, cached };
 }
