@@ -7,6 +7,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { discoverOrThrow, loadPolicyOrThrow, measureShards, prepareOrThrow, type CheckOptions } from '../../src/core/check.js';
 import { ShardFailure } from '../../src/core/pool.js';
 import type { ShardRef } from '../../src/read/types.js';
+import { storedShardResult } from '../../src/results/serialize.js';
 import type { ShardResult } from '../../src/results/types.js';
 
 const REPO = resolve(__dirname, '..', '..');
@@ -14,10 +15,9 @@ const POLICY = join(REPO, 'examples/newsroom/policies/newsroom.yaml');
 // The built bundle doubles as the worker script (test/global-setup.ts builds it).
 const ENTRY = join(REPO, 'dist', 'cli.js');
 
+/** The results as stored (duplicate indexes as base64), in path order, timing aside. */
 const comparable = (results: ShardResult[]): string =>
-  JSON.stringify(
-    [...results].sort((a, b) => (a.path < b.path ? -1 : 1)).map((r) => ({ ...r, elapsedMs: 0, duplicateIndex: r.duplicateIndex ? Buffer.from(r.duplicateIndex).toString('base64') : null })),
-  );
+  JSON.stringify([...results].sort((a, b) => (a.path < b.path ? -1 : 1)).map((r) => ({ ...storedShardResult(r), elapsedMs: 0 })));
 
 async function setUp(): Promise<{ run: (opts: Partial<CheckOptions>) => Promise<ShardResult[]> }> {
   const policy = await loadPolicyOrThrow(POLICY);

@@ -16,6 +16,7 @@ import type { Policy, SamplingSpec } from '../../src/policy/types.js';
 import { discoverShards, readShard } from '../../src/read/index.js';
 import type { ShardRef } from '../../src/read/types.js';
 import { measureBatch, scanShard, scanShardInBatches, type BatchResult, type DocumentBatch, type ScanAnalyzers } from '../../src/results/scan.js';
+import { storedShardResult } from '../../src/results/serialize.js';
 import type { ShardResult } from '../../src/results/types.js';
 import { generator as xorshift } from '../fixtures/prng.js';
 
@@ -31,9 +32,9 @@ beforeAll(async () => {
   shards = (await discoverShards(policy.root, policy.corpus)).shards;
 }, 60_000);
 
-/** The result as stored, timing aside (the duplicate index as its bytes). */
+/** The result as stored (the duplicate index as base64), timing aside. */
 function comparable(r: ShardResult): string {
-  return JSON.stringify({ ...r, elapsedMs: 0, duplicateIndex: r.duplicateIndex ? Buffer.from(r.duplicateIndex).toString('base64') : null });
+  return JSON.stringify({ ...storedShardResult(r), elapsedMs: 0 });
 }
 
 /**
