@@ -1,6 +1,6 @@
 // Generates the policy schema's validator ahead of time, so a run does not compile
-// schemas/policy.schema.json with ajv at start-up (profiled: about 100 ms of every `sluice`
-// process and of every worker thread, an eighth of a warm-cache check).
+// schemas/policy.schema.json with ajv at start-up, in every `sluice` process and worker thread
+// (one CPU profile: about a ninth of a warm-cache check).
 //
 //   node scripts/gen-policy-validator.mjs          writes src/policy/policy-validator.generated.ts
 //   node scripts/gen-policy-validator.mjs --check  exits 1 if that file is not what the schema gives

@@ -42,8 +42,8 @@ export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = 
     }
     const data = await importBuiltin(name);
     // The rank table is parsed on first use: a run whose shards all come from the cache never
-    // counts a token, and parsing o200k_base takes about 130 ms (profiled warm `sluice check`
-    // runs spent about an eighth of their time on it). The data is the package's own, so a
+    // counts a token, and parsing o200k_base took about an eighth of such a run's time (one CPU
+    // profile of a warm-cache `sluice check` on the bench corpus). The data is the package's own, so a
     // damaged table, the one failure deferred by this, is not expected.
     return lazyCounter(`builtin:${name}`, name, () =>
       createRankCounter({
