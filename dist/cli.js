@@ -17085,6 +17085,133 @@ function quote(s) {
   return JSON.stringify(s.length > 60 ? `${s.slice(0, 60)}...` : s);
 }
 
+// src/measure/tokens/shared-counts.ts
+var DEFAULT_SHARED_ENTRIES = 1 << 18;
+var UNITS_PER_ENTRY = 16;
+var MAGIC2 = 0;
+var OWNER_1 = 1;
+var OWNER_2 = 2;
+var USED = 3;
+var UNITS_USED = 4;
+var CAPACITY = 5;
+var SLOT_BITS2 = 6;
+var UNITS = 7;
+var HEADER_WORDS = 8;
+var MAGIC_VALUE = 1936474929;
+var ENTRY_WORDS = 3;
+function ownerHashes(owner) {
+  const a = hashRange(owner, 0, owner.length);
+  let b = 2654435769 | 0;
+  for (let i = 0; i < owner.length; i++) b = Math.imul(b ^ owner.charCodeAt(i), 1540483477) ^ b >>> 15;
+  return [a, b];
+}
+var SharedPieceCounts = class _SharedPieceCounts {
+  constructor(buffer) {
+    this.buffer = buffer;
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    this.header = header;
+    this.capacity = header[CAPACITY];
+    this.units = header[UNITS];
+    const slotCount2 = 1 << header[SLOT_BITS2];
+    this.mask = slotCount2 - 1;
+    let at2 = HEADER_WORDS * 4;
+    this.slots = new Int32Array(buffer, at2, slotCount2);
+    at2 += slotCount2 * 4;
+    this.entries = new Int32Array(buffer, at2, this.capacity * ENTRY_WORDS);
+    at2 += this.capacity * ENTRY_WORDS * 4;
+    this.arena = new Uint16Array(buffer, at2, this.units);
+  }
+  buffer;
+  header;
+  slots;
+  entries;
+  arena;
+  mask;
+  capacity;
+  units;
+  /** Returns an empty table for the tokenizer `owner` holding up to `capacity` pieces (at least 1). */
+  static create(owner, capacity = DEFAULT_SHARED_ENTRIES) {
+    if (!(Number.isInteger(capacity) && capacity >= 1)) throw new RangeError(`shared count table: capacity must be a positive integer, got ${capacity}`);
+    let bits = 1;
+    while (1 << bits < capacity * 2) bits++;
+    const units = capacity * UNITS_PER_ENTRY;
+    const bytes2 = HEADER_WORDS * 4 + (1 << bits) * 4 + capacity * ENTRY_WORDS * 4 + units * 2;
+    const buffer = new SharedArrayBuffer(bytes2);
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const [a, b] = ownerHashes(owner);
+    header[OWNER_1] = a;
+    header[OWNER_2] = b;
+    header[CAPACITY] = capacity;
+    header[SLOT_BITS2] = bits;
+    header[UNITS] = units;
+    header[MAGIC2] = MAGIC_VALUE;
+    return new _SharedPieceCounts(buffer);
+  }
+  /** Returns the table in `buffer` when it was made for the tokenizer `owner`, else null. */
+  static attach(buffer, owner) {
+    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS * 4) return null;
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const [a, b] = ownerHashes(owner);
+    if (header[MAGIC2] !== MAGIC_VALUE || header[OWNER_1] !== a || header[OWNER_2] !== b) return null;
+    return new _SharedPieceCounts(buffer);
+  }
+  /** Returns the count of text[start, end) (its hash as from hashRange), or -1 when no thread has added it. */
+  find(text, start, end, hash2) {
+    const { slots, entries, arena, mask } = this;
+    const length = end - start;
+    for (let i = hash2 & mask; ; i = i + 1 & mask) {
+      const v = Atomics.load(slots, i);
+      if (v === 0) return -1;
+      const e = (v - 1) * ENTRY_WORDS;
+      if (entries[e] !== hash2) continue;
+      const meta = entries[e + 2];
+      if (meta >>> 16 !== length) continue;
+      let at2 = entries[e + 1];
+      let k = start;
+      while (k < end && arena[at2] === text.charCodeAt(k)) {
+        at2++;
+        k++;
+      }
+      if (k === end) return meta & 65535;
+    }
+  }
+  /** Adds the count of text[start, end); returns false when the table is full (or the piece too long to keep). */
+  add(text, start, end, hash2, count3) {
+    const length = end - start;
+    if (length > MAX_CACHED_PIECE_LENGTH || count3 > 65535 || count3 < 0) return false;
+    const header = this.header;
+    if (Atomics.load(header, USED) >= this.capacity || Atomics.load(header, UNITS_USED) + length > this.units) return false;
+    const entry = Atomics.add(header, USED, 1);
+    if (entry >= this.capacity) return false;
+    const at2 = Atomics.add(header, UNITS_USED, length);
+    if (at2 + length > this.units) return false;
+    const { slots, entries, arena, mask } = this;
+    for (let k = 0; k < length; k++) arena[at2 + k] = text.charCodeAt(start + k);
+    const e = entry * ENTRY_WORDS;
+    entries[e] = hash2;
+    entries[e + 1] = at2;
+    entries[e + 2] = length << 16 | count3;
+    for (let i = hash2 & mask; ; i = i + 1 & mask) {
+      const prev = Atomics.compareExchange(slots, i, 0, entry + 1);
+      if (prev === 0) return true;
+      const p = (prev - 1) * ENTRY_WORDS;
+      if (entries[p] === hash2 && entries[p + 2] >>> 16 === length) {
+        let o = entries[p + 1];
+        let k = start;
+        while (k < end && arena[o] === text.charCodeAt(k)) {
+          o++;
+          k++;
+        }
+        if (k === end) return true;
+      }
+    }
+  }
+  /** Entries added so far, by every thread (at most the capacity). */
+  get size() {
+    return Math.min(Atomics.load(this.header, USED), this.capacity);
+  }
+};
+
 // src/measure/tokens/ascii-split.ts
 var APOSTROPHE = 39;
 var SPACE2 = 32;
@@ -17312,17 +17439,26 @@ function createRankCounter(options) {
   const split = new RegExp(options.pattern, "gu");
   const sticky = new RegExp(options.pattern, "guy");
   const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
+  let shared = options.shared === void 0 ? SharedPieceCounts.create(options.id) : options.shared;
+  let sharedHits = 0;
   const cache = new PieceCache(options.generationSize);
   const words = new PieceCache(options.generationSize);
   const builtinPattern = Object.values(BUILTIN_PATTERNS).includes(options.pattern);
   const countRange = (text, start, end) => {
     if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(utf8Bytes(text.slice(start, end)), ranks);
     const hash2 = hashRange(text, start, end);
+    if (shared !== null) {
+      const known = shared.find(text, start, end, hash2);
+      if (known >= 0) {
+        sharedHits++;
+        return known;
+      }
+    }
     const cached = cache.find(text, start, end, hash2);
     if (cached !== void 0) return cached;
     const piece = text.slice(start, end);
     const n = bytePairCount(utf8Bytes(piece), ranks);
-    cache.add(piece, hash2, n);
+    if (shared === null || !shared.add(text, start, end, hash2, n)) cache.add(piece, hash2, n);
     return n;
   };
   const countByRegex = (text, from, pieces) => {
@@ -17388,7 +17524,17 @@ function createRankCounter(options) {
         return { tokens: guarded(text, pieces), unknown: 0 };
       }
     } : {},
-    cacheStats: () => cache.stats()
+    cacheStats: () => {
+      const own = cache.stats();
+      return { ...own, hits: own.hits + sharedHits, entries: own.entries + (shared?.size ?? 0) };
+    },
+    shareCounts: () => shared?.buffer ?? null,
+    adoptCounts: (buffer) => {
+      const table2 = SharedPieceCounts.attach(buffer, options.id);
+      if (table2 === null) return false;
+      shared = table2;
+      return true;
+    }
   };
 }
 
@@ -17409,20 +17555,25 @@ async function importBuiltin(name) {
 }
 async function loadTokenizer(spec, options = {}) {
   const generationSize = options.cacheGenerationSize;
+  const sharedEntries = options.sharedEntries ?? DEFAULT_SHARED_ENTRIES;
+  const sharedTable = (id) => sharedEntries > 0 ? SharedPieceCounts.create(id, sharedEntries) : null;
   if (spec.kind === "builtin") {
     const name = spec.name;
     if (!isBuiltinName(name)) {
       throw new TokenizerError("load", name, `unknown builtin tokenizer; the builtins are ${BUILTIN_NAMES.join(", ")}`);
     }
     const data2 = await importBuiltin(name);
+    const id = `builtin:${name}`;
     return lazyCounter(
-      `builtin:${name}`,
+      id,
       name,
-      () => createRankCounter({
-        id: `builtin:${name}`,
+      () => sharedTable(id),
+      (shared) => createRankCounter({
+        id,
         label: name,
         ranks: parseBuiltinRanks(data2.bpe_ranks, name),
         pattern: data2.pat_str,
+        shared,
         ...generationSize === void 0 ? {} : { generationSize }
       })
     );
@@ -17444,11 +17595,13 @@ async function loadTokenizer(spec, options = {}) {
   }
   if (spec.format === "tiktoken") {
     const { pattern, patternId } = resolvePattern(spec.pattern, spec.file);
+    const id = `tiktoken:sha256:${digest}:pattern:${patternId}`;
     return createRankCounter({
-      id: `tiktoken:sha256:${digest}:pattern:${patternId}`,
+      id,
       label: spec.file,
       ranks: parseRankFile(text, spec.file),
       pattern,
+      shared: sharedTable(id),
       ...generationSize === void 0 ? {} : { generationSize }
     });
   }
@@ -17473,9 +17626,11 @@ function resolvePattern(pattern, file) {
   }
   return { pattern: name, patternId: `sha256:${createHash4("sha256").update(name).digest("hex").slice(0, 16)}` };
 }
-function lazyCounter(id, label, make) {
+function lazyCounter(id, label, newTable, make) {
   let real;
-  const get = () => real ??= make();
+  let table2;
+  const tableOf = () => table2 === void 0 ? table2 = newTable() : table2;
+  const get = () => real ??= make(tableOf());
   return {
     id,
     label,
@@ -17485,7 +17640,15 @@ function lazyCounter(id, label, make) {
     count: (text) => get().count(text),
     countPiece: (piece) => get().countPiece(piece),
     countWithPieces: (text, pieces) => get().countWithPieces(text, pieces),
-    cacheStats: () => real ? real.cacheStats() : { hits: 0, misses: 0, evictions: 0, entries: 0 }
+    cacheStats: () => real ? real.cacheStats() : { hits: 0, misses: 0, evictions: 0, entries: 0 },
+    shareCounts: () => real ? real.shareCounts() : tableOf()?.buffer ?? null,
+    adoptCounts: (buffer) => {
+      if (real) return real.adoptCounts(buffer);
+      const adopted = SharedPieceCounts.attach(buffer, id);
+      if (adopted === null) return false;
+      table2 = adopted;
+      return true;
+    }
   };
 }
 
@@ -17741,7 +17904,22 @@ async function prepareAnalyzers(policy) {
     const idx = evalIndex;
     analyzers.contamination = (text) => findContamination(idx, text);
   }
+  const counters = { main: main2, baseline };
   return {
+    sharedCounts() {
+      const tables2 = {};
+      for (const role of ["main", "baseline"]) {
+        const table2 = counters[role]?.shareCounts?.();
+        if (table2) tables2[role] = table2;
+      }
+      return tables2;
+    },
+    adoptCounts(tables2) {
+      for (const role of ["main", "baseline"]) {
+        const table2 = tables2[role];
+        if (table2) counters[role]?.adoptCounts?.(table2);
+      }
+    },
     settingsId,
     scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId, ...policy.sampling ? { sampling: policy.sampling } : {} },
     analyzers,
@@ -17831,7 +18009,7 @@ function transferablesOf(r) {
   const d = r.duplicates;
   return d ? [d.exact.buffer, d.signatures.buffer, d.stream.buffer] : [];
 }
-async function measureInPool(work, init, entry, workers, onResult, here, started = []) {
+async function measureInPool(work, init, entry, workers, onResult, here, started = [], shared = {}) {
   const shardQueue = work.whole.map((ref, id) => ({ kind: "shard", ref, id })).sort((a, b) => workOf(b.ref) - workOf(a.ref) || a.id - b.id);
   const batchQueue = [];
   let producing = work.split.length > 0;
@@ -17957,6 +18135,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
           if (msg.type === "ready") {
             if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where2(), `worker measured under other settings (${msg.settingsId} \u2260 ${init.settingsId})`));
             ready = true;
+            if (shared.main || shared.baseline) worker.postMessage({ type: "share", tables: shared });
             return next();
           }
           const answered = current[0];
@@ -18180,7 +18359,8 @@ async function measureShards(policy, shards, prepared, opts, started = performan
           onRead: (b) => readingAt(ref.path, b)
         })
       },
-      early
+      early,
+      prepared.sharedCounts()
     );
     await Promise.all(pending);
   } else {
@@ -18312,6 +18492,10 @@ async function runShardWorker() {
     port.on("message", (msg) => {
       if (msg.type === "close") {
         port.close();
+        return;
+      }
+      if (msg.type === "share") {
+        prepared.adoptCounts(msg.tables);
         return;
       }
       if (msg.type === "batch") {

@@ -26,6 +26,16 @@ export interface PreparedAnalyzers {
   analyzers: ScanAnalyzers;
   /** Adds the cross-shard figures (duplicates, dictionary fertility, tokenizer labels) to a measured corpus. */
   finish(corpus: CorpusResult, newShards?: string[]): Promise<void>;
+  /** The tokenizers' tables of piece counts in shared memory, for the workers of a pooled run to adopt. */
+  sharedCounts(): SharedCountTables;
+  /** Uses another thread's tables (from sharedCounts of the same policy) from now on. */
+  adoptCounts(tables: SharedCountTables): void;
+}
+
+/** Per tokenizer of a policy, its table of piece counts in shared memory (see measure/tokens/shared-counts.ts). */
+export interface SharedCountTables {
+  main?: SharedArrayBuffer;
+  baseline?: SharedArrayBuffer;
 }
 
 /** Returns the read options a policy implies. */
@@ -104,7 +114,23 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
     analyzers.contamination = (text: string) => findContamination(idx, text);
   }
 
+  const counters = { main, baseline };
   return {
+    sharedCounts() {
+      const tables: SharedCountTables = {};
+      for (const role of ['main', 'baseline'] as const) {
+        const table = counters[role]?.shareCounts?.();
+        if (table) tables[role] = table;
+      }
+      return tables;
+    },
+    adoptCounts(tables) {
+      for (const role of ['main', 'baseline'] as const) {
+        const table = tables[role];
+        // A table made for another tokenizer is refused by the counter, which keeps its own.
+        if (table) counters[role]?.adoptCounts?.(table);
+      }
+    },
     settingsId,
     scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId, ...(policy.sampling ? { sampling: policy.sampling } : {}) },
     analyzers,

@@ -330,6 +330,7 @@ export async function measureShards(
           }),
       },
       early,
+      prepared.sharedCounts(),
     );
     await Promise.all(pending);
   } else {

@@ -9,6 +9,7 @@ import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
 import type { ShardRef } from '../read/types.js';
+import type { SharedCountTables } from './analyzers.js';
 import type { BatchResult, DocumentBatch } from '../results/scan.js';
 import type { ShardResult } from '../results/types.js';
 
@@ -23,6 +24,8 @@ export interface WorkerInit {
 export type ToWorker =
   | { type: 'scan'; id: number; ref: ShardRef }
   | { type: 'batch'; id: number; path: string; batch: DocumentBatch }
+  /** Sent first, once a worker is ready: the main thread's tables of token counts, for the worker to fill and read too. */
+  | { type: 'share'; tables: SharedCountTables }
   | { type: 'close' };
 export type FromWorker =
   | { type: 'ready'; settingsId: string }
@@ -125,6 +128,7 @@ export function transferablesOf(r: BatchResult): ArrayBuffer[] {
 /**
  * Measures shards on `workers` threads (this one included) started from `entry`, or taken from `started`
  * (workers started earlier; those not needed are stopped); calls `onResult` as each shard finishes.
+ * Every worker is handed `shared` (this thread's token-count tables) before its first task.
  * Rejects with ShardFailure, naming the shard, on the first failure.
  */
 export async function measureInPool(
@@ -135,6 +139,7 @@ export async function measureInPool(
   onResult: (r: ShardResult) => void,
   here: HereMeasurer,
   started: StartedWorker[] = [],
+  shared: SharedCountTables = {},
 ): Promise<void> {
   // Largest shards first (by the text they hold: repetitive text compresses far better than other
   // text, so size on disk misleads): the last shard to finish is then a small one, so workers end together.
@@ -284,6 +289,7 @@ export async function measureInPool(
           if (msg.type === 'ready') {
             if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where(), `worker measured under other settings (${msg.settingsId} ≠ ${init.settingsId})`));
             ready = true;
+            if (shared.main || shared.baseline) worker.postMessage({ type: 'share', tables: shared } satisfies ToWorker);
             return next();
           }
           const answered = current[0];

@@ -27,6 +27,10 @@ export async function runShardWorker(): Promise<void> {
         port.close();
         return;
       }
+      if (msg.type === 'share') {
+        prepared.adoptCounts(msg.tables);
+        return;
+      }
       if (msg.type === 'batch') {
         try {
           throwIfFaultInjected(msg.path);

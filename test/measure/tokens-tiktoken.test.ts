@@ -75,7 +75,7 @@ describe.each(['gpt2', 'cl100k_base', 'o200k_base'] as const)('builtin %s', (nam
   });
 
   it('stays exact after its cache has been warmed and has evicted entries', async () => {
-    const small = await loadTokenizer({ kind: 'builtin', name }, { cacheGenerationSize: 64 });
+    const small = await loadTokenizer({ kind: 'builtin', name }, { cacheGenerationSize: 64, sharedEntries: 0 });
     const texts = [...BROWN.slice(0, 300), ...UDHR.slice(0, 300)];
     expect(mismatches(small, reference, texts)).toEqual([]);
     expect(mismatches(small, reference, texts)).toEqual([]);
@@ -83,6 +83,41 @@ describe.each(['gpt2', 'cl100k_base', 'o200k_base'] as const)('builtin %s', (nam
     expect(stats.evictions).toBeGreaterThan(10);
     expect(stats.entries).toBeLessThanOrEqual(128);
     expect(stats.hits).toBeGreaterThan(0);
+  });
+
+  it('stays exact when its shared table is full and further pieces go to its own evicting cache', async () => {
+    const small = await loadTokenizer({ kind: 'builtin', name }, { cacheGenerationSize: 64, sharedEntries: 100 });
+    const texts = [...BROWN.slice(0, 300), ...UDHR.slice(0, 300)];
+    expect(mismatches(small, reference, texts)).toEqual([]);
+    expect(mismatches(small, reference, texts)).toEqual([]);
+    const stats = small.cacheStats();
+    expect(stats.evictions).toBeGreaterThan(10);
+    expect(stats.entries).toBeLessThanOrEqual(100 + 128);
+    expect(stats.entries).toBeGreaterThan(100);
+  });
+
+  it('counts exactly from a table another counter of the same tokenizer filled, and refuses one of another tokenizer', async () => {
+    const first = await loadTokenizer({ kind: 'builtin', name });
+    const texts = BROWN.slice(0, 200);
+    expect(mismatches(first, reference, texts)).toEqual([]);
+    const table = first.shareCounts!();
+    expect(table).toBeInstanceOf(SharedArrayBuffer);
+
+    // A second counter (as a worker thread would load it) adopts the table before counting.
+    const second = await loadTokenizer({ kind: 'builtin', name });
+    expect(second.adoptCounts!(table!)).toBe(true);
+    expect(mismatches(second, reference, texts)).toEqual([]);
+    // Every piece of these texts was in the table already: the second counter worked none out itself.
+    expect(second.cacheStats().misses).toBe(0);
+    // What the second adds, the first reads.
+    const more = UDHR.slice(0, 50);
+    expect(mismatches(second, reference, more)).toEqual([]);
+    const missesBefore = first.cacheStats().misses;
+    expect(mismatches(first, reference, more)).toEqual([]);
+    expect(first.cacheStats().misses).toBe(missesBefore);
+
+    const other = await loadTokenizer({ kind: 'builtin', name: name === 'gpt2' ? 'cl100k_base' : 'gpt2' });
+    expect(other.adoptCounts!(table!)).toBe(false);
   });
 
   it('counts special-token strings as ordinary text, as encode(text, [], []) does', () => {

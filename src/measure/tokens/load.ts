@@ -8,12 +8,15 @@ import { TokenizerError } from './errors.js';
 import { createJsonCounter } from './hf.js';
 import { BUILTIN_NAMES, BUILTIN_PATTERNS, DEFAULT_RANK_FILE_PATTERN, isBuiltinName, type BuiltinName } from './patterns.js';
 import { parseBuiltinRanks, parseRankFile } from './ranks.js';
+import { DEFAULT_SHARED_ENTRIES, SharedPieceCounts } from './shared-counts.js';
 import { createRankCounter } from './tiktoken.js';
 import type { TokenCounter } from './types.js';
 
 export interface LoadOptions {
   /** Entries per cache generation (see cache.ts); tests make it small to force eviction. */
   cacheGenerationSize?: number;
+  /** Entries of the table of piece counts that threads share (shared-counts.ts; default DEFAULT_SHARED_ENTRIES); 0: none, each counter keeps only its own cache. */
+  sharedEntries?: number;
 }
 
 /** Loads the builtin ranks module of an encoding (each is a few MB of JavaScript, so only on demand). */
@@ -35,6 +38,8 @@ async function importBuiltin(name: BuiltinName): Promise<{ pat_str: string; bpe_
 /** Returns a TokenCounter for the tokenizer a policy names; throws a TokenizerError (stage `load`) naming the file when it cannot. */
 export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = {}): Promise<TokenCounter> {
   const generationSize = options.cacheGenerationSize;
+  const sharedEntries = options.sharedEntries ?? DEFAULT_SHARED_ENTRIES;
+  const sharedTable = (id: string): SharedPieceCounts | null => (sharedEntries > 0 ? SharedPieceCounts.create(id, sharedEntries) : null);
   if (spec.kind === 'builtin') {
     const name: string = spec.name;
     if (!isBuiltinName(name)) {
@@ -45,14 +50,20 @@ export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = 
     // counts a token, and parsing o200k_base took about an eighth of such a run's time (one CPU
     // profile of a warm-cache `sluice check` on the bench corpus). The data is the package's own, so a
     // damaged table, the one failure deferred by this, is not expected.
-    return lazyCounter(`builtin:${name}`, name, () =>
-      createRankCounter({
-        id: `builtin:${name}`,
-        label: name,
-        ranks: parseBuiltinRanks(data.bpe_ranks, name),
-        pattern: data.pat_str,
-        ...(generationSize === undefined ? {} : { generationSize }),
-      }),
+    const id = `builtin:${name}`;
+    return lazyCounter(
+      id,
+      name,
+      () => sharedTable(id),
+      (shared) =>
+        createRankCounter({
+          id,
+          label: name,
+          ranks: parseBuiltinRanks(data.bpe_ranks, name),
+          pattern: data.pat_str,
+          shared,
+          ...(generationSize === undefined ? {} : { generationSize }),
+        }),
     );
   }
 
@@ -74,11 +85,13 @@ export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = 
 
   if (spec.format === 'tiktoken') {
     const { pattern, patternId } = resolvePattern(spec.pattern, spec.file);
+    const id = `tiktoken:sha256:${digest}:pattern:${patternId}`;
     return createRankCounter({
-      id: `tiktoken:sha256:${digest}:pattern:${patternId}`,
+      id,
       label: spec.file,
       ranks: parseRankFile(text, spec.file),
       pattern,
+      shared: sharedTable(id),
       ...(generationSize === undefined ? {} : { generationSize }),
     });
   }
@@ -106,10 +119,22 @@ function resolvePattern(pattern: string | undefined, file: string): { pattern: s
   return { pattern: name, patternId: `sha256:${createHash('sha256').update(name).digest('hex').slice(0, 16)}` };
 }
 
-/** Returns a byte-level rank counter (no unknown token, exact fast path, pieces recorded) that is built by `make` when first asked to count. */
-function lazyCounter(id: string, label: string, make: () => TokenCounter): TokenCounter {
+/**
+ * Returns a byte-level rank counter (no unknown token, exact fast path, pieces recorded) that is
+ * built by `make` when first asked to count. Its shared table of piece counts exists from the
+ * start (made by `newTable`, or adopted from another thread), so other threads can be handed it
+ * before this one has counted anything.
+ */
+function lazyCounter(
+  id: string,
+  label: string,
+  newTable: () => SharedPieceCounts | null,
+  make: (shared: SharedPieceCounts | null) => TokenCounter,
+): TokenCounter {
   let real: TokenCounter | undefined;
-  const get = (): TokenCounter => (real ??= make());
+  let table: SharedPieceCounts | null | undefined;
+  const tableOf = (): SharedPieceCounts | null => (table === undefined ? (table = newTable()) : table);
+  const get = (): TokenCounter => (real ??= make(tableOf()));
   return {
     id,
     label,
@@ -120,5 +145,13 @@ function lazyCounter(id: string, label: string, make: () => TokenCounter): Token
     countPiece: (piece) => get().countPiece(piece),
     countWithPieces: (text, pieces) => get().countWithPieces!(text, pieces),
     cacheStats: () => (real ? real.cacheStats() : { hits: 0, misses: 0, evictions: 0, entries: 0 }),
+    shareCounts: () => (real ? real.shareCounts!() : (tableOf()?.buffer ?? null)),
+    adoptCounts: (buffer) => {
+      if (real) return real.adoptCounts!(buffer);
+      const adopted = SharedPieceCounts.attach(buffer, id);
+      if (adopted === null) return false;
+      table = adopted;
+      return true;
+    },
   };
 }

@@ -19,6 +19,7 @@
 import { splitCl100k, splitGpt2, splitO200k, type AsciiSplitter } from './ascii-split.js';
 import { bytePairCount } from './bpe.js';
 import { hashRange, MAX_CACHED_PIECE_LENGTH, PieceCache } from './cache.js';
+import { SharedPieceCounts } from './shared-counts.js';
 import { TokenizerError } from './errors.js';
 import { BUILTIN_PATTERNS } from './patterns.js';
 import type { RankTable } from './ranks.js';
@@ -34,6 +35,8 @@ export interface RankCounterOptions {
   generationSize?: number;
   /** Use the hand-written ASCII splitter when the pattern is a builtin's (default true; off to measure the regex alone). */
   asciiSplitter?: boolean;
+  /** The shared table of piece counts to use first (another thread's, or one made by the caller); default: a new one of DEFAULT_SHARED_ENTRIES; null: none. */
+  shared?: SharedPieceCounts | null;
 }
 
 /** Returns the hand-written splitter equivalent to a pattern, or null when there is none. */
@@ -58,6 +61,10 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
   const split = new RegExp(options.pattern, 'gu');
   const sticky = new RegExp(options.pattern, 'guy');
   const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
+  // Pieces are looked up in the shared table first (filled by every thread of a pooled run),
+  // then, once that is full, in this thread's own bounded cache.
+  let shared = options.shared === undefined ? SharedPieceCounts.create(options.id) : options.shared;
+  let sharedHits = 0;
   const cache = new PieceCache<number>(options.generationSize);
   const words = new PieceCache<number>(options.generationSize);
   const builtinPattern = (Object.values(BUILTIN_PATTERNS) as string[]).includes(options.pattern);
@@ -65,11 +72,18 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
   const countRange = (text: string, start: number, end: number): number => {
     if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(utf8Bytes(text.slice(start, end)), ranks);
     const hash = hashRange(text, start, end);
+    if (shared !== null) {
+      const known = shared.find(text, start, end, hash);
+      if (known >= 0) {
+        sharedHits++;
+        return known;
+      }
+    }
     const cached = cache.find(text, start, end, hash);
     if (cached !== undefined) return cached;
     const piece = text.slice(start, end);
     const n = bytePairCount(utf8Bytes(piece), ranks);
-    cache.add(piece, hash, n);
+    if (shared === null || !shared.add(text, start, end, hash, n)) cache.add(piece, hash, n);
     return n;
   };
 
@@ -145,6 +159,16 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
           },
         }
       : {}),
-    cacheStats: () => cache.stats(),
+    cacheStats: () => {
+      const own = cache.stats();
+      return { ...own, hits: own.hits + sharedHits, entries: own.entries + (shared?.size ?? 0) };
+    },
+    shareCounts: () => shared?.buffer ?? null,
+    adoptCounts: (buffer) => {
+      const table = SharedPieceCounts.attach(buffer, options.id);
+      if (table === null) return false;
+      shared = table;
+      return true;
+    },
   };
 }

@@ -45,6 +45,10 @@ export interface TokenCounter {
    */
   countWithPieces?(text: string, pieces: PieceList): { tokens: number; unknown: number };
   cacheStats(): CacheStats;
+  /** The shared-memory table of piece counts this counter fills, for other threads' counters of the same tokenizer to adopt (null: it keeps none). */
+  shareCounts?(): SharedArrayBuffer | null;
+  /** Uses another thread's table (from shareCounts) from now on; false, and nothing changes, when it was made for another tokenizer. */
+  adoptCounts?(buffer: SharedArrayBuffer): boolean;
 }
 
 /** What one text measures in one tokenizer; all fields are sums, so measures add up. */
