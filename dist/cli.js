@@ -5948,11 +5948,11 @@ import { isUtf8 as isUtf82 } from "node:buffer";
 // src/read/decode.ts
 import { isUtf8 } from "node:buffer";
 import iconv4 from "iconv-lite";
-function firstInvalidUtf8(bytes2) {
-  const n = bytes2.length;
+function firstInvalidUtf8(bytes3) {
+  const n = bytes3.length;
   let i = 0;
   while (i < n) {
-    const b = bytes2[i];
+    const b = bytes3[i];
     if (b < 128) {
       i++;
       continue;
@@ -5969,10 +5969,10 @@ function firstInvalidUtf8(bytes2) {
     else if (b >= 241 && b <= 243) need = 3;
     else return i;
     if (i + need >= n) return i;
-    const b1 = bytes2[i + 1];
+    const b1 = bytes3[i + 1];
     if (b1 < lo || b1 > hi) return i;
     for (let k = 2; k <= need; k++) {
-      const bk = bytes2[i + k];
+      const bk = bytes3[i + k];
       if (bk < 128 || bk > 191) return i;
     }
     i += need + 1;
@@ -6113,10 +6113,10 @@ var LineSplitter = class {
     this.parts.push(piece);
     this.carried += piece.length;
   }
-  startSkipping(bytes2) {
+  startSkipping(bytes3) {
     this.parts = [];
     this.carried = 0;
-    this.skipped = bytes2;
+    this.skipped = bytes3;
   }
   emit(buf, start, end, clean3, offset) {
     if (end > start && buf[end - 1] === CARRIAGE_RETURN) end--;
@@ -6353,9 +6353,9 @@ var AccountingSink = class {
   /** Called once after the last line (also after a break). */
   finish() {
   }
-  tooLong(bytes2, _offset) {
+  tooLong(bytes3, _offset) {
     const line = ++this.account.lines;
-    this.reject(line, "line-too-long", `line of ${bytes2} bytes is longer than maxLineBytes (${this.opts.maxLineBytes}); skipped unread`);
+    this.reject(line, "line-too-long", `line of ${bytes3} bytes is longer than maxLineBytes (${this.opts.maxLineBytes}); skipped unread`);
   }
   reject(line, reason, detail) {
     const rejected = this.account.rejected;
@@ -6408,15 +6408,15 @@ var TextSink = class extends AccountingSink {
       this.account.empty++;
       return;
     }
-    const bytes2 = end - start;
-    if (this.paragraph.length > 0 && this.paragraphBytes + bytes2 > this.opts.maxLineBytes) this.flush();
+    const bytes3 = end - start;
+    if (this.paragraph.length > 0 && this.paragraphBytes + bytes3 > this.opts.maxLineBytes) this.flush();
     if (this.paragraph.length === 0) this.paragraphStart = line;
     this.paragraph.push(text);
-    this.paragraphBytes += bytes2 + 1;
+    this.paragraphBytes += bytes3 + 1;
   }
-  tooLong(bytes2, offset) {
+  tooLong(bytes3, offset) {
     this.flush();
-    super.tooLong(bytes2, offset);
+    super.tooLong(bytes3, offset);
   }
   finish() {
     this.flush();
@@ -6905,7 +6905,7 @@ var EXACT_BYTES = 8;
 var KIND_EMPTY = 0;
 var KIND_WORDLESS = 1;
 var KIND_FULL = 2;
-function readLocationRecords(bytes2, start, end, documents, visit, fail) {
+function readLocationRecords(bytes3, start, end, documents, visit, fail) {
   let at2 = start;
   let line = 0;
   const varint = () => {
@@ -6913,7 +6913,7 @@ function readLocationRecords(bytes2, start, end, documents, visit, fail) {
     let scale = 1;
     for (let shift = 0; shift < 49; shift += 7) {
       if (at2 >= end) fail("location stream ends inside a record");
-      const byte = bytes2[at2++];
+      const byte = bytes3[at2++];
       v += (byte & 127) * scale;
       if (byte < 128) return v;
       scale *= 128;
@@ -6933,11 +6933,11 @@ function signatureBytes(hashes, bits) {
 function bitsFor(opts) {
   return signatureBits(lshBands(opts.threshold, opts.hashes).rows);
 }
-function checksum32(bytes2, start, end) {
+function checksum32(bytes3, start, end) {
   let h = 789265437 ^ end - start;
   let i = start;
   for (; i + 3 < end; i += 4) {
-    let k2 = bytes2[i] | bytes2[i + 1] << 8 | bytes2[i + 2] << 16 | bytes2[i + 3] << 24;
+    let k2 = bytes3[i] | bytes3[i + 1] << 8 | bytes3[i + 2] << 16 | bytes3[i + 3] << 24;
     k2 = Math.imul(k2, 3432918353);
     k2 = k2 << 15 | k2 >>> 17;
     h ^= Math.imul(k2, 461845907);
@@ -6945,7 +6945,7 @@ function checksum32(bytes2, start, end) {
     h = Math.imul(h, 5) + 3864292196 | 0;
   }
   let k = 0;
-  for (let s = 0; i < end; i++, s += 8) k |= bytes2[i] << s;
+  for (let s = 0; i < end; i++, s += 8) k |= bytes3[i] << s;
   h ^= Math.imul(k, 3432918353);
   return fmix32(h);
 }
@@ -7018,8 +7018,8 @@ function round(x) {
 function inspectIndex(blob) {
   const r = parseIndex(blob);
   if (!r.ok) return r;
-  const { formatVersion, shingle, hashes, signatureBits: bits, punctuation, threshold, documents, bytes: bytes2 } = r.layout;
-  return { ok: true, header: { formatVersion, shingle, hashes, signatureBits: bits, punctuation, threshold, documents, bytes: bytes2 } };
+  const { formatVersion, shingle, hashes, signatureBits: bits, punctuation, threshold, documents, bytes: bytes3 } = r.layout;
+  return { ok: true, header: { formatVersion, shingle, hashes, signatureBits: bits, punctuation, threshold, documents, bytes: bytes3 } };
 }
 
 // src/measure/duplicates/builder.ts
@@ -7060,13 +7060,13 @@ var Pages = class {
   data;
   at = 0;
   /** Makes room for `bytes` contiguous bytes at data[at]. */
-  reserve(bytes2) {
-    if (this.at + bytes2 <= this.data.length) return;
+  reserve(bytes3) {
+    if (this.at + bytes3 <= this.data.length) return;
     if (this.at > 0) {
       this.full.push(this.data.subarray(0, this.at));
       this.fullBytes += this.at;
     }
-    const size = Math.max(bytes2, this.record * Math.max(1, Math.floor(Math.min(this.nextPage, MAX_PAGE_BYTES) / this.record)));
+    const size = Math.max(bytes3, this.record * Math.max(1, Math.floor(Math.min(this.nextPage, MAX_PAGE_BYTES) / this.record)));
     this.nextPage = Math.min(this.nextPage * 2, MAX_PAGE_BYTES);
     this.data = new Uint8Array(size);
     this.at = 0;
@@ -7717,14 +7717,14 @@ var SignatureReader = class {
     }
   }
 };
-function agreement(a, oa, b, ob, bytes2, k, bits) {
+function agreement(a, oa, b, ob, bytes3, k, bits) {
   let same = 0;
   if (bits === 4) {
-    for (let i = 0; i < bytes2; i++) same += EQUAL_NIBBLES[a[oa + i] ^ b[ob + i]];
+    for (let i = 0; i < bytes3; i++) same += EQUAL_NIBBLES[a[oa + i] ^ b[ob + i]];
     if (k % 2 === 1) same--;
   } else {
     const w = bits / 8;
-    for (let i = 0; i < bytes2; i += w) {
+    for (let i = 0; i < bytes3; i += w) {
       let eq = true;
       for (let j = 0; j < w; j++) if (a[oa + i + j] !== b[ob + i + j]) eq = false;
       if (eq) same++;
@@ -8156,8 +8156,8 @@ async function scanShard(ref, settings, analyzers, onRead) {
   const cutoff = await cutoffOf(ref, settings);
   const fold2 = new ShardFold(settings, analyzers, cutoff);
   const hash2 = createHash3("sha256");
-  const pace = onRead ? (bytes2) => {
-    onRead(bytes2);
+  const pace = onRead ? (bytes3) => {
+    onRead(bytes3);
     return void 0;
   } : void 0;
   const account = await readShard(hashedWhileRead(ref, hash2), settings.read, (doc) => fold2.offer(doc), pace);
@@ -8223,8 +8223,8 @@ async function scanShardInBatches(ref, settings, analyzers, measure, plan) {
       chars += doc.text.length;
       if (chars >= plan.batchChars) flush();
     },
-    (bytes2) => {
-      plan.onRead?.(bytes2);
+    (bytes3) => {
+      plan.onRead?.(bytes3);
       if (failed) throw failed.error;
       if (handedOut - absorbed < plan.inFlight) return void 0;
       return pending[absorbed];
@@ -16544,7 +16544,7 @@ function scanCharacters(text, counts) {
   const anomalies = emptyAnomalyCounts();
   const marks = emptyMarkCounts();
   const n = text.length;
-  let bytes2 = 0;
+  let bytes3 = 0;
   let pairs = 0;
   let leads = false;
   for (let i = 0; i < n; i++) {
@@ -16559,13 +16559,13 @@ function scanCharacters(text, counts) {
           const kind = anomalyOf(cp, false);
           if (kind !== null) anomalies[kind]++;
         }
-        bytes2 += 4;
+        bytes3 += 4;
         pairs++;
         i++;
         continue;
       }
     }
-    bytes2 += unit < 128 ? 1 : unit < 2048 ? 2 : 3;
+    bytes3 += unit < 128 ? 1 : unit < 2048 ? 2 : 3;
     const info = table2[unit];
     const id = info & SCRIPT_MASK;
     counts[id] = counts[id] + 1;
@@ -16578,7 +16578,7 @@ function scanCharacters(text, counts) {
     }
   }
   if (leads) anomalies.mojibake = countMojibake(text);
-  return { bytes: bytes2, chars: n - pairs, anomalies, marks };
+  return { bytes: bytes3, chars: n - pairs, anomalies, marks };
 }
 function createMeasurer(settings) {
   const detector = createLanguageDetector(settings.languages, settings.detection);
@@ -16997,25 +16997,201 @@ function isBuiltinName(name) {
 }
 
 // src/measure/tokens/ranks.ts
-var BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
-var RANK = /^(?:0|[1-9][0-9]*)$/;
-var pairTables = /* @__PURE__ */ new WeakMap();
-var newPairTable = () => new Float64Array(1 << 16).fill(Infinity);
-function notePair(table2, bytes2, rank2) {
-  if (bytes2.length === 2) table2[bytes2.charCodeAt(0) << 8 | bytes2.charCodeAt(1)] = rank2;
-}
-function pairRanks(ranks) {
-  let table2 = pairTables.get(ranks);
-  if (table2 === void 0) {
-    table2 = newPairTable();
-    for (const [bytes2, rank2] of ranks) notePair(table2, bytes2, rank2);
-    pairTables.set(ranks, table2);
+var NO_RANK = Infinity;
+var MAGIC2 = 0;
+var OWNER_1 = 1;
+var OWNER_2 = 2;
+var COUNT = 3;
+var SLOT_BITS2 = 4;
+var ARENA_BYTES = 5;
+var HEADER_WORDS = 8;
+var MAGIC_VALUE = 1936478769;
+function ownerHashes(owner) {
+  let a = 2166136261 | 0;
+  let b = 2654435769 | 0;
+  for (let i = 0; i < owner.length; i++) {
+    a = Math.imul(a ^ owner.charCodeAt(i), 16777619);
+    b = Math.imul(b ^ owner.charCodeAt(i), 1540483477) ^ b >>> 15;
   }
-  return table2;
+  return [a, b];
 }
-function parseRankFile(text, file) {
-  const ranks = /* @__PURE__ */ new Map();
-  const pairs = newPairTable();
+function hashBytes(bytes3, start, end) {
+  let h = 2166136261 | 0;
+  for (let i = start; i < end; i++) h = Math.imul(h ^ bytes3[i], 16777619);
+  return h;
+}
+var RankTable = class _RankTable {
+  constructor(buffer) {
+    this.buffer = buffer;
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const count3 = header[COUNT];
+    const slotCount2 = 1 << header[SLOT_BITS2];
+    this.size = count3;
+    this.mask = slotCount2 - 1;
+    let at2 = HEADER_WORDS * 4;
+    this.ranks = new Float64Array(buffer, at2, count3);
+    at2 += count3 * 8;
+    this.pairs = new Float64Array(buffer, at2, 1 << 16);
+    at2 += (1 << 16) * 8;
+    this.offsets = new Int32Array(buffer, at2, count3 + 1);
+    at2 += (count3 + 1) * 4;
+    this.slots = new Int32Array(buffer, at2, slotCount2);
+    at2 += slotCount2 * 4;
+    this.arena = new Uint8Array(buffer, at2, header[ARENA_BYTES]);
+  }
+  buffer;
+  /** Tokens in the table. */
+  size;
+  /** Rank of each two-byte token, indexed by first byte << 8 | second (NO_RANK where there is none). */
+  pairs;
+  offsets;
+  ranks;
+  slots;
+  mask;
+  arena;
+  /** Returns the table in `buffer` (from another thread's table) when it was made for the tokenizer `owner`, else null. */
+  static attach(buffer, owner) {
+    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS * 4) return null;
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const [a, b] = ownerHashes(owner);
+    if (header[MAGIC2] !== MAGIC_VALUE || header[OWNER_1] !== a || header[OWNER_2] !== b) return null;
+    return new _RankTable(buffer);
+  }
+  /** Builds a table from token bytes (concatenated in `arena`, token i at offsets[i]..offsets[i+1]) and ranks; `duplicate(i)` is called for a token listed before. */
+  static build(owner, arena, offsets2, ranks, count3, duplicate) {
+    let bits = 1;
+    while (1 << bits < count3 * 2) bits++;
+    const arenaBytes = offsets2[count3];
+    const bytes3 = HEADER_WORDS * 4 + count3 * 8 + (1 << 16) * 8 + (count3 + 1) * 4 + (1 << bits) * 4 + arenaBytes;
+    const buffer = new SharedArrayBuffer(bytes3);
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const [a, b] = ownerHashes(owner);
+    header[OWNER_1] = a;
+    header[OWNER_2] = b;
+    header[COUNT] = count3;
+    header[SLOT_BITS2] = bits;
+    header[ARENA_BYTES] = arenaBytes;
+    header[MAGIC2] = MAGIC_VALUE;
+    const table2 = new _RankTable(buffer);
+    table2.ranks.set(ranks.subarray(0, count3));
+    table2.offsets.set(offsets2.subarray(0, count3 + 1));
+    table2.arena.set(arena.subarray(0, arenaBytes));
+    table2.pairs.fill(NO_RANK);
+    const { slots, mask } = table2;
+    const own = table2.arena;
+    for (let i = 0; i < count3; i++) {
+      const start = offsets2[i];
+      const end = offsets2[i + 1];
+      let slot = hashBytes(own, start, end) & mask;
+      for (; ; ) {
+        const v = slots[slot];
+        if (v === 0) {
+          slots[slot] = i + 1;
+          break;
+        }
+        if (table2.sameBytes(v - 1, own, start, end)) {
+          duplicate(i);
+          break;
+        }
+        slot = slot + 1 & mask;
+      }
+      if (end - start === 2) table2.pairs[own[start] << 8 | own[start + 1]] = ranks[i];
+    }
+    return table2;
+  }
+  sameBytes(token, bytes3, start, end) {
+    const from = this.offsets[token];
+    if (this.offsets[token + 1] - from !== end - start) return false;
+    const arena = this.arena;
+    for (let k = 0; k < end - start; k++) if (arena[from + k] !== bytes3[start + k]) return false;
+    return true;
+  }
+  /** Returns the rank of the token whose bytes are bytes[start, end), or NO_RANK. */
+  rank(bytes3, start, end) {
+    const { slots, mask } = this;
+    for (let slot = hashBytes(bytes3, start, end) & mask; ; slot = slot + 1 & mask) {
+      const v = slots[slot];
+      if (v === 0) return NO_RANK;
+      if (this.sameBytes(v - 1, bytes3, start, end)) return this.ranks[v - 1];
+    }
+  }
+  /** Returns the rank of a token given as a latin1 string (one char per byte), or undefined; for tests and tools. */
+  get(latin1) {
+    const bytes3 = Uint8Array.from(latin1, (c) => c.charCodeAt(0));
+    const r = this.rank(bytes3, 0, bytes3.length);
+    return r === NO_RANK ? void 0 : r;
+  }
+  /** Whether every single byte is a token. */
+  missingBytes() {
+    const missing = [];
+    const one = new Uint8Array(1);
+    for (let b = 0; b < 256; b++) {
+      one[0] = b;
+      if (this.rank(one, 0, 1) === NO_RANK) missing.push(`0x${b.toString(16).padStart(2, "0")}`);
+    }
+    return missing;
+  }
+};
+var TokenList = class {
+  arena = new Uint8Array(1 << 20);
+  offsets = new Int32Array(1 << 16);
+  ranks = new Float64Array(1 << 16);
+  count = 0;
+  used = 0;
+  /** Makes room for one more token of at most `bytes` bytes. */
+  reserve(bytes3) {
+    if (this.used + bytes3 > this.arena.length) {
+      const a = new Uint8Array(Math.max(this.arena.length * 2, this.used + bytes3));
+      a.set(this.arena.subarray(0, this.used));
+      this.arena = a;
+    }
+    if (this.count + 2 > this.offsets.length) {
+      const o = new Int32Array(this.offsets.length * 2);
+      o.set(this.offsets);
+      this.offsets = o;
+      const r = new Float64Array(this.ranks.length * 2);
+      r.set(this.ranks);
+      this.ranks = r;
+    }
+  }
+  /** Ends the token whose bytes were written at used.. with `rank`. */
+  close(end, rank2) {
+    this.ranks[this.count] = rank2;
+    this.count++;
+    this.used = end;
+    this.offsets[this.count] = end;
+  }
+};
+var BASE64_VALUE = (() => {
+  const v = new Int8Array(128).fill(-1);
+  const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
+  for (let i = 0; i < alphabet.length; i++) v[alphabet.charCodeAt(i)] = i;
+  return v;
+})();
+function decodeBase64(text, start, end, out, at2) {
+  const length = end - start;
+  let pad = 0;
+  if (length > 0 && text.charCodeAt(end - 1) === 61) pad = length > 1 && text.charCodeAt(end - 2) === 61 ? 2 : 1;
+  if (length === 0 || pad > 0 && length % 4 !== 0 || (length - pad) % 4 === 1) return -1;
+  const last = end - pad;
+  let bits = 0;
+  let held = 0;
+  for (let i = start; i < last; i++) {
+    const c = text.charCodeAt(i);
+    const v = c < 128 ? BASE64_VALUE[c] : -1;
+    if (v < 0) return -1;
+    bits = bits << 6 | v;
+    held += 6;
+    if (held >= 8) {
+      held -= 8;
+      out[at2++] = bits >>> held & 255;
+    }
+  }
+  return at2;
+}
+function parseRankFile(text, file, owner = file) {
+  const list = new TokenList();
+  const lineOf = [];
   const lines = text.split("\n");
   for (let i = 0; i < lines.length; i++) {
     const line = lines[i].endsWith("\r") ? lines[i].slice(0, -1) : lines[i];
@@ -17034,44 +17210,55 @@ function parseRankFile(text, file) {
     if (!RANK.test(rank2) || !Number.isSafeInteger(Number(rank2))) {
       throw new TokenizerError("load", file, `rank ${quote(rank2)} is not a non-negative integer`, { line: i + 1 });
     }
-    const bytes2 = Buffer.from(token, "base64").toString("latin1");
-    if (ranks.has(bytes2)) {
-      throw new TokenizerError("load", file, `token ${quote(token)} is listed twice`, { line: i + 1 });
-    }
-    ranks.set(bytes2, Number(rank2));
-    notePair(pairs, bytes2, Number(rank2));
+    list.reserve(token.length);
+    const end = decodeBase64(token, 0, token.length, list.arena, list.used);
+    if (end < 0) throw new TokenizerError("load", file, `token ${quote(token)} is not base64`, { line: i + 1 });
+    list.close(end, Number(rank2));
+    lineOf.push(i + 1);
   }
-  requireEveryByte(ranks, file);
-  pairTables.set(ranks, pairs);
-  return ranks;
+  const table2 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, (t) => {
+    const raw = lines[lineOf[t] - 1].split(" ")[0];
+    throw new TokenizerError("load", file, `token ${quote(raw)} is listed twice`, { line: lineOf[t] });
+  });
+  requireEveryByte(table2, file);
+  return table2;
 }
-function parseBuiltinRanks(bpeRanks, name) {
-  const ranks = /* @__PURE__ */ new Map();
-  const pairs = newPairTable();
-  for (const line of bpeRanks.split("\n")) {
-    if (line.length === 0) continue;
-    const parts = line.split(" ");
-    const first = Number.parseInt(parts[1] ?? "", 10);
-    if (!Number.isSafeInteger(first)) throw new TokenizerError("load", name, "builtin rank table is damaged");
-    try {
-      for (let i = 2; i < parts.length; i++) {
-        const bytes2 = atob(parts[i]);
-        ranks.set(bytes2, first + i - 2);
-        notePair(pairs, bytes2, first + i - 2);
+var BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
+var RANK = /^(?:0|[1-9][0-9]*)$/;
+function parseBuiltinRanks(bpeRanks, name, owner = `builtin:${name}`) {
+  const list = new TokenList();
+  const n = bpeRanks.length;
+  let p = 0;
+  while (p < n) {
+    let lineEnd = bpeRanks.indexOf("\n", p);
+    if (lineEnd < 0) lineEnd = n;
+    if (lineEnd > p) {
+      const tagEnd = bpeRanks.indexOf(" ", p);
+      const rankEnd = tagEnd < 0 || tagEnd >= lineEnd ? -1 : bpeRanks.indexOf(" ", tagEnd + 1);
+      const first = Number.parseInt(bpeRanks.slice(tagEnd + 1, rankEnd < 0 || rankEnd > lineEnd ? lineEnd : rankEnd), 10);
+      if (tagEnd < 0 || tagEnd >= lineEnd || !Number.isSafeInteger(first)) throw new TokenizerError("load", name, "builtin rank table is damaged");
+      let rank2 = first;
+      let q = rankEnd < 0 || rankEnd > lineEnd ? lineEnd : rankEnd + 1;
+      while (q < lineEnd) {
+        let tokenEnd = bpeRanks.indexOf(" ", q);
+        if (tokenEnd < 0 || tokenEnd > lineEnd) tokenEnd = lineEnd;
+        list.reserve(tokenEnd - q);
+        const end = decodeBase64(bpeRanks, q, tokenEnd, list.arena, list.used);
+        if (end < 0) throw new TokenizerError("load", name, "builtin rank table is damaged (bad base64)");
+        list.close(end, rank2++);
+        q = tokenEnd + 1;
       }
-    } catch (cause) {
-      throw new TokenizerError("load", name, "builtin rank table is damaged (bad base64)", { cause });
     }
+    p = lineEnd + 1;
   }
-  requireEveryByte(ranks, name);
-  pairTables.set(ranks, pairs);
-  return ranks;
+  const table2 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, () => {
+    throw new TokenizerError("load", name, "builtin rank table is damaged (a token is listed twice)");
+  });
+  requireEveryByte(table2, name);
+  return table2;
 }
-function requireEveryByte(ranks, file) {
-  const missing = [];
-  for (let b = 0; b < 256; b++) {
-    if (!ranks.has(String.fromCharCode(b))) missing.push(`0x${b.toString(16).padStart(2, "0")}`);
-  }
+function requireEveryByte(table2, file) {
+  const missing = table2.missingBytes();
   if (missing.length > 0) {
     const shown = missing.slice(0, 5).join(", ") + (missing.length > 5 ? ", ..." : "");
     throw new TokenizerError(
@@ -17088,33 +17275,27 @@ function quote(s) {
 // src/measure/tokens/shared-counts.ts
 var DEFAULT_SHARED_ENTRIES = 1 << 18;
 var UNITS_PER_ENTRY = 16;
-var MAGIC2 = 0;
-var OWNER_1 = 1;
-var OWNER_2 = 2;
+var MAGIC3 = 0;
+var OWNER_12 = 1;
+var OWNER_22 = 2;
 var USED = 3;
 var UNITS_USED = 4;
 var CAPACITY = 5;
-var SLOT_BITS2 = 6;
+var SLOT_BITS3 = 6;
 var UNITS = 7;
-var HEADER_WORDS = 8;
-var MAGIC_VALUE = 1936474929;
+var HEADER_WORDS2 = 8;
+var MAGIC_VALUE2 = 1936474929;
 var ENTRY_WORDS = 3;
-function ownerHashes(owner) {
-  const a = hashRange(owner, 0, owner.length);
-  let b = 2654435769 | 0;
-  for (let i = 0; i < owner.length; i++) b = Math.imul(b ^ owner.charCodeAt(i), 1540483477) ^ b >>> 15;
-  return [a, b];
-}
 var SharedPieceCounts = class _SharedPieceCounts {
   constructor(buffer) {
     this.buffer = buffer;
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const header = new Int32Array(buffer, 0, HEADER_WORDS2);
     this.header = header;
     this.capacity = header[CAPACITY];
     this.units = header[UNITS];
-    const slotCount2 = 1 << header[SLOT_BITS2];
+    const slotCount2 = 1 << header[SLOT_BITS3];
     this.mask = slotCount2 - 1;
-    let at2 = HEADER_WORDS * 4;
+    let at2 = HEADER_WORDS2 * 4;
     this.slots = new Int32Array(buffer, at2, slotCount2);
     at2 += slotCount2 * 4;
     this.entries = new Int32Array(buffer, at2, this.capacity * ENTRY_WORDS);
@@ -17135,24 +17316,24 @@ var SharedPieceCounts = class _SharedPieceCounts {
     let bits = 1;
     while (1 << bits < capacity * 2) bits++;
     const units = capacity * UNITS_PER_ENTRY;
-    const bytes2 = HEADER_WORDS * 4 + (1 << bits) * 4 + capacity * ENTRY_WORDS * 4 + units * 2;
-    const buffer = new SharedArrayBuffer(bytes2);
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const bytes3 = HEADER_WORDS2 * 4 + (1 << bits) * 4 + capacity * ENTRY_WORDS * 4 + units * 2;
+    const buffer = new SharedArrayBuffer(bytes3);
+    const header = new Int32Array(buffer, 0, HEADER_WORDS2);
     const [a, b] = ownerHashes(owner);
-    header[OWNER_1] = a;
-    header[OWNER_2] = b;
+    header[OWNER_12] = a;
+    header[OWNER_22] = b;
     header[CAPACITY] = capacity;
-    header[SLOT_BITS2] = bits;
+    header[SLOT_BITS3] = bits;
     header[UNITS] = units;
-    header[MAGIC2] = MAGIC_VALUE;
+    header[MAGIC3] = MAGIC_VALUE2;
     return new _SharedPieceCounts(buffer);
   }
   /** Returns the table in `buffer` when it was made for the tokenizer `owner`, else null. */
   static attach(buffer, owner) {
-    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS * 4) return null;
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS2 * 4) return null;
+    const header = new Int32Array(buffer, 0, HEADER_WORDS2);
     const [a, b] = ownerHashes(owner);
-    if (header[MAGIC2] !== MAGIC_VALUE || header[OWNER_1] !== a || header[OWNER_2] !== b) return null;
+    if (header[MAGIC3] !== MAGIC_VALUE2 || header[OWNER_12] !== a || header[OWNER_22] !== b) return null;
     return new _SharedPieceCounts(buffer);
   }
   /** Returns the count of text[start, end) (its hash as from hashRange), or -1 when no thread has added it. */
@@ -17384,25 +17565,58 @@ var splitCl100k = (text, p) => {
 };
 
 // src/measure/tokens/bpe.ts
-var NONE = Infinity;
-var starts = new Int32Array(256);
-var pairRank = new Float64Array(256);
-function bytePairCount(bytes2, ranks) {
-  const n = bytes2.length;
-  if (n <= 1) return n;
-  if (ranks.has(bytes2)) return 1;
-  const pairs = pairRanks(ranks);
-  if (starts.length <= n) {
-    starts = new Int32Array(n * 2);
-    pairRank = new Float64Array(n * 2);
+var bytes = new Uint8Array(1024);
+var starts = new Int32Array(1024);
+var pairRank = new Float64Array(1024);
+function encodeUtf8(text, start, end) {
+  if ((end - start) * 3 > bytes.length) {
+    bytes = new Uint8Array((end - start) * 3 * 2);
+    starts = new Int32Array(bytes.length + 1);
+    pairRank = new Float64Array(bytes.length + 1);
   }
+  const out = bytes;
+  let n = 0;
+  for (let i = start; i < end; i++) {
+    const c = text.charCodeAt(i);
+    if (c < 128) out[n++] = c;
+    else if (c < 2048) {
+      out[n++] = 192 | c >> 6;
+      out[n++] = 128 | c & 63;
+    } else if (c < 55296 || c > 57343) {
+      out[n++] = 224 | c >> 12;
+      out[n++] = 128 | c >> 6 & 63;
+      out[n++] = 128 | c & 63;
+    } else {
+      const low = i + 1 < end ? text.charCodeAt(i + 1) : 0;
+      if (c <= 56319 && low >= 56320 && low <= 57343) {
+        const cp = (c - 55296 << 10) + (low - 56320) + 65536;
+        out[n++] = 240 | cp >> 18;
+        out[n++] = 128 | cp >> 12 & 63;
+        out[n++] = 128 | cp >> 6 & 63;
+        out[n++] = 128 | cp & 63;
+        i++;
+      } else {
+        out[n++] = 239;
+        out[n++] = 191;
+        out[n++] = 189;
+      }
+    }
+  }
+  return n;
+}
+function bytePairCount(text, start, end, ranks) {
+  const n = encodeUtf8(text, start, end);
+  const b = bytes;
+  if (n <= 1) return n;
+  if (ranks.rank(b, 0, n) !== NO_RANK) return 1;
+  const pairs = ranks.pairs;
   const s = starts;
   const pr = pairRank;
   for (let i = 0; i <= n; i++) s[i] = i;
-  for (let i = 0; i < n - 1; i++) pr[i] = pairs[bytes2.charCodeAt(i) << 8 | bytes2.charCodeAt(i + 1)];
+  for (let i = 0; i < n - 1; i++) pr[i] = pairs[b[i] << 8 | b[i + 1]];
   let parts = n;
   while (parts > 1) {
-    let best = NONE;
+    let best = NO_RANK;
     let at2 = -1;
     for (let i = 0; i < parts - 1; i++) {
       const r = pr[i];
@@ -17415,8 +17629,8 @@ function bytePairCount(bytes2, ranks) {
     s.copyWithin(at2 + 1, at2 + 2, parts + 1);
     pr.copyWithin(at2, at2 + 1, parts - 1);
     parts--;
-    if (at2 < parts - 1) pr[at2] = ranks.get(bytes2.slice(s[at2], s[at2 + 2])) ?? NONE;
-    if (at2 > 0) pr[at2 - 1] = ranks.get(bytes2.slice(s[at2 - 1], s[at2 + 1])) ?? NONE;
+    if (at2 < parts - 1) pr[at2] = ranks.rank(b, s[at2], s[at2 + 2]);
+    if (at2 > 0) pr[at2 - 1] = ranks.rank(b, s[at2 - 1], s[at2 + 1]);
   }
   return parts;
 }
@@ -17427,12 +17641,6 @@ function asciiSplitterFor(pattern) {
   if (pattern === BUILTIN_PATTERNS.cl100k_base) return splitCl100k;
   if (pattern === BUILTIN_PATTERNS.o200k_base) return splitO200k;
   return null;
-}
-function utf8Bytes(piece) {
-  for (let i = 0; i < piece.length; i++) {
-    if (piece.charCodeAt(i) >= 128) return Buffer.from(piece, "utf8").toString("latin1");
-  }
-  return piece;
 }
 function createRankCounter(options) {
   const { ranks, label } = options;
@@ -17445,7 +17653,7 @@ function createRankCounter(options) {
   const words = new PieceCache(options.generationSize);
   const builtinPattern = Object.values(BUILTIN_PATTERNS).includes(options.pattern);
   const countRange = (text, start, end) => {
-    if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(utf8Bytes(text.slice(start, end)), ranks);
+    if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(text, start, end, ranks);
     const hash2 = hashRange(text, start, end);
     if (shared !== null) {
       const known = shared.find(text, start, end, hash2);
@@ -17456,9 +17664,8 @@ function createRankCounter(options) {
     }
     const cached = cache.find(text, start, end, hash2);
     if (cached !== void 0) return cached;
-    const piece = text.slice(start, end);
-    const n = bytePairCount(utf8Bytes(piece), ranks);
-    if (shared === null || !shared.add(text, start, end, hash2, n)) cache.add(piece, hash2, n);
+    const n = bytePairCount(text, start, end, ranks);
+    if (shared === null || !shared.add(text, start, end, hash2, n)) cache.add(text.slice(start, end), hash2, n);
     return n;
   };
   const countByRegex = (text, from, pieces) => {
@@ -17528,9 +17735,9 @@ function createRankCounter(options) {
       const own = cache.stats();
       return { ...own, hits: own.hits + sharedHits, entries: own.entries + (shared?.size ?? 0) };
     },
-    shareCounts: () => shared?.buffer ?? null,
-    adoptCounts: (buffer) => {
-      const table2 = SharedPieceCounts.attach(buffer, options.id);
+    shareTables: () => ({ counts: shared?.buffer ?? null, ranks: ranks.buffer }),
+    adoptTables: (tables2) => {
+      const table2 = tables2.counts === null ? null : SharedPieceCounts.attach(tables2.counts, options.id);
       if (table2 === null) return false;
       shared = table2;
       return true;
@@ -17568,28 +17775,28 @@ async function loadTokenizer(spec, options = {}) {
       id,
       name,
       () => sharedTable(id),
-      (shared) => createRankCounter({
+      (shared, ranks) => createRankCounter({
         id,
         label: name,
-        ranks: parseBuiltinRanks(data2.bpe_ranks, name),
+        ranks: ranks ?? parseBuiltinRanks(data2.bpe_ranks, name, id),
         pattern: data2.pat_str,
         shared,
         ...generationSize === void 0 ? {} : { generationSize }
       })
     );
   }
-  let bytes2;
+  let bytes3;
   try {
-    bytes2 = await readFile3(spec.absPath);
+    bytes3 = await readFile3(spec.absPath);
   } catch (cause) {
     const code = cause.code;
     const why = code === "ENOENT" ? `no such file (${spec.absPath})` : `cannot read ${spec.absPath}: ${cause.message}`;
     throw new TokenizerError("load", spec.file, why, { cause });
   }
-  const digest = createHash4("sha256").update(bytes2).digest("hex");
+  const digest = createHash4("sha256").update(bytes3).digest("hex");
   let text;
   try {
-    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes2);
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes3);
   } catch (cause) {
     throw new TokenizerError("load", spec.file, "not valid UTF-8", { cause });
   }
@@ -17599,7 +17806,7 @@ async function loadTokenizer(spec, options = {}) {
     return createRankCounter({
       id,
       label: spec.file,
-      ranks: parseRankFile(text, spec.file),
+      ranks: parseRankFile(text, spec.file, id),
       pattern,
       shared: sharedTable(id),
       ...generationSize === void 0 ? {} : { generationSize }
@@ -17629,8 +17836,9 @@ function resolvePattern(pattern, file) {
 function lazyCounter(id, label, newTable, make) {
   let real;
   let table2;
+  let adoptedRanks = null;
   const tableOf = () => table2 === void 0 ? table2 = newTable() : table2;
-  const get = () => real ??= make(tableOf());
+  const get = () => real ??= make(tableOf(), adoptedRanks);
   return {
     id,
     label,
@@ -17641,12 +17849,16 @@ function lazyCounter(id, label, newTable, make) {
     countPiece: (piece) => get().countPiece(piece),
     countWithPieces: (text, pieces) => get().countWithPieces(text, pieces),
     cacheStats: () => real ? real.cacheStats() : { hits: 0, misses: 0, evictions: 0, entries: 0 },
-    shareCounts: () => real ? real.shareCounts() : tableOf()?.buffer ?? null,
-    adoptCounts: (buffer) => {
-      if (real) return real.adoptCounts(buffer);
-      const adopted = SharedPieceCounts.attach(buffer, id);
-      if (adopted === null) return false;
-      table2 = adopted;
+    // Handing the tables out builds the counter: a thread that shares is about to count anyway,
+    // and the others then take its rank table instead of parsing their own.
+    shareTables: () => get().shareTables(),
+    adoptTables: (tables2) => {
+      if (real) return real.adoptTables(tables2);
+      const counts = tables2.counts === null ? null : SharedPieceCounts.attach(tables2.counts, id);
+      const ranks = tables2.ranks === null ? null : RankTable.attach(tables2.ranks, id);
+      if (counts === null || ranks === null) return false;
+      table2 = counts;
+      adoptedRanks = ranks;
       return true;
     }
   };
@@ -17750,16 +17962,16 @@ function dictionaryFertility(counter, words) {
   };
 }
 async function readWordList(file) {
-  let bytes2;
+  let bytes3;
   try {
-    bytes2 = await readFile4(file);
+    bytes3 = await readFile4(file);
   } catch (cause) {
     const code = cause.code;
     throw new WordListError(file, code === "ENOENT" ? "no such file" : cause.message, void 0, { cause });
   }
   let text;
   try {
-    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes2);
+    text = new TextDecoder("utf-8", { fatal: true }).decode(bytes3);
   } catch (cause) {
     throw new WordListError(file, "not valid UTF-8 (sluice reads word lists in UTF-8)", void 0, { cause });
   }
@@ -17909,7 +18121,7 @@ async function prepareAnalyzers(policy) {
     sharedCounts() {
       const tables2 = {};
       for (const role of ["main", "baseline"]) {
-        const table2 = counters[role]?.shareCounts?.();
+        const table2 = counters[role]?.shareTables?.();
         if (table2) tables2[role] = table2;
       }
       return tables2;
@@ -17917,7 +18129,7 @@ async function prepareAnalyzers(policy) {
     adoptCounts(tables2) {
       for (const role of ["main", "baseline"]) {
         const table2 = tables2[role];
-        if (table2) counters[role]?.adoptCounts?.(table2);
+        if (table2) counters[role]?.adoptTables?.(table2);
       }
     },
     settingsId,
@@ -18290,12 +18502,12 @@ async function measureShards(policy, shards, prepared, opts, started = performan
   const results = [];
   const cached = /* @__PURE__ */ new Set();
   const keys = /* @__PURE__ */ new Map();
-  let bytes2 = 0;
+  let bytes3 = 0;
   const reading = /* @__PURE__ */ new Map();
   const report = () => {
     let inFlight = 0;
     for (const b of reading.values()) inFlight += b;
-    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes2 + inFlight, elapsedMs: performance.now() - started });
+    opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes3 + inFlight, elapsedMs: performance.now() - started });
   };
   const readingAt = (path5, b) => {
     reading.set(path5, b);
@@ -18303,7 +18515,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
   };
   const done = (r) => {
     results.push(r);
-    bytes2 += r.read.bytes;
+    bytes3 += r.read.bytes;
     reading.delete(r.path);
     report();
   };
@@ -18512,10 +18724,10 @@ async function runShardWorker() {
         try {
           throwIfFaultInjected(msg.ref.path);
           let told = 0;
-          const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers, (bytes2) => {
-            if (bytes2 - told < PROGRESS_STEP_BYTES) return;
-            told = bytes2;
-            post({ type: "progress", id: msg.id, bytes: bytes2 });
+          const result = await scanShard(msg.ref, prepared.scan, prepared.analyzers, (bytes3) => {
+            if (bytes3 - told < PROGRESS_STEP_BYTES) return;
+            told = bytes3;
+            post({ type: "progress", id: msg.id, bytes: bytes3 });
           });
           post({ type: "result", id: msg.id, result });
         } catch (err) {
@@ -18571,7 +18783,7 @@ function points(x) {
   const r = Math.round(x * 10) / 10;
   return `${r > 0 ? "+" : r < 0 ? "\u2212" : "\xB1"}${Math.abs(r).toFixed(1)} pt`;
 }
-function bytes(n) {
+function bytes2(n) {
   if (n < 1e3) return `${n} B`;
   if (n < 1e6) return `${(n / 1e3).toFixed(1)} kB`;
   if (n < 1e9) return `${(n / 1e6).toFixed(1)} MB`;
@@ -18608,7 +18820,7 @@ function renderMarkdown(report, opts = {}) {
   out.push("");
   const est = report.totals.estimated ? "\u2248" : "";
   out.push(
-    `${count2(report.totals.docs)} documents in ${count2(report.input.shards)} shards, ${est}${bytes(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${escapeMarkdown(report.tokenizer?.main ?? "")})` : "") + `; policy ${codePath(report.policy.file)}.`
+    `${count2(report.totals.docs)} documents in ${count2(report.input.shards)} shards, ${est}${bytes2(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${escapeMarkdown(report.tokenizer?.main ?? "")})` : "") + `; policy ${codePath(report.policy.file)}.`
   );
   out.push("");
   if (report.sampling) {
@@ -18745,7 +18957,7 @@ function renderTerminal(report, opts) {
   lines.push(paint[report.verdict](report.headline));
   lines.push(
     dim(
-      `${count2(report.totals.docs)} documents, ${count2(report.input.shards)} shards, ${est}${bytes(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${report.tokenizer?.main})` : "") + ` \xB7 policy ${report.policy.file}`
+      `${count2(report.totals.docs)} documents, ${count2(report.input.shards)} shards, ${est}${bytes2(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${report.tokenizer?.main})` : "") + ` \xB7 policy ${report.policy.file}`
     )
   );
   if (report.sampling) lines.push(dim(samplingLine(report)));

@@ -4,7 +4,7 @@
 import { relative } from 'node:path';
 import { createMeasurer, forEachWord } from '../measure/index.js';
 import { buildEvalIndex, duplicateOptionsFrom, DuplicateIndexBuilder, findContamination, type EvalItem } from '../measure/duplicates/index.js';
-import { dictionaryFertility, loadTokenizer, measureTokens, readWordList, type TokenCounter } from '../measure/tokens/index.js';
+import { dictionaryFertility, loadTokenizer, measureTokens, readWordList, type SharedTokenizerTables, type TokenCounter } from '../measure/tokens/index.js';
 import type { Policy } from '../policy/types.js';
 import { discoverShards, readShard } from '../read/index.js';
 import type { ReadOptions } from '../read/types.js';
@@ -32,10 +32,10 @@ export interface PreparedAnalyzers {
   adoptCounts(tables: SharedCountTables): void;
 }
 
-/** Per tokenizer of a policy, its table of piece counts in shared memory (see measure/tokens/shared-counts.ts). */
+/** Per tokenizer of a policy, its tables in shared memory: piece counts and ranks (see measure/tokens/shared-counts.ts, ranks.ts). */
 export interface SharedCountTables {
-  main?: SharedArrayBuffer;
-  baseline?: SharedArrayBuffer;
+  main?: SharedTokenizerTables;
+  baseline?: SharedTokenizerTables;
 }
 
 /** Returns the read options a policy implies. */
@@ -119,7 +119,7 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
     sharedCounts() {
       const tables: SharedCountTables = {};
       for (const role of ['main', 'baseline'] as const) {
-        const table = counters[role]?.shareCounts?.();
+        const table = counters[role]?.shareTables?.();
         if (table) tables[role] = table;
       }
       return tables;
@@ -128,7 +128,7 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
       for (const role of ['main', 'baseline'] as const) {
         const table = tables[role];
         // A table made for another tokenizer is refused by the counter, which keeps its own.
-        if (table) counters[role]?.adoptCounts?.(table);
+        if (table) counters[role]?.adoptTables?.(table);
       }
     },
     settingsId,

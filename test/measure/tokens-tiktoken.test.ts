@@ -96,16 +96,17 @@ describe.each(['gpt2', 'cl100k_base', 'o200k_base'] as const)('builtin %s', (nam
     expect(stats.entries).toBeGreaterThan(100);
   });
 
-  it('counts exactly from a table another counter of the same tokenizer filled, and refuses one of another tokenizer', async () => {
+  it('counts exactly from the tables of another counter of the same tokenizer (its piece counts and ranks), and refuses those of another tokenizer', async () => {
     const first = await loadTokenizer({ kind: 'builtin', name });
     const texts = BROWN.slice(0, 200);
     expect(mismatches(first, reference, texts)).toEqual([]);
-    const table = first.shareCounts!();
-    expect(table).toBeInstanceOf(SharedArrayBuffer);
+    const tables = first.shareTables!();
+    expect(tables.counts).toBeInstanceOf(SharedArrayBuffer);
+    expect(tables.ranks).toBeInstanceOf(SharedArrayBuffer);
 
-    // A second counter (as a worker thread would load it) adopts the table before counting.
+    // A second counter (as a worker thread would load it) adopts the tables before counting.
     const second = await loadTokenizer({ kind: 'builtin', name });
-    expect(second.adoptCounts!(table!)).toBe(true);
+    expect(second.adoptTables!(tables)).toBe(true);
     expect(mismatches(second, reference, texts)).toEqual([]);
     // Every piece of these texts was in the table already: the second counter worked none out itself.
     expect(second.cacheStats().misses).toBe(0);
@@ -117,7 +118,8 @@ describe.each(['gpt2', 'cl100k_base', 'o200k_base'] as const)('builtin %s', (nam
     expect(first.cacheStats().misses).toBe(missesBefore);
 
     const other = await loadTokenizer({ kind: 'builtin', name: name === 'gpt2' ? 'cl100k_base' : 'gpt2' });
-    expect(other.adoptCounts!(table!)).toBe(false);
+    expect(other.adoptTables!(tables)).toBe(false);
+    expect(other.adoptTables!({ counts: null, ranks: tables.ranks })).toBe(false);
   });
 
   it('counts special-token strings as ordinary text, as encode(text, [], []) does', () => {

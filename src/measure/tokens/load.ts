@@ -7,10 +7,10 @@ import type { TokenizerSpec } from '../../policy/types.js';
 import { TokenizerError } from './errors.js';
 import { createJsonCounter } from './hf.js';
 import { BUILTIN_NAMES, BUILTIN_PATTERNS, DEFAULT_RANK_FILE_PATTERN, isBuiltinName, type BuiltinName } from './patterns.js';
-import { parseBuiltinRanks, parseRankFile } from './ranks.js';
+import { parseBuiltinRanks, parseRankFile, RankTable } from './ranks.js';
 import { DEFAULT_SHARED_ENTRIES, SharedPieceCounts } from './shared-counts.js';
 import { createRankCounter } from './tiktoken.js';
-import type { TokenCounter } from './types.js';
+import type { SharedTokenizerTables, TokenCounter } from './types.js';
 
 export interface LoadOptions {
   /** Entries per cache generation (see cache.ts); tests make it small to force eviction. */
@@ -55,11 +55,11 @@ export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = 
       id,
       name,
       () => sharedTable(id),
-      (shared) =>
+      (shared, ranks) =>
         createRankCounter({
           id,
           label: name,
-          ranks: parseBuiltinRanks(data.bpe_ranks, name),
+          ranks: ranks ?? parseBuiltinRanks(data.bpe_ranks, name, id),
           pattern: data.pat_str,
           shared,
           ...(generationSize === undefined ? {} : { generationSize }),
@@ -89,7 +89,7 @@ export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = 
     return createRankCounter({
       id,
       label: spec.file,
-      ranks: parseRankFile(text, spec.file),
+      ranks: parseRankFile(text, spec.file, id),
       pattern,
       shared: sharedTable(id),
       ...(generationSize === undefined ? {} : { generationSize }),
@@ -123,18 +123,19 @@ function resolvePattern(pattern: string | undefined, file: string): { pattern: s
  * Returns a byte-level rank counter (no unknown token, exact fast path, pieces recorded) that is
  * built by `make` when first asked to count. Its shared table of piece counts exists from the
  * start (made by `newTable`, or adopted from another thread), so other threads can be handed it
- * before this one has counted anything.
+ * before this one has counted anything; a rank table adopted before then saves the parse.
  */
 function lazyCounter(
   id: string,
   label: string,
   newTable: () => SharedPieceCounts | null,
-  make: (shared: SharedPieceCounts | null) => TokenCounter,
+  make: (shared: SharedPieceCounts | null, ranks: RankTable | null) => TokenCounter,
 ): TokenCounter {
   let real: TokenCounter | undefined;
   let table: SharedPieceCounts | null | undefined;
+  let adoptedRanks: RankTable | null = null;
   const tableOf = (): SharedPieceCounts | null => (table === undefined ? (table = newTable()) : table);
-  const get = (): TokenCounter => (real ??= make(tableOf()));
+  const get = (): TokenCounter => (real ??= make(tableOf(), adoptedRanks));
   return {
     id,
     label,
@@ -145,12 +146,16 @@ function lazyCounter(
     countPiece: (piece) => get().countPiece(piece),
     countWithPieces: (text, pieces) => get().countWithPieces!(text, pieces),
     cacheStats: () => (real ? real.cacheStats() : { hits: 0, misses: 0, evictions: 0, entries: 0 }),
-    shareCounts: () => (real ? real.shareCounts!() : (tableOf()?.buffer ?? null)),
-    adoptCounts: (buffer) => {
-      if (real) return real.adoptCounts!(buffer);
-      const adopted = SharedPieceCounts.attach(buffer, id);
-      if (adopted === null) return false;
-      table = adopted;
+    // Handing the tables out builds the counter: a thread that shares is about to count anyway,
+    // and the others then take its rank table instead of parsing their own.
+    shareTables: () => get().shareTables!(),
+    adoptTables: (tables: SharedTokenizerTables) => {
+      if (real) return real.adoptTables!(tables);
+      const counts = tables.counts === null ? null : SharedPieceCounts.attach(tables.counts, id);
+      const ranks = tables.ranks === null ? null : RankTable.attach(tables.ranks, id);
+      if (counts === null || ranks === null) return false;
+      table = counts;
+      adoptedRanks = ranks;
       return true;
     },
   };

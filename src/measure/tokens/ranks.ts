@@ -1,44 +1,240 @@
 // Byte-level BPE rank tables: the mergeable tokens of a tiktoken-style vocabulary and
-// their ranks, keyed by the token's bytes as a latin1 string (one char per byte), which
-// V8 hashes faster than js-tiktoken's comma-joined byte lists.
+// their ranks, held in one SharedArrayBuffer — token bytes in an arena, an open-addressing
+// index over them, the ranks, and the ranks of every two-byte token by direct index — so
+// that bytePairCount looks a byte range up without making a string of it, and the worker
+// threads of a pooled run take the main thread's table instead of parsing their own.
+//
+// Against the Map<latin1 string, rank> it replaces (o200k_base, 5 alternating rounds in one
+// process, tsx, shared 2-core machine under load): parsing js-tiktoken's data took 34-161 ms
+// against 107-325 ms, and every worker of a pooled run had parsed it again.
 
 import { TokenizerError } from './errors.js';
 
-/** Token bytes (latin1 string) → rank. */
-export type RankTable = Map<string, number>;
+/** Rank of "no such token": above every real rank, so it never wins a merge. Ranks are doubles, since a rank file's ranks may pass 2^31. */
+export const NO_RANK = Infinity;
 
-const BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
-const RANK = /^(?:0|[1-9][0-9]*)$/;
+// Header words.
+const MAGIC = 0;
+const OWNER_1 = 1;
+const OWNER_2 = 2;
+const COUNT = 3;
+const SLOT_BITS = 4;
+const ARENA_BYTES = 5;
+const HEADER_WORDS = 8;
+const MAGIC_VALUE = 0x736c5231;
 
-// Per rank table, the rank of every two-byte token (index: first byte << 8 | second;
-// Infinity where there is none), for bytePairCount's first round of pairs. Filled while
-// parsing: building it afterwards from the Map took 32-38 ms for o200k_base (65,536
-// lookups or one pass over the entries), about what it saves on a 10 MB corpus.
-const pairTables = new WeakMap<RankTable, Float64Array>();
-
-const newPairTable = (): Float64Array => new Float64Array(1 << 16).fill(Infinity);
-
-/** Records a token's rank in a pair table when the token is two bytes long. */
-function notePair(table: Float64Array, bytes: string, rank: number): void {
-  if (bytes.length === 2) table[(bytes.charCodeAt(0) << 8) | bytes.charCodeAt(1)] = rank;
+/** Returns two 32-bit hashes of a tokenizer id, by which a shared table names its owner. */
+export function ownerHashes(owner: string): [number, number] {
+  let a = 0x811c9dc5 | 0;
+  let b = 0x9e3779b9 | 0;
+  for (let i = 0; i < owner.length; i++) {
+    a = Math.imul(a ^ owner.charCodeAt(i), 0x01000193);
+    b = Math.imul(b ^ owner.charCodeAt(i), 0x5bd1e995) ^ (b >>> 15);
+  }
+  return [a, b];
 }
 
-/** Returns the ranks of the two-byte tokens of a table, indexed by first byte << 8 | second (Infinity for none). */
-export function pairRanks(ranks: RankTable): Float64Array {
-  let table = pairTables.get(ranks);
-  if (table === undefined) {
-    // A table not made by the parsers below (tests build Maps by hand).
-    table = newPairTable();
-    for (const [bytes, rank] of ranks) notePair(table, bytes, rank);
-    pairTables.set(ranks, table);
+/** FNV-1a over bytes[start, end). */
+function hashBytes(bytes: Uint8Array, start: number, end: number): number {
+  let h = 0x811c9dc5 | 0;
+  for (let i = start; i < end; i++) h = Math.imul(h ^ bytes[i]!, 0x01000193);
+  return h;
+}
+
+/** The tokens of a vocabulary and their ranks, looked up by byte range. */
+export class RankTable {
+  /** Tokens in the table. */
+  readonly size: number;
+  /** Rank of each two-byte token, indexed by first byte << 8 | second (NO_RANK where there is none). */
+  readonly pairs: Float64Array;
+  private readonly offsets: Int32Array;
+  private readonly ranks: Float64Array;
+  private readonly slots: Int32Array;
+  private readonly mask: number;
+  private readonly arena: Uint8Array;
+
+  private constructor(readonly buffer: SharedArrayBuffer) {
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const count = header[COUNT]!;
+    const slotCount = 1 << header[SLOT_BITS]!;
+    this.size = count;
+    this.mask = slotCount - 1;
+    let at = HEADER_WORDS * 4;
+    this.ranks = new Float64Array(buffer, at, count);
+    at += count * 8;
+    this.pairs = new Float64Array(buffer, at, 1 << 16);
+    at += (1 << 16) * 8;
+    this.offsets = new Int32Array(buffer, at, count + 1);
+    at += (count + 1) * 4;
+    this.slots = new Int32Array(buffer, at, slotCount);
+    at += slotCount * 4;
+    this.arena = new Uint8Array(buffer, at, header[ARENA_BYTES]!);
   }
-  return table;
+
+  /** Returns the table in `buffer` (from another thread's table) when it was made for the tokenizer `owner`, else null. */
+  static attach(buffer: SharedArrayBuffer, owner: string): RankTable | null {
+    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS * 4) return null;
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const [a, b] = ownerHashes(owner);
+    if (header[MAGIC] !== MAGIC_VALUE || header[OWNER_1] !== a || header[OWNER_2] !== b) return null;
+    return new RankTable(buffer);
+  }
+
+  /** Builds a table from token bytes (concatenated in `arena`, token i at offsets[i]..offsets[i+1]) and ranks; `duplicate(i)` is called for a token listed before. */
+  static build(owner: string, arena: Uint8Array, offsets: Int32Array, ranks: Float64Array, count: number, duplicate: (i: number) => void): RankTable {
+    let bits = 1;
+    while (1 << bits < count * 2) bits++;
+    const arenaBytes = offsets[count]!;
+    const bytes = HEADER_WORDS * 4 + count * 8 + (1 << 16) * 8 + (count + 1) * 4 + (1 << bits) * 4 + arenaBytes;
+    const buffer = new SharedArrayBuffer(bytes);
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const [a, b] = ownerHashes(owner);
+    header[OWNER_1] = a;
+    header[OWNER_2] = b;
+    header[COUNT] = count;
+    header[SLOT_BITS] = bits;
+    header[ARENA_BYTES] = arenaBytes;
+    header[MAGIC] = MAGIC_VALUE;
+    const table = new RankTable(buffer);
+    table.ranks.set(ranks.subarray(0, count));
+    table.offsets.set(offsets.subarray(0, count + 1));
+    table.arena.set(arena.subarray(0, arenaBytes));
+    table.pairs.fill(NO_RANK);
+    const { slots, mask } = table;
+    const own = table.arena;
+    for (let i = 0; i < count; i++) {
+      const start = offsets[i]!;
+      const end = offsets[i + 1]!;
+      let slot = hashBytes(own, start, end) & mask;
+      for (;;) {
+        const v = slots[slot]!;
+        if (v === 0) {
+          slots[slot] = i + 1;
+          break;
+        }
+        if (table.sameBytes(v - 1, own, start, end)) {
+          duplicate(i);
+          break;
+        }
+        slot = (slot + 1) & mask;
+      }
+      if (end - start === 2) table.pairs[(own[start]! << 8) | own[start + 1]!] = ranks[i]!;
+    }
+    return table;
+  }
+
+  private sameBytes(token: number, bytes: Uint8Array, start: number, end: number): boolean {
+    const from = this.offsets[token]!;
+    if (this.offsets[token + 1]! - from !== end - start) return false;
+    const arena = this.arena;
+    for (let k = 0; k < end - start; k++) if (arena[from + k] !== bytes[start + k]) return false;
+    return true;
+  }
+
+  /** Returns the rank of the token whose bytes are bytes[start, end), or NO_RANK. */
+  rank(bytes: Uint8Array, start: number, end: number): number {
+    const { slots, mask } = this;
+    for (let slot = hashBytes(bytes, start, end) & mask; ; slot = (slot + 1) & mask) {
+      const v = slots[slot]!;
+      if (v === 0) return NO_RANK;
+      if (this.sameBytes(v - 1, bytes, start, end)) return this.ranks[v - 1]!;
+    }
+  }
+
+  /** Returns the rank of a token given as a latin1 string (one char per byte), or undefined; for tests and tools. */
+  get(latin1: string): number | undefined {
+    const bytes = Uint8Array.from(latin1, (c) => c.charCodeAt(0));
+    const r = this.rank(bytes, 0, bytes.length);
+    return r === NO_RANK ? undefined : r;
+  }
+
+  /** Whether every single byte is a token. */
+  missingBytes(): string[] {
+    const missing: string[] = [];
+    const one = new Uint8Array(1);
+    for (let b = 0; b < 256; b++) {
+      one[0] = b;
+      if (this.rank(one, 0, 1) === NO_RANK) missing.push(`0x${b.toString(16).padStart(2, '0')}`);
+    }
+    return missing;
+  }
+}
+
+/** Growable token list while parsing. */
+class TokenList {
+  arena = new Uint8Array(1 << 20);
+  offsets = new Int32Array(1 << 16);
+  ranks = new Float64Array(1 << 16);
+  count = 0;
+  used = 0;
+
+  /** Makes room for one more token of at most `bytes` bytes. */
+  reserve(bytes: number): void {
+    if (this.used + bytes > this.arena.length) {
+      const a = new Uint8Array(Math.max(this.arena.length * 2, this.used + bytes));
+      a.set(this.arena.subarray(0, this.used));
+      this.arena = a;
+    }
+    if (this.count + 2 > this.offsets.length) {
+      const o = new Int32Array(this.offsets.length * 2);
+      o.set(this.offsets);
+      this.offsets = o;
+      const r = new Float64Array(this.ranks.length * 2);
+      r.set(this.ranks);
+      this.ranks = r;
+    }
+  }
+
+  /** Ends the token whose bytes were written at used.. with `rank`. */
+  close(end: number, rank: number): void {
+    this.ranks[this.count] = rank;
+    this.count++;
+    this.used = end;
+    this.offsets[this.count] = end;
+  }
+}
+
+/** base64 alphabet value of each ASCII code, -1 elsewhere. */
+const BASE64_VALUE = (() => {
+  const v = new Int8Array(128).fill(-1);
+  const alphabet = 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/';
+  for (let i = 0; i < alphabet.length; i++) v[alphabet.charCodeAt(i)] = i;
+  return v;
+})();
+
+/**
+ * Decodes the base64 text[start, end) into out at `at`; returns the end offset, or -1 when it
+ * is not base64. Written out because decoding each token with atob or
+ * Buffer was most of the parse: it made a string or a buffer per token.
+ */
+function decodeBase64(text: string, start: number, end: number, out: Uint8Array, at: number): number {
+  const length = end - start;
+  let pad = 0;
+  if (length > 0 && text.charCodeAt(end - 1) === 0x3d) pad = length > 1 && text.charCodeAt(end - 2) === 0x3d ? 2 : 1;
+  // Padded to a multiple of 4, or unpadded as atob also takes it; a lone last character is never base64.
+  if (length === 0 || (pad > 0 && length % 4 !== 0) || (length - pad) % 4 === 1) return -1;
+  const last = end - pad;
+  let bits = 0;
+  let held = 0;
+  for (let i = start; i < last; i++) {
+    const c = text.charCodeAt(i);
+    const v = c < 128 ? BASE64_VALUE[c]! : -1;
+    if (v < 0) return -1;
+    bits = (bits << 6) | v;
+    held += 6;
+    if (held >= 8) {
+      held -= 8;
+      out[at++] = (bits >>> held) & 0xff;
+    }
+  }
+  // Bits left over after the last whole byte are dropped, as atob and Buffer do.
+  return at;
 }
 
 /** Returns the rank table of a tiktoken rank file (`<base64 token> <rank>` per line); throws a TokenizerError naming the file and line of the first bad line. */
-export function parseRankFile(text: string, file: string): RankTable {
-  const ranks: RankTable = new Map();
-  const pairs = newPairTable();
+export function parseRankFile(text: string, file: string, owner: string = file): RankTable {
+  const list = new TokenList();
+  const lineOf: number[] = [];
   const lines = text.split('\n');
   for (let i = 0; i < lines.length; i++) {
     const line = lines[i]!.endsWith('\r') ? lines[i]!.slice(0, -1) : lines[i]!;
@@ -58,44 +254,56 @@ export function parseRankFile(text: string, file: string): RankTable {
     if (!RANK.test(rank) || !Number.isSafeInteger(Number(rank))) {
       throw new TokenizerError('load', file, `rank ${quote(rank)} is not a non-negative integer`, { line: i + 1 });
     }
-    const bytes = Buffer.from(token, 'base64').toString('latin1');
-    if (ranks.has(bytes)) {
-      throw new TokenizerError('load', file, `token ${quote(token)} is listed twice`, { line: i + 1 });
-    }
-    ranks.set(bytes, Number(rank));
-    notePair(pairs, bytes, Number(rank));
+    list.reserve(token.length);
+    const end = decodeBase64(token, 0, token.length, list.arena, list.used);
+    if (end < 0) throw new TokenizerError('load', file, `token ${quote(token)} is not base64`, { line: i + 1 });
+    list.close(end, Number(rank));
+    lineOf.push(i + 1);
   }
-  requireEveryByte(ranks, file);
-  pairTables.set(ranks, pairs);
-  return ranks;
+  const table = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, (t) => {
+    const raw = lines[lineOf[t]! - 1]!.split(' ')[0]!;
+    throw new TokenizerError('load', file, `token ${quote(raw)} is listed twice`, { line: lineOf[t]! });
+  });
+  requireEveryByte(table, file);
+  return table;
 }
 
+const BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
+const RANK = /^(?:0|[1-9][0-9]*)$/;
+
 /** Returns the rank table of a js-tiktoken builtin (`bpe_ranks`: lines of `<tag> <first rank> <base64 token>...`). */
-export function parseBuiltinRanks(bpeRanks: string, name: string): RankTable {
-  const ranks: RankTable = new Map();
-  const pairs = newPairTable();
-  for (const line of bpeRanks.split('\n')) {
-    if (line.length === 0) continue;
-    const parts = line.split(' ');
-    const first = Number.parseInt(parts[1] ?? '', 10);
-    if (!Number.isSafeInteger(first)) throw new TokenizerError('load', name, 'builtin rank table is damaged');
-    // atob gives the latin1 string directly: measured on o200k_base (tsx, 2 runs each, shared
-    // machine) 184-229 ms for the whole table against 317-359 ms with Buffer.from(...).toString
-    // ('latin1'); splitting the lines and filling the Map alone take 135-165 ms. The builtin
-    // data is the package's own, so atob's strict base64 should never reject it.
-    try {
-      for (let i = 2; i < parts.length; i++) {
-        const bytes = atob(parts[i]!);
-        ranks.set(bytes, first + i - 2);
-        notePair(pairs, bytes, first + i - 2);
+export function parseBuiltinRanks(bpeRanks: string, name: string, owner: string = `builtin:${name}`): RankTable {
+  const list = new TokenList();
+  const n = bpeRanks.length;
+  let p = 0;
+  while (p < n) {
+    let lineEnd = bpeRanks.indexOf('\n', p);
+    if (lineEnd < 0) lineEnd = n;
+    if (lineEnd > p) {
+      // `<tag> <first rank>` then tokens, one space apart.
+      const tagEnd = bpeRanks.indexOf(' ', p);
+      const rankEnd = tagEnd < 0 || tagEnd >= lineEnd ? -1 : bpeRanks.indexOf(' ', tagEnd + 1);
+      const first = Number.parseInt(bpeRanks.slice(tagEnd + 1, rankEnd < 0 || rankEnd > lineEnd ? lineEnd : rankEnd), 10);
+      if (tagEnd < 0 || tagEnd >= lineEnd || !Number.isSafeInteger(first)) throw new TokenizerError('load', name, 'builtin rank table is damaged');
+      let rank = first;
+      let q = rankEnd < 0 || rankEnd > lineEnd ? lineEnd : rankEnd + 1;
+      while (q < lineEnd) {
+        let tokenEnd = bpeRanks.indexOf(' ', q);
+        if (tokenEnd < 0 || tokenEnd > lineEnd) tokenEnd = lineEnd;
+        list.reserve(tokenEnd - q);
+        const end = decodeBase64(bpeRanks, q, tokenEnd, list.arena, list.used);
+        if (end < 0) throw new TokenizerError('load', name, 'builtin rank table is damaged (bad base64)');
+        list.close(end, rank++);
+        q = tokenEnd + 1;
       }
-    } catch (cause) {
-      throw new TokenizerError('load', name, 'builtin rank table is damaged (bad base64)', { cause });
     }
+    p = lineEnd + 1;
   }
-  requireEveryByte(ranks, name);
-  pairTables.set(ranks, pairs);
-  return ranks;
+  const table = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, () => {
+    throw new TokenizerError('load', name, 'builtin rank table is damaged (a token is listed twice)');
+  });
+  requireEveryByte(table, name);
+  return table;
 }
 
 /**
@@ -103,11 +311,8 @@ export function parseBuiltinRanks(bpeRanks: string, name: string): RankTable {
  * silently drops (or emits `undefined` for) bytes a table lacks, so such a table would
  * give counts that mean nothing: refuse it.
  */
-function requireEveryByte(ranks: RankTable, file: string): void {
-  const missing: string[] = [];
-  for (let b = 0; b < 256; b++) {
-    if (!ranks.has(String.fromCharCode(b))) missing.push(`0x${b.toString(16).padStart(2, '0')}`);
-  }
+function requireEveryByte(table: RankTable, file: string): void {
+  const missing = table.missingBytes();
   if (missing.length > 0) {
     const shown = missing.slice(0, 5).join(', ') + (missing.length > 5 ? ', ...' : '');
     throw new TokenizerError(

@@ -17,7 +17,8 @@
 // A table is made for one tokenizer and records that tokenizer's id: a counter refuses a
 // table made for another, since a wrong count there would be a wrong report.
 
-import { hashRange, MAX_CACHED_PIECE_LENGTH } from './cache.js';
+import { MAX_CACHED_PIECE_LENGTH } from './cache.js';
+import { ownerHashes } from './ranks.js';
 
 /** Default entries: Brown's million words give about 57k distinct o200k pieces; four times that leaves room for a few languages. Slots are twice as many (half full at most); keys average 8 units. About 13 MB in all. */
 export const DEFAULT_SHARED_ENTRIES = 1 << 18;
@@ -37,14 +38,6 @@ const HEADER_WORDS = 8;
 const MAGIC_VALUE = 0x736c4331;
 /** Words per entry: key hash, key offset in the arena, key length << 16 | token count. */
 const ENTRY_WORDS = 3;
-
-/** Returns two 32-bit hashes of a tokenizer id. */
-function ownerHashes(owner: string): [number, number] {
-  const a = hashRange(owner, 0, owner.length);
-  let b = 0x9e3779b9 | 0;
-  for (let i = 0; i < owner.length; i++) b = Math.imul(b ^ owner.charCodeAt(i), 0x5bd1e995) ^ (b >>> 15);
-  return [a, b];
-}
 
 /** A grow-only table of piece → token count in a SharedArrayBuffer, for one tokenizer. */
 export class SharedPieceCounts {

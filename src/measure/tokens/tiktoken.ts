@@ -47,14 +47,6 @@ export function asciiSplitterFor(pattern: string): AsciiSplitter | null {
   return null;
 }
 
-/** Returns the UTF-8 bytes of a piece as a latin1 string (lone surrogates become U+FFFD, as with TextEncoder). */
-function utf8Bytes(piece: string): string {
-  for (let i = 0; i < piece.length; i++) {
-    if (piece.charCodeAt(i) >= 128) return Buffer.from(piece, 'utf8').toString('latin1');
-  }
-  return piece;
-}
-
 /** Returns a TokenCounter over a rank table and split pattern, with a per-piece cache. */
 export function createRankCounter(options: RankCounterOptions): TokenCounter {
   const { ranks, label } = options;
@@ -70,7 +62,7 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
   const builtinPattern = (Object.values(BUILTIN_PATTERNS) as string[]).includes(options.pattern);
 
   const countRange = (text: string, start: number, end: number): number => {
-    if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(utf8Bytes(text.slice(start, end)), ranks);
+    if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(text, start, end, ranks);
     const hash = hashRange(text, start, end);
     if (shared !== null) {
       const known = shared.find(text, start, end, hash);
@@ -81,9 +73,8 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
     }
     const cached = cache.find(text, start, end, hash);
     if (cached !== undefined) return cached;
-    const piece = text.slice(start, end);
-    const n = bytePairCount(utf8Bytes(piece), ranks);
-    if (shared === null || !shared.add(text, start, end, hash, n)) cache.add(piece, hash, n);
+    const n = bytePairCount(text, start, end, ranks);
+    if (shared === null || !shared.add(text, start, end, hash, n)) cache.add(text.slice(start, end), hash, n);
     return n;
   };
 
@@ -163,9 +154,10 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
       const own = cache.stats();
       return { ...own, hits: own.hits + sharedHits, entries: own.entries + (shared?.size ?? 0) };
     },
-    shareCounts: () => shared?.buffer ?? null,
-    adoptCounts: (buffer) => {
-      const table = SharedPieceCounts.attach(buffer, options.id);
+    shareTables: () => ({ counts: shared?.buffer ?? null, ranks: ranks.buffer }),
+    adoptTables: (tables) => {
+      // The rank table is this counter's already; only the counts can still change hands.
+      const table = tables.counts === null ? null : SharedPieceCounts.attach(tables.counts, options.id);
       if (table === null) return false;
       shared = table;
       return true;

@@ -16,6 +16,12 @@ export interface CacheStats {
 /** The tokenizer families sluice loads. */
 export type TokenizerKind = 'tiktoken' | 'bpe' | 'wordpiece' | 'unigram';
 
+/** A rank counter's state in shared memory: the piece counts every thread fills (shared-counts.ts) and the rank table (ranks.ts); null where it keeps none. */
+export interface SharedTokenizerTables {
+  counts: SharedArrayBuffer | null;
+  ranks: SharedArrayBuffer | null;
+}
+
 export interface TokenCounter {
   /** Stable identity for caches: `builtin:<name>`, or the format and sha256 of the file content (and split pattern, for rank files). */
   id: string;
@@ -45,10 +51,10 @@ export interface TokenCounter {
    */
   countWithPieces?(text: string, pieces: PieceList): { tokens: number; unknown: number };
   cacheStats(): CacheStats;
-  /** The shared-memory table of piece counts this counter fills, for other threads' counters of the same tokenizer to adopt (null: it keeps none). */
-  shareCounts?(): SharedArrayBuffer | null;
-  /** Uses another thread's table (from shareCounts) from now on; false, and nothing changes, when it was made for another tokenizer. */
-  adoptCounts?(buffer: SharedArrayBuffer): boolean;
+  /** The tables in shared memory this counter works from, for other threads' counters of the same tokenizer to adopt (rank counters only). */
+  shareTables?(): SharedTokenizerTables;
+  /** Uses another thread's tables (from shareTables) from now on; false, and nothing changes, when they were made for another tokenizer. */
+  adoptTables?(tables: SharedTokenizerTables): boolean;
 }
 
 /** What one text measures in one tokenizer; all fields are sums, so measures add up. */
