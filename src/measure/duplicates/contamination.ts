@@ -11,7 +11,7 @@
 // ordinary text, so the index counts them in `shortItems` for the report to show.) An item with
 // no words at all cannot overlap anything and is counted in `emptyItems`.
 import * as hash from './hash.js';
-import { hashWords, prepareText, wordBuffer, type WordBuffer } from './scan.js';
+import { hashWords, prepareText, sharedWords, wordBuffer } from './scan.js';
 
 // Module-local copies (see scan.ts: some loaders make imported bindings getters).
 const mix32 = hash.mix32;
@@ -91,7 +91,7 @@ export function buildEvalIndex(items: EvalItem[], ngram = DEFAULT_NGRAM): EvalIn
     const count = words - m + 1;
     const l1 = new Int32Array(count);
     const l2 = new Int32Array(count);
-    rollGrams(buf, words, m, l1, l2);
+    rollGrams(buf.lane1, buf.lane2!, words, m, l1, l2);
     grams.push({ l1, l2, count });
     total += count;
   });
@@ -130,10 +130,8 @@ export function buildEvalIndex(items: EvalItem[], ngram = DEFAULT_NGRAM): EvalIn
   };
 }
 
-/** Writes the two-lane hash of every m-word window of the words in `buf` into l1/l2 (count − m + 1 of them). */
-function rollGrams(buf: WordBuffer, count: number, m: number, l1: Int32Array, l2: Int32Array): void {
-  const w1 = buf.lane1;
-  const w2 = buf.lane2!;
+/** Writes the two-lane hash of every m-word window of the words w1/w2[0 .. count) into l1/l2 (count − m + 1 of them). */
+function rollGrams(w1: Int32Array, w2: Int32Array, count: number, m: number, l1: Int32Array, l2: Int32Array): void {
   let top1 = 1;
   let top2 = 1;
   for (let j = 1; j < m; j++) {
@@ -161,8 +159,22 @@ const scratch = { buf: wordBuffer(2), l1: new Int32Array(1024), l2: new Int32Arr
 
 /** Returns the file and line of the first evaluation item (in the index's order) that `text` overlaps by an n-word span or a whole short item, or null. */
 export function findContamination(index: EvalIndex, text: string): { file: string; line: number } | null {
-  const buf = scratch.buf;
-  const words = hashWords(prepareText(text), buf);
+  const prepared = prepareText(text);
+  // In a full check the duplicate index has just scanned this text with two lanes (see DocumentScanner).
+  let w1: Int32Array;
+  let w2: Int32Array;
+  let words: number;
+  const done = sharedWords(prepared);
+  if (done !== null) {
+    w1 = done.lane1;
+    w2 = done.lane2;
+    words = done.count;
+  } else {
+    const buf = scratch.buf;
+    words = hashWords(prepared, buf);
+    w1 = buf.lane1;
+    w2 = buf.lane2!;
+  }
   const { lane1, lane2, item, mask } = index.table;
   let best = -1;
   for (const m of index.lengths) {
@@ -174,7 +186,7 @@ export function findContamination(index: EvalIndex, text: string): { file: strin
     }
     const l1 = scratch.l1;
     const l2 = scratch.l2;
-    rollGrams(buf, words, m, l1, l2);
+    rollGrams(w1, w2, words, m, l1, l2);
     for (let i = 0; i < count; i++) {
       const a = l1[i]!;
       const b = l2[i]!;
