@@ -109,6 +109,13 @@ describe('13-gram overlap with evaluation items (Brown et al. 2020, appendix C)'
     expect(flagged).toBeLessThan(10);
   });
 
+  it('gives the same answers when every window passes the prefilter (the table decides alone)', () => {
+    const open: typeof index = { ...index, table: { ...index.table, filter: new Int32Array(index.table.filter.length).fill(-1) } };
+    const texts = [...trainParas.slice(0, 50), `${span(evalParas[40]!, 0, 20)} and ${span(evalParas[3]!, 2, 15)}`, span(evalParas[9]!, 4, 13)];
+    for (const text of texts) expect(findContamination(open, text)).toEqual(findContamination(index, text));
+    expect(findContamination(open, texts.at(-1)!)).toEqual({ file: 'eval/reading.jsonl', line: 10 });
+  });
+
   it('reports the first overlapping item in the index order', () => {
     const text = `${span(evalParas[40]!, 0, 20)} and ${span(evalParas[3]!, 2, 15)}`;
     expect(findContamination(index, text)).toEqual({ file: 'eval/reading.jsonl', line: 4 });
