@@ -108,7 +108,8 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
       return out;
     };
   }
-  if (dupOptions) analyzers.duplicates = () => new DuplicateIndexBuilder(dupOptions);
+  // With contamination on, the scan checks each document right after indexing it: one word pass serves both.
+  if (dupOptions) analyzers.duplicates = () => new DuplicateIndexBuilder(dupOptions, { words: evalIndex !== undefined });
   if (evalIndex) {
     const idx = evalIndex;
     analyzers.contamination = (text: string) => findContamination(idx, text);

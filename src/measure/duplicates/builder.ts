@@ -154,7 +154,7 @@ export class DuplicateIndexBuilder {
   readonly signatureBits: number;
   private readonly sigBytes: number;
   private readonly sketcher: Sketcher;
-  private readonly scanner = new DocumentScanner();
+  private readonly scanner: DocumentScanner;
   private readonly exact: Pages;
   private readonly signatures: Pages;
   private readonly stream: Pages;
@@ -163,8 +163,14 @@ export class DuplicateIndexBuilder {
   private lastLine = 0;
   private finished = false;
 
-  constructor(opts: DuplicateOptions) {
+  /**
+   * `share.words`: the caller checks each document for contamination right after adding it
+   * (findContamination on the same text), so the scan also hashes the words in contamination's
+   * second lane and leaves them for it (see sharedWords); the index is the same either way.
+   */
+  constructor(opts: DuplicateOptions, share: { words?: boolean } = {}) {
     this.options = checkOptions(opts);
+    this.scanner = new DocumentScanner(share.words ? 2 : 1);
     this.signatureBits = bitsFor(this.options);
     this.sigBytes = signatureBytes(this.options.hashes, this.signatureBits);
     this.sketcher = new Sketcher(this.options.shingle, this.options.hashes);
