@@ -5350,12 +5350,12 @@ function buildLanguages(v, sink) {
     for (let i = 0; i < j; i++) {
       const a = out[i];
       const b = out[j];
-      const shared = b.covers.filter((c) => a.covers.includes(c));
-      if (shared.length === 0) continue;
+      const shared2 = b.covers.filter((c) => a.covers.includes(c));
+      if (shared2.length === 0) continue;
       const same = a.iso6393 === b.iso6393;
       sink.problem(
         ["languages", b.key],
-        same ? `\`${b.key}\` and \`${a.key}\` are the same language (\`${a.iso6393}\`); list it once${b.key.includes("-") || a.key.includes("-") ? ", with all its scripts under `scripts`" : ""}` : `\`${b.key}\` overlaps \`${a.key}\`: both cover ${shared.map((c) => `\`${c}\``).join(", ")}, so a detected label could count under either; keep one`,
+        same ? `\`${b.key}\` and \`${a.key}\` are the same language (\`${a.iso6393}\`); list it once${b.key.includes("-") || a.key.includes("-") ? ", with all its scripts under `scripts`" : ""}` : `\`${b.key}\` overlaps \`${a.key}\`: both cover ${shared2.map((c) => `\`${c}\``).join(", ")}, so a detected label could count under either; keep one`,
         { part: "key" }
       );
     }
@@ -6723,7 +6723,17 @@ function hashWords(prepared, buf) {
         h1 = Math.imul(h1 ^ c2, 16777619);
         if (two) h2 = Math.imul(h2 ^ c2, 739982445);
         len++;
+        continue;
       }
+      const from = i;
+      while (i + 1 < n) {
+        const d = prepared.charCodeAt(i + 1);
+        if (t[d] !== WORD) break;
+        h1 = Math.imul(h1 ^ d, 16777619);
+        if (two) h2 = Math.imul(h2 ^ d, 739982445);
+        i++;
+      }
+      len += i - from;
     } else if (inWord) {
       inWord = false;
       if (count3 === buf.lane1.length) grow(buf);
@@ -6740,6 +6750,16 @@ function hashWords(prepared, buf) {
   }
   return count3;
 }
+var shared = {
+  prepared: null,
+  owner: null,
+  lane1: new Int32Array(0),
+  lane2: new Int32Array(0),
+  count: 0
+};
+function sharedWords(prepared) {
+  return shared.prepared === prepared ? shared : null;
+}
 var DocumentScanner = class {
   /** Code units of the exact normal form (0: empty document). */
   exactLength = 0;
@@ -6749,17 +6769,30 @@ var DocumentScanner = class {
   /** Words found; their hashes are words[0 .. wordCount). */
   wordCount = 0;
   words = new Int32Array(1024);
+  /** Second-lane word hashes (as hashWords' lane2), filled only by a two-lane scanner. */
+  words2;
+  /**
+   * `lanes` 2 also hashes each word in contamination's second lane and leaves both lanes for
+   * sharedWords: one pass then serves the duplicate index and the contamination check.
+   */
+  constructor(lanes = 1) {
+    this.words2 = lanes === 2 ? new Int32Array(1024) : null;
+  }
   /**
    * Scans `prepared` (see prepareText) once, computing both the exact hash of its normal form
    * (see normalizeForExact; punctuation deleted when `strip`) and one hash per word.
    * One fused pass: classifying each code unit once is most of the cost.
    */
   scan(prepared, strip) {
+    if (shared.owner === this) shared.prepared = null;
     const t = classTable();
     let words = this.words;
+    let words2 = this.words2;
+    const two = words2 !== null;
     let count3 = 0;
     let inWord = false;
     let wh = 0;
+    let wh2 = 0;
     let wlen = 0;
     let h1 = EXACT_BASIS_12;
     let h2 = EXACT_BASIS_22;
@@ -6784,22 +6817,51 @@ var DocumentScanner = class {
         if (!inWord) {
           inWord = true;
           wh = 2166136261 | 0;
+          wh2 = 84696351;
           wlen = 0;
         }
+        if (space) {
+          if (emitted > 0) {
+            h1 = Math.imul(h1 ^ 32, EXACT_PRIME_12);
+            h2 = Math.imul(h2 ^ 32, EXACT_PRIME_22);
+            emitted++;
+          }
+          space = false;
+        }
         wh = Math.imul(wh ^ c, 16777619);
-        wlen++;
+        if (two) wh2 = Math.imul(wh2 ^ c, 739982445);
+        h1 = Math.imul(h1 ^ c, EXACT_PRIME_12);
+        h2 = Math.imul(h2 ^ c, EXACT_PRIME_22);
         if (lo >= 0) {
           wh = Math.imul(wh ^ lo, 16777619);
-          wlen++;
+          if (two) wh2 = Math.imul(wh2 ^ lo, 739982445);
+          h1 = Math.imul(h1 ^ lo, EXACT_PRIME_12);
+          h2 = Math.imul(h2 ^ lo, EXACT_PRIME_22);
+          wlen += 2;
+          emitted += 2;
+          continue;
         }
+        const from = i;
+        while (i + 1 < n) {
+          const d = prepared.charCodeAt(i + 1);
+          if (t[d] !== WORD) break;
+          wh = Math.imul(wh ^ d, 16777619);
+          if (two) wh2 = Math.imul(wh2 ^ d, 739982445);
+          h1 = Math.imul(h1 ^ d, EXACT_PRIME_12);
+          h2 = Math.imul(h2 ^ d, EXACT_PRIME_22);
+          i++;
+        }
+        wlen += i - from + 1;
+        emitted += i - from + 1;
+        continue;
       } else {
         if (inWord) {
           inWord = false;
           if (count3 === words.length) {
-            const w = new Int32Array(words.length * 2);
-            w.set(words);
-            words = w;
+            words = doubled(words);
+            if (two) words2 = doubled(words2);
           }
+          if (two) words2[count3] = mix32b3(wh2 + wlen);
           words[count3++] = mix322(wh ^ wlen);
         }
         if (cls === SPACE) {
@@ -6827,18 +6889,31 @@ var DocumentScanner = class {
     }
     if (inWord) {
       if (count3 === words.length) {
-        const w = new Int32Array(words.length * 2);
-        w.set(words);
-        words = w;
+        words = doubled(words);
+        if (two) words2 = doubled(words2);
       }
+      if (two) words2[count3] = mix32b3(wh2 + wlen);
       words[count3++] = mix322(wh ^ wlen);
     }
     finishExact2(h1, h2, emitted, this);
     this.words = words;
+    this.words2 = words2;
     this.wordCount = count3;
     this.exactLength = emitted;
+    if (two) {
+      shared.prepared = prepared;
+      shared.owner = this;
+      shared.lane1 = words;
+      shared.lane2 = words2;
+      shared.count = count3;
+    }
   }
 };
+function doubled(a) {
+  const w = new Int32Array(a.length * 2);
+  w.set(a);
+  return w;
+}
 var oneOff = new DocumentScanner();
 
 // src/measure/duplicates/lsh.ts
@@ -7119,7 +7194,7 @@ var DuplicateIndexBuilder = class {
   signatureBits;
   sigBytes;
   sketcher;
-  scanner = new DocumentScanner();
+  scanner;
   exact;
   signatures;
   stream;
@@ -7127,8 +7202,14 @@ var DuplicateIndexBuilder = class {
   lastOrdinal = -1;
   lastLine = 0;
   finished = false;
-  constructor(opts) {
+  /**
+   * `share.words`: the caller checks each document for contamination right after adding it
+   * (findContamination on the same text), so the scan also hashes the words in contamination's
+   * second lane and leaves them for it (see sharedWords); the index is the same either way.
+   */
+  constructor(opts, share = {}) {
     this.options = checkOptions(opts);
+    this.scanner = new DocumentScanner(share.words ? 2 : 1);
     this.signatureBits = bitsFor(this.options);
     this.sigBytes = signatureBytes(this.options.hashes, this.signatureBits);
     this.sketcher = new Sketcher(this.options.shingle, this.options.hashes);
@@ -7777,6 +7858,8 @@ var DEFAULT_NGRAM2 = 13;
 var BASE_1 = 625341585;
 var BASE_2 = 1481765933;
 var LOAD = 0.5;
+var FILTER_BITS_PER_GRAM = 16;
+var MAX_FILTER_LOG = 24;
 var INDEX_VERSION = 1;
 function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
   if (!Number.isInteger(ngram) || ngram < 1) throw new RangeError(`contamination: ngram must be a positive integer, got ${ngram}`);
@@ -7813,7 +7896,7 @@ function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
     const count3 = words - m + 1;
     const l1 = new Int32Array(count3);
     const l2 = new Int32Array(count3);
-    rollGrams(buf, words, m, l1, l2);
+    rollGrams(buf.lane1, buf.lane2, words, m, l1, l2);
     grams.push({ l1, l2, count: count3 });
     total += count3;
   });
@@ -7823,11 +7906,17 @@ function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
   const lane2 = new Int32Array(size);
   const item = new Int32Array(size).fill(-1);
   const mask = size - 1;
+  let filterLog = 5;
+  while (filterLog < MAX_FILTER_LOG && 2 ** filterLog < total * FILTER_BITS_PER_GRAM) filterLog++;
+  const filter = new Int32Array(2 ** (filterLog - 5));
+  const filterShift = 32 - filterLog;
   let distinct = 0;
   grams.forEach((g, idx) => {
     for (let i = 0; i < g.count; i++) {
       const a = g.l1[i];
       const b = g.l2[i];
+      const bit = a >>> filterShift;
+      filter[bit >>> 5] |= 1 << (bit & 31);
       let slot = a & mask;
       while (item[slot] >= 0 && !(lane1[slot] === a && lane2[slot] === b)) slot = slot + 1 & mask;
       if (item[slot] < 0) {
@@ -7846,13 +7935,11 @@ function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
     shortItems,
     emptyItems,
     lengths: [...lengths].sort((a, b) => b - a),
-    table: { lane1, lane2, item, mask },
+    table: { lane1, lane2, item, mask, filter, filterShift },
     sources: items.map((it) => ({ file: it.file, line: it.line }))
   };
 }
-function rollGrams(buf, count3, m, l1, l2) {
-  const w1 = buf.lane1;
-  const w2 = buf.lane2;
+function rollGrams(w1, w2, count3, m, l1, l2) {
   let top1 = 1;
   let top2 = 1;
   for (let j = 1; j < m; j++) {
@@ -7874,25 +7961,50 @@ function rollGrams(buf, count3, m, l1, l2) {
     l2[i] = mix32b4(h2 + m);
   }
 }
-var scratch = { buf: wordBuffer(2), l1: new Int32Array(1024), l2: new Int32Array(1024) };
+var scratch = { buf: wordBuffer(2) };
 function findContamination(index2, text) {
-  const buf = scratch.buf;
-  const words = hashWords(prepareText(text), buf);
-  const { lane1, lane2, item, mask } = index2.table;
+  const prepared = prepareText(text);
+  let w1;
+  let w2;
+  let words;
+  const done = sharedWords(prepared);
+  if (done !== null) {
+    w1 = done.lane1;
+    w2 = done.lane2;
+    words = done.count;
+  } else {
+    const buf = scratch.buf;
+    words = hashWords(prepared, buf);
+    w1 = buf.lane1;
+    w2 = buf.lane2;
+  }
+  const { lane1, lane2, item, mask, filter, filterShift } = index2.table;
   let best = -1;
   for (const m of index2.lengths) {
     if (words < m) continue;
-    const count3 = words - m + 1;
-    if (scratch.l1.length < count3) {
-      scratch.l1 = new Int32Array(count3 * 2);
-      scratch.l2 = new Int32Array(count3 * 2);
+    let top1 = 1;
+    let top2 = 1;
+    for (let j = 1; j < m; j++) {
+      top1 = Math.imul(top1, BASE_1);
+      top2 = Math.imul(top2, BASE_2);
     }
-    const l1 = scratch.l1;
-    const l2 = scratch.l2;
-    rollGrams(buf, words, m, l1, l2);
-    for (let i = 0; i < count3; i++) {
-      const a = l1[i];
-      const b = l2[i];
+    let h1 = 0;
+    for (let j = 0; j < m; j++) h1 = Math.imul(h1, BASE_1) + w1[j] | 0;
+    let h2 = 0;
+    let h2at = -2;
+    for (let i = 0; i + m <= words; i++) {
+      if (i > 0) h1 = Math.imul(h1 - Math.imul(w1[i - 1], top1) | 0, BASE_1) + w1[i + m - 1] | 0;
+      const a = mix323(h1 ^ m);
+      const bit = a >>> filterShift;
+      if ((filter[bit >>> 5] & 1 << (bit & 31)) === 0) continue;
+      if (h2at === i - 1) {
+        h2 = Math.imul(h2 - Math.imul(w2[i - 1], top2) | 0, BASE_2) + w2[i + m - 1] | 0;
+      } else {
+        h2 = 0;
+        for (let j = 0; j < m; j++) h2 = Math.imul(h2, BASE_2) + w2[i + j] | 0;
+      }
+      h2at = i;
+      const b = mix32b4(h2 + m);
       let slot = a & mask;
       for (; ; ) {
         const it = item[slot];
@@ -17285,7 +17397,8 @@ var SLOT_BITS3 = 6;
 var UNITS = 7;
 var HEADER_WORDS2 = 8;
 var MAGIC_VALUE2 = 1936474929;
-var ENTRY_WORDS = 3;
+var SLOT_WORDS = 4;
+var BUSY = -1;
 var SharedPieceCounts = class _SharedPieceCounts {
   constructor(buffer) {
     this.buffer = buffer;
@@ -17296,17 +17409,15 @@ var SharedPieceCounts = class _SharedPieceCounts {
     const slotCount2 = 1 << header[SLOT_BITS3];
     this.mask = slotCount2 - 1;
     let at2 = HEADER_WORDS2 * 4;
-    this.slots = new Int32Array(buffer, at2, slotCount2);
-    at2 += slotCount2 * 4;
-    this.entries = new Int32Array(buffer, at2, this.capacity * ENTRY_WORDS);
-    at2 += this.capacity * ENTRY_WORDS * 4;
+    this.slots = new Int32Array(buffer, at2, slotCount2 * SLOT_WORDS);
+    at2 += slotCount2 * SLOT_WORDS * 4;
     this.arena = new Uint16Array(buffer, at2, this.units);
   }
   buffer;
   header;
   slots;
-  entries;
   arena;
+  /** Slot count − 1. */
   mask;
   capacity;
   units;
@@ -17316,7 +17427,7 @@ var SharedPieceCounts = class _SharedPieceCounts {
     let bits = 1;
     while (1 << bits < capacity * 2) bits++;
     const units = capacity * UNITS_PER_ENTRY;
-    const bytes3 = HEADER_WORDS2 * 4 + (1 << bits) * 4 + capacity * ENTRY_WORDS * 4 + units * 2;
+    const bytes3 = HEADER_WORDS2 * 4 + (1 << bits) * SLOT_WORDS * 4 + units * 2;
     const buffer = new SharedArrayBuffer(bytes3);
     const header = new Int32Array(buffer, 0, HEADER_WORDS2);
     const [a, b] = ownerHashes(owner);
@@ -17338,16 +17449,14 @@ var SharedPieceCounts = class _SharedPieceCounts {
   }
   /** Returns the count of text[start, end) (its hash as from hashRange), or -1 when no thread has added it. */
   find(text, start, end, hash2) {
-    const { slots, entries, arena, mask } = this;
+    const { slots, arena, mask } = this;
     const length = end - start;
     for (let i = hash2 & mask; ; i = i + 1 & mask) {
-      const v = Atomics.load(slots, i);
-      if (v === 0) return -1;
-      const e = (v - 1) * ENTRY_WORDS;
-      if (entries[e] !== hash2) continue;
-      const meta = entries[e + 2];
-      if (meta >>> 16 !== length) continue;
-      let at2 = entries[e + 1];
+      const s = i * SLOT_WORDS;
+      const meta = Atomics.load(slots, s);
+      if (meta === 0) return -1;
+      if (meta >>> 16 !== length || slots[s + 1] !== hash2) continue;
+      let at2 = slots[s + 2];
       let k = start;
       while (k < end && arena[at2] === text.charCodeAt(k)) {
         at2++;
@@ -17359,32 +17468,21 @@ var SharedPieceCounts = class _SharedPieceCounts {
   /** Adds the count of text[start, end); returns false when the table is full (or the piece too long to keep). */
   add(text, start, end, hash2, count3) {
     const length = end - start;
-    if (length > MAX_CACHED_PIECE_LENGTH || count3 > 65535 || count3 < 0) return false;
+    if (length < 1 || length > MAX_CACHED_PIECE_LENGTH || count3 > 65535 || count3 < 0) return false;
     const header = this.header;
     if (Atomics.load(header, USED) >= this.capacity || Atomics.load(header, UNITS_USED) + length > this.units) return false;
-    const entry = Atomics.add(header, USED, 1);
-    if (entry >= this.capacity) return false;
+    if (Atomics.add(header, USED, 1) >= this.capacity) return false;
     const at2 = Atomics.add(header, UNITS_USED, length);
     if (at2 + length > this.units) return false;
-    const { slots, entries, arena, mask } = this;
+    const { slots, arena, mask } = this;
     for (let k = 0; k < length; k++) arena[at2 + k] = text.charCodeAt(start + k);
-    const e = entry * ENTRY_WORDS;
-    entries[e] = hash2;
-    entries[e + 1] = at2;
-    entries[e + 2] = length << 16 | count3;
     for (let i = hash2 & mask; ; i = i + 1 & mask) {
-      const prev = Atomics.compareExchange(slots, i, 0, entry + 1);
-      if (prev === 0) return true;
-      const p = (prev - 1) * ENTRY_WORDS;
-      if (entries[p] === hash2 && entries[p + 2] >>> 16 === length) {
-        let o = entries[p + 1];
-        let k = start;
-        while (k < end && arena[o] === text.charCodeAt(k)) {
-          o++;
-          k++;
-        }
-        if (k === end) return true;
-      }
+      const s = i * SLOT_WORDS;
+      if (Atomics.compareExchange(slots, s, 0, BUSY) !== 0) continue;
+      slots[s + 1] = hash2;
+      slots[s + 2] = at2;
+      Atomics.store(slots, s, length << 16 | count3);
+      return true;
     }
   }
   /** Entries added so far, by every thread (at most the capacity). */
@@ -17647,7 +17745,7 @@ function createRankCounter(options) {
   const split = new RegExp(options.pattern, "gu");
   const sticky = new RegExp(options.pattern, "guy");
   const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
-  let shared = options.shared === void 0 ? SharedPieceCounts.create(options.id) : options.shared;
+  let shared2 = options.shared === void 0 ? SharedPieceCounts.create(options.id) : options.shared;
   let sharedHits = 0;
   const cache = new PieceCache(options.generationSize);
   const words = new PieceCache(options.generationSize);
@@ -17655,8 +17753,8 @@ function createRankCounter(options) {
   const countRange = (text, start, end) => {
     if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(text, start, end, ranks);
     const hash2 = hashRange(text, start, end);
-    if (shared !== null) {
-      const known = shared.find(text, start, end, hash2);
+    if (shared2 !== null) {
+      const known = shared2.find(text, start, end, hash2);
       if (known >= 0) {
         sharedHits++;
         return known;
@@ -17665,7 +17763,7 @@ function createRankCounter(options) {
     const cached = cache.find(text, start, end, hash2);
     if (cached !== void 0) return cached;
     const n = bytePairCount(text, start, end, ranks);
-    if (shared === null || !shared.add(text, start, end, hash2, n)) cache.add(text.slice(start, end), hash2, n);
+    if (shared2 === null || !shared2.add(text, start, end, hash2, n)) cache.add(text.slice(start, end), hash2, n);
     return n;
   };
   const countByRegex = (text, from, pieces) => {
@@ -17733,13 +17831,13 @@ function createRankCounter(options) {
     } : {},
     cacheStats: () => {
       const own = cache.stats();
-      return { ...own, hits: own.hits + sharedHits, entries: own.entries + (shared?.size ?? 0) };
+      return { ...own, hits: own.hits + sharedHits, entries: own.entries + (shared2?.size ?? 0) };
     },
-    shareTables: () => ({ counts: shared?.buffer ?? null, ranks: ranks.buffer }),
+    shareTables: () => ({ counts: shared2?.buffer ?? null, ranks: ranks.buffer }),
     adoptTables: (tables2) => {
       const table2 = tables2.counts === null ? null : SharedPieceCounts.attach(tables2.counts, options.id);
       if (table2 === null) return false;
-      shared = table2;
+      shared2 = table2;
       return true;
     }
   };
@@ -17775,12 +17873,12 @@ async function loadTokenizer(spec, options = {}) {
       id,
       name,
       () => sharedTable(id),
-      (shared, ranks) => createRankCounter({
+      (shared2, ranks) => createRankCounter({
         id,
         label: name,
         ranks: ranks ?? parseBuiltinRanks(data2.bpe_ranks, name, id),
         pattern: data2.pat_str,
-        shared,
+        shared: shared2,
         ...generationSize === void 0 ? {} : { generationSize }
       })
     );
@@ -18111,7 +18209,7 @@ async function prepareAnalyzers(policy) {
       return out;
     };
   }
-  if (dupOptions) analyzers.duplicates = () => new DuplicateIndexBuilder(dupOptions);
+  if (dupOptions) analyzers.duplicates = () => new DuplicateIndexBuilder(dupOptions, { words: evalIndex !== void 0 });
   if (evalIndex) {
     const idx = evalIndex;
     analyzers.contamination = (text) => findContamination(idx, text);
@@ -18221,7 +18319,7 @@ function transferablesOf(r) {
   const d = r.duplicates;
   return d ? [d.exact.buffer, d.signatures.buffer, d.stream.buffer] : [];
 }
-async function measureInPool(work, init, entry, workers, onResult, here, started = [], shared = {}) {
+async function measureInPool(work, init, entry, workers, onResult, here, started = [], shared2 = {}) {
   const shardQueue = work.whole.map((ref, id) => ({ kind: "shard", ref, id })).sort((a, b) => workOf(b.ref) - workOf(a.ref) || a.id - b.id);
   const batchQueue = [];
   let producing = work.split.length > 0;
@@ -18347,7 +18445,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
           if (msg.type === "ready") {
             if (msg.settingsId !== init.settingsId) return finish(new ShardFailure(where2(), `worker measured under other settings (${msg.settingsId} \u2260 ${init.settingsId})`));
             ready = true;
-            if (shared.main || shared.baseline) worker.postMessage({ type: "share", tables: shared });
+            if (shared2.main || shared2.baseline) worker.postMessage({ type: "share", tables: shared2 });
             return next();
           }
           const answered = current[0];
