@@ -44,6 +44,14 @@ describe('the fast labeller gives franc’s labels (franc@6.2.0 with `only`)', (
     'Deseret 𐐀𐐁𐐂 letters inside an English sentence',
     `${'x'.repeat(2047)}\uD801\uDC00 tail`,
     'lone \uD800 surrogate in text',
+    // NUL (the labeller's sentinel before the leading space, and a unit it cleans with
+    // care), a long run of separators, and Latin-script text with no trigram of any
+    // profile (every distance equal: franc keeps the first language of its data).
+    'a NUL\u0000 inside an English sentence, and at the end\u0000',
+    '\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000',
+    `${' .,;'.repeat(600)}the end`,
+    'ǂǂǂ ǂǂǂǂ ǂǂ ǂǂǂ ǂǂǂǂǂ',
+    'Ǆǆǅ ǂǁ ǀǃ ǂǂ ǁǁǁ',
     'a',
     '',
   ];
