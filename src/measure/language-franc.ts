@@ -35,9 +35,9 @@ const MAX_DIFFERENCE = 300;
 
 /**
  * Trigrams of `a`–`z` and space (27^3 of them; a third of franc's 14,856 distinct
- * trigrams, and nearly all of an English sample's) are counted and looked up by
- * direct index rather than hashed: measured on Brown paragraphs, hashing every
- * trigram made counting the largest cost of labelling.
+ * trigrams, and nearly all of an English sample's) are looked up by direct index
+ * rather than hashed: measured on Brown paragraphs, hashing every trigram made
+ * counting the largest cost of labelling.
  */
 const DIRECT = 27 * 27 * 27;
 
@@ -198,6 +198,7 @@ function loadProfiles(): void {
       }
     }
   }
+  if (internCount >= 0xffff) throw new Error('franc data: too many trigrams for the 16-bit ids of internTable');
   idTally = new Int32Array(internCount);
 }
 
