@@ -10,6 +10,7 @@ import { createLanguageDetector, iso6393Of } from '../../src/measure/language.js
 import { createFrancLabeller } from '../../src/measure/language-franc.js';
 import { dominantScriptOf, scriptProfile } from '../../src/measure/script.js';
 import { allUdhr, brownParagraphs, loadUdhr, spread } from './corpora.js';
+import { prng } from '../sampling/fixtures.js';
 
 const spec = (key: string, scripts: string[], covers: string[] = [key]): LanguageSpec => ({ key, iso6393: covers[0] as string, covers, scripts });
 const ENG = spec('eng', ['Latin']);
@@ -44,6 +45,14 @@ describe('the fast labeller gives franc’s labels (franc@6.2.0 with `only`)', (
     'Deseret 𐐀𐐁𐐂 letters inside an English sentence',
     `${'x'.repeat(2047)}\uD801\uDC00 tail`,
     'lone \uD800 surrogate in text',
+    // NUL (the labeller's sentinel before the leading space, and a unit it cleans with
+    // care), a long run of separators, and Latin-script text with no trigram of any
+    // profile (every distance equal: franc keeps the first language of its data).
+    'a NUL\u0000 inside an English sentence, and at the end\u0000',
+    '\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000\u0000',
+    `${' .,;'.repeat(600)}the end`,
+    'ǂǂǂ ǂǂǂǂ ǂǂ ǂǂǂ ǂǂǂǂǂ',
+    'Ǆǆǅ ǂǁ ǀǃ ǂǂ ǁǁǁ',
     'a',
     '',
   ];
@@ -61,6 +70,41 @@ describe('the fast labeller gives franc’s labels (franc@6.2.0 with `only`)', (
       expect(differences).toBe(0);
     });
   }
+
+  it('on seeded random texts that mix scripts, separators and units cleaned with care', () => {
+    // franc 6.2.0 itself is the reference. The pools put NUL, surrogates (paired, astral
+    // capitals, unpaired), Σ, İ and runs of separators next to letters of the Latin,
+    // Cyrillic, Devanagari and Arabic groups; lengths reach past franc's 2048 units.
+    const pools = [
+      'abcdefghijklmnopqrstuvwxyz',
+      'ABCDEFGHIJKLMNOPQRSTUVWXYZ',
+      '      \n\t.,;:!?0123456789-\'"()',
+      'éèàçôûüöäßñ',
+      'абвгдежзийклмнопрстуфхцчшщыьэюяАБВГДЕЁЖ',
+      'अआइईउऊएऐओऔकखगघचछजझटठडढणतथदधनपफबभमयरलवशसह',
+      'ابتثجحخدذرزسشصضطظعغفقكلمنهوي',
+      'ΣσςΑΒΓαβγ',
+      'İıŞşĞğ',
+      '\u0000\uD800\u00A0\u2028\uFEFF',
+      '𐐀𐐁😀',
+    ].map((pool) => [...pool]);
+    const random = prng(7);
+    const pick = <T,>(items: readonly T[]): T => items[Math.floor(random() * items.length)] as T;
+    const texts: string[] = [];
+    for (let k = 0; k < 400; k++) {
+      const length = Math.floor(random() ** 2 * 3000);
+      const mix = [pick(pools), pick(pools), pick(pools)];
+      let text = '';
+      while (text.length < length) text += pick(pick(mix)) + (random() < 0.15 ? ' ' : '');
+      texts.push(text);
+    }
+    const sets = [['eng', 'fra', 'deu'], ['rus', 'ukr', 'srp', 'eng'], ['hin', 'mar', 'arb', 'urd'], ['spa', 'srp', 'uzn', 'zlm', 'azj'], []];
+    for (const only of sets) {
+      const label = createFrancLabeller(only);
+      const wrong = texts.filter((text) => label(text) !== franc(text, { only }));
+      expect(wrong.map((text) => ({ text: text.slice(0, 40), length: text.length })), only.join(',')).toEqual([]);
+    }
+  });
 
   it('with franc’s own minimum length', () => {
     const label = createFrancLabeller(['eng', 'fra'], 10);
