@@ -8213,7 +8213,7 @@ var ShardFold = class {
       }
     }
     if (this.failure && !account.broken) account.broken = { afterLine: this.failure.line - 1, message: this.failure.message };
-    const tally = this.tally;
+    const tally2 = this.tally;
     const result = {
       schema: RESULT_SCHEMA,
       path: ref.path,
@@ -8224,12 +8224,12 @@ var ShardFold = class {
       contentId,
       settingsId: this.settings.settingsId,
       read: account,
-      languages: tally.languages,
-      scripts: tally.scripts,
-      anomalyMasks: tally.anomalyMasks,
-      anomalyDocs: tally.anomalyDocs,
-      declared: tally.declared,
-      samples: { impure: tally.impure, anomalous: tally.anomalous, mismatch: tally.mismatch },
+      languages: tally2.languages,
+      scripts: tally2.scripts,
+      anomalyMasks: tally2.anomalyMasks,
+      anomalyDocs: tally2.anomalyDocs,
+      declared: tally2.declared,
+      samples: { impure: tally2.impure, anomalous: tally2.anomalous, mismatch: tally2.mismatch },
       elapsedMs: Math.round(performance.now() - started)
     };
     if (ref.subset !== void 0) result.subset = ref.subset;
@@ -10052,8 +10052,6 @@ function rangeTable(starts2, values) {
 var MAX_LENGTH = 2048;
 var MIN_LENGTH = 10;
 var MAX_DIFFERENCE = 300;
-var SLOT_BITS = 13;
-var SLOTS = 1 << SLOT_BITS;
 var DIRECT = 27 * 27 * 27;
 var UND = "und";
 var francTable = lazyRangeTable(FRANC_RANGE_STARTS, FRANC_RANGE_CLASSES);
@@ -10106,9 +10104,7 @@ var ASCII_SHORTCUT = (() => {
   return LATIN > 0;
 })();
 var internBits = 0;
-var internHi = new Int32Array(0);
-var internLo = new Int32Array(0);
-var internId = new Int32Array(0);
+var internTable = new Int32Array(0);
 var internCount = 0;
 var groupLanguages = /* @__PURE__ */ new Map();
 var profiles = /* @__PURE__ */ new Map();
@@ -10116,11 +10112,29 @@ function hash(hi, lo, bits) {
   return (Math.imul(hi, 2654435761) ^ Math.imul(lo + 2135587861, 2246822519)) >>> 32 - bits;
 }
 function internedId(hi, lo, add) {
-  if (!add) {
-    const direct = directIndex(hi >>> 16, hi & 65535, lo);
-    if (direct >= 0) return directId[direct];
+  const direct = directIndex(hi >>> 16, hi & 65535, lo);
+  if (direct >= 0) {
+    if (add && directId[direct] === -1) directId[direct] = internCount++;
+    return directId[direct];
   }
-  return hashedId(hi, lo, add);
+  const id = hashedId(hi, lo);
+  if (id >= 0 || !add) return id;
+  const mask = (1 << internBits) - 1;
+  let slot = hash(hi, lo, internBits);
+  while (internTable[2 * slot + 1] !== 0) slot = slot + 1 & mask;
+  internTable[2 * slot] = hi;
+  internTable[2 * slot + 1] = lo | internCount + 1 << 16;
+  return internCount++;
+}
+function hashedId(hi, lo) {
+  const mask = (1 << internBits) - 1;
+  let slot = hash(hi, lo, internBits);
+  for (; ; ) {
+    const second = internTable[2 * slot + 1];
+    if (second === 0) return -1;
+    if ((second & 65535) === lo && internTable[2 * slot] === hi) return (second >>> 16) - 1;
+    slot = slot + 1 & mask;
+  }
 }
 function symbolOf(unit) {
   return unit === 32 ? 0 : unit - 97 >>> 0 < 26 ? unit - 96 : -1;
@@ -10132,24 +10146,9 @@ function directIndex(a, b, c) {
   return (x | y | z) < 0 ? -1 : (x * 27 + y) * 27 + z;
 }
 var directId = new Int32Array(DIRECT).fill(-1);
-function hashedId(hi, lo, add) {
-  const mask = (1 << internBits) - 1;
-  let slot = hash(hi, lo, internBits);
-  for (; ; ) {
-    const id = internId[slot];
-    if (id < 0) break;
-    if (internHi[slot] === hi && internLo[slot] === lo) return id;
-    slot = slot + 1 & mask;
-  }
-  if (!add) return -1;
-  internHi[slot] = hi;
-  internLo[slot] = lo;
-  internId[slot] = internCount;
-  return internCount++;
-}
 function loadProfiles() {
   if (internBits > 0) return;
-  let total = 0;
+  let hashed = 0;
   for (const script in data) {
     const languages = data[script];
     groupLanguages.set(script, Object.keys(languages));
@@ -10157,23 +10156,22 @@ function loadProfiles() {
     for (const language in languages) {
       const model = languages[language];
       models.set(language, model);
-      total += model.split("|").length;
+      for (const t of model.split("|")) if (directIndex(t.charCodeAt(0), t.charCodeAt(1), t.charCodeAt(2)) < 0) hashed++;
     }
     profiles.set(script, models);
   }
-  internBits = Math.ceil(Math.log2(total * 2));
-  internHi = new Int32Array(1 << internBits);
-  internLo = new Int32Array(1 << internBits);
-  internId = new Int32Array(1 << internBits).fill(-1);
+  internBits = Math.ceil(Math.log2(hashed * 2));
+  internTable = new Int32Array(2 << internBits);
   for (const models of profiles.values()) {
     for (const model of models.values()) {
       for (const t of model.split("|")) {
-        const id = internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), true);
-        const direct = directIndex(t.charCodeAt(0), t.charCodeAt(1), t.charCodeAt(2));
-        if (direct >= 0) directId[direct] = id;
+        if (t.includes("\0")) throw new Error("franc data: a trigram with NUL, which countTrigrams uses as a sentinel");
+        internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), true);
       }
     }
   }
+  if (internCount >= 65535) throw new Error("franc data: too many trigrams for the 16-bit ids of internTable");
+  idTally = new Int32Array(internCount);
 }
 function invert(group, languages) {
   const models = profiles.get(group);
@@ -10200,46 +10198,109 @@ function invert(group, languages) {
   });
   return { languages, offsets: offsets2, entries };
 }
-var unitKind;
-var lowerUnit;
-var KEEP = 0;
-var SEPARATOR = 1;
-var CARE = 2;
+var foldedUnit;
+var SEPARATOR = 32;
+var CARE = 0;
 var CAPITAL_SIGMA = 931;
-function cleaningTables() {
-  if (unitKind) return;
-  const kinds = new Uint8Array(65536);
-  const lower = new Uint16Array(65536);
+function cleaningTable() {
+  if (foldedUnit) return foldedUnit;
+  const folded2 = new Uint16Array(65536);
   const space = /\s/;
-  for (let u = 0; u < 65536; u++) {
-    if (u >= 55296 && u <= 57343) {
-      kinds[u] = CARE;
-      continue;
-    }
+  for (let u = 1; u < 65536; u++) {
+    if (u >= 55296 && u <= 57343) continue;
     const ch = String.fromCharCode(u);
     if (u >= 33 && u <= 64 || space.test(ch)) {
-      kinds[u] = SEPARATOR;
+      folded2[u] = SEPARATOR;
       continue;
     }
     const lowered = ch.toLowerCase();
-    if (lowered.length !== 1 || u === CAPITAL_SIGMA) kinds[u] = CARE;
-    else lower[u] = lowered.charCodeAt(0);
+    if (lowered.length === 1 && u !== CAPITAL_SIGMA && lowered !== " " && lowered !== "\0") folded2[u] = lowered.charCodeAt(0);
   }
-  unitKind = kinds;
-  lowerUnit = lower;
+  return foldedUnit = folded2;
 }
-var cleaned = new Uint16Array(MAX_LENGTH * 2 + 2);
-var slotHi = new Int32Array(SLOTS);
-var slotLo = new Int32Array(SLOTS);
-var slotCount = new Int32Array(SLOTS);
-var slotStamp = new Int32Array(SLOTS);
+var idTally = new Int32Array(0);
+var COUNT_BITS = 13;
+var COUNT_MASK = (1 << COUNT_BITS) - 1;
+var LAST_STAMP = (1 << 31 - COUNT_BITS) - 1;
 var stamp = 0;
 var distinctIds = new Int32Array(MAX_LENGTH * 2 + 2);
-var distinctCounts = new Int32Array(MAX_LENGTH * 2 + 2);
+var cleaned = new Uint16Array(MAX_LENGTH * 2 + 2);
+function nextStamp() {
+  stamp++;
+  if (stamp > LAST_STAMP) {
+    idTally.fill(0);
+    stamp = 1;
+  }
+}
+function tally(a, b, c, sa, sb, sc, distinct) {
+  const id = (sa | sb | sc) >= 0 ? directId[(sa * 27 + sb) * 27 + sc] : hashedId(a << 16 | b, c);
+  if (id < 0) return distinct;
+  const word = idTally[id];
+  if (word >>> COUNT_BITS !== stamp) {
+    idTally[id] = stamp << COUNT_BITS | 1;
+    distinctIds[distinct] = id;
+    return distinct + 1;
+  }
+  idTally[id] = word + 1;
+  return distinct;
+}
+function countTrigrams(text, end) {
+  const folded2 = cleaningTable();
+  nextStamp();
+  let distinct = 0;
+  let a = 0;
+  let sa = -1;
+  let b = 32;
+  let sb = 0;
+  let pendingSpace = false;
+  let started = false;
+  let units = 0;
+  let letter2 = false;
+  for (let i = 0; i < end; i++) {
+    const unit = text.charCodeAt(i);
+    units |= unit;
+    if (!letter2) letter2 = (unit | 32) - 97 >>> 0 < 26;
+    const c = folded2[unit];
+    if (c === SEPARATOR) {
+      pendingSpace = started;
+      continue;
+    }
+    if (c === CARE) return -1;
+    if (pendingSpace) {
+      distinct = tally(a, b, 32, sa, sb, 0, distinct);
+      a = b;
+      sa = sb;
+      b = 32;
+      sb = 0;
+      pendingSpace = false;
+    }
+    const sc = symbolOf(c);
+    distinct = tally(a, b, c, sa, sb, sc, distinct);
+    a = b;
+    sa = sb;
+    b = c;
+    sb = sc;
+    started = true;
+  }
+  distinct = tally(a, b, 32, sa, sb, 0, distinct);
+  sampleIsAscii = units < 128;
+  sampleHasAsciiLetter = letter2;
+  return distinct;
+}
+function countCarefully(text, end) {
+  const n = clean(text, end);
+  nextStamp();
+  let distinct = 0;
+  for (let p = 0; p + 2 < n; p++) {
+    const a = cleaned[p];
+    const b = cleaned[p + 1];
+    const c = cleaned[p + 2];
+    distinct = tally(a, b, c, symbolOf(a), symbolOf(b), symbolOf(c), distinct);
+  }
+  return distinct;
+}
 function clean(text, end) {
-  cleaningTables();
-  const kinds = unitKind;
-  const lower = lowerUnit;
+  const folded2 = cleaningTable();
   let n = 0;
   cleaned[n++] = 32;
   let pendingSpace = false;
@@ -10249,8 +10310,8 @@ function clean(text, end) {
     const unit = text.charCodeAt(i);
     units |= unit;
     if (!letter2) letter2 = (unit | 32) - 97 >>> 0 < 26;
-    const kind = kinds[unit];
-    if (kind === SEPARATOR) {
+    const f = folded2[unit];
+    if (f === SEPARATOR) {
       pendingSpace = n > 1;
       continue;
     }
@@ -10258,8 +10319,8 @@ function clean(text, end) {
       cleaned[n++] = 32;
       pendingSpace = false;
     }
-    if (kind === KEEP) {
-      cleaned[n++] = lower[unit];
+    if (f !== CARE) {
+      cleaned[n++] = f;
       continue;
     }
     if (unit === CAPITAL_SIGMA) {
@@ -10285,63 +10346,6 @@ function cleanNatively(text, end) {
   for (let k = 0; k < value.length; k++) cleaned[k] = value.charCodeAt(k);
   return value.length;
 }
-var directStamp = new Int32Array(DIRECT);
-var directCount = new Int32Array(DIRECT);
-function countTrigrams(n) {
-  stamp++;
-  if (stamp === 2147483647) {
-    slotStamp.fill(0);
-    directStamp.fill(0);
-    stamp = 1;
-  }
-  let distinct = 0;
-  const mask = SLOTS - 1;
-  let s1 = symbolOf(cleaned[0]);
-  let s2 = symbolOf(cleaned[1]);
-  for (let p = 0; p + 2 < n; p++) {
-    const c = cleaned[p + 2];
-    const s0 = s1;
-    s1 = s2;
-    s2 = symbolOf(c);
-    if ((s0 | s1 | s2) >= 0) {
-      const direct = (s0 * 27 + s1) * 27 + s2;
-      if (directStamp[direct] !== stamp) {
-        directStamp[direct] = stamp;
-        directCount[direct] = 1;
-        distinctIds[distinct++] = -1 - direct;
-      } else directCount[direct] = directCount[direct] + 1;
-      continue;
-    }
-    const hi = cleaned[p] << 16 | cleaned[p + 1];
-    let slot = hash(hi, c, SLOT_BITS);
-    for (; ; ) {
-      if (slotStamp[slot] !== stamp) {
-        slotStamp[slot] = stamp;
-        slotHi[slot] = hi;
-        slotLo[slot] = c;
-        slotCount[slot] = 1;
-        distinctIds[distinct++] = slot;
-        break;
-      }
-      if (slotHi[slot] === hi && slotLo[slot] === c) {
-        slotCount[slot] = slotCount[slot] + 1;
-        break;
-      }
-      slot = slot + 1 & mask;
-    }
-  }
-  for (let d = 0; d < distinct; d++) {
-    const entry = distinctIds[d];
-    if (entry < 0) {
-      distinctCounts[d] = directCount[-1 - entry];
-      distinctIds[d] = directId[-1 - entry];
-    } else {
-      distinctCounts[d] = slotCount[entry];
-      distinctIds[d] = hashedId(slotHi[entry], slotLo[entry], false);
-    }
-  }
-  return distinct;
-}
 function createFrancLabeller(only, minLength = MIN_LENGTH) {
   loadProfiles();
   const allowed = new Set(only);
@@ -10355,20 +10359,19 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
   const label = (text) => {
     if (!text || text.length < minLength) return UND;
     const end = Math.min(text.length, MAX_LENGTH);
-    const n = clean(text, end);
+    const counted = countTrigrams(text, end);
+    const distinct = counted >= 0 ? counted : countCarefully(text, end);
     const top = sampleIsAscii && ASCII_SHORTCUT ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 } : topExpression(text, end);
     const name = FRANC_EXPRESSIONS[top.expression];
     const group = groups[top.expression];
     if (!group) return top.count === 0 || !(anything || allowed.has(name)) ? UND : name;
     const k = group.languages.length;
     if (k === 0) return UND;
-    const distinct = countTrigrams(n);
-    distances.fill(distinct * MAX_DIFFERENCE, 0, k);
+    distances.fill(0, 0, k);
     const { offsets: offsets2, entries } = group;
     for (let d = 0; d < distinct; d++) {
       const id = distinctIds[d];
-      if (id < 0) continue;
-      const count3 = distinctCounts[d];
+      const count3 = idTally[id] & COUNT_MASK;
       const last = offsets2[id + 1];
       for (let e = offsets2[id]; e < last; e++) {
         const entry = entries[e];
@@ -17114,7 +17117,7 @@ var MAGIC2 = 0;
 var OWNER_1 = 1;
 var OWNER_2 = 2;
 var COUNT = 3;
-var SLOT_BITS2 = 4;
+var SLOT_BITS = 4;
 var ARENA_BYTES = 5;
 var HEADER_WORDS = 8;
 var MAGIC_VALUE = 1936478769;
@@ -17137,9 +17140,9 @@ var RankTable = class _RankTable {
     this.buffer = buffer;
     const header = new Int32Array(buffer, 0, HEADER_WORDS);
     const count3 = header[COUNT];
-    const slotCount2 = 1 << header[SLOT_BITS2];
+    const slotCount = 1 << header[SLOT_BITS];
     this.size = count3;
-    this.mask = slotCount2 - 1;
+    this.mask = slotCount - 1;
     let at2 = HEADER_WORDS * 4;
     this.ranks = new Float64Array(buffer, at2, count3);
     at2 += count3 * 8;
@@ -17147,8 +17150,8 @@ var RankTable = class _RankTable {
     at2 += (1 << 16) * 8;
     this.offsets = new Int32Array(buffer, at2, count3 + 1);
     at2 += (count3 + 1) * 4;
-    this.slots = new Int32Array(buffer, at2, slotCount2);
-    at2 += slotCount2 * 4;
+    this.slots = new Int32Array(buffer, at2, slotCount);
+    at2 += slotCount * 4;
     this.arena = new Uint8Array(buffer, at2, header[ARENA_BYTES]);
   }
   buffer;
@@ -17181,7 +17184,7 @@ var RankTable = class _RankTable {
     header[OWNER_1] = a;
     header[OWNER_2] = b;
     header[COUNT] = count3;
-    header[SLOT_BITS2] = bits;
+    header[SLOT_BITS] = bits;
     header[ARENA_BYTES] = arenaBytes;
     header[MAGIC2] = MAGIC_VALUE;
     const table2 = new _RankTable(buffer);
@@ -17393,7 +17396,7 @@ var OWNER_22 = 2;
 var USED = 3;
 var UNITS_USED = 4;
 var CAPACITY = 5;
-var SLOT_BITS3 = 6;
+var SLOT_BITS2 = 6;
 var UNITS = 7;
 var HEADER_WORDS2 = 8;
 var MAGIC_VALUE2 = 1936474929;
@@ -17406,11 +17409,11 @@ var SharedPieceCounts = class _SharedPieceCounts {
     this.header = header;
     this.capacity = header[CAPACITY];
     this.units = header[UNITS];
-    const slotCount2 = 1 << header[SLOT_BITS3];
-    this.mask = slotCount2 - 1;
+    const slotCount = 1 << header[SLOT_BITS2];
+    this.mask = slotCount - 1;
     let at2 = HEADER_WORDS2 * 4;
-    this.slots = new Int32Array(buffer, at2, slotCount2 * SLOT_WORDS);
-    at2 += slotCount2 * SLOT_WORDS * 4;
+    this.slots = new Int32Array(buffer, at2, slotCount * SLOT_WORDS);
+    at2 += slotCount * SLOT_WORDS * 4;
     this.arena = new Uint16Array(buffer, at2, this.units);
   }
   buffer;
@@ -17434,7 +17437,7 @@ var SharedPieceCounts = class _SharedPieceCounts {
     header[OWNER_12] = a;
     header[OWNER_22] = b;
     header[CAPACITY] = capacity;
-    header[SLOT_BITS3] = bits;
+    header[SLOT_BITS2] = bits;
     header[UNITS] = units;
     header[MAGIC3] = MAGIC_VALUE2;
     return new _SharedPieceCounts(buffer);
