@@ -18222,8 +18222,11 @@ async function prepareAnalyzers(policy) {
     sharedCounts() {
       const tables2 = {};
       for (const role of ["main", "baseline"]) {
-        const table2 = counters[role]?.shareTables?.();
-        if (table2) tables2[role] = table2;
+        try {
+          const table2 = counters[role]?.shareTables?.();
+          if (table2) tables2[role] = table2;
+        } catch {
+        }
       }
       return tables2;
     },

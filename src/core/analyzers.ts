@@ -120,8 +120,13 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
     sharedCounts() {
       const tables: SharedCountTables = {};
       for (const role of ['main', 'baseline'] as const) {
-        const table = counters[role]?.shareTables?.();
-        if (table) tables[role] = table;
+        try {
+          const table = counters[role]?.shareTables?.();
+          if (table) tables[role] = table;
+        } catch {
+          // A rank table that cannot be built fails each thread's first count, where the shard
+          // being measured is marked broken as before; sharing just leaves that tokenizer out.
+        }
       }
       return tables;
     },
