@@ -2,7 +2,7 @@
 // duplicate index, evaluation overlap), the identity of those settings for the
 // cache, and the cross-shard step that runs once every shard is measured.
 import { relative } from 'node:path';
-import { createMeasurer, forEachWord } from '../measure/index.js';
+import { createMeasurer, forEachWord, wordOffsets } from '../measure/index.js';
 import { buildEvalIndex, duplicateOptionsFrom, DuplicateIndexBuilder, findContamination, type EvalItem } from '../measure/duplicates/index.js';
 import { dictionaryFertility, loadTokenizer, measureTokens, readWordList, type SharedTokenizerTables, type TokenCounter } from '../measure/tokens/index.js';
 import type { Policy } from '../policy/types.js';
@@ -103,8 +103,8 @@ export async function prepareAnalyzers(policy: Policy): Promise<PreparedAnalyzer
     const m = main;
     const b = baseline;
     analyzers.tokens = (text: string): DocumentTokens => {
-      const out: DocumentTokens = { main: measureTokens(m, text, forEachWord) };
-      if (b) out.baseline = measureTokens(b, text, forEachWord);
+      const out: DocumentTokens = { main: measureTokens(m, text, forEachWord, wordOffsets) };
+      if (b) out.baseline = measureTokens(b, text, forEachWord, wordOffsets);
       return out;
     };
   }

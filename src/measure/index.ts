@@ -6,5 +6,5 @@ export { createLanguageDetector, iso6393Of, OTHER, UNDETERMINED, type LanguageDe
 export { createFrancLabeller, francLabel, type FrancLabeller } from './language-franc.js';
 export { MAJOR_LANGUAGES } from './language-candidates.js';
 export { dominantScriptOf, purityOf, SCRIPT_CODES, SCRIPT_NAMES, scriptOf, scriptProfile } from './script.js';
-export { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter } from './words.js';
+export { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter, wordOffsets } from './words.js';
 export type { AnomalyCounts, DocumentMeasure, MarkCounts } from './types.js';

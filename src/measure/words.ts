@@ -271,6 +271,17 @@ export function forEachWord(text: string, onWord: (start: number, end: number) =
   }
 }
 
+/**
+ * Returns the words of `text` as [start, end) UTF-16 offsets, two per word in order (the same
+ * words forEachWord reports), or null when the text needs Intl.Segmenter. The offsets of the
+ * text countWords last counted are the memo's own, shared: the caller must not write to them.
+ */
+export function wordOffsets(text: string): Int32Array | null {
+  if (memoText !== null && text === memoText) return memoOffsets;
+  const fast = scan(text, true);
+  return fast < 0 ? null : offsets.slice(0, fast * 2);
+}
+
 /** Returns whether `text` is outside the fast path and is segmented by Intl.Segmenter. */
 export function needsSegmenter(text: string): boolean {
   return scan(text, false) < 0;

@@ -7,7 +7,7 @@ import cl100kRanks from 'js-tiktoken/ranks/cl100k_base';
 import gpt2Ranks from 'js-tiktoken/ranks/gpt2';
 import o200kRanks from 'js-tiktoken/ranks/o200k_base';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { forEachWord as pipelineWords } from '../../src/measure/words.js';
+import { countWords, forEachWord as pipelineWords, wordOffsets } from '../../src/measure/words.js';
 import { PieceList } from '../../src/measure/tokens/pieces.js';
 import { parseBuiltinRanks } from '../../src/measure/tokens/ranks.js';
 import { createRankCounter } from '../../src/measure/tokens/tiktoken.js';
@@ -95,6 +95,22 @@ describe.each(NAMES)('%s: word counts from pieces equal words encoded alone', (n
     expect(words_).toBeGreaterThan(50_000);
     // Most words are one piece (" word"); the rest (e.g. "can't" under gpt2, digits runs) are counted alone.
     expect(pieceCalls).toBeLessThan(words_ * 0.5);
+  });
+
+  it('gives the same figures with the words taken as offsets (wordOffsets), memoized by countWords or not', () => {
+    const mismatches: string[] = [];
+    let viaOffsets = 0;
+    for (const [i, text] of texts.entries()) {
+      if (i % 2 === 0) countWords(text);
+      if (wordOffsets(text) !== null) viaOffsets++;
+      const { unknown, ...fast } = measureTokens(counter, text, pipelineWords, wordOffsets);
+      const plain = plainMeasure(reference, memo, text, pipelineWords);
+      if (JSON.stringify(fast) !== JSON.stringify(plain)) mismatches.push(`${JSON.stringify(text.slice(0, 60))}: ${JSON.stringify(fast)} vs ${JSON.stringify(plain)}`);
+    }
+    expect(mismatches.slice(0, 5)).toEqual([]);
+    // Texts that need Intl.Segmenter (the Han, Thai, Korean and Japanese UDHR) take the callback instead.
+    expect(viaOffsets).toBeGreaterThan(texts.length * 0.5);
+    expect(viaOffsets).toBeLessThan(texts.length);
   });
 });
 

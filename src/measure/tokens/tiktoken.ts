@@ -39,6 +39,11 @@ export interface RankCounterOptions {
   shared?: SharedPieceCounts | null;
 }
 
+/** Entries of a counter's front cache (a power of two), and the longest key it keeps, in UTF-16 units. */
+const FRONT_ENTRIES = 16384;
+const FRONT_MASK = FRONT_ENTRIES - 1;
+const FRONT_UNITS = 8;
+
 /** Returns the hand-written splitter equivalent to a pattern, or null when there is none. */
 export function asciiSplitterFor(pattern: string): AsciiSplitter | null {
   if (pattern === BUILTIN_PATTERNS.gpt2) return splitGpt2;
@@ -61,9 +66,53 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
   const words = new PieceCache<number>(options.generationSize);
   const builtinPattern = (Object.values(BUILTIN_PATTERNS) as string[]).includes(options.pattern);
 
+  // The front cache: direct-mapped, this thread's own, for pieces of up to FRONT_UNITS units.
+  // Entry i is frontSlots[2i] = length << 16 | count (0: empty) and frontSlots[2i + 1] = hash,
+  // its key in frontKeys[i * FRONT_UNITS, ...). A hit costs one slot and one short key, both
+  // in a table small enough to stay in the core's cache, where the shared table's probe
+  // touches two lines of 16 MB shared with other threads. A miss overwrites the entry. On the
+  // 40 MB bench corpus (o200k_base, 11.6 M piece lookups a pass) 16,384 entries answer 82 % of
+  // lookups (4,096: 75 %, 65,536: 85 %, no faster than 16,384 in an in-process A/B). Measured,
+  // CPU time of warm token counting with fertility, one process per run, 6 runs alternating with
+  // the code before, shared 2-core machine with another benchmark running: median 1.22 s against
+  // 1.33 s (0.92×), best 1.14 s against 1.12 s; the machine's noise is about ±15 %. The whole
+  // measure pass of the full policy (measureBatch as bench-stages' `all`, CPU time, best of 3
+  // rounds, 3 processes of each alternating): 3.64 s median with this and the offsets walk of
+  // measure.ts against 4.37 s before both (0.91×, 0.84×, 0.82× pairwise) and 3.72 s with the walk alone.
+  const frontSlots = new Int32Array(FRONT_ENTRIES * 2);
+  const frontKeys = new Uint16Array(FRONT_ENTRIES * FRONT_UNITS);
+  let frontHits = 0;
+
   const countRange = (text: string, start: number, end: number): number => {
-    if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(text, start, end, ranks);
+    const length = end - start;
+    if (length > MAX_CACHED_PIECE_LENGTH) return bytePairCount(text, start, end, ranks);
     const hash = hashRange(text, start, end);
+    if (length <= FRONT_UNITS) {
+      const f = hash & FRONT_MASK;
+      const meta = frontSlots[f * 2]!;
+      if (meta >>> 16 === length && frontSlots[f * 2 + 1] === hash) {
+        let at = f * FRONT_UNITS;
+        let k = start;
+        while (k < end && frontKeys[at] === text.charCodeAt(k)) {
+          at++;
+          k++;
+        }
+        if (k === end) {
+          frontHits++;
+          return meta & 0xffff;
+        }
+      }
+      const n = lookUp(text, start, end, hash);
+      frontSlots[f * 2] = (length << 16) | n;
+      frontSlots[f * 2 + 1] = hash;
+      const at = f * FRONT_UNITS;
+      for (let k = 0; k < length; k++) frontKeys[at + k] = text.charCodeAt(start + k);
+      return n;
+    }
+    return lookUp(text, start, end, hash);
+  };
+
+  const lookUp = (text: string, start: number, end: number, hash: number): number => {
     if (shared !== null) {
       const known = shared.find(text, start, end, hash);
       if (known >= 0) {
@@ -152,7 +201,7 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
       : {}),
     cacheStats: () => {
       const own = cache.stats();
-      return { ...own, hits: own.hits + sharedHits, entries: own.entries + (shared?.size ?? 0) };
+      return { ...own, hits: own.hits + sharedHits + frontHits, entries: own.entries + (shared?.size ?? 0) };
     },
     shareTables: () => ({ counts: shared?.buffer ?? null, ranks: ranks.buffer }),
     adoptTables: (tables) => {
