@@ -16640,6 +16640,11 @@ function forEachWord(text, onWord) {
     if (s.isWordLike) onWord(s.index, s.index + s.segment.length);
   }
 }
+function wordOffsets(text) {
+  if (memoText !== null && text === memoText) return memoOffsets;
+  const fast = scan(text, true);
+  return fast < 0 ? null : offsets.slice(0, fast * 2);
+}
 
 // src/measure/document.ts
 var SCRIPT_MASK = 255;
@@ -17737,6 +17742,9 @@ function bytePairCount(text, start, end, ranks) {
 }
 
 // src/measure/tokens/tiktoken.ts
+var FRONT_ENTRIES = 16384;
+var FRONT_MASK = FRONT_ENTRIES - 1;
+var FRONT_UNITS = 8;
 function asciiSplitterFor(pattern) {
   if (pattern === BUILTIN_PATTERNS.gpt2) return splitGpt2;
   if (pattern === BUILTIN_PATTERNS.cl100k_base) return splitCl100k;
@@ -17753,9 +17761,38 @@ function createRankCounter(options) {
   const cache = new PieceCache(options.generationSize);
   const words = new PieceCache(options.generationSize);
   const builtinPattern = Object.values(BUILTIN_PATTERNS).includes(options.pattern);
+  const frontSlots = new Int32Array(FRONT_ENTRIES * 2);
+  const frontKeys = new Uint16Array(FRONT_ENTRIES * FRONT_UNITS);
+  let frontHits = 0;
   const countRange = (text, start, end) => {
-    if (end - start > MAX_CACHED_PIECE_LENGTH) return bytePairCount(text, start, end, ranks);
+    const length = end - start;
+    if (length > MAX_CACHED_PIECE_LENGTH) return bytePairCount(text, start, end, ranks);
     const hash2 = hashRange(text, start, end);
+    if (length <= FRONT_UNITS) {
+      const f = hash2 & FRONT_MASK;
+      const meta = frontSlots[f * 2];
+      if (meta >>> 16 === length && frontSlots[f * 2 + 1] === hash2) {
+        let at3 = f * FRONT_UNITS;
+        let k = start;
+        while (k < end && frontKeys[at3] === text.charCodeAt(k)) {
+          at3++;
+          k++;
+        }
+        if (k === end) {
+          frontHits++;
+          return meta & 65535;
+        }
+      }
+      const n = lookUp(text, start, end, hash2);
+      frontSlots[f * 2] = length << 16 | n;
+      frontSlots[f * 2 + 1] = hash2;
+      const at2 = f * FRONT_UNITS;
+      for (let k = 0; k < length; k++) frontKeys[at2 + k] = text.charCodeAt(start + k);
+      return n;
+    }
+    return lookUp(text, start, end, hash2);
+  };
+  const lookUp = (text, start, end, hash2) => {
     if (shared2 !== null) {
       const known = shared2.find(text, start, end, hash2);
       if (known >= 0) {
@@ -17834,7 +17871,7 @@ function createRankCounter(options) {
     } : {},
     cacheStats: () => {
       const own = cache.stats();
-      return { ...own, hits: own.hits + sharedHits, entries: own.entries + (shared2?.size ?? 0) };
+      return { ...own, hits: own.hits + sharedHits + frontHits, entries: own.entries + (shared2?.size ?? 0) };
     },
     shareTables: () => ({ counts: shared2?.buffer ?? null, ranks: ranks.buffer }),
     adoptTables: (tables2) => {
@@ -17993,8 +18030,11 @@ var PieceList = class {
 
 // src/measure/tokens/measure.ts
 var SPACE3 = 32;
-function measureTokens(counter, text, forEachWord2) {
-  if (counter.countWithPieces !== void 0) return measureByPieces(counter, text, forEachWord2);
+function measureTokens(counter, text, forEachWord2, wordOffsets2) {
+  if (counter.countWithPieces !== void 0) {
+    const offsets2 = wordOffsets2?.(text) ?? null;
+    return offsets2 === null ? measureByPieces(counter, text, forEachWord2) : measureByOffsets(counter, text, offsets2);
+  }
   const { tokens, unknown } = counter.count(text);
   let words = 0;
   let wordTokens = 0;
@@ -18028,6 +18068,25 @@ function measureByPieces(counter, text, forEachWord2) {
     wordTokens += n;
     if (n >= 2) continuedWords++;
   });
+  return { tokens, unknown, words, wordTokens, continuedWords };
+}
+function measureByOffsets(counter, text, offsets2) {
+  const pieces = scratch2;
+  const { tokens, unknown } = counter.countWithPieces(text, pieces);
+  const { ends, counts, length } = pieces;
+  const words = offsets2.length >> 1;
+  let wordTokens = 0;
+  let continuedWords = 0;
+  let k = 0;
+  for (let w = 0; w < words; w++) {
+    const start = offsets2[w * 2];
+    const end = offsets2[w * 2 + 1];
+    const from = start > 0 && text.charCodeAt(start - 1) === SPACE3 ? start - 1 : start;
+    while (k < length && ends[k] <= from) k++;
+    const n = k < length && ends[k] === end && (k === 0 ? 0 : ends[k - 1]) === from ? counts[k] : counter.countPiece(text.slice(from, end));
+    wordTokens += n;
+    if (n >= 2) continuedWords++;
+  }
   return { tokens, unknown, words, wordTokens, continuedWords };
 }
 
@@ -18207,8 +18266,8 @@ async function prepareAnalyzers(policy) {
     const m = main2;
     const b = baseline;
     analyzers.tokens = (text) => {
-      const out = { main: measureTokens(m, text, forEachWord) };
-      if (b) out.baseline = measureTokens(b, text, forEachWord);
+      const out = { main: measureTokens(m, text, forEachWord, wordOffsets) };
+      if (b) out.baseline = measureTokens(b, text, forEachWord, wordOffsets);
       return out;
     };
   }
