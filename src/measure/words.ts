@@ -471,12 +471,14 @@ export function forEachWord(text: string, onWord: (start: number, end: number) =
 
 /**
  * Returns the words of `text` as [start, end) UTF-16 offsets, two per word in order (the same
- * words forEachWord reports), or null when the text needs Intl.Segmenter. The offsets of the
- * text countWords last counted are the memo's own, shared: the caller must not write to them.
+ * words forEachWord reports), or null when the text needs Intl.Segmenter. For the text last
+ * counted (countWords, measureText) they are a view of the memo, no copy: the caller reads them
+ * before counting the words of any other text (the next count reuses the memo's buffer) and
+ * never writes to them.
  */
 export function wordOffsets(text: string): Int32Array | null {
-  if (memoText !== null && text === memoText) return memoOffsets;
-  const fast = scan(text, true);
+  if (memoText !== null && text === memoText) return memoOffsets.subarray(0, memoCount * 2);
+  const fast = scan(text, true, null);
   return fast < 0 ? null : offsets.slice(0, fast * 2);
 }
 

@@ -84,5 +84,5 @@ export interface FertilityFigures {
 /** Segments a text into words, calling back with each word-like segment's UTF-16 offsets. */
 export type ForEachWord = (text: string, cb: (start: number, end: number) => void) => void;
 
-/** Returns a text's word-like segments as [start, end) UTF-16 offsets, two per word in order, or null when it cannot (the caller then uses a ForEachWord); the caller only reads them. */
+/** Returns a text's word-like segments as [start, end) UTF-16 offsets, two per word in order, or null when it cannot (the caller then uses a ForEachWord); the caller only reads them, and before it segments any other text. */
 export type WordOffsets = (text: string) => Int32Array | null;
