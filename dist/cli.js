@@ -128,33 +128,33 @@ var MomentTally = class _MomentTally {
   }
   /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
   add(m, tokens) {
-    const put = _MomentTally.put;
+    const put2 = _MomentTally.put;
     const t = this.of(m.language);
-    put(t, F.bytes2, m.bytes * m.bytes);
-    put(t, F.chars2, m.chars * m.chars);
-    put(t, F.words2, m.words * m.words);
+    put2(t, F.bytes2, m.bytes * m.bytes);
+    put2(t, F.chars2, m.chars * m.chars);
+    put2(t, F.words2, m.words * m.words);
     const main2 = tokens?.main;
     const base = tokens?.baseline;
     if (main2) {
-      put(t, F.tokens2, main2.tokens * main2.tokens);
-      put(t, F.wordTokens2, main2.wordTokens * main2.wordTokens);
-      put(t, F.wordTokensWords, main2.wordTokens * m.words);
-      put(t, F.continued2, main2.continuedWords * main2.continuedWords);
-      put(t, F.continuedWords, main2.continuedWords * m.words);
+      put2(t, F.tokens2, main2.tokens * main2.tokens);
+      put2(t, F.wordTokens2, main2.wordTokens * main2.wordTokens);
+      put2(t, F.wordTokensWords, main2.wordTokens * m.words);
+      put2(t, F.continued2, main2.continuedWords * main2.continuedWords);
+      put2(t, F.continuedWords, main2.continuedWords * m.words);
     }
     if (base) {
-      put(t, F.baselineTokens2, base.tokens * base.tokens);
-      put(t, F.baselineWordTokens2, base.wordTokens * base.wordTokens);
-      if (main2) put(t, F.wordTokensBaseline, main2.wordTokens * base.wordTokens);
+      put2(t, F.baselineTokens2, base.tokens * base.tokens);
+      put2(t, F.baselineWordTokens2, base.wordTokens * base.wordTokens);
+      if (main2) put2(t, F.wordTokensBaseline, main2.wordTokens * base.wordTokens);
     }
     if (m.purity !== null) {
       let scriptChars = 0;
       for (const n of Object.values(m.scripts)) scriptChars += n;
       const expected = Math.round(m.purity * scriptChars);
       const b = this.of(m.declared !== void 0 && m.declared !== "other" ? m.declared : m.language);
-      put(b, F.expected2, expected * expected);
-      put(b, F.scriptChars2, scriptChars * scriptChars);
-      put(b, F.expectedScriptChars, expected * scriptChars);
+      put2(b, F.expected2, expected * expected);
+      put2(b, F.scriptChars2, scriptChars * scriptChars);
+      put2(b, F.expectedScriptChars, expected * scriptChars);
     }
   }
 };
@@ -7508,8 +7508,8 @@ function joinDuplicates(shards, opts) {
         const i = order[x];
         const fi = flags[i];
         if (fi & NEAR && !(trackExisting && fi & (CLASS_HAS_EXISTING | CLASS_HAS_NEW))) continue;
-        const stop = Math.max(p, x - cap);
-        for (let y = x - 1; y >= stop; y--) {
+        const stop2 = Math.max(p, x - cap);
+        for (let y = x - 1; y >= stop2; y--) {
           const j = order[y];
           const f = flags[i];
           const fj = flags[j];
@@ -16501,173 +16501,49 @@ function wordSegmenter() {
   segmenter ??= new Intl.Segmenter(SEGMENTER_LOCALE, { granularity: "word" });
   return segmenter;
 }
-var offsets = new Int32Array(1024);
-function scan(text, record) {
-  const table2 = classTable2();
-  const n = text.length;
-  let count3 = 0;
-  let state = OUT;
-  let start = 0;
-  let end = 0;
-  let coreEnd = 0;
-  let midAt = 0;
-  let midEnd = 0;
-  let last = OTHER3;
-  let mid = OTHER3;
-  let hasCore = false;
-  let connectors = 0;
-  for (let i = 0; i < n; i++) {
-    let cls = table2[text.charCodeAt(i)];
-    if (cls >= NEEDS_SEGMENTER) {
-      if ((cls & EXTENDED_PICTOGRAPHIC) !== 0 && i > 0 && text.charCodeAt(i - 1) === ZWJ) return -1;
-      cls &= CLASS_MASK;
-      if (cls === NEEDS_SEGMENTER) return -1;
-    }
-    if (state === IN) {
-      if (cls === IGNORABLE) {
-        end = i + 1;
-        continue;
-      }
-      if (cls >= ALETTER && cls <= EXTEND_NUM_LET) {
-        if (cls === EXTEND_NUM_LET) connectors++;
-        else hasCore = true;
-        last = cls;
-        end = coreEnd = i + 1;
-        continue;
-      }
-      const letterBefore = last === ALETTER || last === HEBREW_LETTER;
-      if (cls === MID_LETTER && letterBefore || // WB6
-      (cls === MID_NUM_LET || cls === SINGLE_QUOTE) && (letterBefore || last === NUMERIC) || // WB6, WB12, WB7a
-      cls === MID_NUM && last === NUMERIC || // WB12
-      cls === DOUBLE_QUOTE && last === HEBREW_LETTER) {
-        state = PENDING;
-        mid = cls;
-        midAt = midEnd = i + 1;
-        continue;
-      }
-      count3 = emit(record, count3, start, end, wordLike(last, hasCore, connectors, end > coreEnd));
-      state = OUT;
-      continue;
-    }
-    if (state === PENDING) {
-      if (cls === IGNORABLE) {
-        midEnd = i + 1;
-        continue;
-      }
-      const letter2 = cls === ALETTER || cls === HEBREW_LETTER;
-      if (letter2 && (last === ALETTER || last === HEBREW_LETTER) && mid !== MID_NUM && mid !== DOUBLE_QUOTE || // WB7
-      cls === HEBREW_LETTER && last === HEBREW_LETTER && mid === DOUBLE_QUOTE || // WB7c
-      cls === NUMERIC && last === NUMERIC && mid !== MID_LETTER && mid !== DOUBLE_QUOTE) {
-        hasCore = true;
-        last = cls;
-        end = coreEnd = i + 1;
-        state = IN;
-        continue;
-      }
-      count3 = endPending(record, count3, start, end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors);
-      state = OUT;
-    }
-    if (cls >= ALETTER && cls <= EXTEND_NUM_LET) {
-      state = IN;
-      start = i;
-      end = coreEnd = i + 1;
-      last = cls;
-      hasCore = cls !== EXTEND_NUM_LET;
-      connectors = cls === EXTEND_NUM_LET ? 1 : 0;
-    }
-  }
-  if (state === IN) count3 = emit(record, count3, start, end, wordLike(last, hasCore, connectors, end > coreEnd));
-  else if (state === PENDING) {
-    count3 = endPending(record, count3, start, end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors);
-  }
-  return count3;
-}
-function wordLike(last, hasCore, connectors, trailingIgnorables) {
-  if (!hasCore && connectors < 2) return false;
-  return !(last === EXTEND_NUM_LET && trailingIgnorables);
-}
-function endPending(record, count3, start, end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors) {
-  if (last === HEBREW_LETTER && mid === SINGLE_QUOTE) return emit(record, count3, start, midEnd, midEnd === midAt);
-  return emit(record, count3, start, end, wordLike(last, hasCore, connectors, end > coreEnd));
-}
-function emit(record, count3, start, end, isWordLike) {
-  if (!isWordLike) return count3;
-  if (record) {
-    if (offsets.length < (count3 + 1) * 2) {
-      const grown = new Int32Array(offsets.length * 2);
-      grown.set(offsets);
-      offsets = grown;
-    }
-    offsets[count3 * 2] = start;
-    offsets[count3 * 2 + 1] = end;
-  }
-  return count3 + 1;
-}
-function countWordsWithSegmenter(text) {
-  let count3 = 0;
-  for (const s of wordSegmenter().segment(text)) if (s.isWordLike) count3++;
-  return count3;
-}
-var memoText = null;
-var memoCount = 0;
-var memoOffsets = new Int32Array(0);
-function countWords(text) {
-  const fast = scan(text, true);
-  if (fast < 0) {
-    memoText = null;
-    return countWordsWithSegmenter(text);
-  }
-  memoOffsets = offsets.slice(0, fast * 2);
-  memoCount = fast;
-  memoText = text;
-  return fast;
-}
-function forEachWord(text, onWord) {
-  let found;
-  let fast;
-  if (memoText !== null && text === memoText) {
-    found = memoOffsets;
-    fast = memoCount;
-  } else {
-    fast = scan(text, true);
-    found = fast >= 0 ? offsets.slice(0, fast * 2) : offsets;
-  }
-  if (fast >= 0) {
-    for (let w = 0; w < fast; w++) onWord(found[w * 2], found[w * 2 + 1]);
-    return;
-  }
-  for (const s of wordSegmenter().segment(text)) {
-    if (s.isWordLike) onWord(s.index, s.index + s.segment.length);
-  }
-}
-function wordOffsets(text) {
-  if (memoText !== null && text === memoText) return memoOffsets;
-  const fast = scan(text, true);
-  return fast < 0 ? null : offsets.slice(0, fast * 2);
-}
-
-// src/measure/document.ts
-var SCRIPT_MASK = 255;
-var CLOSER_LOOK = 256;
-var characterTable;
-function characters() {
-  if (characterTable) return characterTable;
+var SCRIPT_BITS = 255;
+var UTF8_SHIFT = 8;
+var CLOSER_LOOK = 1 << 10;
+var MOJIBAKE_LEAD = 1 << 11;
+var CLASS_SHIFT = 12;
+var RUN_MASK = 31 << CLASS_SHIFT | CLOSER_LOOK;
+var IGNORABLE_RUN = IGNORABLE << CLASS_SHIFT;
+var infoTable;
+function characterInfo() {
+  if (infoTable) return infoTable;
   const scripts = bmpScriptIds();
-  const table2 = new Uint16Array(65536);
-  for (let cp = 0; cp < 65536; cp++) table2[cp] = scripts[cp] | (needsCloserLook(cp) ? CLOSER_LOOK : 0);
-  characterTable = table2;
+  const words = classTable2();
+  const table2 = new Uint32Array(65536);
+  for (let cp = 0; cp < 65536; cp++) {
+    const lead = cp >= MOJIBAKE_LEAD_FIRST && cp <= MOJIBAKE_LEAD_LAST;
+    table2[cp] = scripts[cp] | (cp < 128 ? 1 : cp < 2048 ? 2 : 3) << UTF8_SHIFT | (lead ? MOJIBAKE_LEAD : needsCloserLook(cp) ? CLOSER_LOOK : 0) | words[cp] << CLASS_SHIFT;
+  }
+  infoTable = table2;
   return table2;
 }
-function scanCharacters(text, counts) {
-  const table2 = characters();
-  counts.fill(0);
-  const anomalies = emptyAnomalyCounts();
-  const marks = emptyMarkCounts();
+var CharacterTally = class {
+  /** Characters per Script id (index into SCRIPT_NAMES), Common, Inherited and Unknown included. */
+  counts = new Int32Array(SCRIPT_NAMES.length);
+  /** UTF-8 bytes of the text (an unpaired surrogate as the 3 bytes of U+FFFD, as Buffer.byteLength counts it). */
+  bytes = 0;
+  /** Code points. */
+  chars = 0;
+  /** A new record per text: the measurer hands it on. */
+  anomalies = emptyAnomalyCounts();
+  marks = emptyMarkCounts();
+};
+function closerLook(unit, at2, anomalies, marks) {
+  const kind = anomalyOf(unit, at2 === 0);
+  if (kind !== null) anomalies[kind]++;
+  const mark = markOf(unit);
+  if (mark !== null) marks[mark]++;
+}
+function countCharactersFrom(text, from, tally2, bytes3, flags) {
+  const table2 = characterInfo();
+  const { counts, anomalies, marks } = tally2;
   const n = text.length;
-  let bytes3 = 0;
   let pairs = 0;
-  let leads = false;
-  for (let i = 0; i < n; i++) {
+  for (let i = from; i < n; i++) {
     const unit = text.charCodeAt(i);
     if (unit >= 55296 && unit <= 56319 && i + 1 < n) {
       const low = text.charCodeAt(i + 1);
@@ -16685,27 +16561,230 @@ function scanCharacters(text, counts) {
         continue;
       }
     }
-    bytes3 += unit < 128 ? 1 : unit < 2048 ? 2 : 3;
     const info = table2[unit];
-    const id = info & SCRIPT_MASK;
+    const id = info & SCRIPT_BITS;
     counts[id] = counts[id] + 1;
-    if ((info & CLOSER_LOOK) !== 0) {
-      const kind = anomalyOf(unit, i === 0);
-      if (kind !== null) anomalies[kind]++;
-      const mark = markOf(unit);
-      if (mark !== null) marks[mark]++;
-      if (unit >= MOJIBAKE_LEAD_FIRST && unit <= MOJIBAKE_LEAD_LAST) leads = true;
-    }
+    bytes3 += info >>> UTF8_SHIFT & 3;
+    flags |= info;
+    if ((info & CLOSER_LOOK) !== 0) closerLook(unit, i, anomalies, marks);
   }
-  if (leads) anomalies.mojibake = countMojibake(text);
-  return { bytes: bytes3, chars: n - pairs, anomalies, marks };
+  finishTally(text, tally2, bytes3, n - pairs, flags);
 }
+function finishTally(text, tally2, bytes3, chars, flags) {
+  tally2.bytes = bytes3;
+  tally2.chars = chars;
+  if ((flags & MOJIBAKE_LEAD) !== 0) tally2.anomalies.mojibake = countMojibake(text);
+}
+var unusedTally = new CharacterTally();
+var offsets = new Int32Array(1024);
+function scan(text, record, tally2) {
+  const table2 = characterInfo();
+  const into = tally2 ?? unusedTally;
+  const { counts, anomalies, marks } = into;
+  const n = text.length;
+  let out = offsets;
+  let bytes3 = 0;
+  let flags = 0;
+  let count3 = 0;
+  let state = OUT;
+  let start = 0;
+  let end = 0;
+  let coreEnd = 0;
+  let midAt = 0;
+  let midEnd = 0;
+  let last = OTHER3;
+  let mid = OTHER3;
+  let hasCore = false;
+  let connectors = 0;
+  for (let i = 0; i < n; i++) {
+    const unit = text.charCodeAt(i);
+    const info = table2[unit];
+    let cls = info >>> CLASS_SHIFT;
+    if (cls >= NEEDS_SEGMENTER) {
+      if ((cls & EXTENDED_PICTOGRAPHIC) !== 0 && i > 0 && text.charCodeAt(i - 1) === ZWJ) return stop(text, i, tally2, bytes3, flags, out);
+      cls &= CLASS_MASK;
+      if (cls === NEEDS_SEGMENTER) return stop(text, i, tally2, bytes3, flags, out);
+    }
+    const id = info & SCRIPT_BITS;
+    counts[id] = counts[id] + 1;
+    bytes3 += info >>> UTF8_SHIFT & 3;
+    flags |= info;
+    if ((info & CLOSER_LOOK) !== 0) closerLook(unit, i, anomalies, marks);
+    if (state === IN) {
+      if (cls === IGNORABLE) {
+        end = i + 1;
+        continue;
+      }
+      if (cls >= ALETTER && cls <= EXTEND_NUM_LET) {
+        if (cls === EXTEND_NUM_LET) connectors++;
+        else hasCore = true;
+        last = cls;
+        end = coreEnd = i + 1;
+        if (cls === EXTEND_NUM_LET) continue;
+      } else {
+        const letterBefore = last === ALETTER || last === HEBREW_LETTER;
+        if (cls === MID_LETTER && letterBefore || // WB6
+        (cls === MID_NUM_LET || cls === SINGLE_QUOTE) && (letterBefore || last === NUMERIC) || // WB6, WB12, WB7a
+        cls === MID_NUM && last === NUMERIC || // WB12
+        cls === DOUBLE_QUOTE && last === HEBREW_LETTER) {
+          state = PENDING;
+          mid = cls;
+          midAt = midEnd = i + 1;
+          continue;
+        }
+        if (wordLike(last, hasCore, connectors, end > coreEnd)) {
+          if (record) out = put(out, count3, start, end);
+          count3++;
+        }
+        state = OUT;
+        continue;
+      }
+    } else {
+      if (state === PENDING) {
+        if (cls === IGNORABLE) {
+          midEnd = i + 1;
+          continue;
+        }
+        const letter2 = cls === ALETTER || cls === HEBREW_LETTER;
+        if (letter2 && (last === ALETTER || last === HEBREW_LETTER) && mid !== MID_NUM && mid !== DOUBLE_QUOTE || // WB7
+        cls === HEBREW_LETTER && last === HEBREW_LETTER && mid === DOUBLE_QUOTE || // WB7c
+        cls === NUMERIC && last === NUMERIC && mid !== MID_LETTER && mid !== DOUBLE_QUOTE) {
+          hasCore = true;
+          last = cls;
+          end = coreEnd = i + 1;
+          state = IN;
+        } else {
+          const e2 = pendingEnd(end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors);
+          if (e2 >= 0) {
+            if (record) out = put(out, count3, start, e2);
+            count3++;
+          }
+          state = OUT;
+        }
+      }
+      if (state === OUT) {
+        if (cls < ALETTER || cls > EXTEND_NUM_LET) continue;
+        state = IN;
+        start = i;
+        end = coreEnd = i + 1;
+        last = cls;
+        hasCore = cls !== EXTEND_NUM_LET;
+        connectors = cls === EXTEND_NUM_LET ? 1 : 0;
+        if (cls === EXTEND_NUM_LET) continue;
+      }
+    }
+    const same = last << CLASS_SHIFT;
+    while (i + 1 < n) {
+      const next = table2[text.charCodeAt(i + 1)];
+      const run2 = next & RUN_MASK;
+      if (run2 !== same && run2 !== IGNORABLE_RUN) break;
+      const nextId = next & SCRIPT_BITS;
+      counts[nextId] = counts[nextId] + 1;
+      bytes3 += next >>> UTF8_SHIFT & 3;
+      flags |= next;
+      i++;
+    }
+    end = i + 1;
+  }
+  const e = state === IN ? wordLike(last, hasCore, connectors, end > coreEnd) ? end : -1 : state === PENDING ? pendingEnd(end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors) : -1;
+  if (e >= 0) {
+    if (record) out = put(out, count3, start, e);
+    count3++;
+  }
+  offsets = out;
+  if (tally2 !== null) finishTally(text, tally2, bytes3, n, flags);
+  return count3;
+}
+function stop(text, at2, tally2, bytes3, flags, out) {
+  offsets = out;
+  if (tally2 !== null) countCharactersFrom(text, at2, tally2, bytes3, flags);
+  return -1;
+}
+function wordLike(last, hasCore, connectors, trailingIgnorables) {
+  if (!hasCore && connectors < 2) return false;
+  return !(last === EXTEND_NUM_LET && trailingIgnorables);
+}
+function pendingEnd(end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors) {
+  if (last === HEBREW_LETTER && mid === SINGLE_QUOTE) return midEnd === midAt ? midEnd : -1;
+  return wordLike(last, hasCore, connectors, end > coreEnd) ? end : -1;
+}
+function put(out, count3, start, end) {
+  if (out.length < (count3 + 1) * 2) {
+    const grown = new Int32Array(Math.max(1024, out.length * 2));
+    grown.set(out);
+    out = grown;
+  }
+  out[count3 * 2] = start;
+  out[count3 * 2 + 1] = end;
+  return out;
+}
+function countWordsWithSegmenter(text) {
+  let count3 = 0;
+  for (const s of wordSegmenter().segment(text)) if (s.isWordLike) count3++;
+  return count3;
+}
+var memoText = null;
+var memoCount = 0;
+var memoOffsets = new Int32Array(1024);
+var memoWalks = 0;
+function measureText(text, tally2) {
+  tally2.counts.fill(0);
+  tally2.anomalies = emptyAnomalyCounts();
+  tally2.marks = emptyMarkCounts();
+  return wordsOf2(text, scan(text, true, tally2));
+}
+function wordsOf2(text, fast) {
+  if (fast < 0) {
+    memoText = null;
+    return countWordsWithSegmenter(text);
+  }
+  if (memoWalks === 0) {
+    const spare = memoOffsets;
+    memoOffsets = offsets;
+    offsets = spare;
+  } else {
+    memoOffsets = offsets.slice(0, fast * 2);
+  }
+  memoCount = fast;
+  memoText = text;
+  return fast;
+}
+function forEachWord(text, onWord) {
+  if (memoText !== null && text === memoText) {
+    const found = memoOffsets;
+    const fast2 = memoCount;
+    memoWalks++;
+    try {
+      for (let w = 0; w < fast2; w++) onWord(found[w * 2], found[w * 2 + 1]);
+    } finally {
+      memoWalks--;
+    }
+    return;
+  }
+  const fast = scan(text, true, null);
+  if (fast >= 0) {
+    const found = offsets.slice(0, fast * 2);
+    for (let w = 0; w < fast; w++) onWord(found[w * 2], found[w * 2 + 1]);
+    return;
+  }
+  for (const s of wordSegmenter().segment(text)) {
+    if (s.isWordLike) onWord(s.index, s.index + s.segment.length);
+  }
+}
+function wordOffsets(text) {
+  if (memoText !== null && text === memoText) return memoOffsets.subarray(0, memoCount * 2);
+  const fast = scan(text, true, null);
+  return fast < 0 ? null : offsets.slice(0, fast * 2);
+}
+
+// src/measure/document.ts
 function createMeasurer(settings) {
   const detector = createLanguageDetector(settings.languages, settings.detection);
-  const counts = new Int32Array(SCRIPT_NAMES.length);
+  const pass = new CharacterTally();
+  const { counts } = pass;
   return (doc) => {
     const { text } = doc;
-    const pass = scanCharacters(text, counts);
+    const words = measureText(text, pass);
     const scripts = {};
     let letters = 0;
     let dominant = 0;
@@ -16730,7 +16809,7 @@ function createMeasurer(settings) {
     const measure = {
       bytes: pass.bytes,
       chars: pass.chars,
-      words: countWords(text),
+      words,
       scripts,
       dominantScript,
       detected,
@@ -19334,7 +19413,7 @@ async function check(opts) {
     ...opts.minSplitBytes !== void 0 ? { minSplitBytes: opts.minSplitBytes } : {}
   });
   progress.clear();
-  return emit2(reports, opts);
+  return emit(reports, opts);
 }
 async function scan2(opts) {
   const progress = progressPrinter();
@@ -19362,9 +19441,9 @@ async function merge(opts) {
     onWarning: (m) => process.stderr.write(`warning: ${m}
 `)
   });
-  return emit2([report], opts);
+  return emit([report], opts);
 }
-async function emit2(reports, opts) {
+async function emit(reports, opts) {
   for (const report of reports) {
     process.stdout.write(opts.quiet ? `${report.headline}
 ` : renderTerminal(report, { color: opts.color }));
