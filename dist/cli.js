@@ -18442,22 +18442,50 @@ function canRunWorkers(entry) {
 }
 function startWorker(entry, init) {
   const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
-  const held = [];
+  return holdEvents(worker, []);
+}
+function holdEvents(worker, earlier) {
+  const held = [...earlier];
   let handlers;
-  const deliver = (kind, value) => {
-    if (handlers) handlers[kind](value);
-    else held.push(() => handlers[kind](value));
+  const deliver = (event) => {
+    if (!handlers) {
+      held.push(event);
+      return;
+    }
+    if (event[0] === "message") handlers.message(event[1]);
+    else if (event[0] === "error") handlers.error(event[1]);
+    else handlers.exit(event[1]);
   };
-  worker.on("message", (m) => deliver("message", m));
-  worker.on("error", (e) => deliver("error", e));
-  worker.on("exit", (code) => deliver("exit", code));
+  worker.on("message", (m) => deliver(["message", m]));
+  worker.on("error", (e) => deliver(["error", e]));
+  worker.on("exit", (code) => deliver(["exit", code]));
   return {
     worker,
     listen(h) {
       handlers = h;
-      for (const f of held.splice(0)) f();
+      for (const event of held.splice(0)) deliver(event);
     }
   };
+}
+var PRESTARTED = /* @__PURE__ */ Symbol.for("sluice.prestarted-worker");
+function takePrestartedWorker(init) {
+  const slot = globalThis;
+  const pre = slot[PRESTARTED];
+  if (!pre) return null;
+  delete slot[PRESTARTED];
+  const { worker, held } = pre;
+  for (const kind of ["message", "error", "exit"]) worker.removeAllListeners(kind);
+  const started = holdEvents(worker, held);
+  worker.ref();
+  worker.postMessage({ type: "init", init });
+  return started;
+}
+function dropPrestartedWorker() {
+  const slot = globalThis;
+  const pre = slot[PRESTARTED];
+  if (!pre) return;
+  delete slot[PRESTARTED];
+  void pre.worker.terminate();
 }
 function transferablesOf(r) {
   const d = r.duplicates;
@@ -18466,8 +18494,16 @@ function transferablesOf(r) {
 async function measureInPool(work, init, entry, workers, onResult, here, started = [], shared2 = {}) {
   const shardQueue = work.whole.map((ref, id) => ({ kind: "shard", ref, id })).sort((a, b) => workOf(b.ref) - workOf(a.ref) || a.id - b.id);
   const batchQueue = [];
-  let producing = work.split.length > 0;
-  const threads = Math.max(1, Math.min(workers, shardQueue.length + (work.split.length > 0 ? workers : 0)));
+  const tail = work.tail ?? [];
+  let producing = work.split.length > 0 || tail.length > 0;
+  const threads = Math.max(1, Math.min(workers, shardQueue.length + (producing ? workers : 0)));
+  let onWholeTaken = [];
+  const wholeTaken = () => shardQueue.length === 0 || failed ? Promise.resolve() : new Promise((resolve) => onWholeTaken.push(resolve));
+  const tellWholeTaken = () => {
+    const w = onWholeTaken;
+    onWholeTaken = [];
+    for (const f of w) f();
+  };
   let failed;
   let nextId = shardQueue.length;
   let waiters = [];
@@ -18480,21 +18516,28 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
     failed ??= err;
     for (const t of batchQueue.splice(0)) t.reject(failed);
     wake();
+    tellWholeTaken();
     return failed;
   };
   const take = (main2) => {
     if (failed) return null;
     if (batchQueue.length > 0 && (!main2 || !producing || batchQueue.length > 2 * (threads - 1))) return batchQueue.shift();
-    if (shardQueue.length > 0) return shardQueue.shift();
+    if (shardQueue.length > 0) {
+      const task = shardQueue.shift();
+      if (shardQueue.length === 0) tellWholeTaken();
+      return task;
+    }
     return producing || batchQueue.length > 0 ? "wait" : null;
   };
   const all = [];
-  if (work.split.length > 0) {
+  if (producing) {
     all.push(
       (async () => {
-        const split = [...work.split].sort((a, b) => workOf(b) - workOf(a) || (a.path < b.path ? -1 : 1));
+        const largestFirst = (refs) => [...refs].sort((a, b) => workOf(b) - workOf(a) || (a.path < b.path ? -1 : 1));
+        const split = largestFirst(work.split);
         try {
-          for (const ref of split) {
+          for (const [i, ref] of [...split, ...largestFirst(tail)].entries()) {
+            if (i === split.length) await wholeTaken();
             if (failed) break;
             let result;
             try {
@@ -18542,7 +18585,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
   const spare = started.splice(0);
   for (const unused of spare.splice(Math.max(0, threads - 1))) void unused.worker.terminate();
   for (let w = 1; w < threads; w++) {
-    const thread = spare.shift() ?? startWorker(entry, init);
+    const thread = spare.shift() ?? takePrestartedWorker(init) ?? startWorker(entry, init);
     all.push(
       new Promise((resolve, reject) => {
         const worker = thread.worker;
@@ -18638,6 +18681,11 @@ function shardsToSplit(shards, workers, minBytes = MIN_SPLIT_BYTES) {
   const limit = Math.max(minBytes, total / (workers * 4));
   return new Set(shards.filter((r) => workOf(r) >= limit));
 }
+function tailShards(whole, workers) {
+  if (workers <= 1) return /* @__PURE__ */ new Set();
+  const smallestFirst = [...whole].sort((a, b) => workOf(a) - workOf(b) || (a.path < b.path ? -1 : 1));
+  return new Set(smallestFirst.slice(0, workers));
+}
 async function mapAtMost(items, limit, fn) {
   const out = new Array(items.length);
   let next = 0;
@@ -18692,7 +18740,8 @@ async function measureCorpus(policy, opts, given = {}) {
   const entry = opts.workerEntry;
   if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && holdsAnything(opts.cacheDir))) {
     const threads = threadsFor(discovery.shards, opts);
-    for (let w = 1; w < threads; w++) early.push(startWorker(entry, workerInitOf(policy, opts, "not yet known")));
+    const init = workerInitOf(policy, opts, "not yet known");
+    for (let w = 1; w < threads; w++) early.push(takePrestartedWorker(init) ?? startWorker(entry, init));
   }
   try {
     const prepared = given.prepared ?? await prepareOrThrow(policy);
@@ -18700,6 +18749,7 @@ async function measureCorpus(policy, opts, given = {}) {
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
     for (const w of early) void w.worker.terminate();
+    dropPrestartedWorker();
   }
 }
 function holdsAnything(dir) {
@@ -18786,11 +18836,17 @@ async function measureShards(policy, shards, prepared, opts, started = performan
   if (workers > 1 && canRunWorkers(opts.workerEntry)) {
     const files = await withTextHints(todo.filter((r) => r.open === void 0));
     const split = shardsToSplit(files, workers, opts.minSplitBytes);
+    const whole = files.filter((r) => !split.has(r));
+    const tail = tailShards(whole, workers);
     const init = workerInitOf(policy, opts, prepared.settingsId);
     const pending = [];
     const plan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(
-      { whole: files.filter((r) => !split.has(r)), split: [...files.filter((r) => split.has(r)), ...todo.filter((r) => r.open !== void 0)] },
+      {
+        whole: whole.filter((r) => !tail.has(r)),
+        split: [...files.filter((r) => split.has(r)), ...todo.filter((r) => r.open !== void 0)],
+        tail: whole.filter((r) => tail.has(r))
+      },
       init,
       opts.workerEntry,
       workers,
@@ -18818,6 +18874,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     );
     await Promise.all(pending);
   } else {
+    dropPrestartedWorker();
     for (const ref of todo) {
       const r = await scanShard(ref, prepared.scan, prepared.analyzers, progressOf(ref));
       done(r);
@@ -18936,9 +18993,21 @@ var PROGRESS_STEP_BYTES = 8 * 1024 * 1024;
 function isShardWorker() {
   return !isMainThread && workerData?.role === "sluice-shard-worker";
 }
+async function initOf(port) {
+  const given = workerData;
+  if (!("pending" in given)) return given;
+  return new Promise((resolve) => {
+    const first = (msg) => {
+      if (msg.type !== "init") return;
+      port.off("message", first);
+      resolve(msg.init);
+    };
+    port.on("message", first);
+  });
+}
 async function runShardWorker() {
   const port = parentPort;
-  const init = workerData;
+  const init = await initOf(port);
   const post = (m) => port.postMessage(m);
   try {
     const policy = await loadPolicyOrThrow(init.policyFile, init.root);
@@ -18952,6 +19021,7 @@ async function runShardWorker() {
         prepared.adoptCounts(msg.tables);
         return;
       }
+      if (msg.type === "init") return;
       if (msg.type === "batch") {
         try {
           throwIfFaultInjected(msg.path);

@@ -14,10 +14,24 @@ export function isShardWorker(): boolean {
   return !isMainThread && (workerData as WorkerInit | undefined)?.role === 'sluice-shard-worker';
 }
 
+/** Returns this worker's init: its workerData, or for a worker started before the policy was known (bin/sluice.js), the `init` message it waits for. */
+async function initOf(port: NonNullable<typeof parentPort>): Promise<WorkerInit> {
+  const given = workerData as WorkerInit | { role: 'sluice-shard-worker'; pending: true };
+  if (!('pending' in given)) return given;
+  return new Promise((resolve) => {
+    const first = (msg: ToWorker): void => {
+      if (msg.type !== 'init') return; // nothing else is sent before it
+      port.off('message', first);
+      resolve(msg.init);
+    };
+    port.on('message', first);
+  });
+}
+
 /** Serves scan requests until told to close. */
 export async function runShardWorker(): Promise<void> {
   const port = parentPort!;
-  const init = workerData as WorkerInit;
+  const init = await initOf(port);
   const post = (m: FromWorker): void => port.postMessage(m);
   try {
     const policy = await loadPolicyOrThrow(init.policyFile, init.root);
@@ -31,6 +45,7 @@ export async function runShardWorker(): Promise<void> {
         prepared.adoptCounts(msg.tables);
         return;
       }
+      if (msg.type === 'init') return; // taken by initOf; never sent twice
       if (msg.type === 'batch') {
         try {
           throwIfFaultInjected(msg.path);
