@@ -17197,9 +17197,6 @@ function isBuiltinName(name) {
 
 // src/measure/tokens/ranks.ts
 var NO_RANK = Infinity;
-var MAGIC2 = 0;
-var OWNER_1 = 1;
-var OWNER_2 = 2;
 var COUNT = 3;
 var SLOT_BITS = 4;
 var ARENA_BYTES = 5;
@@ -17213,6 +17210,21 @@ function ownerHashes(owner) {
     b = Math.imul(b ^ owner.charCodeAt(i), 1540483477) ^ b >>> 15;
   }
   return [a, b];
+}
+var MAGIC2 = 0;
+var OWNER_1 = 1;
+var OWNER_2 = 2;
+function stampOwner(header, owner, magic) {
+  const [a, b] = ownerHashes(owner);
+  header[OWNER_1] = a;
+  header[OWNER_2] = b;
+  header[MAGIC2] = magic;
+}
+function ownedBy(buffer, owner, magic, words) {
+  if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < words * 4) return false;
+  const header = new Int32Array(buffer, 0, words);
+  const [a, b] = ownerHashes(owner);
+  return header[MAGIC2] === magic && header[OWNER_1] === a && header[OWNER_2] === b;
 }
 function hashBytes(bytes3, start, end) {
   let h = 2166136261 | 0;
@@ -17250,11 +17262,7 @@ var RankTable = class _RankTable {
   arena;
   /** Returns the table in `buffer` (from another thread's table) when it was made for the tokenizer `owner`, else null. */
   static attach(buffer, owner) {
-    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS * 4) return null;
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    const [a, b] = ownerHashes(owner);
-    if (header[MAGIC2] !== MAGIC_VALUE || header[OWNER_1] !== a || header[OWNER_2] !== b) return null;
-    return new _RankTable(buffer);
+    return ownedBy(buffer, owner, MAGIC_VALUE, HEADER_WORDS) ? new _RankTable(buffer) : null;
   }
   /** Builds a table from token bytes (concatenated in `arena`, token i at offsets[i]..offsets[i+1]) and ranks; `duplicate(i)` is called for a token listed before. */
   static build(owner, arena, offsets2, ranks, count3, duplicate) {
@@ -17264,13 +17272,10 @@ var RankTable = class _RankTable {
     const bytes3 = HEADER_WORDS * 4 + count3 * 8 + (1 << 16) * 8 + (count3 + 1) * 4 + (1 << bits) * 4 + arenaBytes;
     const buffer = new SharedArrayBuffer(bytes3);
     const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    const [a, b] = ownerHashes(owner);
-    header[OWNER_1] = a;
-    header[OWNER_2] = b;
     header[COUNT] = count3;
     header[SLOT_BITS] = bits;
     header[ARENA_BYTES] = arenaBytes;
-    header[MAGIC2] = MAGIC_VALUE;
+    stampOwner(header, owner, MAGIC_VALUE);
     const table2 = new _RankTable(buffer);
     table2.ranks.set(ranks.subarray(0, count3));
     table2.offsets.set(offsets2.subarray(0, count3 + 1));
@@ -17474,9 +17479,6 @@ function quote(s) {
 // src/measure/tokens/shared-counts.ts
 var DEFAULT_SHARED_ENTRIES = 1 << 18;
 var UNITS_PER_ENTRY = 16;
-var MAGIC3 = 0;
-var OWNER_12 = 1;
-var OWNER_22 = 2;
 var USED = 3;
 var UNITS_USED = 4;
 var CAPACITY = 5;
@@ -17517,22 +17519,15 @@ var SharedPieceCounts = class _SharedPieceCounts {
     const bytes3 = HEADER_WORDS2 * 4 + (1 << bits) * SLOT_WORDS * 4 + units * 2;
     const buffer = new SharedArrayBuffer(bytes3);
     const header = new Int32Array(buffer, 0, HEADER_WORDS2);
-    const [a, b] = ownerHashes(owner);
-    header[OWNER_12] = a;
-    header[OWNER_22] = b;
     header[CAPACITY] = capacity;
     header[SLOT_BITS2] = bits;
     header[UNITS] = units;
-    header[MAGIC3] = MAGIC_VALUE2;
+    stampOwner(header, owner, MAGIC_VALUE2);
     return new _SharedPieceCounts(buffer);
   }
   /** Returns the table in `buffer` when it was made for the tokenizer `owner`, else null. */
   static attach(buffer, owner) {
-    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS2 * 4) return null;
-    const header = new Int32Array(buffer, 0, HEADER_WORDS2);
-    const [a, b] = ownerHashes(owner);
-    if (header[MAGIC3] !== MAGIC_VALUE2 || header[OWNER_12] !== a || header[OWNER_22] !== b) return null;
-    return new _SharedPieceCounts(buffer);
+    return ownedBy(buffer, owner, MAGIC_VALUE2, HEADER_WORDS2) ? new _SharedPieceCounts(buffer) : null;
   }
   /** Returns the count of text[start, end) (its hash as from hashRange), or -1 when no thread has added it. */
   find(text, start, end, hash2) {

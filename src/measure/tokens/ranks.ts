@@ -13,10 +13,7 @@ import { TokenizerError } from './errors.js';
 /** Rank of "no such token": above every real rank, so it never wins a merge. Ranks are doubles, since a rank file's ranks may pass 2^31. */
 export const NO_RANK = Infinity;
 
-// Header words.
-const MAGIC = 0;
-const OWNER_1 = 1;
-const OWNER_2 = 2;
+// Header words after the owner's (see stampOwner).
 const COUNT = 3;
 const SLOT_BITS = 4;
 const ARENA_BYTES = 5;
@@ -24,7 +21,7 @@ const HEADER_WORDS = 8;
 const MAGIC_VALUE = 0x736c5231;
 
 /** Returns two 32-bit hashes of a tokenizer id, by which a shared table names its owner. */
-export function ownerHashes(owner: string): [number, number] {
+function ownerHashes(owner: string): [number, number] {
   let a = 0x811c9dc5 | 0;
   let b = 0x9e3779b9 | 0;
   for (let i = 0; i < owner.length; i++) {
@@ -32,6 +29,28 @@ export function ownerHashes(owner: string): [number, number] {
     b = Math.imul(b ^ owner.charCodeAt(i), 0x5bd1e995) ^ (b >>> 15);
   }
   return [a, b];
+}
+
+// The first three header words of every shared table (this one and shared-counts.ts): what kind of
+// table it is, written last, and the two hashes of the tokenizer it was made for.
+const MAGIC = 0;
+const OWNER_1 = 1;
+const OWNER_2 = 2;
+
+/** Marks a new shared table's header as `magic`'s kind, made for the tokenizer `owner` (the other header words already written). */
+export function stampOwner(header: Int32Array, owner: string, magic: number): void {
+  const [a, b] = ownerHashes(owner);
+  header[OWNER_1] = a;
+  header[OWNER_2] = b;
+  header[MAGIC] = magic;
+}
+
+/** Returns whether `buffer` holds a shared table of `magic`'s kind made for the tokenizer `owner`, with a header of `words` words. */
+export function ownedBy(buffer: SharedArrayBuffer, owner: string, magic: number, words: number): boolean {
+  if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < words * 4) return false;
+  const header = new Int32Array(buffer, 0, words);
+  const [a, b] = ownerHashes(owner);
+  return header[MAGIC] === magic && header[OWNER_1] === a && header[OWNER_2] === b;
 }
 
 /** FNV-1a over bytes[start, end). */
@@ -73,11 +92,7 @@ export class RankTable {
 
   /** Returns the table in `buffer` (from another thread's table) when it was made for the tokenizer `owner`, else null. */
   static attach(buffer: SharedArrayBuffer, owner: string): RankTable | null {
-    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS * 4) return null;
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    const [a, b] = ownerHashes(owner);
-    if (header[MAGIC] !== MAGIC_VALUE || header[OWNER_1] !== a || header[OWNER_2] !== b) return null;
-    return new RankTable(buffer);
+    return ownedBy(buffer, owner, MAGIC_VALUE, HEADER_WORDS) ? new RankTable(buffer) : null;
   }
 
   /** Builds a table from token bytes (concatenated in `arena`, token i at offsets[i]..offsets[i+1]) and ranks; `duplicate(i)` is called for a token listed before. */
@@ -88,13 +103,10 @@ export class RankTable {
     const bytes = HEADER_WORDS * 4 + count * 8 + (1 << 16) * 8 + (count + 1) * 4 + (1 << bits) * 4 + arenaBytes;
     const buffer = new SharedArrayBuffer(bytes);
     const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    const [a, b] = ownerHashes(owner);
-    header[OWNER_1] = a;
-    header[OWNER_2] = b;
     header[COUNT] = count;
     header[SLOT_BITS] = bits;
     header[ARENA_BYTES] = arenaBytes;
-    header[MAGIC] = MAGIC_VALUE;
+    stampOwner(header, owner, MAGIC_VALUE);
     const table = new RankTable(buffer);
     table.ranks.set(ranks.subarray(0, count));
     table.offsets.set(offsets.subarray(0, count + 1));

@@ -22,17 +22,14 @@
 // table made for another, since a wrong count there would be a wrong report.
 
 import { MAX_CACHED_PIECE_LENGTH } from './cache.js';
-import { ownerHashes } from './ranks.js';
+import { ownedBy, stampOwner } from './ranks.js';
 
 /** Default entries: Brown's million words give about 57k distinct o200k pieces; four times that leaves room for a few languages. Slots are twice as many (half full at most); keys average 8 units. About 16 MB in all, touched only as entries are added. */
 export const DEFAULT_SHARED_ENTRIES = 1 << 18;
 /** UTF-16 units of key storage per entry, on average. */
 const UNITS_PER_ENTRY = 16;
 
-// Header words.
-const MAGIC = 0;
-const OWNER_1 = 1;
-const OWNER_2 = 2;
+// Header words after the owner's (see stampOwner in ranks.ts).
 const USED = 3;
 const UNITS_USED = 4;
 const CAPACITY = 5;
@@ -76,23 +73,16 @@ export class SharedPieceCounts {
     const bytes = HEADER_WORDS * 4 + (1 << bits) * SLOT_WORDS * 4 + units * 2;
     const buffer = new SharedArrayBuffer(bytes);
     const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    const [a, b] = ownerHashes(owner);
-    header[OWNER_1] = a;
-    header[OWNER_2] = b;
     header[CAPACITY] = capacity;
     header[SLOT_BITS] = bits;
     header[UNITS] = units;
-    header[MAGIC] = MAGIC_VALUE;
+    stampOwner(header, owner, MAGIC_VALUE);
     return new SharedPieceCounts(buffer);
   }
 
   /** Returns the table in `buffer` when it was made for the tokenizer `owner`, else null. */
   static attach(buffer: SharedArrayBuffer, owner: string): SharedPieceCounts | null {
-    if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < HEADER_WORDS * 4) return null;
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    const [a, b] = ownerHashes(owner);
-    if (header[MAGIC] !== MAGIC_VALUE || header[OWNER_1] !== a || header[OWNER_2] !== b) return null;
-    return new SharedPieceCounts(buffer);
+    return ownedBy(buffer, owner, MAGIC_VALUE, HEADER_WORDS) ? new SharedPieceCounts(buffer) : null;
   }
 
   /** Returns the count of text[start, end) (its hash as from hashRange), or -1 when no thread has added it. */
