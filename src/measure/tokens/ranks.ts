@@ -62,8 +62,6 @@ function hashBytes(bytes: Uint8Array, start: number, end: number): number {
 
 /** The tokens of a vocabulary and their ranks, looked up by byte range. */
 export class RankTable {
-  /** Tokens in the table. */
-  readonly size: number;
   /** Rank of each two-byte token, indexed by first byte << 8 | second (NO_RANK where there is none). */
   readonly pairs: Float64Array;
   private readonly offsets: Int32Array;
@@ -76,7 +74,6 @@ export class RankTable {
     const header = new Int32Array(buffer, 0, HEADER_WORDS);
     const count = header[COUNT]!;
     const slotCount = 1 << header[SLOT_BITS]!;
-    this.size = count;
     this.mask = slotCount - 1;
     let at = HEADER_WORDS * 4;
     this.ranks = new Float64Array(buffer, at, count);
@@ -153,14 +150,7 @@ export class RankTable {
     }
   }
 
-  /** Returns the rank of a token given as a latin1 string (one char per byte), or undefined; for tests and tools. */
-  get(latin1: string): number | undefined {
-    const bytes = Uint8Array.from(latin1, (c) => c.charCodeAt(0));
-    const r = this.rank(bytes, 0, bytes.length);
-    return r === NO_RANK ? undefined : r;
-  }
-
-  /** Whether every single byte is a token. */
+  /** Returns the single bytes that are not tokens, as `0x..` strings (a byte-level vocabulary has none). */
   missingBytes(): string[] {
     const missing: string[] = [];
     const one = new Uint8Array(1);
