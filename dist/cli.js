@@ -7939,24 +7939,29 @@ function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
     sources: items.map((it) => ({ file: it.file, line: it.line }))
   };
 }
+function topPower(base, m) {
+  let top = 1;
+  for (let j = 1; j < m; j++) top = Math.imul(top, base);
+  return top;
+}
+function windowHash(words, from, m, base) {
+  let h = 0;
+  for (let j = from; j < from + m; j++) h = Math.imul(h, base) + words[j] | 0;
+  return h;
+}
+function slide(h, out, next, top, base) {
+  return Math.imul(h - Math.imul(out, top) | 0, base) + next | 0;
+}
 function rollGrams(w1, w2, count3, m, l1, l2) {
-  let top1 = 1;
-  let top2 = 1;
-  for (let j = 1; j < m; j++) {
-    top1 = Math.imul(top1, BASE_1);
-    top2 = Math.imul(top2, BASE_2);
-  }
-  let h1 = 0;
-  let h2 = 0;
-  for (let j = 0; j < m; j++) {
-    h1 = Math.imul(h1, BASE_1) + w1[j] | 0;
-    h2 = Math.imul(h2, BASE_2) + w2[j] | 0;
-  }
+  const top1 = topPower(BASE_1, m);
+  const top2 = topPower(BASE_2, m);
+  let h1 = windowHash(w1, 0, m, BASE_1);
+  let h2 = windowHash(w2, 0, m, BASE_2);
   l1[0] = mix323(h1 ^ m);
   l2[0] = mix32b4(h2 + m);
   for (let i = 1; i + m <= count3; i++) {
-    h1 = Math.imul(h1 - Math.imul(w1[i - 1], top1) | 0, BASE_1) + w1[i + m - 1] | 0;
-    h2 = Math.imul(h2 - Math.imul(w2[i - 1], top2) | 0, BASE_2) + w2[i + m - 1] | 0;
+    h1 = slide(h1, w1[i - 1], w1[i + m - 1], top1, BASE_1);
+    h2 = slide(h2, w2[i - 1], w2[i + m - 1], top2, BASE_2);
     l1[i] = mix323(h1 ^ m);
     l2[i] = mix32b4(h2 + m);
   }
@@ -7982,27 +7987,17 @@ function findContamination(index2, text) {
   let best = -1;
   for (const m of index2.lengths) {
     if (words < m) continue;
-    let top1 = 1;
-    let top2 = 1;
-    for (let j = 1; j < m; j++) {
-      top1 = Math.imul(top1, BASE_1);
-      top2 = Math.imul(top2, BASE_2);
-    }
-    let h1 = 0;
-    for (let j = 0; j < m; j++) h1 = Math.imul(h1, BASE_1) + w1[j] | 0;
+    const top1 = topPower(BASE_1, m);
+    const top2 = topPower(BASE_2, m);
+    let h1 = windowHash(w1, 0, m, BASE_1);
     let h2 = 0;
     let h2at = -2;
     for (let i = 0; i + m <= words; i++) {
-      if (i > 0) h1 = Math.imul(h1 - Math.imul(w1[i - 1], top1) | 0, BASE_1) + w1[i + m - 1] | 0;
+      if (i > 0) h1 = slide(h1, w1[i - 1], w1[i + m - 1], top1, BASE_1);
       const a = mix323(h1 ^ m);
       const bit = a >>> filterShift;
       if ((filter[bit >>> 5] & 1 << (bit & 31)) === 0) continue;
-      if (h2at === i - 1) {
-        h2 = Math.imul(h2 - Math.imul(w2[i - 1], top2) | 0, BASE_2) + w2[i + m - 1] | 0;
-      } else {
-        h2 = 0;
-        for (let j = 0; j < m; j++) h2 = Math.imul(h2, BASE_2) + w2[i + j] | 0;
-      }
+      h2 = h2at === i - 1 ? slide(h2, w2[i - 1], w2[i + m - 1], top2, BASE_2) : windowHash(w2, i, m, BASE_2);
       h2at = i;
       const b = mix32b4(h2 + m);
       let slot = a & mask;
@@ -17237,7 +17232,6 @@ var RankTable = class _RankTable {
     const header = new Int32Array(buffer, 0, HEADER_WORDS);
     const count3 = header[COUNT];
     const slotCount = 1 << header[SLOT_BITS];
-    this.size = count3;
     this.mask = slotCount - 1;
     let at2 = HEADER_WORDS * 4;
     this.ranks = new Float64Array(buffer, at2, count3);
@@ -17251,8 +17245,6 @@ var RankTable = class _RankTable {
     this.arena = new Uint8Array(buffer, at2, header[ARENA_BYTES]);
   }
   buffer;
-  /** Tokens in the table. */
-  size;
   /** Rank of each two-byte token, indexed by first byte << 8 | second (NO_RANK where there is none). */
   pairs;
   offsets;
@@ -17319,13 +17311,7 @@ var RankTable = class _RankTable {
       if (this.sameBytes(v - 1, bytes3, start, end)) return this.ranks[v - 1];
     }
   }
-  /** Returns the rank of a token given as a latin1 string (one char per byte), or undefined; for tests and tools. */
-  get(latin1) {
-    const bytes3 = Uint8Array.from(latin1, (c) => c.charCodeAt(0));
-    const r = this.rank(bytes3, 0, bytes3.length);
-    return r === NO_RANK ? void 0 : r;
-  }
-  /** Whether every single byte is a token. */
+  /** Returns the single bytes that are not tokens, as `0x..` strings (a byte-level vocabulary has none). */
   missingBytes() {
     const missing = [];
     const one = new Uint8Array(1);

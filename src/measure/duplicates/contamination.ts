@@ -153,26 +153,37 @@ export function buildEvalIndex(items: EvalItem[], ngram = DEFAULT_NGRAM): EvalIn
   };
 }
 
+/** base^(m − 1) mod 2^32: the weight of a window's first word, taken out as the window slides on. */
+function topPower(base: number, m: number): number {
+  let top = 1;
+  for (let j = 1; j < m; j++) top = Math.imul(top, base);
+  return top;
+}
+
+/** The polynomial hash mod 2^32 of the m word hashes words[from, from + m) in one lane. */
+function windowHash(words: Int32Array, from: number, m: number, base: number): number {
+  let h = 0;
+  for (let j = from; j < from + m; j++) h = (Math.imul(h, base) + words[j]!) | 0;
+  return h;
+}
+
+/** The next window's hash: `h` without its first word `out` (weighed by `top`), times the base, plus the new word `next`. */
+function slide(h: number, out: number, next: number, top: number, base: number): number {
+  return (Math.imul((h - Math.imul(out, top)) | 0, base) + next) | 0;
+}
+
 /** Writes the two-lane hash of every m-word window of the words w1/w2[0 .. count) into l1/l2 (count − m + 1 of them). */
 function rollGrams(w1: Int32Array, w2: Int32Array, count: number, m: number, l1: Int32Array, l2: Int32Array): void {
-  let top1 = 1;
-  let top2 = 1;
-  for (let j = 1; j < m; j++) {
-    top1 = Math.imul(top1, BASE_1);
-    top2 = Math.imul(top2, BASE_2);
-  }
-  let h1 = 0;
-  let h2 = 0;
-  for (let j = 0; j < m; j++) {
-    h1 = (Math.imul(h1, BASE_1) + w1[j]!) | 0;
-    h2 = (Math.imul(h2, BASE_2) + w2[j]!) | 0;
-  }
+  const top1 = topPower(BASE_1, m);
+  const top2 = topPower(BASE_2, m);
+  let h1 = windowHash(w1, 0, m, BASE_1);
+  let h2 = windowHash(w2, 0, m, BASE_2);
   // The window length is mixed in, so a short item's gram cannot equal a window of another length.
   l1[0] = mix32(h1 ^ m);
   l2[0] = mix32b(h2 + m);
   for (let i = 1; i + m <= count; i++) {
-    h1 = (Math.imul((h1 - Math.imul(w1[i - 1]!, top1)) | 0, BASE_1) + w1[i + m - 1]!) | 0;
-    h2 = (Math.imul((h2 - Math.imul(w2[i - 1]!, top2)) | 0, BASE_2) + w2[i + m - 1]!) | 0;
+    h1 = slide(h1, w1[i - 1]!, w1[i + m - 1]!, top1, BASE_1);
+    h2 = slide(h2, w2[i - 1]!, w2[i + m - 1]!, top2, BASE_2);
     l1[i] = mix32(h1 ^ m);
     l2[i] = mix32b(h2 + m);
   }
@@ -206,27 +217,17 @@ export function findContamination(index: EvalIndex, text: string): { file: strin
     // prefilter first; lane 2 is brought up to date only for the few windows that pass it
     // (rolled on from the previous window when that one passed too, else summed afresh:
     // the same value, since both are the polynomial mod 2^32).
-    let top1 = 1;
-    let top2 = 1;
-    for (let j = 1; j < m; j++) {
-      top1 = Math.imul(top1, BASE_1);
-      top2 = Math.imul(top2, BASE_2);
-    }
-    let h1 = 0;
-    for (let j = 0; j < m; j++) h1 = (Math.imul(h1, BASE_1) + w1[j]!) | 0;
+    const top1 = topPower(BASE_1, m);
+    const top2 = topPower(BASE_2, m);
+    let h1 = windowHash(w1, 0, m, BASE_1);
     let h2 = 0;
     let h2at = -2; // the window h2 belongs to
     for (let i = 0; i + m <= words; i++) {
-      if (i > 0) h1 = (Math.imul((h1 - Math.imul(w1[i - 1]!, top1)) | 0, BASE_1) + w1[i + m - 1]!) | 0;
+      if (i > 0) h1 = slide(h1, w1[i - 1]!, w1[i + m - 1]!, top1, BASE_1);
       const a = mix32(h1 ^ m);
       const bit = a >>> filterShift;
       if ((filter[bit >>> 5]! & (1 << (bit & 31))) === 0) continue;
-      if (h2at === i - 1) {
-        h2 = (Math.imul((h2 - Math.imul(w2[i - 1]!, top2)) | 0, BASE_2) + w2[i + m - 1]!) | 0;
-      } else {
-        h2 = 0;
-        for (let j = 0; j < m; j++) h2 = (Math.imul(h2, BASE_2) + w2[i + j]!) | 0;
-      }
+      h2 = h2at === i - 1 ? slide(h2, w2[i - 1]!, w2[i + m - 1]!, top2, BASE_2) : windowHash(w2, i, m, BASE_2);
       h2at = i;
       const b = mix32b(h2 + m);
       let slot = a & mask;
