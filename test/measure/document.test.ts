@@ -7,6 +7,7 @@ import type { LanguageSpec } from '../../src/policy/types.js';
 import { createMeasurer } from '../../src/measure/document.js';
 import { countAnomalies } from '../../src/measure/encoding.js';
 import { countWordsWithSegmenter } from '../../src/measure/words.js';
+import { v8ScriptCounts } from '../fixtures/v8-scripts.js';
 import { allUdhr, spread } from './corpora.js';
 
 const languages: LanguageSpec[] = [
@@ -15,15 +16,6 @@ const languages: LanguageSpec[] = [
 ];
 const measure = createMeasurer({ languages, detection: { minChars: 20 } });
 
-/** Characters of `text` V8 puts in each script (`\p{Script=…}`), for the scripts named. */
-function v8ScriptCounts(text: string, scripts: string[]): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const s of scripts) {
-    const n = text.match(new RegExp(`\\p{Script=${s}}`, 'gu'))?.length ?? 0;
-    if (n > 0) out[s] = n;
-  }
-  return out;
-}
 
 describe('sizes, words and scripts against outside references', () => {
   const samples = [

