@@ -18730,7 +18730,6 @@ async function measureCorpus(policy, opts, given = {}) {
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
     for (const w of early) void w.worker.terminate();
-    dropPrestartedWorker();
   }
 }
 function holdsAnything(dir) {
@@ -18853,6 +18852,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
       early,
       prepared.sharedCounts()
     );
+    dropPrestartedWorker();
     await Promise.all(pending);
   } else {
     dropPrestartedWorker();

@@ -202,7 +202,6 @@ export async function measureCorpus(
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
     for (const w of early) void w.worker.terminate();
-    dropPrestartedWorker();
   }
 }
 
@@ -365,6 +364,8 @@ export async function measureShards(
       early,
       prepared.sharedCounts(),
     );
+    // The pool takes the worker bin/sluice.js started when it needs one; when it did not, stop it.
+    dropPrestartedWorker();
     await Promise.all(pending);
   } else {
     // One thread does it all: a worker the command line started ahead is not needed.
