@@ -6921,9 +6921,6 @@ var MISS_WEIGHT = 0.9;
 var STEPS = 200;
 var BAND_KEY_BITS = 32;
 var WIDTHS = [4, 8, 16, 32];
-function candidateProbability(p, bands, rows) {
-  return 1 - Math.pow(1 - Math.pow(p, rows), bands);
-}
 function signatureBits(rows) {
   for (const w of WIDTHS) if (w * rows >= BAND_KEY_BITS) return w;
   return 32;
@@ -6941,17 +6938,23 @@ function lshBands(threshold, hashes) {
   if (known) return { ...known };
   let best = { bands: 1, rows: hashes };
   let bestCost = Infinity;
+  const h = 1 / STEPS;
+  const q = new Float64Array(STEPS);
+  const miss = new Float64Array(STEPS);
   for (let rows = 1; rows <= hashes; rows++) {
     const bits = signatureBits(rows);
+    for (let i = 0; i < STEPS; i++) {
+      q[i] = Math.pow(rowAgreement((i + 0.5) * h, bits), rows);
+      miss[i] = 1;
+    }
     for (let bands = 1; bands * rows <= hashes; bands++) {
       let falseArea = 0;
       let missArea = 0;
-      const h = 1 / STEPS;
       for (let i = 0; i < STEPS; i++) {
-        const s = (i + 0.5) * h;
-        const p = candidateProbability(rowAgreement(s, bits), bands, rows);
-        if (s < threshold) falseArea += p * h;
-        else missArea += (1 - p) * h;
+        const m = miss[i] * (1 - q[i]);
+        miss[i] = m;
+        if ((i + 0.5) * h < threshold) falseArea += (1 - m) * h;
+        else missArea += m * h;
       }
       const cost = (1 - MISS_WEIGHT) * falseArea + MISS_WEIGHT * missArea;
       if (cost < bestCost - 1e-12) {
