@@ -4065,14 +4065,14 @@ function schemaKeyIndex() {
   if (keyIndex) return keyIndex;
   keyIndex = /* @__PURE__ */ new Map();
   const defs = POLICY_SCHEMA.$defs ?? {};
-  const visit = (s, at2, depth) => {
+  const visit = (s, at, depth) => {
     if (!s || depth > 8) return;
-    if (typeof s.$ref === "string" && s.$ref.startsWith("#/$defs/")) visit(defs[s.$ref.slice(8)], at2, depth + 1);
+    if (typeof s.$ref === "string" && s.$ref.startsWith("#/$defs/")) visit(defs[s.$ref.slice(8)], at, depth + 1);
     for (const [k, sub] of Object.entries(s.properties ?? {})) {
       const list = keyIndex.get(k) ?? [];
-      list.push(at2);
+      list.push(at);
       keyIndex.set(k, list);
-      visit(sub, at2 ? `${at2}.${k}` : k, depth + 1);
+      visit(sub, at ? `${at}.${k}` : k, depth + 1);
     }
   };
   visit(POLICY_SCHEMA, "", 0);
@@ -5195,39 +5195,39 @@ function buildPolicy(value, opts, sink) {
   };
   return { policy, files };
 }
-function checkGlob(glob, at2, sink) {
+function checkGlob(glob, at, sink) {
   if (path.isAbsolute(glob) || /^[A-Za-z]:[\\/]/.test(glob)) {
-    sink.problem(at2, `\`${glob}\` is an absolute path; globs are relative to the root`);
+    sink.problem(at, `\`${glob}\` is an absolute path; globs are relative to the root`);
   } else if (/(^|\/)\.\.(\/|$)/.test(glob)) {
-    sink.problem(at2, `\`${glob}\` leaves the root; set \`root\` higher instead`);
+    sink.problem(at, `\`${glob}\` leaves the root; set \`root\` higher instead`);
   } else if (glob.startsWith("!")) {
-    sink.problem(at2, `\`${glob}\` starts with \`!\`; list files to leave out under \`corpus.exclude\``);
+    sink.problem(at, `\`${glob}\` starts with \`!\`; list files to leave out under \`corpus.exclude\``);
   }
 }
-function globList(v, at2, sink) {
+function globList(v, at, sink) {
   const list = asStrList(v) ?? [];
   const single = typeof v === "string";
-  list.forEach((g, i) => checkGlob(g, single ? at2 : [...at2, i], sink));
+  list.forEach((g, i) => checkGlob(g, single ? at : [...at, i], sink));
   return list;
 }
 function isDotPath(s) {
   return s.split(".").every((part) => part.length > 0);
 }
 function buildCorpus(c, sink) {
-  const at2 = (k) => ["corpus", k];
-  const include = globList(c.include, at2("include"), sink);
-  const exclude = globList(c.exclude, at2("exclude"), sink);
+  const at = (k) => ["corpus", k];
+  const include = globList(c.include, at("include"), sink);
+  const exclude = globList(c.exclude, at("exclude"), sink);
   const text = asStr(c.text) ?? "text";
-  if (!isDotPath(text)) sink.problem(at2("text"), `\`${text}\` is not a dot path such as \`text\` or \`meta.body\``);
+  if (!isDotPath(text)) sink.problem(at("text"), `\`${text}\` is not a dot path such as \`text\` or \`meta.body\``);
   const declared = asStr(c["declared-language"]);
   if (declared !== void 0 && !isDotPath(declared)) {
-    sink.problem(at2("declared-language"), `\`${declared}\` is not a dot path such as \`lang\` or \`meta.lang\``);
+    sink.problem(at("declared-language"), `\`${declared}\` is not a dot path such as \`lang\` or \`meta.lang\``);
   }
   const subset = asStr(c.subset);
   if (subset !== void 0) {
     const count3 = subset.split("{subset}").length - 1;
     if (count3 !== 1) {
-      sink.problem(at2("subset"), `must contain \`{subset}\` exactly once, found ${count3 === 0 ? "none" : `${count3} times`}`, {
+      sink.problem(at("subset"), `must contain \`{subset}\` exactly once, found ${count3 === 0 ? "none" : `${count3} times`}`, {
         ...count3 === 0 ? { suggestion: "for example `data/{subset}/**`" } : {}
       });
     }
@@ -5261,7 +5261,7 @@ function encodingSuggestion(enc) {
   const near = nearest(canonical, names);
   return near ? { suggestion: didYouMean(near) } : {};
 }
-function buildTokenizer(v, at2, root, files, sink) {
+function buildTokenizer(v, at, root, files, sink) {
   const t = asObj(v);
   if (!t) return void 0;
   const builtin = asStr(t.builtin);
@@ -5277,7 +5277,7 @@ function buildTokenizer(v, at2, root, files, sink) {
     if (/\.json$/i.test(file)) format = "tokenizer.json";
     else if (/\.tiktoken$/i.test(file)) format = "tiktoken";
     else {
-      sink.problem([...at2, "file"], `cannot tell the format of \`${file}\` from its name (.json or .tiktoken)`, {
+      sink.problem([...at, "file"], `cannot tell the format of \`${file}\` from its name (.json or .tiktoken)`, {
         suggestion: "set `format: tokenizer.json` or `format: tiktoken`"
       });
       return void 0;
@@ -5285,35 +5285,35 @@ function buildTokenizer(v, at2, root, files, sink) {
   } else return void 0;
   const pattern = asStr(t.pattern);
   if (format === "tokenizer.json" && pattern !== void 0) {
-    sink.problem([...at2, "pattern"], "`pattern` is only used with tiktoken rank files; a tokenizer.json carries its own pre-tokenizer", { part: "key" });
+    sink.problem([...at, "pattern"], "`pattern` is only used with tiktoken rank files; a tokenizer.json carries its own pre-tokenizer", { part: "key" });
   }
   if (format === "tiktoken") {
     if (pattern === void 0) {
-      sink.problem([...at2, "file"], "tiktoken rank files carry no split pattern; set `pattern` to a builtin whose pattern to use (e.g. `cl100k_base`) or to a regular expression", { part: "key" });
+      sink.problem([...at, "file"], "tiktoken rank files carry no split pattern; set `pattern` to a builtin whose pattern to use (e.g. `cl100k_base`) or to a regular expression", { part: "key" });
     } else if (!BUILTIN_TOKENIZERS.includes(pattern)) {
       try {
         new RegExp(pattern, "gu");
       } catch (e) {
         const near = nearest(pattern, BUILTIN_TOKENIZERS);
-        sink.problem([...at2, "pattern"], `neither a builtin name nor a valid regular expression: ${e.message}`, {
+        sink.problem([...at, "pattern"], `neither a builtin name nor a valid regular expression: ${e.message}`, {
           ...near ? { suggestion: didYouMean(near) } : {}
         });
       }
     }
   }
   const absPath = path.resolve(root, file);
-  files.push({ path: [...at2, "file"], what: "tokenizer file", file, absPath });
+  files.push({ path: [...at, "file"], what: "tokenizer file", file, absPath });
   return { kind: "file", file, absPath, format, ...format === "tiktoken" && pattern !== void 0 ? { pattern } : {} };
 }
 function buildLanguages(v, sink) {
   const out = [];
   const entries = Object.entries(asObj(v) ?? {});
   for (const [key, rawSpec] of entries) {
-    const at2 = ["languages", key];
+    const at = ["languages", key];
     const spec = asObj(rawSpec) ?? {};
     const r = resolveLanguageKey(key);
     if (!r.ok) {
-      sink.problem(at2, r.message, { part: "key", ...r.suggestion ? { suggestion: r.suggestion } : {} });
+      sink.problem(at, r.message, { part: "key", ...r.suggestion ? { suggestion: r.suggestion } : {} });
       continue;
     }
     const scripts = [];
@@ -5322,7 +5322,7 @@ function buildLanguages(v, sink) {
       if (typeof s !== "string" || s.length === 0) return;
       const found = lookUpScript(s);
       if (!found.ok) {
-        sink.problem([...at2, "scripts", i], found.message, found.suggestion ? { suggestion: found.suggestion } : {});
+        sink.problem([...at, "scripts", i], found.message, found.suggestion ? { suggestion: found.suggestion } : {});
         return;
       }
       for (const long of found.scripts) if (!scripts.includes(long)) scripts.push(long);
@@ -5331,10 +5331,10 @@ function buildLanguages(v, sink) {
       const fallback = r.subtagScripts ?? (Object.hasOwn(DEFAULT_SCRIPTS, r.iso6393) ? DEFAULT_SCRIPTS[r.iso6393] : void 0);
       if (fallback) scripts.push(...fallback);
       else {
-        sink.problem(at2, `no default script for \`${r.iso6393}\` (${r.name}); list its scripts, e.g. \`scripts: [Latin]\``, { part: "key" });
+        sink.problem(at, `no default script for \`${r.iso6393}\` (${r.name}); list its scripts, e.g. \`scripts: [Latin]\``, { part: "key" });
       }
     } else if (r.subtagScripts && scripts.length > 0 && !r.subtagScripts.every((s) => scripts.includes(s))) {
-      sink.warning([...at2, "scripts"], `the key says \`${r.scriptSubtag}\` (${r.subtagScripts.join(", ")}) but \`scripts\` lists ${scripts.join(", ")}; \`scripts\` is used`);
+      sink.warning([...at, "scripts"], `the key says \`${r.scriptSubtag}\` (${r.subtagScripts.join(", ")}) but \`scripts\` lists ${scripts.join(", ")}; \`scripts\` is used`);
     }
     const target = asNum(spec.target);
     out.push({
@@ -5483,7 +5483,7 @@ function buildMix(mix2, ctx) {
   }
   return rule;
 }
-function perLanguage(v, at2, ctx, read) {
+function perLanguage(v, at, ctx, read) {
   const out = {};
   const keys = ctx.languages.map((l) => l.key);
   for (const [key, x] of Object.entries(asObj(v) ?? {})) {
@@ -5491,7 +5491,7 @@ function perLanguage(v, at2, ctx, read) {
       const r = resolveLanguageKey(key);
       const same = r.ok ? ctx.languages.find((l) => l.iso6393 === r.iso6393 || l.covers.includes(r.iso6393)) : void 0;
       const near = same?.key ?? nearest(key, keys);
-      ctx.sink.problem([...at2, key], `\`${key}\` is not a language of this policy (keys under \`languages\`: ${keys.map((k) => `\`${k}\``).join(", ") || "none"})`, {
+      ctx.sink.problem([...at, key], `\`${key}\` is not a language of this policy (keys under \`languages\`: ${keys.map((k) => `\`${k}\``).join(", ") || "none"})`, {
         part: "key",
         ...near ? { suggestion: didYouMean(near) } : {}
       });
@@ -5503,30 +5503,30 @@ function perLanguage(v, at2, ctx, read) {
   return out;
 }
 function buildFertility(f, ctx) {
-  const at2 = ["rules", "fertility"];
+  const at = ["rules", "fertility"];
   if (!ctx.tokenizerSet) {
-    ctx.sink.problem(at2, "fertility is measured with the model's tokenizer, and no `tokenizer` is set", {
+    ctx.sink.problem(at, "fertility is measured with the model's tokenizer, and no `tokenizer` is set", {
       part: "key",
       suggestion: "set `tokenizer: { builtin: o200k_base }` or `tokenizer: { file: ... }`"
     });
   }
-  const max = perLanguage(f.max, [...at2, "max"], ctx, (x) => asNum(x));
+  const max = perLanguage(f.max, [...at, "max"], ctx, (x) => asNum(x));
   for (const [key, m] of Object.entries(max)) {
     if (m < 1) {
-      ctx.sink.warning([...at2, "max", key], `${fmt(m)} tokens per word: every word is at least one token unless the tokenizer has multi-word tokens, so this likely always fails`);
+      ctx.sink.warning([...at, "max", key], `${fmt(m)} tokens per word: every word is at least one token unless the tokenizer has multi-word tokens, so this likely always fails`);
     }
   }
-  const maxContinued = perLanguage(f["max-continued"], [...at2, "max-continued"], ctx, (x) => asNum(x));
-  const wordLists = perLanguage(f["word-lists"], [...at2, "word-lists"], ctx, (x, key) => {
+  const maxContinued = perLanguage(f["max-continued"], [...at, "max-continued"], ctx, (x) => asNum(x));
+  const wordLists = perLanguage(f["word-lists"], [...at, "word-lists"], ctx, (x, key) => {
     const file = asStr(x);
     if (file === void 0) return void 0;
     const absPath = path.resolve(ctx.root, file);
-    ctx.files.push({ path: [...at2, "word-lists", key], what: "word list", file, absPath });
+    ctx.files.push({ path: [...at, "word-lists", key], what: "word list", file, absPath });
     return { file, absPath };
   });
   const maxRegression = asNum(f["max-regression"]);
   if (Object.keys(max).length === 0 && Object.keys(maxContinued).length === 0 && maxRegression === void 0) {
-    ctx.sink.warning(at2, "sets no limit (`max`, `max-continued` or `max-regression`), so it only reports", { part: "key" });
+    ctx.sink.warning(at, "sets no limit (`max`, `max-continued` or `max-regression`), so it only reports", { part: "key" });
   }
   return { max, ...maxRegression !== void 0 ? { maxRegression } : {}, maxContinued, wordLists };
 }
@@ -5557,11 +5557,11 @@ function parsePolicyDetailed(text, file, opts = {}) {
   const doc = readPolicyYaml(text);
   const problems = [];
   const warnings = [];
-  const make = (at2, position, message, suggestion) => ({
+  const make = (at, position, message, suggestion) => ({
     file,
     line: position.line,
     column: position.column,
-    path: formatPath(at2),
+    path: formatPath(at),
     message,
     ...suggestion ? { suggestion } : {}
   });
@@ -5602,8 +5602,8 @@ function parsePolicyDetailed(text, file, opts = {}) {
       ...opts.defaultRoot !== void 0 ? { defaultRoot: path2.resolve(opts.defaultRoot) } : {}
     },
     {
-      problem: (at2, message, o = {}) => problems.push(make(at2, doc.locate(at2, o.part ?? "value"), message, o.suggestion)),
-      warning: (at2, message, o = {}) => warnings.push(make(at2, doc.locate(at2, o.part ?? "value"), message, o.suggestion))
+      problem: (at, message, o = {}) => problems.push(make(at, doc.locate(at, o.part ?? "value"), message, o.suggestion)),
+      warning: (at, message, o = {}) => warnings.push(make(at, doc.locate(at, o.part ?? "value"), message, o.suggestion))
     }
   );
   if (problems.length > 0) return failed();
@@ -5617,16 +5617,16 @@ function parsePolicyDetailed(text, file, opts = {}) {
 
 // src/policy/load.ts
 async function nearestGitRoot(dir) {
-  let at2 = path3.resolve(dir);
+  let at = path3.resolve(dir);
   for (; ; ) {
     try {
-      await stat(path3.join(at2, ".git"));
-      return at2;
+      await stat(path3.join(at, ".git"));
+      return at;
     } catch {
     }
-    const up = path3.dirname(at2);
-    if (up === at2) return void 0;
-    at2 = up;
+    const up = path3.dirname(at);
+    if (up === at) return void 0;
+    at = up;
   }
 }
 async function kindOfPath(p) {
@@ -5660,8 +5660,8 @@ async function loadPolicy(file, overrides = {}) {
     if (overrides.root !== void 0) {
       problems.push({ file, path: "root", message: `the root given in place of the policy's (${policy.root}) ${why}` });
     } else {
-      const at2 = parsed.locate(["root"], "value");
-      problems.push({ file, line: at2.line, column: at2.column, path: "root", message: `the root directory ${policy.root} ${why}` });
+      const at = parsed.locate(["root"], "value");
+      problems.push({ file, line: at.line, column: at.column, path: "root", message: `the root directory ${policy.root} ${why}` });
     }
   }
   for (const ref of parsed.files) {
@@ -6984,14 +6984,14 @@ var KIND_EMPTY = 0;
 var KIND_WORDLESS = 1;
 var KIND_FULL = 2;
 function readLocationRecords(bytes3, start, end, documents, visit, fail) {
-  let at2 = start;
+  let at = start;
   let line = 0;
   const varint = () => {
     let v = 0;
     let scale = 1;
     for (let shift = 0; shift < 49; shift += 7) {
-      if (at2 >= end) fail("location stream ends inside a record");
-      const byte = bytes3[at2++];
+      if (at >= end) fail("location stream ends inside a record");
+      const byte = bytes3[at++];
       v += (byte & 127) * scale;
       if (byte < 128) return v;
       scale *= 128;
@@ -7003,7 +7003,7 @@ function readLocationRecords(bytes3, start, end, documents, visit, fail) {
     line += z % 2 === 0 ? z / 2 : -(z + 1) / 2;
     visit(i, line, varint());
   }
-  if (at2 !== end) fail(`${end - at2} bytes left after the last location record`);
+  if (at !== end) fail(`${end - at} bytes left after the last location record`);
 }
 function signatureBytes(hashes, bits) {
   return Math.ceil(hashes * bits / 8);
@@ -7178,12 +7178,12 @@ var Pages = class {
   }
   /** Copies everything written into `dest` at `offset`. */
   copyTo(dest, offset) {
-    let at2 = offset;
+    let at = offset;
     for (const page of this.full) {
-      dest.set(page, at2);
-      at2 += page.length;
+      dest.set(page, at);
+      at += page.length;
     }
-    dest.set(this.data.subarray(0, this.at), at2);
+    dest.set(this.data.subarray(0, this.at), at);
   }
   /** Returns everything written as one array of its own. */
   toArray() {
@@ -7332,38 +7332,38 @@ var DuplicateIndexBuilder = class {
     view.setFloat32(12, this.options.threshold, true);
     view.setUint32(16, n, true);
     view.setUint32(20, this.stream.length, true);
-    let at2 = HEADER_BYTES;
-    this.exact.copyTo(blob, at2);
-    at2 += this.exact.length;
-    this.signatures.copyTo(blob, at2);
-    at2 += this.signatures.length;
-    this.stream.copyTo(blob, at2);
+    let at = HEADER_BYTES;
+    this.exact.copyTo(blob, at);
+    at += this.exact.length;
+    this.signatures.copyTo(blob, at);
+    at += this.signatures.length;
+    this.stream.copyTo(blob, at);
     view.setUint32(24, checksum32(blob, HEADER_BYTES, total), true);
     return blob;
   }
 };
-function writeU32(d, at2, v) {
-  d[at2] = v & 255;
-  d[at2 + 1] = v >>> 8 & 255;
-  d[at2 + 2] = v >>> 16 & 255;
-  d[at2 + 3] = v >>> 24;
+function writeU32(d, at, v) {
+  d[at] = v & 255;
+  d[at + 1] = v >>> 8 & 255;
+  d[at + 2] = v >>> 16 & 255;
+  d[at + 3] = v >>> 24;
 }
-function packSignature(values, bits, d, at2) {
+function packSignature(values, bits, d, at) {
   const k = values.length;
   if (bits === 4) {
     let i = 0;
-    for (; i + 1 < k; i += 2) d[at2++] = values[i] & 15 | (values[i + 1] & 15) << 4;
-    if (i < k) d[at2] = values[i] & 15;
+    for (; i + 1 < k; i += 2) d[at++] = values[i] & 15 | (values[i + 1] & 15) << 4;
+    if (i < k) d[at] = values[i] & 15;
   } else if (bits === 8) {
-    for (let i = 0; i < k; i++) d[at2 + i] = values[i] & 255;
+    for (let i = 0; i < k; i++) d[at + i] = values[i] & 255;
   } else if (bits === 16) {
     for (let i = 0; i < k; i++) {
       const v = values[i];
-      d[at2 + 2 * i] = v & 255;
-      d[at2 + 2 * i + 1] = v >>> 8 & 255;
+      d[at + 2 * i] = v & 255;
+      d[at + 2 * i + 1] = v >>> 8 & 255;
     }
   } else {
-    for (let i = 0; i < k; i++) writeU32(d, at2 + 4 * i, values[i]);
+    for (let i = 0; i < k; i++) writeU32(d, at + 4 * i, values[i]);
   }
 }
 
@@ -7443,7 +7443,7 @@ function joinDuplicates(shards, opts) {
   const hi = new Int32Array(n);
   indexes.forEach((s, si) => {
     const view = views[si];
-    for (let i = 0, at2 = s.layout.exactOffset; i < s.layout.documents; i++, at2 += EXACT_BYTES) hi[s.start + i] = view.getInt32(at2, true);
+    for (let i = 0, at = s.layout.exactOffset; i < s.layout.documents; i++, at += EXACT_BYTES) hi[s.start + i] = view.getInt32(at, true);
   });
   const loOf = (g) => {
     const si = shardOf(starts2, g);
@@ -7641,10 +7641,10 @@ function joinDuplicates(shards, opts) {
     first: where2.get(c.first),
     size: c.size,
     copies: copies[idx].map((g) => {
-      const at2 = where2.get(g);
-      if (c.kind === "exact") return { ...at2 };
+      const at = where2.get(g);
+      if (c.kind === "exact") return { ...at };
       const of = linkNear(link, g);
-      return { ...at2, jaccard: round4(sig.jaccard(g, of)), of: where2.get(of) };
+      return { ...at, jaccard: round4(sig.jaccard(g, of)), of: where2.get(of) };
     }),
     copiesOmitted: c.size - 1 - copies[idx].length
   }));
@@ -8055,10 +8055,10 @@ var ResultCache = class {
     return join(this.dir, `${settingsId}-${contentId}.json`);
   }
   /** Returns the cached result for this content under these settings, or undefined. */
-  async get(contentId, settingsId, at2) {
+  async get(contentId, settingsId, at) {
     try {
       const r = shardResultFromStored(JSON.parse(await readFile2(this.file(contentId, settingsId), "utf8")));
-      if (!r || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at2.encoding || r.format !== at2.format) {
+      if (!r || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at.encoding || r.format !== at.format) {
         this.misses += 1;
         return void 0;
       }
@@ -8067,9 +8067,9 @@ var ResultCache = class {
         this.misses += 1;
         return void 0;
       }
-      const moved = { ...r, path: at2.path };
-      if (at2.subset === void 0) delete moved.subset;
-      else moved.subset = at2.subset;
+      const moved = { ...r, path: at.path };
+      if (at.subset === void 0) delete moved.subset;
+      else moved.subset = at.subset;
       return moved;
     } catch {
       this.misses += 1;
@@ -10012,8 +10012,8 @@ var FRANC_RANGE_CLASSES = [
 
 // src/measure/range-table.ts
 function lazyRangeTable(starts2, values) {
-  let table2;
-  return () => table2 ??= rangeTable(starts2, values);
+  let table3;
+  return () => table3 ??= rangeTable(starts2, values);
 }
 function rangeTable(starts2, values) {
   const bmp = new Uint8Array(65536);
@@ -10065,7 +10065,7 @@ var CLASS_EXPRESSIONS = FRANC_CLASS_MASKS.map(
   (mask) => FRANC_EXPRESSIONS.map((_, e) => e).filter((e) => (mask & 1 << e) !== 0)
 );
 function topExpression(text, end) {
-  const table2 = francClasses();
+  const table3 = francClasses();
   classCounts.fill(0);
   for (let i = 0; i < end; i++) {
     const unit = text.charCodeAt(i);
@@ -10078,7 +10078,7 @@ function topExpression(text, end) {
         continue;
       }
     }
-    const cls = table2[unit];
+    const cls = table3[unit];
     classCounts[cls] = classCounts[cls] + 1;
   }
   expressionCounts.fill(0);
@@ -10093,10 +10093,10 @@ function topExpression(text, end) {
 }
 var LATIN = FRANC_EXPRESSIONS.indexOf("Latin");
 var ASCII_SHORTCUT = (() => {
-  const table2 = francClasses();
+  const table3 = francClasses();
   for (let u = 0; u < 128; u++) {
     const isLetter = (u | 32) - 97 >>> 0 < 26;
-    const mask = FRANC_CLASS_MASKS[table2[u]];
+    const mask = FRANC_CLASS_MASKS[table3[u]];
     if (mask !== (isLetter ? 1 << LATIN : 0)) return false;
   }
   return LATIN > 0;
@@ -10189,9 +10189,9 @@ function invert(group, languages) {
   const entries = new Int32Array(offsets2[internCount]);
   perLanguage2.forEach((rankOf, l) => {
     for (const [id, rank2] of rankOf) {
-      const at2 = fill[id];
-      fill[id] = at2 + 1;
-      entries[at2] = l << 16 | rank2 + 1;
+      const at = fill[id];
+      fill[id] = at + 1;
+      entries[at] = l << 16 | rank2 + 1;
     }
   });
   return { languages, offsets: offsets2, entries };
@@ -13842,7 +13842,7 @@ function astralScriptId(cp) {
 }
 function scriptProfile(text) {
   const counts = new Int32Array(SCRIPT_NAMES.length);
-  const table2 = bmpScriptIds();
+  const table3 = bmpScriptIds();
   for (let i = 0; i < text.length; i++) {
     const unit = text.charCodeAt(i);
     let id;
@@ -13851,8 +13851,8 @@ function scriptProfile(text) {
       if (low >= 56320 && low <= 57343) {
         id = astralScriptId((unit - 55296 << 10) + (low - 56320) + 65536);
         i++;
-      } else id = table2[unit];
-    } else id = table2[unit];
+      } else id = table3[unit];
+    } else id = table3[unit];
     counts[id] = counts[id] + 1;
   }
   return profileFromCounts(counts);
@@ -16478,22 +16478,22 @@ var segmenter;
 var classes;
 function classTable2() {
   if (classes) return classes;
-  const table2 = new Uint8Array(65536);
+  const table3 = new Uint8Array(65536);
   for (let r = 0; r < WORD_BREAK_RANGE_STARTS.length; r++) {
     const end = WORD_BREAK_RANGE_STARTS[r + 1] ?? 65536;
-    table2.fill(WORD_BREAK_RANGE_VALUES[r], WORD_BREAK_RANGE_STARTS[r], end);
+    table3.fill(WORD_BREAK_RANGE_VALUES[r], WORD_BREAK_RANGE_STARTS[r], end);
   }
   let probe = "";
   for (let cp = 0; cp < 65536; cp++) {
-    const cls = table2[cp] & CLASS_MASK;
+    const cls = table3[cp] & CLASS_MASK;
     if (cls !== OTHER3 && cls !== NEEDS_SEGMENTER) probe += String.fromCharCode(cp);
   }
   for (const m of probe.matchAll(new RegExp("\\P{Assigned}", "gu"))) {
     const cp = m[0].charCodeAt(0);
-    table2[cp] = table2[cp] & ~CLASS_MASK | NEEDS_SEGMENTER;
+    table3[cp] = table3[cp] & ~CLASS_MASK | NEEDS_SEGMENTER;
   }
-  classes = table2;
-  return table2;
+  classes = table3;
+  return table3;
 }
 function wordSegmenter() {
   segmenter ??= new Intl.Segmenter(SEGMENTER_LOCALE, { granularity: "word" });
@@ -16511,13 +16511,13 @@ function characterInfo() {
   if (infoTable) return infoTable;
   const scripts = bmpScriptIds();
   const words = classTable2();
-  const table2 = new Uint32Array(65536);
+  const table3 = new Uint32Array(65536);
   for (let cp = 0; cp < 65536; cp++) {
     const lead = cp >= MOJIBAKE_LEAD_FIRST && cp <= MOJIBAKE_LEAD_LAST;
-    table2[cp] = scripts[cp] | (cp < 128 ? 1 : cp < 2048 ? 2 : 3) << UTF8_SHIFT | (lead ? MOJIBAKE_LEAD : needsCloserLook(cp) ? CLOSER_LOOK : 0) | words[cp] << CLASS_SHIFT;
+    table3[cp] = scripts[cp] | (cp < 128 ? 1 : cp < 2048 ? 2 : 3) << UTF8_SHIFT | (lead ? MOJIBAKE_LEAD : needsCloserLook(cp) ? CLOSER_LOOK : 0) | words[cp] << CLASS_SHIFT;
   }
-  infoTable = table2;
-  return table2;
+  infoTable = table3;
+  return table3;
 }
 var CharacterTally = class {
   /** Characters per Script id (index into SCRIPT_NAMES), Common, Inherited and Unknown included. */
@@ -16530,14 +16530,14 @@ var CharacterTally = class {
   anomalies = emptyAnomalyCounts();
   marks = emptyMarkCounts();
 };
-function closerLook(unit, at2, anomalies, marks) {
-  const kind = anomalyOf(unit, at2 === 0);
+function closerLook(unit, at, anomalies, marks) {
+  const kind = anomalyOf(unit, at === 0);
   if (kind !== null) anomalies[kind]++;
   const mark = markOf(unit);
   if (mark !== null) marks[mark]++;
 }
 function countCharactersFrom(text, from, tally2, bytes3, flags) {
-  const table2 = characterInfo();
+  const table3 = characterInfo();
   const { counts, anomalies, marks } = tally2;
   const n = text.length;
   let pairs = 0;
@@ -16559,7 +16559,7 @@ function countCharactersFrom(text, from, tally2, bytes3, flags) {
         continue;
       }
     }
-    const info = table2[unit];
+    const info = table3[unit];
     const id = info & SCRIPT_BITS;
     counts[id] = counts[id] + 1;
     bytes3 += info >>> UTF8_SHIFT & 3;
@@ -16576,7 +16576,7 @@ function finishTally(text, tally2, bytes3, chars, flags) {
 var unusedTally = new CharacterTally();
 var offsets = new Int32Array(1024);
 function scan(text, record, tally2) {
-  const table2 = characterInfo();
+  const table3 = characterInfo();
   const into = tally2 ?? unusedTally;
   const { counts, anomalies, marks } = into;
   const n = text.length;
@@ -16596,7 +16596,7 @@ function scan(text, record, tally2) {
   let connectors = 0;
   for (let i = 0; i < n; i++) {
     const unit = text.charCodeAt(i);
-    const info = table2[unit];
+    const info = table3[unit];
     let cls = info >>> CLASS_SHIFT;
     if (cls >= NEEDS_SEGMENTER) {
       if ((cls & EXTENDED_PICTOGRAPHIC) !== 0 && i > 0 && text.charCodeAt(i - 1) === ZWJ) return stop(text, i, tally2, bytes3, flags, out);
@@ -16673,7 +16673,7 @@ function scan(text, record, tally2) {
     }
     const same = last << CLASS_SHIFT;
     while (i + 1 < n) {
-      const next = table2[text.charCodeAt(i + 1)];
+      const next = table3[text.charCodeAt(i + 1)];
       const run2 = next & RUN_MASK;
       if (run2 !== same && run2 !== IGNORABLE_RUN) break;
       const nextId = next & SCRIPT_BITS;
@@ -16693,9 +16693,9 @@ function scan(text, record, tally2) {
   if (tally2 !== null) finishTally(text, tally2, bytes3, n, flags);
   return count3;
 }
-function stop(text, at2, tally2, bytes3, flags, out) {
+function stop(text, at, tally2, bytes3, flags, out) {
   offsets = out;
-  if (tally2 !== null) countCharactersFrom(text, at2, tally2, bytes3, flags);
+  if (tally2 !== null) countCharactersFrom(text, at, tally2, bytes3, flags);
   return -1;
 }
 function wordLike(last, hasCore, connectors, trailingIgnorables) {
@@ -17236,16 +17236,16 @@ var RankTable = class _RankTable {
     const count3 = header[COUNT];
     const slotCount = 1 << header[SLOT_BITS];
     this.mask = slotCount - 1;
-    let at2 = HEADER_WORDS * 4;
-    this.ranks = new Float64Array(buffer, at2, count3);
-    at2 += count3 * 8;
-    this.pairs = new Float64Array(buffer, at2, 1 << 16);
-    at2 += (1 << 16) * 8;
-    this.offsets = new Int32Array(buffer, at2, count3 + 1);
-    at2 += (count3 + 1) * 4;
-    this.slots = new Int32Array(buffer, at2, slotCount);
-    at2 += slotCount * 4;
-    this.arena = new Uint8Array(buffer, at2, header[ARENA_BYTES]);
+    let at = HEADER_WORDS * 4;
+    this.ranks = new Float64Array(buffer, at, count3);
+    at += count3 * 8;
+    this.pairs = new Float64Array(buffer, at, 1 << 16);
+    at += (1 << 16) * 8;
+    this.offsets = new Int32Array(buffer, at, count3 + 1);
+    at += (count3 + 1) * 4;
+    this.slots = new Int32Array(buffer, at, slotCount);
+    at += slotCount * 4;
+    this.arena = new Uint8Array(buffer, at, header[ARENA_BYTES]);
   }
   buffer;
   /** Rank of each two-byte token, indexed by first byte << 8 | second (NO_RANK where there is none). */
@@ -17271,13 +17271,13 @@ var RankTable = class _RankTable {
     header[SLOT_BITS] = bits;
     header[ARENA_BYTES] = arenaBytes;
     stampOwner(header, owner, MAGIC_VALUE);
-    const table2 = new _RankTable(buffer);
-    table2.ranks.set(ranks.subarray(0, count3));
-    table2.offsets.set(offsets2.subarray(0, count3 + 1));
-    table2.arena.set(arena.subarray(0, arenaBytes));
-    table2.pairs.fill(NO_RANK);
-    const { slots, mask } = table2;
-    const own = table2.arena;
+    const table3 = new _RankTable(buffer);
+    table3.ranks.set(ranks.subarray(0, count3));
+    table3.offsets.set(offsets2.subarray(0, count3 + 1));
+    table3.arena.set(arena.subarray(0, arenaBytes));
+    table3.pairs.fill(NO_RANK);
+    const { slots, mask } = table3;
+    const own = table3.arena;
     for (let i = 0; i < count3; i++) {
       const start = offsets2[i];
       const end = offsets2[i + 1];
@@ -17288,15 +17288,15 @@ var RankTable = class _RankTable {
           slots[slot] = i + 1;
           break;
         }
-        if (table2.sameBytes(v - 1, own, start, end)) {
+        if (table3.sameBytes(v - 1, own, start, end)) {
           duplicate(i);
           break;
         }
         slot = slot + 1 & mask;
       }
-      if (end - start === 2) table2.pairs[own[start] << 8 | own[start + 1]] = ranks[i];
+      if (end - start === 2) table3.pairs[own[start] << 8 | own[start + 1]] = ranks[i];
     }
-    return table2;
+    return table3;
   }
   sameBytes(token, bytes3, start, end) {
     const from = this.offsets[token];
@@ -17361,7 +17361,7 @@ var BASE64_VALUE = (() => {
   for (let i = 0; i < alphabet.length; i++) v[alphabet.charCodeAt(i)] = i;
   return v;
 })();
-function decodeBase64(text, start, end, out, at2) {
+function decodeBase64(text, start, end, out, at) {
   const length = end - start;
   let pad = 0;
   if (length > 0 && text.charCodeAt(end - 1) === 61) pad = length > 1 && text.charCodeAt(end - 2) === 61 ? 2 : 1;
@@ -17377,10 +17377,10 @@ function decodeBase64(text, start, end, out, at2) {
     held += 6;
     if (held >= 8) {
       held -= 8;
-      out[at2++] = bits >>> held & 255;
+      out[at++] = bits >>> held & 255;
     }
   }
-  return at2;
+  return at;
 }
 function parseRankFile(text, file, owner = file) {
   const list = new TokenList();
@@ -17409,12 +17409,12 @@ function parseRankFile(text, file, owner = file) {
     list.close(end, Number(rank2));
     lineOf.push(i + 1);
   }
-  const table2 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, (t) => {
+  const table3 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, (t) => {
     const raw = lines[lineOf[t] - 1].split(" ")[0];
     throw new TokenizerError("load", file, `token ${quote(raw)} is listed twice`, { line: lineOf[t] });
   });
-  requireEveryByte(table2, file);
-  return table2;
+  requireEveryByte(table3, file);
+  return table3;
 }
 var BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
 var RANK = /^(?:0|[1-9][0-9]*)$/;
@@ -17444,14 +17444,14 @@ function parseBuiltinRanks(bpeRanks, name, owner = `builtin:${name}`) {
     }
     p = lineEnd + 1;
   }
-  const table2 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, () => {
+  const table3 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, () => {
     throw new TokenizerError("load", name, "builtin rank table is damaged (a token is listed twice)");
   });
-  requireEveryByte(table2, name);
-  return table2;
+  requireEveryByte(table3, name);
+  return table3;
 }
-function requireEveryByte(table2, file) {
-  const missing = table2.missingBytes();
+function requireEveryByte(table3, file) {
+  const missing = table3.missingBytes();
   if (missing.length > 0) {
     const shown = missing.slice(0, 5).join(", ") + (missing.length > 5 ? ", ..." : "");
     throw new TokenizerError(
@@ -17486,10 +17486,10 @@ var SharedPieceCounts = class _SharedPieceCounts {
     this.units = header[UNITS];
     const slotCount = 1 << header[SLOT_BITS2];
     this.mask = slotCount - 1;
-    let at2 = HEADER_WORDS2 * 4;
-    this.slots = new Int32Array(buffer, at2, slotCount * SLOT_WORDS);
-    at2 += slotCount * SLOT_WORDS * 4;
-    this.arena = new Uint16Array(buffer, at2, this.units);
+    let at = HEADER_WORDS2 * 4;
+    this.slots = new Int32Array(buffer, at, slotCount * SLOT_WORDS);
+    at += slotCount * SLOT_WORDS * 4;
+    this.arena = new Uint16Array(buffer, at, this.units);
   }
   buffer;
   header;
@@ -17527,10 +17527,10 @@ var SharedPieceCounts = class _SharedPieceCounts {
       const meta = Atomics.load(slots, s);
       if (meta === 0) return -1;
       if (meta >>> 16 !== length || slots[s + 1] !== hash2) continue;
-      let at2 = slots[s + 2];
+      let at = slots[s + 2];
       let k = start;
-      while (k < end && arena[at2] === text.charCodeAt(k)) {
-        at2++;
+      while (k < end && arena[at] === text.charCodeAt(k)) {
+        at++;
         k++;
       }
       if (k === end) return meta & 65535;
@@ -17543,15 +17543,15 @@ var SharedPieceCounts = class _SharedPieceCounts {
     const header = this.header;
     if (Atomics.load(header, USED) >= this.capacity || Atomics.load(header, UNITS_USED) + length > this.units) return false;
     if (Atomics.add(header, USED, 1) >= this.capacity) return false;
-    const at2 = Atomics.add(header, UNITS_USED, length);
-    if (at2 + length > this.units) return false;
+    const at = Atomics.add(header, UNITS_USED, length);
+    if (at + length > this.units) return false;
     const { slots, arena, mask } = this;
-    for (let k = 0; k < length; k++) arena[at2 + k] = text.charCodeAt(start + k);
+    for (let k = 0; k < length; k++) arena[at + k] = text.charCodeAt(start + k);
     for (let i = hash2 & mask; ; i = i + 1 & mask) {
       const s = i * SLOT_WORDS;
       if (Atomics.compareExchange(slots, s, 0, BUSY) !== 0) continue;
       slots[s + 1] = hash2;
-      slots[s + 2] = at2;
+      slots[s + 2] = at;
       Atomics.store(slots, s, length << 16 | count3);
       return true;
     }
@@ -17562,30 +17562,54 @@ var SharedPieceCounts = class _SharedPieceCounts {
   }
 };
 
-// src/measure/tokens/ascii-split.ts
+// src/measure/tokens/split.ts
+var LETTER = 1;
+var NUMBER = 2;
+var SPACE2 = 4;
+var UPPERISH = 8;
+var LOWERISH = 16;
+var OTHER4 = 32;
+var PREFIX = 64;
+var SURROGATE = 128;
 var APOSTROPHE = 39;
-var SPACE2 = 32;
+var SPACE_UNIT = 32;
 var SLASH = 47;
-var LOWER = 1;
-var UPPER = 2;
-var DIGIT = 4;
-var SPACE_CLASS = 8;
-var NEWLINE2 = 16;
-var CLASS = new Uint8Array(128);
-for (let c = 0; c < 128; c++) {
-  if (c >= 97 && c <= 122) CLASS[c] = LOWER;
-  else if (c >= 65 && c <= 90) CLASS[c] = UPPER;
-  else if (c >= 48 && c <= 57) CLASS[c] = DIGIT;
-  else if (c === SPACE2 || c >= 9 && c <= 13) CLASS[c] = SPACE_CLASS | (c === 10 || c === 13 ? NEWLINE2 : 0);
+var table2;
+function unitClasses() {
+  if (table2) return table2;
+  const classes2 = new Uint8Array(65536);
+  const units = new Uint16Array(65536);
+  for (let u = 0; u < 65536; u++) units[u] = u >= 55296 && u <= 57343 ? 0 : u;
+  let all = "";
+  for (let u = 0; u < 65536; u += 4096) all += String.fromCharCode(...units.subarray(u, u + 4096));
+  const mark = (source, bit) => {
+    for (const m of all.matchAll(new RegExp(`(?:${source})+`, "gu"))) {
+      for (let u = m.index, end = m.index + m[0].length; u < end; u++) classes2[u] = classes2[u] | bit;
+    }
+  };
+  mark(String.raw`\p{L}`, LETTER);
+  mark(String.raw`\p{N}`, NUMBER);
+  mark(String.raw`\s`, SPACE2);
+  mark(String.raw`[\p{Lu}\p{Lt}\p{Lm}\p{Lo}\p{M}]`, UPPERISH);
+  mark(String.raw`[\p{Ll}\p{Lm}\p{Lo}\p{M}]`, LOWERISH);
+  for (let u = 0; u < 65536; u++) {
+    if (u >= 55296 && u <= 57343) {
+      classes2[u] = SURROGATE;
+      continue;
+    }
+    const c = classes2[u];
+    if ((c & (LETTER | NUMBER | SPACE2)) === 0) classes2[u] = c | OTHER4;
+    if ((c & (LETTER | NUMBER)) === 0 && u !== 10 && u !== 13) classes2[u] = classes2[u] | PREFIX;
+  }
+  return table2 = classes2;
 }
-var LETTER = LOWER | UPPER;
-var isOther = (k) => k === 0;
-var END = -1;
-var at = (text, i) => i < text.length ? text.charCodeAt(i) : END;
+function classAt(C, text, i) {
+  return i < text.length ? C[text.charCodeAt(i)] : 0;
+}
 function contraction(text, i, caseless) {
-  if (at(text, i) !== APOSTROPHE) return 0;
-  let a = at(text, i + 1);
-  let b = at(text, i + 2);
+  if (text.charCodeAt(i) !== APOSTROPHE) return 0;
+  let a = text.charCodeAt(i + 1);
+  let b = text.charCodeAt(i + 2);
   if (caseless) {
     if (a >= 65 && a <= 90) a += 32;
     if (b >= 65 && b <= 90) b += 32;
@@ -17594,143 +17618,144 @@ function contraction(text, i, caseless) {
   if (a === 114 && b === 101 || a === 118 && b === 101 || a === 108 && b === 108) return 3;
   return 0;
 }
-function run(text, i, mask) {
+function run(C, text, i, mask) {
   const n = text.length;
   while (i < n) {
-    const c = text.charCodeAt(i);
-    if (c >= 128) return -1;
-    if ((CLASS[c] & mask) === 0) return i;
+    const c = C[text.charCodeAt(i)];
+    if ((c & mask) === 0) return (c & SURROGATE) === 0 ? i : -1;
     i++;
   }
   return i;
 }
-function otherRun(text, i) {
+function spaceRun(C, text, i) {
   const n = text.length;
-  while (i < n) {
-    const c = text.charCodeAt(i);
-    if (c >= 128) return -1;
-    if (!isOther(CLASS[c])) return i;
-    i++;
-  }
+  while (i < n && (C[text.charCodeAt(i)] & SPACE2) !== 0) i++;
   return i;
 }
 function trailing(text, i, slash) {
   for (; ; ) {
-    const c = at(text, i);
+    const c = text.charCodeAt(i);
     if (c === 10 || c === 13 || slash && c === SLASH) i++;
     else return i;
   }
 }
-function spaceRunWithNewlines(text, p, q) {
+function digits(C, text, p) {
+  let e = p + 1;
+  while (e < p + 3) {
+    const d = classAt(C, text, e);
+    if ((d & NUMBER) === 0) return (d & SURROGATE) === 0 ? e : -1;
+    e++;
+  }
+  return e;
+}
+function spaceRunWithNewlines(C, text, p, q) {
   for (let i = q - 1; i >= p; i--) {
-    if ((CLASS[text.charCodeAt(i)] & NEWLINE2) !== 0) return i + 1;
+    const u = text.charCodeAt(i);
+    if (u === 10 || u === 13) return i + 1;
   }
   if (q === text.length || q - p === 1) return q;
   return q - 1;
 }
 var splitGpt2 = (text, p) => {
-  const c = text.charCodeAt(p);
-  if (c >= 128) return -1;
-  const k = CLASS[c];
-  if (c === APOSTROPHE) {
+  const C = unitClasses();
+  const c = C[text.charCodeAt(p)];
+  if ((c & SURROGATE) !== 0) return -1;
+  if (text.charCodeAt(p) === APOSTROPHE) {
     const len = contraction(text, p, false);
     if (len > 0) return p + len;
   }
   let s = p;
-  if (c === SPACE2) {
-    const d = at(text, p + 1);
-    if (d >= 128) return -1;
-    if (d !== END && (CLASS[d] & SPACE_CLASS) === 0) s = p + 1;
+  let k = c;
+  if (text.charCodeAt(p) === SPACE_UNIT) {
+    const d = classAt(C, text, p + 1);
+    if ((d & SURROGATE) !== 0) return -1;
+    if ((d & (LETTER | NUMBER | OTHER4)) !== 0) {
+      s = p + 1;
+      k = d;
+    }
   }
-  const first = s === p ? k : CLASS[text.charCodeAt(s)];
-  if (s > p || (k & SPACE_CLASS) === 0) {
-    if ((first & LETTER) !== 0) return run(text, s, LETTER);
-    if ((first & DIGIT) !== 0) return run(text, s, DIGIT);
-    return otherRun(text, s);
-  }
-  const q = run(text, p, SPACE_CLASS);
-  if (q < 0) return -1;
+  if ((k & LETTER) !== 0) return run(C, text, s, LETTER);
+  if ((k & NUMBER) !== 0) return run(C, text, s, NUMBER);
+  if ((k & OTHER4) !== 0) return run(C, text, s, OTHER4);
+  const q = spaceRun(C, text, p);
   if (q === text.length || q - p === 1) return q;
   return q - 1;
 };
-function o200kLetters(text, s) {
-  const u = run(text, s, UPPER);
+function upperThenLower(C, text, s) {
+  const u = run(C, text, s, UPPERISH);
   if (u < 0) return -1;
-  const l = run(text, u, LOWER);
-  if (l < 0) return -1;
-  return l + contraction(text, l, true);
+  const next = classAt(C, text, u);
+  if ((next & LOWERISH) !== 0) return run(C, text, u, LOWERISH);
+  if ((next & SURROGATE) !== 0) return -1;
+  for (let j = u - 1; j >= s; j--) if ((C[text.charCodeAt(j)] & LOWERISH) !== 0) return j + 1;
+  return -2;
+}
+function upperAndLower(C, text, s) {
+  const first = classAt(C, text, s);
+  if ((first & UPPERISH) === 0) return (first & SURROGATE) === 0 ? -2 : -1;
+  const u = run(C, text, s, UPPERISH);
+  return u < 0 ? -1 : run(C, text, u, LOWERISH);
+}
+function o200kWord(C, text, p, prefixed, letterish) {
+  let e = -2;
+  if (prefixed) e = upperThenLower(C, text, p + 1);
+  if (e === -2 && letterish) e = upperThenLower(C, text, p);
+  if (e === -2 && prefixed) e = upperAndLower(C, text, p + 1);
+  if (e === -2 && letterish) e = upperAndLower(C, text, p);
+  return e < 0 ? e : e + contraction(text, e, true);
 }
 var splitO200k = (text, p) => {
-  const c = text.charCodeAt(p);
-  if (c >= 128) return -1;
-  const k = CLASS[c];
-  if ((k & LETTER) !== 0) return o200kLetters(text, p);
-  if (k === DIGIT) {
-    let e = p + 1;
-    while (e < p + 3) {
-      const d = at(text, e);
-      if (d >= 128) return -1;
-      if (d === END || CLASS[d] !== DIGIT) break;
-      e++;
+  const C = unitClasses();
+  const c = C[text.charCodeAt(p)];
+  if ((c & SURROGATE) !== 0) return -1;
+  const letterish = (c & (UPPERISH | LOWERISH)) !== 0;
+  if (letterish && (c & PREFIX) === 0) {
+    const e = o200kWord(C, text, p, false, true);
+    return e < 0 ? -1 : e;
+  }
+  if ((c & NUMBER) !== 0) return digits(C, text, p);
+  if ((c & PREFIX) !== 0) {
+    const e = o200kWord(C, text, p, true, letterish);
+    if (e !== -2) return e;
+    if (text.charCodeAt(p) === SPACE_UNIT) {
+      const d = classAt(C, text, p + 1);
+      if ((d & SURROGATE) !== 0) return -1;
+      if ((d & OTHER4) !== 0) {
+        const o = run(C, text, p + 1, OTHER4);
+        return o < 0 ? -1 : trailing(text, o, true);
+      }
     }
-    return e;
-  }
-  if (isOther(k)) {
-    const d = at(text, p + 1);
-    if (d >= 128) return -1;
-    if (d !== END && (CLASS[d] & LETTER) !== 0) return o200kLetters(text, p + 1);
-    const e = otherRun(text, p);
-    return e < 0 ? -1 : trailing(text, e, true);
-  }
-  const q = run(text, p, SPACE_CLASS);
-  if (q < 0) return -1;
-  if (q - p === 1 && (k & NEWLINE2) === 0 && q < text.length) {
-    const d = text.charCodeAt(q);
-    if ((CLASS[d] & LETTER) !== 0) return o200kLetters(text, q);
-    if (c === SPACE2 && isOther(CLASS[d])) {
-      const e = otherRun(text, q);
-      return e < 0 ? -1 : trailing(text, e, true);
+    if ((c & OTHER4) !== 0) {
+      const o = run(C, text, p, OTHER4);
+      return o < 0 ? -1 : trailing(text, o, true);
     }
   }
-  return spaceRunWithNewlines(text, p, q);
+  return spaceRunWithNewlines(C, text, p, spaceRun(C, text, p));
 };
 var splitCl100k = (text, p) => {
-  const c = text.charCodeAt(p);
-  if (c >= 128) return -1;
-  const k = CLASS[c];
-  if (c === APOSTROPHE) {
+  const C = unitClasses();
+  const c = C[text.charCodeAt(p)];
+  if ((c & SURROGATE) !== 0) return -1;
+  if (text.charCodeAt(p) === APOSTROPHE) {
     const len = contraction(text, p, true);
     if (len > 0) return p + len;
   }
-  if ((k & LETTER) !== 0) return run(text, p, LETTER);
-  if (k === DIGIT) {
-    let e = p + 1;
-    while (e < p + 3) {
-      const d = at(text, e);
-      if (d >= 128) return -1;
-      if (d === END || CLASS[d] !== DIGIT) break;
-      e++;
+  if ((c & LETTER) !== 0) return run(C, text, p, LETTER);
+  if ((c & NUMBER) !== 0) return digits(C, text, p);
+  if ((c & PREFIX) !== 0) {
+    const d = classAt(C, text, p + 1);
+    if ((d & SURROGATE) !== 0) return -1;
+    if ((d & LETTER) !== 0) return run(C, text, p + 1, LETTER);
+    if (text.charCodeAt(p) === SPACE_UNIT && (d & OTHER4) !== 0) {
+      const o = run(C, text, p + 1, OTHER4);
+      return o < 0 ? -1 : trailing(text, o, false);
     }
-    return e;
-  }
-  if (isOther(k)) {
-    const d = at(text, p + 1);
-    if (d >= 128) return -1;
-    if (d !== END && (CLASS[d] & LETTER) !== 0) return run(text, p + 1, LETTER);
-    const e = otherRun(text, p);
-    return e < 0 ? -1 : trailing(text, e, false);
-  }
-  const q = run(text, p, SPACE_CLASS);
-  if (q < 0) return -1;
-  if (q - p === 1 && (k & NEWLINE2) === 0 && q < text.length) {
-    const d = text.charCodeAt(q);
-    if ((CLASS[d] & LETTER) !== 0) return run(text, q, LETTER);
-    if (c === SPACE2 && isOther(CLASS[d])) {
-      const e = otherRun(text, q);
-      return e < 0 ? -1 : trailing(text, e, false);
+    if ((c & OTHER4) !== 0) {
+      const o = run(C, text, p, OTHER4);
+      return o < 0 ? -1 : trailing(text, o, false);
     }
   }
-  return spaceRunWithNewlines(text, p, q);
+  return spaceRunWithNewlines(C, text, p, spaceRun(C, text, p));
 };
 
 // src/measure/tokens/bpe.ts
@@ -17786,20 +17811,20 @@ function bytePairCount(text, start, end, ranks) {
   let parts = n;
   while (parts > 1) {
     let best = NO_RANK;
-    let at2 = -1;
+    let at = -1;
     for (let i = 0; i < parts - 1; i++) {
       const r = pr[i];
       if (r < best) {
         best = r;
-        at2 = i;
+        at = i;
       }
     }
-    if (at2 < 0) break;
-    s.copyWithin(at2 + 1, at2 + 2, parts + 1);
-    pr.copyWithin(at2, at2 + 1, parts - 1);
+    if (at < 0) break;
+    s.copyWithin(at + 1, at + 2, parts + 1);
+    pr.copyWithin(at, at + 1, parts - 1);
     parts--;
-    if (at2 < parts - 1) pr[at2] = ranks.rank(b, s[at2], s[at2 + 2]);
-    if (at2 > 0) pr[at2 - 1] = ranks.rank(b, s[at2 - 1], s[at2 + 1]);
+    if (at < parts - 1) pr[at] = ranks.rank(b, s[at], s[at + 2]);
+    if (at > 0) pr[at - 1] = ranks.rank(b, s[at - 1], s[at + 1]);
   }
   return parts;
 }
@@ -17808,7 +17833,7 @@ function bytePairCount(text, start, end, ranks) {
 var FRONT_ENTRIES = 16384;
 var FRONT_MASK = FRONT_ENTRIES - 1;
 var FRONT_UNITS = 8;
-function asciiSplitterFor(pattern) {
+function splitterFor(pattern) {
   if (pattern === BUILTIN_PATTERNS.gpt2) return splitGpt2;
   if (pattern === BUILTIN_PATTERNS.cl100k_base) return splitCl100k;
   if (pattern === BUILTIN_PATTERNS.o200k_base) return splitO200k;
@@ -17818,7 +17843,7 @@ function createRankCounter(options) {
   const { ranks, label } = options;
   const split = new RegExp(options.pattern, "gu");
   const sticky = new RegExp(options.pattern, "guy");
-  const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
+  const splitter = options.splitter === false ? null : splitterFor(options.pattern);
   let shared2 = options.shared === void 0 ? SharedPieceCounts.create(options.id) : options.shared;
   let sharedHits = 0;
   const cache = new PieceCache(options.generationSize);
@@ -17835,10 +17860,10 @@ function createRankCounter(options) {
       const f = hash2 & FRONT_MASK;
       const meta = frontSlots[f * 2];
       if (meta >>> 16 === length && frontSlots[f * 2 + 1] === hash2) {
-        let at3 = f * FRONT_UNITS;
+        let at2 = f * FRONT_UNITS;
         let k = start;
-        while (k < end && frontKeys[at3] === text.charCodeAt(k)) {
-          at3++;
+        while (k < end && frontKeys[at2] === text.charCodeAt(k)) {
+          at2++;
           k++;
         }
         if (k === end) {
@@ -17849,8 +17874,8 @@ function createRankCounter(options) {
       const n = lookUp(text, start, end, hash2);
       frontSlots[f * 2] = length << 16 | n;
       frontSlots[f * 2 + 1] = hash2;
-      const at2 = f * FRONT_UNITS;
-      for (let k = 0; k < length; k++) frontKeys[at2 + k] = text.charCodeAt(start + k);
+      const at = f * FRONT_UNITS;
+      for (let k = 0; k < length; k++) frontKeys[at + k] = text.charCodeAt(start + k);
       return n;
     }
     return lookUp(text, start, end, hash2);
@@ -17887,12 +17912,12 @@ function createRankCounter(options) {
     return tokens;
   };
   const countText = (text, pieces) => {
-    if (ascii === null) return countByRegex(text, 0, pieces);
+    if (splitter === null) return countByRegex(text, 0, pieces);
     let tokens = 0;
     const n = text.length;
     let p = 0;
     while (p < n) {
-      let e = ascii(text, p);
+      let e = splitter(text, p);
       if (e < 0) {
         sticky.lastIndex = p;
         if (!sticky.test(text) || sticky.lastIndex <= p) return tokens + countByRegex(text, p, pieces);
@@ -17938,9 +17963,9 @@ function createRankCounter(options) {
     },
     shareTables: () => ({ counts: shared2?.buffer ?? null, ranks: ranks.buffer }),
     adoptTables: (tables2) => {
-      const table2 = tables2.counts === null ? null : SharedPieceCounts.attach(tables2.counts, options.id);
-      if (table2 === null) return false;
-      shared2 = table2;
+      const table3 = tables2.counts === null ? null : SharedPieceCounts.attach(tables2.counts, options.id);
+      if (table3 === null) return false;
+      shared2 = table3;
       return true;
     }
   };
@@ -18036,9 +18061,9 @@ function resolvePattern(pattern, file) {
 }
 function lazyCounter(id, label, newTable, make) {
   let real;
-  let table2;
+  let table3;
   let adoptedRanks = null;
-  const tableOf = () => table2 === void 0 ? table2 = newTable() : table2;
+  const tableOf = () => table3 === void 0 ? table3 = newTable() : table3;
   const get = () => real ??= make(tableOf(), adoptedRanks);
   return {
     id,
@@ -18058,7 +18083,7 @@ function lazyCounter(id, label, newTable, make) {
       const counts = tables2.counts === null ? null : SharedPieceCounts.attach(tables2.counts, id);
       const ranks = tables2.ranks === null ? null : RankTable.attach(tables2.ranks, id);
       if (counts === null || ranks === null) return false;
-      table2 = counts;
+      table3 = counts;
       adoptedRanks = ranks;
       return true;
     }
@@ -18345,8 +18370,8 @@ async function prepareAnalyzers(policy) {
       const tables2 = {};
       for (const role of ["main", "baseline"]) {
         try {
-          const table2 = counters[role]?.shareTables?.();
-          if (table2) tables2[role] = table2;
+          const table3 = counters[role]?.shareTables?.();
+          if (table3) tables2[role] = table3;
         } catch {
         }
       }
@@ -18354,8 +18379,8 @@ async function prepareAnalyzers(policy) {
     },
     adoptCounts(tables2) {
       for (const role of ["main", "baseline"]) {
-        const table2 = tables2[role];
-        if (table2) counters[role]?.adoptTables?.(table2);
+        const table3 = tables2[role];
+        if (table3) counters[role]?.adoptTables?.(table3);
       }
     },
     settingsId,
@@ -19071,8 +19096,8 @@ function percent(x) {
 function count2(n) {
   return n === null || n === void 0 ? "\u2013" : n.toLocaleString("en-US");
 }
-function fixed(x, digits = 2) {
-  return x === null || x === void 0 ? "\u2013" : x.toFixed(digits);
+function fixed(x, digits2 = 2) {
+  return x === null || x === void 0 ? "\u2013" : x.toFixed(digits2);
 }
 function points(x) {
   if (x === null || x === void 0) return "\u2013";

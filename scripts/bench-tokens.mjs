@@ -35,7 +35,7 @@ if (caseArg < 0) {
       add(`sluice ${name}, first pass`, corpus, ours.first);
       add(`sluice ${name}, second pass`, corpus, ours.second, same(ours.second.total, ours.first.total));
       const regex = run('sluice-regex-only', name, corpus);
-      add(`  same, regex split only (no ASCII splitter), first pass`, corpus, regex.first, same(regex.first.total, ours.first.total));
+      add(`  same, regex split only (no hand-written splitter), first pass`, corpus, regex.first, same(regex.first.total, ours.first.total));
       add(`  same, regex split only, second pass`, corpus, regex.second);
       if (name === 'o200k_base') fullTotals.push(ours.first.total);
     }
@@ -102,7 +102,7 @@ if (kind === 'js-tiktoken') {
   if (kind === 'sluice') counter = await loadTokenizer({ kind: 'builtin', name });
   else {
     const ranks = (await import(`js-tiktoken/ranks/${name}`)).default;
-    counter = createRankCounter({ id: name, label: name, ranks: parseBuiltinRanks(ranks.bpe_ranks, name), pattern: ranks.pat_str, asciiSplitter: false });
+    counter = createRankCounter({ id: name, label: name, ranks: parseBuiltinRanks(ranks.bpe_ranks, name), pattern: ranks.pat_str, splitter: false });
   }
   const count = (d) => counter.count(d).tokens;
   if (kind === 'sluice') {

@@ -2,9 +2,9 @@
 //
 // js-tiktoken's encode splits the text with the pattern regex and BPE-encodes each
 // match on its own, so count(text) = Σ count(match) exactly; the per-match count is
-// cached. For the builtin patterns a hand-written splitter (ascii-split.ts) finds the
-// matches in ASCII stretches and the regex takes over for each piece that touches
-// another character. Special-token strings in the text count as ordinary text, like
+// cached. For the builtin patterns a hand-written splitter (split.ts) finds the
+// matches in the BMP and the regex takes over for each piece that touches a
+// character outside it. Special-token strings in the text count as ordinary text, like
 // `encode(text, [], [])`: corpus text that happens to contain "<|endoftext|>" is text.
 //
 // countWithPieces (builtin patterns only) also records the pieces, so that a word whose
@@ -16,7 +16,7 @@
 // one piece. A user's pattern may have lookaround, so rank files with one are measured
 // word by word. test/measure/tokens-fertility.test.ts compares both on Brown and UDHR.
 
-import { splitCl100k, splitGpt2, splitO200k, type AsciiSplitter } from './ascii-split.js';
+import { splitCl100k, splitGpt2, splitO200k, type PieceSplitter } from './split.js';
 import { bytePairCount } from './bpe.js';
 import { hashRange, MAX_CACHED_PIECE_LENGTH, PieceCache } from './cache.js';
 import { SharedPieceCounts } from './shared-counts.js';
@@ -33,8 +33,8 @@ export interface RankCounterOptions {
   /** The split regex source, compiled with flags `gu` as js-tiktoken does. */
   pattern: string;
   generationSize?: number;
-  /** Use the hand-written ASCII splitter when the pattern is a builtin's (default true; off to measure the regex alone). */
-  asciiSplitter?: boolean;
+  /** Use the hand-written splitter when the pattern is a builtin's (default true; off to measure the regex alone). */
+  splitter?: boolean;
   /** The shared table of piece counts to use first (another thread's, or one made by the caller); default: a new one of DEFAULT_SHARED_ENTRIES; null: none. */
   shared?: SharedPieceCounts | null;
 }
@@ -45,7 +45,7 @@ const FRONT_MASK = FRONT_ENTRIES - 1;
 const FRONT_UNITS = 8;
 
 /** Returns the hand-written splitter equivalent to a pattern, or null when there is none. */
-export function asciiSplitterFor(pattern: string): AsciiSplitter | null {
+export function splitterFor(pattern: string): PieceSplitter | null {
   if (pattern === BUILTIN_PATTERNS.gpt2) return splitGpt2;
   if (pattern === BUILTIN_PATTERNS.cl100k_base) return splitCl100k;
   if (pattern === BUILTIN_PATTERNS.o200k_base) return splitO200k;
@@ -57,7 +57,7 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
   const { ranks, label } = options;
   const split = new RegExp(options.pattern, 'gu');
   const sticky = new RegExp(options.pattern, 'guy');
-  const ascii = options.asciiSplitter === false ? null : asciiSplitterFor(options.pattern);
+  const splitter = options.splitter === false ? null : splitterFor(options.pattern);
   // Pieces are looked up in the shared table first (filled by every thread of a pooled run),
   // then, once that is full, in this thread's own bounded cache.
   let shared = options.shared === undefined ? SharedPieceCounts.create(options.id) : options.shared;
@@ -148,12 +148,12 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
   };
 
   const countText = (text: string, pieces: PieceList | null): number => {
-    if (ascii === null) return countByRegex(text, 0, pieces);
+    if (splitter === null) return countByRegex(text, 0, pieces);
     let tokens = 0;
     const n = text.length;
     let p = 0;
     while (p < n) {
-      let e = ascii(text, p);
+      let e = splitter(text, p);
       if (e < 0) {
         // Sticky test() instead of exec: the same match (the builtin patterns match at every
         // position, never empty) without a match array and substring per piece.
