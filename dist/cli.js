@@ -17580,8 +17580,7 @@ function unitClasses() {
   const classes2 = new Uint8Array(65536);
   const units = new Uint16Array(65536);
   for (let u = 0; u < 65536; u++) units[u] = u >= 55296 && u <= 57343 ? 0 : u;
-  let all = "";
-  for (let u = 0; u < 65536; u += 4096) all += String.fromCharCode(...units.subarray(u, u + 4096));
+  const all = new TextDecoder("utf-16le").decode(units);
   const mark = (source, bit) => {
     for (const m of all.matchAll(new RegExp(`(?:${source})+`, "gu"))) {
       for (let u = m.index, end = m.index + m[0].length; u < end; u++) classes2[u] = classes2[u] | bit;
