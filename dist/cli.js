@@ -6434,7 +6434,7 @@ var TextSink = class extends AccountingSink {
 };
 
 // src/results/cache.ts
-import { createHash as createHash2 } from "node:crypto";
+import { createHash as createHash3 } from "node:crypto";
 import { mkdir, readFile as readFile2, rename, writeFile } from "node:fs/promises";
 import { join } from "node:path";
 
@@ -6471,9 +6471,6 @@ function finishExact(h1, h2, length, out) {
   h2 = h2 + h1 | 0;
   out.exactHigh = h1 >>> 0;
   out.exactLow = h2 >>> 0;
-}
-function hex64(hi, lo) {
-  return (hi >>> 0).toString(16).padStart(8, "0") + (lo >>> 0).toString(16).padStart(8, "0");
 }
 
 // src/measure/duplicates/minhash.ts
@@ -7855,6 +7852,7 @@ var TopClusters = class {
 };
 
 // src/measure/duplicates/contamination.ts
+import { createHash as createHash2 } from "node:crypto";
 var mix323 = mix32;
 var mix32b4 = mix32b;
 var DEFAULT_NGRAM2 = 13;
@@ -7863,7 +7861,13 @@ var BASE_2 = 1481765933;
 var LOAD = 0.5;
 var FILTER_BITS_PER_GRAM = 16;
 var MAX_FILTER_LOG = 24;
-var INDEX_VERSION = 1;
+var INDEX_VERSION = 2;
+function evalSetId(items, ngram = DEFAULT_NGRAM2) {
+  const h = createHash2("sha256");
+  h.update(`sluice eval index v${INDEX_VERSION} n=${ngram} items=${items.length}\0`);
+  for (const item of items) h.update(`${item.file}\0${item.line}\0${item.text}\0`);
+  return h.digest("hex").slice(0, 16);
+}
 function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
   if (!Number.isInteger(ngram) || ngram < 1) throw new RangeError(`contamination: ngram must be a positive integer, got ${ngram}`);
   const buf = wordBuffer(2);
@@ -7872,22 +7876,9 @@ function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
   let total = 0;
   let shortItems = 0;
   let emptyItems = 0;
-  let id1 = Math.imul(2654435769 ^ INDEX_VERSION, 16777619) ^ ngram;
-  let id2 = Math.imul(2135587861 ^ INDEX_VERSION, 1540483477) ^ ngram;
-  const fold2 = (x) => {
-    id1 = Math.imul(id1 ^ x, 16777619);
-    id1 = id1 << 13 | id1 >>> 19;
-    id2 = Math.imul(id2 ^ x, 1540483477);
-    id2 = id2 << 11 | id2 >>> 21;
-  };
   items.forEach((item2, idx) => {
     if (typeof item2?.text !== "string") throw new TypeError(`contamination: item ${idx} (${item2?.file}:${item2?.line}) has no text`);
     const words = hashWords(prepareText(item2.text), buf);
-    for (let i = 0; i < item2.file.length; i++) fold2(item2.file.charCodeAt(i));
-    fold2(65534);
-    fold2(item2.line);
-    for (let i = 0; i < words; i++) fold2(buf.lane1[i]);
-    fold2(65535);
     if (words === 0) {
       emptyItems++;
       grams.push({ l1: new Int32Array(0), l2: new Int32Array(0), count: 0 });
@@ -7931,7 +7922,7 @@ function buildEvalIndex(items, ngram = DEFAULT_NGRAM2) {
     }
   });
   return {
-    id: hex64(mix323(id1 ^ items.length), mix32b4(id2 + items.length)),
+    id: evalSetId(items, ngram),
     ngram,
     items: items.length,
     grams: distinct,
@@ -8034,7 +8025,7 @@ function shardResultFromStored(value) {
 
 // src/results/cache.ts
 function settingsIdOf(settings) {
-  return createHash2("sha256").update(canonicalJson(settings)).digest("hex").slice(0, 16);
+  return createHash3("sha256").update(canonicalJson(settings)).digest("hex").slice(0, 16);
 }
 function canonicalJson(value) {
   return JSON.stringify(value, (_key, v) => {
@@ -8088,11 +8079,11 @@ var ResultCache = class {
 };
 
 // src/results/scan.ts
-import { createHash as createHash3 } from "node:crypto";
+import { createHash as createHash4 } from "node:crypto";
 import { createReadStream as createReadStream2 } from "node:fs";
 import { PassThrough } from "node:stream";
 async function contentIdOf(ref) {
-  const hash2 = createHash3("sha256");
+  const hash2 = createHash4("sha256");
   const stream = ref.open?.() ?? createReadStream2(ref.absPath);
   for await (const chunk of stream) hash2.update(chunk);
   return hash2.digest("hex");
@@ -8265,7 +8256,7 @@ async function scanShard(ref, settings, analyzers, onRead) {
   const started = performance.now();
   const cutoff = await cutoffOf(ref, settings);
   const fold2 = new ShardFold(settings, analyzers, cutoff);
-  const hash2 = createHash3("sha256");
+  const hash2 = createHash4("sha256");
   const pace = onRead ? (bytes3) => {
     onRead(bytes3);
     return void 0;
@@ -8289,7 +8280,7 @@ async function scanShardInBatches(ref, settings, analyzers, measure, plan) {
   const started = performance.now();
   const cutoff = await cutoffOf(ref, settings);
   const fold2 = new ShardFold(settings, analyzers, cutoff);
-  const hash2 = createHash3("sha256");
+  const hash2 = createHash4("sha256");
   const pending = [];
   const done = /* @__PURE__ */ new Map();
   let handedOut = 0;
@@ -13910,7 +13901,7 @@ function createLanguageDetector(languages, detection) {
   const scriptsOfKey = new Map(languages.map((spec) => [spec.key, spec.scripts]));
   const keyOfLowerKey = new Map(languages.map((spec) => [spec.key.toLowerCase(), spec.key]));
   const routes = /* @__PURE__ */ new Map();
-  const francKnows = new Set(francLanguages());
+  let francKnows;
   const declaredCache = /* @__PURE__ */ new Map();
   const routeOf = (script) => {
     const cached = routes.get(script);
@@ -13918,7 +13909,9 @@ function createLanguageDetector(languages, detection) {
     const listing = languages.filter((spec) => spec.scripts.includes(script));
     const candidates = new Set(MAJOR_LANGUAGES[script] ?? []);
     for (const spec of listing) for (const code of [spec.iso6393, ...spec.covers]) candidates.add(code);
-    const labellable = [...candidates].filter((code) => francKnows.has(code));
+    francKnows ??= new Set(francLanguages());
+    const known = francKnows;
+    const labellable = [...candidates].filter((code) => known.has(code));
     let route = null;
     if (labellable.length > 1) route = { labeller: createFrancLabeller(labellable, 1) };
     else if (listing.length > 0) route = { direct: listing[0].iso6393 };
@@ -16822,7 +16815,7 @@ function createMeasurer(settings) {
 }
 
 // src/measure/tokens/load.ts
-import { createHash as createHash4 } from "node:crypto";
+import { createHash as createHash5 } from "node:crypto";
 import { readFile as readFile3 } from "node:fs/promises";
 
 // src/measure/tokens/errors.ts
@@ -18018,7 +18011,7 @@ async function loadTokenizer(spec, options = {}) {
     const why = code === "ENOENT" ? `no such file (${spec.absPath})` : `cannot read ${spec.absPath}: ${cause.message}`;
     throw new TokenizerError("load", spec.file, why, { cause });
   }
-  const digest = createHash4("sha256").update(bytes3).digest("hex");
+  const digest = createHash5("sha256").update(bytes3).digest("hex");
   let text;
   try {
     text = new TextDecoder("utf-8", { fatal: true }).decode(bytes3);
@@ -18056,7 +18049,7 @@ function resolvePattern(pattern, file) {
   } catch (cause) {
     throw new TokenizerError("load", file, `split pattern is not a valid regular expression: ${cause.message}`, { cause });
   }
-  return { pattern: name, patternId: `sha256:${createHash4("sha256").update(name).digest("hex").slice(0, 16)}` };
+  return { pattern: name, patternId: `sha256:${createHash5("sha256").update(name).digest("hex").slice(0, 16)}` };
 }
 function lazyCounter(id, label, newTable, make) {
   let real;
@@ -18319,7 +18312,8 @@ async function prepareAnalyzers(policy) {
   }
   const dupRule = policy.rules.duplicates;
   const dupOptions = dupRule ? duplicateOptionsFrom(dupRule) : void 0;
-  let evalIndex;
+  let evalItems;
+  let evalId;
   let evalFiles = [];
   if (policy.rules.contamination) {
     const rule = policy.rules.contamination;
@@ -18332,7 +18326,8 @@ async function prepareAnalyzers(policy) {
       const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
       if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
     }
-    evalIndex = buildEvalIndex(items, rule.ngram);
+    evalItems = items;
+    evalId = evalSetId(items, rule.ngram);
     evalFiles = found.shards.map((s) => s.path);
   }
   const settingsId = settingsIdOf({
@@ -18344,7 +18339,7 @@ async function prepareAnalyzers(policy) {
     tokenizer: main2?.id ?? null,
     baseline: baseline?.id ?? null,
     duplicates: dupOptions ?? null,
-    eval: evalIndex?.id ?? null,
+    eval: evalId ?? null,
     // Only when set, so results measured without sampling keep their cache key.
     ...policy.sampling ? { sampling: policy.sampling } : {}
   });
@@ -18358,10 +18353,12 @@ async function prepareAnalyzers(policy) {
       return out;
     };
   }
-  if (dupOptions) analyzers.duplicates = () => new DuplicateIndexBuilder(dupOptions, { words: evalIndex !== void 0 });
-  if (evalIndex) {
-    const idx = evalIndex;
-    analyzers.contamination = (text) => findContamination(idx, text);
+  if (dupOptions) analyzers.duplicates = () => new DuplicateIndexBuilder(dupOptions, { words: evalItems !== void 0 });
+  if (evalItems && policy.rules.contamination) {
+    const items = evalItems;
+    const ngram = policy.rules.contamination.ngram;
+    let index2;
+    analyzers.contamination = (text) => findContamination(index2 ??= buildEvalIndex(items, ngram), text);
   }
   const counters = { main: main2, baseline };
   return {
@@ -18411,8 +18408,8 @@ async function prepareAnalyzers(policy) {
         corpus.duplicates = summarizeDuplicates(findings, policy.sampling ? [...keys, "other", UNSAMPLED_LANGUAGE] : keys);
         if (findings.againstExisting) corpus.duplicatesAgainstExisting = findings.againstExisting;
       }
-      if (evalIndex && policy.rules.contamination) {
-        corpus.contamination = { ngram: policy.rules.contamination.ngram, evalFiles, evalItems: evalIndex.items };
+      if (evalItems && policy.rules.contamination) {
+        corpus.contamination = { ngram: policy.rules.contamination.ngram, evalFiles, evalItems: evalItems.length };
       }
     }
   };
@@ -18905,11 +18902,11 @@ async function runCheck(opts) {
 import { readFile as readFile5 } from "node:fs/promises";
 
 // src/results/partition.ts
-import { createHash as createHash5 } from "node:crypto";
+import { createHash as createHash6 } from "node:crypto";
 var PARTIAL_FORMAT = "sluice-partial";
 var PARTIAL_VERSION = 1;
 function partitionOf(path5, count3) {
-  const h = createHash5("sha256").update(path5).digest();
+  const h = createHash6("sha256").update(path5).digest();
   return h.readUInt32BE(0) % count3 + 1;
 }
 function partialToJson(p) {

@@ -80,7 +80,9 @@ export function createLanguageDetector(languages: readonly LanguageSpec[], detec
   const scriptsOfKey = new Map(languages.map((spec) => [spec.key, spec.scripts]));
   const keyOfLowerKey = new Map(languages.map((spec) => [spec.key.toLowerCase(), spec.key]));
   const routes = new Map<string, Route>();
-  const francKnows = new Set(francLanguages());
+  // franc's profiles are loaded at the first document that needs a label: a run whose shards
+  // all come from the cache labels none (loading them was a tenth of such a run's time).
+  let francKnows: Set<string> | undefined;
   const declaredCache = new Map<string, string>();
 
   const routeOf = (script: string): Route => {
@@ -89,7 +91,9 @@ export function createLanguageDetector(languages: readonly LanguageSpec[], detec
     const listing = languages.filter((spec) => spec.scripts.includes(script));
     const candidates = new Set(MAJOR_LANGUAGES[script] ?? []);
     for (const spec of listing) for (const code of [spec.iso6393, ...spec.covers]) candidates.add(code);
-    const labellable = [...candidates].filter((code) => francKnows.has(code));
+    francKnows ??= new Set(francLanguages());
+    const known = francKnows;
+    const labellable = [...candidates].filter((code) => known.has(code));
     let route: Route = null;
     // The letter count is checked before; the labeller itself imposes no minimum length.
     if (labellable.length > 1) route = { labeller: createFrancLabeller(labellable, 1) };

@@ -5,7 +5,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { buildEvalIndex, DuplicateIndexBuilder, findContamination, wordsOf, type DuplicateOptions, type EvalItem } from '../../src/measure/duplicates/index.js';
+import { buildEvalIndex, DuplicateIndexBuilder, evalSetId, findContamination, wordsOf, type DuplicateOptions, type EvalItem } from '../../src/measure/duplicates/index.js';
 import { DocumentScanner, hashWords, prepareText, sharedWords, wordBuffer } from '../../src/measure/duplicates/scan.js';
 
 function brownParagraphs(limitFiles: number): string[] {
@@ -145,6 +145,10 @@ describe('short items, ids and other n', () => {
     expect(buildEvalIndex(questions, 8).id).not.toBe(qa.id);
     expect(buildEvalIndex([...questions, { file: 'eval/newsroom-qa.jsonl', line: 4, text: 'Who filed the report?' }]).id).not.toBe(qa.id);
     expect(buildEvalIndex(questions.map((q) => ({ ...q, line: q.line + 1 }))).id).not.toBe(qa.id);
+    expect(buildEvalIndex(questions.map((q) => ({ ...q, text: q.text.replace('river', 'canal') }))).id).not.toBe(qa.id);
+    // The id without the index, as a run keys its cached results before (or without) building it.
+    expect(evalSetId(questions)).toBe(qa.id);
+    expect(evalSetId(questions, 8)).toBe(buildEvalIndex(questions, 8).id);
   });
 
   it('uses the n it was built with', () => {

@@ -10,6 +10,7 @@
 // hide contamination of short-answer sets; a very short item — one or two words — will match
 // ordinary text, so the index counts them in `shortItems` for the report to show.) An item with
 // no words at all cannot overlap anything and is counted in `emptyItems`.
+import { createHash } from 'node:crypto';
 import * as hash from './hash.js';
 import { hashWords, prepareText, sharedWords, wordBuffer } from './scan.js';
 
@@ -38,7 +39,7 @@ const FILTER_BITS_PER_GRAM = 16;
 /** The bitmap stays within 2^MAX_FILTER_LOG bits (2 MiB): a larger eval set lets more grams through, with the same answers. */
 const MAX_FILTER_LOG = 24;
 /** Bump when tokenization or hashing changes, so cached results keyed by the index id are not reused. */
-const INDEX_VERSION = 1;
+const INDEX_VERSION = 2;
 
 /** An evaluation item: the eval file (as reports name it), the 1-based line, and its text. */
 export interface EvalItem {
@@ -49,7 +50,7 @@ export interface EvalItem {
 
 /** An index of the n-grams of a set of evaluation items. */
 export interface EvalIndex {
-  /** 16 hex digits identifying the index's contents (n, every item's file, line and words, in order): a cache key for results per eval set. */
+  /** 16 hex digits identifying the index's contents (evalSetId of its items and n): a cache key for results per eval set. */
   readonly id: string;
   readonly ngram: number;
   readonly items: number;
@@ -71,6 +72,19 @@ export interface EvalIndex {
   readonly sources: ReadonlyArray<{ file: string; line: number }>;
 }
 
+/**
+ * Returns 16 hex digits naming an evaluation set as an index of n-grams would be built from
+ * it: the index version, n, and every item's file, line and text, in order (SHA-256). It
+ * needs no word pass, so a run whose shards all come from the cache can key them without
+ * building the index.
+ */
+export function evalSetId(items: readonly EvalItem[], ngram = DEFAULT_NGRAM): string {
+  const h = createHash('sha256');
+  h.update(`sluice eval index v${INDEX_VERSION} n=${ngram} items=${items.length}\0`);
+  for (const item of items) h.update(`${item.file}\0${item.line}\0${item.text}\0`);
+  return h.digest('hex').slice(0, 16);
+}
+
 /** Returns an index of every n-word span (and every whole item shorter than n words) of the evaluation items; a gram in several items maps to the first. */
 export function buildEvalIndex(items: EvalItem[], ngram = DEFAULT_NGRAM): EvalIndex {
   if (!Number.isInteger(ngram) || ngram < 1) throw new RangeError(`contamination: ngram must be a positive integer, got ${ngram}`);
@@ -80,23 +94,9 @@ export function buildEvalIndex(items: EvalItem[], ngram = DEFAULT_NGRAM): EvalIn
   let total = 0;
   let shortItems = 0;
   let emptyItems = 0;
-  // Id: a running 64-bit hash over n and each item's file, line and word hashes.
-  let id1 = Math.imul(0x9e3779b9 ^ INDEX_VERSION, 0x01000193) ^ ngram;
-  let id2 = Math.imul(0x7f4a7c15 ^ INDEX_VERSION, 0x5bd1e995) ^ ngram;
-  const fold = (x: number): void => {
-    id1 = Math.imul(id1 ^ x, 0x01000193);
-    id1 = (id1 << 13) | (id1 >>> 19);
-    id2 = Math.imul(id2 ^ x, 0x5bd1e995);
-    id2 = (id2 << 11) | (id2 >>> 21);
-  };
   items.forEach((item, idx) => {
     if (typeof item?.text !== 'string') throw new TypeError(`contamination: item ${idx} (${item?.file}:${item?.line}) has no text`);
     const words = hashWords(prepareText(item.text), buf);
-    for (let i = 0; i < item.file.length; i++) fold(item.file.charCodeAt(i));
-    fold(0xfffe);
-    fold(item.line);
-    for (let i = 0; i < words; i++) fold(buf.lane1[i]!);
-    fold(0xffff);
     if (words === 0) {
       emptyItems++;
       grams.push({ l1: new Int32Array(0), l2: new Int32Array(0), count: 0 });
@@ -141,7 +141,7 @@ export function buildEvalIndex(items: EvalItem[], ngram = DEFAULT_NGRAM): EvalIn
     }
   });
   return {
-    id: hash.hex64(mix32(id1 ^ items.length), mix32b(id2 + items.length)),
+    id: evalSetId(items, ngram),
     ngram,
     items: items.length,
     grams: distinct,

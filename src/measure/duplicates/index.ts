@@ -19,4 +19,4 @@ export { bytesPerDocument, inspectIndex, FORMAT_VERSION } from './format.js';
 export { lshBands, candidateProbability, rowAgreement, signatureBits, jaccardFromAgreement } from './lsh.js';
 export { Sketcher, signatureAgreement } from './minhash.js';
 export { exactHash, normalizeForExact, prepareText, wordsOf } from './scan.js';
-export { buildEvalIndex, findContamination, DEFAULT_NGRAM, type EvalIndex, type EvalItem } from './contamination.js';
+export { buildEvalIndex, evalSetId, findContamination, DEFAULT_NGRAM, type EvalIndex, type EvalItem } from './contamination.js';
