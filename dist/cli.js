@@ -19574,5 +19574,15 @@ async function main() {
     return 2;
   }
 }
-if (isShardWorker()) await runShardWorker();
-else process.exitCode = await main();
+if (isShardWorker()) void runShardWorker();
+else
+  void main().then(
+    (code) => {
+      process.exitCode = code;
+    },
+    (err) => {
+      process.stderr.write(`sluice: internal error: ${err?.stack ?? String(err)}
+`);
+      process.exitCode = 2;
+    }
+  );

@@ -9,9 +9,7 @@ import { settingsFromEnv } from './inputs.js';
 import { runAction } from './run.js';
 import { runnerIO } from './runner.js';
 
-if (isShardWorker()) {
-  await runShardWorker();
-} else {
+async function run(): Promise<void> {
   try {
     const outcome = await runAction({ ...settingsFromEnv(process.env), workerEntry: import.meta.url }, runnerIO());
     if (outcome.failure) core.setFailed(outcome.failure);
@@ -20,3 +18,8 @@ if (isShardWorker()) {
     core.setFailed(known ? `sluice: ${(err as Error).message}` : `sluice: internal error: ${(err as Error).stack ?? String(err)}`);
   }
 }
+
+// No top-level await, for the reason given at the end of cli/main.ts: this bundle is also the
+// workers' script, and a worker terminated while an async module's body runs aborts the process.
+if (isShardWorker()) void runShardWorker();
+else void run();

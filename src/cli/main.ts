@@ -111,6 +111,20 @@ async function main(): Promise<number> {
   }
 }
 
-// The same bundle serves as the worker threads' script.
-if (isShardWorker()) await runShardWorker();
-else process.exitCode = await main();
+// The same bundle serves as the worker threads' script. No top-level await: a module that
+// has one is evaluated as an async module, and a worker terminated while V8 runs such a
+// module's body aborts the whole process (Node 20: "Check failed: (location_) != nullptr"
+// in SourceTextModule::ExecuteAsyncModule). The pool terminates workers that are still
+// loading when a run needs fewer threads than it started, so the body must stay synchronous;
+// test/core/worker-terminate.test.ts terminates loading workers at staggered moments.
+if (isShardWorker()) void runShardWorker();
+else
+  void main().then(
+    (code) => {
+      process.exitCode = code;
+    },
+    (err: unknown) => {
+      process.stderr.write(`sluice: internal error: ${(err as Error)?.stack ?? String(err)}\n`);
+      process.exitCode = 2;
+    },
+  );
