@@ -470,6 +470,19 @@ console.log(`  ${'sum of the parts'.padEnd(48)} ${sumOf('seconds').toFixed(2).pa
 console.log(`  ${'full check, measured'.padEnd(48)} ${runs.full.seconds.toFixed(2).padStart(7)} ${'100 %'} ${runs.full.cpuSeconds.toFixed(2).padStart(7)} ${'100 %'}`);
 console.log('  (a sum away from 100 % is noise, or cost that appears only when the analyzers run together, such as collecting a larger heap)');
 
+// CPU time of one run over another in the same run of the benchmark: the machine's speed of the
+// moment cancels out, so these move with the code more than MB/s do (on the shared 2-core
+// machine, the language-only run's CPU time moved by a quarter between two hours, code unchanged).
+const inRun = {
+  fullOverLight: runs.full.cpuSeconds / runs.light.cpuSeconds,
+  tokensOverLight: runs.tokens.cpuSeconds / runs.light.cpuSeconds,
+  fullOverFloor: runs.full.cpuSeconds / floorRun.cpuSeconds,
+};
+console.log(
+  `In-run CPU ratios (steadier than MB/s here): full check ${inRun.fullOverLight.toFixed(2)}× the language-only run, ` +
+    `tokenizer-only ${inRun.tokensOverLight.toFixed(2)}×; full check ${inRun.fullOverFloor.toFixed(1)}× the floor.`,
+);
+
 // ---- scaling ----
 {
   const rate = (mbs, secs) => mbs / secs;
@@ -519,6 +532,7 @@ writeFileSync(
       naive: { perStepSeconds: naiveRun.perStep, sampleBytes: naiveRun.bytes, docs: naiveRun.docs, francLabels: naiveRun.francLabels },
       startup: { wallSeconds: startup.seconds, cpuSeconds: startup.cpuSeconds, maxRssKb: startup.maxRssKb },
       breakdown,
+      inRunCpuRatios: inRun,
       cache: footprint,
       partialBytesPerDocument: partBytesPerDoc,
       timing: Object.fromEntries(Object.entries(runs).map(([k, r]) => [k, { wallSeconds: r.seconds, cpuSeconds: r.cpuSeconds, allRoundsSeconds: allSeconds[k], maxRssKb: r.maxRssKb, reportTiming: r.report.timing }])),
