@@ -10134,7 +10134,7 @@ function directIndex(a, b, c) {
   const z = symbolOf(c);
   return (x | y | z) < 0 ? -1 : (x * 27 + y) * 27 + z;
 }
-var directId = new Int32Array(DIRECT).fill(-1);
+var directId = new Int16Array(DIRECT).fill(-1);
 function loadProfiles() {
   if (internBits > 0) return;
   let hashed = 0;
@@ -10159,8 +10159,8 @@ function loadProfiles() {
       }
     }
   }
-  if (internCount >= 65535) throw new Error("franc data: too many trigrams for the 16-bit ids of internTable");
-  idTally = new Int32Array(internCount);
+  if (internCount >= 32767) throw new Error("franc data: too many trigrams for the 16-bit ids of internTable and directId");
+  idTally = new Uint16Array(internCount);
 }
 function invert(group, languages) {
   const models = profiles.get(group);
@@ -10207,35 +10207,26 @@ function cleaningTable() {
   }
   return foldedUnit = folded2;
 }
-var idTally = new Int32Array(0);
-var COUNT_BITS = 13;
-var COUNT_MASK = (1 << COUNT_BITS) - 1;
-var LAST_STAMP = (1 << 31 - COUNT_BITS) - 1;
-var stamp = 0;
+var idTally = new Uint16Array(0);
 var distinctIds = new Int32Array(MAX_LENGTH * 2 + 2);
+var counted = 0;
 var cleaned = new Uint16Array(MAX_LENGTH * 2 + 2);
-function nextStamp() {
-  stamp++;
-  if (stamp > LAST_STAMP) {
-    idTally.fill(0);
-    stamp = 1;
-  }
+function nextCount() {
+  for (let d = 0; d < counted; d++) idTally[distinctIds[d]] = 0;
+  counted = 0;
 }
 function tally(a, b, c, sa, sb, sc, distinct) {
   const id = (sa | sb | sc) >= 0 ? directId[(sa * 27 + sb) * 27 + sc] : hashedId(a << 16 | b, c);
   if (id < 0) return distinct;
-  const word = idTally[id];
-  if (word >>> COUNT_BITS !== stamp) {
-    idTally[id] = stamp << COUNT_BITS | 1;
-    distinctIds[distinct] = id;
-    return distinct + 1;
-  }
-  idTally[id] = word + 1;
-  return distinct;
+  const n = idTally[id];
+  idTally[id] = n + 1;
+  if (n !== 0) return distinct;
+  distinctIds[distinct] = id;
+  return distinct + 1;
 }
 function countTrigrams(text, end) {
   const folded2 = cleaningTable();
-  nextStamp();
+  nextCount();
   let distinct = 0;
   let a = 0;
   let sa = -1;
@@ -10254,7 +10245,10 @@ function countTrigrams(text, end) {
       pendingSpace = started;
       continue;
     }
-    if (c === CARE) return -1;
+    if (c === CARE) {
+      counted = distinct;
+      return -1;
+    }
     if (pendingSpace) {
       distinct = tally(a, b, 32, sa, sb, 0, distinct);
       a = b;
@@ -10272,13 +10266,14 @@ function countTrigrams(text, end) {
     started = true;
   }
   distinct = tally(a, b, 32, sa, sb, 0, distinct);
+  counted = distinct;
   sampleIsAscii = units < 128;
   sampleHasAsciiLetter = letter2;
   return distinct;
 }
 function countCarefully(text, end) {
   const n = clean(text, end);
-  nextStamp();
+  nextCount();
   let distinct = 0;
   for (let p = 0; p + 2 < n; p++) {
     const a = cleaned[p];
@@ -10286,6 +10281,7 @@ function countCarefully(text, end) {
     const c = cleaned[p + 2];
     distinct = tally(a, b, c, symbolOf(a), symbolOf(b), symbolOf(c), distinct);
   }
+  counted = distinct;
   return distinct;
 }
 function clean(text, end) {
@@ -10348,8 +10344,8 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
   const label = (text) => {
     if (!text || text.length < minLength) return UND;
     const end = Math.min(text.length, MAX_LENGTH);
-    const counted = countTrigrams(text, end);
-    const distinct = counted >= 0 ? counted : countCarefully(text, end);
+    const fast = countTrigrams(text, end);
+    const distinct = fast >= 0 ? fast : countCarefully(text, end);
     const top = sampleIsAscii && ASCII_SHORTCUT ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 } : topExpression(text, end);
     const name = FRANC_EXPRESSIONS[top.expression];
     const group = groups[top.expression];
@@ -10360,7 +10356,7 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
     const { offsets: offsets2, entries } = group;
     for (let d = 0; d < distinct; d++) {
       const id = distinctIds[d];
-      const count3 = idTally[id] & COUNT_MASK;
+      const count3 = idTally[id];
       const last = offsets2[id + 1];
       for (let e = offsets2[id]; e < last; e++) {
         const entry = entries[e];
