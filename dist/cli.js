@@ -278,14 +278,14 @@ function countsAlone(text, start, length, cp) {
     return assigned.test(String.fromCodePoint(cp));
   }
   let letters = 0;
-  let punctuation = 0;
+  let punctuation2 = 0;
   for (let k = 1; k < length; k++) {
     const ch = text[start + k];
     if (letter.test(ch)) letters++;
-    else if (punctuationOrSpace.test(ch)) punctuation++;
+    else if (punctuationOrSpace.test(ch)) punctuation2++;
   }
   if (letters === length - 1) return false;
-  if (punctuation === length - 1 && !letter.test(text[start + length] ?? " ")) return false;
+  if (punctuation2 === length - 1 && !letter.test(text[start + length] ?? " ")) return false;
   return assigned.test(String.fromCodePoint(cp));
 }
 function countMojibake(text) {
@@ -7093,8 +7093,8 @@ function round(x) {
 function inspectIndex(blob) {
   const r = parseIndex(blob);
   if (!r.ok) return r;
-  const { formatVersion, shingle, hashes, signatureBits: bits, punctuation, threshold, documents, bytes: bytes3 } = r.layout;
-  return { ok: true, header: { formatVersion, shingle, hashes, signatureBits: bits, punctuation, threshold, documents, bytes: bytes3 } };
+  const { formatVersion, shingle, hashes, signatureBits: bits, punctuation: punctuation2, threshold, documents, bytes: bytes3 } = r.layout;
+  return { ok: true, header: { formatVersion, shingle, hashes, signatureBits: bits, punctuation: punctuation2, threshold, documents, bytes: bytes3 } };
 }
 
 // src/measure/duplicates/builder.ts
@@ -7102,7 +7102,7 @@ var MAX_SHINGLE = 255;
 var MAX_HASHES2 = 65535;
 var MAX_LANGUAGE = (1 << 24) - 1;
 function checkOptions(opts) {
-  const { shingle, hashes, threshold, punctuation } = opts;
+  const { shingle, hashes, threshold, punctuation: punctuation2 } = opts;
   if (!Number.isInteger(shingle) || shingle < 1 || shingle > MAX_SHINGLE) {
     throw new RangeError(`duplicates: shingle must be an integer from 1 to ${MAX_SHINGLE} words, got ${shingle}`);
   }
@@ -7112,10 +7112,10 @@ function checkOptions(opts) {
   if (typeof threshold !== "number" || !(threshold > 0 && threshold <= 1)) {
     throw new RangeError(`duplicates: threshold must be a number in (0, 1], got ${threshold}`);
   }
-  if (punctuation !== "keep" && punctuation !== "strip") {
-    throw new RangeError(`duplicates: punctuation must be 'keep' or 'strip', got ${String(punctuation)}`);
+  if (punctuation2 !== "keep" && punctuation2 !== "strip") {
+    throw new RangeError(`duplicates: punctuation must be 'keep' or 'strip', got ${String(punctuation2)}`);
   }
-  return { shingle, hashes, threshold, punctuation };
+  return { shingle, hashes, threshold, punctuation: punctuation2 };
 }
 function duplicateOptionsFrom(rule) {
   return checkOptions({ shingle: rule.near.shingle, hashes: rule.near.hashes, threshold: rule.near.threshold, punctuation: rule.punctuation });
@@ -17636,6 +17636,18 @@ function digits(C, text, p) {
   }
   return e;
 }
+function punctuation(C, text, p, c, slash) {
+  let s = -1;
+  if (text.charCodeAt(p) === SPACE_UNIT) {
+    const d = classAt(C, text, p + 1);
+    if ((d & SURROGATE) !== 0) return -1;
+    if ((d & OTHER4) !== 0) s = p + 1;
+  }
+  if (s < 0 && (c & OTHER4) !== 0) s = p;
+  if (s < 0) return -2;
+  const o = run(C, text, s, OTHER4);
+  return o < 0 ? -1 : trailing(text, o, slash);
+}
 function spaceRunWithNewlines(C, text, p, q) {
   for (let i = q - 1; i >= p; i--) {
     const u = text.charCodeAt(i);
@@ -17705,18 +17717,8 @@ var splitO200k = (text, p) => {
   if ((c & PREFIX) !== 0) {
     const e = o200kWord(C, text, p, true, letterish);
     if (e !== -2) return e;
-    if (text.charCodeAt(p) === SPACE_UNIT) {
-      const d = classAt(C, text, p + 1);
-      if ((d & SURROGATE) !== 0) return -1;
-      if ((d & OTHER4) !== 0) {
-        const o = run(C, text, p + 1, OTHER4);
-        return o < 0 ? -1 : trailing(text, o, true);
-      }
-    }
-    if ((c & OTHER4) !== 0) {
-      const o = run(C, text, p, OTHER4);
-      return o < 0 ? -1 : trailing(text, o, true);
-    }
+    const o = punctuation(C, text, p, c, true);
+    if (o !== -2) return o;
   }
   return spaceRunWithNewlines(C, text, p, spaceRun(C, text, p));
 };
@@ -17734,14 +17736,8 @@ var splitCl100k = (text, p) => {
     const d = classAt(C, text, p + 1);
     if ((d & SURROGATE) !== 0) return -1;
     if ((d & LETTER) !== 0) return run(C, text, p + 1, LETTER);
-    if (text.charCodeAt(p) === SPACE_UNIT && (d & OTHER4) !== 0) {
-      const o = run(C, text, p + 1, OTHER4);
-      return o < 0 ? -1 : trailing(text, o, false);
-    }
-    if ((c & OTHER4) !== 0) {
-      const o = run(C, text, p, OTHER4);
-      return o < 0 ? -1 : trailing(text, o, false);
-    }
+    const o = punctuation(C, text, p, c, false);
+    if (o !== -2) return o;
   }
   return spaceRunWithNewlines(C, text, p, spaceRun(C, text, p));
 };

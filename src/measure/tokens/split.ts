@@ -139,6 +139,23 @@ function digits(C: Uint8Array, text: string, p: number): number {
 }
 
 /**
+ * ` ?[^\s\p{L}\p{N}]+` from p (whose class is c), then any `\r`, `\n` (and `/` when
+ * `slash`, as o200k_base has it): the end, -1 at a surrogate, -2 when neither form matches.
+ */
+function punctuation(C: Uint8Array, text: string, p: number, c: number, slash: boolean): number {
+  let s = -1;
+  if (text.charCodeAt(p) === SPACE_UNIT) {
+    const d = classAt(C, text, p + 1);
+    if ((d & SURROGATE) !== 0) return -1;
+    if ((d & OTHER) !== 0) s = p + 1;
+  }
+  if (s < 0 && (c & OTHER) !== 0) s = p;
+  if (s < 0) return -2;
+  const o = run(C, text, s, OTHER);
+  return o < 0 ? -1 : trailing(text, o, slash);
+}
+
+/**
  * A whitespace run p..q (`\s*[\r\n]+`, `\s+(?!\S)`, `\s+`) as cl100k_base and o200k_base
  * split it, given that no letter-prefix or punctuation alternative applies.
  */
@@ -233,18 +250,8 @@ export const splitO200k: PieceSplitter = (text, p) => {
     const e = o200kWord(C, text, p, true, letterish);
     if (e !== -2) return e;
     // ` ?[^\s\p{L}\p{N}]+[\r\n/]*`
-    if (text.charCodeAt(p) === SPACE_UNIT) {
-      const d = classAt(C, text, p + 1);
-      if ((d & SURROGATE) !== 0) return -1;
-      if ((d & OTHER) !== 0) {
-        const o = run(C, text, p + 1, OTHER);
-        return o < 0 ? -1 : trailing(text, o, true);
-      }
-    }
-    if ((c & OTHER) !== 0) {
-      const o = run(C, text, p, OTHER);
-      return o < 0 ? -1 : trailing(text, o, true);
-    }
+    const o = punctuation(C, text, p, c, true);
+    if (o !== -2) return o;
   }
   // Whitespace.
   return spaceRunWithNewlines(C, text, p, spaceRun(C, text, p));
@@ -267,14 +274,8 @@ export const splitCl100k: PieceSplitter = (text, p) => {
     if ((d & SURROGATE) !== 0) return -1;
     if ((d & LETTER) !== 0) return run(C, text, p + 1, LETTER);
     // ` ?[^\s\p{L}\p{N}]+[\r\n]*`
-    if (text.charCodeAt(p) === SPACE_UNIT && (d & OTHER) !== 0) {
-      const o = run(C, text, p + 1, OTHER);
-      return o < 0 ? -1 : trailing(text, o, false);
-    }
-    if ((c & OTHER) !== 0) {
-      const o = run(C, text, p, OTHER);
-      return o < 0 ? -1 : trailing(text, o, false);
-    }
+    const o = punctuation(C, text, p, c, false);
+    if (o !== -2) return o;
   }
   return spaceRunWithNewlines(C, text, p, spaceRun(C, text, p));
 };
