@@ -17569,8 +17569,12 @@ var table2;
 function unitClasses() {
   if (table2) return table2;
   const classes2 = new Uint8Array(65536);
-  const units = new Uint16Array(65536);
-  for (let u = 0; u < 65536; u++) units[u] = u >= 55296 && u <= 57343 ? 0 : u;
+  const units = new Uint8Array(131072);
+  for (let u = 0; u < 65536; u++) {
+    if (u >= 55296 && u <= 57343) continue;
+    units[2 * u] = u & 255;
+    units[2 * u + 1] = u >>> 8;
+  }
   const all = new TextDecoder("utf-16le").decode(units);
   const mark = (source, bit) => {
     for (const m of all.matchAll(new RegExp(`(?:${source})+`, "gu"))) {

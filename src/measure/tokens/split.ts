@@ -56,8 +56,13 @@ export function unitClasses(): Uint8Array {
   const classes = new Uint8Array(0x10000);
   // Every code unit once, surrogates replaced by NUL (whose class is set apart) so that
   // the string has no pairs and a match index is the code unit itself.
-  const units = new Uint16Array(0x10000);
-  for (let u = 0; u < 0x10000; u++) units[u] = u >= 0xd800 && u <= 0xdfff ? 0 : u;
+  // Written as little-endian bytes, so the decode is right whatever the machine's byte order.
+  const units = new Uint8Array(0x20000);
+  for (let u = 0; u < 0x10000; u++) {
+    if (u >= 0xd800 && u <= 0xdfff) continue;
+    units[2 * u] = u & 0xff;
+    units[2 * u + 1] = u >>> 8;
+  }
   const all = new TextDecoder('utf-16le').decode(units);
   const mark = (source: string, bit: number): void => {
     for (const m of all.matchAll(new RegExp(`(?:${source})+`, 'gu'))) {
