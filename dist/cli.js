@@ -17985,21 +17985,34 @@ async function loadTokenizer(spec, options = {}) {
     if (!isBuiltinName(name)) {
       throw new TokenizerError("load", name, `unknown builtin tokenizer; the builtins are ${BUILTIN_NAMES.join(", ")}`);
     }
-    const data2 = await importBuiltin(name);
+    let data2 = options.deferBuiltin ? void 0 : await importBuiltin(name);
     const id = `builtin:${name}`;
-    return lazyCounter(
+    const counter = lazyCounter(
       id,
       name,
       () => sharedTable(id),
-      (shared2, ranks) => createRankCounter({
-        id,
-        label: name,
-        ranks: ranks ?? parseBuiltinRanks(data2.bpe_ranks, name, id),
-        pattern: data2.pat_str,
-        shared: shared2,
-        ...generationSize === void 0 ? {} : { generationSize }
-      })
+      (shared2, ranks) => {
+        if (ranks === null && data2 === void 0) {
+          throw new Error(`internal error: ${name}: the ranks were not loaded before the first count (ready() was not awaited)`);
+        }
+        return createRankCounter({
+          id,
+          label: name,
+          ranks: ranks ?? parseBuiltinRanks(data2.bpe_ranks, name, id),
+          // The same string as the module's pat_str (test/measure/tokens-split.test.ts checks it).
+          pattern: BUILTIN_PATTERNS[name],
+          shared: shared2,
+          ...generationSize === void 0 ? {} : { generationSize }
+        });
+      }
     );
+    if (!options.deferBuiltin) return counter;
+    return {
+      ...counter,
+      ready: async () => {
+        data2 ??= await importBuiltin(name);
+      }
+    };
   }
   let bytes3;
   try {
@@ -18297,14 +18310,15 @@ function readOptionsOf(policy) {
 var AnalyzerSetupError = class extends Error {
   name = "AnalyzerSetupError";
 };
-async function prepareAnalyzers(policy) {
+async function prepareAnalyzers(policy, options = {}) {
   const measure = createMeasurer({ languages: policy.languages, detection: policy.detection });
   const read = readOptionsOf(policy);
   let main2;
   let baseline;
   try {
-    if (policy.tokenizer) main2 = await loadTokenizer(policy.tokenizer);
-    if (policy.baseline) baseline = await loadTokenizer(policy.baseline);
+    const load = { deferBuiltin: options.deferTokenizerData === true };
+    if (policy.tokenizer) main2 = await loadTokenizer(policy.tokenizer, load);
+    if (policy.baseline) baseline = await loadTokenizer(policy.baseline, load);
   } catch (err) {
     throw new AnalyzerSetupError(`${policy.file}: tokenizer: ${err.message}`);
   }
@@ -18359,14 +18373,25 @@ async function prepareAnalyzers(policy) {
     analyzers.contamination = (text) => findContamination(index2 ??= buildEvalIndex(items, ngram), text);
   }
   const counters = { main: main2, baseline };
+  let loaded;
+  const ready = () => loaded ??= (async () => {
+    try {
+      await main2?.ready?.();
+      await baseline?.ready?.();
+    } catch (err) {
+      throw new AnalyzerSetupError(`${policy.file}: tokenizer: ${err.message}`);
+    }
+  })();
   return {
+    ready,
     sharedCounts() {
       const tables2 = {};
       for (const role of ["main", "baseline"]) {
         try {
           const table3 = counters[role]?.shareTables?.();
           if (table3) tables2[role] = table3;
-        } catch {
+        } catch (err) {
+          if (!(err instanceof TokenizerError)) throw err;
         }
       }
       return tables2;
@@ -18385,6 +18410,7 @@ async function prepareAnalyzers(policy) {
       if (baseline) corpus.baseline = { label: baseline.label, hasUnknown: baseline.unknownTokenId !== null };
       const lists = policy.rules.fertility?.wordLists ?? {};
       if (main2 && Object.keys(lists).length > 0) {
+        await ready();
         corpus.dictionary = {};
         for (const [key, list] of Object.entries(lists)) {
           let words;
@@ -18729,7 +18755,15 @@ function noShards(policy, skipped) {
 }
 async function prepareOrThrow(policy) {
   try {
-    return await prepareAnalyzers(policy);
+    return await prepareAnalyzers(policy, { deferTokenizerData: true });
+  } catch (err) {
+    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
+    throw err;
+  }
+}
+async function readyOrThrow(prepared) {
+  try {
+    await prepared.ready();
   } catch (err) {
     if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
     throw err;
@@ -18829,6 +18863,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
       } else todo.push(ref);
     });
   }
+  if (todo.length > 0) await readyOrThrow(prepared);
   const store = async (r) => {
     const key = keys.get(r.path);
     if (cache && key) await cache.put({ ...r, contentId: key });

@@ -167,7 +167,17 @@ function noShards(policy: Policy, skipped: readonly SkippedFile[]): ConfigError 
 /** Returns the analyzers of a policy, or throws ConfigError when a tokenizer or evaluation file cannot be used. */
 export async function prepareOrThrow(policy: Policy): Promise<PreparedAnalyzers> {
   try {
-    return await prepareAnalyzers(policy);
+    return await prepareAnalyzers(policy, { deferTokenizerData: true });
+  } catch (err) {
+    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
+    throw err;
+  }
+}
+
+/** Loads what the analyzers deferred, as prepareOrThrow reports a setup failure. */
+async function readyOrThrow(prepared: PreparedAnalyzers): Promise<void> {
+  try {
+    await prepared.ready();
   } catch (err) {
     if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
     throw err;
@@ -314,6 +324,10 @@ export async function measureShards(
       } else todo.push(ref);
     });
   }
+
+  // Something is measured here: the tokenizer's ranks module, deferred so that a run served
+  // wholly from the cache never imports it, is needed now.
+  if (todo.length > 0) await readyOrThrow(prepared);
 
   const store = async (r: ShardResult): Promise<void> => {
     const key = keys.get(r.path);

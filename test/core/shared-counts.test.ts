@@ -52,6 +52,8 @@ describe('token counts shared between the threads of a pooled run', () => {
     const policy = await loadPolicyOrThrow(POLICY);
     const a = await prepareOrThrow(policy);
     const b = await prepareOrThrow({ ...policy, tokenizer: policy.baseline!, baseline: policy.tokenizer! });
+    await a.ready();
+    await b.ready();
     const mine = b.sharedCounts();
     b.adoptCounts(a.sharedCounts());
     // Roles swapped: main of a is o200k_base, main of b is gpt2, so neither table is taken.
@@ -59,5 +61,18 @@ describe('token counts shared between the threads of a pooled run', () => {
     expect(b.sharedCounts().baseline!.counts).toBe(mine.baseline!.counts);
     expect(b.sharedCounts().main!.counts).not.toBe(a.sharedCounts().main!.counts);
     expect(b.sharedCounts().main!.ranks).not.toBe(a.sharedCounts().main!.ranks);
+  });
+
+  it('come from a tokenizer whose ranks module a run loads only when it measures something', async () => {
+    const policy = await loadPolicyOrThrow(POLICY);
+    const prepared = await prepareOrThrow(policy);
+    // Before ready(), nothing has imported the builtin's ranks: a count would be a caller's bug, and says so.
+    expect(() => prepared.analyzers.tokens!('A flood warning was issued for the river.')).toThrow(/ready\(\) was not awaited/);
+    expect(() => prepared.sharedCounts()).toThrow(/ready\(\) was not awaited/);
+    await prepared.ready();
+    const eager = await loadTokenizer(policy.tokenizer!);
+    const text = 'A flood warning was issued for the river. नदी का जलस्तर बढ़ा।';
+    expect(prepared.analyzers.tokens!(text).main!.tokens).toBe(eager.count(text).tokens);
+    expect(prepared.sharedCounts().main?.counts).toBeInstanceOf(SharedArrayBuffer);
   });
 });

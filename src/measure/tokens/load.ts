@@ -17,6 +17,12 @@ export interface LoadOptions {
   cacheGenerationSize?: number;
   /** Entries of the table of piece counts that threads share (shared-counts.ts; default DEFAULT_SHARED_ENTRIES); 0: none, each counter keeps only its own cache. */
   sharedEntries?: number;
+  /**
+   * For a builtin: import its ranks module (a few MB of JavaScript, about 30 ms to compile) only
+   * when `ready()` is called, not now. A run whose shards all come from the cache then never
+   * imports it; the caller must await `ready()` before the first count.
+   */
+  deferBuiltin?: boolean;
 }
 
 /** Loads the builtin ranks module of an encoding (each is a few MB of JavaScript, so only on demand). */
@@ -45,26 +51,40 @@ export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = 
     if (!isBuiltinName(name)) {
       throw new TokenizerError('load', name, `unknown builtin tokenizer; the builtins are ${BUILTIN_NAMES.join(', ')}`);
     }
-    const data = await importBuiltin(name);
+    let data: { pat_str: string; bpe_ranks: string } | undefined = options.deferBuiltin ? undefined : await importBuiltin(name);
     // The rank table is parsed on first use: a run whose shards all come from the cache never
     // counts a token, and parsing o200k_base took about an eighth of such a run's time (one CPU
     // profile of a warm-cache `sluice check` on the bench corpus). The data is the package's own, so a
     // damaged table, the one failure deferred by this, is not expected.
     const id = `builtin:${name}`;
-    return lazyCounter(
+    const counter = lazyCounter(
       id,
       name,
       () => sharedTable(id),
-      (shared, ranks) =>
-        createRankCounter({
+      (shared, ranks) => {
+        if (ranks === null && data === undefined) {
+          // Not a TokenizerError: a bug of the caller, never a shard's fault (callers that file a
+          // TokenizerError against the shard being measured must not swallow this).
+          throw new Error(`internal error: ${name}: the ranks were not loaded before the first count (ready() was not awaited)`);
+        }
+        return createRankCounter({
           id,
           label: name,
-          ranks: ranks ?? parseBuiltinRanks(data.bpe_ranks, name, id),
-          pattern: data.pat_str,
+          ranks: ranks ?? parseBuiltinRanks(data!.bpe_ranks, name, id),
+          // The same string as the module's pat_str (test/measure/tokens-split.test.ts checks it).
+          pattern: BUILTIN_PATTERNS[name],
           shared,
           ...(generationSize === undefined ? {} : { generationSize }),
-        }),
+        });
+      },
     );
+    if (!options.deferBuiltin) return counter;
+    return {
+      ...counter,
+      ready: async () => {
+        data ??= await importBuiltin(name);
+      },
+    };
   }
 
   let bytes: Buffer;

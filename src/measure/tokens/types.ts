@@ -55,6 +55,8 @@ export interface TokenCounter {
   shareTables?(): SharedTokenizerTables;
   /** Uses another thread's tables (from shareTables) from now on; false, and nothing changes, when they were made for another tokenizer. */
   adoptTables?(tables: SharedTokenizerTables): boolean;
+  /** For a counter loaded with `deferBuiltin`: loads what counting needs; every count before it settles throws. Absent: ready from the start. */
+  ready?(): Promise<void>;
 }
 
 /** What one text measures in one tokenizer; all fields are sums, so measures add up. */
