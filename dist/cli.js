@@ -13907,8 +13907,7 @@ function createLanguageDetector(languages, detection) {
     const listing = languages.filter((spec) => spec.scripts.includes(script));
     const candidates = new Set(MAJOR_LANGUAGES[script] ?? []);
     for (const spec of listing) for (const code of [spec.iso6393, ...spec.covers]) candidates.add(code);
-    francKnows ??= new Set(francLanguages());
-    const known = francKnows;
+    const known = francKnows ??= new Set(francLanguages());
     const labellable = [...candidates].filter((code) => known.has(code));
     let route = null;
     if (labellable.length > 1) route = { labeller: createFrancLabeller(labellable, 1) };
@@ -18753,21 +18752,16 @@ function noShards(policy, skipped) {
     `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(", ")}) under ${policy.root}` + (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0].path} (${skipped[0].reason})` : "")
   );
 }
-async function prepareOrThrow(policy) {
+async function setupOrThrow(step) {
   try {
-    return await prepareAnalyzers(policy, { deferTokenizerData: true });
+    return await step();
   } catch (err) {
     if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
     throw err;
   }
 }
-async function readyOrThrow(prepared) {
-  try {
-    await prepared.ready();
-  } catch (err) {
-    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
-    throw err;
-  }
+async function prepareOrThrow(policy) {
+  return setupOrThrow(() => prepareAnalyzers(policy, { deferTokenizerData: true }));
 }
 async function measureCorpus(policy, opts, given = {}) {
   const started = performance.now();
@@ -18863,7 +18857,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
       } else todo.push(ref);
     });
   }
-  if (todo.length > 0) await readyOrThrow(prepared);
+  if (todo.length > 0) await setupOrThrow(() => prepared.ready());
   const store = async (r) => {
     const key = keys.get(r.path);
     if (cache && key) await cache.put({ ...r, contentId: key });

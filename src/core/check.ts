@@ -164,24 +164,19 @@ function noShards(policy: Policy, skipped: readonly SkippedFile[]): ConfigError 
   );
 }
 
-/** Returns the analyzers of a policy, or throws ConfigError when a tokenizer or evaluation file cannot be used. */
-export async function prepareOrThrow(policy: Policy): Promise<PreparedAnalyzers> {
+/** Runs a step of setting analyzers up; a setting that cannot be used (AnalyzerSetupError) becomes a ConfigError. */
+async function setupOrThrow<T>(step: () => Promise<T>): Promise<T> {
   try {
-    return await prepareAnalyzers(policy, { deferTokenizerData: true });
+    return await step();
   } catch (err) {
     if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
     throw err;
   }
 }
 
-/** Loads what the analyzers deferred, as prepareOrThrow reports a setup failure. */
-async function readyOrThrow(prepared: PreparedAnalyzers): Promise<void> {
-  try {
-    await prepared.ready();
-  } catch (err) {
-    if (err instanceof AnalyzerSetupError) throw new ConfigError(err.message);
-    throw err;
-  }
+/** Returns the analyzers of a policy, or throws ConfigError when a tokenizer or evaluation file cannot be used. */
+export async function prepareOrThrow(policy: Policy): Promise<PreparedAnalyzers> {
+  return setupOrThrow(() => prepareAnalyzers(policy, { deferTokenizerData: true }));
 }
 
 /**
@@ -327,7 +322,7 @@ export async function measureShards(
 
   // Something is measured here: the tokenizer's ranks module, deferred so that a run served
   // wholly from the cache never imports it, is needed now.
-  if (todo.length > 0) await readyOrThrow(prepared);
+  if (todo.length > 0) await setupOrThrow(() => prepared.ready());
 
   const store = async (r: ShardResult): Promise<void> => {
     const key = keys.get(r.path);

@@ -91,8 +91,7 @@ export function createLanguageDetector(languages: readonly LanguageSpec[], detec
     const listing = languages.filter((spec) => spec.scripts.includes(script));
     const candidates = new Set(MAJOR_LANGUAGES[script] ?? []);
     for (const spec of listing) for (const code of [spec.iso6393, ...spec.covers]) candidates.add(code);
-    francKnows ??= new Set(francLanguages());
-    const known = francKnows;
+    const known = (francKnows ??= new Set(francLanguages()));
     const labellable = [...candidates].filter((code) => known.has(code));
     let route: Route = null;
     // The letter count is checked before; the labeller itself imposes no minimum length.
