@@ -19,6 +19,7 @@ import { describe, expect, it } from 'vitest';
 import { splitCl100k, splitGpt2, splitO200k, unitClasses, type PieceSplitter } from '../../src/measure/tokens/split.js';
 import { BUILTIN_PATTERNS } from '../../src/measure/tokens/patterns.js';
 import { splitterFor } from '../../src/measure/tokens/tiktoken.js';
+import { generator } from '../fixtures/prng.js';
 import { brownSample, EDGE_TEXTS, udhrParagraphs } from '../fixtures/tokens/corpora.js';
 
 const CASES = [
@@ -45,18 +46,6 @@ function piecesOf(splitter: PieceSplitter, regex: RegExp, text: string): { piece
     p = e;
   }
   return { pieces, byRegex };
-}
-
-/** A seeded generator (mulberry32), so a failure can be replayed. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
 }
 
 // Characters each pattern treats specially: case, contractions, digits, every ASCII
@@ -164,7 +153,7 @@ describe('hand-written splitters', () => {
     });
 
     it('splits 20,000 random strings of any BMP code units like the regex', () => {
-      const next = random(20261202);
+      const next = generator(20261202);
       for (let i = 0; i < 20_000; i++) {
         const length = Math.floor(next() * 24);
         let text = '';
@@ -176,7 +165,7 @@ describe('hand-written splitters', () => {
     });
 
     it('splits 100,000 random strings over a tricky alphabet like the regex', () => {
-      const next = random(20260101);
+      const next = generator(20260101);
       for (let i = 0; i < 100_000; i++) {
         const length = Math.floor(next() * 32);
         let text = '';
