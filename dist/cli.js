@@ -8204,7 +8204,7 @@ var ShardFold = class {
       }
     }
     if (this.failure && !account.broken) account.broken = { afterLine: this.failure.line - 1, message: this.failure.message };
-    const tally2 = this.tally;
+    const tally = this.tally;
     const result = {
       schema: RESULT_SCHEMA,
       path: ref.path,
@@ -8215,12 +8215,12 @@ var ShardFold = class {
       contentId,
       settingsId: this.settings.settingsId,
       read: account,
-      languages: tally2.languages,
-      scripts: tally2.scripts,
-      anomalyMasks: tally2.anomalyMasks,
-      anomalyDocs: tally2.anomalyDocs,
-      declared: tally2.declared,
-      samples: { impure: tally2.impure, anomalous: tally2.anomalous, mismatch: tally2.mismatch },
+      languages: tally.languages,
+      scripts: tally.scripts,
+      anomalyMasks: tally.anomalyMasks,
+      anomalyDocs: tally.anomalyDocs,
+      declared: tally.declared,
+      samples: { impure: tally.impure, anomalous: tally.anomalous, mismatch: tally.mismatch },
       elapsedMs: Math.round(performance.now() - started)
     };
     if (ref.subset !== void 0) result.subset = ref.subset;
@@ -10003,6 +10003,33 @@ var FRANC_RANGE_CLASSES = [
   0
 ];
 
+// src/measure/kernels/franc.generated.ts
+var WASM_BASE64 = "AGFzbQEAAAABIAVgBn9/f39/fwBgAAF/YAAAYAJ/fwF/YAV/f39/fwF/AwcGAAECAwMEBAUBcAEBAQUDAQACBg8CfwFBoIgEC38AQaCIBAsHaAgGbWVtb3J5AgAJc2V0VGFibGVzAAALc2FtcGxlRmxhZ3MAAQpyZXNldENvdW50AAINY291bnRUcmlncmFtcwADDGNvdW50Q2xlYW5lZAAEB25lYXJlc3QABQtfX2hlYXBfYmFzZQMBCtYXBk8AQQAgATYChIiAgABBACAANgKAiICAAEEAIAI2AoiIgIAAQQAgAzYCjIiAgABBACAENgKQiICAAEEAIAU2ApSIgIAAQQBBADYCmIiAgAALCwBBACgCnIiAgAAL8AEBBn8CQEEAKAKYiICAACIAQQFIDQAgAEEDcSEBQQAoApSIgIAAIQJBACgCkIiAgAAhA0EAIQQCQCAAQX9qQQNJDQAgAEF8cSEFIAIhAEEAIQQDQCADIAAoAgBBAXRqQQA7AQAgAyAAQQRqKAIAQQF0akEAOwEAIAMgAEEIaigCAEEBdGpBADsBACADIABBDGooAgBBAXRqQQA7AQAgAEEQaiEAIAUgBEEEaiIERw0ACwsgAUUNACACIARBAnRqIQADQCADIAAoAgBBAXRqQQA7AQAgAEEEaiEAIAFBf2oiAQ0ACwtBAEEANgKYiICAAAuyCgEYf0EAIQJBACgClIiAgAAhA0EAKAKQiICAACEEAkBBACgCmIiAgAAiBUEBSA0AIAVBA3EhBkEAIQcCQCAFQX9qQQNJDQAgBUF8cSEIIAMhBUEAIQcDQCAEIAUoAgBBAXRqQQA7AQAgBCAFQQRqKAIAQQF0akEAOwEAIAQgBUEIaigCAEEBdGpBADsBACAEIAVBDGooAgBBAXRqQQA7AQAgBUEQaiEFIAggB0EEaiIHRw0ACwsgBkUNACADIAdBAnRqIQUDQCAEIAUoAgBBAXRqQQA7AQAgBUEEaiEFIAZBf2oiBg0ACwtBACgCjIiAgAAhCUEAKAKIiICAACEGQQAoAoSIgIAAIQoCQAJAIAFBAU4NAEF/IQtBICEMQQAhDUEAIQ5BACEIQQAhDwwBC0EAKAKAiICAACEQQSAgCWshEUF/IAl0QX9zIRJBACEPQQAhCEEAIRNBACEOQQAhDUEAIRRBACEVQQAhAkF/IQtBICEMA0ACQAJAIBAgACATQQF0ai8BACIWQQF0ai8BACIHQSBGIhdFDQAgFCEVDAELAkACQAJAAkAgB0UNAAJAIBUNACAMIRggCyEFIAIhCyAIIQwMBAsCQCACIAtyQQBIDQAgCiALQRtsIAJqQTZsai4BACEFDAILQQAhC0EgIRggBiAIQRB0IAxyIhRBsfPd8XlsQaOdovoHcyARdiIFQQN0akEEaigCACIIRQ0CIAVBAXQhGQNAAkAgCEH//wNxQSBHDQAgBiAZQQJ0aigCACAURw0AIAhBEHZBf2ohBQwDCyAFQQFqIBJxIgVBAXQhGSAGIAVBA3RqQQRqKAIAIggNAAwDCwtBACAPNgKYiICAAEF/DwtBACELQSAhGCAFQQBIDQAgAyAPQQJ0aiAFNgIAIAQgBUEBdGoiBSAFLwEAIgVBAWo7AQAgDyAFRWohDwsgAiEFCwJAAkACQCAFQQAgB0Ggf2pBfyAHQZ9/akEaSRsgFxsiAnIgC3JBAEgNACAKIAVBG2wgC2pBG2wgAmpBAXRqLgEAIQUMAQtBASEUQQAhFSAGIAxBEHQgGHIiF0Gx893xeWwgB0H3lK+veGxBw/+8jnxqcyARdiIFQQN0akEEaigCACIIRQ0BIAVBAXQhGQNAAkAgCEH//wNxIAdHDQAgBiAZQQJ0aigCACAXRw0AIAhBEHZBf2ohBQwCC0EBIRQgBUEBaiAScSIFQQF0IRkgBiAFQQN0akEEaigCACIIDQAMAgsLQQAhFQJAIAVBAE4NAEEBIRQMAQsgAyAPQQJ0aiAFNgIAQQEhFCAEIAVBAXRqIgUgBS8BACIFQQFqOwEAIA8gBUVqIQ8LIAchDCAYIQgLIA0gFnIhDSAOIBZBIHJBn39qQRpJciEOIBNBAWoiEyABRw0ACwsCQAJAAkAgAiALckEASA0AIAogC0EbbCACakE2bGouAQAhBQwBCyAGIAhBEHQgDHIiGUGx893xeWxBo52i+gdzQSAgCWt2IgVBA3RqQQRqKAIAIgdFDQEgBUEBdCEIQX8gCXRBf3MhEgNAAkAgB0H//wNxQSBHDQAgBiAIQQJ0aigCACAZRw0AIAdBEHZBf2ohBQwCCyAFQQFqIBJxIgVBAXQhCCAGIAVBA3RqQQRqKAIAIgcNAAwCCwsgBUEASA0AIAMgD0ECdGogBTYCACAEIAVBAXRqIgUgBS8BACIFQQFqOwEAIA8gBUVqIQ8LQQAgDzYCmIiAgABBACAOQQBHQQF0IA1BgAFJcjYCnIiAgAAgDwvDBQEPf0EAIQJBACgClIiAgAAhA0EAKAKQiICAACEEAkBBACgCmIiAgAAiBUEBSA0AIAVBA3EhBkEAIQcCQCAFQX9qQQNJDQAgBUF8cSEIIAMhBUEAIQcDQCAEIAUoAgBBAXRqQQA7AQAgBCAFQQRqKAIAQQF0akEAOwEAIAQgBUEIaigCAEEBdGpBADsBACAEIAVBDGooAgBBAXRqQQA7AQAgBUEQaiEFIAggB0EEaiIHRw0ACwsgBkUNACADIAdBAnRqIQUDQCAEIAUoAgBBAXRqQQA7AQAgBUEEaiEFIAZBf2oiBg0ACwsCQCABQQNIDQBBACgCiIiAgAAhCEEAKAKEiICAACEJIAFBfmohCkEgQQAoAoyIgIAAIgVrIQtBfyAFdEF/cyEMIAAvAQAhDUECIQZBACECQQAhDgNAIA1B//8DcSEFAkACQAJAQQAgACAOIg9BAWoiDkEBdGovAQAiDUGgf2pBfyANQZ9/akEaSRsgDUEgRhsiAUEAIAVBoH9qQX8gBUGff2pBGkkbIAVBIEYbIhByQQAgACAGQQF0ai8BACIHQaB/akF/IAdBn39qQRpJGyAHQSBGGyIGckEASA0AIAkgEEEbbCABakEbbCAGakEBdGouAQAhBQwBCyAIIAdB95Svr3hsQcP/vI58aiAFQRB0IA1yIhBBsfPd8XlscyALdiIFQQN0akEEaigCACIGRQ0BIAVBAXQhAQNAAkAgBkH//wNxIAdHDQAgCCABQQJ0aigCACAQRw0AIAZBEHZBf2ohBQwCCyAFQQFqIAxxIgVBAXQhASAIIAVBA3RqQQRqKAIAIgYNAAwCCwsgBUEASA0AIAMgAkECdGogBTYCACAEIAVBAXRqIgUgBS8BACIFQQFqOwEAIAIgBUVqIQILIA9BA2ohBiAOIApHDQALC0EAIAI2ApiIgIAAIAILjAUBCH9BACgClIiAgAAhBUEAKAKQiICAACEGAkAgA0EBSA0AIARBACADQQJ0/AsACwJAIABBAUgNAEEAIQcDQAJAIAEgBSAHQQJ0aigCACIIQQJ0aiIJQQRqKAIAIgogCSgCACIJTA0AIAYgCEEBdGovAQAhCCAJQQFqIQsCQCAKIAlrQQFxRQ0AIAQgAiAJQQJ0aigCACIJQQ52Qfz/D3FqIgwgDCgCACAIIAlB//8DcWsiCSAJQR91IglqIAlzakHUfWo2AgAgCyEJCyAKIAtGDQAgCiAJayEKIAIgCUECdGohCQNAIAQgCSgCACILQQ52Qfz/D3FqIgwgDCgCACAIIAtB//8DcWsiCyALQR91IgtqIAtzakHUfWo2AgAgBCAJQQRqKAIAIgtBDnZB/P8PcWoiDCAMKAIAIAggC0H//wNxayILIAtBH3UiC2ogC3NqQdR9ajYCACAJQQhqIQkgCkF+aiIKDQALCyAHQQFqIgcgAEcNAAsLQQAhCAJAIANBAkgNACADQX9qIglBA3EhCwJAAkAgA0F+akEDTw0AQQAhCEEBIQkMAQsgBEEQaiEKIAlBfHEhB0EAIQhBASEJA0AgCUEDaiIMIAlBAmogCUEBaiAJIAggCkF0aigCACAEIAhBAnRqKAIASBsiCCAKQXhqKAIAIAQgCEECdGooAgBIGyIIIApBfGooAgAgBCAIQQJ0aigCAEgbIgggCigCACAEIAhBAnRqKAIASBshCCAJQQRqIQkgCkEQaiEKIAwgB0cNAAsLIAtFDQAgBCAJQQJ0aiEKA0AgCSAIIAooAgAgBCAIQQJ0aigCAEgbIQggCkEEaiEKIAlBAWohCSALQX9qIgsNAAsLIAgL";
+
+// src/measure/kernels/franc-kernel.ts
+var kernel;
+function francKernel() {
+  if (kernel) return kernel;
+  const module = new WebAssembly.Module(Buffer.from(WASM_BASE64, "base64"));
+  const exports = new WebAssembly.Instance(module, {}).exports;
+  const memory = exports.memory;
+  let top = exports.__heap_base.value + 7 & ~7;
+  const allocate = (bytes3) => {
+    const at = top;
+    top = top + bytes3 + 7 & ~7;
+    const missing = top - memory.buffer.byteLength;
+    if (missing > 0) memory.grow(Math.ceil(missing / 65536));
+    return at;
+  };
+  const place = (array) => {
+    const at = allocate(array.byteLength);
+    new Uint8Array(memory.buffer, at, array.byteLength).set(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));
+    return at;
+  };
+  kernel = Object.assign(/* @__PURE__ */ Object.create(null), exports, { allocate, place });
+  return kernel;
+}
+
 // src/measure/range-table.ts
 function lazyRangeTable(starts2, values) {
   let table3;
@@ -10042,7 +10069,6 @@ function rangeTable(starts2, values) {
 // src/measure/language-franc.ts
 var MAX_LENGTH = 2048;
 var MIN_LENGTH = 10;
-var MAX_DIFFERENCE = 300;
 var DIRECT = 27 * 27 * 27;
 var UND = "und";
 var francTable = lazyRangeTable(FRANC_RANGE_STARTS, FRANC_RANGE_CLASSES);
@@ -10162,7 +10188,7 @@ function loadProfiles() {
     }
   }
   if (internCount >= 32767) throw new Error("franc data: too many trigrams for the 16-bit ids of internTable and directId");
-  idTally = new Uint16Array(internCount);
+  placeTables();
 }
 function invert(group, languages) {
   const models = profiles.get(group);
@@ -10187,7 +10213,8 @@ function invert(group, languages) {
       entries[at] = l << 16 | rank2 + 1;
     }
   });
-  return { languages, offsets: offsets2, entries };
+  const kernel2 = francKernel();
+  return { languages, offsets: offsets2, entries, offsetsAt: kernel2.place(offsets2), entriesAt: kernel2.place(entries) };
 }
 var foldedUnit;
 var SEPARATOR = 32;
@@ -10209,82 +10236,45 @@ function cleaningTable() {
   }
   return foldedUnit = folded2;
 }
-var idTally = new Uint16Array(0);
-var distinctIds = new Int32Array(MAX_LENGTH * 2 + 2);
-var counted = 0;
-var cleaned = new Uint16Array(MAX_LENGTH * 2 + 2);
-function nextCount() {
-  for (let d = 0; d < counted; d++) idTally[distinctIds[d]] = 0;
-  counted = 0;
-}
-function tally(a, b, c, sa, sb, sc, distinct) {
-  const id = (sa | sb | sc) >= 0 ? directId[(sa * 27 + sb) * 27 + sc] : hashedId(a << 16 | b, c);
-  if (id < 0) return distinct;
-  const n = idTally[id];
-  idTally[id] = n + 1;
-  if (n !== 0) return distinct;
-  distinctIds[distinct] = id;
-  return distinct + 1;
-}
-function countTrigrams(text, end) {
-  const folded2 = cleaningTable();
-  nextCount();
-  let distinct = 0;
-  let a = 0;
-  let sa = -1;
-  let b = 32;
-  let sb = 0;
-  let pendingSpace = false;
-  let started = false;
-  let units = 0;
-  let letter2 = false;
-  for (let i = 0; i < end; i++) {
-    const unit = text.charCodeAt(i);
-    units |= unit;
-    if (!letter2) letter2 = (unit | 32) - 97 >>> 0 < 26;
-    const c = folded2[unit];
-    if (c === SEPARATOR) {
-      pendingSpace = started;
-      continue;
-    }
-    if (c === CARE) {
-      counted = distinct;
-      return -1;
-    }
-    if (pendingSpace) {
-      distinct = tally(a, b, 32, sa, sb, 0, distinct);
-      a = b;
-      sa = sb;
-      b = 32;
-      sb = 0;
-      pendingSpace = false;
-    }
-    const sc = symbolOf(c);
-    distinct = tally(a, b, c, sa, sb, sc, distinct);
-    a = b;
-    sa = sb;
-    b = c;
-    sb = sc;
-    started = true;
+var SCRATCH_UNITS = MAX_LENGTH * 2 + 2;
+var textAt = 0;
+var cleanedAt = 0;
+var viewsOf;
+var textBytes = Buffer.alloc(0);
+var cleaned = new Uint16Array(0);
+function kernelWithViews() {
+  const kernel2 = francKernel();
+  const buffer = kernel2.memory.buffer;
+  if (buffer !== viewsOf) {
+    viewsOf = buffer;
+    textBytes = Buffer.from(buffer, textAt, MAX_LENGTH * 2);
+    cleaned = new Uint16Array(buffer, cleanedAt, SCRATCH_UNITS);
   }
-  distinct = tally(a, b, 32, sa, sb, 0, distinct);
-  counted = distinct;
-  sampleIsAscii = units < 128;
-  sampleHasAsciiLetter = letter2;
-  return distinct;
+  return kernel2;
 }
-function countCarefully(text, end) {
+function placeTables() {
+  const kernel2 = francKernel();
+  const foldedAt = kernel2.place(cleaningTable());
+  const directAt = kernel2.place(directId);
+  const internAt = kernel2.place(internTable);
+  const tallyAt = kernel2.allocate(internCount * 2);
+  const distinctAt = kernel2.allocate(SCRATCH_UNITS * 4);
+  textAt = kernel2.allocate(MAX_LENGTH * 2);
+  cleanedAt = kernel2.allocate(SCRATCH_UNITS * 2);
+  new Uint16Array(kernel2.memory.buffer, tallyAt, internCount).fill(0);
+  kernel2.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt);
+}
+function countTrigrams(kernel2, text, end) {
+  textBytes.write(end === text.length ? text : text.slice(0, end), 0, end * 2, "utf16le");
+  const distinct = kernel2.countTrigrams(textAt, end);
+  if (distinct >= 0) {
+    const flags = kernel2.sampleFlags();
+    sampleIsAscii = (flags & 1) !== 0;
+    sampleHasAsciiLetter = (flags & 2) !== 0;
+    return distinct;
+  }
   const n = clean(text, end);
-  nextCount();
-  let distinct = 0;
-  for (let p = 0; p + 2 < n; p++) {
-    const a = cleaned[p];
-    const b = cleaned[p + 1];
-    const c = cleaned[p + 2];
-    distinct = tally(a, b, c, symbolOf(a), symbolOf(b), symbolOf(c), distinct);
-  }
-  counted = distinct;
-  return distinct;
+  return kernel2.countCleaned(cleanedAt, n);
 }
 function clean(text, end) {
   const folded2 = cleaningTable();
@@ -10342,33 +10332,19 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
     if (!languages) return null;
     return invert(expression, languages.filter((l) => anything || allowed.has(l)));
   });
-  const distances = new Int32Array(Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
+  const distancesAt = francKernel().allocate(4 * Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
   const label = (text) => {
     if (!text || text.length < minLength) return UND;
     const end = Math.min(text.length, MAX_LENGTH);
-    const fast = countTrigrams(text, end);
-    const distinct = fast >= 0 ? fast : countCarefully(text, end);
+    const kernel2 = kernelWithViews();
+    const distinct = countTrigrams(kernel2, text, end);
     const top = sampleIsAscii && ASCII_SHORTCUT ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 } : topExpression(text, end);
     const name = FRANC_EXPRESSIONS[top.expression];
     const group = groups[top.expression];
     if (!group) return top.count === 0 || !(anything || allowed.has(name)) ? UND : name;
     const k = group.languages.length;
     if (k === 0) return UND;
-    distances.fill(0, 0, k);
-    const { offsets: offsets2, entries } = group;
-    for (let d = 0; d < distinct; d++) {
-      const id = distinctIds[d];
-      const count3 = idTally[id];
-      const last = offsets2[id + 1];
-      for (let e = offsets2[id]; e < last; e++) {
-        const entry = entries[e];
-        const difference = count3 - (entry & 65535);
-        const l = entry >>> 16;
-        distances[l] = distances[l] + (difference < 0 ? -difference : difference) - MAX_DIFFERENCE;
-      }
-    }
-    let best = 0;
-    for (let l = 1; l < k; l++) if (distances[l] < distances[best]) best = l;
+    const best = kernel2.nearest(distinct, group.offsetsAt, group.entriesAt, k, distancesAt);
     return group.languages[best];
   };
   return Object.assign(label, { only: [...only] });
@@ -16526,9 +16502,9 @@ function closerLook(unit, at, anomalies, marks) {
   const mark = markOf(unit);
   if (mark !== null) marks[mark]++;
 }
-function countCharactersFrom(text, from, tally2, bytes3, flags) {
+function countCharactersFrom(text, from, tally, bytes3, flags) {
   const table3 = characterInfo();
-  const { counts, anomalies, marks } = tally2;
+  const { counts, anomalies, marks } = tally;
   const n = text.length;
   let pairs = 0;
   for (let i = from; i < n; i++) {
@@ -16556,18 +16532,18 @@ function countCharactersFrom(text, from, tally2, bytes3, flags) {
     flags |= info;
     if ((info & CLOSER_LOOK) !== 0) closerLook(unit, i, anomalies, marks);
   }
-  finishTally(text, tally2, bytes3, n - pairs, flags);
+  finishTally(text, tally, bytes3, n - pairs, flags);
 }
-function finishTally(text, tally2, bytes3, chars, flags) {
-  tally2.bytes = bytes3;
-  tally2.chars = chars;
-  if ((flags & MOJIBAKE_LEAD) !== 0) tally2.anomalies.mojibake = countMojibake(text);
+function finishTally(text, tally, bytes3, chars, flags) {
+  tally.bytes = bytes3;
+  tally.chars = chars;
+  if ((flags & MOJIBAKE_LEAD) !== 0) tally.anomalies.mojibake = countMojibake(text);
 }
 var unusedTally = new CharacterTally();
 var offsets = new Int32Array(1024);
-function scan(text, record, tally2) {
+function scan(text, record, tally) {
   const table3 = characterInfo();
-  const into = tally2 ?? unusedTally;
+  const into = tally ?? unusedTally;
   const { counts, anomalies, marks } = into;
   const n = text.length;
   let out = offsets;
@@ -16589,9 +16565,9 @@ function scan(text, record, tally2) {
     const info = table3[unit];
     let cls = info >>> CLASS_SHIFT;
     if (cls >= NEEDS_SEGMENTER) {
-      if ((cls & EXTENDED_PICTOGRAPHIC) !== 0 && i > 0 && text.charCodeAt(i - 1) === ZWJ) return stop(text, i, tally2, bytes3, flags, out);
+      if ((cls & EXTENDED_PICTOGRAPHIC) !== 0 && i > 0 && text.charCodeAt(i - 1) === ZWJ) return stop(text, i, tally, bytes3, flags, out);
       cls &= CLASS_MASK;
-      if (cls === NEEDS_SEGMENTER) return stop(text, i, tally2, bytes3, flags, out);
+      if (cls === NEEDS_SEGMENTER) return stop(text, i, tally, bytes3, flags, out);
     }
     const id = info & SCRIPT_BITS;
     counts[id] = counts[id] + 1;
@@ -16680,12 +16656,12 @@ function scan(text, record, tally2) {
     count3++;
   }
   offsets = out;
-  if (tally2 !== null) finishTally(text, tally2, bytes3, n, flags);
+  if (tally !== null) finishTally(text, tally, bytes3, n, flags);
   return count3;
 }
-function stop(text, at, tally2, bytes3, flags, out) {
+function stop(text, at, tally, bytes3, flags, out) {
   offsets = out;
-  if (tally2 !== null) countCharactersFrom(text, at, tally2, bytes3, flags);
+  if (tally !== null) countCharactersFrom(text, at, tally, bytes3, flags);
   return -1;
 }
 function wordLike(last, hasCore, connectors, trailingIgnorables) {
@@ -16715,11 +16691,11 @@ var memoText = null;
 var memoCount = 0;
 var memoOffsets = new Int32Array(1024);
 var memoWalks = 0;
-function measureText(text, tally2) {
-  tally2.counts.fill(0);
-  tally2.anomalies = emptyAnomalyCounts();
-  tally2.marks = emptyMarkCounts();
-  return wordsOf2(text, scan(text, true, tally2));
+function measureText(text, tally) {
+  tally.counts.fill(0);
+  tally.anomalies = emptyAnomalyCounts();
+  tally.marks = emptyMarkCounts();
+  return wordsOf2(text, scan(text, true, tally));
 }
 function wordsOf2(text, fast) {
   if (fast < 0) {

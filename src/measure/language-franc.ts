@@ -19,19 +19,24 @@
 // arithmetic, so the labels are equal (a test checks this on UDHR and Brown); it runs
 // at 27–33 MB/s with 24 candidates and ~70 MB/s on Hindi with 3 (30–40x and 15x franc).
 //
+// The counting and scoring loops now run as WebAssembly (kernels/franc.c), over the same
+// tables laid out in the kernel's memory: over the bench corpus's 33,658 documents with 37
+// candidates, 8 alternating rounds in one process (CPU time, shared 2-core machine,
+// 2026-12-02), the labeller took 0.59–0.68x the time of the same loops in TypeScript, with
+// the same labels; V8's code for them had stayed at 9–11 ns a character.
+//
 // Judging from a shorter prefix than franc's 2048 units was the other option; it was
 // not needed for the measurer's goal (15 MB/s on English; measured 19–23 MB/s whole)
 // and would give other labels than franc on long documents.
 import { data } from 'franc/data.js';
 import { FRANC_CLASS_MASKS, FRANC_EXPRESSIONS, FRANC_RANGE_CLASSES, FRANC_RANGE_STARTS } from './data/franc-scripts.generated.js';
+import { francKernel, type FrancKernel } from './kernels/franc-kernel.js';
 import { lazyRangeTable } from './range-table.js';
 
 /** franc's sample: the first 2048 UTF-16 units are enough to tell languages apart. */
 export const MAX_LENGTH = 2048;
 /** franc's default minimum text length (UTF-16 units) below which it answers `und`. */
 export const MIN_LENGTH = 10;
-/** franc's distance for a trigram that a language's profile lacks. */
-const MAX_DIFFERENCE = 300;
 
 /**
  * Trigrams of `a`–`z` and space (27^3 of them; a third of franc's 14,856 distinct
@@ -123,6 +128,7 @@ const groupLanguages = new Map<string, string[]>();
 /** Per script group, per language: the profile as franc's data writes it (a language may have one in two groups: `srp` in Latin and Cyrillic). */
 const profiles = new Map<string, Map<string, string>>();
 
+/** The intern table's hash; kernels/franc.c computes the same one to look trigrams up, so change both together. */
 function hash(hi: number, lo: number, bits: number): number {
   return (Math.imul(hi, 0x9e3779b1) ^ Math.imul(lo + 0x7f4a7c15, 0x85ebca77)) >>> (32 - bits);
 }
@@ -199,7 +205,7 @@ function loadProfiles(): void {
     }
   }
   if (internCount >= 0x7fff) throw new Error('franc data: too many trigrams for the 16-bit ids of internTable and directId');
-  idTally = new Uint16Array(internCount);
+  placeTables();
 }
 
 /**
@@ -215,6 +221,9 @@ interface InvertedProfiles {
   offsets: Int32Array;
   /** Per entry: language index << 16 | (rank + 1), one load per entry in the hot loop. */
   entries: Int32Array;
+  /** Where the kernel holds copies of offsets and entries. */
+  offsetsAt: number;
+  entriesAt: number;
 }
 
 /** Returns the inverted profiles of `languages` (all in `group`). */
@@ -242,7 +251,8 @@ function invert(group: string, languages: string[]): InvertedProfiles {
       entries[at] = (l << 16) | (rank + 1);
     }
   });
-  return { languages, offsets, entries };
+  const kernel = francKernel();
+  return { languages, offsets, entries, offsetsAt: kernel.place(offsets), entriesAt: kernel.place(entries) };
 }
 
 // ---- cleaning and counting ---------------------------------------------------------
@@ -276,120 +286,73 @@ function cleaningTable(): Uint16Array {
   return (foldedUnit = folded);
 }
 
-// Per-call scratch. Trigrams are counted by interned id, so only trigrams that some
-// profile has are counted at all: any other one costs every language the same 300,
-// which cannot change which language is nearest (nor a tie), so it is left out.
+// Per-call scratch, in the kernel's memory. Trigrams are counted by interned id, so only
+// trigrams that some profile has are counted at all: any other one costs every language
+// the same 300, which cannot change which language is nearest (nor a tie), so it is left
+// out. Counting and scoring run in the kernel (kernels/franc.c); cleaning a text that
+// needs care, and the script choice, stay here.
 //
 // Per id, its count in this call (a sample has at most 2 × 2048 + 2 trigrams, within 16
-// bits); the ids the previous call counted are set back to 0 before the next one counts.
-let idTally: Uint16Array = new Uint16Array(0);
-/** The profile trigrams of the sample, by interned id, in order of first sight. */
-const distinctIds = new Int32Array(MAX_LENGTH * 2 + 2);
-/** How many of distinctIds the last count filled (their tallies are still set). */
-let counted = 0;
-/** The cleaned sample, written only for a text that needs care (countCarefully). */
-const cleaned = new Uint16Array(MAX_LENGTH * 2 + 2);
+// bits); the kernel sets the ids the previous call counted back to 0 before the next one
+// counts.
+const SCRATCH_UNITS = MAX_LENGTH * 2 + 2;
 
-/** Starts a new count: sets the tallies of the previous one back to 0. */
-function nextCount(): void {
-  for (let d = 0; d < counted; d++) idTally[distinctIds[d] as number] = 0;
-  counted = 0;
+/** Where the kernel's per-call buffers are: the sample's units, and the cleaned sample of a text that needs care. */
+let textAt = 0;
+let cleanedAt = 0;
+/** Views of those buffers, made again when the kernel's memory has grown (which detaches them). */
+let viewsOf: ArrayBuffer | undefined;
+let textBytes: Buffer = Buffer.alloc(0);
+let cleaned: Uint16Array = new Uint16Array(0);
+
+/** Returns the kernel with current views of its per-call buffers. */
+function kernelWithViews(): FrancKernel {
+  const kernel = francKernel();
+  const buffer = kernel.memory.buffer;
+  if (buffer !== viewsOf) {
+    viewsOf = buffer;
+    textBytes = Buffer.from(buffer, textAt, MAX_LENGTH * 2);
+    cleaned = new Uint16Array(buffer, cleanedAt, SCRATCH_UNITS);
+  }
+  return kernel;
 }
 
-/**
- * Counts the trigram (a, b, c) of the cleaned sample, whose direct-index symbols are
- * sa, sb, sc, when a profile has it; returns the new number of distinct ids.
- */
-function tally(a: number, b: number, c: number, sa: number, sb: number, sc: number, distinct: number): number {
-  const id = (sa | sb | sc) >= 0 ? (directId[(sa * 27 + sb) * 27 + sc] as number) : hashedId((a << 16) | b, c);
-  if (id < 0) return distinct;
-  const n = idTally[id] as number;
-  idTally[id] = n + 1;
-  if (n !== 0) return distinct;
-  distinctIds[distinct] = id;
-  return distinct + 1;
+/** Lays the interned tables and the per-call buffers out in the kernel's memory, once. */
+function placeTables(): void {
+  const kernel = francKernel();
+  const foldedAt = kernel.place(cleaningTable());
+  const directAt = kernel.place(directId);
+  const internAt = kernel.place(internTable);
+  const tallyAt = kernel.allocate(internCount * 2);
+  const distinctAt = kernel.allocate(SCRATCH_UNITS * 4);
+  textAt = kernel.allocate(MAX_LENGTH * 2);
+  cleanedAt = kernel.allocate(SCRATCH_UNITS * 2);
+  new Uint16Array(kernel.memory.buffer, tallyAt, internCount).fill(0);
+  kernel.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt);
 }
 
 /**
  * Counts the profile trigrams of `' ' + clean(sample) + ' '` (trigram-utils: U+0021–U+0040
- * runs and white space collapse to one space, trimmed, lower-cased) while cleaning, with
- * no cleaned copy: returns how many distinct ones there are (their ids in distinctIds,
- * counts in idTally), or -1 at the first unit that needs care (countCarefully then).
+ * runs and white space collapse to one space, trimmed, lower-cased): returns how many
+ * distinct ones there are, their ids and counts left in the kernel for scoring.
  *
- * Measured with the labellers of the bench corpus's scripts over its 33,658 documents
- * (40 MB bench corpus, CPU time, 8 alternating rounds of two copies in one process,
- * shared 2-core machine): cleaning into a buffer, then counting every trigram in a
- * per-call hash table and interning the distinct ones took 1.07x the labelling time of
- * this one pass; the one-word tally then took 0.93–0.95x the counting time of separate
- * stamp and count arrays, and the one folded table 0.93–0.95x that of a kind table and
- * a lower-case table. All three together: 0.80–0.84x the labelling time. Later, 16-bit
- * counts set back through the list of counted ids (instead of a 32-bit stamp-and-count
- * word) and 16-bit direct ids took 0.93x the labelling time (medians of 8 rounds, both
- * orders, 37 candidates over the same corpus, same labels).
+ * The kernel cleans and counts in one pass and gives up (-1) at the first unit that needs
+ * care; such a text is cleaned here first. Measured before the kernel, in this language:
+ * cleaning into a buffer and counting in a per-call hash table took 1.07x the labelling
+ * time of the one pass, and the one-word tally, the one folded table, 16-bit counts and
+ * 16-bit direct ids each took a few per cent off (medians of 8 alternating rounds).
  */
-function countTrigrams(text: string, end: number): number {
-  const folded = cleaningTable();
-  nextCount();
-  let distinct = 0;
-  // The last two cleaned units and their symbols. A NUL stands before the leading space:
-  // no profile has a trigram with NUL (loadProfiles checks), so (NUL, space, first unit) counts nothing.
-  let a = 0;
-  let sa = -1;
-  let b = 0x20;
-  let sb = 0;
-  let pendingSpace = false;
-  let started = false;
-  let units = 0;
-  let letter = false;
-  for (let i = 0; i < end; i++) {
-    const unit = text.charCodeAt(i);
-    units |= unit;
-    if (!letter) letter = ((unit | 0x20) - 0x61) >>> 0 < 26;
-    const c = folded[unit] as number;
-    if (c === SEPARATOR) {
-      pendingSpace = started;
-      continue;
-    }
-    if (c === CARE) {
-      counted = distinct; // set back by the careful count's nextCount
-      return -1;
-    }
-    if (pendingSpace) {
-      distinct = tally(a, b, 0x20, sa, sb, 0, distinct);
-      a = b;
-      sa = sb;
-      b = 0x20;
-      sb = 0;
-      pendingSpace = false;
-    }
-    const sc = symbolOf(c);
-    distinct = tally(a, b, c, sa, sb, sc, distinct);
-    a = b;
-    sa = sb;
-    b = c;
-    sb = sc;
-    started = true;
+function countTrigrams(kernel: FrancKernel, text: string, end: number): number {
+  textBytes.write(end === text.length ? text : text.slice(0, end), 0, end * 2, 'utf16le');
+  const distinct = kernel.countTrigrams(textAt, end);
+  if (distinct >= 0) {
+    const flags = kernel.sampleFlags();
+    sampleIsAscii = (flags & 1) !== 0;
+    sampleHasAsciiLetter = (flags & 2) !== 0;
+    return distinct;
   }
-  distinct = tally(a, b, 0x20, sa, sb, 0, distinct);
-  counted = distinct;
-  sampleIsAscii = units < 0x80;
-  sampleHasAsciiLetter = letter;
-  return distinct;
-}
-
-/** Counts as countTrigrams does, for a text with a unit that needs care: cleaned into a buffer first. */
-function countCarefully(text: string, end: number): number {
   const n = clean(text, end);
-  nextCount();
-  let distinct = 0;
-  for (let p = 0; p + 2 < n; p++) {
-    const a = cleaned[p] as number;
-    const b = cleaned[p + 1] as number;
-    const c = cleaned[p + 2] as number;
-    distinct = tally(a, b, c, symbolOf(a), symbolOf(b), symbolOf(c), distinct);
-  }
-  counted = distinct;
-  return distinct;
+  return kernel.countCleaned(cleanedAt, n);
 }
 
 /** Writes `' ' + clean(sample) + ' '` into `cleaned`, lower-casing units that need care too, and returns its length. */
@@ -468,7 +431,7 @@ export function createFrancLabeller(only: readonly string[], minLength: number =
     return invert(expression, languages.filter((l) => anything || allowed.has(l)));
   });
   // Sums stay within ±(2 × 2048 + 2)^2 < 2^31.
-  const distances = new Int32Array(Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
+  const distancesAt = francKernel().allocate(4 * Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
 
   const label = (text: string): string => {
     if (!text || text.length < minLength) return UND;
@@ -476,8 +439,8 @@ export function createFrancLabeller(only: readonly string[], minLength: number =
     // Cleaning first tells whether the sample is ASCII; then franc's script is Latin if
     // it has an ASCII letter (no other expression matches ASCII), and the per-character
     // script count is skipped — most of English text's labelling time otherwise.
-    const fast = countTrigrams(text, end);
-    const distinct = fast >= 0 ? fast : countCarefully(text, end);
+    const kernel = kernelWithViews();
+    const distinct = countTrigrams(kernel, text, end);
     const top =
       sampleIsAscii && ASCII_SHORTCUT
         ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 }
@@ -487,23 +450,8 @@ export function createFrancLabeller(only: readonly string[], minLength: number =
     if (!group) return top.count === 0 || !(anything || allowed.has(name)) ? UND : name;
     const k = group.languages.length;
     if (k === 0) return UND;
-
-    // Each language's distance less the 300 per distinct trigram that all are charged alike.
-    distances.fill(0, 0, k);
-    const { offsets, entries } = group;
-    for (let d = 0; d < distinct; d++) {
-      const id = distinctIds[d] as number;
-      const count = idTally[id] as number;
-      const last = offsets[id + 1] as number;
-      for (let e = offsets[id] as number; e < last; e++) {
-        const entry = entries[e] as number;
-        const difference = count - (entry & 0xffff); // count − rank − 1
-        const l = entry >>> 16;
-        distances[l] = (distances[l] as number) + (difference < 0 ? -difference : difference) - MAX_DIFFERENCE;
-      }
-    }
-    let best = 0;
-    for (let l = 1; l < k; l++) if ((distances[l] as number) < (distances[best] as number)) best = l;
+    // Each language's distance less the 300 per distinct trigram that all are charged alike, summed in the kernel.
+    const best = kernel.nearest(distinct, group.offsetsAt, group.entriesAt, k, distancesAt);
     return group.languages[best] as string;
   };
   return Object.assign(label, { only: [...only] });

@@ -8,6 +8,9 @@ import type { LanguageSpec } from '../../src/policy/types.js';
 import { MAJOR_LANGUAGES } from '../../src/measure/language-candidates.js';
 import { createLanguageDetector, iso6393Of } from '../../src/measure/language.js';
 import { createFrancLabeller } from '../../src/measure/language-franc.js';
+import { francKernel } from '../../src/measure/kernels/franc-kernel.js';
+// @ts-expect-error: a plain JavaScript build script, without type declarations
+import { staleKernels } from '../../scripts/gen-kernels.mjs';
 import { dominantScriptOf, scriptProfile } from '../../src/measure/script.js';
 import { allUdhr, brownParagraphs, loadUdhr, spread } from './corpora.js';
 import { prng } from '../sampling/fixtures.js';
@@ -104,6 +107,22 @@ describe('the fast labeller gives franc’s labels (franc@6.2.0 with `only`)', (
       const wrong = texts.filter((text) => label(text) !== franc(text, { only }));
       expect(wrong.map((text) => ({ text: text.slice(0, 40), length: text.length })), only.join(',')).toEqual([]);
     }
+  });
+
+  it('keeps franc’s labels for a labeller made before the kernel’s memory grew', () => {
+    // Each labeller lays its inverted profiles out in the WebAssembly kernel's memory;
+    // growing that memory detaches the views made over it, which the labeller must make again.
+    const first = createFrancLabeller(['eng', 'fra', 'rus', 'hin']);
+    expect(first(loadUdhr('hin').text)).toBe('hin'); // makes the views, before the growth
+    const before = francKernel().memory.buffer.byteLength;
+    for (let k = 0; k < 12; k++) createFrancLabeller([]);
+    expect(francKernel().memory.buffer.byteLength).toBeGreaterThan(before);
+    const samples = [loadUdhr('eng').text, loadUdhr('fra').text, loadUdhr('rus').text, loadUdhr('hin').text, ...spread(brownParagraphs(), 50)];
+    for (const text of samples) expect(first(text)).toBe(franc(text, { only: ['eng', 'fra', 'rus', 'hin'] }));
+  });
+
+  it('runs a kernel built from the current C source (scripts/gen-kernels.mjs --check)', () => {
+    expect(staleKernels()).toEqual([]);
   });
 
   it('with franc’s own minimum length', () => {

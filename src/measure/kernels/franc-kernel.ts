@@ -1,0 +1,45 @@
+// The franc labeller's WebAssembly kernel (franc.c): instantiated once per thread, on
+// first use, with a bump allocator over its memory for the tables the labeller lays out.
+import { WASM_BASE64 } from './franc.generated.js';
+
+interface FrancExports {
+  memory: WebAssembly.Memory;
+  __heap_base: WebAssembly.Global;
+  setTables(folded: number, directId: number, internTable: number, internBits: number, idTally: number, distinctIds: number): void;
+  sampleFlags(): number;
+  countTrigrams(text: number, end: number): number;
+  countCleaned(cleaned: number, n: number): number;
+  nearest(distinct: number, offsets: number, entries: number, k: number, distances: number): number;
+}
+
+export interface FrancKernel extends FrancExports {
+  /** Reserves `bytes` (8-byte aligned) and returns their address; the memory grows as needed, which detaches views made before. */
+  allocate(bytes: number): number;
+  /** Copies a typed array into newly reserved memory and returns its address. */
+  place(array: Uint16Array | Int16Array | Int32Array): number;
+}
+
+let kernel: FrancKernel | undefined;
+
+/** Returns this thread's kernel, instantiating it on first use (synchronously: the module is 3 KB). */
+export function francKernel(): FrancKernel {
+  if (kernel) return kernel;
+  const module = new WebAssembly.Module(Buffer.from(WASM_BASE64, 'base64'));
+  const exports = new WebAssembly.Instance(module, {}).exports as unknown as FrancExports;
+  const memory = exports.memory;
+  let top = ((exports.__heap_base.value as number) + 7) & ~7;
+  const allocate = (bytes: number): number => {
+    const at = top;
+    top = (top + bytes + 7) & ~7;
+    const missing = top - memory.buffer.byteLength;
+    if (missing > 0) memory.grow(Math.ceil(missing / 65536));
+    return at;
+  };
+  const place = (array: Uint16Array | Int16Array | Int32Array): number => {
+    const at = allocate(array.byteLength);
+    new Uint8Array(memory.buffer, at, array.byteLength).set(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));
+    return at;
+  };
+  kernel = Object.assign(Object.create(null) as FrancExports, exports, { allocate, place }) as FrancKernel;
+  return kernel;
+}

@@ -1,0 +1,167 @@
+// The two hot loops of the franc labeller (language-franc.ts), compiled to WebAssembly:
+// counting the profile trigrams of a cleaned sample, and scoring the candidates of one
+// script group over them. The tables are the labeller's own, laid out by it in this
+// module's memory; the arithmetic is the TypeScript version's, unit for unit, so the
+// labels are the same (language tests compare them with franc).
+//
+// Build: node scripts/build-kernels.mjs (clang --target=wasm32, wasm-ld; Debian packages
+// clang and lld). The binary is committed as a generated file beside this source.
+#include <stdint.h>
+
+typedef uint16_t u16;
+typedef int16_t i16;
+typedef int32_t i32;
+typedef uint32_t u32;
+
+#define SEPARATOR 0x20
+#define CARE 0
+#define MAX_DIFFERENCE 300 // franc's distance for a trigram that a profile lacks
+
+// Tables, set once by setTables (pointers into this memory).
+static const u16 *folded;      // per BMP unit: SEPARATOR, CARE or its lower case
+static const i16 *directId;    // per a-z/space trigram: interned id or -1
+static const i32 *internTable; // open addressing: [2s] = hi, [2s+1] = lo | (id + 1) << 16
+static u32 internBits;
+static u16 *idTally;           // per interned id: count in this sample
+static i32 *distinctIds;       // ids of this sample, in order of first sight
+static i32 counted;            // how many of distinctIds hold set tallies
+static i32 flags;              // bit 0: sample all ASCII; bit 1: it has an ASCII letter
+
+__attribute__((export_name("setTables"))) void setTables(const u16 *f, const i16 *d, const i32 *t, u32 bits, u16 *tally, i32 *distinct) {
+  folded = f;
+  directId = d;
+  internTable = t;
+  internBits = bits;
+  idTally = tally;
+  distinctIds = distinct;
+  counted = 0;
+}
+
+__attribute__((export_name("sampleFlags"))) i32 sampleFlags(void) { return flags; }
+
+static inline i32 symbolOf(u32 unit) { return unit == 0x20 ? 0 : (unit - 0x61u) < 26u ? (i32)(unit - 0x60) : -1; }
+
+// The intern table's hash, as language-franc.ts computes it when it builds the table.
+static inline i32 hashedId(const i32 *restrict table, u32 bits, u32 hi, u32 lo) {
+  u32 mask = (1u << bits) - 1;
+  u32 slot = ((hi * 0x9e3779b1u) ^ ((lo + 0x7f4a7c15u) * 0x85ebca77u)) >> (32 - bits);
+  for (;;) {
+    u32 second = (u32)table[2 * slot + 1];
+    if (second == 0) return -1;
+    if ((second & 0xffff) == lo && (u32)table[2 * slot] == hi) return (i32)(second >> 16) - 1;
+    slot = (slot + 1) & mask;
+  }
+}
+
+// The tables as one set of local pointers: C globals live in linear memory, so a store
+// through a table pointer would otherwise make the compiler load the globals again.
+typedef struct {
+  const u16 *restrict folded;
+  const i16 *restrict direct;
+  const i32 *restrict intern;
+  u32 bits;
+  u16 *restrict tally;
+  i32 *restrict distinct;
+} Tables;
+
+static inline i32 tally(const Tables *t, u32 a, u32 b, u32 c, i32 sa, i32 sb, i32 sc, i32 distinct) {
+  i32 id = (sa | sb | sc) >= 0 ? t->direct[(sa * 27 + sb) * 27 + sc] : hashedId(t->intern, t->bits, (a << 16) | b, c);
+  if (id < 0) return distinct;
+  u32 n = t->tally[id];
+  t->tally[id] = (u16)(n + 1);
+  // Written every time and kept only when new: no branch on a coin flip.
+  t->distinct[distinct] = id;
+  return distinct + (n == 0);
+}
+
+#define TABLES const Tables tables = {folded, directId, internTable, internBits, idTally, distinctIds}
+
+/** Sets the tallies of the last count back to 0. */
+__attribute__((export_name("resetCount"))) void resetCount(void) {
+  for (i32 d = 0; d < counted; d++) idTally[distinctIds[d]] = 0;
+  counted = 0;
+}
+
+/** As countTrigrams in language-franc.ts: the number of distinct profile trigrams of the first `end` units at `text`, or -1 at a unit that needs care. */
+__attribute__((export_name("countTrigrams"))) i32 countTrigrams(const u16 *restrict text, i32 end) {
+  resetCount();
+  TABLES;
+  const u16 *restrict fold = tables.folded;
+  i32 distinct = 0;
+  u32 a = 0, b = 0x20;
+  i32 sa = -1, sb = 0;
+  int pendingSpace = 0, started = 0;
+  u32 units = 0;
+  int letter = 0;
+  for (i32 i = 0; i < end; i++) {
+    u32 unit = text[i];
+    units |= unit;
+    letter |= ((unit | 0x20) - 0x61u) < 26u;
+    u32 c = fold[unit];
+    if (c == SEPARATOR) {
+      pendingSpace = started;
+      continue;
+    }
+    if (c == CARE) {
+      counted = distinct;
+      return -1;
+    }
+    if (pendingSpace) {
+      distinct = tally(&tables, a, b, 0x20, sa, sb, 0, distinct);
+      a = b;
+      sa = sb;
+      b = 0x20;
+      sb = 0;
+      pendingSpace = 0;
+    }
+    i32 sc = symbolOf(c);
+    distinct = tally(&tables, a, b, c, sa, sb, sc, distinct);
+    a = b;
+    sa = sb;
+    b = c;
+    sb = sc;
+    started = 1;
+  }
+  distinct = tally(&tables, a, b, 0x20, sa, sb, 0, distinct);
+  counted = distinct;
+  flags = (units < 0x80 ? 1 : 0) | (letter ? 2 : 0);
+  return distinct;
+}
+
+/** As countCarefully's loop: counts the trigrams of an already cleaned sample of n units. */
+__attribute__((export_name("countCleaned"))) i32 countCleaned(const u16 *restrict cleaned, i32 n) {
+  resetCount();
+  TABLES;
+  i32 distinct = 0;
+  for (i32 p = 0; p + 2 < n; p++) {
+    u32 a = cleaned[p], b = cleaned[p + 1], c = cleaned[p + 2];
+    distinct = tally(&tables, a, b, c, symbolOf(a), symbolOf(b), symbolOf(c), distinct);
+  }
+  counted = distinct;
+  return distinct;
+}
+
+/**
+ * Scores k languages of one group (inverted profiles: entries of id t at
+ * offsets[t] .. offsets[t + 1], each language << 16 | (rank + 1)) over the last count's
+ * `distinct` trigrams; returns the index of the nearest, the first on a tie.
+ */
+__attribute__((export_name("nearest"))) i32 nearest(i32 distinct, const i32 *restrict offsets, const i32 *restrict entries, i32 k, i32 *restrict distances) {
+  const u16 *restrict idTally_ = idTally;
+  const i32 *restrict distinctIds_ = distinctIds;
+  for (i32 l = 0; l < k; l++) distances[l] = 0;
+  for (i32 d = 0; d < distinct; d++) {
+    i32 id = distinctIds_[d];
+    i32 count = idTally_[id];
+    i32 last = offsets[id + 1];
+    for (i32 e = offsets[id]; e < last; e++) {
+      u32 entry = (u32)entries[e];
+      i32 difference = count - (i32)(entry & 0xffff);
+      u32 l = entry >> 16;
+      distances[l] += (difference < 0 ? -difference : difference) - MAX_DIFFERENCE;
+    }
+  }
+  i32 best = 0;
+  for (i32 l = 1; l < k; l++) if (distances[l] < distances[best]) best = l;
+  return best;
+}
