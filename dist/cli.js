@@ -10008,8 +10008,13 @@ var WASM_BASE64 = "AGFzbQEAAAABIAVgBn9/f39/fwBgAAF/YAAAYAJ/fwF/YAV/f39/fwF/AwcGA
 
 // src/measure/kernels/franc-kernel.ts
 var kernel;
+function kernelUnavailable() {
+  return typeof WebAssembly === "undefined" ? "this Node.js runs without WebAssembly (started with --jitless?), and the language labeller runs as a WebAssembly kernel: run sluice without that flag" : null;
+}
 function francKernel() {
   if (kernel) return kernel;
+  const unavailable = kernelUnavailable();
+  if (unavailable) throw new Error(unavailable);
   const module = new WebAssembly.Module(Buffer.from(WASM_BASE64, "base64"));
   const exports = new WebAssembly.Instance(module, {}).exports;
   const memory = exports.memory;
@@ -18286,6 +18291,8 @@ var AnalyzerSetupError = class extends Error {
   name = "AnalyzerSetupError";
 };
 async function prepareAnalyzers(policy, options = {}) {
+  const unavailable = kernelUnavailable();
+  if (unavailable) throw new AnalyzerSetupError(unavailable);
   const measure = createMeasurer({ languages: policy.languages, detection: policy.detection });
   const read = readOptionsOf(policy);
   let main2;

@@ -2,7 +2,7 @@
 // duplicate index, evaluation overlap), the identity of those settings for the
 // cache, and the cross-shard step that runs once every shard is measured.
 import { relative } from 'node:path';
-import { createMeasurer, forEachWord, wordOffsets } from '../measure/index.js';
+import { createMeasurer, forEachWord, kernelUnavailable, wordOffsets } from '../measure/index.js';
 import { buildEvalIndex, duplicateOptionsFrom, DuplicateIndexBuilder, evalSetId, findContamination, type EvalIndex, type EvalItem } from '../measure/duplicates/index.js';
 import { dictionaryFertility, loadTokenizer, measureTokens, readWordList, TokenizerError, type SharedTokenizerTables, type TokenCounter } from '../measure/tokens/index.js';
 import type { Policy } from '../policy/types.js';
@@ -62,6 +62,9 @@ export class AnalyzerSetupError extends Error {
 
 /** Returns the analyzers of a policy, ready to scan shards. */
 export async function prepareAnalyzers(policy: Policy, options: PrepareOptions = {}): Promise<PreparedAnalyzers> {
+  // Said once, before any shard is read, rather than as every shard failing on its first line.
+  const unavailable = kernelUnavailable();
+  if (unavailable) throw new AnalyzerSetupError(unavailable);
   const measure = createMeasurer({ languages: policy.languages, detection: policy.detection });
   const read = readOptionsOf(policy);
 

@@ -26,6 +26,14 @@ describe('a policy that cannot be judged exits 2 with the file, line and key', (
     expect(r.stderr).toMatch(/p\.yaml:\d+:\d+: corpus.*include/);
   });
 
+  it('says so once, before reading, when Node.js runs without WebAssembly (--jitless)', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/a.jsonl': lines(3, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml')], { env: { NODE_OPTIONS: '--jitless' } });
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/without WebAssembly \(started with --jitless\?\)/);
+    expect(r.stdout).toBe('');
+  });
+
   it('says when no shard matched', () => {
     const root = corpus({ 'p.yaml': policyYaml(), 'other/a.jsonl': lines(3, ENGLISH) });
     const r = sluice(['check', join(root, 'p.yaml')]);

@@ -21,9 +21,18 @@ export interface FrancKernel extends FrancExports {
 
 let kernel: FrancKernel | undefined;
 
+/** Why the kernel cannot run in this process, or null when it can: Node.js without WebAssembly (started with --jitless, say). */
+export function kernelUnavailable(): string | null {
+  return typeof WebAssembly === 'undefined'
+    ? 'this Node.js runs without WebAssembly (started with --jitless?), and the language labeller runs as a WebAssembly kernel: run sluice without that flag'
+    : null;
+}
+
 /** Returns this thread's kernel, instantiating it on first use (synchronously: the module is 3 KB). */
 export function francKernel(): FrancKernel {
   if (kernel) return kernel;
+  const unavailable = kernelUnavailable();
+  if (unavailable) throw new Error(unavailable);
   const module = new WebAssembly.Module(Buffer.from(WASM_BASE64, 'base64'));
   const exports = new WebAssembly.Instance(module, {}).exports as unknown as FrancExports;
   const memory = exports.memory;
