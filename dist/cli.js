@@ -10219,7 +10219,7 @@ function invert(group, languages) {
     }
   });
   const kernel2 = francKernel();
-  return { languages, offsets: offsets2, entries, offsetsAt: kernel2.place(offsets2), entriesAt: kernel2.place(entries) };
+  return { languages, offsetsAt: kernel2.place(offsets2), entriesAt: kernel2.place(entries) };
 }
 var foldedUnit;
 var SEPARATOR = 32;

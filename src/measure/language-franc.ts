@@ -219,12 +219,9 @@ function loadProfiles(): void {
  */
 interface InvertedProfiles {
   languages: string[];
-  /** Entries of trigram id t: offsets[t] .. offsets[t + 1]. */
-  offsets: Int32Array;
-  /** Per entry: language index << 16 | (rank + 1), one load per entry in the hot loop. */
-  entries: Int32Array;
-  /** Where the kernel holds copies of offsets and entries. */
+  /** Where the kernel holds the offsets: entries of trigram id t are entries[offsets[t]] .. entries[offsets[t + 1] - 1]. */
   offsetsAt: number;
+  /** Where the kernel holds the entries: per entry, language index << 16 | (rank + 1), one load per entry in the hot loop. */
   entriesAt: number;
 }
 
@@ -254,7 +251,7 @@ function invert(group: string, languages: string[]): InvertedProfiles {
     }
   });
   const kernel = francKernel();
-  return { languages, offsets, entries, offsetsAt: kernel.place(offsets), entriesAt: kernel.place(entries) };
+  return { languages, offsetsAt: kernel.place(offsets), entriesAt: kernel.place(entries) };
 }
 
 // ---- cleaning and counting ---------------------------------------------------------
