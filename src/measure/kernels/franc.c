@@ -1,10 +1,11 @@
 // The two hot loops of the franc labeller (language-franc.ts), compiled to WebAssembly:
 // counting the profile trigrams of a cleaned sample, and scoring the candidates of one
 // script group over them. The tables are the labeller's own, laid out by it in this
-// module's memory; the arithmetic is the TypeScript version's, unit for unit, so the
-// labels are the same (language tests compare them with franc).
+// module's memory; the arithmetic is franc's integer arithmetic, as the TypeScript loops
+// this replaced did it, unit for unit, so the labels are franc's (the language tests
+// compare them with franc).
 //
-// Build: node scripts/build-kernels.mjs (clang --target=wasm32, wasm-ld; Debian packages
+// Build: node scripts/gen-kernels.mjs (clang --target=wasm32, wasm-ld; Debian packages
 // clang and lld). The binary is committed as a generated file beside this source.
 #include <stdint.h>
 
