@@ -10196,6 +10196,15 @@ function loadProfiles() {
   placeTables();
 }
 function invert(group, languages) {
+  const key = `${group}\0${languages.join(",")}`;
+  const known = invertedSets.get(key);
+  if (known) return known;
+  const inverted = invertAnew(group, languages);
+  invertedSets.set(key, inverted);
+  return inverted;
+}
+var invertedSets = /* @__PURE__ */ new Map();
+function invertAnew(group, languages) {
   const models = profiles.get(group);
   const perLanguage2 = languages.map((language) => {
     const rankOf = /* @__PURE__ */ new Map();
@@ -10256,6 +10265,15 @@ function kernelWithViews() {
     cleaned = new Uint16Array(buffer, cleanedAt, SCRATCH_UNITS);
   }
   return kernel2;
+}
+var distancesAt = 0;
+var distancesRoom = 0;
+function distancesFor(k) {
+  if (k > distancesRoom) {
+    distancesAt = francKernel().allocate(4 * k);
+    distancesRoom = k;
+  }
+  return distancesAt;
 }
 function placeTables() {
   const kernel2 = francKernel();
@@ -10337,7 +10355,7 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
     if (!languages) return null;
     return invert(expression, languages.filter((l) => anything || allowed.has(l)));
   });
-  const distancesAt = francKernel().allocate(4 * Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
+  const distances = distancesFor(Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
   const label = (text) => {
     if (!text || text.length < minLength) return UND;
     const end = Math.min(text.length, MAX_LENGTH);
@@ -10349,7 +10367,7 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
     if (!group) return top.count === 0 || !(anything || allowed.has(name)) ? UND : name;
     const k = group.languages.length;
     if (k === 0) return UND;
-    const best = kernel2.nearest(distinct, group.offsetsAt, group.entriesAt, k, distancesAt);
+    const best = kernel2.nearest(distinct, group.offsetsAt, group.entriesAt, k, distances);
     return group.languages[best];
   };
   return Object.assign(label, { only: [...only] });

@@ -227,6 +227,19 @@ interface InvertedProfiles {
 
 /** Returns the inverted profiles of `languages` (all in `group`). */
 function invert(group: string, languages: string[]): InvertedProfiles {
+  // The kernel's memory is never given back, so each candidate set of a group is laid out
+  // once per thread and shared by every labeller made for it.
+  const key = `${group}\0${languages.join(',')}`;
+  const known = invertedSets.get(key);
+  if (known) return known;
+  const inverted = invertAnew(group, languages);
+  invertedSets.set(key, inverted);
+  return inverted;
+}
+
+const invertedSets = new Map<string, InvertedProfiles>();
+
+function invertAnew(group: string, languages: string[]): InvertedProfiles {
   const models = profiles.get(group) as Map<string, string>;
   const perLanguage = languages.map((language) => {
     const rankOf = new Map<number, number>();
@@ -314,6 +327,17 @@ function kernelWithViews(): FrancKernel {
     cleaned = new Uint16Array(buffer, cleanedAt, SCRATCH_UNITS);
   }
   return kernel;
+}
+
+/** Where the kernel sums the distances (one per language), shared by every labeller of this thread: room for k at least. */
+let distancesAt = 0;
+let distancesRoom = 0;
+function distancesFor(k: number): number {
+  if (k > distancesRoom) {
+    distancesAt = francKernel().allocate(4 * k);
+    distancesRoom = k;
+  }
+  return distancesAt;
 }
 
 /** Lays the interned tables and the per-call buffers out in the kernel's memory, once. */
@@ -430,7 +454,7 @@ export function createFrancLabeller(only: readonly string[], minLength: number =
     return invert(expression, languages.filter((l) => anything || allowed.has(l)));
   });
   // Sums stay within ±(2 × 2048 + 2)^2 < 2^31.
-  const distancesAt = francKernel().allocate(4 * Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
+  const distances = distancesFor(Math.max(1, ...groups.map((g) => g?.languages.length ?? 0)));
 
   const label = (text: string): string => {
     if (!text || text.length < minLength) return UND;
@@ -450,7 +474,7 @@ export function createFrancLabeller(only: readonly string[], minLength: number =
     const k = group.languages.length;
     if (k === 0) return UND;
     // Each language's distance less the 300 per distinct trigram that all are charged alike, summed in the kernel.
-    const best = kernel.nearest(distinct, group.offsetsAt, group.entriesAt, k, distancesAt);
+    const best = kernel.nearest(distinct, group.offsetsAt, group.entriesAt, k, distances);
     return group.languages[best] as string;
   };
   return Object.assign(label, { only: [...only] });

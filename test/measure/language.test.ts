@@ -7,7 +7,7 @@ import { describe, expect, it } from 'vitest';
 import type { LanguageSpec } from '../../src/policy/types.js';
 import { MAJOR_LANGUAGES } from '../../src/measure/language-candidates.js';
 import { createLanguageDetector, iso6393Of } from '../../src/measure/language.js';
-import { createFrancLabeller } from '../../src/measure/language-franc.js';
+import { createFrancLabeller, francLanguages } from '../../src/measure/language-franc.js';
 import { francKernel } from '../../src/measure/kernels/franc-kernel.js';
 // @ts-expect-error: a plain JavaScript build script, without type declarations
 import { staleKernels } from '../../scripts/gen-kernels.mjs';
@@ -115,10 +115,20 @@ describe('the fast labeller gives franc’s labels (franc@6.2.0 with `only`)', (
     const first = createFrancLabeller(['eng', 'fra', 'rus', 'hin']);
     expect(first(loadUdhr('hin').text)).toBe('hin'); // makes the views, before the growth
     const before = francKernel().memory.buffer.byteLength;
-    for (let k = 0; k < 12; k++) createFrancLabeller([]);
+    // Different candidate sets (each laid out once): every language but one.
+    const all = francLanguages();
+    for (let k = 0; k < 12; k++) createFrancLabeller(all.filter((_, i) => i !== k));
     expect(francKernel().memory.buffer.byteLength).toBeGreaterThan(before);
     const samples = [loadUdhr('eng').text, loadUdhr('fra').text, loadUdhr('rus').text, loadUdhr('hin').text, ...spread(brownParagraphs(), 50)];
     for (const text of samples) expect(first(text)).toBe(franc(text, { only: ['eng', 'fra', 'rus', 'hin'] }));
+  });
+
+  it('lays a candidate set out in the kernel once, however many labellers are made for it', () => {
+    createFrancLabeller(['eng', 'deu', 'rus']);
+    const before = francKernel().memory.buffer.byteLength;
+    const labellers = Array.from({ length: 200 }, () => createFrancLabeller(['eng', 'deu', 'rus']));
+    expect(francKernel().memory.buffer.byteLength).toBe(before);
+    expect(labellers[199]!(loadUdhr('rus').text)).toBe('rus');
   });
 
   it('runs a kernel built from the current C source (scripts/gen-kernels.mjs --check)', () => {
