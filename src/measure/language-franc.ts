@@ -71,9 +71,8 @@ const CLASS_EXPRESSIONS: readonly number[][] = FRANC_CLASS_MASKS.map((mask) =>
   FRANC_EXPRESSIONS.map((_, e) => e).filter((e) => (mask & (1 << e)) !== 0),
 );
 
-/** Returns the index in FRANC_EXPRESSIONS of the script franc picks for the first `end` units of `text`, and its match count. */
-function topExpression(text: string, end: number): { expression: number; count: number } {
-  const table = francClasses();
+/** Counts the first `end` units of `text` by franc's expression class into classCounts, surrogate pairs by code point. */
+function countClassesByCodePoint(table: Uint8Array, text: string, end: number): void {
   classCounts.fill(0);
   for (let i = 0; i < end; i++) {
     const unit = text.charCodeAt(i);
@@ -89,6 +88,26 @@ function topExpression(text: string, end: number): { expression: number; count: 
     const cls = table[unit] as number;
     classCounts[cls] = (classCounts[cls] as number) + 1;
   }
+}
+
+/** Where the kernel holds franc's class table and its class counts, once placed. */
+let classesAt = -1;
+let classCountsAt = 0;
+
+/**
+ * Returns the index in FRANC_EXPRESSIONS of the script franc picks for the first `end` units
+ * of `text`, and its match count. The sample must be the one countTrigrams has just written
+ * into the kernel: the kernel counts classes over it, unless it holds a surrogate.
+ */
+function topExpression(kernel: FrancKernel, text: string, end: number): { expression: number; count: number } {
+  const table = francClasses();
+  if (classesAt < 0) {
+    classesAt = kernel.place(table);
+    classCountsAt = kernel.allocate(4 * classCounts.length);
+  }
+  if (kernel.countClasses(textAt, end, classesAt, classCountsAt, classCounts.length) === 0) {
+    classCounts.set(new Int32Array(kernel.memory.buffer, classCountsAt, classCounts.length));
+  } else countClassesByCodePoint(table, text, end);
   expressionCounts.fill(0);
   for (let c = 1; c < classCounts.length; c++) {
     const n = classCounts[c] as number;
@@ -301,8 +320,9 @@ function cleaningTable(): Uint16Array {
 // Per-call scratch, in the kernel's memory. Trigrams are counted by interned id, so only
 // trigrams that some profile has are counted at all: any other one costs every language
 // the same 300, which cannot change which language is nearest (nor a tie), so it is left
-// out. Counting and scoring run in the kernel (kernels/franc.c); cleaning a text that
-// needs care, and the script choice, stay here.
+// out. Counting and scoring run in the kernel (kernels/franc.c), and so does the count of
+// characters by franc's script class unless the sample holds a surrogate; cleaning a text
+// that needs care stays here.
 //
 // Per id, its count in this call (a sample has at most 2 × 2048 + 2 trigrams, within 16
 // bits); the kernel sets the ids the previous call counted back to 0 before the next one
@@ -467,7 +487,7 @@ export function createFrancLabeller(only: readonly string[], minLength: number =
     const top =
       sampleIsAscii && ASCII_SHORTCUT
         ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 }
-        : topExpression(text, end);
+        : topExpression(kernel, text, end);
     const name = FRANC_EXPRESSIONS[top.expression] as string;
     const group = groups[top.expression];
     if (!group) return top.count === 0 || !(anything || allowed.has(name)) ? UND : name;

@@ -10,13 +10,14 @@ interface FrancExports {
   countTrigrams(text: number, end: number): number;
   countCleaned(cleaned: number, n: number): number;
   nearest(distinct: number, offsets: number, entries: number, k: number, distances: number): number;
+  countClasses(text: number, end: number, classes: number, counts: number, n: number): number;
 }
 
 export interface FrancKernel extends FrancExports {
   /** Reserves `bytes` (8-byte aligned) and returns their address; the memory grows as needed, which detaches views made before. */
   allocate(bytes: number): number;
   /** Copies a typed array into newly reserved memory and returns its address. */
-  place(array: Uint16Array | Int16Array | Int32Array): number;
+  place(array: Uint8Array | Uint16Array | Int16Array | Int32Array): number;
 }
 
 let kernel: FrancKernel | undefined;
@@ -44,7 +45,7 @@ export function francKernel(): FrancKernel {
     if (missing > 0) memory.grow(Math.ceil(missing / 65536));
     return at;
   };
-  const place = (array: Uint16Array | Int16Array | Int32Array): number => {
+  const place = (array: Uint8Array | Uint16Array | Int16Array | Int32Array): number => {
     const at = allocate(array.byteLength);
     new Uint8Array(memory.buffer, at, array.byteLength).set(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));
     return at;

@@ -1,6 +1,6 @@
-// The two hot loops of the franc labeller (language-franc.ts), compiled to WebAssembly:
-// counting the profile trigrams of a cleaned sample, and scoring the candidates of one
-// script group over them. The tables are the labeller's own, laid out by it in this
+// The hot loops of the franc labeller (language-franc.ts), compiled to WebAssembly:
+// counting the profile trigrams of a cleaned sample, scoring the candidates of one script
+// group over them, and counting a sample's characters by franc's script class. The tables are the labeller's own, laid out by it in this
 // module's memory; the arithmetic is franc's integer arithmetic, as the TypeScript loops
 // this replaced did it, unit for unit, so the labels are franc's (the language tests
 // compare them with franc).
@@ -165,4 +165,19 @@ __attribute__((export_name("nearest"))) i32 nearest(i32 distinct, const i32 *res
   i32 best = 0;
   for (i32 l = 1; l < k; l++) if (distances[l] < distances[best]) best = l;
   return best;
+}
+
+/**
+ * Counts the first `end` units at `text` by franc's expression class (`classes`: one byte per
+ * BMP unit) into counts[0 .. n); returns -1, with the counts unfinished, at the first
+ * surrogate, whose code point the caller classes by range.
+ */
+__attribute__((export_name("countClasses"))) i32 countClasses(const u16 *restrict text, i32 end, const uint8_t *restrict classes, i32 *restrict counts, i32 n) {
+  for (i32 c = 0; c < n; c++) counts[c] = 0;
+  for (i32 i = 0; i < end; i++) {
+    u32 unit = text[i];
+    if ((unit & 0xf800) == 0xd800) return -1;
+    counts[classes[unit]]++;
+  }
+  return 0;
 }
