@@ -16,7 +16,7 @@ import { fileURLToPath } from 'node:url';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 const DIR = path.join(ROOT, 'src', 'measure', 'kernels');
-const FLAGS = ['--target=wasm32', '-O3', '-mbulk-memory', '-nostdlib', '-Wl,--no-entry', '-Wl,--export=__heap_base', '-Wl,--strip-all'];
+const FLAGS = ['--target=wasm32', '-O3', '-mbulk-memory', '-msimd128', '-nostdlib', '-Wl,--no-entry', '-Wl,--export=__heap_base', '-Wl,--strip-all'];
 
 /** Returns the hex SHA-256 of a kernel's source and of the flags it is built with. */
 export function sourceDigest(source) {

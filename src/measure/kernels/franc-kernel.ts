@@ -9,12 +9,12 @@ interface FrancExports {
   sampleFlags(): number;
   countTrigrams(text: number, end: number): number;
   countCleaned(cleaned: number, n: number): number;
-  nearest(distinct: number, offsets: number, entries: number, k: number, distances: number): number;
   countClasses(text: number, end: number, classes: number, counts: number, n: number): number;
+  nearestDense(distinct: number, rowOf: number, rows: number, stride: number, k: number, distances: number): number;
 }
 
 export interface FrancKernel extends FrancExports {
-  /** Reserves `bytes` (8-byte aligned) and returns their address; the memory grows as needed, which detaches views made before. */
+  /** Reserves `bytes` (16-byte aligned, as the vector loads like) and returns their address; the memory grows as needed, which detaches views made before. */
   allocate(bytes: number): number;
   /** Copies a typed array into newly reserved memory and returns its address. */
   place(array: Uint8Array | Uint16Array | Int16Array | Int32Array): number;
@@ -37,10 +37,10 @@ export function francKernel(): FrancKernel {
   const module = new WebAssembly.Module(Buffer.from(WASM_BASE64, 'base64'));
   const exports = new WebAssembly.Instance(module, {}).exports as unknown as FrancExports;
   const memory = exports.memory;
-  let top = ((exports.__heap_base.value as number) + 7) & ~7;
+  let top = ((exports.__heap_base.value as number) + 15) & ~15;
   const allocate = (bytes: number): number => {
     const at = top;
-    top = (top + bytes + 7) & ~7;
+    top = (top + bytes + 15) & ~15;
     const missing = top - memory.buffer.byteLength;
     if (missing > 0) memory.grow(Math.ceil(missing / 65536));
     return at;
