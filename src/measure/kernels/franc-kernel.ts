@@ -29,7 +29,7 @@ export function kernelUnavailable(): string | null {
     : null;
 }
 
-/** Returns this thread's kernel, instantiating it on first use (synchronously: the module is 3 KB). */
+/** Returns this thread's kernel, instantiating it on first use (synchronously: the module is 4 KB). */
 export function francKernel(): FrancKernel {
   if (kernel) return kernel;
   const unavailable = kernelUnavailable();
