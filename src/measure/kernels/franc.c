@@ -1,7 +1,7 @@
 // The hot loops of the franc labeller (language-franc.ts), compiled to WebAssembly:
 // counting the profile trigrams of a cleaned sample, scoring the candidates of one script
-// group over them, and counting a sample's characters by franc's script class. The tables are the labeller's own, laid out by it in this
-// module's memory; the arithmetic is franc's integer arithmetic, as the TypeScript loops
+// group over them, and counting a sample's characters by franc's script class. The tables
+// are the labeller's own, laid out by it in this module's memory; the arithmetic is franc's integer arithmetic, as the TypeScript loops
 // this replaced did it, unit for unit, so the labels are franc's (the language tests
 // compare them with franc).
 //
@@ -55,40 +55,31 @@ static inline i32 hashedId(const i32 *restrict table, u32 bits, u32 hi, u32 lo) 
   }
 }
 
-// The tables as one set of local pointers: C globals live in linear memory, so a store
-// through a table pointer would otherwise make the compiler load the globals again.
-typedef struct {
-  const u16 *restrict folded;
-  const i16 *restrict direct;
-  const i32 *restrict intern;
-  u32 bits;
-  u16 *restrict tally;
-  i32 *restrict distinct;
-} Tables;
-
-static inline i32 tally(const Tables *t, u32 a, u32 b, u32 c, i32 sa, i32 sb, i32 sc, i32 distinct) {
-  i32 id = (sa | sb | sc) >= 0 ? t->direct[(sa * 27 + sb) * 27 + sc] : hashedId(t->intern, t->bits, (a << 16) | b, c);
+static inline i32 tally(u32 a, u32 b, u32 c, i32 sa, i32 sb, i32 sc, i32 distinct) {
+  i32 id = (sa | sb | sc) >= 0 ? directId[(sa * 27 + sb) * 27 + sc] : hashedId(internTable, internBits, (a << 16) | b, c);
   if (id < 0) return distinct;
-  u32 n = t->tally[id];
-  t->tally[id] = (u16)(n + 1);
+  u32 n = idTally[id];
+  idTally[id] = (u16)(n + 1);
   // Written every time and kept only when new: no branch on a coin flip.
-  t->distinct[distinct] = id;
+  distinctIds[distinct] = id;
   return distinct + (n == 0);
 }
 
-#define TABLES const Tables tables = {folded, directId, internTable, internBits, idTally, distinctIds}
-
 /** Sets the tallies of the last count back to 0. */
-__attribute__((export_name("resetCount"))) void resetCount(void) {
+static void resetCount(void) {
   for (i32 d = 0; d < counted; d++) idTally[distinctIds[d]] = 0;
   counted = 0;
 }
 
-/** As countTrigrams in language-franc.ts: the number of distinct profile trigrams of the first `end` units at `text`, or -1 at a unit that needs care. */
+/**
+ * Cleans the first `end` units at `text` as trigram-utils does and counts the profile
+ * trigrams of `' ' + cleaned + ' '` in the same pass: returns how many distinct ones there
+ * are, or -1 at the first unit that needs care (the caller then cleans and calls countCleaned).
+ * A NUL stands before the leading space: no profile has a trigram with NUL, so
+ * (NUL, space, first unit) counts nothing.
+ */
 __attribute__((export_name("countTrigrams"))) i32 countTrigrams(const u16 *restrict text, i32 end) {
   resetCount();
-  TABLES;
-  const u16 *restrict fold = tables.folded;
   i32 distinct = 0;
   u32 a = 0, b = 0x20;
   i32 sa = -1, sb = 0;
@@ -99,7 +90,7 @@ __attribute__((export_name("countTrigrams"))) i32 countTrigrams(const u16 *restr
     u32 unit = text[i];
     units |= unit;
     letter |= ((unit | 0x20) - 0x61u) < 26u;
-    u32 c = fold[unit];
+    u32 c = folded[unit];
     if (c == SEPARATOR) {
       pendingSpace = started;
       continue;
@@ -109,7 +100,7 @@ __attribute__((export_name("countTrigrams"))) i32 countTrigrams(const u16 *restr
       return -1;
     }
     if (pendingSpace) {
-      distinct = tally(&tables, a, b, 0x20, sa, sb, 0, distinct);
+      distinct = tally(a, b, 0x20, sa, sb, 0, distinct);
       a = b;
       sa = sb;
       b = 0x20;
@@ -117,27 +108,26 @@ __attribute__((export_name("countTrigrams"))) i32 countTrigrams(const u16 *restr
       pendingSpace = 0;
     }
     i32 sc = symbolOf(c);
-    distinct = tally(&tables, a, b, c, sa, sb, sc, distinct);
+    distinct = tally(a, b, c, sa, sb, sc, distinct);
     a = b;
     sa = sb;
     b = c;
     sb = sc;
     started = 1;
   }
-  distinct = tally(&tables, a, b, 0x20, sa, sb, 0, distinct);
+  distinct = tally(a, b, 0x20, sa, sb, 0, distinct);
   counted = distinct;
   flags = (units < 0x80 ? 1 : 0) | (letter ? 2 : 0);
   return distinct;
 }
 
-/** As countCarefully's loop: counts the trigrams of an already cleaned sample of n units. */
+/** Counts the profile trigrams of a sample that language-franc.ts has cleaned (n units, spaces around it included). */
 __attribute__((export_name("countCleaned"))) i32 countCleaned(const u16 *restrict cleaned, i32 n) {
   resetCount();
-  TABLES;
   i32 distinct = 0;
   for (i32 p = 0; p + 2 < n; p++) {
     u32 a = cleaned[p], b = cleaned[p + 1], c = cleaned[p + 2];
-    distinct = tally(&tables, a, b, c, symbolOf(a), symbolOf(b), symbolOf(c), distinct);
+    distinct = tally(a, b, c, symbolOf(a), symbolOf(b), symbolOf(c), distinct);
   }
   counted = distinct;
   return distinct;
@@ -158,7 +148,6 @@ __attribute__((export_name("countClasses"))) i32 countClasses(const u16 *restric
   return 0;
 }
 
-
 /**
  * Scores k languages of one group over the last count's `distinct` trigrams and returns the
  * index of the nearest, the first on a tie. Each language's distance is summed less the 300
@@ -169,15 +158,13 @@ __attribute__((export_name("countClasses"))) i32 countClasses(const u16 *restric
  * fits), summed in 32-bit ones.
  */
 __attribute__((export_name("nearestDense"))) i32 nearestDense(i32 distinct, const i32 *restrict rowOf, const i16 *restrict rows, i32 stride, i32 k, i32 *restrict distances) {
-  const u16 *restrict idTally_ = idTally;
-  const i32 *restrict distinctIds_ = distinctIds;
   for (i32 l = 0; l < stride; l++) distances[l] = 0;
   const v128_t penalty = wasm_i16x8_splat(MAX_DIFFERENCE);
   const v128_t none = wasm_i16x8_splat(0);
   for (i32 d = 0; d < distinct; d++) {
-    i32 id = distinctIds_[d];
+    i32 id = distinctIds[d];
     const i16 *row = rows + rowOf[id] * stride;
-    v128_t count = wasm_i16x8_splat((i16)idTally_[id]);
+    v128_t count = wasm_i16x8_splat((i16)idTally[id]);
     for (i32 v = 0; v < stride; v += 8) {
       v128_t rank = wasm_v128_load(row + v);
       // |count − rank − 1| − 300 where the language has the trigram, 0 where it does not.
