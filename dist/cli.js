@@ -10220,13 +10220,13 @@ function invertAnew(group, languages) {
   const perLanguage2 = languages.map((language) => {
     const rankOf = /* @__PURE__ */ new Map();
     const model = models.get(language).split("|");
+    if (model.length >= 32767) throw new Error(`franc data: the profile of ${language} is too long for the kernel's 16-bit ranks`);
     for (let r = model.length - 1; r >= 0; r--) {
       const t = model[r];
       rankOf.set(internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), false), r);
     }
     return rankOf;
   });
-  for (const language of languages) if (models.get(language).split("|").length >= 32767) throw new Error(`franc data: the profile of ${language} is too long for the kernel's 16-bit ranks`);
   const stride = Math.max(8, Math.ceil(languages.length / 8) * 8);
   const rowOf = new Int32Array(internCount);
   let rowCount = 1;

@@ -6,7 +6,8 @@
 //                                          current digest (no compiler needed; the tests run this)
 //
 // The binaries are committed, so that installing, building dist/ and testing need no C
-// compiler. Flags: -O3; bulk memory (memory.fill for the zeroing loops; Node 20 has it).
+// compiler. Flags: -O3; bulk memory (memory.fill for the zeroing loops) and 128-bit SIMD (the
+// scoring loop); Node 20 has both.
 import { execFileSync } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
@@ -23,11 +24,21 @@ export function sourceDigest(source) {
   return crypto.createHash('sha256').update(FLAGS.join(' ')).update('\0').update(source).digest('hex');
 }
 
+/** Returns the kernels' C sources: names in src/measure/kernels. */
+function kernelSources() {
+  return fs.readdirSync(DIR).filter((f) => f.endsWith('.c'));
+}
+
+/** Returns the path of the generated module of a kernel's source file. */
+function generatedPathOf(name) {
+  return path.join(DIR, name.replace(/\.c$/, '.generated.ts'));
+}
+
 /** Returns the problems with the generated files: one per kernel whose file is missing or names another digest. */
 export function staleKernels() {
   const problems = [];
-  for (const name of fs.readdirSync(DIR).filter((f) => f.endsWith('.c'))) {
-    const out = path.join(DIR, name.replace(/\.c$/, '.generated.ts'));
+  for (const name of kernelSources()) {
+    const out = generatedPathOf(name);
     const digest = sourceDigest(fs.readFileSync(path.join(DIR, name), 'utf8'));
     const text = fs.existsSync(out) ? fs.readFileSync(out, 'utf8') : '';
     if (!text.includes(`SOURCE_SHA256 = '${digest}'`)) problems.push(`${path.relative(ROOT, out)} is not built from the current ${name}: run node scripts/gen-kernels.mjs`);
@@ -41,7 +52,7 @@ if (process.argv[1] === fileURLToPath(import.meta.url)) {
     for (const p of problems) process.stderr.write(`${p}\n`);
     process.exit(problems.length ? 1 : 0);
   }
-  for (const name of fs.readdirSync(DIR).filter((f) => f.endsWith('.c'))) {
+  for (const name of kernelSources()) {
     const source = fs.readFileSync(path.join(DIR, name), 'utf8');
     const tmp = path.join(os.tmpdir(), `sluice-${process.pid}-${name}.wasm`);
     execFileSync('clang', [...FLAGS, '-o', tmp, path.join(DIR, name)], { stdio: 'inherit' });
@@ -49,8 +60,7 @@ if (process.argv[1] === fileURLToPath(import.meta.url)) {
     fs.rmSync(tmp);
     new WebAssembly.Module(bytes); // fails here, not at run time, on a bad binary
     const compiler = execFileSync('clang', ['--version'], { encoding: 'utf8' }).split('\n')[0];
-    const base = name.replace(/\.c$/, '');
-    const out = path.join(DIR, `${base}.generated.ts`);
+    const out = generatedPathOf(name);
     const lines = bytes.toString('base64').match(/.{1,100}/g) ?? [];
     fs.writeFileSync(
       out,

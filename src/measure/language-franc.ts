@@ -268,6 +268,8 @@ function invertAnew(group: string, languages: string[]): InvertedProfiles {
   const perLanguage = languages.map((language) => {
     const rankOf = new Map<number, number>();
     const model = (models.get(language) as string).split('|');
+    // The kernel keeps ranks in 16-bit lanes.
+    if (model.length >= 0x7fff) throw new Error(`franc data: the profile of ${language} is too long for the kernel's 16-bit ranks`);
     // franc builds `{trigram: index}` from the last entry down, so a repeated trigram keeps its first index.
     for (let r = model.length - 1; r >= 0; r--) {
       const t = model[r] as string;
@@ -275,8 +277,6 @@ function invertAnew(group: string, languages: string[]): InvertedProfiles {
     }
     return rankOf;
   });
-  // The kernel keeps ranks in 16-bit lanes.
-  for (const language of languages) if ((models.get(language) as string).split('|').length >= 0x7fff) throw new Error(`franc data: the profile of ${language} is too long for the kernel's 16-bit ranks`);
   const stride = Math.max(8, Math.ceil(languages.length / 8) * 8);
   const rowOf = new Int32Array(internCount);
   let rowCount = 1;
