@@ -10006,17 +10006,15 @@ var FRANC_RANGE_CLASSES = [
 // src/measure/kernels/franc.generated.ts
 var WASM_BASE64 = "AGFzbQEAAAABJwVgBn9/f39/fwBgAAF/YAJ/fwF/YAV/f39/fwF/YAZ/f39/f38BfwMHBgABAgIDBAQFAXABAQEFAwEAAgYPAn8BQaCIBAt/AEGgiAQLB28IBm1lbW9yeQIACXNldFRhYmxlcwAAC3NhbXBsZUZsYWdzAAENY291bnRUcmlncmFtcwACDGNvdW50Q2xlYW5lZAADDGNvdW50Q2xhc3NlcwAEDG5lYXJlc3REZW5zZQAFC19faGVhcF9iYXNlAwEK3xoGTwBBACABNgKEiICAAEEAIAA2AoCIgIAAQQAgAjYCiIiAgABBACADNgKMiICAAEEAIAQ2ApCIgIAAQQAgBTYClIiAgABBAEEANgKYiICAAAsLAEEAKAKciICAAAvgDAEXf0EAIQICQEEAKAKYiICAACIDQQFIDQBBACgClIiAgAAhBEEAKAKQiICAACEFQQAhBgJAIANBBEkNACADQXxxIgZBfGoiB0ECdkEBaiIIQQFxIQkCQAJAIAcNAEEAIQgMAQsgBEEcaiEHIAhB/v///wdxIQpBACEIA0AgB0FwaigCACELIAdBbGooAgAhDCAHQWhqKAIAIQ0gBSAHQWRqKAIAQQF0akEAOwEAIAUgDUEBdGpBADsBACAFIAxBAXRqQQA7AQAgBSALQQF0akEAOwEAIAdBfGooAgAhCyAHQXhqKAIAIQwgBygCACENIAUgB0F0aigCAEEBdGpBADsBACAFIAxBAXRqQQA7AQAgBSALQQF0akEAOwEAIAUgDUEBdGpBADsBACAHQSBqIQcgCEEIaiEIIApBfmoiCg0ACwsCQCAJRQ0AIAQgCEECdGoiBygCDCEIIAcoAgghCiAHKAIEIQsgBSAHKAIAQQF0akEAOwEAIAUgC0EBdGpBADsBACAFIApBAXRqQQA7AQAgBSAIQQF0akEAOwEACyADIAZGDQELIAMgBmshCCAEIAZBAnRqIQcDQCAFIAcoAgBBAXRqQQA7AQAgB0EEaiEHIAhBf2oiCA0ACwsCQAJAIAFBAU4NAEF/IQRBICEOQQAhCUEAIQ9BACEKQQAhEAwBC0EgQQAoAoyIgIAAIgVrIRFBfyAFdEF/cyELQQAoApSIgIAAIRJBACgCkIiAgAAhE0EAKAKEiICAACEUQQAoAoiIgIAAIQdBACgCgIiAgAAhFUEAIRBBACEKQQAhA0EAIQ9BACEJQQAhDUEAIRZBACECQX8hBEEgIQ4DQAJAAkAgFSAAIANBAXRqLwEAIgZBAXRqLwEAIghBIEYiF0UNACANIRYMAQsCQAJAAkACQCAIRQ0AAkAgFg0AIA4hGCAEIQUgAiEEIAohDgwECwJAIAIgBHJBAEgNACAUIARBG2wgAmpBNmxqLgEAIQUMAgtBACEEQSAhGCAHIApBEHQgDnIiDUGx893xeWxBo52i+gdzIBF2IgVBA3RqQQRqKAIAIgpFDQIgBUEBdCEMA0ACQCAKQf//A3FBIEcNACAHIAxBAnRqKAIAIA1HDQAgCkEQdkF/aiEFDAMLIAVBAWogC3EiBUEBdCEMIAcgBUEDdGpBBGooAgAiCg0ADAMLC0EAIBA2ApiIgIAAQX8PC0EAIQRBICEYIAVBAEgNACASIBBBAnRqIAU2AgAgEyAFQQF0aiIFIAUvAQAiBUEBajsBACAQIAVFaiEQCyACIQULAkACQAJAIAVBACAIQaB/akF/IAhBn39qQRpJGyAXGyICciAEckEASA0AIBQgBUEbbCAEakEbbCACakEBdGouAQAhBQwBC0EBIQ1BACEWIAcgDkEQdCAYciIXQbHz3fF5bCAIQfeUr694bEHD/7yOfGpzIBF2IgVBA3RqQQRqKAIAIgpFDQEgBUEBdCEMA0ACQCAKQf//A3EgCEcNACAHIAxBAnRqKAIAIBdHDQAgCkEQdkF/aiEFDAILQQEhDSAFQQFqIAtxIgVBAXQhDCAHIAVBA3RqQQRqKAIAIgoNAAwCCwtBACEWAkAgBUEATg0AQQEhDQwBCyASIBBBAnRqIAU2AgBBASENIBMgBUEBdGoiBSAFLwEAIgVBAWo7AQAgECAFRWohEAsgCCEOIBghCgsgCSAGciEJIA8gBkEgckGff2pBGklyIQ8gA0EBaiIDIAFHDQALCwJAAkACQCACIARyQQBIDQBBACgChIiAgAAgBEEbbCACakE2bGouAQAhBQwBC0EAKAKIiICAACIIIApBEHQgDnIiDEGx893xeWxBo52i+gdzQSBBACgCjIiAgAAiC2t2IgVBA3RqQQRqKAIAIgdFDQEgBUEBdCEKQX8gC3RBf3MhCwNAAkAgB0H//wNxQSBHDQAgCCAKQQJ0aigCACAMRw0AIAdBEHZBf2ohBQwCCyAFQQFqIAtxIgVBAXQhCiAIIAVBA3RqQQRqKAIAIgcNAAwCCwsgBUEASA0AQQAoApSIgIAAIBBBAnRqIAU2AgBBACgCkIiAgAAgBUEBdGoiBSAFLwEAIgVBAWo7AQAgECAFRWohEAtBACAQNgKYiICAAEEAIA9BAEdBAXQgCUGAAUlyNgKciICAACAQC8wHAQ9/QQAhAgJAQQAoApiIgIAAIgNBAUgNAEEAKAKUiICAACEEQQAoApCIgIAAIQVBACEGAkAgA0EESQ0AIANBfHEiBkF8aiIHQQJ2QQFqIghBAXEhCQJAAkAgBw0AQQAhCAwBCyAEQRxqIQcgCEH+////B3EhCkEAIQgDQCAHQXBqKAIAIQsgB0FsaigCACEMIAdBaGooAgAhDSAFIAdBZGooAgBBAXRqQQA7AQAgBSANQQF0akEAOwEAIAUgDEEBdGpBADsBACAFIAtBAXRqQQA7AQAgB0F8aigCACELIAdBeGooAgAhDCAHKAIAIQ0gBSAHQXRqKAIAQQF0akEAOwEAIAUgDEEBdGpBADsBACAFIAtBAXRqQQA7AQAgBSANQQF0akEAOwEAIAdBIGohByAIQQhqIQggCkF+aiIKDQALCwJAIAlFDQAgBCAIQQJ0aiIHKAIMIQggBygCCCEKIAcoAgQhCyAFIAcoAgBBAXRqQQA7AQAgBSALQQF0akEAOwEAIAUgCkEBdGpBADsBACAFIAhBAXRqQQA7AQALIAMgBkYNAQsgAyAGayEIIAQgBkECdGohBwNAIAUgBygCAEEBdGpBADsBACAHQQRqIQcgCEF/aiIIDQALCwJAIAFBA0gNACABQX5qIQRBIEEAKAKMiICAACIFayEOQX8gBXRBf3MhDCAALwEAIQ1BACgClIiAgAAhD0EAKAKQiICAACEQQQAoAoSIgIAAIQlBACgCiIiAgAAhCkECIQdBACECQQAhAwNAIA1B//8DcSEFAkACQAJAQQAgACADIgZBAWoiA0EBdGovAQAiDUGgf2pBfyANQZ9/akEaSRsgDUEgRhsiC0EAIAVBoH9qQX8gBUGff2pBGkkbIAVBIEYbIgFyQQAgACAHQQF0ai8BACIIQaB/akF/IAhBn39qQRpJGyAIQSBGGyIHckEASA0AIAkgAUEbbCALakEbbCAHakEBdGouAQAhBQwBCyAKIAhB95Svr3hsQcP/vI58aiAFQRB0IA1yIgFBsfPd8XlscyAOdiIFQQN0akEEaigCACIHRQ0BIAVBAXQhCwNAAkAgB0H//wNxIAhHDQAgCiALQQJ0aigCACABRw0AIAdBEHZBf2ohBQwCCyAFQQFqIAxxIgVBAXQhCyAKIAVBA3RqQQRqKAIAIgcNAAwCCwsgBUEASA0AIA8gAkECdGogBTYCACAQIAVBAXRqIgUgBS8BACIFQQFqOwEAIAIgBUVqIQILIAZBA2ohByADIARHDQALC0EAIAI2ApiIgIAAIAILpwEBAn8CQCAEQQFIDQAgA0EAIARBAnT8CwALAkAgAUEBTg0AQQAPC0F/IQUCQCAALwEAIgRBgPADcUGAsANGDQAgAEECaiEAQQEhBQJAA0AgAyACIARqLQAAQQJ0aiIEIAQoAgBBAWo2AgAgASAFIgZGDQEgBkEBaiEFIAAvAQAhBCAAQQJqIQAgBEGA8ANxQYCwA0cNAAsLQX9BACAGIAFIGyEFCyAFC6cEBQV/AXsBfwJ7AX8CQCADQQFIDQBBACEGIAVBACADQQJ0/AsAIABBAUgNAEEAKAKQiICAACEHQQAoApSIgIAAIQgDQCACIAEgCCAGQQJ0aigCACIJQQJ0aigCACADbEEBdGohCiAHIAlBAXRq/QgBACELQQAhDCAFIQkDQCAJIAn9AAQA/QwAAAAAAAAAAAAAAAAAAAAAIg0gCyAK/QAAACIO/ZEB/YAB/QzU/tT+1P7U/tT+1P7U/tT+/Y4BIA4gDf0t/VIiDf2nAf2uAf0LBAAgCUEQaiIPIA/9AAQAIA39qAH9rgH9CwQAIApBEGohCiAJQSBqIQkgDEEIaiIMIANIDQALIAZBAWoiBiAARw0ACwtBACEKAkAgBEECSA0AIARBf2oiCUEDcSEPAkACQCAEQX5qQQNPDQBBACEKQQEhCQwBCyAFQRBqIQwgCUF8cSEGQQAhCkEBIQkDQCAJQQNqIgMgCUECaiAJQQFqIAkgCiAMQXRqKAIAIAUgCkECdGooAgBIGyIKIAxBeGooAgAgBSAKQQJ0aigCAEgbIgogDEF8aigCACAFIApBAnRqKAIASBsiCiAMKAIAIAUgCkECdGooAgBIGyEKIAlBBGohCSAMQRBqIQwgAyAGRw0ACwsgD0UNACAFIAlBAnRqIQwDQCAJIAogDCgCACAFIApBAnRqKAIASBshCiAMQQRqIQwgCUEBaiEJIA9Bf2oiDw0ACwsgCgs=";
 
-// src/measure/kernels/franc-kernel.ts
-var kernel;
+// src/measure/kernels/instance.ts
 function kernelUnavailable() {
-  return typeof WebAssembly === "undefined" ? "this Node.js runs without WebAssembly (started with --jitless?), and the language labeller runs as a WebAssembly kernel: run sluice without that flag" : null;
+  return typeof WebAssembly === "undefined" ? "this Node.js runs without WebAssembly (started with --jitless?), and the language labeller and token counter run as WebAssembly kernels: run sluice without that flag" : null;
 }
-function francKernel() {
-  if (kernel) return kernel;
+function instantiateKernel(base64, env = {}) {
   const unavailable = kernelUnavailable();
   if (unavailable) throw new Error(unavailable);
-  const module = new WebAssembly.Module(Buffer.from(WASM_BASE64, "base64"));
-  const exports = new WebAssembly.Instance(module, {}).exports;
+  const module = new WebAssembly.Module(Buffer.from(base64, "base64"));
+  const exports = new WebAssembly.Instance(module, { env }).exports;
   const memory = exports.memory;
   let top = exports.__heap_base.value + 15 & ~15;
   const allocate = (bytes3) => {
@@ -10031,8 +10029,13 @@ function francKernel() {
     new Uint8Array(memory.buffer, at, array.byteLength).set(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));
     return at;
   };
-  kernel = Object.assign(/* @__PURE__ */ Object.create(null), exports, { allocate, place });
-  return kernel;
+  return Object.assign(/* @__PURE__ */ Object.create(null), exports, { allocate, place });
+}
+
+// src/measure/kernels/franc-kernel.ts
+var kernel;
+function francKernel() {
+  return kernel ??= instantiateKernel(WASM_BASE64);
 }
 
 // src/measure/range-table.ts
@@ -10107,14 +10110,14 @@ function countClassesByCodePoint(table3, text, end) {
 }
 var classesAt = -1;
 var classCountsAt = 0;
-function topExpression(kernel2, text, end) {
+function topExpression(kernel3, text, end) {
   const table3 = francClasses();
   if (classesAt < 0) {
-    classesAt = kernel2.place(table3);
-    classCountsAt = kernel2.allocate(4 * classCounts.length);
+    classesAt = kernel3.place(table3);
+    classCountsAt = kernel3.allocate(4 * classCounts.length);
   }
-  if (kernel2.countClasses(textAt, end, classesAt, classCountsAt, classCounts.length) === 0) {
-    classCounts.set(new Int32Array(kernel2.memory.buffer, classCountsAt, classCounts.length));
+  if (kernel3.countClasses(textAt, end, classesAt, classCountsAt, classCounts.length) === 0) {
+    classCounts.set(new Int32Array(kernel3.memory.buffer, classCountsAt, classCounts.length));
   } else countClassesByCodePoint(table3, text, end);
   expressionCounts.fill(0);
   for (let c = 1; c < classCounts.length; c++) {
@@ -10235,8 +10238,8 @@ function invertAnew(group, languages) {
   perLanguage2.forEach((rankOf, l) => {
     for (const [id, rank2] of rankOf) rows[rowOf[id] * stride + l] = rank2 + 1;
   });
-  const kernel2 = francKernel();
-  return { languages, rowOfAt: kernel2.place(rowOf), rowsAt: kernel2.place(rows), stride };
+  const kernel3 = francKernel();
+  return { languages, rowOfAt: kernel3.place(rowOf), rowsAt: kernel3.place(rows), stride };
 }
 var foldedUnit;
 var SEPARATOR = 32;
@@ -10265,14 +10268,14 @@ var viewsOf;
 var textBytes = Buffer.alloc(0);
 var cleaned = new Uint16Array(0);
 function kernelWithViews() {
-  const kernel2 = francKernel();
-  const buffer = kernel2.memory.buffer;
+  const kernel3 = francKernel();
+  const buffer = kernel3.memory.buffer;
   if (buffer !== viewsOf) {
     viewsOf = buffer;
     textBytes = Buffer.from(buffer, textAt, MAX_LENGTH * 2);
     cleaned = new Uint16Array(buffer, cleanedAt, SCRATCH_UNITS);
   }
-  return kernel2;
+  return kernel3;
 }
 var distancesAt = 0;
 var distancesRoom = 0;
@@ -10284,28 +10287,28 @@ function distancesFor(k) {
   return distancesAt;
 }
 function placeTables() {
-  const kernel2 = francKernel();
-  const foldedAt = kernel2.place(cleaningTable());
-  const directAt = kernel2.place(directId);
-  const internAt = kernel2.place(internTable);
-  const tallyAt = kernel2.allocate(internCount * 2);
-  const distinctAt = kernel2.allocate(SCRATCH_UNITS * 4);
-  textAt = kernel2.allocate(MAX_LENGTH * 2);
-  cleanedAt = kernel2.allocate(SCRATCH_UNITS * 2);
-  new Uint16Array(kernel2.memory.buffer, tallyAt, internCount).fill(0);
-  kernel2.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt);
+  const kernel3 = francKernel();
+  const foldedAt = kernel3.place(cleaningTable());
+  const directAt = kernel3.place(directId);
+  const internAt = kernel3.place(internTable);
+  const tallyAt = kernel3.allocate(internCount * 2);
+  const distinctAt = kernel3.allocate(SCRATCH_UNITS * 4);
+  textAt = kernel3.allocate(MAX_LENGTH * 2);
+  cleanedAt = kernel3.allocate(SCRATCH_UNITS * 2);
+  new Uint16Array(kernel3.memory.buffer, tallyAt, internCount).fill(0);
+  kernel3.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt);
 }
-function countTrigrams(kernel2, text, end) {
+function countTrigrams(kernel3, text, end) {
   textBytes.write(end === text.length ? text : text.slice(0, end), 0, end * 2, "utf16le");
-  const distinct = kernel2.countTrigrams(textAt, end);
+  const distinct = kernel3.countTrigrams(textAt, end);
   if (distinct >= 0) {
-    const flags = kernel2.sampleFlags();
+    const flags = kernel3.sampleFlags();
     sampleIsAscii = (flags & 1) !== 0;
     sampleHasAsciiLetter = (flags & 2) !== 0;
     return distinct;
   }
   const n = clean(text, end);
-  return kernel2.countCleaned(cleanedAt, n);
+  return kernel3.countCleaned(cleanedAt, n);
 }
 function clean(text, end) {
   const folded2 = cleaningTable();
@@ -10367,15 +10370,15 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
   const label = (text) => {
     if (!text || text.length < minLength) return UND;
     const end = Math.min(text.length, MAX_LENGTH);
-    const kernel2 = kernelWithViews();
-    const distinct = countTrigrams(kernel2, text, end);
-    const top = sampleIsAscii && ASCII_SHORTCUT ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 } : topExpression(kernel2, text, end);
+    const kernel3 = kernelWithViews();
+    const distinct = countTrigrams(kernel3, text, end);
+    const top = sampleIsAscii && ASCII_SHORTCUT ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 } : topExpression(kernel3, text, end);
     const name = FRANC_EXPRESSIONS[top.expression];
     const group = groups[top.expression];
     if (!group) return top.count === 0 || !(anything || allowed.has(name)) ? UND : name;
     const k = group.languages.length;
     if (k === 0) return UND;
-    const best = kernel2.nearestDense(distinct, group.rowOfAt, group.rowsAt, group.stride, k, distances);
+    const best = kernel3.nearestDense(distinct, group.rowOfAt, group.rowsAt, group.stride, k, distances);
     return group.languages[best];
   };
   return Object.assign(label, { only: [...only] });
@@ -17754,6 +17757,88 @@ var splitCl100k = (text, p) => {
   return spaceRunWithNewlines(C, text, p, spaceRun(C, text, p));
 };
 
+// src/measure/kernels/tokens.generated.ts
+var WASM_BASE642 = "AGFzbQEAAAABMAdgA39/fwF/YAF/AGAAAX9gAAF8YAR/f39/AX9gAn9/AX9gCn9/f39/f39/f38BfwIPAQNlbnYHcmVzb2x2ZQAAAwgHAQIDBAUABgQFAXABAQEFAwEAAgYPAn8BQaCIBAt/AEGgiAQLB1MHBm1lbW9yeQIACnNldENsYXNzZXMAAQlzdG9wcGVkQXQAAgZ0b2tlbnMAAwhwaWVjZUVuZAAEC2NvdW50UGllY2VzAAcLX19oZWFwX2Jhc2UDAQqaLAcNAEEAIAA2AoCIgIAACwsAQQAoAoSIgIAACwsAQQArA4iIgIAACyIAQQAgATYClIiAgABBACAANgKQiICAACADIAIQhYCAgAALhhYBCX9BfyECAkACQAJAAkACQAJAAkACQAJAAkACQAJAIABBf2oOAgEAAgtBACgCgIiAgAAiA0EAKAKQiICAACIEIAFBAXRqLwEAIgVqLQAAIgBBgAFxDQYgAEHAAHEhAgJAIABBGHEiBkUNACACDQAgAUEAQQEQhoCAgAAiAUF/IAFBf0obDwsCQCAAQQJxRQ0AQQAoApSIgIAAIgUgAUEBaiIAIAUgAEobIQcgASABQQJqIgIgASACShsiBkEBaiECIAQgAEEBdGohAANAIAYgAUYNCAJAIAUgAUEBaiIBSg0AIAcPCyAALwEAIQQgAEECaiEAIAMgBGotAAAiBEECcQ0ACyABQX8gBEEYdEEYdUF/ShsPCwJAIAJFDQAgAUEBIAZBAEcQhoCAgAAiAkF+Rw0HQX8hAgJAIAVBIEcNAEF/IQJBACgClIiAgAAgAUEBaiIFTA0AQX8hAiADIAQgBUEBdGovAQBqLQAAIgZBgAFxDQggBUF/IAZBIHEbIQILIAIgASACQX9KGyACIABBIHEbIgVBAEgNAEEAKAKUiICAACIIIAUgCCAFShshAiAEIAVBAXRqIQYCQANAIAIgBUYNASAFQQFqIQUgBi8BACEHIAZBAmohBiADIAdqLQAAIgdBIHENAAtBfyECIAdBGHRBGHVBAEgNCCAFQX9qIQILAkAgAkEATg0AQX8PCyAIIAJMDQcgBCACQQF0aiEFAkADQAJAAkAgBS8BACIGQXZqDgQBAwMBAAsgBkEvRw0CCyAFQQJqIQUgCCACQQFqIgJHDQALIAghAgsgAkF+Rw0HC0EAKAKUiICAACIHIAFMDQICQCAAQQRxRQ0AIAdBf2ohBiABQQF0IARqQQJqIQIgASEAAkADQAJAIAYgAEcNACAHIQAMAgsgAEEBaiEAIAIvAQAhBSACQQJqIQIgAyAFai0AAEEEcQ0ACwsgAEF/aiEGIAAgAUwNCyAEIAZBAXRqIQQgACEFA0ACQAJAIAQvAQAiA0F2ag4EAAEBAAELIAUhAgsgA0ENRiADQQpGcw0IIARBfmohBCAFQX9qIgUgAUwNDAwACwsgAUF/aiEGDAkLQQAoAoCIgIAAIgRBACgCkIiAgAAiBiABQQF0aiIALwEAIgVqLQAAIgNBgAFxDQUCQCAFQSdHDQBBACECQQAoApSIgIAAIgcgAUwNAAJAIAcgAUEBaiIITA0AIAYgCEEBdGovAQAhAgtBAiEIQQAhCQJAIAcgAUECaiIKTA0AIAYgCkEBdGovAQAhCQsCQAJAIAJBIGogAiACQb9/akEaSRsiB0Gcf2oiAkEQSw0AQQEgAnRBgYQGcQ0BCyAJQSBqIAkgCUG/f2pBGkkbIQJBAyEIAkAgB0HyAEcNACACQeUARg0BCwJAIAdB9gBHDQAgAkHlAEYNAQsgB0HsAEcNASACQewARw0BCyAIIAFqDwsCQCADQQFxRQ0AQQAoApSIgIAAIgIgASACIAFKGyECA0AgAiABRg0HIAFBAWohASAALwEAIQMgAEECaiEAIAQgA2otAAAiA0EBcQ0ACyABQX9qQX8gA0EYdEEYdUF/ShsPCwJAIANBAnFFDQBBACgClIiAgAAiBSABQQFqIgAgBSAAShshCCABIAFBAmoiAiABIAJKGyIHQQFqIQIgBiAAQQF0aiEAA0AgByABRg0HAkAgBSABQQFqIgFKDQAgCA8LIAAvAQAhAyAAQQJqIQAgBCADai0AACIDQQJxDQALIAFBfyADQRh0QRh1QX9KGw8LAkACQCADQcAAcQ0AQQAoApSIgIAAIQgMAQtBfyECAkBBACgClIiAgAAiCCABQQFqIgdMDQBBfyECIAQgBiAHQQF0ai8BAGotAAAiAEGAAXENBwJAIABBAXFFDQAgBiAHQQF0aiEAIAggByAIIAdKGyICQX9qIQUDQCAFIAFGDQkgAUEBaiEBIAAvAQAhAyAAQQJqIQAgBCADai0AACIDQQFxDQALIAFBfyADQRh0QRh1QX9KGw8LQX8hAiAFQSBHDQAgB0F/IABBIHEbIQILIAIgASACQX9KGyACIANBIHEbIgBBAEgNACAIIAAgCCAAShshAiAGIABBAXRqIQUCQANAIAIgAEYNASAAQQFqIQAgBS8BACEHIAVBAmohBSAEIAdqLQAAIgdBIHENAAtBfyECIAdBGHRBGHVBAEgNByAAQX9qIQILAkAgAkEATg0AQX8PCyAIIAJMDQYgBiACQQF0aiEAAkADQAJAIAAvAQBBdmoOBAACAgACCyAAQQJqIQAgCCACQQFqIgJHDQALIAghAgsgAkF+Rw0GCyAIIAFMDQICQCADQQRxRQ0AIAhBf2ohBSABQQF0IAZqQQJqIQIgASEAAkADQAJAIAUgAEcNACAIIQAMAgsgAEEBaiEAIAIvAQAhAyACQQJqIQIgBCADai0AAEEEcQ0ACwsgAEF/aiEHIAAgAUwNCCAGIAdBAXRqIQMgACEFA0ACQAJAIAMvAQAiBEF2ag4EAAEBAAELIAUhAgsgBEENRiAEQQpGcw0HIANBfmohAyAFQX9qIgUgAUwNCQwACwsgAUF/aiEHDAYLQQAoAoCIgIAAIgNBACgCkIiAgAAiBSABQQF0ai8BACIGai0AACIEQYABcQ0EIAEhACAEIQcCQAJAIAZBYGoOCAEFBQUFBQUABQtBACEAQQAoApSIgIAAIgIgAUwNAwJAIAIgAUEBaiIGTA0AIAUgBkEBdGovAQAhAAtBAiEGQQAhCAJAIAIgAUECaiIHTA0AIAUgB0EBdGovAQAhCAsCQAJAIABBnH9qIgJBEEsNAEEBIAJ0QYGEBnENAQtBAyEGAkAgAEHyAEcNACAIQeUARg0BCwJAIABB9gBHDQAgCEHlAEYNAQsgAEHsAEcNBCABIQAgBCEHIAhB7ABHDQULIAYgAWoPCyABIQAgBCEHQQAoApSIgIAAIAFBAWoiBkwNAyADIAUgBkEBdGovAQBqLQAAIgBBgAFxDQQgACAEIABBI3EiAhshByAGIAEgAhshAAwDCyABQX9qIQYMBgsgAUF/aiEHDAMLIAEhACAEIQcLAkAgB0EBcUUNAEEAKAKUiICAACIBIAAgASAAShshAiAFIABBAXRqIQEDQCACIABGDQIgAEEBaiEAIAEvAQAhBCABQQJqIQEgAyAEai0AACIEQQFxDQALIABBf2pBfyAEQRh0QRh1QX9KGw8LAkAgB0ECcUUNAEEAKAKUiICAACIBIAAgASAAShshAiAFIABBAXRqIQEDQCACIABGDQIgAEEBaiEAIAEvAQAhBCABQQJqIQEgAyAEai0AACIEQQJxDQALIABBf2pBfyAEQRh0QRh1QX9KGw8LQQAoApSIgIAAIQgCQCAHQSBxRQ0AIAggACAIIABKGyECIAUgAEEBdGohAQNAIAIgAEYNAiAAQQFqIQAgAS8BACEEIAFBAmohASADIARqLQAAIgRBIHENAAsgAEF/akF/IARBGHRBGHVBf0obDwsgASECAkAgCCABTA0AIAEhAiAEQQRxRQ0AIAhBf2ohBiABQQF0IAVqQQJqIQAgASECA0ACQCAGIAJHDQAgCCECDAILIAJBAWohAiAALwEAIQQgAEECaiEAIAMgBGotAABBBHENAAsLIAIgAiAIRyACIAFrQQFHcWshAgsgAg8LIAEhAAsgACAAIAcgACABa0EBRhsgCCAARhsPCyABIQALIAAgACAGIAAgAWtBAUYbIAcgAEYbC7AMAQl/AkACQAJAIAENAEF+IQMMAQtBACgClIiAgAAiBCAAQQFqIgUgBCAFShsiBkF/aiEDQQAoApCIgIAAIgcgBUEBdGohCEEAKAKAiICAACEJIAAhCgJAA0ACQCADIApHDQAgBiEKDAILIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EIcQ0ACyALQRh0QRh1QQBODQBBfw8LQX8hAyAKQQBIDQECQCAEIApMDQACQCAJIAcgCkEBdGoiCC8BAGotAAAiC0EQcUUNACAEIAogBCAKShshAwNAIAMgCkYNAyAKQQFqIQogCC8BACELIAhBAmohCCAJIAtqLQAAIgtBEHENAAsgCkF/akF/IAtBGHRBGHVBf0obIQMMAgsgC0GAAXENAgtBfiEDIApBAXQgB2pBfmohCANAIAogBUwNASAKQX9qIQogCC8BACELIAhBfmohCCAJIAtqLQAAQRBxRQ0ACyAKQQFqIQMLAkAgAkUNACADQX5HDQBBACgClIiAgAAiBCAAIAQgAEobIQtBACgCkIiAgAAiByAAQQF0aiEIQQAoAoCIgIAAIQUgACEKAkADQCALIApGDQEgCkEBaiEKIAgvAQAhCSAIQQJqIQggBSAJai0AACIJQQhxDQALQX8hAyAJQRh0QRh1QQBIDQIgCkF/aiELC0F/IQMgC0EASA0BAkAgBCALTA0AAkAgBSAHIAtBAXRqIgovAQBqLQAAIghBEHFFDQAgBCALIAQgC0obIQMDQCADIAtGDQMgC0EBaiELIAovAQAhCCAKQQJqIQogBSAIai0AACIIQRBxDQALIAtBf2pBfyAIQRh0QRh1QX9KGyEDDAILIAhBgAFxDQILQX4hAyALQQF0IAdqQX5qIQoDQCALIABMDQEgC0F/aiELIAovAQAhCCAKQX5qIQogBSAIai0AAEEQcUUNAAsgC0EBaiEDCwJAIAFFDQAgA0F+Rw0AQQAhCAJAAkBBACgClIiAgAAiBSAAQQFqIgpMDQBBACgCgIiAgAAiCUEAKAKQiICAACIBIApBAXRqLwEAai0AACIIQQhxDQELQX9BfiAIQYABcRshAwwBCyABIApBAXRqIQggBSAKIAUgCkobIgRBf2ohAyAAIQoCQANAAkAgAyAKRw0AIAQhCgwCCyAKQQFqIQogCC8BACELIAhBAmohCCAJIAtqLQAAIgtBCHENAAsgC0EYdEEYdUEATg0AQX8PCwJAIApBAE4NAEF/DwsgBSAKIAUgCkobIQMgASAKQQF0aiEIA0AgAyAKRg0BIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EQcQ0ACyAKQX9qQX8gC0EYdEEYdUF/ShshAwsCQCACRQ0AIANBfkcNAEEAIQgCQAJAQQAoApSIgIAAIgUgAEwNAEEAKAKAiICAACIJQQAoApCIgIAAIgEgAEEBdGoiCi8BAGotAAAiCEEIcQ0BC0F/QX4gCEGAAXEbDwsgBSAAIAUgAEobIQgCQANAIAggAEYNASAAQQFqIQAgCi8BACELIApBAmohCiAJIAtqLQAAIgtBCHENAAtBfyEDIAtBGHRBGHVBAEgNAiAAQX9qIQgLAkAgCEEATg0AQX8PCyAFIAggBSAIShshAyABIAhBAXRqIQoDQCADIAhGDQEgCEEBaiEIIAovAQAhCyAKQQJqIQogCSALai0AACILQRBxDQALQX8hAyALQRh0QRh1QQBIDQEgCEF/aiEDC0EAIQogA0EASA0AAkBBACgClIiAgAAiCCADTA0AQQAhCkEAKAKQiICAACIJIANBAXRqLwEAQSdHDQBBACEAQQAhCwJAIAggA0EBaiIKTA0AIAkgCkEBdGovAQAhCwtBAiEKAkAgCCADQQJqIgVMDQAgCSAFQQF0ai8BACEACwJAIAtBIGogCyALQb9/akEaSRsiC0Gcf2oiCEEQSw0AQQEgCHRBgYQGcQ0BCyAAQSBqIAAgAEG/f2pBGkkbIQhBAyEKAkAgC0HyAEcNACAIQeUARg0BCwJAIAtB9gBHDQAgCEHlAEYNAQtBA0EAIAhB7ABGG0EAIAtB7ABGGyEKCyAKIANqIQMLIAMLlAkCAXwOf0EAIAE2ApSIgIAAQQAgADYCkIiAgABEAAAAAAAAAAAhCgJAAkAgAiABTg0AIARBAUgNAEQAAAAAAAAAACEKQQAhCwNAAkAgAyACEIWAgIAAIgxBAE4NACACIQwMAwsgDCACayENQcW78oh4IQ4CQCAMIAJMDQAgDUEDcSEPQcW78oh4IQ4gAiEQAkAgDCACQX9zakEDSQ0AIA1BfHEhESAAIAJBAXRqIRJBxbvyiHghDiACIRADQCAOIBIvAQBzQZODgAhsIBJBAmovAQBzQZODgAhsIBJBBGovAQBzQZODgAhsIBJBBmovAQBzQZODgAhsIQ4gEkEIaiESIBBBBGohECARQXxqIhENAAsLIA9FDQAgACAQQQF0aiESA0AgDiASLwEAc0GTg4AIbCEOIBJBAmohEiAPQX9qIg8NAAsLAkACQAJAAkACQCANQRFODQAgCCAOIAlxIhNBBXRqIRQgByATQQN0aiIVKAIAIhFBEHYgDUcNAiAVKAIEIA5HDQICQCANQQFODQBBACEQDAILIAAgAkEBdGohEkEAIRAgFCEPA0AgDy8BACASLwEARw0CIA9BAmohDyASQQJqIRIgDSAQQQFqIhBHDQAMBAsLIAIgDCAOEICAgIAAIREMAwsgECANRg0BCyACIAwgDhCAgICAACERIBUgDjYCBCAVIBEgDUEQdHI2AgAgDUEBSA0BIBNBBHQhFkEAIQ8CQCANQQhJDQAgACACQQF0aiEXAkAgFCAAIAxBAXRqTw0AIBcgCCAMIBZqIAJrQQF0akkNAQsgDUF4cSIPQXhqIhJBA3ZBAWoiDkEDcSEVQQAhEwJAIBJBGEkNACAOQfz///8DcSEYQQAhEkEAIRMDQCAUIBJqIg4gFyASaiIQ/QABAP0LAQAgDkEQaiAQQRBq/QABAP0LAQAgDkEgaiAQQSBq/QABAP0LAQAgDkEwaiAQQTBq/QABAP0LAQAgEkHAAGohEiATQSBqIRMgGEF8aiIYDQALCwJAIBVFDQAgACACIBNqQQF0aiESIAggEyAWakEBdGohDgNAIA4gEv0AAQD9CwEAIBJBEGohEiAOQRBqIQ4gFUF/aiIVDQALCyANIA9GDQILIAwgD0F/c2ogAmshFQJAIA1BA3EiEEUNACAAIA8gAmpBAXRqIRIgCCAPIBZqQQF0aiEOA0AgDiASLwEAOwEAIBJBAmohEiAOQQJqIQ4gD0EBaiEPIBBBf2oiEA0ACwsgFUEDSQ0BIAwgD2sgAmshECAIIA8gFmpBAXRqIRIgACACIA9qQQF0aiEOA0AgEiAOLwEAOwEAIBJBAmogDkECai8BADsBACASQQRqIA5BBGovAQA7AQAgEkEGaiAOQQZqLwEAOwEAIBJBCGohEiAOQQhqIQ4gEEF8aiIQDQAMAgsLIBFB//8DcSERCyAFIAtBAnQiEmogDDYCACAGIBJqIBE2AgAgC0EBaiELIAogEbegIQogDCABTg0CIAwhAiALIARIDQAMAgsLQQAhCyACIQwLQQAgCjkDiIiAgABBACAMNgKEiICAACALCw==";
+
+// src/measure/kernels/tokens-kernel.ts
+var KERNEL_PATTERN = { gpt2: 0, cl100k_base: 1, o200k_base: 2 };
+var PIECES_PER_CALL = 8192;
+var MAX_KERNEL_UNITS = 1 << 20;
+var KERNEL_KEY_UNITS = 16;
+var TokenKernel = class {
+  kernel;
+  textAt = 0;
+  textUnits = 0;
+  /** Length of the loaded text. */
+  n = 0;
+  endsAt;
+  countsAt;
+  buffer = null;
+  bytes = Buffer.alloc(0);
+  resolver = () => {
+    throw new Error("token kernel: no text is being counted");
+  };
+  /** Ends and counts of the pieces the last count() wrote (views; valid until the next load). */
+  ends = new Int32Array(0);
+  counts = new Int32Array(0);
+  constructor(classes2) {
+    this.kernel = instantiateKernel(WASM_BASE642, {
+      resolve: (start, end, hash2) => this.resolver(start, end, hash2)
+    });
+    this.kernel.setClasses(this.kernel.place(classes2));
+    this.endsAt = this.kernel.allocate(PIECES_PER_CALL * 4);
+    this.countsAt = this.kernel.allocate(PIECES_PER_CALL * 4);
+  }
+  /** Reserves a cache of `entries` (a power of two) in the kernel's memory, empty. */
+  createCache(entries) {
+    if (!(entries >= 1 && (entries & entries - 1) === 0)) throw new RangeError(`token kernel cache: entries must be a power of two, got ${entries}`);
+    const slots = this.kernel.allocate(entries * 8);
+    const keys = this.kernel.allocate(entries * KERNEL_KEY_UNITS * 2);
+    new Uint8Array(this.kernel.memory.buffer, slots, entries * 8).fill(0);
+    return { slots, keys, mask: entries - 1 };
+  }
+  /** Copies a text (at most MAX_KERNEL_UNITS long) into the kernel's memory; the resolver counts the pieces of it that the caches lack. */
+  load(text, resolver) {
+    if (text.length > this.textUnits) {
+      this.textUnits = Math.max(text.length, this.textUnits * 2, 4096);
+      this.textAt = this.kernel.allocate(this.textUnits * 2);
+    }
+    this.views();
+    this.bytes.write(text, this.textAt, text.length * 2, "utf16le");
+    this.n = text.length;
+    this.resolver = resolver;
+  }
+  /** Splits the loaded text from `from` under a pattern; returns how many pieces `ends` and `counts` now hold (at most PIECES_PER_CALL). */
+  count(from, pattern, cache) {
+    return this.kernel.countPieces(this.textAt, this.n, from, pattern, PIECES_PER_CALL, this.endsAt, this.countsAt, cache.slots, cache.keys, cache.mask);
+  }
+  /** Where the last count() stopped: the text's length, or a piece the kernel cannot decide (a surrogate is involved), or after PIECES_PER_CALL pieces. */
+  stoppedAt() {
+    return this.kernel.stoppedAt();
+  }
+  /** Tokens of the pieces the last count() wrote. */
+  tokens() {
+    return this.kernel.tokens();
+  }
+  /** The end of the piece at p of the loaded text, or -1 when a surrogate is involved (for the tests). */
+  pieceEnd(p, pattern) {
+    return this.kernel.pieceEnd(this.textAt, this.n, p, pattern);
+  }
+  /** Makes the views again when the memory has grown (which detaches the old ones). */
+  views() {
+    const buffer = this.kernel.memory.buffer;
+    if (buffer === this.buffer) return;
+    this.buffer = buffer;
+    this.bytes = Buffer.from(buffer);
+    this.ends = new Int32Array(buffer, this.endsAt, PIECES_PER_CALL);
+    this.counts = new Int32Array(buffer, this.countsAt, PIECES_PER_CALL);
+  }
+};
+var kernel2;
+function tokenKernel(classes2) {
+  return kernel2 ??= new TokenKernel(classes2());
+}
+
 // src/measure/tokens/bpe.ts
 var bytes = new Uint8Array(1024);
 var starts = new Int32Array(1024);
@@ -17829,6 +17914,13 @@ function bytePairCount(text, start, end, ranks) {
 var FRONT_ENTRIES = 16384;
 var FRONT_MASK = FRONT_ENTRIES - 1;
 var FRONT_UNITS = 8;
+var KERNEL_CACHE_ENTRIES = 65536;
+function kernelPatternFor(pattern) {
+  if (pattern === BUILTIN_PATTERNS.gpt2) return KERNEL_PATTERN.gpt2;
+  if (pattern === BUILTIN_PATTERNS.cl100k_base) return KERNEL_PATTERN.cl100k_base;
+  if (pattern === BUILTIN_PATTERNS.o200k_base) return KERNEL_PATTERN.o200k_base;
+  return null;
+}
 function splitterFor(pattern) {
   if (pattern === BUILTIN_PATTERNS.gpt2) return splitGpt2;
   if (pattern === BUILTIN_PATTERNS.cl100k_base) return splitCl100k;
@@ -17907,24 +17999,61 @@ function createRankCounter(options) {
     }
     return tokens;
   };
-  const countText = (text, pieces) => {
-    if (splitter === null) return countByRegex(text, 0, pieces);
+  const kernelPattern = splitter === null || options.kernel === false ? null : kernelPatternFor(options.pattern);
+  let kernelCache = null;
+  let kernelPieces = 0;
+  let counting = "";
+  let kernelResolved = 0;
+  const resolve = (start, end, hash2) => {
+    kernelResolved++;
+    return end - start > MAX_CACHED_PIECE_LENGTH ? bytePairCount(counting, start, end, ranks) : lookUp(counting, start, end, hash2);
+  };
+  const regexPieceEnd = (text, p) => {
+    sticky.lastIndex = p;
+    return sticky.test(text) && sticky.lastIndex > p ? sticky.lastIndex : -1;
+  };
+  const countFrom = (text, p, pieces) => {
     let tokens = 0;
     const n = text.length;
-    let p = 0;
     while (p < n) {
       let e = splitter(text, p);
-      if (e < 0) {
-        sticky.lastIndex = p;
-        if (!sticky.test(text) || sticky.lastIndex <= p) return tokens + countByRegex(text, p, pieces);
-        e = sticky.lastIndex;
-      }
+      if (e < 0) e = regexPieceEnd(text, p);
+      if (e < 0) return tokens + countByRegex(text, p, pieces);
       const c = countRange(text, p, e);
       tokens += c;
       pieces?.push(e, c);
       p = e;
     }
     return tokens;
+  };
+  const countByKernel = (text, pieces) => {
+    const kernel3 = tokenKernel(unitClasses);
+    kernelCache ??= kernel3.createCache(options.kernelCacheEntries ?? KERNEL_CACHE_ENTRIES);
+    counting = text;
+    kernel3.load(text, resolve);
+    let tokens = 0;
+    const n = text.length;
+    let p = 0;
+    while (p < n) {
+      const got = kernel3.count(p, kernelPattern, kernelCache);
+      kernelPieces += got;
+      tokens += kernel3.tokens();
+      pieces?.append(kernel3.ends, kernel3.counts, got);
+      p = kernel3.stoppedAt();
+      if (p >= n || got === PIECES_PER_CALL) continue;
+      const e = regexPieceEnd(text, p);
+      if (e < 0) return tokens + countByRegex(text, p, pieces);
+      const c = countRange(text, p, e);
+      tokens += c;
+      pieces?.push(e, c);
+      p = e;
+    }
+    return tokens;
+  };
+  const countText = (text, pieces) => {
+    if (splitter === null) return countByRegex(text, 0, pieces);
+    if (kernelPattern !== null && text.length <= MAX_KERNEL_UNITS) return countByKernel(text, pieces);
+    return countFrom(text, 0, pieces);
   };
   const guarded = (text, pieces = null) => {
     try {
@@ -17955,7 +18084,8 @@ function createRankCounter(options) {
     } : {},
     cacheStats: () => {
       const own = cache.stats();
-      return { ...own, hits: own.hits + sharedHits + frontHits, entries: own.entries + (shared2?.size ?? 0) };
+      const kernelHits = kernelPieces - kernelResolved;
+      return { ...own, hits: own.hits + sharedHits + frontHits + kernelHits, entries: own.entries + (shared2?.size ?? 0) };
     },
     shareTables: () => ({ counts: shared2?.buffer ?? null, ranks: ranks.buffer }),
     adoptTables: (tables2) => {
@@ -18109,19 +18239,31 @@ var PieceList = class {
   reset() {
     this.length = 0;
   }
+  /** Appends the first `n` pieces of two arrays of ends and counts. */
+  append(ends, counts, n) {
+    this.reserve(this.length + n);
+    this.ends.set(ends.subarray(0, n), this.length);
+    this.counts.set(counts.subarray(0, n), this.length);
+    this.length += n;
+  }
   /** Appends a piece ending at `end` that counts `count` tokens. */
   push(end, count3) {
-    if (this.length === this.ends.length) {
-      const ends = new Int32Array(this.length * 2);
-      ends.set(this.ends);
-      this.ends = ends;
-      const counts = new Int32Array(this.length * 2);
-      counts.set(this.counts);
-      this.counts = counts;
-    }
+    if (this.length === this.ends.length) this.reserve(this.length + 1);
     this.ends[this.length] = end;
     this.counts[this.length] = count3;
     this.length++;
+  }
+  /** Doubles the arrays until they hold `pieces`, keeping what they hold. */
+  reserve(pieces) {
+    let capacity = this.ends.length;
+    while (capacity < pieces) capacity *= 2;
+    if (capacity === this.ends.length) return;
+    const ends = new Int32Array(capacity);
+    ends.set(this.ends.subarray(0, this.length));
+    this.ends = ends;
+    const counts = new Int32Array(capacity);
+    counts.set(this.counts.subarray(0, this.length));
+    this.counts = counts;
   }
 };
 

@@ -4,7 +4,7 @@ export { createMeasurer, type MeasurableDocument, type MeasurerSettings } from '
 export { ANOMALY_KINDS, countAnomalies, countMojibake, emptyAnomalyCounts, emptyMarkCounts } from './encoding.js';
 export { createLanguageDetector, iso6393Of, OTHER, UNDETERMINED, type LanguageDecision, type LanguageDetector } from './language.js';
 export { createFrancLabeller, francLabel, type FrancLabeller } from './language-franc.js';
-export { kernelUnavailable } from './kernels/franc-kernel.js';
+export { kernelUnavailable } from './kernels/instance.js';
 export { MAJOR_LANGUAGES } from './language-candidates.js';
 export { dominantScriptOf, purityOf, SCRIPT_CODES, SCRIPT_NAMES, scriptOf, scriptProfile } from './script.js';
 export { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter, wordOffsets } from './words.js';

@@ -110,7 +110,8 @@ describe('encoding errors', () => {
   it('propagate as a TokenizerError naming the tokenizer, stage count, never a partial count', async () => {
     const gpt2 = await loadTokenizer({ kind: 'builtin', name: 'gpt2' });
     expect(() => gpt2.count(poisoned)).toThrow(TokenizerError);
-    expect(() => gpt2.count(poisoned)).toThrow(/^gpt2: cannot encode text: unreadable$/);
+    // Through the token kernel the text fails where it is copied into the kernel's memory.
+    expect(() => gpt2.count(poisoned)).toThrow(/^gpt2: cannot encode text: argument must be a string$/);
     const spec = file('wp.json', JSON.stringify({ model: { type: 'WordPiece', vocab: { '[UNK]': 0, a: 1 }, unk_token: '[UNK]', continuing_subword_prefix: '##' }, pre_tokenizer: { type: 'WhitespaceSplit' } }));
     const wp = await loadTokenizer(spec);
     try {

@@ -19,13 +19,34 @@ import { describe, expect, it } from 'vitest';
 import { splitCl100k, splitGpt2, splitO200k, unitClasses, type PieceSplitter } from '../../src/measure/tokens/split.js';
 import { BUILTIN_PATTERNS } from '../../src/measure/tokens/patterns.js';
 import { splitterFor } from '../../src/measure/tokens/tiktoken.js';
+import { KERNEL_PATTERN, tokenKernel, type KernelPattern } from '../../src/measure/kernels/tokens-kernel.js';
 import { generator } from '../fixtures/prng.js';
 import { brownSample, EDGE_TEXTS, udhrParagraphs } from '../fixtures/tokens/corpora.js';
 
+/** The token kernel's splitter for a pattern (kernels/tokens.c), as a PieceSplitter: the text is copied into the kernel when it changes. */
+function kernelSplitter(pattern: KernelPattern): PieceSplitter {
+  const kernel = tokenKernel(unitClasses);
+  let loaded: string | null = null;
+  const unused = (): number => {
+    throw new Error('pieceEnd counts nothing');
+  };
+  return (text, p) => {
+    if (text !== loaded) {
+      kernel.load(text, unused);
+      loaded = text;
+    }
+    return kernel.pieceEnd(p, pattern);
+  };
+}
+
+// Each pattern's TypeScript splitter (split.ts) and the kernel's (kernels/tokens.c), against the same reference.
 const CASES = [
   ['gpt2', splitGpt2, gpt2Ranks.pat_str],
   ['cl100k_base', splitCl100k, cl100kRanks.pat_str],
   ['o200k_base', splitO200k, o200kRanks.pat_str],
+  ['gpt2 in the kernel', kernelSplitter(KERNEL_PATTERN.gpt2), gpt2Ranks.pat_str],
+  ['cl100k_base in the kernel', kernelSplitter(KERNEL_PATTERN.cl100k_base), cl100kRanks.pat_str],
+  ['o200k_base in the kernel', kernelSplitter(KERNEL_PATTERN.o200k_base), o200kRanks.pat_str],
 ] as const;
 
 /** Pieces as the counter finds them: the splitter where it can decide, the regex for one piece where it cannot. */

@@ -6,7 +6,7 @@ declare namespace WebAssembly {
     constructor(bytes: Uint8Array);
   }
   class Instance {
-    constructor(module: Module, imports: Record<string, never>);
+    constructor(module: Module, imports: Record<string, Record<string, unknown>>);
     readonly exports: Record<string, unknown>;
   }
   class Memory {

@@ -1,0 +1,283 @@
+// The hot loop of token counting with a tiktoken-style vocabulary (tokens/tiktoken.ts),
+// compiled to WebAssembly: splitting a text into the pieces of a builtin split pattern and
+// looking each piece's token count up in a direct-mapped cache. A piece the cache does not
+// hold is counted by the caller (the imported `resolve`: shared counts, then byte-pair
+// merges) and kept. The splitters are tokens/split.ts's, unit for unit, over the same
+// table of character classes (built there from the engine's own Unicode properties), and
+// like them they stop at a surrogate, where the caller lets the regex decide one piece.
+// test/measure/tokens-split.test.ts holds these splitters to the patterns as it does the
+// TypeScript ones.
+//
+// Build: node scripts/gen-kernels.mjs (clang --target=wasm32, wasm-ld; Debian packages
+// clang and lld). The binary is committed as a generated file beside this source.
+#include <stdint.h>
+
+typedef uint8_t u8;
+typedef uint16_t u16;
+typedef int32_t i32;
+typedef uint32_t u32;
+
+// Bits of a code unit's class, as split.ts sets them; 0 is "past the end of the text".
+#define LETTER 1
+#define NUMBER 2
+#define SPACE 4
+#define UPPERISH 8
+#define LOWERISH 16
+#define OTHER 32
+#define PREFIX 64
+#define SURROGATE 128
+
+#define APOSTROPHE 0x27
+#define SPACE_UNIT 0x20
+#define SLASH 0x2f
+
+// Split patterns, as tokens-kernel.ts numbers them.
+#define GPT2 0
+#define CL100K 1
+#define O200K 2
+
+// Units of a key the cache holds in place; longer pieces are always resolved by the caller.
+#define KEY_UNITS 16
+
+// Counts a piece the cache lacks: text[start, end), whose FNV-1a hash is `hash`.
+__attribute__((import_module("env"), import_name("resolve"))) i32 resolve(i32 start, i32 end, i32 hash);
+
+static const u8 *C; // class of every BMP code unit (64 KB)
+static const u16 *T; // the text being split
+static i32 N;        // its length
+static i32 stop;     // where the last countPieces stopped
+static double total; // tokens of the pieces it found
+
+__attribute__((export_name("setClasses"))) void setClasses(const u8 *classes) { C = classes; }
+__attribute__((export_name("stoppedAt"))) i32 stoppedAt(void) { return stop; }
+__attribute__((export_name("tokens"))) double tokens(void) { return total; }
+
+static inline u32 unitAt(i32 i) { return i < N ? T[i] : 0; }
+static inline u32 classAt(i32 i) { return i < N ? C[T[i]] : 0; }
+
+// Length of a contraction at i ('s 't 're 've 'm 'll 'd), 0 if none; lower-case only unless caseless.
+static i32 contraction(i32 i, i32 caseless) {
+  if (unitAt(i) != APOSTROPHE) return 0;
+  u32 a = unitAt(i + 1);
+  u32 b = unitAt(i + 2);
+  if (caseless) {
+    if (a >= 0x41 && a <= 0x5a) a += 0x20;
+    if (b >= 0x41 && b <= 0x5a) b += 0x20;
+  }
+  if (a == 0x73 || a == 0x74 || a == 0x6d || a == 0x64) return 2; // s t m d
+  if ((a == 0x72 && b == 0x65) || (a == 0x76 && b == 0x65) || (a == 0x6c && b == 0x6c)) return 3; // re ve ll
+  return 0;
+}
+
+// End of a run of units with a bit of `mask` from i, or -1 if the run stops at a surrogate.
+static i32 run(i32 i, u32 mask) {
+  while (i < N) {
+    u32 c = C[T[i]];
+    if ((c & mask) == 0) return (c & SURROGATE) == 0 ? i : -1;
+    i++;
+  }
+  return i;
+}
+
+// End of the run of \s from i.
+static i32 spaceRun(i32 i) {
+  while (i < N && (C[T[i]] & SPACE) != 0) i++;
+  return i;
+}
+
+// End after any \r, \n (and / when `slash`) from i.
+static i32 trailing(i32 i, i32 slash) {
+  for (;;) {
+    u32 c = unitAt(i);
+    if (c == 0x0a || c == 0x0d || (slash && c == SLASH)) i++;
+    else return i;
+  }
+}
+
+// \p{N}{1,3} from p (text[p] is a number), or -1 when a surrogate comes within the three.
+static i32 digits(i32 p) {
+  i32 e = p + 1;
+  while (e < p + 3) {
+    u32 d = classAt(e);
+    if ((d & NUMBER) == 0) return (d & SURROGATE) == 0 ? e : -1;
+    e++;
+  }
+  return e;
+}
+
+// ` ?[^\s\p{L}\p{N}]+` from p (class c), then the trailing newlines: the end, -1 at a surrogate, -2 when neither form matches.
+static i32 punctuation(i32 p, u32 c, i32 slash) {
+  i32 s = -1;
+  if (T[p] == SPACE_UNIT) {
+    u32 d = classAt(p + 1);
+    if ((d & SURROGATE) != 0) return -1;
+    if ((d & OTHER) != 0) s = p + 1;
+  }
+  if (s < 0 && (c & OTHER) != 0) s = p;
+  if (s < 0) return -2;
+  i32 o = run(s, OTHER);
+  return o < 0 ? -1 : trailing(o, slash);
+}
+
+// A whitespace run p..q as cl100k_base and o200k_base split it.
+static i32 spaceRunWithNewlines(i32 p, i32 q) {
+  for (i32 i = q - 1; i >= p; i--) {
+    u32 u = T[i];
+    if (u == 0x0a || u == 0x0d) return i + 1;
+  }
+  if (q == N || q - p == 1) return q;
+  return q - 1;
+}
+
+static i32 splitGpt2(i32 p) {
+  u32 c = C[T[p]];
+  if ((c & SURROGATE) != 0) return -1;
+  if (T[p] == APOSTROPHE) {
+    i32 len = contraction(p, 0);
+    if (len > 0) return p + len;
+  }
+  i32 s = p;
+  u32 k = c;
+  if (T[p] == SPACE_UNIT) {
+    u32 d = classAt(p + 1);
+    if ((d & SURROGATE) != 0) return -1;
+    if ((d & (LETTER | NUMBER | OTHER)) != 0) {
+      s = p + 1;
+      k = d;
+    }
+  }
+  if ((k & LETTER) != 0) return run(s, LETTER);
+  if ((k & NUMBER) != 0) return run(s, NUMBER);
+  if ((k & OTHER) != 0) return run(s, OTHER);
+  i32 q = spaceRun(p);
+  if (q == N || q - p == 1) return q;
+  return q - 1;
+}
+
+// [\p{Lu}\p{Lt}\p{Lm}\p{Lo}\p{M}]*[\p{Ll}\p{Lm}\p{Lo}\p{M}]+ from s, as the regex backtracks: -1 at a surrogate, -2 without a match.
+static i32 upperThenLower(i32 s) {
+  i32 u = run(s, UPPERISH);
+  if (u < 0) return -1;
+  u32 next = classAt(u);
+  if ((next & LOWERISH) != 0) return run(u, LOWERISH);
+  if ((next & SURROGATE) != 0) return -1;
+  for (i32 j = u - 1; j >= s; j--)
+    if ((C[T[j]] & LOWERISH) != 0) return j + 1;
+  return -2;
+}
+
+// [\p{Lu}\p{Lt}\p{Lm}\p{Lo}\p{M}]+[\p{Ll}\p{Lm}\p{Lo}\p{M}]* from s: -1 at a surrogate, -2 when text[s] is not upper-ish.
+static i32 upperAndLower(i32 s) {
+  u32 first = classAt(s);
+  if ((first & UPPERISH) == 0) return (first & SURROGATE) == 0 ? -2 : -1;
+  i32 u = run(s, UPPERISH);
+  return u < 0 ? -1 : run(u, LOWERISH);
+}
+
+// The first two alternatives of o200k_base from p, prefix first, with any contraction.
+static i32 o200kWord(i32 p, i32 prefixed, i32 letterish) {
+  i32 e = -2;
+  if (prefixed) e = upperThenLower(p + 1);
+  if (e == -2 && letterish) e = upperThenLower(p);
+  if (e == -2 && prefixed) e = upperAndLower(p + 1);
+  if (e == -2 && letterish) e = upperAndLower(p);
+  return e < 0 ? e : e + contraction(e, 1);
+}
+
+static i32 splitO200k(i32 p) {
+  u32 c = C[T[p]];
+  if ((c & SURROGATE) != 0) return -1;
+  i32 letterish = (c & (UPPERISH | LOWERISH)) != 0;
+  if (letterish && (c & PREFIX) == 0) {
+    i32 e = o200kWord(p, 0, 1);
+    return e < 0 ? -1 : e;
+  }
+  if ((c & NUMBER) != 0) return digits(p);
+  if ((c & PREFIX) != 0) {
+    i32 e = o200kWord(p, 1, letterish);
+    if (e != -2) return e;
+    i32 o = punctuation(p, c, 1);
+    if (o != -2) return o;
+  }
+  return spaceRunWithNewlines(p, spaceRun(p));
+}
+
+static i32 splitCl100k(i32 p) {
+  u32 c = C[T[p]];
+  if ((c & SURROGATE) != 0) return -1;
+  if (T[p] == APOSTROPHE) {
+    i32 len = contraction(p, 1);
+    if (len > 0) return p + len;
+  }
+  if ((c & LETTER) != 0) return run(p, LETTER);
+  if ((c & NUMBER) != 0) return digits(p);
+  if ((c & PREFIX) != 0) {
+    u32 d = classAt(p + 1);
+    if ((d & SURROGATE) != 0) return -1;
+    if ((d & LETTER) != 0) return run(p + 1, LETTER);
+    i32 o = punctuation(p, c, 0);
+    if (o != -2) return o;
+  }
+  return spaceRunWithNewlines(p, spaceRun(p));
+}
+
+static inline i32 splitAt(i32 pattern, i32 p) {
+  return pattern == O200K ? splitO200k(p) : pattern == CL100K ? splitCl100k(p) : splitGpt2(p);
+}
+
+// The end of the piece at p of text[0, n) under a pattern, or -1 (for the tests).
+__attribute__((export_name("pieceEnd"))) i32 pieceEnd(const u16 *text, i32 n, i32 p, i32 pattern) {
+  T = text;
+  N = n;
+  return splitAt(pattern, p);
+}
+
+// Splits text[from, n) under a pattern into at most maxPieces pieces, writing each one's end and
+// token count, and returns how many it wrote; stoppedAt() is where it stopped (n at the end, or
+// the start of a piece it could not decide: a surrogate is involved), tokens() their sum.
+// The cache: slots[2i] = length << 16 | count (0: empty), slots[2i + 1] = hash, key units at
+// keys[i * KEY_UNITS]; `mask` is its entry count − 1. A miss overwrites the entry.
+__attribute__((export_name("countPieces"))) i32 countPieces(const u16 *text, i32 n, i32 from, i32 pattern, i32 maxPieces, i32 *ends, i32 *counts, i32 *slots, u16 *keys, u32 mask) {
+  T = text;
+  N = n;
+  i32 p = from;
+  i32 k = 0;
+  double sum = 0;
+  while (p < n && k < maxPieces) {
+    i32 e = splitAt(pattern, p);
+    if (e < 0) break;
+    i32 length = e - p;
+    u32 h = 0x811c9dc5u;
+    for (i32 i = p; i < e; i++) h = (h ^ text[i]) * 0x01000193u;
+    i32 count;
+    if (length <= KEY_UNITS) {
+      u32 f = h & mask;
+      i32 *slot = slots + 2 * f;
+      u16 *key = keys + f * KEY_UNITS;
+      i32 hit = 0;
+      if ((u32)slot[0] >> 16 == (u32)length && (u32)slot[1] == h) {
+        i32 i = 0;
+        while (i < length && key[i] == text[p + i]) i++;
+        hit = i == length;
+      }
+      if (hit) {
+        count = slot[0] & 0xffff;
+      } else {
+        count = resolve(p, e, (i32)h);
+        slot[0] = (length << 16) | count;
+        slot[1] = (i32)h;
+        for (i32 i = 0; i < length; i++) key[i] = text[p + i];
+      }
+    } else {
+      count = resolve(p, e, (i32)h);
+    }
+    ends[k] = e;
+    counts[k] = count;
+    k++;
+    sum += count;
+    p = e;
+  }
+  stop = p;
+  total = sum;
+  return k;
+}

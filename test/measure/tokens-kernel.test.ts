@@ -1,0 +1,114 @@
+// Token counting through the WebAssembly kernel (src/measure/kernels/tokens.c): its cache
+// of piece counts, long texts, texts the kernel hands back, and failures mid-text. The
+// reference is js-tiktoken's own encode; the kernel's splitters are held to the patterns in
+// tokens-split.test.ts.
+import { Tiktoken } from 'js-tiktoken/lite';
+import o200kRanks from 'js-tiktoken/ranks/o200k_base';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { MAX_KERNEL_UNITS, PIECES_PER_CALL } from '../../src/measure/kernels/tokens-kernel.js';
+import { hashRange } from '../../src/measure/tokens/cache.js';
+import { PieceList } from '../../src/measure/tokens/pieces.js';
+import { parseBuiltinRanks, type RankTable } from '../../src/measure/tokens/ranks.js';
+import { createRankCounter, type RankCounterOptions } from '../../src/measure/tokens/tiktoken.js';
+import { BUILTIN_PATTERNS } from '../../src/measure/tokens/patterns.js';
+import { TokenizerError } from '../../src/measure/tokens/errors.js';
+import { generator } from '../fixtures/prng.js';
+import { brownSample, EDGE_TEXTS, UDHR_SCRIPTS, udhrParagraphs } from '../fixtures/tokens/corpora.js';
+
+const ID = 'builtin:o200k_base';
+let ranks: RankTable;
+let reference: Tiktoken;
+
+beforeAll(() => {
+  ranks = parseBuiltinRanks(o200kRanks.bpe_ranks, 'o200k_base', ID);
+  reference = new Tiktoken(o200kRanks);
+});
+
+/** An o200k_base counter with no shared table and small caches of its own, so that the kernel's cache answers what it can. */
+const counterWith = (options: Partial<RankCounterOptions> = {}) =>
+  createRankCounter({ id: ID, label: 'o200k_base', ranks, pattern: BUILTIN_PATTERNS.o200k_base, shared: null, generationSize: 64, ...options });
+
+const encoded = (text: string): number => reference.encode(text, [], []).length;
+
+/** Pieces of a text as a counter records them: [end, count] pairs. */
+function piecesOf(counter: ReturnType<typeof counterWith>, text: string): number[][] {
+  const list = new PieceList();
+  counter.countWithPieces!(text, list);
+  return Array.from({ length: list.length }, (_, k) => [list.ends[k]!, list.counts[k]!]);
+}
+
+describe('token counting in the kernel', () => {
+  it('counts exactly as js-tiktoken encodes, with a cache of 4 entries whose every slot is overwritten again and again', () => {
+    const tiny = counterWith({ kernelCacheEntries: 4 });
+    const texts = [...brownSample(40), ...UDHR_SCRIPTS.flatMap((code) => udhrParagraphs(code).slice(0, 20)), ...EDGE_TEXTS];
+    expect(texts.length).toBeGreaterThan(300);
+    for (let round = 0; round < 2; round++) {
+      expect(texts.filter((t) => tiny.count(t).tokens !== encoded(t)).map((t) => t.slice(0, 40))).toEqual([]);
+    }
+    expect(tiny.cacheStats().hits).toBeGreaterThan(0);
+  });
+
+  it('tells apart two pieces of the same length and the same 32-bit hash (keys, not hashes, decide)', () => {
+    // A birthday search over random " xxxxxx" pieces (one o200k_base piece each) for two
+    // with the same FNV-1a hash and different token counts; about 2^16 draws give a collision.
+    const next = generator(7);
+    const seen = new Map<number, string>();
+    let pair: [string, string] | null = null;
+    for (let i = 0; i < 2_000_000 && pair === null; i++) {
+      let piece = ' ';
+      for (let j = 0; j < 6; j++) piece += String.fromCharCode(0x61 + Math.floor(next() * 26));
+      const hash = hashRange(piece, 0, piece.length);
+      const other = seen.get(hash);
+      if (other !== undefined && other !== piece && encoded(other) !== encoded(piece)) pair = [other, piece];
+      else seen.set(hash, piece);
+    }
+    expect(pair).not.toBeNull();
+    const [a, b] = pair!;
+    expect(hashRange(a, 0, a.length)).toBe(hashRange(b, 0, b.length));
+    // One entry: both pieces land in it, one after the other.
+    const single = counterWith({ kernelCacheEntries: 1 });
+    for (const text of [a, b, a, a, b, b, `${a}${b}${a}`]) expect(single.count(text).tokens).toBe(encoded(text));
+  });
+
+  it(`records the same pieces as the TypeScript path for a text of more than ${PIECES_PER_CALL} pieces with characters outside the BMP along it`, () => {
+    const withKernel = counterWith();
+    const without = counterWith({ kernel: false });
+    const parts = brownSample(10).slice(0, 800);
+    // Emoji and an astral letter make the kernel stop and hand one piece to the regex.
+    const text = parts.join(' 😀 ').replace(/the /g, 'the 𝐀 ');
+    const pieces = piecesOf(withKernel, text);
+    expect(pieces.length).toBeGreaterThan(3 * PIECES_PER_CALL);
+    expect(pieces).toEqual(piecesOf(without, text));
+    expect(withKernel.count(text).tokens).toBe(encoded(text));
+  });
+
+  it(`counts a text longer than the kernel takes (${MAX_KERNEL_UNITS} units) in TypeScript, exactly`, () => {
+    const counter = counterWith();
+    const text = 'मौसम विभाग ने शाम को बारिश की चेतावनी दी। The desk filed at nine. '.repeat(Math.ceil((MAX_KERNEL_UNITS + 10) / 66));
+    expect(text.length).toBeGreaterThan(MAX_KERNEL_UNITS);
+    expect(counter.count(text).tokens).toBe(encoded(text));
+  });
+
+  it('fails a count whose merges throw mid-text with a TokenizerError, and counts exactly afterwards', () => {
+    let armed = false;
+    const failing = Object.create(ranks, {
+      rank: {
+        value(bytes: Uint8Array, start: number, end: number): number {
+          if (armed) throw new Error('rank table unreadable');
+          return ranks.rank(bytes, start, end);
+        },
+      },
+    }) as RankTable;
+    const counter = counterWith({ ranks: failing });
+    const first = 'The evening bulletin led with the monsoon.';
+    expect(counter.count(first).tokens).toBe(encoded(first));
+    armed = true;
+    // Pieces the caches have not seen need merges; the first of them throws inside the kernel's call back.
+    const second = `${first} Zanzibarian quixotically flummoxed`;
+    expect(() => counter.count(second)).toThrow(TokenizerError);
+    expect(() => counter.count(second)).toThrow(/^o200k_base: cannot encode text: rank table unreadable$/);
+    armed = false;
+    expect(counter.count(second).tokens).toBe(encoded(second));
+    expect(counter.count(first).tokens).toBe(encoded(first));
+  });
+});
