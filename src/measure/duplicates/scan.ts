@@ -11,7 +11,14 @@
 // lowercase, exact hash and word hashes together — 132 MB/s; a `/\s+/g` whitespace collapse
 // alone 92 MB/s and a `/[\p{L}\p{M}\p{N}]+/gu` matchAll alone 111 MB/s. One table-driven pass
 // over the code units does the work of both.
+//
+// DocumentScanner's pass runs in a WebAssembly kernel (kernels/duplicates.c, the same arithmetic
+// unit for unit) for texts up to MAX_SCAN_UNITS long, here for longer ones. Measured against this
+// file's loop alone, in alternating pairs of one-thread `sluice check --no-cache` runs on the
+// 40 MB bench corpus (shared 2-core machine; same reports): the duplicates-only policy took
+// 0.94× the CPU time (medians of 5 pairs), the pass itself 0.47× in a CPU profile (299 → 142 ms).
 import * as hash from './hash.js';
+import { MAX_SCAN_UNITS, scanKernel, type KernelWords } from '../kernels/duplicates-kernel.js';
 
 // Module-local copies: some loaders (tsx, vitest) turn imported bindings into getter calls,
 // which made the scan loops ~5× slower when measured.
@@ -64,7 +71,16 @@ function classTable(): Uint8Array {
 
 /** Returns the class of the astral code point whose surrogates start at `i` (the caller checked the pair). */
 function astralClass(text: string, i: number): number {
-  const cp = text.slice(i, i + 2);
+  return classOfAstral(text.slice(i, i + 2));
+}
+
+/** Returns the class of an astral code point (the kernel's call back). */
+function astralClassOf(codePoint: number): number {
+  return classOfAstral(String.fromCodePoint(codePoint));
+}
+
+/** Returns the class of an astral code point, given as its string. */
+function classOfAstral(cp: string): number {
   if (WORD_CHAR.test(cp)) return WORD;
   if (PUNCT_CHAR.test(cp)) return PUNCT;
   if (SPACE_CHAR.test(cp)) return SPACE;
@@ -232,30 +248,64 @@ export class DocumentScanner {
   /** The 64-bit exact hash as two unsigned 32-bit lanes. */
   exactHigh = 0;
   exactLow = 0;
-  /** Words found; their hashes are words[0 .. wordCount). */
+  /** Words found; their hashes are words[0 .. wordCount). Valid until the next scan. */
   wordCount = 0;
-  words: Int32Array = new Int32Array(1024);
+  words: Int32Array;
   /** Second-lane word hashes (as hashWords' lane2), filled only by a two-lane scanner. */
   words2: Int32Array | null;
+  /** The buffers of a scan in TypeScript. */
+  private ownWords: Int32Array = new Int32Array(1024);
+  private ownWords2: Int32Array | null;
+  /** The buffers of a scan in the kernel (kernels/duplicates.c), made on the first scan; null when this scanner does not use it. */
+  private kernelWords: KernelWords | null | undefined;
+  private readonly lanes: 1 | 2;
 
   /**
    * `lanes` 2 also hashes each word in contamination's second lane and leaves both lanes for
    * sharedWords: one pass then serves the duplicate index and the contamination check.
+   * `kernel` false scans in TypeScript only (the tests compare the two).
    */
-  constructor(lanes: 1 | 2 = 1) {
-    this.words2 = lanes === 2 ? new Int32Array(1024) : null;
+  constructor(lanes: 1 | 2 = 1, kernel = true) {
+    this.ownWords2 = lanes === 2 ? new Int32Array(1024) : null;
+    this.words = this.ownWords;
+    this.words2 = this.ownWords2;
+    this.lanes = lanes;
+    if (!kernel) this.kernelWords = null;
   }
 
   /**
    * Scans `prepared` (see prepareText) once, computing both the exact hash of its normal form
-   * (see normalizeForExact; punctuation deleted when `strip`) and one hash per word.
-   * One fused pass: classifying each code unit once is most of the cost.
+   * (see normalizeForExact; punctuation deleted when `strip`) and one hash per word: in the
+   * kernel, or here for a text longer than it takes.
    */
   scan(prepared: string, strip: boolean): void {
     if (shared.owner === this) shared.prepared = null;
+    if (this.kernelWords === null || prepared.length > MAX_SCAN_UNITS) {
+      this.scanHere(prepared, strip);
+    } else {
+      const kernel = scanKernel(classTable, astralClassOf);
+      const into = (this.kernelWords ??= kernel.words(this.lanes));
+      this.wordCount = kernel.scan(prepared, strip, into);
+      this.words = into.lane1;
+      this.words2 = into.lane2;
+      this.exactLength = kernel.exactLength();
+      this.exactHigh = kernel.exactHigh();
+      this.exactLow = kernel.exactLow();
+    }
+    if (this.words2 !== null) {
+      shared.prepared = prepared;
+      shared.owner = this;
+      shared.lane1 = this.words;
+      shared.lane2 = this.words2;
+      shared.count = this.wordCount;
+    }
+  }
+
+  /** The scan in TypeScript: one fused pass, as duplicates.c makes it; classifying each code unit once is most of the cost. */
+  private scanHere(prepared: string, strip: boolean): void {
     const t = classTable();
-    let words = this.words;
-    let words2 = this.words2;
+    let words = this.ownWords;
+    let words2 = this.ownWords2;
     const two = words2 !== null;
     let count = 0;
     let inWord = false;
@@ -375,17 +425,10 @@ export class DocumentScanner {
       words[count++] = mix32(wh ^ wlen);
     }
     finishExact(h1, h2, emitted, this);
-    this.words = words;
-    this.words2 = words2;
+    this.words = this.ownWords = words;
+    this.words2 = this.ownWords2 = words2;
     this.wordCount = count;
     this.exactLength = emitted;
-    if (two) {
-      shared.prepared = prepared;
-      shared.owner = this;
-      shared.lane1 = words;
-      shared.lane2 = words2!;
-      shared.count = count;
-    }
   }
 }
 

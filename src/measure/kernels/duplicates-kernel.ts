@@ -1,0 +1,99 @@
+// The duplicate scan's WebAssembly kernel (duplicates.c): one instance per thread, made on
+// first use. Each scanner reserves its own word buffers in the kernel's memory; the text being
+// scanned is copied into one buffer they all use.
+import { instantiateKernel, type KernelMemory } from './instance.js';
+import { WASM_BASE64 } from './duplicates.generated.js';
+
+interface DuplicatesExports {
+  setClasses(classes: number): void;
+  exactLength(): number;
+  exactHigh(): number;
+  exactLow(): number;
+  scanPrepared(text: number, n: number, strip: number, two: number, words: number, words2: number): number;
+}
+
+/**
+ * Longest text the kernel is given, in UTF-16 units (a longer one is scanned in TypeScript): the
+ * text and a word buffer of half its length are in the kernel's memory, which is never given
+ * back, so this bounds them at 2 MB and 2 MB a lane, a thread.
+ */
+export const MAX_SCAN_UNITS = 1 << 20;
+
+/** A scanner's word buffers in the kernel's memory, with views of them. */
+export interface KernelWords {
+  capacity: number;
+  at1: number;
+  at2: number;
+  lane1: Int32Array;
+  lane2: Int32Array | null;
+  buffer: ArrayBuffer | null;
+}
+
+export class ScanKernel {
+  private readonly kernel: DuplicatesExports & KernelMemory;
+  private textAt = 0;
+  private textUnits = 0;
+  private buffer: ArrayBuffer | null = null;
+  private bytes: Buffer = Buffer.alloc(0);
+
+  constructor(classes: Uint8Array, astralClass: (codePoint: number) => number) {
+    this.kernel = instantiateKernel<DuplicatesExports>(WASM_BASE64, { astralClass });
+    this.kernel.setClasses(this.kernel.place(classes));
+  }
+
+  /** Returns empty word buffers (one lane or two). */
+  words(lanes: 1 | 2): KernelWords {
+    return { capacity: 0, at1: 0, at2: lanes === 2 ? 0 : -1, lane1: new Int32Array(0), lane2: lanes === 2 ? new Int32Array(0) : null, buffer: null };
+  }
+
+  /**
+   * Scans `text` (prepared, at most MAX_SCAN_UNITS long) into the word buffers and returns its word
+   * count; exact() then gives its exact hash. The views in `into` are valid until the next scan.
+   */
+  scan(text: string, strip: boolean, into: KernelWords): number {
+    const n = text.length;
+    if (n > this.textUnits) {
+      this.textUnits = Math.max(n, this.textUnits * 2, 4096);
+      this.textAt = this.kernel.allocate(this.textUnits * 2);
+    }
+    const needed = (n >> 1) + 1;
+    if (needed > into.capacity) {
+      into.capacity = Math.max(needed, into.capacity * 2, 1024);
+      into.at1 = this.kernel.allocate(into.capacity * 4);
+      if (into.at2 >= 0) into.at2 = this.kernel.allocate(into.capacity * 4);
+      into.buffer = null;
+    }
+    const buffer = this.kernel.memory.buffer;
+    if (buffer !== this.buffer) {
+      this.buffer = buffer;
+      this.bytes = Buffer.from(buffer);
+    }
+    if (into.buffer !== buffer) {
+      into.buffer = buffer;
+      into.lane1 = new Int32Array(buffer, into.at1, into.capacity);
+      if (into.at2 >= 0) into.lane2 = new Int32Array(buffer, into.at2, into.capacity);
+    }
+    this.bytes.write(text, this.textAt, n * 2, 'utf16le');
+    return this.kernel.scanPrepared(this.textAt, n, strip ? 1 : 0, into.at2 >= 0 ? 1 : 0, into.at1, into.at2 >= 0 ? into.at2 : 0);
+  }
+
+  /** The last scan's exact normal form: its length in code units and its 64-bit hash as two unsigned lanes. */
+  exactLength(): number {
+    return this.kernel.exactLength() >>> 0;
+  }
+
+  exactHigh(): number {
+    return this.kernel.exactHigh() >>> 0;
+  }
+
+  exactLow(): number {
+    return this.kernel.exactLow() >>> 0;
+  }
+}
+
+let kernel: ScanKernel | undefined;
+
+/** Returns this thread's scan kernel, made on first use with the scan's class table and its astral classifier. */
+export function scanKernel(classes: () => Uint8Array, astralClass: (codePoint: number) => number): ScanKernel {
+  return (kernel ??= new ScanKernel(classes(), astralClass));
+}

@@ -1,0 +1,178 @@
+// The duplicate index's scan of one prepared document (duplicates/scan.ts DocumentScanner),
+// compiled to WebAssembly: in one pass over the UTF-16 units, the 64-bit hash of the exact
+// normal form (whitespace runs as one space, none at the ends, punctuation dropped when asked)
+// and one hash per word, in one lane or two. The arithmetic is scan.ts's, unit for unit, over
+// the same class table, so the hashes are the same bits (test/measure/duplicates-kernel.test.ts
+// compares the two). An astral code point's class comes from the caller (the imported
+// `astralClass`), which asks the engine's Unicode properties.
+//
+// Build: node scripts/gen-kernels.mjs (clang --target=wasm32, wasm-ld; Debian packages
+// clang and lld). The binary is committed as a generated file beside this source.
+#include <stdint.h>
+
+typedef uint8_t u8;
+typedef uint16_t u16;
+typedef int32_t i32;
+typedef uint32_t u32;
+
+// Code-unit classes, as scan.ts numbers them.
+#define OTHER 0
+#define WORD 1
+#define HIGH_SURROGATE 2
+#define SPACE 3
+#define PUNCT 4
+
+// The exact hash's lanes (duplicates/hash.ts).
+#define EXACT_BASIS_1 0x811c9dc5u
+#define EXACT_BASIS_2 0x6c62272eu
+#define EXACT_PRIME_1 0x01000193u
+#define EXACT_PRIME_2 0x5bd1e995u
+// The word hash's lanes.
+#define WORD_BASIS_1 0x811c9dc5u
+#define WORD_BASIS_2 0x050c5d1fu
+#define WORD_PRIME_1 0x01000193u
+#define WORD_PRIME_2 0x2c1b3c6du
+
+// The class (WORD, PUNCT, SPACE or OTHER) of an astral code point.
+__attribute__((import_module("env"), import_name("astralClass"))) i32 astralClass(i32 codePoint);
+
+static const u8 *C;
+static u32 exactLength;
+static u32 exactHigh;
+static u32 exactLow;
+
+__attribute__((export_name("setClasses"))) void setClasses(const u8 *classes) { C = classes; }
+__attribute__((export_name("exactLength"))) u32 getExactLength(void) { return exactLength; }
+__attribute__((export_name("exactHigh"))) u32 getExactHigh(void) { return exactHigh; }
+__attribute__((export_name("exactLow"))) u32 getExactLow(void) { return exactLow; }
+
+// MurmurHash3's finalizer and the "lowbias32" one (hash.ts mix32, mix32b).
+static inline u32 mix32(u32 h) {
+  h ^= h >> 16;
+  h *= 0x85ebca6bu;
+  h ^= h >> 13;
+  h *= 0xc2b2ae35u;
+  return h ^ (h >> 16);
+}
+
+static inline u32 mix32b(u32 h) {
+  h ^= h >> 16;
+  h *= 0x7feb352du;
+  h ^= h >> 15;
+  h *= 0x846ca68bu;
+  return h ^ (h >> 16);
+}
+
+// Scans t[0, n): writes one hash per word to words (and words2 when `two`), returns the word
+// count; exactLength/High/Low hold the exact normal form's length and 64-bit hash. The word
+// arrays must hold n / 2 + 1 entries (a word takes a unit and is followed by one that is not).
+__attribute__((export_name("scanPrepared"))) i32 scanPrepared(const u16 *t, i32 n, i32 strip, i32 two, u32 *words, u32 *words2) {
+  i32 count = 0;
+  i32 inWord = 0;
+  u32 wh = 0, wh2 = 0, wlen = 0;
+  u32 h1 = EXACT_BASIS_1, h2 = EXACT_BASIS_2;
+  u32 emitted = 0;
+  i32 space = 0; // whitespace seen since the last emitted unit
+  for (i32 i = 0; i < n; i++) {
+    u32 c = t[i];
+    u32 cls = C[c];
+    i32 lo = -1;
+    if (cls == HIGH_SURROGATE) {
+      u32 next = i + 1 < n ? t[i + 1] : 0;
+      if (next >= 0xdc00 && next < 0xe000) {
+        cls = (u32)astralClass((i32)(((c - 0xd800) << 10) + (next - 0xdc00) + 0x10000));
+        lo = (i32)next;
+        i++;
+      } else {
+        cls = OTHER;
+      }
+    }
+    if (cls == WORD) {
+      if (!inWord) {
+        inWord = 1;
+        wh = WORD_BASIS_1;
+        wh2 = WORD_BASIS_2;
+        wlen = 0;
+      }
+      if (space) {
+        if (emitted > 0) {
+          h1 = (h1 ^ 0x20) * EXACT_PRIME_1;
+          h2 = (h2 ^ 0x20) * EXACT_PRIME_2;
+          emitted++;
+        }
+        space = 0;
+      }
+      wh = (wh ^ c) * WORD_PRIME_1;
+      wh2 = (wh2 ^ c) * WORD_PRIME_2;
+      h1 = (h1 ^ c) * EXACT_PRIME_1;
+      h2 = (h2 ^ c) * EXACT_PRIME_2;
+      if (lo >= 0) {
+        wh = (wh ^ (u32)lo) * WORD_PRIME_1;
+        wh2 = (wh2 ^ (u32)lo) * WORD_PRIME_2;
+        h1 = (h1 ^ (u32)lo) * EXACT_PRIME_1;
+        h2 = (h2 ^ (u32)lo) * EXACT_PRIME_2;
+        wlen += 2;
+        emitted += 2;
+        continue;
+      }
+      // The rest of a run of BMP word units.
+      i32 from = i;
+      while (i + 1 < n) {
+        u32 d = t[i + 1];
+        if (C[d] != WORD) break;
+        wh = (wh ^ d) * WORD_PRIME_1;
+        wh2 = (wh2 ^ d) * WORD_PRIME_2;
+        h1 = (h1 ^ d) * EXACT_PRIME_1;
+        h2 = (h2 ^ d) * EXACT_PRIME_2;
+        i++;
+      }
+      wlen += (u32)(i - from + 1);
+      emitted += (u32)(i - from + 1);
+      continue;
+    }
+    if (inWord) {
+      inWord = 0;
+      if (two) words2[count] = mix32b(wh2 + wlen);
+      words[count++] = mix32(wh ^ wlen);
+    }
+    if (cls == SPACE) {
+      space = 1;
+      continue;
+    }
+    if (strip && cls == PUNCT) continue;
+    if (space) {
+      // One space stands for the whole whitespace run, never at the start.
+      if (emitted > 0) {
+        h1 = (h1 ^ 0x20) * EXACT_PRIME_1;
+        h2 = (h2 ^ 0x20) * EXACT_PRIME_2;
+        emitted++;
+      }
+      space = 0;
+    }
+    h1 = (h1 ^ c) * EXACT_PRIME_1;
+    h2 = (h2 ^ c) * EXACT_PRIME_2;
+    emitted++;
+    if (lo >= 0) {
+      h1 = (h1 ^ (u32)lo) * EXACT_PRIME_1;
+      h2 = (h2 ^ (u32)lo) * EXACT_PRIME_2;
+      emitted++;
+    }
+  }
+  if (inWord) {
+    if (two) words2[count] = mix32b(wh2 + wlen);
+    words[count++] = mix32(wh ^ wlen);
+  }
+  // hash.ts finishExact.
+  h1 ^= emitted;
+  h2 += emitted;
+  h1 += h2;
+  h2 += h1;
+  h1 = mix32(h1);
+  h2 = mix32b(h2);
+  h1 += h2;
+  h2 += h1;
+  exactLength = emitted;
+  exactHigh = h1;
+  exactLow = h2;
+  return count;
+}
