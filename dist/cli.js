@@ -6875,12 +6875,12 @@ var DocumentScanner = class {
    * sharedWords: one pass then serves the duplicate index and the contamination check.
    * `kernel` false scans in TypeScript only (the tests compare the two).
    */
-  constructor(lanes = 1, kernel4 = true) {
+  constructor(lanes = 1, kernel5 = true) {
     this.ownWords2 = lanes === 2 ? new Int32Array(1024) : null;
     this.words = this.ownWords;
     this.words2 = this.ownWords2;
     this.lanes = lanes;
-    if (!kernel4) this.kernelWords = null;
+    if (!kernel5) this.kernelWords = null;
   }
   /**
    * Scans `prepared` (see prepareText) once, computing both the exact hash of its normal form
@@ -6892,14 +6892,14 @@ var DocumentScanner = class {
     if (this.kernelWords === null || prepared.length > MAX_SCAN_UNITS) {
       this.scanHere(prepared, strip);
     } else {
-      const kernel4 = scanKernel(classTable, astralClassOf);
-      const into = this.kernelWords ??= kernel4.words(this.lanes);
-      this.wordCount = kernel4.scan(prepared, strip, into);
+      const kernel5 = scanKernel(classTable, astralClassOf);
+      const into = this.kernelWords ??= kernel5.words(this.lanes);
+      this.wordCount = kernel5.scan(prepared, strip, into);
       this.words = into.lane1;
       this.words2 = into.lane2;
-      this.exactLength = kernel4.exactLength();
-      this.exactHigh = kernel4.exactHigh();
-      this.exactLow = kernel4.exactLow();
+      this.exactLength = kernel5.exactLength();
+      this.exactHigh = kernel5.exactHigh();
+      this.exactLow = kernel5.exactLow();
     }
     if (this.words2 !== null) {
       shared.prepared = prepared;
@@ -10206,14 +10206,14 @@ function countClassesByCodePoint(table3, text, end) {
 }
 var classesAt = -1;
 var classCountsAt = 0;
-function topExpression(kernel4, text, end) {
+function topExpression(kernel5, text, end) {
   const table3 = francClasses();
   if (classesAt < 0) {
-    classesAt = kernel4.place(table3);
-    classCountsAt = kernel4.allocate(4 * classCounts.length);
+    classesAt = kernel5.place(table3);
+    classCountsAt = kernel5.allocate(4 * classCounts.length);
   }
-  if (kernel4.countClasses(textAt, end, classesAt, classCountsAt, classCounts.length) === 0) {
-    classCounts.set(new Int32Array(kernel4.memory.buffer, classCountsAt, classCounts.length));
+  if (kernel5.countClasses(textAt, end, classesAt, classCountsAt, classCounts.length) === 0) {
+    classCounts.set(new Int32Array(kernel5.memory.buffer, classCountsAt, classCounts.length));
   } else countClassesByCodePoint(table3, text, end);
   expressionCounts.fill(0);
   for (let c = 1; c < classCounts.length; c++) {
@@ -10334,8 +10334,8 @@ function invertAnew(group, languages) {
   perLanguage2.forEach((rankOf, l) => {
     for (const [id, rank2] of rankOf) rows[rowOf[id] * stride + l] = rank2 + 1;
   });
-  const kernel4 = francKernel();
-  return { languages, rowOfAt: kernel4.place(rowOf), rowsAt: kernel4.place(rows), stride };
+  const kernel5 = francKernel();
+  return { languages, rowOfAt: kernel5.place(rowOf), rowsAt: kernel5.place(rows), stride };
 }
 var foldedUnit;
 var SEPARATOR = 32;
@@ -10364,14 +10364,14 @@ var viewsOf;
 var textBytes = Buffer.alloc(0);
 var cleaned = new Uint16Array(0);
 function kernelWithViews() {
-  const kernel4 = francKernel();
-  const buffer = kernel4.memory.buffer;
+  const kernel5 = francKernel();
+  const buffer = kernel5.memory.buffer;
   if (buffer !== viewsOf) {
     viewsOf = buffer;
     textBytes = Buffer.from(buffer, textAt, MAX_LENGTH * 2);
     cleaned = new Uint16Array(buffer, cleanedAt, SCRATCH_UNITS);
   }
-  return kernel4;
+  return kernel5;
 }
 var distancesAt = 0;
 var distancesRoom = 0;
@@ -10383,28 +10383,28 @@ function distancesFor(k) {
   return distancesAt;
 }
 function placeTables() {
-  const kernel4 = francKernel();
-  const foldedAt = kernel4.place(cleaningTable());
-  const directAt = kernel4.place(directId);
-  const internAt = kernel4.place(internTable);
-  const tallyAt = kernel4.allocate(internCount * 2);
-  const distinctAt = kernel4.allocate(SCRATCH_UNITS * 4);
-  textAt = kernel4.allocate(MAX_LENGTH * 2);
-  cleanedAt = kernel4.allocate(SCRATCH_UNITS * 2);
-  new Uint16Array(kernel4.memory.buffer, tallyAt, internCount).fill(0);
-  kernel4.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt);
+  const kernel5 = francKernel();
+  const foldedAt = kernel5.place(cleaningTable());
+  const directAt = kernel5.place(directId);
+  const internAt = kernel5.place(internTable);
+  const tallyAt = kernel5.allocate(internCount * 2);
+  const distinctAt = kernel5.allocate(SCRATCH_UNITS * 4);
+  textAt = kernel5.allocate(MAX_LENGTH * 2);
+  cleanedAt = kernel5.allocate(SCRATCH_UNITS * 2);
+  new Uint16Array(kernel5.memory.buffer, tallyAt, internCount).fill(0);
+  kernel5.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt);
 }
-function countTrigrams(kernel4, text, end) {
+function countTrigrams(kernel5, text, end) {
   textBytes.write(end === text.length ? text : text.slice(0, end), 0, end * 2, "utf16le");
-  const distinct = kernel4.countTrigrams(textAt, end);
+  const distinct = kernel5.countTrigrams(textAt, end);
   if (distinct >= 0) {
-    const flags = kernel4.sampleFlags();
+    const flags = kernel5.sampleFlags();
     sampleIsAscii = (flags & 1) !== 0;
     sampleHasAsciiLetter = (flags & 2) !== 0;
     return distinct;
   }
   const n = clean(text, end);
-  return kernel4.countCleaned(cleanedAt, n);
+  return kernel5.countCleaned(cleanedAt, n);
 }
 function clean(text, end) {
   const folded2 = cleaningTable();
@@ -10466,15 +10466,15 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
   const label = (text) => {
     if (!text || text.length < minLength) return UND;
     const end = Math.min(text.length, MAX_LENGTH);
-    const kernel4 = kernelWithViews();
-    const distinct = countTrigrams(kernel4, text, end);
-    const top = sampleIsAscii && ASCII_SHORTCUT ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 } : topExpression(kernel4, text, end);
+    const kernel5 = kernelWithViews();
+    const distinct = countTrigrams(kernel5, text, end);
+    const top = sampleIsAscii && ASCII_SHORTCUT ? { expression: sampleHasAsciiLetter ? LATIN : 0, count: sampleHasAsciiLetter ? 1 : 0 } : topExpression(kernel5, text, end);
     const name = FRANC_EXPRESSIONS[top.expression];
     const group = groups[top.expression];
     if (!group) return top.count === 0 || !(anything || allowed.has(name)) ? UND : name;
     const k = group.languages.length;
     if (k === 0) return UND;
-    const best = kernel4.nearestDense(distinct, group.rowOfAt, group.rowsAt, group.stride, k, distances);
+    const best = kernel5.nearestDense(distinct, group.rowOfAt, group.rowsAt, group.stride, k, distances);
     return group.languages[best];
   };
   return Object.assign(label, { only: [...only] });
@@ -16550,6 +16550,65 @@ var WORD_BREAK_RANGE_VALUES = [
   0
 ];
 
+// src/measure/kernels/words.generated.ts
+var WASM_BASE643 = "AGFzbQEAAAABGARgAn9/AGABfwBgAAF/YAZ/f39/f38BfwISAQNlbnYKY2xvc2VyTG9vawAAAwYFAQICAgMEBQFwAQEBBQMBAAIGDwJ/AUGQiAQLfwBBkIgECwdKBwZtZW1vcnkCAAdzZXRJbmZvAAEJc3RvcHBlZEF0AAIFYnl0ZXMAAwVmbGFncwAECXNjYW5Xb3JkcwAFC19faGVhcF9iYXNlAwEKpgwFDQBBACAANgKAiICAAAsLAEEAKAKEiICAAAsLAEEAKAKIiICAAAsLAEEAKAKMiICAAAvxCwEUfyAEQQAgBUECdPwLAEEAQX82AoSIgIAAAkAgAUEASg0AQQBBADYCjIiAgABBAEEANgKIiICAAEEADwsgAUF/aiEGIABBAmohB0EAKAKAiICAACEIQQAhCUEAIQpBACELQQAhDEEAIQ1BACEOQQAhD0EAIRBBACERQQAhEkEAIRNBACEUQQAhFUEAIRYCQANAIBQhFyAIIAAgEUEBdGoiGC8BACIZQQJ0aigCACIFQQx2IRQCQCAFQYDgAkkNAAJAIAVBgIAEcUUNACARQQFIDQAgGEF+ai8BAEGNwABHDQBBACAJNgKIiICAAEEAIBE2AoSIgIAAQQAgCjYCjIiAgABBfw8LIBRBD3EiFEELRw0AQQAgETYChIiAgAAMAgsgBCAFQf8BcUECdGoiGCAYKAIAQQFqNgIAIAVBCHZBA3EhGAJAIAVBgAhxRQ0AIBkgERCAgICAAEEAKAKAiICAACEICyAFIApyIQogGCAJaiEJAkACQAJAAkACQAJAIAwOAwIAAQMLAkAgFEEKRw0AQQEhDCARQQFqIQ4gFyEUDAULAkAgFEF/akEDSw0AQQEhDCARQQFqIQ9BBCEVAkAgFEEERg0AIA8hGEEBIRMMBQsgEkEBaiESIBchFCAPIQ4MBQsgFUF/aiEFAkACQAJAIBRBBUcNACAFQQJJDQELAkAgFEF5akEBSw0AIAVBA0kNAQsCQCAUQQZHDQAgFUEDRg0BCyAUQQlHDQEgFUECRw0BC0ECIQwgEUEBaiIWIRAMBQtBACEMAkAgE0UgEkECSHFFDQAgFyEUDAULAkAgFUEERyAOIA9Mcg0AIBchFAwFCwJAIAJFDQAgAyALQQN0aiIFIA02AgAgBUEEaiAONgIACyALQQFqIQsgFyEUDAQLAkAgFEEKRw0AIBFBAWohFkECIQwgFyEUDAQLAkACQAJAIBVBf2ogFEF/anJBAUsNACAXQXpqDgQAAQEAAQsCQCAUQQJHDQAgFUECRw0AIBdBCUYNAQsgFEEDRw0BIBVBA0cNASAXQQVGDQEgF0EJRg0BC0EBIRMgEUEBaiIYIQ8MAwsCQAJAIBVBAkcNACAXQQhHDQAgECEFIBYgEEYNAUECIRUMAgsgE0UgEkECSHENASAOIQUgFUEERyAOIA9MckUNAQsgBUEASA0AAkAgAkUNACADIAtBA3RqIhggDTYCACAYQQRqIAU2AgALIAtBAWohCwtBACEMAkAgFEF7akF8Tw0AIBchFAwDC0EEIRUgFEEERyETQQEhDEEAIRIgEUEBaiIYIQ8gESENIBRBBEcNASAXIRRBASESIBghDyAYIQ4gESENDAILIBFBAWohGCAVIRQLQQEhDAJAIBggAUgNACAUIRUgFyEUIBghDgwBCwJAAkACQCAIIAAgGEEBdCIZai8BAEECdGooAgAiBUGA6AdxIgwgFEEMdCIVRg0AIAxBgMACRw0BCyAHIBlqIREDQCAEIAVB/wFxQQJ0aiIMIAwoAgBBAWo2AgAgBSAKciEKIAVBCHZBA3EgCWohCSAGIBhGDQIgGEEBaiEYIBEvAQAhBSARQQJqIgwhESAIIAVBAnRqKAIAIgVBgOgHcSIZIBVGDQAgDCERIBlBgMACRg0ACyAYQX9qIRELQQEhDCARQQFqIQ4gFCEVIBchFAwBC0EBIQwgGEEBaiEOIBQhFSAXIRQgGCERCyARQQFqIhEgAUgNAAtBACgChIiAgAAhESAUIRcLQQAgCjYCjIiAgABBACAJNgKIiICAAEF/IQUCQCARQX9KDQAgCyEFAkACQAJAIAxBf2oOAgABAwsCQCATRSASQQJIcUUNACALDwsgFUEERyAOIA9Mcg0BIAsPCwJAIBVBAkcNACAXQQhHDQAgFiEOIBYgEEYNASALDwsCQCATRSASQQJIcUUNACALDwsgFUEERyAOIA9Mcg0AIAsPCwJAIA5BAE4NACALDwsCQCACRQ0AIAMgC0EDdGoiBSANNgIAIAVBBGogDjYCAAsgC0EBaiEFCyAFCw==";
+
+// src/measure/kernels/words-kernel.ts
+var MAX_WORD_UNITS = 1 << 20;
+var WordKernel = class {
+  constructor(info, scripts, closerLook2) {
+    this.scripts = scripts;
+    this.kernel = instantiateKernel(WASM_BASE643, { closerLook: closerLook2 });
+    this.kernel.setInfo(this.kernel.place(new Uint8Array(info.buffer, info.byteOffset, info.byteLength)));
+    this.countsAt = this.kernel.allocate(scripts * 4);
+  }
+  scripts;
+  kernel;
+  textAt = 0;
+  outAt = 0;
+  units = 0;
+  countsAt;
+  buffer = null;
+  bytesView = Buffer.alloc(0);
+  /** Word offsets of the last scan with `record` (two per word), and characters per Script id; views valid until the next scan. */
+  offsets = new Int32Array(0);
+  counts = new Int32Array(0);
+  /** Scans a text (at most MAX_WORD_UNITS long): the word count, or -1 where the word rules stop (stoppedAt()). */
+  scan(text, record) {
+    const n = text.length;
+    if (n > this.units) {
+      this.units = Math.max(n, this.units * 2, 4096);
+      this.textAt = this.kernel.allocate(this.units * 2);
+      this.outAt = this.kernel.allocate((this.units + 2) * 4);
+    }
+    const buffer = this.kernel.memory.buffer;
+    if (buffer !== this.buffer) {
+      this.buffer = buffer;
+      this.bytesView = Buffer.from(buffer);
+      this.counts = new Int32Array(buffer, this.countsAt, this.scripts);
+    }
+    if (this.offsets.buffer !== buffer || this.offsets.byteOffset !== this.outAt) this.offsets = new Int32Array(buffer, this.outAt, this.units + 2);
+    this.bytesView.write(text, this.textAt, n * 2, "utf16le");
+    return this.kernel.scanWords(this.textAt, n, record ? 1 : 0, this.outAt, this.countsAt, this.scripts);
+  }
+  /** Where the last scan's word rules stopped (its counts cover the text before it). */
+  stoppedAt() {
+    return this.kernel.stoppedAt();
+  }
+  /** UTF-8 bytes of the characters the last scan counted. */
+  bytes() {
+    return this.kernel.bytes() >>> 0;
+  }
+  /** OR of their table entries. */
+  flags() {
+    return this.kernel.flags() >>> 0;
+  }
+};
+var kernel3;
+function wordKernel(info, scripts, closerLook2) {
+  return kernel3 ??= new WordKernel(info(), scripts, closerLook2);
+}
+
 // src/measure/words.ts
 var OTHER3 = 0;
 var ALETTER = 1;
@@ -16672,6 +16731,28 @@ function finishTally(text, tally, bytes3, chars, flags) {
 var unusedTally = new CharacterTally();
 var offsets = new Int32Array(1024);
 function scan(text, record, tally) {
+  return kernelOn && text.length <= MAX_WORD_UNITS ? scanByKernel(text, record, tally) : scanHere(text, record, tally);
+}
+var kernelOn = true;
+var closerInto = unusedTally;
+var closerLookInKernel = (unit, at) => closerLook(unit, at, closerInto.anomalies, closerInto.marks);
+function scanByKernel(text, record, tally) {
+  const kernel5 = wordKernel(characterInfo, SCRIPT_NAMES.length, closerLookInKernel);
+  closerInto = tally ?? unusedTally;
+  const count3 = kernel5.scan(text, record);
+  if (tally !== null) tally.counts.set(kernel5.counts);
+  if (count3 < 0) {
+    if (tally !== null) countCharactersFrom(text, kernel5.stoppedAt(), tally, kernel5.bytes(), kernel5.flags());
+    return -1;
+  }
+  if (record) {
+    if (offsets.length < count3 * 2) offsets = new Int32Array(Math.max(1024, count3 * 4));
+    offsets.set(kernel5.offsets.subarray(0, count3 * 2));
+  }
+  if (tally !== null) finishTally(text, tally, kernel5.bytes(), text.length, kernel5.flags());
+  return count3;
+}
+function scanHere(text, record, tally) {
   const table3 = characterInfo();
   const into = tally ?? unusedTally;
   const { counts, anomalies, marks } = into;
@@ -17854,7 +17935,7 @@ var splitCl100k = (text, p) => {
 };
 
 // src/measure/kernels/tokens.generated.ts
-var WASM_BASE643 = "AGFzbQEAAAABMAdgA39/fwF/YAF/AGAAAX9gAAF8YAR/f39/AX9gAn9/AX9gCn9/f39/f39/f38BfwIPAQNlbnYHcmVzb2x2ZQAAAwgHAQIDBAUABgQFAXABAQEFAwEAAgYPAn8BQaCIBAt/AEGgiAQLB1MHBm1lbW9yeQIACnNldENsYXNzZXMAAQlzdG9wcGVkQXQAAgZ0b2tlbnMAAwhwaWVjZUVuZAAEC2NvdW50UGllY2VzAAcLX19oZWFwX2Jhc2UDAQqaLAcNAEEAIAA2AoCIgIAACwsAQQAoAoSIgIAACwsAQQArA4iIgIAACyIAQQAgATYClIiAgABBACAANgKQiICAACADIAIQhYCAgAALhhYBCX9BfyECAkACQAJAAkACQAJAAkACQAJAAkACQAJAIABBf2oOAgEAAgtBACgCgIiAgAAiA0EAKAKQiICAACIEIAFBAXRqLwEAIgVqLQAAIgBBgAFxDQYgAEHAAHEhAgJAIABBGHEiBkUNACACDQAgAUEAQQEQhoCAgAAiAUF/IAFBf0obDwsCQCAAQQJxRQ0AQQAoApSIgIAAIgUgAUEBaiIAIAUgAEobIQcgASABQQJqIgIgASACShsiBkEBaiECIAQgAEEBdGohAANAIAYgAUYNCAJAIAUgAUEBaiIBSg0AIAcPCyAALwEAIQQgAEECaiEAIAMgBGotAAAiBEECcQ0ACyABQX8gBEEYdEEYdUF/ShsPCwJAIAJFDQAgAUEBIAZBAEcQhoCAgAAiAkF+Rw0HQX8hAgJAIAVBIEcNAEF/IQJBACgClIiAgAAgAUEBaiIFTA0AQX8hAiADIAQgBUEBdGovAQBqLQAAIgZBgAFxDQggBUF/IAZBIHEbIQILIAIgASACQX9KGyACIABBIHEbIgVBAEgNAEEAKAKUiICAACIIIAUgCCAFShshAiAEIAVBAXRqIQYCQANAIAIgBUYNASAFQQFqIQUgBi8BACEHIAZBAmohBiADIAdqLQAAIgdBIHENAAtBfyECIAdBGHRBGHVBAEgNCCAFQX9qIQILAkAgAkEATg0AQX8PCyAIIAJMDQcgBCACQQF0aiEFAkADQAJAAkAgBS8BACIGQXZqDgQBAwMBAAsgBkEvRw0CCyAFQQJqIQUgCCACQQFqIgJHDQALIAghAgsgAkF+Rw0HC0EAKAKUiICAACIHIAFMDQICQCAAQQRxRQ0AIAdBf2ohBiABQQF0IARqQQJqIQIgASEAAkADQAJAIAYgAEcNACAHIQAMAgsgAEEBaiEAIAIvAQAhBSACQQJqIQIgAyAFai0AAEEEcQ0ACwsgAEF/aiEGIAAgAUwNCyAEIAZBAXRqIQQgACEFA0ACQAJAIAQvAQAiA0F2ag4EAAEBAAELIAUhAgsgA0ENRiADQQpGcw0IIARBfmohBCAFQX9qIgUgAUwNDAwACwsgAUF/aiEGDAkLQQAoAoCIgIAAIgRBACgCkIiAgAAiBiABQQF0aiIALwEAIgVqLQAAIgNBgAFxDQUCQCAFQSdHDQBBACECQQAoApSIgIAAIgcgAUwNAAJAIAcgAUEBaiIITA0AIAYgCEEBdGovAQAhAgtBAiEIQQAhCQJAIAcgAUECaiIKTA0AIAYgCkEBdGovAQAhCQsCQAJAIAJBIGogAiACQb9/akEaSRsiB0Gcf2oiAkEQSw0AQQEgAnRBgYQGcQ0BCyAJQSBqIAkgCUG/f2pBGkkbIQJBAyEIAkAgB0HyAEcNACACQeUARg0BCwJAIAdB9gBHDQAgAkHlAEYNAQsgB0HsAEcNASACQewARw0BCyAIIAFqDwsCQCADQQFxRQ0AQQAoApSIgIAAIgIgASACIAFKGyECA0AgAiABRg0HIAFBAWohASAALwEAIQMgAEECaiEAIAQgA2otAAAiA0EBcQ0ACyABQX9qQX8gA0EYdEEYdUF/ShsPCwJAIANBAnFFDQBBACgClIiAgAAiBSABQQFqIgAgBSAAShshCCABIAFBAmoiAiABIAJKGyIHQQFqIQIgBiAAQQF0aiEAA0AgByABRg0HAkAgBSABQQFqIgFKDQAgCA8LIAAvAQAhAyAAQQJqIQAgBCADai0AACIDQQJxDQALIAFBfyADQRh0QRh1QX9KGw8LAkACQCADQcAAcQ0AQQAoApSIgIAAIQgMAQtBfyECAkBBACgClIiAgAAiCCABQQFqIgdMDQBBfyECIAQgBiAHQQF0ai8BAGotAAAiAEGAAXENBwJAIABBAXFFDQAgBiAHQQF0aiEAIAggByAIIAdKGyICQX9qIQUDQCAFIAFGDQkgAUEBaiEBIAAvAQAhAyAAQQJqIQAgBCADai0AACIDQQFxDQALIAFBfyADQRh0QRh1QX9KGw8LQX8hAiAFQSBHDQAgB0F/IABBIHEbIQILIAIgASACQX9KGyACIANBIHEbIgBBAEgNACAIIAAgCCAAShshAiAGIABBAXRqIQUCQANAIAIgAEYNASAAQQFqIQAgBS8BACEHIAVBAmohBSAEIAdqLQAAIgdBIHENAAtBfyECIAdBGHRBGHVBAEgNByAAQX9qIQILAkAgAkEATg0AQX8PCyAIIAJMDQYgBiACQQF0aiEAAkADQAJAIAAvAQBBdmoOBAACAgACCyAAQQJqIQAgCCACQQFqIgJHDQALIAghAgsgAkF+Rw0GCyAIIAFMDQICQCADQQRxRQ0AIAhBf2ohBSABQQF0IAZqQQJqIQIgASEAAkADQAJAIAUgAEcNACAIIQAMAgsgAEEBaiEAIAIvAQAhAyACQQJqIQIgBCADai0AAEEEcQ0ACwsgAEF/aiEHIAAgAUwNCCAGIAdBAXRqIQMgACEFA0ACQAJAIAMvAQAiBEF2ag4EAAEBAAELIAUhAgsgBEENRiAEQQpGcw0HIANBfmohAyAFQX9qIgUgAUwNCQwACwsgAUF/aiEHDAYLQQAoAoCIgIAAIgNBACgCkIiAgAAiBSABQQF0ai8BACIGai0AACIEQYABcQ0EIAEhACAEIQcCQAJAIAZBYGoOCAEFBQUFBQUABQtBACEAQQAoApSIgIAAIgIgAUwNAwJAIAIgAUEBaiIGTA0AIAUgBkEBdGovAQAhAAtBAiEGQQAhCAJAIAIgAUECaiIHTA0AIAUgB0EBdGovAQAhCAsCQAJAIABBnH9qIgJBEEsNAEEBIAJ0QYGEBnENAQtBAyEGAkAgAEHyAEcNACAIQeUARg0BCwJAIABB9gBHDQAgCEHlAEYNAQsgAEHsAEcNBCABIQAgBCEHIAhB7ABHDQULIAYgAWoPCyABIQAgBCEHQQAoApSIgIAAIAFBAWoiBkwNAyADIAUgBkEBdGovAQBqLQAAIgBBgAFxDQQgACAEIABBI3EiAhshByAGIAEgAhshAAwDCyABQX9qIQYMBgsgAUF/aiEHDAMLIAEhACAEIQcLAkAgB0EBcUUNAEEAKAKUiICAACIBIAAgASAAShshAiAFIABBAXRqIQEDQCACIABGDQIgAEEBaiEAIAEvAQAhBCABQQJqIQEgAyAEai0AACIEQQFxDQALIABBf2pBfyAEQRh0QRh1QX9KGw8LAkAgB0ECcUUNAEEAKAKUiICAACIBIAAgASAAShshAiAFIABBAXRqIQEDQCACIABGDQIgAEEBaiEAIAEvAQAhBCABQQJqIQEgAyAEai0AACIEQQJxDQALIABBf2pBfyAEQRh0QRh1QX9KGw8LQQAoApSIgIAAIQgCQCAHQSBxRQ0AIAggACAIIABKGyECIAUgAEEBdGohAQNAIAIgAEYNAiAAQQFqIQAgAS8BACEEIAFBAmohASADIARqLQAAIgRBIHENAAsgAEF/akF/IARBGHRBGHVBf0obDwsgASECAkAgCCABTA0AIAEhAiAEQQRxRQ0AIAhBf2ohBiABQQF0IAVqQQJqIQAgASECA0ACQCAGIAJHDQAgCCECDAILIAJBAWohAiAALwEAIQQgAEECaiEAIAMgBGotAABBBHENAAsLIAIgAiAIRyACIAFrQQFHcWshAgsgAg8LIAEhAAsgACAAIAcgACABa0EBRhsgCCAARhsPCyABIQALIAAgACAGIAAgAWtBAUYbIAcgAEYbC7AMAQl/AkACQAJAIAENAEF+IQMMAQtBACgClIiAgAAiBCAAQQFqIgUgBCAFShsiBkF/aiEDQQAoApCIgIAAIgcgBUEBdGohCEEAKAKAiICAACEJIAAhCgJAA0ACQCADIApHDQAgBiEKDAILIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EIcQ0ACyALQRh0QRh1QQBODQBBfw8LQX8hAyAKQQBIDQECQCAEIApMDQACQCAJIAcgCkEBdGoiCC8BAGotAAAiC0EQcUUNACAEIAogBCAKShshAwNAIAMgCkYNAyAKQQFqIQogCC8BACELIAhBAmohCCAJIAtqLQAAIgtBEHENAAsgCkF/akF/IAtBGHRBGHVBf0obIQMMAgsgC0GAAXENAgtBfiEDIApBAXQgB2pBfmohCANAIAogBUwNASAKQX9qIQogCC8BACELIAhBfmohCCAJIAtqLQAAQRBxRQ0ACyAKQQFqIQMLAkAgAkUNACADQX5HDQBBACgClIiAgAAiBCAAIAQgAEobIQtBACgCkIiAgAAiByAAQQF0aiEIQQAoAoCIgIAAIQUgACEKAkADQCALIApGDQEgCkEBaiEKIAgvAQAhCSAIQQJqIQggBSAJai0AACIJQQhxDQALQX8hAyAJQRh0QRh1QQBIDQIgCkF/aiELC0F/IQMgC0EASA0BAkAgBCALTA0AAkAgBSAHIAtBAXRqIgovAQBqLQAAIghBEHFFDQAgBCALIAQgC0obIQMDQCADIAtGDQMgC0EBaiELIAovAQAhCCAKQQJqIQogBSAIai0AACIIQRBxDQALIAtBf2pBfyAIQRh0QRh1QX9KGyEDDAILIAhBgAFxDQILQX4hAyALQQF0IAdqQX5qIQoDQCALIABMDQEgC0F/aiELIAovAQAhCCAKQX5qIQogBSAIai0AAEEQcUUNAAsgC0EBaiEDCwJAIAFFDQAgA0F+Rw0AQQAhCAJAAkBBACgClIiAgAAiBSAAQQFqIgpMDQBBACgCgIiAgAAiCUEAKAKQiICAACIBIApBAXRqLwEAai0AACIIQQhxDQELQX9BfiAIQYABcRshAwwBCyABIApBAXRqIQggBSAKIAUgCkobIgRBf2ohAyAAIQoCQANAAkAgAyAKRw0AIAQhCgwCCyAKQQFqIQogCC8BACELIAhBAmohCCAJIAtqLQAAIgtBCHENAAsgC0EYdEEYdUEATg0AQX8PCwJAIApBAE4NAEF/DwsgBSAKIAUgCkobIQMgASAKQQF0aiEIA0AgAyAKRg0BIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EQcQ0ACyAKQX9qQX8gC0EYdEEYdUF/ShshAwsCQCACRQ0AIANBfkcNAEEAIQgCQAJAQQAoApSIgIAAIgUgAEwNAEEAKAKAiICAACIJQQAoApCIgIAAIgEgAEEBdGoiCi8BAGotAAAiCEEIcQ0BC0F/QX4gCEGAAXEbDwsgBSAAIAUgAEobIQgCQANAIAggAEYNASAAQQFqIQAgCi8BACELIApBAmohCiAJIAtqLQAAIgtBCHENAAtBfyEDIAtBGHRBGHVBAEgNAiAAQX9qIQgLAkAgCEEATg0AQX8PCyAFIAggBSAIShshAyABIAhBAXRqIQoDQCADIAhGDQEgCEEBaiEIIAovAQAhCyAKQQJqIQogCSALai0AACILQRBxDQALQX8hAyALQRh0QRh1QQBIDQEgCEF/aiEDC0EAIQogA0EASA0AAkBBACgClIiAgAAiCCADTA0AQQAhCkEAKAKQiICAACIJIANBAXRqLwEAQSdHDQBBACEAQQAhCwJAIAggA0EBaiIKTA0AIAkgCkEBdGovAQAhCwtBAiEKAkAgCCADQQJqIgVMDQAgCSAFQQF0ai8BACEACwJAIAtBIGogCyALQb9/akEaSRsiC0Gcf2oiCEEQSw0AQQEgCHRBgYQGcQ0BCyAAQSBqIAAgAEG/f2pBGkkbIQhBAyEKAkAgC0HyAEcNACAIQeUARg0BCwJAIAtB9gBHDQAgCEHlAEYNAQtBA0EAIAhB7ABGG0EAIAtB7ABGGyEKCyAKIANqIQMLIAMLlAkCAXwOf0EAIAE2ApSIgIAAQQAgADYCkIiAgABEAAAAAAAAAAAhCgJAAkAgAiABTg0AIARBAUgNAEQAAAAAAAAAACEKQQAhCwNAAkAgAyACEIWAgIAAIgxBAE4NACACIQwMAwsgDCACayENQcW78oh4IQ4CQCAMIAJMDQAgDUEDcSEPQcW78oh4IQ4gAiEQAkAgDCACQX9zakEDSQ0AIA1BfHEhESAAIAJBAXRqIRJBxbvyiHghDiACIRADQCAOIBIvAQBzQZODgAhsIBJBAmovAQBzQZODgAhsIBJBBGovAQBzQZODgAhsIBJBBmovAQBzQZODgAhsIQ4gEkEIaiESIBBBBGohECARQXxqIhENAAsLIA9FDQAgACAQQQF0aiESA0AgDiASLwEAc0GTg4AIbCEOIBJBAmohEiAPQX9qIg8NAAsLAkACQAJAAkACQCANQRFODQAgCCAOIAlxIhNBBXRqIRQgByATQQN0aiIVKAIAIhFBEHYgDUcNAiAVKAIEIA5HDQICQCANQQFODQBBACEQDAILIAAgAkEBdGohEkEAIRAgFCEPA0AgDy8BACASLwEARw0CIA9BAmohDyASQQJqIRIgDSAQQQFqIhBHDQAMBAsLIAIgDCAOEICAgIAAIREMAwsgECANRg0BCyACIAwgDhCAgICAACERIBUgDjYCBCAVIBEgDUEQdHI2AgAgDUEBSA0BIBNBBHQhFkEAIQ8CQCANQQhJDQAgACACQQF0aiEXAkAgFCAAIAxBAXRqTw0AIBcgCCAMIBZqIAJrQQF0akkNAQsgDUF4cSIPQXhqIhJBA3ZBAWoiDkEDcSEVQQAhEwJAIBJBGEkNACAOQfz///8DcSEYQQAhEkEAIRMDQCAUIBJqIg4gFyASaiIQ/QABAP0LAQAgDkEQaiAQQRBq/QABAP0LAQAgDkEgaiAQQSBq/QABAP0LAQAgDkEwaiAQQTBq/QABAP0LAQAgEkHAAGohEiATQSBqIRMgGEF8aiIYDQALCwJAIBVFDQAgACACIBNqQQF0aiESIAggEyAWakEBdGohDgNAIA4gEv0AAQD9CwEAIBJBEGohEiAOQRBqIQ4gFUF/aiIVDQALCyANIA9GDQILIAwgD0F/c2ogAmshFQJAIA1BA3EiEEUNACAAIA8gAmpBAXRqIRIgCCAPIBZqQQF0aiEOA0AgDiASLwEAOwEAIBJBAmohEiAOQQJqIQ4gD0EBaiEPIBBBf2oiEA0ACwsgFUEDSQ0BIAwgD2sgAmshECAIIA8gFmpBAXRqIRIgACACIA9qQQF0aiEOA0AgEiAOLwEAOwEAIBJBAmogDkECai8BADsBACASQQRqIA5BBGovAQA7AQAgEkEGaiAOQQZqLwEAOwEAIBJBCGohEiAOQQhqIQ4gEEF8aiIQDQAMAgsLIBFB//8DcSERCyAFIAtBAnQiEmogDDYCACAGIBJqIBE2AgAgC0EBaiELIAogEbegIQogDCABTg0CIAwhAiALIARIDQAMAgsLQQAhCyACIQwLQQAgCjkDiIiAgABBACAMNgKEiICAACALCw==";
+var WASM_BASE644 = "AGFzbQEAAAABMAdgA39/fwF/YAF/AGAAAX9gAAF8YAR/f39/AX9gAn9/AX9gCn9/f39/f39/f38BfwIPAQNlbnYHcmVzb2x2ZQAAAwgHAQIDBAUABgQFAXABAQEFAwEAAgYPAn8BQaCIBAt/AEGgiAQLB1MHBm1lbW9yeQIACnNldENsYXNzZXMAAQlzdG9wcGVkQXQAAgZ0b2tlbnMAAwhwaWVjZUVuZAAEC2NvdW50UGllY2VzAAcLX19oZWFwX2Jhc2UDAQqaLAcNAEEAIAA2AoCIgIAACwsAQQAoAoSIgIAACwsAQQArA4iIgIAACyIAQQAgATYClIiAgABBACAANgKQiICAACADIAIQhYCAgAALhhYBCX9BfyECAkACQAJAAkACQAJAAkACQAJAAkACQAJAIABBf2oOAgEAAgtBACgCgIiAgAAiA0EAKAKQiICAACIEIAFBAXRqLwEAIgVqLQAAIgBBgAFxDQYgAEHAAHEhAgJAIABBGHEiBkUNACACDQAgAUEAQQEQhoCAgAAiAUF/IAFBf0obDwsCQCAAQQJxRQ0AQQAoApSIgIAAIgUgAUEBaiIAIAUgAEobIQcgASABQQJqIgIgASACShsiBkEBaiECIAQgAEEBdGohAANAIAYgAUYNCAJAIAUgAUEBaiIBSg0AIAcPCyAALwEAIQQgAEECaiEAIAMgBGotAAAiBEECcQ0ACyABQX8gBEEYdEEYdUF/ShsPCwJAIAJFDQAgAUEBIAZBAEcQhoCAgAAiAkF+Rw0HQX8hAgJAIAVBIEcNAEF/IQJBACgClIiAgAAgAUEBaiIFTA0AQX8hAiADIAQgBUEBdGovAQBqLQAAIgZBgAFxDQggBUF/IAZBIHEbIQILIAIgASACQX9KGyACIABBIHEbIgVBAEgNAEEAKAKUiICAACIIIAUgCCAFShshAiAEIAVBAXRqIQYCQANAIAIgBUYNASAFQQFqIQUgBi8BACEHIAZBAmohBiADIAdqLQAAIgdBIHENAAtBfyECIAdBGHRBGHVBAEgNCCAFQX9qIQILAkAgAkEATg0AQX8PCyAIIAJMDQcgBCACQQF0aiEFAkADQAJAAkAgBS8BACIGQXZqDgQBAwMBAAsgBkEvRw0CCyAFQQJqIQUgCCACQQFqIgJHDQALIAghAgsgAkF+Rw0HC0EAKAKUiICAACIHIAFMDQICQCAAQQRxRQ0AIAdBf2ohBiABQQF0IARqQQJqIQIgASEAAkADQAJAIAYgAEcNACAHIQAMAgsgAEEBaiEAIAIvAQAhBSACQQJqIQIgAyAFai0AAEEEcQ0ACwsgAEF/aiEGIAAgAUwNCyAEIAZBAXRqIQQgACEFA0ACQAJAIAQvAQAiA0F2ag4EAAEBAAELIAUhAgsgA0ENRiADQQpGcw0IIARBfmohBCAFQX9qIgUgAUwNDAwACwsgAUF/aiEGDAkLQQAoAoCIgIAAIgRBACgCkIiAgAAiBiABQQF0aiIALwEAIgVqLQAAIgNBgAFxDQUCQCAFQSdHDQBBACECQQAoApSIgIAAIgcgAUwNAAJAIAcgAUEBaiIITA0AIAYgCEEBdGovAQAhAgtBAiEIQQAhCQJAIAcgAUECaiIKTA0AIAYgCkEBdGovAQAhCQsCQAJAIAJBIGogAiACQb9/akEaSRsiB0Gcf2oiAkEQSw0AQQEgAnRBgYQGcQ0BCyAJQSBqIAkgCUG/f2pBGkkbIQJBAyEIAkAgB0HyAEcNACACQeUARg0BCwJAIAdB9gBHDQAgAkHlAEYNAQsgB0HsAEcNASACQewARw0BCyAIIAFqDwsCQCADQQFxRQ0AQQAoApSIgIAAIgIgASACIAFKGyECA0AgAiABRg0HIAFBAWohASAALwEAIQMgAEECaiEAIAQgA2otAAAiA0EBcQ0ACyABQX9qQX8gA0EYdEEYdUF/ShsPCwJAIANBAnFFDQBBACgClIiAgAAiBSABQQFqIgAgBSAAShshCCABIAFBAmoiAiABIAJKGyIHQQFqIQIgBiAAQQF0aiEAA0AgByABRg0HAkAgBSABQQFqIgFKDQAgCA8LIAAvAQAhAyAAQQJqIQAgBCADai0AACIDQQJxDQALIAFBfyADQRh0QRh1QX9KGw8LAkACQCADQcAAcQ0AQQAoApSIgIAAIQgMAQtBfyECAkBBACgClIiAgAAiCCABQQFqIgdMDQBBfyECIAQgBiAHQQF0ai8BAGotAAAiAEGAAXENBwJAIABBAXFFDQAgBiAHQQF0aiEAIAggByAIIAdKGyICQX9qIQUDQCAFIAFGDQkgAUEBaiEBIAAvAQAhAyAAQQJqIQAgBCADai0AACIDQQFxDQALIAFBfyADQRh0QRh1QX9KGw8LQX8hAiAFQSBHDQAgB0F/IABBIHEbIQILIAIgASACQX9KGyACIANBIHEbIgBBAEgNACAIIAAgCCAAShshAiAGIABBAXRqIQUCQANAIAIgAEYNASAAQQFqIQAgBS8BACEHIAVBAmohBSAEIAdqLQAAIgdBIHENAAtBfyECIAdBGHRBGHVBAEgNByAAQX9qIQILAkAgAkEATg0AQX8PCyAIIAJMDQYgBiACQQF0aiEAAkADQAJAIAAvAQBBdmoOBAACAgACCyAAQQJqIQAgCCACQQFqIgJHDQALIAghAgsgAkF+Rw0GCyAIIAFMDQICQCADQQRxRQ0AIAhBf2ohBSABQQF0IAZqQQJqIQIgASEAAkADQAJAIAUgAEcNACAIIQAMAgsgAEEBaiEAIAIvAQAhAyACQQJqIQIgBCADai0AAEEEcQ0ACwsgAEF/aiEHIAAgAUwNCCAGIAdBAXRqIQMgACEFA0ACQAJAIAMvAQAiBEF2ag4EAAEBAAELIAUhAgsgBEENRiAEQQpGcw0HIANBfmohAyAFQX9qIgUgAUwNCQwACwsgAUF/aiEHDAYLQQAoAoCIgIAAIgNBACgCkIiAgAAiBSABQQF0ai8BACIGai0AACIEQYABcQ0EIAEhACAEIQcCQAJAIAZBYGoOCAEFBQUFBQUABQtBACEAQQAoApSIgIAAIgIgAUwNAwJAIAIgAUEBaiIGTA0AIAUgBkEBdGovAQAhAAtBAiEGQQAhCAJAIAIgAUECaiIHTA0AIAUgB0EBdGovAQAhCAsCQAJAIABBnH9qIgJBEEsNAEEBIAJ0QYGEBnENAQtBAyEGAkAgAEHyAEcNACAIQeUARg0BCwJAIABB9gBHDQAgCEHlAEYNAQsgAEHsAEcNBCABIQAgBCEHIAhB7ABHDQULIAYgAWoPCyABIQAgBCEHQQAoApSIgIAAIAFBAWoiBkwNAyADIAUgBkEBdGovAQBqLQAAIgBBgAFxDQQgACAEIABBI3EiAhshByAGIAEgAhshAAwDCyABQX9qIQYMBgsgAUF/aiEHDAMLIAEhACAEIQcLAkAgB0EBcUUNAEEAKAKUiICAACIBIAAgASAAShshAiAFIABBAXRqIQEDQCACIABGDQIgAEEBaiEAIAEvAQAhBCABQQJqIQEgAyAEai0AACIEQQFxDQALIABBf2pBfyAEQRh0QRh1QX9KGw8LAkAgB0ECcUUNAEEAKAKUiICAACIBIAAgASAAShshAiAFIABBAXRqIQEDQCACIABGDQIgAEEBaiEAIAEvAQAhBCABQQJqIQEgAyAEai0AACIEQQJxDQALIABBf2pBfyAEQRh0QRh1QX9KGw8LQQAoApSIgIAAIQgCQCAHQSBxRQ0AIAggACAIIABKGyECIAUgAEEBdGohAQNAIAIgAEYNAiAAQQFqIQAgAS8BACEEIAFBAmohASADIARqLQAAIgRBIHENAAsgAEF/akF/IARBGHRBGHVBf0obDwsgASECAkAgCCABTA0AIAEhAiAEQQRxRQ0AIAhBf2ohBiABQQF0IAVqQQJqIQAgASECA0ACQCAGIAJHDQAgCCECDAILIAJBAWohAiAALwEAIQQgAEECaiEAIAMgBGotAABBBHENAAsLIAIgAiAIRyACIAFrQQFHcWshAgsgAg8LIAEhAAsgACAAIAcgACABa0EBRhsgCCAARhsPCyABIQALIAAgACAGIAAgAWtBAUYbIAcgAEYbC7AMAQl/AkACQAJAIAENAEF+IQMMAQtBACgClIiAgAAiBCAAQQFqIgUgBCAFShsiBkF/aiEDQQAoApCIgIAAIgcgBUEBdGohCEEAKAKAiICAACEJIAAhCgJAA0ACQCADIApHDQAgBiEKDAILIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EIcQ0ACyALQRh0QRh1QQBODQBBfw8LQX8hAyAKQQBIDQECQCAEIApMDQACQCAJIAcgCkEBdGoiCC8BAGotAAAiC0EQcUUNACAEIAogBCAKShshAwNAIAMgCkYNAyAKQQFqIQogCC8BACELIAhBAmohCCAJIAtqLQAAIgtBEHENAAsgCkF/akF/IAtBGHRBGHVBf0obIQMMAgsgC0GAAXENAgtBfiEDIApBAXQgB2pBfmohCANAIAogBUwNASAKQX9qIQogCC8BACELIAhBfmohCCAJIAtqLQAAQRBxRQ0ACyAKQQFqIQMLAkAgAkUNACADQX5HDQBBACgClIiAgAAiBCAAIAQgAEobIQtBACgCkIiAgAAiByAAQQF0aiEIQQAoAoCIgIAAIQUgACEKAkADQCALIApGDQEgCkEBaiEKIAgvAQAhCSAIQQJqIQggBSAJai0AACIJQQhxDQALQX8hAyAJQRh0QRh1QQBIDQIgCkF/aiELC0F/IQMgC0EASA0BAkAgBCALTA0AAkAgBSAHIAtBAXRqIgovAQBqLQAAIghBEHFFDQAgBCALIAQgC0obIQMDQCADIAtGDQMgC0EBaiELIAovAQAhCCAKQQJqIQogBSAIai0AACIIQRBxDQALIAtBf2pBfyAIQRh0QRh1QX9KGyEDDAILIAhBgAFxDQILQX4hAyALQQF0IAdqQX5qIQoDQCALIABMDQEgC0F/aiELIAovAQAhCCAKQX5qIQogBSAIai0AAEEQcUUNAAsgC0EBaiEDCwJAIAFFDQAgA0F+Rw0AQQAhCAJAAkBBACgClIiAgAAiBSAAQQFqIgpMDQBBACgCgIiAgAAiCUEAKAKQiICAACIBIApBAXRqLwEAai0AACIIQQhxDQELQX9BfiAIQYABcRshAwwBCyABIApBAXRqIQggBSAKIAUgCkobIgRBf2ohAyAAIQoCQANAAkAgAyAKRw0AIAQhCgwCCyAKQQFqIQogCC8BACELIAhBAmohCCAJIAtqLQAAIgtBCHENAAsgC0EYdEEYdUEATg0AQX8PCwJAIApBAE4NAEF/DwsgBSAKIAUgCkobIQMgASAKQQF0aiEIA0AgAyAKRg0BIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EQcQ0ACyAKQX9qQX8gC0EYdEEYdUF/ShshAwsCQCACRQ0AIANBfkcNAEEAIQgCQAJAQQAoApSIgIAAIgUgAEwNAEEAKAKAiICAACIJQQAoApCIgIAAIgEgAEEBdGoiCi8BAGotAAAiCEEIcQ0BC0F/QX4gCEGAAXEbDwsgBSAAIAUgAEobIQgCQANAIAggAEYNASAAQQFqIQAgCi8BACELIApBAmohCiAJIAtqLQAAIgtBCHENAAtBfyEDIAtBGHRBGHVBAEgNAiAAQX9qIQgLAkAgCEEATg0AQX8PCyAFIAggBSAIShshAyABIAhBAXRqIQoDQCADIAhGDQEgCEEBaiEIIAovAQAhCyAKQQJqIQogCSALai0AACILQRBxDQALQX8hAyALQRh0QRh1QQBIDQEgCEF/aiEDC0EAIQogA0EASA0AAkBBACgClIiAgAAiCCADTA0AQQAhCkEAKAKQiICAACIJIANBAXRqLwEAQSdHDQBBACEAQQAhCwJAIAggA0EBaiIKTA0AIAkgCkEBdGovAQAhCwtBAiEKAkAgCCADQQJqIgVMDQAgCSAFQQF0ai8BACEACwJAIAtBIGogCyALQb9/akEaSRsiC0Gcf2oiCEEQSw0AQQEgCHRBgYQGcQ0BCyAAQSBqIAAgAEG/f2pBGkkbIQhBAyEKAkAgC0HyAEcNACAIQeUARg0BCwJAIAtB9gBHDQAgCEHlAEYNAQtBA0EAIAhB7ABGG0EAIAtB7ABGGyEKCyAKIANqIQMLIAMLlAkCAXwOf0EAIAE2ApSIgIAAQQAgADYCkIiAgABEAAAAAAAAAAAhCgJAAkAgAiABTg0AIARBAUgNAEQAAAAAAAAAACEKQQAhCwNAAkAgAyACEIWAgIAAIgxBAE4NACACIQwMAwsgDCACayENQcW78oh4IQ4CQCAMIAJMDQAgDUEDcSEPQcW78oh4IQ4gAiEQAkAgDCACQX9zakEDSQ0AIA1BfHEhESAAIAJBAXRqIRJBxbvyiHghDiACIRADQCAOIBIvAQBzQZODgAhsIBJBAmovAQBzQZODgAhsIBJBBGovAQBzQZODgAhsIBJBBmovAQBzQZODgAhsIQ4gEkEIaiESIBBBBGohECARQXxqIhENAAsLIA9FDQAgACAQQQF0aiESA0AgDiASLwEAc0GTg4AIbCEOIBJBAmohEiAPQX9qIg8NAAsLAkACQAJAAkACQCANQRFODQAgCCAOIAlxIhNBBXRqIRQgByATQQN0aiIVKAIAIhFBEHYgDUcNAiAVKAIEIA5HDQICQCANQQFODQBBACEQDAILIAAgAkEBdGohEkEAIRAgFCEPA0AgDy8BACASLwEARw0CIA9BAmohDyASQQJqIRIgDSAQQQFqIhBHDQAMBAsLIAIgDCAOEICAgIAAIREMAwsgECANRg0BCyACIAwgDhCAgICAACERIBUgDjYCBCAVIBEgDUEQdHI2AgAgDUEBSA0BIBNBBHQhFkEAIQ8CQCANQQhJDQAgACACQQF0aiEXAkAgFCAAIAxBAXRqTw0AIBcgCCAMIBZqIAJrQQF0akkNAQsgDUF4cSIPQXhqIhJBA3ZBAWoiDkEDcSEVQQAhEwJAIBJBGEkNACAOQfz///8DcSEYQQAhEkEAIRMDQCAUIBJqIg4gFyASaiIQ/QABAP0LAQAgDkEQaiAQQRBq/QABAP0LAQAgDkEgaiAQQSBq/QABAP0LAQAgDkEwaiAQQTBq/QABAP0LAQAgEkHAAGohEiATQSBqIRMgGEF8aiIYDQALCwJAIBVFDQAgACACIBNqQQF0aiESIAggEyAWakEBdGohDgNAIA4gEv0AAQD9CwEAIBJBEGohEiAOQRBqIQ4gFUF/aiIVDQALCyANIA9GDQILIAwgD0F/c2ogAmshFQJAIA1BA3EiEEUNACAAIA8gAmpBAXRqIRIgCCAPIBZqQQF0aiEOA0AgDiASLwEAOwEAIBJBAmohEiAOQQJqIQ4gD0EBaiEPIBBBf2oiEA0ACwsgFUEDSQ0BIAwgD2sgAmshECAIIA8gFmpBAXRqIRIgACACIA9qQQF0aiEOA0AgEiAOLwEAOwEAIBJBAmogDkECai8BADsBACASQQRqIA5BBGovAQA7AQAgEkEGaiAOQQZqLwEAOwEAIBJBCGohEiAOQQhqIQ4gEEF8aiIQDQAMAgsLIBFB//8DcSERCyAFIAtBAnQiEmogDDYCACAGIBJqIBE2AgAgC0EBaiELIAogEbegIQogDCABTg0CIAwhAiALIARIDQAMAgsLQQAhCyACIQwLQQAgCjkDiIiAgABBACAMNgKEiICAACALCw==";
 
 // src/measure/kernels/tokens-kernel.ts
 var KERNEL_PATTERN = { gpt2: 0, cl100k_base: 1, o200k_base: 2 };
@@ -17878,7 +17959,7 @@ var TokenKernel = class {
   ends = new Int32Array(0);
   counts = new Int32Array(0);
   constructor(classes2) {
-    this.kernel = instantiateKernel(WASM_BASE643, {
+    this.kernel = instantiateKernel(WASM_BASE644, {
       resolve: (start, end, hash2) => this.resolver(start, end, hash2)
     });
     this.kernel.setClasses(this.kernel.place(classes2));
@@ -17930,9 +18011,9 @@ var TokenKernel = class {
     this.counts = new Int32Array(buffer, this.countsAt, PIECES_PER_CALL);
   }
 };
-var kernel3;
+var kernel4;
 function tokenKernel(classes2) {
-  return kernel3 ??= new TokenKernel(classes2());
+  return kernel4 ??= new TokenKernel(classes2());
 }
 
 // src/measure/tokens/bpe.ts
@@ -18123,19 +18204,19 @@ function createRankCounter(options) {
     return tokens;
   };
   const countByKernel = (text, pieces) => {
-    const kernel4 = tokenKernel(unitClasses);
-    kernelCache ??= kernel4.createCache(options.kernelCacheEntries ?? KERNEL_CACHE_ENTRIES);
+    const kernel5 = tokenKernel(unitClasses);
+    kernelCache ??= kernel5.createCache(options.kernelCacheEntries ?? KERNEL_CACHE_ENTRIES);
     counting = text;
-    kernel4.load(text, resolve);
+    kernel5.load(text, resolve);
     let tokens = 0;
     const n = text.length;
     let p = 0;
     while (p < n) {
-      const got = kernel4.count(p, kernelPattern, kernelCache);
+      const got = kernel5.count(p, kernelPattern, kernelCache);
       kernelPieces += got;
-      tokens += kernel4.tokens();
-      pieces?.append(kernel4.ends, kernel4.counts, got);
-      p = kernel4.stoppedAt();
+      tokens += kernel5.tokens();
+      pieces?.append(kernel5.ends, kernel5.counts, got);
+      p = kernel5.stoppedAt();
       if (p >= n || got === PIECES_PER_CALL) continue;
       const e = regexPieceEnd(text, p);
       if (e < 0) return tokens + countByRegex(text, p, pieces);

@@ -25,10 +25,17 @@
 // 0.78× (best of 8 rounds each, A first and B first), 0.49× (chunks of 400 documents
 // interleaved, order alternating per chunk, median of 8 rounds; this includes the kept
 // offsets without a copy, below); the whole measurer, language included, 0.82–0.92× and 0.86×.
+//
+// The pass runs in a WebAssembly kernel (kernels/words.c, the same state machine over the same
+// table) for texts up to MAX_WORD_UNITS long, and here for longer ones. Against this file's loop
+// alone, in alternating pairs of one-thread `sluice check --no-cache` runs of the language, script
+// and encoding policy on the 40 MB bench corpus (shared 2-core machine; same reports): 0.85× the
+// CPU time (medians of 4 pairs).
 import { WORD_BREAK_RANGE_STARTS, WORD_BREAK_RANGE_VALUES } from './data/word-break.generated.js';
 import { anomalyOf, countMojibake, emptyAnomalyCounts, emptyMarkCounts, markOf, MOJIBAKE_LEAD_FIRST, MOJIBAKE_LEAD_LAST, needsCloserLook } from './encoding.js';
 import { astralScriptId, bmpScriptIds, SCRIPT_NAMES } from './script.js';
 import type { AnomalyCounts, MarkCounts } from './types.js';
+import { MAX_WORD_UNITS, wordKernel } from './kernels/words-kernel.js';
 
 // Classes of the generated table (scripts/gen-word-break.mjs).
 const OTHER = 0;
@@ -200,6 +207,41 @@ let offsets: Int32Array = new Int32Array(1024);
  * word rules stop early; without one, the counts go to a scratch tally nobody reads.
  */
 function scan(text: string, record: boolean, tally: CharacterTally | null): number {
+  return kernelOn && text.length <= MAX_WORD_UNITS ? scanByKernel(text, record, tally) : scanHere(text, record, tally);
+}
+
+/** Whether scan uses the kernel (kernels/words.c); the tests compare it with the TypeScript scan. */
+let kernelOn = true;
+
+/** Makes scan use the kernel or not, for the tests that compare the two. */
+export function useWordKernel(on: boolean): void {
+  kernelOn = on;
+}
+
+/** The tally the kernel's closer-look call back counts into, during a scan. */
+let closerInto: CharacterTally = unusedTally;
+const closerLookInKernel = (unit: number, at: number): void => closerLook(unit, at, closerInto.anomalies, closerInto.marks);
+
+/** scan in the kernel: the same words and counts, the word offsets copied out to `offsets`. */
+function scanByKernel(text: string, record: boolean, tally: CharacterTally | null): number {
+  const kernel = wordKernel(characterInfo, SCRIPT_NAMES.length, closerLookInKernel);
+  closerInto = tally ?? unusedTally;
+  const count = kernel.scan(text, record);
+  if (tally !== null) tally.counts.set(kernel.counts);
+  if (count < 0) {
+    if (tally !== null) countCharactersFrom(text, kernel.stoppedAt(), tally, kernel.bytes(), kernel.flags());
+    return -1;
+  }
+  if (record) {
+    if (offsets.length < count * 2) offsets = new Int32Array(Math.max(1024, count * 4));
+    offsets.set(kernel.offsets.subarray(0, count * 2));
+  }
+  if (tally !== null) finishTally(text, tally, kernel.bytes(), text.length, kernel.flags());
+  return count;
+}
+
+/** scan in TypeScript, for a text longer than the kernel takes (the kernel's reference in the tests). */
+function scanHere(text: string, record: boolean, tally: CharacterTally | null): number {
   const table = characterInfo();
   const into = tally ?? unusedTally;
   const { counts, anomalies, marks } = into;
