@@ -5,10 +5,11 @@
 import { Tiktoken } from 'js-tiktoken/lite';
 import o200kRanks from 'js-tiktoken/ranks/o200k_base';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { MAX_KERNEL_UNITS, PIECES_PER_CALL } from '../../src/measure/kernels/tokens-kernel.js';
+import { MAX_KERNEL_UNITS, MAX_MERGE_UNITS, PIECES_PER_CALL } from '../../src/measure/kernels/tokens-kernel.js';
 import { hashRange } from '../../src/measure/tokens/cache.js';
 import { PieceList } from '../../src/measure/tokens/pieces.js';
 import { parseBuiltinRanks, type RankTable } from '../../src/measure/tokens/ranks.js';
+import { SharedPieceCounts } from '../../src/measure/tokens/shared-counts.js';
 import { createRankCounter, type RankCounterOptions } from '../../src/measure/tokens/tiktoken.js';
 import { BUILTIN_PATTERNS } from '../../src/measure/tokens/patterns.js';
 import { TokenizerError } from '../../src/measure/tokens/errors.js';
@@ -89,26 +90,37 @@ describe('token counting in the kernel', () => {
     expect(counter.count(text).tokens).toBe(encoded(text));
   });
 
-  it('fails a count whose merges throw mid-text with a TokenizerError, and counts exactly afterwards', () => {
+  it('fails a count whose look-up throws mid-text with a TokenizerError, and counts exactly afterwards', () => {
+    // A shared table that fails when armed stands in for any failure inside the kernel's call back.
     let armed = false;
-    const failing = Object.create(ranks, {
-      rank: {
-        value(bytes: Uint8Array, start: number, end: number): number {
-          if (armed) throw new Error('rank table unreadable');
-          return ranks.rank(bytes, start, end);
+    const table = SharedPieceCounts.create(ID);
+    const failing = Object.create(table, {
+      find: {
+        value(text: string, start: number, end: number, hash: number): number {
+          if (armed) throw new Error('count table unreadable');
+          return table.find(text, start, end, hash);
         },
       },
-    }) as RankTable;
-    const counter = counterWith({ ranks: failing });
+    }) as SharedPieceCounts;
+    const counter = counterWith({ shared: failing });
     const first = 'The evening bulletin led with the monsoon.';
     expect(counter.count(first).tokens).toBe(encoded(first));
     armed = true;
-    // Pieces the caches have not seen need merges; the first of them throws inside the kernel's call back.
+    // Pieces the kernel's cache has not seen are looked up; the first of them throws inside the call back.
     const second = `${first} Zanzibarian quixotically flummoxed`;
     expect(() => counter.count(second)).toThrow(TokenizerError);
-    expect(() => counter.count(second)).toThrow(/^o200k_base: cannot encode text: rank table unreadable$/);
+    expect(() => counter.count(second)).toThrow(/^o200k_base: cannot encode text: count table unreadable$/);
     armed = false;
     expect(counter.count(second).tokens).toBe(encoded(second));
     expect(counter.count(first).tokens).toBe(encoded(first));
   });
+
+  it(`merges pieces longer than the kernel merges (${MAX_MERGE_UNITS} units) in TypeScript, exactly`, () => {
+    const counter = counterWith();
+    // One piece each, just past the limit and just inside it.
+    for (const text of ['abcdefghij'.repeat(410), ` ${'xyz'.repeat(1366)}`, 'abcdefghij'.repeat(409)]) {
+      expect(counter.count(text).tokens).toBe(encoded(text));
+    }
+  });
+
 });

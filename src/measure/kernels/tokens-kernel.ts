@@ -11,7 +11,11 @@ interface TokensExports {
   tokens(): number;
   pieceEnd(text: number, n: number, p: number, pattern: number): number;
   countPieces(text: number, n: number, from: number, pattern: number, maxPieces: number, ends: number, counts: number, slots: number, keys: number, mask: number): number;
+  mergeCount(text: number, start: number, end: number, table: number): number;
 }
+
+/** Longest piece the kernel merges, in UTF-16 units (MAX_MERGE_UNITS in tokens.c); the caller merges longer ones. */
+export const MAX_MERGE_UNITS = 4096;
 
 /** The kernel's numbers for the builtin split patterns. */
 export const KERNEL_PATTERN = { gpt2: 0, cl100k_base: 1, o200k_base: 2 } as const;
@@ -48,6 +52,7 @@ export class TokenKernel {
   private readonly countsAt: number;
   private buffer: ArrayBuffer | null = null;
   private bytes: Buffer = Buffer.alloc(0);
+  private readonly rankTables = new WeakMap<SharedArrayBuffer, number>();
   private resolver: PieceResolver = () => {
     throw new Error('token kernel: no text is being counted');
   };
@@ -62,6 +67,21 @@ export class TokenKernel {
     this.kernel.setClasses(this.kernel.place(classes));
     this.endsAt = this.kernel.allocate(PIECES_PER_CALL * 4);
     this.countsAt = this.kernel.allocate(PIECES_PER_CALL * 4);
+  }
+
+  /** Returns where a rank table (ranks.ts's layout, in a SharedArrayBuffer) is in the kernel's memory, copying it there the first time. Call it before load(): the copy may grow the memory. */
+  placeRanks(buffer: SharedArrayBuffer): number {
+    let at = this.rankTables.get(buffer);
+    if (at === undefined) {
+      at = this.kernel.place(new Uint8Array(buffer));
+      this.rankTables.set(buffer, at);
+    }
+    return at;
+  }
+
+  /** The byte-pair token count of the loaded text's [start, end) (at most MAX_MERGE_UNITS units) under the rank table placed at `ranks`. */
+  merge(start: number, end: number, ranks: number): number {
+    return this.kernel.mergeCount(this.textAt, start, end, ranks);
   }
 
   /** Reserves a cache of `entries` (a power of two) in the kernel's memory, empty. */

@@ -1,8 +1,8 @@
-// The hot loop of token counting with a tiktoken-style vocabulary (tokens/tiktoken.ts),
+// The hot loops of token counting with a tiktoken-style vocabulary (tokens/tiktoken.ts),
 // compiled to WebAssembly: splitting a text into the pieces of a builtin split pattern and
 // looking each piece's token count up in a direct-mapped cache. A piece the cache does not
 // hold is counted by the caller (the imported `resolve`: shared counts, then byte-pair
-// merges) and kept. The splitters are tokens/split.ts's, unit for unit, over the same
+// merges, which the caller runs here too, `mergeCount`) and kept. The splitters are tokens/split.ts's, unit for unit, over the same
 // table of character classes (built there from the engine's own Unicode properties), and
 // like them they stop at a surrogate, where the caller lets the regex decide one piece.
 // test/measure/tokens-split.test.ts holds these splitters to the patterns as it does the
@@ -280,4 +280,123 @@ __attribute__((export_name("countPieces"))) i32 countPieces(const u16 *text, i32
   stop = p;
   total = sum;
   return k;
+}
+
+// ---- Byte-pair merges (tokens/bpe.ts, step for step) over a rank table laid out as ranks.ts
+// lays it out: header words, ranks (double) per token, the ranks of two-byte tokens by direct
+// index, token offsets into the arena, open-addressing slots (token + 1), the arena of bytes.
+
+#define RANK_COUNT 3
+#define RANK_SLOT_BITS 4
+#define RANK_HEADER_WORDS 8
+#define NO_RANK __builtin_inf()
+
+// Longest piece merged here, in UTF-16 units; the caller merges longer ones.
+#define MAX_MERGE_UNITS 4096
+
+static unsigned char mergeBytes[MAX_MERGE_UNITS * 3];
+static i32 mergeStarts[MAX_MERGE_UNITS * 3 + 1];
+static double mergeRanks[MAX_MERGE_UNITS * 3 + 1];
+
+// The rank table being merged with, unpacked by mergeCount.
+static const double *rankOf;
+static const double *pairRankOf;
+static const i32 *tokenOffsets;
+static const i32 *rankSlots;
+static u32 rankMask;
+static const unsigned char *arena;
+
+// The rank of the token whose bytes are b[start, end), or NO_RANK (ranks.ts RankTable.rank).
+static double rank(const unsigned char *b, i32 start, i32 end) {
+  u32 h = 0x811c9dc5u;
+  for (i32 i = start; i < end; i++) h = (h ^ b[i]) * 0x01000193u;
+  i32 length = end - start;
+  for (u32 slot = h & rankMask;; slot = (slot + 1) & rankMask) {
+    i32 v = rankSlots[slot];
+    if (v == 0) return NO_RANK;
+    i32 from = tokenOffsets[v - 1];
+    if (tokenOffsets[v] - from != length) continue;
+    i32 k = 0;
+    while (k < length && arena[from + k] == b[start + k]) k++;
+    if (k == length) return rankOf[v - 1];
+  }
+}
+
+// Writes the UTF-8 bytes of t[start, end) (a lone surrogate as U+FFFD) and returns their count.
+static i32 utf8(const u16 *t, i32 start, i32 end) {
+  unsigned char *out = mergeBytes;
+  i32 n = 0;
+  for (i32 i = start; i < end; i++) {
+    u32 c = t[i];
+    if (c < 0x80) out[n++] = (unsigned char)c;
+    else if (c < 0x800) {
+      out[n++] = (unsigned char)(0xc0 | (c >> 6));
+      out[n++] = (unsigned char)(0x80 | (c & 0x3f));
+    } else if (c < 0xd800 || c > 0xdfff) {
+      out[n++] = (unsigned char)(0xe0 | (c >> 12));
+      out[n++] = (unsigned char)(0x80 | ((c >> 6) & 0x3f));
+      out[n++] = (unsigned char)(0x80 | (c & 0x3f));
+    } else {
+      u32 low = i + 1 < end ? t[i + 1] : 0;
+      if (c <= 0xdbff && low >= 0xdc00 && low <= 0xdfff) {
+        u32 cp = ((c - 0xd800) << 10) + (low - 0xdc00) + 0x10000;
+        out[n++] = (unsigned char)(0xf0 | (cp >> 18));
+        out[n++] = (unsigned char)(0x80 | ((cp >> 12) & 0x3f));
+        out[n++] = (unsigned char)(0x80 | ((cp >> 6) & 0x3f));
+        out[n++] = (unsigned char)(0x80 | (cp & 0x3f));
+        i++;
+      } else {
+        out[n++] = 0xef;
+        out[n++] = 0xbf;
+        out[n++] = 0xbd;
+      }
+    }
+  }
+  return n;
+}
+
+// The number of byte-pair tokens of text[start, end) (at most MAX_MERGE_UNITS units) under the
+// rank table at `table`: repeatedly merge the adjacent pair of lowest rank, leftmost on ties.
+__attribute__((export_name("mergeCount"))) i32 mergeCount(const u16 *text, i32 start, i32 end, const i32 *table) {
+  i32 count = table[RANK_COUNT];
+  const unsigned char *at = (const unsigned char *)(table + RANK_HEADER_WORDS);
+  rankOf = (const double *)at;
+  at += count * 8;
+  pairRankOf = (const double *)at;
+  at += (1 << 16) * 8;
+  tokenOffsets = (const i32 *)at;
+  at += (count + 1) * 4;
+  rankSlots = (const i32 *)at;
+  rankMask = (1u << table[RANK_SLOT_BITS]) - 1;
+  at += (rankMask + 1) * 4;
+  arena = at;
+
+  i32 n = utf8(text, start, end);
+  const unsigned char *b = mergeBytes;
+  // A piece that is a token is one token even when the merges would not reach it.
+  if (n <= 1) return n;
+  if (rank(b, 0, n) != NO_RANK) return 1;
+  i32 *s = mergeStarts;
+  double *pr = mergeRanks;
+  for (i32 i = 0; i <= n; i++) s[i] = i;
+  for (i32 i = 0; i < n - 1; i++) pr[i] = pairRankOf[(b[i] << 8) | b[i + 1]];
+  i32 parts = n;
+  while (parts > 1) {
+    double best = NO_RANK;
+    i32 where = -1;
+    for (i32 i = 0; i < parts - 1; i++) {
+      if (pr[i] < best) {
+        best = pr[i];
+        where = i;
+      }
+    }
+    if (where < 0) break;
+    // Merge part `where` with part `where + 1`.
+    __builtin_memmove(s + where + 1, s + where + 2, (unsigned long)(parts - where - 1) * 4);
+    __builtin_memmove(pr + where, pr + where + 1, (unsigned long)(parts - where - 2) * 8);
+    parts--;
+    if (where < parts - 1) pr[where] = rank(b, s[where], s[where + 2]);
+    if (where > 0) pr[where - 1] = rank(b, s[where - 1], s[where + 1]);
+  }
+  return parts;
 }
