@@ -5,7 +5,7 @@
 import { Tiktoken } from 'js-tiktoken/lite';
 import o200kRanks from 'js-tiktoken/ranks/o200k_base';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { MAX_KERNEL_UNITS, MAX_MERGE_UNITS, PIECES_PER_CALL } from '../../src/measure/kernels/tokens-kernel.js';
+import { MAX_KERNEL_UNITS, MAX_MERGE_UNITS } from '../../src/measure/kernels/tokens-kernel.js';
 import { hashRange } from '../../src/measure/tokens/cache.js';
 import { PieceList } from '../../src/measure/tokens/pieces.js';
 import { parseBuiltinRanks, type RankTable } from '../../src/measure/tokens/ranks.js';
@@ -71,14 +71,15 @@ describe('token counting in the kernel', () => {
     for (const text of [a, b, a, a, b, b, `${a}${b}${a}`]) expect(single.count(text).tokens).toBe(encoded(text));
   });
 
-  it(`records the same pieces as the TypeScript path for a text of more than ${PIECES_PER_CALL} pieces with characters outside the BMP along it`, () => {
+  it('records the same pieces as the TypeScript path for a long text with characters outside the BMP along it', () => {
     const withKernel = counterWith();
     const without = counterWith({ kernel: false });
-    const parts = brownSample(10).slice(0, 800);
+    const parts = brownSample(10).slice(0, 420);
     // Emoji and an astral letter make the kernel stop and hand one piece to the regex.
     const text = parts.join(' 😀 ').replace(/the /g, 'the 𝐀 ');
+    expect(text.length).toBeLessThanOrEqual(MAX_KERNEL_UNITS);
     const pieces = piecesOf(withKernel, text);
-    expect(pieces.length).toBeGreaterThan(3 * PIECES_PER_CALL);
+    expect(pieces.length).toBeGreaterThan(20_000);
     expect(pieces).toEqual(piecesOf(without, text));
     expect(withKernel.count(text).tokens).toBe(encoded(text));
   });
@@ -123,4 +124,36 @@ describe('token counting in the kernel', () => {
     }
   });
 
+
+  it('measures words as counting each word alone does (measure.ts), also words holding characters outside the BMP', () => {
+    const counter = counterWith();
+    const texts = [
+      ...brownSample(40).slice(0, 200),
+      ...UDHR_SCRIPTS.flatMap((code) => udhrParagraphs(code).slice(0, 10)),
+      // Astral letters inside words: the kernel leaves those words to countPiece.
+      'The 𝐀𝐁𝐂 desk and the 𐐀𐐨 bureau filed at 𝟗 tonight; मौसम 𝐀विभाग',
+      ...EDGE_TEXTS,
+    ];
+    const segmenter = new Intl.Segmenter('und', { granularity: 'word' });
+    let left = 0;
+    for (const text of texts) {
+      const offsets: number[] = [];
+      for (const s of segmenter.segment(text)) if (s.isWordLike) offsets.push(s.index, s.index + s.segment.length);
+      const got = counter.measureWords!(text, Int32Array.from(offsets));
+      expect(got).not.toBeNull();
+      // The definition: the whole text's tokens, and each word with the one space before it alone.
+      let wordTokens = 0;
+      let continuedWords = 0;
+      for (let w = 0; w < offsets.length; w += 2) {
+        const start = offsets[w]!;
+        const from = start > 0 && text[start - 1] === ' ' ? start - 1 : start;
+        const n = encoded(text.slice(from, offsets[w + 1]));
+        wordTokens += n;
+        if (n >= 2) continuedWords++;
+        if (/[\ud800-\udfff]/.test(text.slice(from, offsets[w + 1]))) left++;
+      }
+      expect(got).toEqual({ tokens: encoded(text), unknown: 0, words: offsets.length / 2, wordTokens, continuedWords });
+    }
+    expect(left).toBeGreaterThan(3);
+  });
 });

@@ -1,6 +1,7 @@
-// The token counter's WebAssembly kernel (tokens.c): splits a text under a builtin pattern
-// and looks its pieces up in a per-counter cache in the kernel's memory, calling back into
-// TypeScript for the pieces the cache lacks. One instance per thread, made on first use;
+// The token counter's WebAssembly kernel (tokens.c): splits a text under a builtin pattern,
+// looks its pieces up in a per-counter cache in the kernel's memory (calling back into
+// TypeScript for the pieces the cache lacks), runs the byte-pair merges of those pieces, and
+// counts each word's tokens alone for fertility. One instance per thread, made on first use;
 // every counter of the thread shares it and holds a cache of its own there.
 import { instantiateKernel, type KernelMemory } from './instance.js';
 import { WASM_BASE64 } from './tokens.generated.js';
@@ -10,27 +11,27 @@ interface TokensExports {
   stoppedAt(): number;
   tokens(): number;
   pieceEnd(text: number, n: number, p: number, pattern: number): number;
-  countPieces(text: number, n: number, from: number, pattern: number, maxPieces: number, ends: number, counts: number, slots: number, keys: number, mask: number): number;
+  countPieces(text: number, n: number, from: number, pattern: number, first: number, ends: number, counts: number, slots: number, keys: number, mask: number): number;
+  wordTokens(text: number, n: number, words: number, offsets: number, pieces: number, ends: number, counts: number, pattern: number, slots: number, keys: number, mask: number, left: number): number;
+  continuedWords(): number;
+  leftWords(): number;
   mergeCount(text: number, start: number, end: number, table: number): number;
 }
-
-/** Longest piece the kernel merges, in UTF-16 units (MAX_MERGE_UNITS in tokens.c); the caller merges longer ones. */
-export const MAX_MERGE_UNITS = 4096;
 
 /** The kernel's numbers for the builtin split patterns. */
 export const KERNEL_PATTERN = { gpt2: 0, cl100k_base: 1, o200k_base: 2 } as const;
 export type KernelPattern = (typeof KERNEL_PATTERN)[keyof typeof KERNEL_PATTERN];
 
-/** Pieces one call reports at most: the buffers for their ends and counts stay small, and a long text takes several calls. */
-export const PIECES_PER_CALL = 8192;
 /**
  * Longest text the kernel is given, in UTF-16 units (a longer one is counted in TypeScript):
- * the text is copied into the kernel's memory, which is never given back, so this bounds it
- * at 2 MB a thread.
+ * the text, its pieces and its words' offsets are in the kernel's memory, which is never given
+ * back, so this bounds them at about 5 MB a thread.
  */
-export const MAX_KERNEL_UNITS = 1 << 20;
+export const MAX_KERNEL_UNITS = 1 << 18;
+/** Longest piece the kernel merges, in UTF-16 units (MAX_MERGE_UNITS in tokens.c); the caller merges longer ones. */
+export const MAX_MERGE_UNITS = 4096;
 /** Units of a key its cache holds (KEY_UNITS in tokens.c). */
-export const KERNEL_KEY_UNITS = 16;
+const KEY_UNITS = 16;
 
 /** Counts a piece text[start, end) of the loaded text that the cache lacks (hash: FNV-1a of its units). */
 export type PieceResolver = (start: number, end: number, hash: number) => number;
@@ -42,31 +43,40 @@ export interface KernelCache {
   mask: number;
 }
 
+/** What wordTokens found: the words' tokens, those of two tokens or more, and the words left to the caller (indices, a view valid until the next load). */
+export interface KernelWordTokens {
+  wordTokens: number;
+  continuedWords: number;
+  left: Int32Array;
+}
+
 export class TokenKernel {
   private readonly kernel: TokensExports & KernelMemory;
+  /** Capacity of the per-text buffers, in units of text. */
+  private units = 0;
   private textAt = 0;
-  private textUnits = 0;
+  private endsAt = 0;
+  private countsAt = 0;
+  private offsetsAt = 0;
+  private leftAt = 0;
   /** Length of the loaded text. */
   private n = 0;
-  private readonly endsAt: number;
-  private readonly countsAt: number;
   private buffer: ArrayBuffer | null = null;
   private bytes: Buffer = Buffer.alloc(0);
   private readonly rankTables = new WeakMap<SharedArrayBuffer, number>();
   private resolver: PieceResolver = () => {
     throw new Error('token kernel: no text is being counted');
   };
-  /** Ends and counts of the pieces the last count() wrote (views; valid until the next load). */
+  /** Ends and counts of the loaded text's pieces (views, one entry per unit; valid until the next load). */
   ends = new Int32Array(0);
   counts = new Int32Array(0);
+  private offsets = new Int32Array(0);
 
   constructor(classes: Uint8Array) {
     this.kernel = instantiateKernel<TokensExports>(WASM_BASE64, {
       resolve: (start: number, end: number, hash: number) => this.resolver(start, end, hash),
     });
     this.kernel.setClasses(this.kernel.place(classes));
-    this.endsAt = this.kernel.allocate(PIECES_PER_CALL * 4);
-    this.countsAt = this.kernel.allocate(PIECES_PER_CALL * 4);
   }
 
   /** Returns where a rank table (ranks.ts's layout, in a SharedArrayBuffer) is in the kernel's memory, copying it there the first time. Call it before load(): the copy may grow the memory. */
@@ -84,33 +94,47 @@ export class TokenKernel {
     return this.kernel.mergeCount(this.textAt, start, end, ranks);
   }
 
-  /** Reserves a cache of `entries` (a power of two) in the kernel's memory, empty. */
+  /** Reserves a cache of `entries` (a power of two) in the kernel's memory, empty. Call it before load(). */
   createCache(entries: number): KernelCache {
     if (!(entries >= 1 && (entries & (entries - 1)) === 0)) throw new RangeError(`token kernel cache: entries must be a power of two, got ${entries}`);
     const slots = this.kernel.allocate(entries * 8);
-    const keys = this.kernel.allocate(entries * KERNEL_KEY_UNITS * 2);
+    const keys = this.kernel.allocate(entries * KEY_UNITS * 2);
     new Uint8Array(this.kernel.memory.buffer, slots, entries * 8).fill(0);
     return { slots, keys, mask: entries - 1 };
   }
 
   /** Copies a text (at most MAX_KERNEL_UNITS long) into the kernel's memory; the resolver counts the pieces of it that the caches lack. */
   load(text: string, resolver: PieceResolver): void {
-    if (text.length > this.textUnits) {
-      this.textUnits = Math.max(text.length, this.textUnits * 2, 4096);
-      this.textAt = this.kernel.allocate(this.textUnits * 2);
+    const n = text.length;
+    if (n + 2 > this.units) {
+      // A piece and a word offset per unit at most (a word takes a unit and ends before another).
+      this.units = Math.max(n + 2, this.units * 2, 4096);
+      this.textAt = this.kernel.allocate(this.units * 2);
+      this.endsAt = this.kernel.allocate(this.units * 4);
+      this.countsAt = this.kernel.allocate(this.units * 4);
+      this.offsetsAt = this.kernel.allocate(this.units * 4);
+      this.leftAt = this.kernel.allocate(this.units * 2);
+      this.buffer = null;
     }
-    this.views();
-    this.bytes.write(text, this.textAt, text.length * 2, 'utf16le');
-    this.n = text.length;
+    const buffer = this.kernel.memory.buffer;
+    if (buffer !== this.buffer) {
+      this.buffer = buffer;
+      this.bytes = Buffer.from(buffer);
+      this.ends = new Int32Array(buffer, this.endsAt, this.units);
+      this.counts = new Int32Array(buffer, this.countsAt, this.units);
+      this.offsets = new Int32Array(buffer, this.offsetsAt, this.units);
+    }
+    this.bytes.write(text, this.textAt, n * 2, 'utf16le');
+    this.n = n;
     this.resolver = resolver;
   }
 
-  /** Splits the loaded text from `from` under a pattern; returns how many pieces `ends` and `counts` now hold (at most PIECES_PER_CALL). */
-  count(from: number, pattern: KernelPattern, cache: KernelCache): number {
-    return this.kernel.countPieces(this.textAt, this.n, from, pattern, PIECES_PER_CALL, this.endsAt, this.countsAt, cache.slots, cache.keys, cache.mask);
+  /** Splits the loaded text from `from` under a pattern, writing pieces at ends/counts[first, ...); returns the index after the last one written. */
+  count(from: number, first: number, pattern: KernelPattern, cache: KernelCache): number {
+    return this.kernel.countPieces(this.textAt, this.n, from, pattern, first, this.endsAt, this.countsAt, cache.slots, cache.keys, cache.mask);
   }
 
-  /** Where the last count() stopped: the text's length, or a piece the kernel cannot decide (a surrogate is involved), or after PIECES_PER_CALL pieces. */
+  /** Where the last count() stopped: the text's length, or a piece the kernel cannot decide (a surrogate is involved). */
   stoppedAt(): number {
     return this.kernel.stoppedAt();
   }
@@ -120,19 +144,18 @@ export class TokenKernel {
     return this.kernel.tokens();
   }
 
+  /** The tokens of each word of the loaded text alone (`offsets`: start and end of each word, in order), given its `pieces` pieces in ends/counts. */
+  wordTokens(offsets: Int32Array, pieces: number, pattern: KernelPattern, cache: KernelCache): KernelWordTokens {
+    const words = offsets.length >> 1;
+    this.offsets.set(offsets);
+    const wordTokens = this.kernel.wordTokens(this.textAt, this.n, words, this.offsetsAt, pieces, this.endsAt, this.countsAt, pattern, cache.slots, cache.keys, cache.mask, this.leftAt);
+    const left = new Int32Array(this.kernel.memory.buffer, this.leftAt, this.kernel.leftWords());
+    return { wordTokens, continuedWords: this.kernel.continuedWords(), left };
+  }
+
   /** The end of the piece at p of the loaded text, or -1 when a surrogate is involved (for the tests). */
   pieceEnd(p: number, pattern: KernelPattern): number {
     return this.kernel.pieceEnd(this.textAt, this.n, p, pattern);
-  }
-
-  /** Makes the views again when the memory has grown (which detaches the old ones). */
-  private views(): void {
-    const buffer = this.kernel.memory.buffer;
-    if (buffer === this.buffer) return;
-    this.buffer = buffer;
-    this.bytes = Buffer.from(buffer);
-    this.ends = new Int32Array(buffer, this.endsAt, PIECES_PER_CALL);
-    this.counts = new Int32Array(buffer, this.countsAt, PIECES_PER_CALL);
   }
 }
 

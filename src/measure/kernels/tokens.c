@@ -232,45 +232,44 @@ __attribute__((export_name("pieceEnd"))) i32 pieceEnd(const u16 *text, i32 n, i3
   return splitAt(pattern, p);
 }
 
-// Splits text[from, n) under a pattern into at most maxPieces pieces, writing each one's end and
-// token count, and returns how many it wrote; stoppedAt() is where it stopped (n at the end, or
-// the start of a piece it could not decide: a surrogate is involved), tokens() their sum.
+// The token count of the piece text[p, e), from the cache or, failing it, from the caller.
 // The cache: slots[2i] = length << 16 | count (0: empty), slots[2i + 1] = hash, key units at
 // keys[i * KEY_UNITS]; `mask` is its entry count − 1. A miss overwrites the entry.
-__attribute__((export_name("countPieces"))) i32 countPieces(const u16 *text, i32 n, i32 from, i32 pattern, i32 maxPieces, i32 *ends, i32 *counts, i32 *slots, u16 *keys, u32 mask) {
+static inline i32 pieceCount(i32 p, i32 e, i32 *slots, u16 *keys, u32 mask) {
+  const u16 *text = T;
+  i32 length = e - p;
+  u32 h = 0x811c9dc5u;
+  for (i32 i = p; i < e; i++) h = (h ^ text[i]) * 0x01000193u;
+  if (length > KEY_UNITS) return resolve(p, e, (i32)h);
+  u32 f = h & mask;
+  i32 *slot = slots + 2 * f;
+  u16 *key = keys + f * KEY_UNITS;
+  if ((u32)slot[0] >> 16 == (u32)length && (u32)slot[1] == h) {
+    i32 i = 0;
+    while (i < length && key[i] == text[p + i]) i++;
+    if (i == length) return slot[0] & 0xffff;
+  }
+  i32 count = resolve(p, e, (i32)h);
+  slot[0] = (length << 16) | count;
+  slot[1] = (i32)h;
+  for (i32 i = 0; i < length; i++) key[i] = text[p + i];
+  return count;
+}
+
+// Splits text[from, n) under a pattern, writing each piece's end and token count at ends[k],
+// counts[k] from k = first on, and returns the k after the last piece written; stoppedAt() is
+// where it stopped (n at the end, or the start of a piece it could not decide: a surrogate is
+// involved), tokens() the sum of the counts it wrote. The arrays hold a piece per unit.
+__attribute__((export_name("countPieces"))) i32 countPieces(const u16 *text, i32 n, i32 from, i32 pattern, i32 first, i32 *ends, i32 *counts, i32 *slots, u16 *keys, u32 mask) {
   T = text;
   N = n;
   i32 p = from;
-  i32 k = 0;
+  i32 k = first;
   double sum = 0;
-  while (p < n && k < maxPieces) {
+  while (p < n) {
     i32 e = splitAt(pattern, p);
     if (e < 0) break;
-    i32 length = e - p;
-    u32 h = 0x811c9dc5u;
-    for (i32 i = p; i < e; i++) h = (h ^ text[i]) * 0x01000193u;
-    i32 count;
-    if (length <= KEY_UNITS) {
-      u32 f = h & mask;
-      i32 *slot = slots + 2 * f;
-      u16 *key = keys + f * KEY_UNITS;
-      i32 hit = 0;
-      if ((u32)slot[0] >> 16 == (u32)length && (u32)slot[1] == h) {
-        i32 i = 0;
-        while (i < length && key[i] == text[p + i]) i++;
-        hit = i == length;
-      }
-      if (hit) {
-        count = slot[0] & 0xffff;
-      } else {
-        count = resolve(p, e, (i32)h);
-        slot[0] = (length << 16) | count;
-        slot[1] = (i32)h;
-        for (i32 i = 0; i < length; i++) key[i] = text[p + i];
-      }
-    } else {
-      count = resolve(p, e, (i32)h);
-    }
+    i32 count = pieceCount(p, e, slots, keys, mask);
     ends[k] = e;
     counts[k] = count;
     k++;
@@ -280,6 +279,65 @@ __attribute__((export_name("countPieces"))) i32 countPieces(const u16 *text, i32
   stop = p;
   total = sum;
   return k;
+}
+
+static i32 continued; // words of the last wordTokens call counted in two tokens or more
+static i32 left;      // words it left to the caller
+
+__attribute__((export_name("continuedWords"))) i32 continuedWords(void) { return continued; }
+__attribute__((export_name("leftWords"))) i32 leftWords(void) { return left; }
+
+// The tokens of text[from, end) split as a text of its own, or -1 when a surrogate is involved.
+static i32 countAlone(i32 from, i32 end, i32 pattern, i32 *slots, u16 *keys, u32 mask) {
+  i32 whole = N;
+  N = end; // the splitters read nothing before p, so this is the text from..end alone
+  i32 sum = 0;
+  for (i32 p = from; p < end;) {
+    i32 e = splitAt(pattern, p);
+    if (e < 0) {
+      sum = -1;
+      break;
+    }
+    sum += pieceCount(p, e, slots, keys, mask);
+    p = e;
+  }
+  N = whole;
+  return sum;
+}
+
+// Per word of text[0, n) (offsets: start and end of each, in order), the tokens of the word
+// alone with the one space before it (U+0020, when there is one), as measure.ts counts them:
+// a word whose span is exactly one of the text's pieces (ends, counts, from countPieces) takes
+// that piece's count, any other is split alone. Returns the sum; continuedWords() is how many
+// took two tokens or more, and leftWords() how many it could not count (a surrogate is
+// involved), whose indices it wrote to `leftOut` for the caller.
+__attribute__((export_name("wordTokens"))) double wordTokens(const u16 *text, i32 n, i32 words, const i32 *offsets, i32 pieces, const i32 *ends, const i32 *counts, i32 pattern, i32 *slots, u16 *keys, u32 mask, i32 *leftOut) {
+  T = text;
+  N = n;
+  double sum = 0;
+  i32 cont = 0;
+  i32 nleft = 0;
+  i32 k = 0;
+  for (i32 w = 0; w < words; w++) {
+    i32 start = offsets[2 * w];
+    i32 end = offsets[2 * w + 1];
+    i32 from = start > 0 && text[start - 1] == SPACE_UNIT ? start - 1 : start;
+    while (k < pieces && ends[k] <= from) k++;
+    i32 c;
+    if (k < pieces && ends[k] == end && (k == 0 ? 0 : ends[k - 1]) == from) c = counts[k];
+    else {
+      c = countAlone(from, end, pattern, slots, keys, mask);
+      if (c < 0) {
+        leftOut[nleft++] = w;
+        continue;
+      }
+    }
+    sum += c;
+    if (c >= 2) cont++;
+  }
+  continued = cont;
+  left = nleft;
+  return sum;
 }
 
 // ---- Byte-pair merges (tokens/bpe.ts, step for step) over a rank table laid out as ranks.ts

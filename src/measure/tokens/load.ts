@@ -165,6 +165,7 @@ function lazyCounter(
     count: (text) => get().count(text),
     countPiece: (piece) => get().countPiece(piece),
     countWithPieces: (text, pieces) => get().countWithPieces!(text, pieces),
+    measureWords: (text, offsets) => get().measureWords?.(text, offsets) ?? null,
     cacheStats: () => (real ? real.cacheStats() : { hits: 0, misses: 0, evictions: 0, entries: 0 }),
     // Handing the tables out builds the counter: a thread that shares is about to count anyway,
     // and the others then take its rank table instead of parsing their own.

@@ -8,7 +8,10 @@ import type { FertilityFigures, ForEachWord, TokenCounter, TokenMeasure, WordOff
 const SPACE = 0x20;
 
 /**
- * Returns the token measure of a text. Each word is counted with the one space before it
+ * Returns the token measure of a text. A counter that measures words itself (measureWords: the
+ * token kernel, which matches words to pieces and splits the others alone in one call) does so
+ * when the words' offsets are at hand; in a CPU profile of the tokenizer-only check of the 40 MB
+ * bench corpus this walk then took 35 ms in the kernel, against 119 ms in measureByOffsets (same report). Each word is counted with the one space before it
  * when the text has one (U+0020 only): that is how a word occurs mid-sentence, and
  * byte-level vocabularies store " word" and "word" as different tokens. `wordOffsets`, when
  * given, must report the same words as `forEachWord` (as words.ts's pair do).
@@ -16,6 +19,8 @@ const SPACE = 0x20;
 export function measureTokens(counter: TokenCounter, text: string, forEachWord: ForEachWord, wordOffsets?: WordOffsets): TokenMeasure {
   if (counter.countWithPieces !== undefined) {
     const offsets = wordOffsets?.(text) ?? null;
+    const measured = offsets === null ? null : (counter.measureWords?.(text, offsets) ?? null);
+    if (measured !== null) return measured;
     return offsets === null ? measureByPieces(counter, text, forEachWord) : measureByOffsets(counter, text, offsets);
   }
   const { tokens, unknown } = counter.count(text);

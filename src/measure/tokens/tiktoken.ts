@@ -24,7 +24,7 @@
 // 0.83× the CPU time (3 pairs), the full check 0.87× and 0.90× (4 pairs).
 
 import { splitCl100k, splitGpt2, splitO200k, unitClasses, type PieceSplitter } from './split.js';
-import { KERNEL_PATTERN, MAX_KERNEL_UNITS, MAX_MERGE_UNITS, PIECES_PER_CALL, tokenKernel, type KernelCache, type KernelPattern } from '../kernels/tokens-kernel.js';
+import { KERNEL_PATTERN, MAX_KERNEL_UNITS, MAX_MERGE_UNITS, tokenKernel, type KernelCache, type KernelPattern, type KernelWordTokens } from '../kernels/tokens-kernel.js';
 import { bytePairCount } from './bpe.js';
 import { hashRange, MAX_CACHED_PIECE_LENGTH, PieceCache } from './cache.js';
 import { SharedPieceCounts } from './shared-counts.js';
@@ -32,7 +32,7 @@ import { TokenizerError } from './errors.js';
 import { BUILTIN_PATTERNS } from './patterns.js';
 import type { RankTable } from './ranks.js';
 import type { PieceList } from './pieces.js';
-import type { TokenCounter } from './types.js';
+import type { TokenCounter, TokenMeasure } from './types.js';
 
 export interface RankCounterOptions {
   id: string;
@@ -210,37 +210,83 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
     return tokens;
   };
 
+  // Pieces of the text the kernel counted last, all in its buffers (-1: not all of them are).
+  let piecesInKernel = -1;
+
   const countByKernel = (text: string, pieces: PieceList | null): number => {
     const kernel = tokenKernel(unitClasses);
     kernelCache ??= kernel.createCache(options.kernelCacheEntries ?? KERNEL_CACHE_ENTRIES);
     ranksAt = kernel.placeRanks(ranks.buffer);
     counting = text;
+    piecesInKernel = -1;
     kernel.load(text, resolve);
     let tokens = 0;
     const n = text.length;
     let p = 0;
+    let k = 0;
+    let byRegex = 0;
     while (p < n) {
-      const got = kernel.count(p, kernelPattern!, kernelCache);
-      kernelPieces += got;
+      k = kernel.count(p, k, kernelPattern!, kernelCache);
       tokens += kernel.tokens();
-      pieces?.append(kernel.ends, kernel.counts, got);
       p = kernel.stoppedAt();
-      if (p >= n || got === PIECES_PER_CALL) continue;
+      if (p >= n) break;
       // The kernel stopped before a surrogate: the regex decides this one piece.
       const e = regexPieceEnd(text, p);
-      if (e < 0) return tokens + countByRegex(text, p, pieces);
+      if (e < 0) {
+        kernelPieces += k - byRegex;
+        pieces?.append(kernel.ends, kernel.counts, k);
+        return tokens + countByRegex(text, p, pieces);
+      }
       const c = countRange(text, p, e);
+      kernel.ends[k] = e;
+      kernel.counts[k] = c;
+      k++;
+      byRegex++;
       tokens += c;
-      pieces?.push(e, c);
       p = e;
     }
+    kernelPieces += k - byRegex;
+    pieces?.append(kernel.ends, kernel.counts, k);
+    piecesInKernel = k;
     return tokens;
+  };
+
+  // measureTokens' figures of a text given its words' offsets, the words counted in the kernel
+  // over the pieces it just found; null when the kernel does not take the text.
+  const measureWords = (text: string, offsets: Int32Array): TokenMeasure | null => {
+    if (text.length > MAX_KERNEL_UNITS) return null;
+    const tokens = guarded(text);
+    if (piecesInKernel < 0) return null;
+    let got: KernelWordTokens;
+    try {
+      got = tokenKernel(unitClasses).wordTokens(offsets, piecesInKernel, kernelPattern!, kernelCache!);
+    } catch (cause) {
+      throw new TokenizerError('count', label, `cannot encode text: ${(cause as Error).message}`, { cause });
+    }
+    let { wordTokens, continuedWords } = got;
+    // Words the kernel could not split alone (a surrogate is involved), as measure.ts counts them.
+    for (const w of got.left.slice()) {
+      const start = offsets[w * 2]!;
+      const from = start > 0 && text.charCodeAt(start - 1) === 0x20 ? start - 1 : start;
+      const c = countPiece(text.slice(from, offsets[w * 2 + 1]!));
+      wordTokens += c;
+      if (c >= 2) continuedWords++;
+    }
+    return { tokens, unknown: 0, words: offsets.length >> 1, wordTokens, continuedWords };
   };
 
   const countText = (text: string, pieces: PieceList | null): number => {
     if (splitter === null) return countByRegex(text, 0, pieces);
     if (kernelPattern !== null && text.length <= MAX_KERNEL_UNITS) return countByKernel(text, pieces);
     return countFrom(text, 0, pieces);
+  };
+
+  const countPiece = (piece: string): number => {
+    const cached = words.get(piece);
+    if (cached !== undefined) return cached;
+    const n = guarded(piece);
+    words.set(piece, n);
+    return n;
   };
 
   const guarded = (text: string, pieces: PieceList | null = null): number => {
@@ -258,13 +304,8 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
     unknownTokenId: null,
     exactFastPath: true,
     count: (text) => ({ tokens: guarded(text), unknown: 0 }),
-    countPiece: (piece) => {
-      const cached = words.get(piece);
-      if (cached !== undefined) return cached;
-      const n = guarded(piece);
-      words.set(piece, n);
-      return n;
-    },
+    countPiece,
+    ...(kernelPattern !== null ? { measureWords } : {}),
     ...(builtinPattern
       ? {
           countWithPieces: (text: string, pieces: PieceList) => {

@@ -50,6 +50,13 @@ export interface TokenCounter {
    * reuse it; absent counters are measured word by word.
    */
   countWithPieces?(text: string, pieces: PieceList): { tokens: number; unknown: number };
+  /**
+   * measureTokens' figures for a text given its words (start and end of each, in order, as
+   * words.ts's wordOffsets gives them): the same as counting with pieces and then each word
+   * alone, done in one go where the counter can (the token kernel); null where it cannot, and
+   * the caller measures it the other way.
+   */
+  measureWords?(text: string, offsets: Int32Array): TokenMeasure | null;
   cacheStats(): CacheStats;
   /** The tables in shared memory this counter works from, for other threads' counters of the same tokenizer to adopt (rank counters only). */
   shareTables?(): SharedTokenizerTables;
