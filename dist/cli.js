@@ -6473,11 +6473,130 @@ function finishExact(h1, h2, length, out) {
   out.exactLow = h2 >>> 0;
 }
 
+// src/measure/kernels/instance.ts
+function kernelUnavailable() {
+  return typeof WebAssembly === "undefined" ? "this Node.js runs without WebAssembly (started with --jitless?), and the language labeller and token counter run as WebAssembly kernels: run sluice without that flag" : null;
+}
+function instantiateKernel(base64, env = {}) {
+  const unavailable = kernelUnavailable();
+  if (unavailable) throw new Error(unavailable);
+  const module = new WebAssembly.Module(Buffer.from(base64, "base64"));
+  const exports = new WebAssembly.Instance(module, { env }).exports;
+  const memory = exports.memory;
+  let top = exports.__heap_base.value + 15 & ~15;
+  const allocate = (bytes3) => {
+    const at = top;
+    top = top + bytes3 + 15 & ~15;
+    const missing = top - memory.buffer.byteLength;
+    if (missing > 0) memory.grow(Math.ceil(missing / 65536));
+    return at;
+  };
+  const place = (array) => {
+    const at = allocate(array.byteLength);
+    new Uint8Array(memory.buffer, at, array.byteLength).set(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));
+    return at;
+  };
+  return Object.assign(/* @__PURE__ */ Object.create(null), exports, { allocate, place });
+}
+
+// src/measure/kernels/duplicates.generated.ts
+var WASM_BASE64 = "AGFzbQEAAAABHwVgAX8Bf2ABfwBgAAF/YAZ/f39/f38Bf2ADf39/AX8CEwEDZW52C2FzdHJhbENsYXNzAAADBwYBAgICAwQEBQFwAQEBBQMBACIGEQJ/AUGgiIQBC38AQaCIhAELB2IIBm1lbW9yeQIACnNldENsYXNzZXMAAQtleGFjdExlbmd0aAACCWV4YWN0SGlnaAADCGV4YWN0TG93AAQMc2NhblByZXBhcmVkAAUGc2tldGNoAAYLX19oZWFwX2Jhc2UDAQraHAYNAEEAIAA2AoCIgIAACwsAQQAoAoSIgIAACwsAQQAoAoiIgIAACwsAQQAoAoyIgIAAC6UKARN/AkACQCABQQFODQBBxbvyiHghBkGuzojjBiEHQQAhCEEAIQkMAQsgAUF+aiEKIABBBGohCyABQX9qIQxBACgCgIiAgAAhDUGuzojjBiEHQQAhCUEAIQ5BACEPQQAhEEEAIRFBACESQQAhCEHFu/KIeCEGQQAhEwNAAkACQAJAAkACQAJAIA0gACARQQF0ai8BACIUai0AACIVQQJGDQAgESEWQX8hFwwBC0EAIRVBfyEYIBFBAWoiFiABTg0BIAAgFkEBdGovAQAiF0GA+ANxQYC4A0cNASAUQQp0IBdqQYDIgGVqEICAgIAAIRVBACgCgIiAgAAhDQsgFUEBRg0BIBchGCAWIRELAkAgDkUNAAJAIANFDQAgBSAJQQJ0aiAQIBNqIg5BEHYgDnNBreqs/wdsIg5BD3YgDnNBi82yo3hsIg5BEHYgDnM2AgALIAQgCUECdGogDyATcyIOQRB2IA5zQeuUr694bCIOQQ12IA5zQbXcypV8bCIOQRB2IA5zNgIAIAlBAWohCQtBACEOQQEhFyAVQQNHDQFBASESDAILIA9BxbvyiHggDhshESAQQZ+6sSggDhshFQJAIBJFDQACQCAIDQBBACEIDAELIAhBAWohCCAHQSBzQZXTx94FbCEHIAZBIHNBk4OACGwhBgsgE0EAIA4bIRMgByAUc0GV08feBWwhByAGIBRzQZODgAhsIQYgFSAUc0Ht+OzgAmwhECARIBRzQZODgAhsIQ8CQAJAAkAgF0F/Sg0AAkAgFkEBaiIRIAFIDQAgFiERDAMLIA0gACARQQF0ai8BACIVai0AAEEBRg0BIBYhEQwCCyAIQQJqIQggE0ECaiETIAcgF3NBldPH3gVsIQcgBiAXc0GTg4AIbCEGIBcgEHNB7fjs4AJsIRAgFyAPc0GTg4AIbCEPQQEhDkEAIRIgFiERQQAhFwwDCyALIBZBAXRqIQ4gFiERAkADQCAHIBVzQZXTx94FbCEHIAYgFXNBk4OACGwhBiAQIBVzQe347OACbCEQIA8gFXNBk4OACGwhDyAKIBFGDQEgEUEBaiERIA4vAQAhFSAOQQJqIQ4gDSAVai0AAEEBRg0ADAILCyAMIRELQQEhDiARIBZrQQFqIhUgCGohCCAVIBNqIRNBACESQQAhFwwBCwJAIAJFDQAgFUEERg0BCwJAIBJFDQACQCAIDQBBACEIDAELIAhBAWohCCAHQSBzQZXTx94FbCEHIAZBIHNBk4OACGwhBgtBASEXIAcgFHNBldPH3gVsIQcgBiAUc0GTg4AIbCEGQQAhEgJAAkAgGEEATg0AIAhBAWohCAwBCyAIQQJqIQggByAYc0GV08feBWwhByAGIBhzQZODgAhsIQYLQQAhDgsgEUEBaiIRIAFIDQALIBcNAAJAIANFDQAgBSAJQQJ0aiAQIBNqIhFBEHYgEXNBreqs/wdsIhFBD3YgEXNBi82yo3hsIhFBEHYgEXM2AgALIAQgCUECdGogDyATcyIRQRB2IBFzQeuUr694bCIRQQ12IBFzQbXcypV8bCIRQRB2IBFzNgIAIAlBAWohCQtBACAINgKEiICAAEEAIAggBnMgCCAHaiIVaiIRIBVqIhVBEHYgFXNBreqs/wdsIhVBD3YgFXNBi82yo3hsIhVBEHYgFXMiFSARQRB2IBFzQeuUr694bCIRQQ12IBFzQbXcypV8bCIRQRB2IBFzaiIRNgKIiICAAEEAIBEgFWo2AoyIgIAAIAkL/hEDCX8BewN/IAEgAigCACIDa0EBaiEEQQEhBQJAIAEgAyABIANIIgYbIgdBAkgNAEEBIQVBASEIAkAgB0F/aiIJQQRJDQAgCUF8cSIKQXxqIgtBAnZBAWoiBUEHcSEIAkACQCALQRxPDQD9DAEAAAABAAAAAQAAAAEAAAAhDAwBCyAFQfj///8HcSEL/QwBAAAAAQAAAAEAAAABAAAAIQwDQCAM/QyBAByFgQAchYEAHIWBAByF/bUBIQwgC0F4aiILDQALCwJAIAhFDQADQCAM/QyR9EUlkfRFJZH0RSWR9EUl/bUBIQwgCEF/aiIIDQALCyAMIAwgDP0NCAkKCwwNDg8AAAAAAAAAAP21ASIMIAwgDP0NBAUGBwAAAAAAAAAAAAAAAP21Af0bACEFIAkgCkYNASAKQQFyIQgLIAcgCGshCANAIAVBkemXqgJsIQUgCEF/aiIIDQALC0EBIAQgBhshDUEAIQsCQCAHQQFIDQAgB0EDcSEEAkACQCAHQX9qQQNPDQBBACEGQQAhCwwBCyAHQXxxIQlBACEGIAAhCEEAIQsDQCAIQQxqKAIAIAhBCGooAgAgCEEEaigCACAIKAIAIAtBkemXqgJsakGR6ZeqAmxqQZHpl6oCbGpBkemXqgJsaiELIAhBEGohCCAJIAZBBGoiBkcNAAsLIARFDQAgACAGQQJ0aiEIA0AgCCgCACALQZHpl6oCbGohCyAIQQRqIQggBEF/aiIEDQALC0EAIAIoAgwgB0ECdCIGaigCACIHIAtzIghBEHYgCHNB65Svr3hsIghBDXYgCHNBtdzKlXxsIghBEHYgCHMiBDYCkIiAgAACQCANQQJIDQAgACAGaiEKQQAhCEEBIQYDQCAIQZSIgIAAaiALIAAgCGooAgAgBWxrQZHpl6oCbCAKIAhqKAIAaiILIAdzIglBEHYgCXNB65Svr3hsIglBDXYgCXNBtdzKlXxsIglBEHYgCXM2AgAgCEEEaiEIIAZBAWoiBiANSA0ACwsgAigCGCEJIAIoAhQhDgJAAkACQAJAIAIoAgQiAEUNACAJQf8BIABBAnT8CwBBASEPIA1BAUgNAgwBCyANQQBMDQILIAMgASADIAFKGyADayEIQZSIgIAAIQsgACEPA0ACQAJAIAkgBEEQdiAAbEEQdkECdCIFaiIGKAIAQX9KDQAgBkEANgIAIA4gBWogBDYCACAPQX9qIQ8MAQsgBCAOIAVqIgUoAgBODQAgBSAENgIACwJAIAhFDQAgCEF/aiEIIAsoAgAhBCALQQRqIQsMAQsLIA9BAUgNAEEBIQoDQCAKIAIoAghODQEgCkGx893xeWwhAUGQiICAACEIIA0hCwNAIAgoAgAgAXMiBEEQdiAEc0HrlK+veGwiBEENdiAEc0G13MqVfGwiBEEQdiIFIARzIQQCQAJAIAkgBSAAbEEQdkECdCIFaiIHKAIAIgZBAEgNACAGIApHDQEgBCAOIAVqIgUoAgBODQEgBSAENgIADAELIAcgCjYCACAOIAVqIAQ2AgAgD0F/aiEPCyAIQQRqIQggC0F/aiILDQALIApBAWohCiAPQQBKDQALCyAPRQ0AIABFDQBBACEGA0ACQCAJIAZBAnQiB2ooAgBBf0oNAAJAAkACQCAJIAIoAhAiCCAGQQd0aigCACILQQJ0aigCAEF/Sg0AIAkgCCAGQQV0QQJ0IgRBBHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBCHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBDHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBEHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBFHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBGHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBHHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBIHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBJHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBKHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBLHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBMHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBNHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBOHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBPHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBwAByaigCACILQQJ0aigCAEF/Sg0AIAkgCCAEQcQAcmooAgAiC0ECdGooAgBBf0oNACAJIAggBEHIAHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARBzAByaigCACILQQJ0aigCAEF/Sg0AIAkgCCAEQdAAcmooAgAiC0ECdGooAgBBf0oNACAJIAggBEHUAHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARB2AByaigCACILQQJ0aigCAEF/Sg0AIAkgCCAEQdwAcmooAgAiC0ECdGooAgBBf0oNACAJIAggBEHgAHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARB5AByaigCACILQQJ0aigCAEF/Sg0AIAkgCCAEQegAcmooAgAiC0ECdGooAgBBf0oNACAJIAggBEHsAHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARB8AByaigCACILQQJ0aigCAEF/Sg0AIAkgCCAEQfQAcmooAgAiC0ECdGooAgBBf0oNACAJIAggBEH4AHJqKAIAIgtBAnRqKAIAQX9KDQAgCSAIIARB/AByaigCACILQQJ0aigCAEEATg0AQX8hCwwBCyALQX9KDQELIAZBsfPd8XlsQbHz3fF5aiEFQdeylJsEIQgDQCAFIAhzIQQgCEH3lK+veGohCCALIARBr9bTvgJzIgRBEHYgBHNB65Svr3hsIgRBDXYgBHNBtdzKlXxsQRB2IABsQRB2IgQgCSAEQQJ0aigCAEEASBsiC0EASA0ACwsgDiAHaiAOIAtBAnRqKAIANgIACyAGQQFqIgYgAEcNAAsLIA0L";
+
+// src/measure/kernels/duplicates-kernel.ts
+var MAX_SCAN_UNITS = 1 << 20;
+var ScanKernel = class {
+  kernel;
+  textAt = 0;
+  textUnits = 0;
+  buffer = null;
+  bytes = Buffer.alloc(0);
+  constructor(classes2, astralClass2) {
+    this.kernel = instantiateKernel(WASM_BASE64, { astralClass: astralClass2 });
+    this.kernel.setClasses(this.kernel.place(classes2));
+  }
+  /** Returns empty word buffers (one lane or two). */
+  words(lanes) {
+    return { capacity: 0, at1: 0, at2: lanes === 2 ? 0 : -1, lane1: new Int32Array(0), lane2: lanes === 2 ? new Int32Array(0) : null, buffer: null };
+  }
+  /**
+   * Scans `text` (prepared, at most MAX_SCAN_UNITS long) into the word buffers and returns its word
+   * count; exact() then gives its exact hash. The views in `into` are valid until the next scan.
+   */
+  scan(text, strip, into) {
+    const n = text.length;
+    if (n > this.textUnits) {
+      this.textUnits = Math.max(n, this.textUnits * 2, 4096);
+      this.textAt = this.kernel.allocate(this.textUnits * 2);
+    }
+    const needed = (n >> 1) + 1;
+    if (needed > into.capacity) {
+      into.capacity = Math.max(needed, into.capacity * 2, 1024);
+      into.at1 = this.kernel.allocate(into.capacity * 4);
+      if (into.at2 >= 0) into.at2 = this.kernel.allocate(into.capacity * 4);
+      into.buffer = null;
+    }
+    if (this.kernel.memory.buffer !== this.buffer) {
+      this.buffer = this.kernel.memory.buffer;
+      this.bytes = Buffer.from(this.buffer);
+    }
+    this.views(into);
+    this.bytes.write(text, this.textAt, n * 2, "utf16le");
+    return this.kernel.scanPrepared(this.textAt, n, strip ? 1 : 0, into.at2 >= 0 ? 1 : 0, into.at1, into.at2 >= 0 ? into.at2 : 0);
+  }
+  /** Returns `into` with views of its buffers in the kernel's memory as it is now (made again when it has grown, which detaches views). */
+  views(into) {
+    const buffer = this.kernel.memory.buffer;
+    if (into.buffer !== buffer) {
+      into.buffer = buffer;
+      into.lane1 = new Int32Array(buffer, into.at1, into.capacity);
+      if (into.at2 >= 0) into.lane2 = new Int32Array(buffer, into.at2, into.capacity);
+    }
+    return into;
+  }
+  /** Whether a view is of this kernel's memory (word hashes a scan left there). */
+  holds(view) {
+    return view.buffer === this.kernel.memory.buffer;
+  }
+  /** Lays a MinHash sketcher's settings and tables out in the kernel's memory (fill rounds: at most 2^31 − 1). */
+  sketcher(shingle, hashes, fillRounds, lengthSeed, probes) {
+    const seedAt = this.kernel.place(lengthSeed);
+    const probesAt = this.kernel.place(probes);
+    const valuesAt = this.kernel.allocate(hashes * 4);
+    const roundsAt = this.kernel.allocate(hashes * 4);
+    const at = this.kernel.place(Int32Array.of(shingle, hashes, fillRounds, seedAt, probesAt, valuesAt, roundsAt));
+    return { at, valuesAt, hashes };
+  }
+  /** Sketches the `count` word hashes at `wordsAt` in this memory (count ≥ 1, from a scan here) into `values`; returns the shingle count. */
+  sketch(wordsAt, count3, sketcher, values) {
+    const shingles = this.kernel.sketch(wordsAt, count3, sketcher.at);
+    values.set(new Int32Array(this.kernel.memory.buffer, sketcher.valuesAt, sketcher.hashes));
+    return shingles;
+  }
+  /** The last scan's exact normal form: its length in code units and its 64-bit hash as two unsigned lanes. */
+  exactLength() {
+    return this.kernel.exactLength() >>> 0;
+  }
+  exactHigh() {
+    return this.kernel.exactHigh() >>> 0;
+  }
+  exactLow() {
+    return this.kernel.exactLow() >>> 0;
+  }
+};
+var kernel;
+function madeScanKernel() {
+  return kernel;
+}
+function scanKernel(classes2, astralClass2) {
+  return kernel ??= new ScanKernel(classes2(), astralClass2);
+}
+
 // src/measure/duplicates/minhash.ts
 var mix32b2 = mix32b;
 var ROLL_BASE = 625341585;
 var FILL_ROUNDS = 8;
 var PROBE_TABLE = 32;
+var MAX_KERNEL_ROUNDS = 2147483647;
 var MAX_HASHES = 65535;
 var Sketcher = class {
   shingle;
@@ -6488,6 +6607,8 @@ var Sketcher = class {
   shingles;
   lengthSeed;
   fillRounds;
+  /** This sketcher's tables in the duplicate kernel's memory, laid out on its first sketch there. */
+  inKernel;
   /** `fillRounds` is for experiments (scripts/bench-duplicates.mjs): 1 is plain one-permutation hashing with densification, Infinity fills every bin by rounds. Signatures are comparable only at equal values. */
   constructor(shingle, hashes, fillRounds = FILL_ROUNDS) {
     if (!Number.isInteger(hashes) || hashes < 1 || hashes > MAX_HASHES) throw new RangeError(`hashes must be an integer from 1 to ${MAX_HASHES}, got ${hashes}`);
@@ -6509,6 +6630,12 @@ var Sketcher = class {
    */
   sketch(words, count3) {
     if (count3 === 0) return 0;
+    const kernel5 = madeScanKernel();
+    if (kernel5 !== void 0 && this.fillRounds <= MAX_KERNEL_ROUNDS && kernel5.holds(words)) {
+      const at = words.byteOffset;
+      this.inKernel ??= kernel5.sketcher(this.shingle, this.hashes, this.fillRounds, this.lengthSeed, this.probes());
+      return kernel5.sketch(at, count3, this.inKernel, this.values);
+    }
     const n = this.shingle;
     const m = count3 < n ? count3 : n;
     const shingleCount = count3 < n ? 1 : count3 - n + 1;
@@ -6613,97 +6740,6 @@ function mix(h) {
   h ^= h >>> 13;
   h = Math.imul(h, 3266489909);
   return h ^ h >>> 16;
-}
-
-// src/measure/kernels/instance.ts
-function kernelUnavailable() {
-  return typeof WebAssembly === "undefined" ? "this Node.js runs without WebAssembly (started with --jitless?), and the language labeller and token counter run as WebAssembly kernels: run sluice without that flag" : null;
-}
-function instantiateKernel(base64, env = {}) {
-  const unavailable = kernelUnavailable();
-  if (unavailable) throw new Error(unavailable);
-  const module = new WebAssembly.Module(Buffer.from(base64, "base64"));
-  const exports = new WebAssembly.Instance(module, { env }).exports;
-  const memory = exports.memory;
-  let top = exports.__heap_base.value + 15 & ~15;
-  const allocate = (bytes3) => {
-    const at = top;
-    top = top + bytes3 + 15 & ~15;
-    const missing = top - memory.buffer.byteLength;
-    if (missing > 0) memory.grow(Math.ceil(missing / 65536));
-    return at;
-  };
-  const place = (array) => {
-    const at = allocate(array.byteLength);
-    new Uint8Array(memory.buffer, at, array.byteLength).set(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));
-    return at;
-  };
-  return Object.assign(/* @__PURE__ */ Object.create(null), exports, { allocate, place });
-}
-
-// src/measure/kernels/duplicates.generated.ts
-var WASM_BASE64 = "AGFzbQEAAAABGARgAX8Bf2ABfwBgAAF/YAZ/f39/f38BfwITAQNlbnYLYXN0cmFsQ2xhc3MAAAMGBQECAgIDBAUBcAEBAQUDAQACBg8CfwFBkIgEC38AQZCIBAsHWQcGbWVtb3J5AgAKc2V0Q2xhc3NlcwABC2V4YWN0TGVuZ3RoAAIJZXhhY3RIaWdoAAMIZXhhY3RMb3cABAxzY2FuUHJlcGFyZWQABQtfX2hlYXBfYmFzZQMBCtoKBQ0AQQAgADYCgIiAgAALCwBBACgChIiAgAALCwBBACgCiIiAgAALCwBBACgCjIiAgAALpQoBE38CQAJAIAFBAU4NAEHFu/KIeCEGQa7OiOMGIQdBACEIQQAhCQwBCyABQX5qIQogAEEEaiELIAFBf2ohDEEAKAKAiICAACENQa7OiOMGIQdBACEJQQAhDkEAIQ9BACEQQQAhEUEAIRJBACEIQcW78oh4IQZBACETA0ACQAJAAkACQAJAAkAgDSAAIBFBAXRqLwEAIhRqLQAAIhVBAkYNACARIRZBfyEXDAELQQAhFUF/IRggEUEBaiIWIAFODQEgACAWQQF0ai8BACIXQYD4A3FBgLgDRw0BIBRBCnQgF2pBgMiAZWoQgICAgAAhFUEAKAKAiICAACENCyAVQQFGDQEgFyEYIBYhEQsCQCAORQ0AAkAgA0UNACAFIAlBAnRqIBAgE2oiDkEQdiAOc0Gt6qz/B2wiDkEPdiAOc0GLzbKjeGwiDkEQdiAOczYCAAsgBCAJQQJ0aiAPIBNzIg5BEHYgDnNB65Svr3hsIg5BDXYgDnNBtdzKlXxsIg5BEHYgDnM2AgAgCUEBaiEJC0EAIQ5BASEXIBVBA0cNAUEBIRIMAgsgD0HFu/KIeCAOGyERIBBBn7qxKCAOGyEVAkAgEkUNAAJAIAgNAEEAIQgMAQsgCEEBaiEIIAdBIHNBldPH3gVsIQcgBkEgc0GTg4AIbCEGCyATQQAgDhshEyAHIBRzQZXTx94FbCEHIAYgFHNBk4OACGwhBiAVIBRzQe347OACbCEQIBEgFHNBk4OACGwhDwJAAkACQCAXQX9KDQACQCAWQQFqIhEgAUgNACAWIREMAwsgDSAAIBFBAXRqLwEAIhVqLQAAQQFGDQEgFiERDAILIAhBAmohCCATQQJqIRMgByAXc0GV08feBWwhByAGIBdzQZODgAhsIQYgFyAQc0Ht+OzgAmwhECAXIA9zQZODgAhsIQ9BASEOQQAhEiAWIRFBACEXDAMLIAsgFkEBdGohDiAWIRECQANAIAcgFXNBldPH3gVsIQcgBiAVc0GTg4AIbCEGIBAgFXNB7fjs4AJsIRAgDyAVc0GTg4AIbCEPIAogEUYNASARQQFqIREgDi8BACEVIA5BAmohDiANIBVqLQAAQQFGDQAMAgsLIAwhEQtBASEOIBEgFmtBAWoiFSAIaiEIIBUgE2ohE0EAIRJBACEXDAELAkAgAkUNACAVQQRGDQELAkAgEkUNAAJAIAgNAEEAIQgMAQsgCEEBaiEIIAdBIHNBldPH3gVsIQcgBkEgc0GTg4AIbCEGC0EBIRcgByAUc0GV08feBWwhByAGIBRzQZODgAhsIQZBACESAkACQCAYQQBODQAgCEEBaiEIDAELIAhBAmohCCAHIBhzQZXTx94FbCEHIAYgGHNBk4OACGwhBgtBACEOCyARQQFqIhEgAUgNAAsgFw0AAkAgA0UNACAFIAlBAnRqIBAgE2oiEUEQdiARc0Gt6qz/B2wiEUEPdiARc0GLzbKjeGwiEUEQdiARczYCAAsgBCAJQQJ0aiAPIBNzIhFBEHYgEXNB65Svr3hsIhFBDXYgEXNBtdzKlXxsIhFBEHYgEXM2AgAgCUEBaiEJC0EAIAg2AoSIgIAAQQAgCCAGcyAIIAdqIhVqIhEgFWoiFUEQdiAVc0Gt6qz/B2wiFUEPdiAVc0GLzbKjeGwiFUEQdiAVcyIVIBFBEHYgEXNB65Svr3hsIhFBDXYgEXNBtdzKlXxsIhFBEHYgEXNqIhE2AoiIgIAAQQAgESAVajYCjIiAgAAgCQs=";
-
-// src/measure/kernels/duplicates-kernel.ts
-var MAX_SCAN_UNITS = 1 << 20;
-var ScanKernel = class {
-  kernel;
-  textAt = 0;
-  textUnits = 0;
-  buffer = null;
-  bytes = Buffer.alloc(0);
-  constructor(classes2, astralClass2) {
-    this.kernel = instantiateKernel(WASM_BASE64, { astralClass: astralClass2 });
-    this.kernel.setClasses(this.kernel.place(classes2));
-  }
-  /** Returns empty word buffers (one lane or two). */
-  words(lanes) {
-    return { capacity: 0, at1: 0, at2: lanes === 2 ? 0 : -1, lane1: new Int32Array(0), lane2: lanes === 2 ? new Int32Array(0) : null, buffer: null };
-  }
-  /**
-   * Scans `text` (prepared, at most MAX_SCAN_UNITS long) into the word buffers and returns its word
-   * count; exact() then gives its exact hash. The views in `into` are valid until the next scan.
-   */
-  scan(text, strip, into) {
-    const n = text.length;
-    if (n > this.textUnits) {
-      this.textUnits = Math.max(n, this.textUnits * 2, 4096);
-      this.textAt = this.kernel.allocate(this.textUnits * 2);
-    }
-    const needed = (n >> 1) + 1;
-    if (needed > into.capacity) {
-      into.capacity = Math.max(needed, into.capacity * 2, 1024);
-      into.at1 = this.kernel.allocate(into.capacity * 4);
-      if (into.at2 >= 0) into.at2 = this.kernel.allocate(into.capacity * 4);
-      into.buffer = null;
-    }
-    const buffer = this.kernel.memory.buffer;
-    if (buffer !== this.buffer) {
-      this.buffer = buffer;
-      this.bytes = Buffer.from(buffer);
-    }
-    if (into.buffer !== buffer) {
-      into.buffer = buffer;
-      into.lane1 = new Int32Array(buffer, into.at1, into.capacity);
-      if (into.at2 >= 0) into.lane2 = new Int32Array(buffer, into.at2, into.capacity);
-    }
-    this.bytes.write(text, this.textAt, n * 2, "utf16le");
-    return this.kernel.scanPrepared(this.textAt, n, strip ? 1 : 0, into.at2 >= 0 ? 1 : 0, into.at1, into.at2 >= 0 ? into.at2 : 0);
-  }
-  /** The last scan's exact normal form: its length in code units and its 64-bit hash as two unsigned lanes. */
-  exactLength() {
-    return this.kernel.exactLength() >>> 0;
-  }
-  exactHigh() {
-    return this.kernel.exactHigh() >>> 0;
-  }
-  exactLow() {
-    return this.kernel.exactLow() >>> 0;
-  }
-};
-var kernel;
-function scanKernel(classes2, astralClass2) {
-  return kernel ??= new ScanKernel(classes2(), astralClass2);
 }
 
 // src/measure/duplicates/scan.ts
@@ -6845,13 +6881,15 @@ function hashWords(prepared, buf) {
 }
 var shared = {
   prepared: null,
-  owner: null,
-  lane1: new Int32Array(0),
-  lane2: new Int32Array(0),
-  count: 0
+  owner: null
 };
 function sharedWords(prepared) {
-  return shared.prepared === prepared ? shared : null;
+  const owner = shared.owner;
+  if (shared.prepared !== prepared || owner === null) return null;
+  return { lane1: owner.words, lane2: owner.words2, count: owner.wordCount };
+}
+function duplicateKernel() {
+  return scanKernel(classTable, astralClassOf);
 }
 var DocumentScanner = class {
   /** Code units of the exact normal form (0: empty document). */
@@ -6859,16 +6897,15 @@ var DocumentScanner = class {
   /** The 64-bit exact hash as two unsigned 32-bit lanes. */
   exactHigh = 0;
   exactLow = 0;
-  /** Words found; their hashes are words[0 .. wordCount). Valid until the next scan. */
+  /** Words found; their hashes are words[0 .. wordCount), valid until the next scan (see the words getter). */
   wordCount = 0;
-  words;
-  /** Second-lane word hashes (as hashWords' lane2), filled only by a two-lane scanner. */
-  words2;
   /** The buffers of a scan in TypeScript. */
   ownWords = new Int32Array(1024);
   ownWords2;
   /** The buffers of a scan in the kernel (kernels/duplicates.c), made on the first scan; null when this scanner does not use it. */
   kernelWords;
+  /** Whether the last scan ran in the kernel (its words are in the kernel's memory). */
+  inKernel = false;
   lanes;
   /**
    * `lanes` 2 also hashes each word in contamination's second lane and leaves both lanes for
@@ -6877,10 +6914,16 @@ var DocumentScanner = class {
    */
   constructor(lanes = 1, kernel5 = true) {
     this.ownWords2 = lanes === 2 ? new Int32Array(1024) : null;
-    this.words = this.ownWords;
-    this.words2 = this.ownWords2;
     this.lanes = lanes;
     if (!kernel5) this.kernelWords = null;
+  }
+  /** The word hashes of the last scan. A view of the kernel's memory is made again when that memory has grown since (which detaches views), so it is always readable. */
+  get words() {
+    return this.inKernel ? duplicateKernel().views(this.kernelWords).lane1 : this.ownWords;
+  }
+  /** Second-lane word hashes (as hashWords' lane2), filled only by a two-lane scanner. */
+  get words2() {
+    return this.inKernel ? duplicateKernel().views(this.kernelWords).lane2 : this.ownWords2;
   }
   /**
    * Scans `prepared` (see prepareText) once, computing both the exact hash of its normal form
@@ -6891,22 +6934,19 @@ var DocumentScanner = class {
     if (shared.owner === this) shared.prepared = null;
     if (this.kernelWords === null || prepared.length > MAX_SCAN_UNITS) {
       this.scanHere(prepared, strip);
+      this.inKernel = false;
     } else {
-      const kernel5 = scanKernel(classTable, astralClassOf);
+      const kernel5 = duplicateKernel();
       const into = this.kernelWords ??= kernel5.words(this.lanes);
       this.wordCount = kernel5.scan(prepared, strip, into);
-      this.words = into.lane1;
-      this.words2 = into.lane2;
+      this.inKernel = true;
       this.exactLength = kernel5.exactLength();
       this.exactHigh = kernel5.exactHigh();
       this.exactLow = kernel5.exactLow();
     }
-    if (this.words2 !== null) {
+    if (this.lanes === 2) {
       shared.prepared = prepared;
       shared.owner = this;
-      shared.lane1 = this.words;
-      shared.lane2 = this.words2;
-      shared.count = this.wordCount;
     }
   }
   /** The scan in TypeScript: one fused pass, as duplicates.c makes it; classifying each code unit once is most of the cost. */
@@ -7022,8 +7062,8 @@ var DocumentScanner = class {
       words[count3++] = mix322(wh ^ wlen);
     }
     finishExact2(h1, h2, emitted, this);
-    this.words = this.ownWords = words;
-    this.words2 = this.ownWords2 = words2;
+    this.ownWords = words;
+    this.ownWords2 = words2;
     this.wordCount = count3;
     this.exactLength = emitted;
   }

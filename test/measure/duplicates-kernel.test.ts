@@ -5,7 +5,8 @@
 // random strings with astral characters and lone surrogates.
 import { describe, expect, it } from 'vitest';
 import { hashString64, hex64, mix32 } from '../../src/measure/duplicates/hash.js';
-import { DocumentScanner, normalizeForExact, prepareText, wordsOf } from '../../src/measure/duplicates/scan.js';
+import { Sketcher } from '../../src/measure/duplicates/minhash.js';
+import { DocumentScanner, normalizeForExact, prepareText, sharedWords, wordsOf } from '../../src/measure/duplicates/scan.js';
 import { MAX_SCAN_UNITS } from '../../src/measure/kernels/duplicates-kernel.js';
 import { generator } from '../fixtures/prng.js';
 import { brownSample, UDHR_SCRIPTS, udhrParagraphs } from '../fixtures/tokens/corpora.js';
@@ -86,5 +87,41 @@ describe('the duplicate scan in the kernel', () => {
     const first = Array.from(a.words.subarray(0, a.wordCount));
     b.scan(prepareText('a different story entirely, with more words in it'), false);
     expect(Array.from(a.words.subarray(0, a.wordCount))).toEqual(first);
+  });
+
+  it.each([
+    [5, 128],
+    [1, 7],
+    [13, 256],
+  ])('sketches the words a scan left in the kernel as the TypeScript Sketcher does (shingle %i, %i hashes)', (shingle, hashes) => {
+    const scanner = new DocumentScanner(1);
+    const inKernel = new Sketcher(shingle, hashes);
+    const here = new Sketcher(shingle, hashes);
+    let densified = 0;
+    for (const text of [...texts.slice(0, 600), ...random.slice(0, 1000)]) {
+      scanner.scan(prepareText(text), false);
+      if (scanner.wordCount === 0) continue;
+      const copy = Int32Array.from(scanner.words.subarray(0, scanner.wordCount)); // not in the kernel's memory
+      const n = inKernel.sketch(scanner.words, scanner.wordCount);
+      expect(here.sketch(copy, copy.length)).toBe(n);
+      if (n < hashes) densified++;
+      if (!inKernel.values.every((v, i) => v === here.values[i])) expect(Array.from(inKernel.values)).toEqual(Array.from(here.values));
+    }
+    expect(densified).toBeGreaterThan(100);
+  });
+
+  it('keeps the words a two-lane scan shares readable when the kernel’s memory grows before they are read', () => {
+    const scanner = new DocumentScanner(2);
+    const prepared = prepareText('the evening bulletin led with the monsoon and the markets');
+    scanner.scan(prepared, false);
+    const want = Array.from(scanner.words.subarray(0, scanner.wordCount));
+    const before = scanner.words;
+    // A much longer text scanned by another scanner grows the kernel's memory, which detaches views made before.
+    new DocumentScanner(1).scan(prepareText('word '.repeat(200_000)), false);
+    expect(before.length).toBe(0);
+    const shared = sharedWords(prepared);
+    expect(shared).not.toBeNull();
+    expect(Array.from(shared!.lane1.subarray(0, shared!.count))).toEqual(want);
+    expect(Array.from(scanner.words.subarray(0, scanner.wordCount))).toEqual(want);
   });
 });

@@ -18,7 +18,7 @@
 // 40 MB bench corpus (shared 2-core machine; same reports): the duplicates-only policy took
 // 0.94× the CPU time (medians of 5 pairs), the pass itself 0.47× in a CPU profile (299 → 142 ms).
 import * as hash from './hash.js';
-import { MAX_SCAN_UNITS, scanKernel, type KernelWords } from '../kernels/duplicates-kernel.js';
+import { MAX_SCAN_UNITS, scanKernel, type KernelWords, type ScanKernel } from '../kernels/duplicates-kernel.js';
 
 // Module-local copies: some loaders (tsx, vitest) turn imported bindings into getter calls,
 // which made the scan loops ~5× slower when measured.
@@ -224,9 +224,6 @@ export function normalizeForExact(text: string, punctuation: 'keep' | 'strip'): 
 const shared = {
   prepared: null as string | null,
   owner: null as DocumentScanner | null,
-  lane1: new Int32Array(0) as Int32Array,
-  lane2: new Int32Array(0) as Int32Array,
-  count: 0,
 };
 
 /** Word hashes of one text in both lanes, as hashWords with two lanes writes them: lane1/lane2[0 .. count). */
@@ -238,7 +235,14 @@ export interface SharedWords {
 
 /** Returns the word hashes of `prepared` when a two-lane scanner's last scan was of equal text, else null. Valid until that scanner scans again. */
 export function sharedWords(prepared: string): SharedWords | null {
-  return shared.prepared === prepared ? shared : null;
+  const owner = shared.owner;
+  if (shared.prepared !== prepared || owner === null) return null;
+  return { lane1: owner.words, lane2: owner.words2!, count: owner.wordCount };
+}
+
+/** Returns this thread's duplicate kernel (kernels/duplicates.c), made on first use with the scan's class table. */
+export function duplicateKernel(): ScanKernel {
+  return scanKernel(classTable, astralClassOf);
 }
 
 /** Result of scanning one document: its exact hash and word hashes (buffers reused between calls). */
@@ -248,16 +252,15 @@ export class DocumentScanner {
   /** The 64-bit exact hash as two unsigned 32-bit lanes. */
   exactHigh = 0;
   exactLow = 0;
-  /** Words found; their hashes are words[0 .. wordCount). Valid until the next scan. */
+  /** Words found; their hashes are words[0 .. wordCount), valid until the next scan (see the words getter). */
   wordCount = 0;
-  words: Int32Array;
-  /** Second-lane word hashes (as hashWords' lane2), filled only by a two-lane scanner. */
-  words2: Int32Array | null;
   /** The buffers of a scan in TypeScript. */
   private ownWords: Int32Array = new Int32Array(1024);
   private ownWords2: Int32Array | null;
   /** The buffers of a scan in the kernel (kernels/duplicates.c), made on the first scan; null when this scanner does not use it. */
   private kernelWords: KernelWords | null | undefined;
+  /** Whether the last scan ran in the kernel (its words are in the kernel's memory). */
+  private inKernel = false;
   private readonly lanes: 1 | 2;
 
   /**
@@ -267,10 +270,18 @@ export class DocumentScanner {
    */
   constructor(lanes: 1 | 2 = 1, kernel = true) {
     this.ownWords2 = lanes === 2 ? new Int32Array(1024) : null;
-    this.words = this.ownWords;
-    this.words2 = this.ownWords2;
     this.lanes = lanes;
     if (!kernel) this.kernelWords = null;
+  }
+
+  /** The word hashes of the last scan. A view of the kernel's memory is made again when that memory has grown since (which detaches views), so it is always readable. */
+  get words(): Int32Array {
+    return this.inKernel ? duplicateKernel().views(this.kernelWords!).lane1 : this.ownWords;
+  }
+
+  /** Second-lane word hashes (as hashWords' lane2), filled only by a two-lane scanner. */
+  get words2(): Int32Array | null {
+    return this.inKernel ? duplicateKernel().views(this.kernelWords!).lane2 : this.ownWords2;
   }
 
   /**
@@ -282,22 +293,19 @@ export class DocumentScanner {
     if (shared.owner === this) shared.prepared = null;
     if (this.kernelWords === null || prepared.length > MAX_SCAN_UNITS) {
       this.scanHere(prepared, strip);
+      this.inKernel = false;
     } else {
-      const kernel = scanKernel(classTable, astralClassOf);
+      const kernel = duplicateKernel();
       const into = (this.kernelWords ??= kernel.words(this.lanes));
       this.wordCount = kernel.scan(prepared, strip, into);
-      this.words = into.lane1;
-      this.words2 = into.lane2;
+      this.inKernel = true;
       this.exactLength = kernel.exactLength();
       this.exactHigh = kernel.exactHigh();
       this.exactLow = kernel.exactLow();
     }
-    if (this.words2 !== null) {
+    if (this.lanes === 2) {
       shared.prepared = prepared;
       shared.owner = this;
-      shared.lane1 = this.words;
-      shared.lane2 = this.words2;
-      shared.count = this.wordCount;
     }
   }
 
@@ -425,8 +433,8 @@ export class DocumentScanner {
       words[count++] = mix32(wh ^ wlen);
     }
     finishExact(h1, h2, emitted, this);
-    this.words = this.ownWords = words;
-    this.words2 = this.ownWords2 = words2;
+    this.ownWords = words;
+    this.ownWords2 = words2;
     this.wordCount = count;
     this.exactLength = emitted;
   }

@@ -10,6 +10,14 @@ interface DuplicatesExports {
   exactHigh(): number;
   exactLow(): number;
   scanPrepared(text: number, n: number, strip: number, two: number, words: number, words2: number): number;
+  sketch(words: number, count: number, sketcher: number): number;
+}
+
+/** A MinHash sketcher's settings and tables in the kernel's memory (the Sketcher struct of duplicates.c). */
+export interface KernelSketcher {
+  at: number;
+  valuesAt: number;
+  hashes: number;
 }
 
 /**
@@ -63,18 +71,46 @@ export class ScanKernel {
       if (into.at2 >= 0) into.at2 = this.kernel.allocate(into.capacity * 4);
       into.buffer = null;
     }
-    const buffer = this.kernel.memory.buffer;
-    if (buffer !== this.buffer) {
-      this.buffer = buffer;
-      this.bytes = Buffer.from(buffer);
+    if (this.kernel.memory.buffer !== this.buffer) {
+      this.buffer = this.kernel.memory.buffer;
+      this.bytes = Buffer.from(this.buffer);
     }
+    this.views(into);
+    this.bytes.write(text, this.textAt, n * 2, 'utf16le');
+    return this.kernel.scanPrepared(this.textAt, n, strip ? 1 : 0, into.at2 >= 0 ? 1 : 0, into.at1, into.at2 >= 0 ? into.at2 : 0);
+  }
+
+  /** Returns `into` with views of its buffers in the kernel's memory as it is now (made again when it has grown, which detaches views). */
+  views(into: KernelWords): KernelWords {
+    const buffer = this.kernel.memory.buffer;
     if (into.buffer !== buffer) {
       into.buffer = buffer;
       into.lane1 = new Int32Array(buffer, into.at1, into.capacity);
       if (into.at2 >= 0) into.lane2 = new Int32Array(buffer, into.at2, into.capacity);
     }
-    this.bytes.write(text, this.textAt, n * 2, 'utf16le');
-    return this.kernel.scanPrepared(this.textAt, n, strip ? 1 : 0, into.at2 >= 0 ? 1 : 0, into.at1, into.at2 >= 0 ? into.at2 : 0);
+    return into;
+  }
+
+  /** Whether a view is of this kernel's memory (word hashes a scan left there). */
+  holds(view: Int32Array): boolean {
+    return view.buffer === this.kernel.memory.buffer;
+  }
+
+  /** Lays a MinHash sketcher's settings and tables out in the kernel's memory (fill rounds: at most 2^31 − 1). */
+  sketcher(shingle: number, hashes: number, fillRounds: number, lengthSeed: Int32Array, probes: Int32Array): KernelSketcher {
+    const seedAt = this.kernel.place(lengthSeed);
+    const probesAt = this.kernel.place(probes);
+    const valuesAt = this.kernel.allocate(hashes * 4);
+    const roundsAt = this.kernel.allocate(hashes * 4);
+    const at = this.kernel.place(Int32Array.of(shingle, hashes, fillRounds, seedAt, probesAt, valuesAt, roundsAt));
+    return { at, valuesAt, hashes };
+  }
+
+  /** Sketches the `count` word hashes at `wordsAt` in this memory (count ≥ 1, from a scan here) into `values`; returns the shingle count. */
+  sketch(wordsAt: number, count: number, sketcher: KernelSketcher, values: Int32Array): number {
+    const shingles = this.kernel.sketch(wordsAt, count, sketcher.at);
+    values.set(new Int32Array(this.kernel.memory.buffer, sketcher.valuesAt, sketcher.hashes));
+    return shingles;
   }
 
   /** The last scan's exact normal form: its length in code units and its 64-bit hash as two unsigned lanes. */
@@ -92,6 +128,11 @@ export class ScanKernel {
 }
 
 let kernel: ScanKernel | undefined;
+
+/** Returns this thread's scan kernel when one has been made, else undefined (then no view is of its memory). */
+export function madeScanKernel(): ScanKernel | undefined {
+  return kernel;
+}
 
 /** Returns this thread's scan kernel, made on first use with the scan's class table and its astral classifier. */
 export function scanKernel(classes: () => Uint8Array, astralClass: (codePoint: number) => number): ScanKernel {

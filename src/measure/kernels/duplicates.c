@@ -176,3 +176,106 @@ __attribute__((export_name("scanPrepared"))) i32 scanPrepared(const u16 *t, i32 
   exactLow = h2;
   return count;
 }
+
+// ---- MinHash signatures of word shingles (duplicates/minhash.ts Sketcher, step for step):
+// a polynomial rolling hash per shingle, FILL rounds placing every shingle in one of k bins,
+// then optimal densification of the bins still empty. Values compare as signed integers.
+
+#define ROLL_BASE 0x2545f491u
+#define PROBE_TABLE 32
+// Shingles of the longest text scanned here: a word takes a unit and is followed by another.
+#define MAX_SHINGLES ((1 << 20) / 2 + 1)
+
+static i32 shingles[MAX_SHINGLES];
+
+// A sketcher's settings and tables, laid out by the caller: shingle, k, fill rounds, and the
+// addresses of its length seeds (shingle + 1), probes (k × PROBE_TABLE), values (k), rounds (k).
+typedef struct {
+  i32 shingle;
+  i32 hashes;
+  i32 fillRounds;
+  const i32 *lengthSeed;
+  const i32 *probes;
+  i32 *values;
+  i32 *rounds;
+} Sketcher;
+
+static inline u32 binOf(u32 x, u32 k) { return ((x >> 16) * k) >> 16; }
+
+static u32 probeBin(u32 bin, u32 attempt, u32 k) {
+  u32 x = mix32(((bin + 1) * 0x9e3779b1u) ^ ((attempt + 1) * 0x85ebca77u) ^ 0x27d4eb2fu);
+  return binOf(x, k);
+}
+
+// Writes the signature of the set of `count` hashes at `set` to the sketcher's values.
+static void fill(const Sketcher *s, const i32 *set, i32 count) {
+  u32 k = (u32)s->hashes;
+  i32 *val = s->values;
+  i32 *rnd = s->rounds;
+  for (u32 b = 0; b < k; b++) rnd[b] = -1;
+  i32 empty = (i32)k;
+  for (i32 i = 0; i < count; i++) {
+    i32 x = set[i];
+    u32 b = binOf((u32)x, k);
+    if (rnd[b] < 0) {
+      rnd[b] = 0;
+      val[b] = x;
+      empty--;
+    } else if (x < val[b]) {
+      val[b] = x;
+    }
+  }
+  for (i32 t = 1; empty > 0 && t < s->fillRounds; t++) {
+    u32 ts = (u32)t * 0x9e3779b1u;
+    for (i32 i = 0; i < count; i++) {
+      i32 x = (i32)mix32((u32)set[i] ^ ts);
+      u32 b = binOf((u32)x, k);
+      i32 r = rnd[b];
+      if (r < 0) {
+        rnd[b] = t;
+        val[b] = x;
+        empty--;
+      } else if (r == t && x < val[b]) {
+        val[b] = x;
+      }
+    }
+  }
+  if (empty == 0) return;
+  // Densification: each empty bin copies the first filled bin along its own probe sequence.
+  for (u32 i = 0; i < k; i++) {
+    if (rnd[i] >= 0) continue;
+    i32 from = -1;
+    for (u32 a = 0; a < PROBE_TABLE; a++) {
+      i32 j = s->probes[i * PROBE_TABLE + a];
+      if (rnd[j] >= 0) {
+        from = j;
+        break;
+      }
+    }
+    for (u32 a = PROBE_TABLE; from < 0; a++) {
+      u32 j = probeBin(i, a, k);
+      if (rnd[j] >= 0) from = (i32)j;
+    }
+    val[i] = val[from];
+  }
+}
+
+// Returns the number of shingles of a document given its `count` word hashes (count ≥ 1, at most
+// MAX_SHINGLES), leaving its signature in the sketcher's values.
+__attribute__((export_name("sketch"))) i32 sketch(const i32 *words, i32 count, const Sketcher *s) {
+  i32 n = s->shingle;
+  i32 m = count < n ? count : n;
+  i32 shingleCount = count < n ? 1 : count - n + 1;
+  u32 top = 1;
+  for (i32 j = 1; j < m; j++) top *= ROLL_BASE;
+  u32 h = 0;
+  for (i32 j = 0; j < m; j++) h = h * ROLL_BASE + (u32)words[j];
+  u32 seed = (u32)s->lengthSeed[m];
+  shingles[0] = (i32)mix32(h ^ seed);
+  for (i32 i = 1; i < shingleCount; i++) {
+    h = (h - (u32)words[i - 1] * top) * ROLL_BASE + (u32)words[i + m - 1];
+    shingles[i] = (i32)mix32(h ^ seed);
+  }
+  fill(s, shingles, shingleCount);
+  return shingleCount;
+}
