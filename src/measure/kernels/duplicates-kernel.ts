@@ -11,6 +11,17 @@ interface DuplicatesExports {
   exactLow(): number;
   scanPrepared(text: number, n: number, strip: number, two: number, words: number, words2: number): number;
   sketch(words: number, count: number, sketcher: number): number;
+  firstOverlap(w1: number, w2: number, words: number, m: number, table: number, best: number): number;
+}
+
+/** An evaluation index's table as contamination.ts builds it. */
+export interface EvalTableArrays {
+  lane1: Int32Array;
+  lane2: Int32Array;
+  item: Int32Array;
+  mask: number;
+  filter: Int32Array;
+  filterShift: number;
 }
 
 /** A MinHash sketcher's settings and tables in the kernel's memory (the Sketcher struct of duplicates.c). */
@@ -43,6 +54,7 @@ export class ScanKernel {
   private textUnits = 0;
   private buffer: ArrayBuffer | null = null;
   private bytes: Buffer = Buffer.alloc(0);
+  private readonly evalTables = new WeakMap<EvalTableArrays, number>();
 
   constructor(classes: Uint8Array, astralClass: (codePoint: number) => number) {
     this.kernel = instantiateKernel<DuplicatesExports>(WASM_BASE64, { astralClass });
@@ -111,6 +123,26 @@ export class ScanKernel {
     const shingles = this.kernel.sketch(wordsAt, count, sketcher.at);
     values.set(new Int32Array(this.kernel.memory.buffer, sketcher.valuesAt, sketcher.hashes));
     return shingles;
+  }
+
+  /** Returns where an evaluation index's table is in the kernel's memory, copying it there the first time (which may grow the memory and detach views). */
+  placeEval(table: EvalTableArrays): number {
+    let at = this.evalTables.get(table);
+    if (at === undefined) {
+      const k = this.kernel;
+      const lane1 = k.place(table.lane1);
+      const lane2 = k.place(table.lane2);
+      const item = k.place(table.item);
+      const filter = k.place(table.filter);
+      at = k.place(Int32Array.of(table.mask, table.filterShift, lane1, lane2, item, filter));
+      this.evalTables.set(table, at);
+    }
+    return at;
+  }
+
+  /** The first item of the table placed at `table` holding an m-word window of the words at w1At, w2At (two lanes, in this memory), or `best` when lower (-1: none). */
+  firstOverlap(w1At: number, w2At: number, words: number, m: number, table: number, best: number): number {
+    return this.kernel.firstOverlap(w1At, w2At, words, m, table, best);
   }
 
   /** The last scan's exact normal form: its length in code units and its 64-bit hash as two unsigned lanes. */

@@ -279,3 +279,63 @@ __attribute__((export_name("sketch"))) i32 sketch(const i32 *words, i32 count, c
   fill(s, shingles, shingleCount);
   return shingleCount;
 }
+
+// ---- Evaluation-set contamination (duplicates/contamination.ts findContamination, step for
+// step): every window of m words is hashed in two lanes as it slides; lane 1 goes through the
+// index's bitmap prefilter first, lane 2 is brought up to date only for the windows that pass.
+
+#define GRAM_BASE_1 0x2545f491u
+#define GRAM_BASE_2 0x5851f42du
+
+// An index of n-grams, laid out by the caller: its table (two key lanes and the first item
+// holding each gram, open addressing from the low bits of lane 1) and its prefilter bitmap.
+typedef struct {
+  u32 mask;
+  u32 filterShift;
+  const u32 *lane1;
+  const u32 *lane2;
+  const i32 *item;
+  const u32 *filter;
+} EvalTable;
+
+static inline u32 topPower(u32 base, i32 m) {
+  u32 top = 1;
+  for (i32 j = 1; j < m; j++) top *= base;
+  return top;
+}
+
+static inline u32 windowHash(const u32 *w, i32 from, i32 m, u32 base) {
+  u32 h = 0;
+  for (i32 j = from; j < from + m; j++) h = h * base + w[j];
+  return h;
+}
+
+// The first item (lowest index) holding one of the m-word windows of the `words` word hashes in
+// lanes w1, w2, or `best` when that is lower (-1: none yet); stops early at item 0.
+__attribute__((export_name("firstOverlap"))) i32 firstOverlap(const u32 *w1, const u32 *w2, i32 words, i32 m, const EvalTable *t, i32 best) {
+  if (words < m) return best;
+  u32 top1 = topPower(GRAM_BASE_1, m);
+  u32 top2 = topPower(GRAM_BASE_2, m);
+  u32 h1 = windowHash(w1, 0, m, GRAM_BASE_1);
+  u32 h2 = 0;
+  i32 h2at = -2; // the window h2 belongs to
+  for (i32 i = 0; i + m <= words; i++) {
+    if (i > 0) h1 = (h1 - w1[i - 1] * top1) * GRAM_BASE_1 + w1[i + m - 1];
+    u32 a = mix32(h1 ^ (u32)m);
+    u32 bit = a >> t->filterShift;
+    if ((t->filter[bit >> 5] & (1u << (bit & 31))) == 0) continue;
+    h2 = h2at == i - 1 ? (h2 - w2[i - 1] * top2) * GRAM_BASE_2 + w2[i + m - 1] : windowHash(w2, i, m, GRAM_BASE_2);
+    h2at = i;
+    u32 b = mix32b(h2 + (u32)m);
+    for (u32 slot = a & t->mask;; slot = (slot + 1) & t->mask) {
+      i32 it = t->item[slot];
+      if (it < 0) break;
+      if (t->lane1[slot] == a && t->lane2[slot] == b) {
+        if (best < 0 || it < best) best = it;
+        break;
+      }
+    }
+    if (best == 0) break;
+  }
+  return best;
+}
