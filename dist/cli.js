@@ -8143,29 +8143,33 @@ function rollGrams(w1, w2, count3, m, l1, l2) {
     l2[i] = mix32b4(h2 + m);
   }
 }
-var scratch = { buf: wordBuffer(2) };
-function findContamination(index2, text) {
+var scratch = { buf: wordBuffer(2), scanner: null };
+function findContamination(index2, text, kernel5 = true) {
   const prepared = prepareText(text);
+  let done = sharedWords(prepared);
+  if (done === null && kernel5 && prepared.length <= MAX_SCAN_UNITS) {
+    (scratch.scanner ??= new DocumentScanner(2)).scan(prepared, false);
+    done = sharedWords(prepared);
+  }
+  const made = kernel5 ? madeScanKernel() : void 0;
+  if (done !== null && made !== void 0 && made.holds(done.lane1)) {
+    const w1At = done.lane1.byteOffset;
+    const w2At = done.lane2.byteOffset;
+    const table3 = made.placeEval(index2.table);
+    let found = -1;
+    for (const m of index2.lengths) {
+      found = made.firstOverlap(w1At, w2At, done.count, m, table3, found);
+      if (found === 0) break;
+    }
+    return found < 0 ? null : { ...index2.sources[found] };
+  }
   let w1;
   let w2;
   let words;
-  const done = sharedWords(prepared);
   if (done !== null) {
     w1 = done.lane1;
     w2 = done.lane2;
     words = done.count;
-    const kernel5 = madeScanKernel();
-    if (kernel5 !== void 0 && kernel5.holds(w1)) {
-      const w1At = w1.byteOffset;
-      const w2At = w2.byteOffset;
-      const table3 = kernel5.placeEval(index2.table);
-      let found = -1;
-      for (const m of index2.lengths) {
-        found = kernel5.firstOverlap(w1At, w2At, words, m, table3, found);
-        if (found === 0) break;
-      }
-      return found < 0 ? null : { ...index2.sources[found] };
-    }
   } else {
     const buf = scratch.buf;
     words = hashWords(prepared, buf);

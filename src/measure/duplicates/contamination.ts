@@ -11,14 +11,14 @@
 // ordinary text, so the index counts them in `shortItems` for the report to show.) An item with
 // no words at all cannot overlap anything and is counted in `emptyItems`.
 //
-// When the duplicate kernel's scan has just left the document's two word lanes in its memory (a
-// full check), the windows are searched there (kernels/duplicates.c, step for step as below,
+// The document's words are hashed in the duplicate kernel's scan (the duplicate index's, in a
+// full check, or one of this module's own), and the windows are searched there (kernels/duplicates.c, step for step as below,
 // over a copy of the index's table): in a CPU profile of the full check of the 40 MB bench
 // corpus, 73 ms against 127 ms for findContamination here in the run before (same report).
 import { createHash } from 'node:crypto';
 import * as hash from './hash.js';
-import { hashWords, prepareText, sharedWords, wordBuffer } from './scan.js';
-import { madeScanKernel } from '../kernels/duplicates-kernel.js';
+import { DocumentScanner, hashWords, prepareText, sharedWords, wordBuffer } from './scan.js';
+import { MAX_SCAN_UNITS, madeScanKernel } from '../kernels/duplicates-kernel.js';
 
 // Module-local copies (see scan.ts: some loaders make imported bindings getters).
 const mix32 = hash.mix32;
@@ -195,33 +195,41 @@ function rollGrams(w1: Int32Array, w2: Int32Array, count: number, m: number, l1:
   }
 }
 
-const scratch = { buf: wordBuffer(2) };
+const scratch = { buf: wordBuffer(2), scanner: null as DocumentScanner | null };
 
-/** Returns the file and line of the first evaluation item (in the index's order) that `text` overlaps by an n-word span or a whole short item, or null. */
-export function findContamination(index: EvalIndex, text: string): { file: string; line: number } | null {
+/**
+ * Returns the file and line of the first evaluation item (in the index's order) that `text` overlaps by an n-word span or a whole short item, or null.
+ * `kernel` false searches in TypeScript only (the tests compare the two).
+ */
+export function findContamination(index: EvalIndex, text: string, kernel = true): { file: string; line: number } | null {
   const prepared = prepareText(text);
-  // In a full check the duplicate index has just scanned this text with two lanes (see DocumentScanner).
+  // In a full check the duplicate index has just scanned this text with two lanes (see
+  // DocumentScanner); without one (contamination without duplicates), a scanner of its own does.
+  let done = sharedWords(prepared);
+  if (done === null && kernel && prepared.length <= MAX_SCAN_UNITS) {
+    (scratch.scanner ??= new DocumentScanner(2)).scan(prepared, false);
+    done = sharedWords(prepared);
+  }
+  // Words in the duplicate kernel's memory are searched there (kernels/duplicates.c, step for step as below).
+  const made = kernel ? madeScanKernel() : undefined;
+  if (done !== null && made !== undefined && made.holds(done.lane1)) {
+    const w1At = done.lane1.byteOffset; // before placing the table, which may grow the memory and detach the views
+    const w2At = done.lane2.byteOffset;
+    const table = made.placeEval(index.table);
+    let found = -1;
+    for (const m of index.lengths) {
+      found = made.firstOverlap(w1At, w2At, done.count, m, table, found);
+      if (found === 0) break;
+    }
+    return found < 0 ? null : { ...index.sources[found]! };
+  }
   let w1: Int32Array;
   let w2: Int32Array;
   let words: number;
-  const done = sharedWords(prepared);
   if (done !== null) {
     w1 = done.lane1;
     w2 = done.lane2;
     words = done.count;
-    // Words in the duplicate kernel's memory are searched there (kernels/duplicates.c, step for step as below).
-    const kernel = madeScanKernel();
-    if (kernel !== undefined && kernel.holds(w1)) {
-      const w1At = w1.byteOffset; // before placing the table, which may grow the memory and detach the views
-      const w2At = w2.byteOffset;
-      const table = kernel.placeEval(index.table);
-      let found = -1;
-      for (const m of index.lengths) {
-        found = kernel.firstOverlap(w1At, w2At, words, m, table, found);
-        if (found === 0) break;
-      }
-      return found < 0 ? null : { ...index.sources[found]! };
-    }
   } else {
     const buf = scratch.buf;
     words = hashWords(prepared, buf);
