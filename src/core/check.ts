@@ -32,9 +32,12 @@ const CACHE_LOOKUPS_AT_ONCE = 16;
 
 /**
  * Compressed bytes of unmeasured shards that justify one more worker thread by default: about 8 MB
- * of text, over a second of measuring, against a worker's start (about 0.3 s, overlapped with the
- * main thread's own loading) and its cold token cache. On the 9 MB bench corpus this gives 2 threads,
- * which the benchmark measured at 1.5× one; a demo-sized corpus stays on one thread.
+ * of text. Chosen when that was over a second of measuring, against a worker's start (about 0.3 s,
+ * overlapped with the main thread's own loading) and its cold token cache; since the measure
+ * stage's WebAssembly kernels it is about half a second, and a thread's start measured 0.5 s of CPU
+ * (docs/benchmark.md, fifth session), so on a shared 2-core machine two threads on the 9 MB bench
+ * corpus gave 0.92-1.22x one. Left as it is: on a machine whose cores do not slow each other down
+ * the second thread still pays, and a demo-sized corpus stays on one thread.
  */
 const WORK_PER_WORKER_BYTES = 2 * 1024 * 1024;
 
