@@ -73,6 +73,18 @@ __attribute__((export_name("scanPrepared"))) i32 scanPrepared(const u16 *t, i32 
   u32 h1 = EXACT_BASIS_1, h2 = EXACT_BASIS_2;
   u32 emitted = 0;
   i32 space = 0; // whitespace seen since the last emitted unit
+// One unit into both lanes of the exact hash, and into both lanes of the word's hash.
+#define EXACT_UNIT(unit) (h1 = (h1 ^ (unit)) * EXACT_PRIME_1, h2 = (h2 ^ (unit)) * EXACT_PRIME_2)
+#define WORD_UNIT(unit) (wh = (wh ^ (unit)) * WORD_PRIME_1, wh2 = (wh2 ^ (unit)) * WORD_PRIME_2)
+// One space stands for the whole whitespace run before a unit that is kept, never at the start.
+#define PENDING_SPACE()    \
+  if (space) {             \
+    if (emitted > 0) {     \
+      EXACT_UNIT(0x20u);   \
+      emitted++;           \
+    }                      \
+    space = 0;             \
+  }
   for (i32 i = 0; i < n; i++) {
     u32 c = t[i];
     u32 cls = C[c];
@@ -94,23 +106,12 @@ __attribute__((export_name("scanPrepared"))) i32 scanPrepared(const u16 *t, i32 
         wh2 = WORD_BASIS_2;
         wlen = 0;
       }
-      if (space) {
-        if (emitted > 0) {
-          h1 = (h1 ^ 0x20) * EXACT_PRIME_1;
-          h2 = (h2 ^ 0x20) * EXACT_PRIME_2;
-          emitted++;
-        }
-        space = 0;
-      }
-      wh = (wh ^ c) * WORD_PRIME_1;
-      wh2 = (wh2 ^ c) * WORD_PRIME_2;
-      h1 = (h1 ^ c) * EXACT_PRIME_1;
-      h2 = (h2 ^ c) * EXACT_PRIME_2;
+      PENDING_SPACE();
+      WORD_UNIT(c);
+      EXACT_UNIT(c);
       if (lo >= 0) {
-        wh = (wh ^ (u32)lo) * WORD_PRIME_1;
-        wh2 = (wh2 ^ (u32)lo) * WORD_PRIME_2;
-        h1 = (h1 ^ (u32)lo) * EXACT_PRIME_1;
-        h2 = (h2 ^ (u32)lo) * EXACT_PRIME_2;
+        WORD_UNIT((u32)lo);
+        EXACT_UNIT((u32)lo);
         wlen += 2;
         emitted += 2;
         continue;
@@ -120,10 +121,8 @@ __attribute__((export_name("scanPrepared"))) i32 scanPrepared(const u16 *t, i32 
       while (i + 1 < n) {
         u32 d = t[i + 1];
         if (C[d] != WORD) break;
-        wh = (wh ^ d) * WORD_PRIME_1;
-        wh2 = (wh2 ^ d) * WORD_PRIME_2;
-        h1 = (h1 ^ d) * EXACT_PRIME_1;
-        h2 = (h2 ^ d) * EXACT_PRIME_2;
+        WORD_UNIT(d);
+        EXACT_UNIT(d);
         i++;
       }
       wlen += (u32)(i - from + 1);
@@ -140,21 +139,11 @@ __attribute__((export_name("scanPrepared"))) i32 scanPrepared(const u16 *t, i32 
       continue;
     }
     if (strip && cls == PUNCT) continue;
-    if (space) {
-      // One space stands for the whole whitespace run, never at the start.
-      if (emitted > 0) {
-        h1 = (h1 ^ 0x20) * EXACT_PRIME_1;
-        h2 = (h2 ^ 0x20) * EXACT_PRIME_2;
-        emitted++;
-      }
-      space = 0;
-    }
-    h1 = (h1 ^ c) * EXACT_PRIME_1;
-    h2 = (h2 ^ c) * EXACT_PRIME_2;
+    PENDING_SPACE();
+    EXACT_UNIT(c);
     emitted++;
     if (lo >= 0) {
-      h1 = (h1 ^ (u32)lo) * EXACT_PRIME_1;
-      h2 = (h2 ^ (u32)lo) * EXACT_PRIME_2;
+      EXACT_UNIT((u32)lo);
       emitted++;
     }
   }
