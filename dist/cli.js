@@ -6521,7 +6521,8 @@ var ScanKernel = class {
   }
   /**
    * Scans `text` (prepared, at most MAX_SCAN_UNITS long) into the word buffers and returns its word
-   * count; exact() then gives its exact hash. The views in `into` are valid until the next scan.
+   * count; exactLength(), exactHigh() and exactLow() then give its exact hash. The views in `into`
+   * are made again here when the memory has grown (see views()).
    */
   scan(text, strip, into) {
     const n = text.length;

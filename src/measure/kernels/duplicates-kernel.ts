@@ -1,6 +1,8 @@
-// The duplicate scan's WebAssembly kernel (duplicates.c): one instance per thread, made on
-// first use. Each scanner reserves its own word buffers in the kernel's memory; the text being
-// scanned is copied into one buffer they all use.
+// The duplicate index's WebAssembly kernel (duplicates.c): the scan of a prepared document, the
+// MinHash sketch of its words and the contamination search over them. One instance per thread,
+// made on first use. Each scanner reserves its own word buffers in the kernel's memory, each
+// sketcher its tables, each evaluation index a copy of its table; the text being scanned is
+// copied into one buffer they all use.
 import { instantiateKernel, type KernelMemory } from './instance.js';
 import { WASM_BASE64 } from './duplicates.generated.js';
 
@@ -68,7 +70,8 @@ export class ScanKernel {
 
   /**
    * Scans `text` (prepared, at most MAX_SCAN_UNITS long) into the word buffers and returns its word
-   * count; exact() then gives its exact hash. The views in `into` are valid until the next scan.
+   * count; exactLength(), exactHigh() and exactLow() then give its exact hash. The views in `into`
+   * are made again here when the memory has grown (see views()).
    */
   scan(text: string, strip: boolean, into: KernelWords): number {
     const n = text.length;
