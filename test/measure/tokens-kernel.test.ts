@@ -116,13 +116,44 @@ describe('token counting in the kernel', () => {
     expect(counter.count(first).tokens).toBe(encoded(first));
   });
 
-  it(`merges pieces longer than the kernel merges (${MAX_MERGE_UNITS} units) in TypeScript, exactly`, () => {
+  it(`merges pieces just inside and past the kernel's limit (${MAX_MERGE_UNITS} units), and long ones with a heap, exactly as js-tiktoken does`, () => {
     const counter = counterWith();
-    // One piece each, just past the limit and just inside it.
-    for (const text of ['abcdefghij'.repeat(410), ` ${'xyz'.repeat(1366)}`, 'abcdefghij'.repeat(409)]) {
-      expect(counter.count(text).tokens).toBe(encoded(text));
-    }
+    const letters = (n: number, alphabet: string, seed: number): string => {
+      const next = generator(seed);
+      let s = '';
+      for (let i = 0; i < n; i++) s += alphabet[Math.floor(next() * alphabet.length)];
+      return s;
+    };
+    // One piece each: runs of lowercase letters (a DNA-like alphabet merges deeply), of Devanagari
+    // letters and marks, and of one letter; around the kernel's limit, around bpe.ts's
+    // HEAP_MERGE_BYTES (512), and far past both.
+    const pieces = [
+      letters(MAX_MERGE_UNITS - 1, 'acgt', 1),
+      letters(MAX_MERGE_UNITS + 1, 'acgt', 2),
+      letters(511, 'acgt', 3),
+      letters(512, 'acgt', 4),
+      letters(513, 'qwertyuiopasdfghjklzxcvbnm', 5),
+      letters(2500, 'acgt', 6),
+      ` ${letters(2500, 'abcdefghij', 7)}`,
+      letters(800, 'कमलनयनअ', 8),
+      'a'.repeat(3000),
+    ];
+    for (const text of pieces) expect(counter.count(text).tokens).toBe(encoded(text));
   });
+
+  it('counts a piece of 400,000 letters (the scan of every pair would take hours), the same on a second call and with a word after it', () => {
+    const counter = counterWith();
+    // js-tiktoken's own merges scan every pair too, so it cannot be the reference at this length;
+    // the heap's exactness is checked against it above. Here: a count at all, within bounds, the
+    // same again (the piece is too long to be cached), and adding up with a word after it.
+    const text = 'acgt'.repeat(100_000);
+    const tokens = counter.count(text).tokens;
+    expect(tokens).toBeGreaterThan(0);
+    expect(tokens).toBeLessThanOrEqual(text.length);
+    expect(counter.count(text).tokens).toBe(tokens);
+    expect(counter.count(`${text} end`).tokens).toBe(tokens + encoded(' end'));
+  });
+
 
 
   it('measures words as counting each word alone does (measure.ts), also words holding characters outside the BMP', () => {

@@ -28,8 +28,8 @@ export type KernelPattern = (typeof KERNEL_PATTERN)[keyof typeof KERNEL_PATTERN]
  * back, so this bounds them at about 5 MB a thread.
  */
 export const MAX_KERNEL_UNITS = 1 << 18;
-/** Longest piece the kernel merges, in UTF-16 units (MAX_MERGE_UNITS in tokens.c); the caller merges longer ones. */
-export const MAX_MERGE_UNITS = 4096;
+/** Longest piece the kernel merges, in UTF-16 units (MAX_MERGE_UNITS in tokens.c): at most 510 bytes, under bpe.ts's HEAP_MERGE_BYTES, so that bpe.ts merges every longer piece with its heap. */
+export const MAX_MERGE_UNITS = 170;
 /** Units of a key its cache holds (KEY_UNITS in tokens.c). */
 const KEY_UNITS = 16;
 

@@ -349,8 +349,9 @@ __attribute__((export_name("wordTokens"))) double wordTokens(const u16 *text, i3
 #define RANK_HEADER_WORDS 8
 #define NO_RANK __builtin_inf()
 
-// Longest piece merged here, in UTF-16 units; the caller merges longer ones.
-#define MAX_MERGE_UNITS 4096
+// Longest piece merged here, in UTF-16 units (at most 510 bytes): the merges scan every pair
+// before each merge, O(n²) in the bytes, and the caller merges longer pieces with a heap.
+#define MAX_MERGE_UNITS 170
 
 static unsigned char mergeBytes[MAX_MERGE_UNITS * 3];
 static i32 mergeStarts[MAX_MERGE_UNITS * 3 + 1];
