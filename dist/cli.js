@@ -16971,13 +16971,15 @@ function put(out, count3, start, end) {
 }
 var SEGMENTER_PIECE_UNITS = 8192;
 function isSafeCut(text, p) {
-  const before = text.charCodeAt(p - 1);
-  if (before !== 32 && before !== 10 && before !== 12290) return false;
   const unit = text.charCodeAt(p);
   if (unit >= 55296 && unit <= 57343) return false;
-  if (unit === 32 || unit === 10 || unit === 13 || unit === 9 || unit === 11 || unit === 12 || unit === 133 || unit === 160) return false;
-  if ((classTable2()[unit] & CLASS_MASK) === IGNORABLE) return false;
-  return !/\s/.test(text[p]);
+  if (/\s/.test(text[p])) return false;
+  const cls = classTable2()[unit] & CLASS_MASK;
+  if (cls === IGNORABLE) return false;
+  const before = text.charCodeAt(p - 1);
+  if (before === 32 || before === 10 || before === 12290) return true;
+  const punctuation2 = before === 12289 || before === 65292 || before === 65307 || before === 65281 || before === 65311;
+  return punctuation2 && cls !== ALETTER && cls !== HEBREW_LETTER && cls !== NUMERIC && cls !== EXTEND_NUM_LET;
 }
 function segmenterWords(text, onWord, pieceUnits = SEGMENTER_PIECE_UNITS) {
   const n = text.length;

