@@ -498,6 +498,21 @@ console.log(
   );
 }
 
+// ---- the goals the scale work set (README, Speed), as this run measured them ----
+{
+  const fullRate = corpusMb / runs.full.seconds;
+  const ratio = fullRate / floorRate;
+  const twoOverOne = runs.full.seconds / runs.full2.seconds;
+  const ceiling = (ALL * runs.full.seconds) / pairRun.seconds;
+  const verdict = (ok) => (ok ? 'met' : 'not met');
+  console.log('');
+  console.log(
+    `Goals in this run: full check on one thread ${fullRate.toFixed(1)} MB/s (aim ≥ 20: ${verdict(fullRate >= 20)}); ` +
+      `${ratio.toFixed(3)}× the floor's rate (aim ≥ 0.2, within 5× its time: ${verdict(ratio >= 0.2)}; by CPU time ${inRun.fullOverFloor.toFixed(1)}×: ${verdict(inRun.fullOverFloor <= 5)}); ` +
+      `${ALL} workers ${twoOverOne.toFixed(2)}× one (aim for two ≥ 1.8: ${ALL === 2 ? verdict(twoOverOne >= 1.8) : 'not measured, this run used more'}; this machine's limit ${ceiling.toFixed(2)}×).`,
+  );
+}
+
 // ---- other figures ----
 const fullReport = runs.full.report;
 const dup = fullReport.duplicates;
