@@ -18228,68 +18228,59 @@ function scanMergeCount(b, n, ranks) {
 }
 var nextPart = new Int32Array(0);
 var prevPart = new Int32Array(0);
-var heapRank = new Float64Array(0);
-var heapLeft = new Int32Array(0);
-var heapMid = new Int32Array(0);
-var heapEnd = new Int32Array(0);
+var pairRankOf = new Float64Array(0);
+var pairLeft = new Int32Array(0);
+var pairMid = new Int32Array(0);
+var pairEnd = new Int32Array(0);
+var heap = new Int32Array(0);
 function heapMergeCount(b, n, ranks) {
   if (nextPart.length < n + 1) {
     nextPart = new Int32Array(n + 1);
     prevPart = new Int32Array(n + 1);
-    heapRank = new Float64Array(3 * n);
-    heapLeft = new Int32Array(3 * n);
-    heapMid = new Int32Array(3 * n);
-    heapEnd = new Int32Array(3 * n);
+    pairRankOf = new Float64Array(3 * n);
+    pairLeft = new Int32Array(3 * n);
+    pairMid = new Int32Array(3 * n);
+    pairEnd = new Int32Array(3 * n);
+    heap = new Int32Array(3 * n);
   }
   const next = nextPart;
   const prev = prevPart;
-  const rank2 = heapRank;
-  const left = heapLeft;
-  const mid = heapMid;
-  const endOf = heapEnd;
+  const rank2 = pairRankOf;
+  const left = pairLeft;
+  const h = heap;
+  let pairs = 0;
   let size = 0;
   const before = (x, y) => rank2[x] < rank2[y] || rank2[x] === rank2[y] && left[x] < left[y];
-  const swap = (x, y) => {
-    const r = rank2[x];
-    rank2[x] = rank2[y];
-    rank2[y] = r;
-    const l = left[x];
-    left[x] = left[y];
-    left[y] = l;
-    const m = mid[x];
-    mid[x] = mid[y];
-    mid[y] = m;
-    const e = endOf[x];
-    endOf[x] = endOf[y];
-    endOf[y] = e;
-  };
   const push = (r, i, j, k) => {
     if (r === NO_RANK) return;
+    const e = pairs++;
+    rank2[e] = r;
+    left[e] = i;
+    pairMid[e] = j;
+    pairEnd[e] = k;
     let at = size++;
-    rank2[at] = r;
-    left[at] = i;
-    mid[at] = j;
-    endOf[at] = k;
     while (at > 0) {
       const up = at - 1 >> 1;
-      if (!before(at, up)) break;
-      swap(at, up);
+      if (!before(e, h[up])) break;
+      h[at] = h[up];
       at = up;
     }
+    h[at] = e;
   };
   const pop = () => {
-    size--;
-    if (size === 0) return;
-    swap(0, size);
+    const top = h[0];
+    const last = h[--size];
     let at = 0;
     for (; ; ) {
       const l = 2 * at + 1;
       if (l >= size) break;
-      const c = l + 1 < size && before(l + 1, l) ? l + 1 : l;
-      if (!before(c, at)) break;
-      swap(c, at);
+      const c = l + 1 < size && before(h[l + 1], h[l]) ? l + 1 : l;
+      if (!before(h[c], last)) break;
+      h[at] = h[c];
       at = c;
     }
+    if (size > 0) h[at] = last;
+    return top;
   };
   for (let i = 0; i < n; i++) {
     next[i] = i + 1;
@@ -18298,11 +18289,11 @@ function heapMergeCount(b, n, ranks) {
   for (let i = 0; i + 1 < n; i++) push(ranks.pairs[b[i] << 8 | b[i + 1]], i, i + 1, i + 2);
   let parts = n;
   while (size > 0) {
-    const i = left[0];
-    const j = mid[0];
-    const k = endOf[0];
-    pop();
-    if (prev[i] === -2 || next[i] !== j || (j < n ? next[j] : n) !== k) continue;
+    const e = pop();
+    const i = left[e];
+    const j = pairMid[e];
+    const k = pairEnd[e];
+    if (prev[i] === -2 || next[i] !== j || next[j] !== k) continue;
     next[i] = k;
     if (k < n) prev[k] = i;
     prev[j] = -2;

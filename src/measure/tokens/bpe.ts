@@ -122,79 +122,73 @@ function scanMergeCount(b: Uint8Array, n: number, ranks: RankTable): number {
 }
 
 // The heap's arrays, grown for long pieces: per part (by its first byte) the next part's first
-// byte (n past the last) and the previous one's (-1 before the first); per heap entry the pair's
-// rank, its left part, and the right part and end it had when pushed (to tell stale entries).
+// byte (n past the last) and the previous one's (-1 before the first, -2 once merged away); per
+// pair pushed, its rank, its left part, and the right part and end it had when pushed (to tell
+// stale pairs); and the heap itself, of pair numbers.
 let nextPart = new Int32Array(0);
 let prevPart = new Int32Array(0);
-let heapRank = new Float64Array(0);
-let heapLeft = new Int32Array(0);
-let heapMid = new Int32Array(0);
-let heapEnd = new Int32Array(0);
+let pairRankOf = new Float64Array(0);
+let pairLeft = new Int32Array(0);
+let pairMid = new Int32Array(0);
+let pairEnd = new Int32Array(0);
+let heap = new Int32Array(0);
 
 /**
  * The merges of b[0, n) with a binary heap of pairs ordered by rank, then by the left part's
  * first byte (the leftmost on ties, as the scan takes it). A merge joins part i with the next one
- * and pushes the two pairs it changes; an entry whose parts have changed since it was pushed is
+ * and pushes the two pairs it changes; a pair whose parts have changed since it was pushed is
  * skipped when it comes up. Same result as scanMergeCount (test/measure/tokens-kernel.test.ts).
  */
 function heapMergeCount(b: Uint8Array, n: number, ranks: RankTable): number {
   if (nextPart.length < n + 1) {
     nextPart = new Int32Array(n + 1);
     prevPart = new Int32Array(n + 1);
-    heapRank = new Float64Array(3 * n);
-    heapLeft = new Int32Array(3 * n);
-    heapMid = new Int32Array(3 * n);
-    heapEnd = new Int32Array(3 * n);
+    // n − 1 pairs to start with, at most two more per merge, and at most n − 1 merges.
+    pairRankOf = new Float64Array(3 * n);
+    pairLeft = new Int32Array(3 * n);
+    pairMid = new Int32Array(3 * n);
+    pairEnd = new Int32Array(3 * n);
+    heap = new Int32Array(3 * n);
   }
   const next = nextPart;
   const prev = prevPart;
-  const rank = heapRank;
-  const left = heapLeft;
-  const mid = heapMid;
-  const endOf = heapEnd;
+  const rank = pairRankOf;
+  const left = pairLeft;
+  const h = heap;
+  let pairs = 0;
   let size = 0;
+  // Whether pair x comes before pair y: lower rank, or the same rank further left.
   const before = (x: number, y: number): boolean => rank[x]! < rank[y]! || (rank[x] === rank[y] && left[x]! < left[y]!);
-  const swap = (x: number, y: number): void => {
-    const r = rank[x]!;
-    rank[x] = rank[y]!;
-    rank[y] = r;
-    const l = left[x]!;
-    left[x] = left[y]!;
-    left[y] = l;
-    const m = mid[x]!;
-    mid[x] = mid[y]!;
-    mid[y] = m;
-    const e = endOf[x]!;
-    endOf[x] = endOf[y]!;
-    endOf[y] = e;
-  };
   const push = (r: number, i: number, j: number, k: number): void => {
     if (r === NO_RANK) return; // a pair that is no token never merges
+    const e = pairs++;
+    rank[e] = r;
+    left[e] = i;
+    pairMid[e] = j;
+    pairEnd[e] = k;
     let at = size++;
-    rank[at] = r;
-    left[at] = i;
-    mid[at] = j;
-    endOf[at] = k;
     while (at > 0) {
       const up = (at - 1) >> 1;
-      if (!before(at, up)) break;
-      swap(at, up);
+      if (!before(e, h[up]!)) break;
+      h[at] = h[up]!;
       at = up;
     }
+    h[at] = e;
   };
-  const pop = (): void => {
-    size--;
-    if (size === 0) return;
-    swap(0, size);
+  const pop = (): number => {
+    const top = h[0]!;
+    const last = h[--size]!;
     let at = 0;
     for (;;) {
       const l = 2 * at + 1;
       if (l >= size) break;
-      const c = l + 1 < size && before(l + 1, l) ? l + 1 : l;
-      if (!before(c, at)) break;
-      swap(c, at);
+      const c = l + 1 < size && before(h[l + 1]!, h[l]!) ? l + 1 : l;
+      if (!before(h[c]!, last)) break;
+      h[at] = h[c]!;
       at = c;
     }
+    if (size > 0) h[at] = last;
+    return top;
   };
 
   for (let i = 0; i < n; i++) {
@@ -204,12 +198,12 @@ function heapMergeCount(b: Uint8Array, n: number, ranks: RankTable): number {
   for (let i = 0; i + 1 < n; i++) push(ranks.pairs[(b[i]! << 8) | b[i + 1]!]!, i, i + 1, i + 2);
   let parts = n;
   while (size > 0) {
-    const i = left[0]!;
-    const j = mid[0]!;
-    const k = endOf[0]!;
-    pop();
-    // Stale: part i is gone (its prev link is cut), or its right part or that part's end moved.
-    if (prev[i] === -2 || next[i] !== j || (j < n ? next[j] : n) !== k) continue;
+    const e = pop();
+    const i = left[e]!;
+    const j = pairMid[e]!;
+    const k = pairEnd[e]!;
+    // Stale: part i is gone, or its right part or that part's end moved.
+    if (prev[i] === -2 || next[i] !== j || next[j] !== k) continue;
     // Merge part i with part j; j is gone.
     next[i] = k;
     if (k < n) prev[k] = i;
