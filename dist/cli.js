@@ -16978,8 +16978,13 @@ function isSafeCut(text, p) {
   if (cls === IGNORABLE) return false;
   const before = text.charCodeAt(p - 1);
   if (before === 32 || before === 10 || before === 12290) return true;
-  const punctuation2 = before === 12289 || before === 65292 || before === 65307 || before === 65281 || before === 65311;
-  return punctuation2 && cls !== ALETTER && cls !== HEBREW_LETTER && cls !== NUMERIC && cls !== EXTEND_NUM_LET;
+  if (before === 12289 || before === 65292 || before === 65307 || before === 65281 || before === 65311) {
+    return cls !== ALETTER && cls !== HEBREW_LETTER && cls !== NUMERIC && cls !== EXTEND_NUM_LET;
+  }
+  if (before === 46 || before === 44 || before === 59 || before === 33 || before === 63 || before === 58) {
+    return unit >= 12352 && unit <= 12543 || unit >= 13312 && unit <= 19903 || unit >= 19968 && unit <= 40959 || unit >= 63744 && unit <= 64255;
+  }
+  return false;
 }
 function segmenterWords(text, onWord, pieceUnits = SEGMENTER_PIECE_UNITS) {
   const n = text.length;

@@ -455,8 +455,9 @@ export const SEGMENTER_PIECE_UNITS = 8192;
  *   letter, digit or Mid character there; WB3c a ZWJ; WB15/16 a regional indicator); or
  * - one of the ideographic comma and the fullwidth comma, semicolon, exclamation and question
  *   marks (Other or MidNum), when text[p] is no letter, digit or connector, so that WB6/7 and
- *   WB11/12 cannot join across them: the text of a language written without spaces, whose
- *   sentences may run long without a full stop.
+ *   WB11/12 cannot join across them; or their ASCII forms or the colon (MidNum, MidNumLet,
+ *   MidLetter, Other) before a Han ideograph or kana: the text of a language written without
+ *   spaces, whose sentences may run long without a full stop.
  * test/measure/words.test.ts compares cut and whole segmentation on random strings.
  */
 function isSafeCut(text: string, p: number): boolean {
@@ -467,8 +468,17 @@ function isSafeCut(text: string, p: number): boolean {
   if (cls === IGNORABLE) return false;
   const before = text.charCodeAt(p - 1);
   if (before === 0x20 || before === 0x0a || before === 0x3002) return true;
-  const punctuation = before === 0x3001 || before === 0xff0c || before === 0xff1b || before === 0xff01 || before === 0xff1f;
-  return punctuation && cls !== ALETTER && cls !== HEBREW_LETTER && cls !== NUMERIC && cls !== EXTEND_NUM_LET;
+  if (before === 0x3001 || before === 0xff0c || before === 0xff1b || before === 0xff01 || before === 0xff1f) {
+    // 、，；！？
+    return cls !== ALETTER && cls !== HEBREW_LETTER && cls !== NUMERIC && cls !== EXTEND_NUM_LET;
+  }
+  if (before === 0x2e || before === 0x2c || before === 0x3b || before === 0x21 || before === 0x3f || before === 0x3a) {
+    // . , ; ! ? : before a Han ideograph or kana only: ICU counts the letters of Thai, Lao, Khmer
+    // and Myanmar as letters here (WB6/7 join them across . and :), and its table here does not
+    // tell them from Han.
+    return (unit >= 0x3040 && unit <= 0x30ff) || (unit >= 0x3400 && unit <= 0x4dbf) || (unit >= 0x4e00 && unit <= 0x9fff) || (unit >= 0xf900 && unit <= 0xfaff);
+  }
+  return false;
 }
 
 /**
