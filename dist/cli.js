@@ -6484,9 +6484,9 @@ function instantiateKernel(base64, env = {}) {
   const exports = new WebAssembly.Instance(module, { env }).exports;
   const memory = exports.memory;
   let top = exports.__heap_base.value + 15 & ~15;
-  const allocate = (bytes3) => {
+  const allocate = (bytes4) => {
     const at = top;
-    top = top + bytes3 + 15 & ~15;
+    top = top + bytes4 + 15 & ~15;
     const missing = top - memory.buffer.byteLength;
     if (missing > 0) memory.grow(Math.ceil(missing / 65536));
     return at;
@@ -6496,7 +6496,12 @@ function instantiateKernel(base64, env = {}) {
     new Uint8Array(memory.buffer, at, array.byteLength).set(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));
     return at;
   };
-  return Object.assign(/* @__PURE__ */ Object.create(null), exports, { allocate, place });
+  let bytes3 = Buffer.from(memory.buffer);
+  const writeUtf16 = (at, text, units = text.length) => {
+    if (bytes3.buffer !== memory.buffer) bytes3 = Buffer.from(memory.buffer);
+    bytes3.write(text, at, units * 2, "utf16le");
+  };
+  return Object.assign(/* @__PURE__ */ Object.create(null), exports, { allocate, place, writeUtf16 });
 }
 
 // src/measure/kernels/duplicates.generated.ts
@@ -6508,8 +6513,6 @@ var ScanKernel = class {
   kernel;
   textAt = 0;
   textUnits = 0;
-  buffer = null;
-  bytes = Buffer.alloc(0);
   evalTables = /* @__PURE__ */ new WeakMap();
   constructor(classes2, astralClass2) {
     this.kernel = instantiateKernel(WASM_BASE64, { astralClass: astralClass2 });
@@ -6537,12 +6540,8 @@ var ScanKernel = class {
       if (into.at2 >= 0) into.at2 = this.kernel.allocate(into.capacity * 4);
       into.buffer = null;
     }
-    if (this.kernel.memory.buffer !== this.buffer) {
-      this.buffer = this.kernel.memory.buffer;
-      this.bytes = Buffer.from(this.buffer);
-    }
     this.views(into);
-    this.bytes.write(text, this.textAt, n * 2, "utf16le");
+    this.kernel.writeUtf16(this.textAt, text);
     return this.kernel.scanPrepared(this.textAt, n, strip ? 1 : 0, into.at2 >= 0 ? 1 : 0, into.at1, into.at2 >= 0 ? into.at2 : 0);
   }
   /** Returns `into` with views of its buffers in the kernel's memory as it is now (made again when it has grown, which detaches views). */
@@ -10437,14 +10436,12 @@ var SCRATCH_UNITS = MAX_LENGTH * 2 + 2;
 var textAt = 0;
 var cleanedAt = 0;
 var viewsOf;
-var textBytes = Buffer.alloc(0);
 var cleaned = new Uint16Array(0);
 function kernelWithViews() {
   const kernel5 = francKernel();
   const buffer = kernel5.memory.buffer;
   if (buffer !== viewsOf) {
     viewsOf = buffer;
-    textBytes = Buffer.from(buffer, textAt, MAX_LENGTH * 2);
     cleaned = new Uint16Array(buffer, cleanedAt, SCRATCH_UNITS);
   }
   return kernel5;
@@ -10471,7 +10468,7 @@ function placeTables() {
   kernel5.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt);
 }
 function countTrigrams(kernel5, text, end) {
-  textBytes.write(end === text.length ? text : text.slice(0, end), 0, end * 2, "utf16le");
+  kernel5.writeUtf16(textAt, text, end);
   const distinct = kernel5.countTrigrams(textAt, end);
   if (distinct >= 0) {
     const flags = kernel5.sampleFlags();
@@ -16645,7 +16642,6 @@ var WordKernel = class {
   units = 0;
   countsAt;
   buffer = null;
-  bytesView = Buffer.alloc(0);
   /** Word offsets of the last scan with `record` (two per word), and characters per Script id; views valid until the next scan. */
   offsets = new Int32Array(0);
   counts = new Int32Array(0);
@@ -16660,11 +16656,10 @@ var WordKernel = class {
     const buffer = this.kernel.memory.buffer;
     if (buffer !== this.buffer) {
       this.buffer = buffer;
-      this.bytesView = Buffer.from(buffer);
       this.counts = new Int32Array(buffer, this.countsAt, this.scripts);
     }
     if (this.offsets.buffer !== buffer || this.offsets.byteOffset !== this.outAt) this.offsets = new Int32Array(buffer, this.outAt, this.units + 2);
-    this.bytesView.write(text, this.textAt, n * 2, "utf16le");
+    this.kernel.writeUtf16(this.textAt, text);
     return this.kernel.scanWords(this.textAt, n, record ? 1 : 0, this.outAt, this.countsAt, this.scripts);
   }
   /** Where the last scan's word rules stopped (its counts cover the text before it). */
@@ -18066,7 +18061,6 @@ var TokenKernel = class {
   /** Length of the loaded text. */
   n = 0;
   buffer = null;
-  bytes = Buffer.alloc(0);
   rankTables = /* @__PURE__ */ new WeakMap();
   resolver = () => {
     throw new Error("token kernel: no text is being counted");
@@ -18117,12 +18111,11 @@ var TokenKernel = class {
     const buffer = this.kernel.memory.buffer;
     if (buffer !== this.buffer) {
       this.buffer = buffer;
-      this.bytes = Buffer.from(buffer);
       this.ends = new Int32Array(buffer, this.endsAt, this.units);
       this.counts = new Int32Array(buffer, this.countsAt, this.units);
       this.offsets = new Int32Array(buffer, this.offsetsAt, this.units);
     }
-    this.bytes.write(text, this.textAt, n * 2, "utf16le");
+    this.kernel.writeUtf16(this.textAt, text);
     this.n = n;
     this.resolver = resolver;
   }
@@ -18431,8 +18424,10 @@ function createRankCounter(options) {
   let piecesInKernel = -1;
   const countByKernel = (text, pieces) => {
     const kernel5 = tokenKernel(unitClasses);
-    kernelCache ??= kernel5.createCache(options.kernelCacheEntries ?? KERNEL_CACHE_ENTRIES);
-    ranksAt = kernel5.placeRanks(ranks.buffer);
+    if (kernelCache === null) {
+      kernelCache = kernel5.createCache(options.kernelCacheEntries ?? KERNEL_CACHE_ENTRIES);
+      ranksAt = kernel5.placeRanks(ranks.buffer);
+    }
     counting = text;
     piecesInKernel = -1;
     kernel5.load(text, resolve);

@@ -337,7 +337,6 @@ let textAt = 0;
 let cleanedAt = 0;
 /** Views of those buffers, made again when the kernel's memory has grown (which detaches them). */
 let viewsOf: ArrayBuffer | undefined;
-let textBytes: Buffer = Buffer.alloc(0);
 let cleaned: Uint16Array = new Uint16Array(0);
 
 /** Returns the kernel with current views of its per-call buffers. */
@@ -346,7 +345,6 @@ function kernelWithViews(): FrancKernel {
   const buffer = kernel.memory.buffer;
   if (buffer !== viewsOf) {
     viewsOf = buffer;
-    textBytes = Buffer.from(buffer, textAt, MAX_LENGTH * 2);
     cleaned = new Uint16Array(buffer, cleanedAt, SCRATCH_UNITS);
   }
   return kernel;
@@ -389,7 +387,7 @@ function placeTables(): void {
  * 16-bit direct ids each took a few per cent off (medians of 8 alternating rounds).
  */
 function countTrigrams(kernel: FrancKernel, text: string, end: number): number {
-  textBytes.write(end === text.length ? text : text.slice(0, end), 0, end * 2, 'utf16le');
+  kernel.writeUtf16(textAt, text, end);
   const distinct = kernel.countTrigrams(textAt, end);
   if (distinct >= 0) {
     const flags = kernel.sampleFlags();

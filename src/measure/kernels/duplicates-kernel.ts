@@ -54,8 +54,6 @@ export class ScanKernel {
   private readonly kernel: DuplicatesExports & KernelMemory;
   private textAt = 0;
   private textUnits = 0;
-  private buffer: ArrayBuffer | null = null;
-  private bytes: Buffer = Buffer.alloc(0);
   private readonly evalTables = new WeakMap<EvalTableArrays, number>();
 
   constructor(classes: Uint8Array, astralClass: (codePoint: number) => number) {
@@ -86,12 +84,8 @@ export class ScanKernel {
       if (into.at2 >= 0) into.at2 = this.kernel.allocate(into.capacity * 4);
       into.buffer = null;
     }
-    if (this.kernel.memory.buffer !== this.buffer) {
-      this.buffer = this.kernel.memory.buffer;
-      this.bytes = Buffer.from(this.buffer);
-    }
     this.views(into);
-    this.bytes.write(text, this.textAt, n * 2, 'utf16le');
+    this.kernel.writeUtf16(this.textAt, text);
     return this.kernel.scanPrepared(this.textAt, n, strip ? 1 : 0, into.at2 >= 0 ? 1 : 0, into.at1, into.at2 >= 0 ? into.at2 : 0);
   }
 

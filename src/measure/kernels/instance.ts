@@ -14,6 +14,8 @@ export interface KernelMemory {
   allocate(bytes: number): number;
   /** Copies a typed array into newly reserved memory and returns its address. */
   place(array: Uint8Array | Uint16Array | Int16Array | Int32Array): number;
+  /** Writes the first `units` UTF-16 units of a text (all of it by default) at `at`, little-endian as the kernels read them. */
+  writeUtf16(at: number, text: string, units?: number): void;
 }
 
 /** Why the kernels cannot run in this process, or null when they can: Node.js without WebAssembly (started with --jitless, say). */
@@ -43,5 +45,11 @@ export function instantiateKernel<E extends object>(base64: string, env: Record<
     new Uint8Array(memory.buffer, at, array.byteLength).set(new Uint8Array(array.buffer, array.byteOffset, array.byteLength));
     return at;
   };
-  return Object.assign(Object.create(null) as E & KernelMemory, exports, { allocate, place });
+  // A Buffer over the memory for Buffer.write's native UTF-16 copy, made again when the memory has grown.
+  let bytes = Buffer.from(memory.buffer);
+  const writeUtf16 = (at: number, text: string, units = text.length): void => {
+    if (bytes.buffer !== memory.buffer) bytes = Buffer.from(memory.buffer);
+    bytes.write(text, at, units * 2, 'utf16le');
+  };
+  return Object.assign(Object.create(null) as E & KernelMemory, exports, { allocate, place, writeUtf16 });
 }

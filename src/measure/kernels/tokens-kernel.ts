@@ -62,7 +62,6 @@ export class TokenKernel {
   /** Length of the loaded text. */
   private n = 0;
   private buffer: ArrayBuffer | null = null;
-  private bytes: Buffer = Buffer.alloc(0);
   private readonly rankTables = new WeakMap<SharedArrayBuffer, number>();
   private resolver: PieceResolver = () => {
     throw new Error('token kernel: no text is being counted');
@@ -119,12 +118,11 @@ export class TokenKernel {
     const buffer = this.kernel.memory.buffer;
     if (buffer !== this.buffer) {
       this.buffer = buffer;
-      this.bytes = Buffer.from(buffer);
       this.ends = new Int32Array(buffer, this.endsAt, this.units);
       this.counts = new Int32Array(buffer, this.countsAt, this.units);
       this.offsets = new Int32Array(buffer, this.offsetsAt, this.units);
     }
-    this.bytes.write(text, this.textAt, n * 2, 'utf16le');
+    this.kernel.writeUtf16(this.textAt, text);
     this.n = n;
     this.resolver = resolver;
   }

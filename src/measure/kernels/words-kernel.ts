@@ -26,7 +26,6 @@ export class WordKernel {
   private units = 0;
   private readonly countsAt: number;
   private buffer: ArrayBuffer | null = null;
-  private bytesView: Buffer = Buffer.alloc(0);
   /** Word offsets of the last scan with `record` (two per word), and characters per Script id; views valid until the next scan. */
   offsets = new Int32Array(0);
   counts = new Int32Array(0);
@@ -52,11 +51,10 @@ export class WordKernel {
     const buffer = this.kernel.memory.buffer;
     if (buffer !== this.buffer) {
       this.buffer = buffer;
-      this.bytesView = Buffer.from(buffer);
       this.counts = new Int32Array(buffer, this.countsAt, this.scripts);
     }
     if (this.offsets.buffer !== buffer || this.offsets.byteOffset !== this.outAt) this.offsets = new Int32Array(buffer, this.outAt, this.units + 2);
-    this.bytesView.write(text, this.textAt, n * 2, 'utf16le');
+    this.kernel.writeUtf16(this.textAt, text);
     return this.kernel.scanWords(this.textAt, n, record ? 1 : 0, this.outAt, this.countsAt, this.scripts);
   }
 

@@ -215,8 +215,11 @@ export function createRankCounter(options: RankCounterOptions): TokenCounter {
 
   const countByKernel = (text: string, pieces: PieceList | null): number => {
     const kernel = tokenKernel(unitClasses);
-    kernelCache ??= kernel.createCache(options.kernelCacheEntries ?? KERNEL_CACHE_ENTRIES);
-    ranksAt = kernel.placeRanks(ranks.buffer);
+    if (kernelCache === null) {
+      // Both laid out once, before the first load: laying out may grow the kernel's memory.
+      kernelCache = kernel.createCache(options.kernelCacheEntries ?? KERNEL_CACHE_ENTRIES);
+      ranksAt = kernel.placeRanks(ranks.buffer);
+    }
     counting = text;
     piecesInKernel = -1;
     kernel.load(text, resolve);
