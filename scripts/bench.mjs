@@ -484,32 +484,30 @@ console.log(
 );
 
 // ---- scaling ----
-{
-  const rate = (mbs, secs) => mbs / secs;
-  const one = rate(corpusMb, runs.full.seconds);
-  const two = rate(corpusMb, runs.full2.seconds);
-  const split = rate(corpusMb, runs.one2.seconds);
-  const ceiling = rate(ALL * corpusMb, pairRun.seconds);
-  console.log('');
-  console.log(
-    `Scaling: ${ALL} workers ${(two / one).toFixed(2)}× one worker; the corpus as one shard on ${ALL} workers ${(split / one).toFixed(2)}×; ` +
-      `${ALL} independent one-worker runs at once ${(ceiling / one).toFixed(2)}× (the machine's own limit for ${ALL} threads of this work), ` +
-      `so ${ALL} workers reach ${((two / ceiling) * 100).toFixed(0)} % of it.`,
-  );
-}
+// Rates relative to one worker: the pool, the corpus as one shard on the pool, and ALL
+// independent one-worker runs at once (the machine's own limit).
+const scaling = {
+  two: runs.full.seconds / runs.full2.seconds,
+  split: runs.full.seconds / runs.one2.seconds,
+  ceiling: (ALL * runs.full.seconds) / pairRun.seconds,
+};
+console.log('');
+console.log(
+  `Scaling: ${ALL} workers ${scaling.two.toFixed(2)}× one worker; the corpus as one shard on ${ALL} workers ${scaling.split.toFixed(2)}×; ` +
+    `${ALL} independent one-worker runs at once ${scaling.ceiling.toFixed(2)}× (the machine's own limit for ${ALL} threads of this work), ` +
+    `so ${ALL} workers reach ${((scaling.two / scaling.ceiling) * 100).toFixed(0)} % of it.`,
+);
 
 // ---- the goals the scale work set (README, Speed), as this run measured them ----
 {
   const fullRate = corpusMb / runs.full.seconds;
   const ratio = fullRate / floorRate;
-  const twoOverOne = runs.full.seconds / runs.full2.seconds;
-  const ceiling = (ALL * runs.full.seconds) / pairRun.seconds;
   const verdict = (ok) => (ok ? 'met' : 'not met');
   console.log('');
   console.log(
     `Goals in this run: full check on one thread ${fullRate.toFixed(1)} MB/s (aim ≥ 20: ${verdict(fullRate >= 20)}); ` +
       `${ratio.toFixed(3)}× the floor's rate (aim ≥ 0.2, within 5× its time: ${verdict(ratio >= 0.2)}; by CPU time ${inRun.fullOverFloor.toFixed(1)}×: ${verdict(inRun.fullOverFloor <= 5)}); ` +
-      `${ALL} workers ${twoOverOne.toFixed(2)}× one (aim for two ≥ 1.8: ${ALL === 2 ? verdict(twoOverOne >= 1.8) : 'not measured, this run used more'}; this machine's limit ${ceiling.toFixed(2)}×).`,
+      `${ALL} workers ${scaling.two.toFixed(2)}× one (aim for two ≥ 1.8: ${ALL === 2 ? verdict(scaling.two >= 1.8) : 'not measured, this run used more'}; this machine's limit ${scaling.ceiling.toFixed(2)}×).`,
   );
 }
 
