@@ -16965,6 +16965,8 @@ function put(out, count3, start, end) {
   return out;
 }
 var SEGMENTER_PIECE_UNITS = 8192;
+var SEGMENTER_MAX_UNITS = 49152;
+var FORCED_CUT_CONTEXT = 512;
 function isSafeCut(text, p) {
   const unit = text.charCodeAt(p);
   if (unit >= 55296 && unit <= 57343) return false;
@@ -16981,19 +16983,36 @@ function isSafeCut(text, p) {
   }
   return false;
 }
-function segmenterWords(text, onWord, pieceUnits = SEGMENTER_PIECE_UNITS) {
+function forcedCut(text, target) {
+  const n = text.length;
+  for (let at = target; at + FORCED_CUT_CONTEXT < n; at += FORCED_CUT_CONTEXT) {
+    const from = Math.max(0, at - FORCED_CUT_CONTEXT);
+    const to = Math.min(n, at + 2 * FORCED_CUT_CONTEXT);
+    for (const s of wordSegmenter().segment(text.slice(from, to))) {
+      const b = from + s.index;
+      if (b < at) continue;
+      if (b + FORCED_CUT_CONTEXT > to) break;
+      return b;
+    }
+  }
+  return n;
+}
+function segmenterWords(text, onWord, pieceUnits = SEGMENTER_PIECE_UNITS, maxPieceUnits = SEGMENTER_MAX_UNITS) {
   const n = text.length;
   let from = 0;
   while (from < n) {
     let cut = n;
     if (n - from > pieceUnits) {
-      const last = Math.min(n, from + 5 * pieceUnits);
+      const last = Math.min(n, from + maxPieceUnits);
+      let found = false;
       for (let p = from + pieceUnits; p < last; p++) {
         if (isSafeCut(text, p)) {
           cut = p;
+          found = true;
           break;
         }
       }
+      if (!found && n - from > maxPieceUnits) cut = forcedCut(text, Math.max(from + 1, from + maxPieceUnits - 2 * FORCED_CUT_CONTEXT));
     }
     const piece = from === 0 && cut === n ? text : text.slice(from, cut);
     for (const s of wordSegmenter().segment(piece)) if (s.isWordLike) onWord(from + s.index, from + s.index + s.segment.length);

@@ -446,6 +446,22 @@ export function countWordsWithSegmenter(text: string): number {
 export const SEGMENTER_PIECE_UNITS = 8192;
 
 /**
+ * The longest piece handed to Intl.Segmenter. The slowdown is a cliff at 2^16 units, whatever the
+ * script, once the string has many segments: Chinese from UDHR without punctuation took 183 ms for
+ * 65,000 units and 5.0 s for 65,600; 100,000 units took 4.8 s of Thai without spaces, 9.4 s of
+ * emoji, 12.5 s of kana, 8.4 s of "abc😀" repeated, and 2 ms of one 100,000-letter word (one run
+ * each, Node 20, this machine class). A piece is kept well below the cliff.
+ */
+export const SEGMENTER_MAX_UNITS = 49152;
+
+/**
+ * Context either side of a forced cut that the cut is chosen in (see forcedCut): the word rules
+ * look a few characters around a point, and the dictionary segmentation of Chinese, Japanese and
+ * Thai settles on the same words well within this distance.
+ */
+const FORCED_CUT_CONTEXT = 512;
+
+/**
  * Whether UAX #29 breaks between text[p − 1] and text[p] whatever comes before and after, so that
  * the words of text[0, p) and of text[p, …) segmented apart are those of the whole. text[p] is
  * never white space (WB3d), Extend, Format or ZWJ (WB4 would attach it to the left) or a
@@ -482,25 +498,60 @@ function isSafeCut(text: string, p: number): boolean {
 }
 
 /**
+ * Returns where to cut a text that has no safe cut (isSafeCut) for too long, at or after `target`:
+ * the first boundary that Intl.Segmenter puts at least FORCED_CUT_CONTEXT units inside a window of
+ * the text around it, or the text's length when no window up to the end has one (one long
+ * segment, which the segmenter takes quickly). Unlike a safe cut this relies on the segmentation
+ * at a point not depending on text further away than that context: true of the word rules but for
+ * a run of regional indicators or of Extend and Format characters that long, and of the dictionary
+ * segmentation of Chinese, Japanese and Thai on the texts of the tests (UDHR without punctuation,
+ * kana, emoji). Where it failed, a word at the cut would be counted as two or two as one.
+ */
+function forcedCut(text: string, target: number): number {
+  const n = text.length;
+  for (let at = target; at + FORCED_CUT_CONTEXT < n; at += FORCED_CUT_CONTEXT) {
+    const from = Math.max(0, at - FORCED_CUT_CONTEXT);
+    const to = Math.min(n, at + 2 * FORCED_CUT_CONTEXT);
+    for (const s of wordSegmenter().segment(text.slice(from, to))) {
+      const b = from + s.index;
+      if (b < at) continue;
+      if (b + FORCED_CUT_CONTEXT > to) break;
+      return b;
+    }
+  }
+  return n;
+}
+
+/**
  * Calls `onWord` with the [start, end) offsets of each word-like segment Intl.Segmenter finds in
  * `text`, segmenting a long text in pieces of about `pieceUnits` cut where the word rules always
- * break (the same words as one call; the tests make the pieces tiny to prove it).
+ * break (the same words as one call; the tests make the pieces tiny to prove it). A piece is never
+ * longer than `maxPieceUnits` unless it is one long segment: where a text has no safe cut for that
+ * long, it is cut at a boundary the segmenter finds around the point (forcedCut).
  */
-export function segmenterWords(text: string, onWord: (start: number, end: number) => void, pieceUnits = SEGMENTER_PIECE_UNITS): void {
+export function segmenterWords(
+  text: string,
+  onWord: (start: number, end: number) => void,
+  pieceUnits = SEGMENTER_PIECE_UNITS,
+  maxPieceUnits = SEGMENTER_MAX_UNITS,
+): void {
   const n = text.length;
   let from = 0;
   while (from < n) {
     let cut = n;
     if (n - from > pieceUnits) {
-      // A cut is looked for up to four more pieces on; a text without one there (no space, newline
-      // or ideographic punctuation) is segmented in one go from here.
-      const last = Math.min(n, from + 5 * pieceUnits);
+      const last = Math.min(n, from + maxPieceUnits);
+      let found = false;
       for (let p = from + pieceUnits; p < last; p++) {
         if (isSafeCut(text, p)) {
           cut = p;
+          found = true;
           break;
         }
       }
+      // No safe cut there (no space, newline or ideographic punctuation): cut where the segmenter
+      // breaks, ending the piece within maxPieceUnits when it can.
+      if (!found && n - from > maxPieceUnits) cut = forcedCut(text, Math.max(from + 1, from + maxPieceUnits - 2 * FORCED_CUT_CONTEXT));
     }
     const piece = from === 0 && cut === n ? text : text.slice(from, cut);
     for (const s of wordSegmenter().segment(piece)) if (s.isWordLike) onWord(from + s.index, from + s.index + s.segment.length);

