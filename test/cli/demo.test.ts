@@ -50,6 +50,7 @@ describe('the newsroom demo', () => {
     // And the terminal says so.
     expect(failing.stdout).toMatch(/FAIL contamination/);
     expect(failing.stdout).toContain('data/incoming/english-03.jsonl.gz:782');
+    expect(failing.stdout).toContain('1 training document shares a 13-word sequence with an evaluation item');
   });
 
   it('shows what switching from gpt2 to o200k_base does to Hindi', () => {
