@@ -875,7 +875,7 @@ function judgeRules(policy, corpus, langs, sampled) {
       rules.input.maxBrokenShards,
       "count",
       broken.length > rules.input.maxBrokenShards,
-      broken.length === 0 ? `all ${corpus.shards.length} shards read to the end` : `${broken.length} shard${broken.length === 1 ? "" : "s"} could not be read completely; figures cover only what was read before the break`,
+      broken.length === 0 ? corpus.shards.length === 1 ? "the one shard read to the end" : `all ${corpus.shards.length} shards read to the end` : `${broken.length} shard${broken.length === 1 ? "" : "s"} could not be read completely; figures cover only what was read before the break`,
       broken
     )
   );
@@ -19724,6 +19724,9 @@ function percent(x) {
 function count2(n) {
   return n === null || n === void 0 ? "\u2013" : n.toLocaleString("en-US");
 }
+function counted(n, noun, plural = `${noun}s`) {
+  return `${count2(n)} ${n === 1 ? noun : plural}`;
+}
 function fixed(x, digits2 = 2) {
   return x === null || x === void 0 ? "\u2013" : x.toFixed(digits2);
 }
@@ -19769,7 +19772,7 @@ function renderMarkdown(report, opts = {}) {
   out.push("");
   const est = report.totals.estimated ? "\u2248" : "";
   out.push(
-    `${count2(report.totals.docs)} documents in ${count2(report.input.shards)} shards, ${est}${bytes2(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${escapeMarkdown(report.tokenizer?.main ?? "")})` : "") + `; policy ${codePath(report.policy.file)}.`
+    `${counted(report.totals.docs, "document")} in ${counted(report.input.shards, "shard")}, ${est}${bytes2(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${escapeMarkdown(report.tokenizer?.main ?? "")})` : "") + `; policy ${codePath(report.policy.file)}.`
   );
   out.push("");
   if (report.sampling) {
@@ -19872,7 +19875,7 @@ function renderMarkdown(report, opts = {}) {
     out.push("");
   }
   const i = report.input;
-  out.push(`<details><summary>Input: ${count2(i.lines)} lines = ${count2(i.docLines)} in documents + ${count2(i.empty)} empty + ${count2(i.rejected.count)} rejected</summary>`);
+  out.push(`<details><summary>Input: ${counted(i.lines, "line")} = ${count2(i.docLines)} in documents + ${count2(i.empty)} empty + ${count2(i.rejected.count)} rejected</summary>`);
   out.push("");
   const reasons = Object.entries(i.rejected.byReason);
   if (reasons.length) out.push(`Rejected by reason: ${reasons.map(([r, n]) => `${r} ${count2(n)}`).join(", ")}.`, "");
@@ -19906,7 +19909,7 @@ function renderTerminal(report, opts) {
   lines.push(paint[report.verdict](report.headline));
   lines.push(
     dim(
-      `${count2(report.totals.docs)} documents, ${count2(report.input.shards)} shards, ${est}${bytes2(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${report.tokenizer?.main})` : "") + ` \xB7 policy ${report.policy.file}`
+      `${counted(report.totals.docs, "document")}, ${counted(report.input.shards, "shard")}, ${est}${bytes2(report.totals.bytes)} of text` + (report.totals.tokens !== void 0 ? `, ${est}${count2(report.totals.tokens)} tokens (${report.tokenizer?.main})` : "") + ` \xB7 policy ${report.policy.file}`
     )
   );
   if (report.sampling) lines.push(dim(samplingLine(report)));
@@ -19974,10 +19977,10 @@ function renderTerminal(report, opts) {
   lines.push("");
   lines.push(
     dim(
-      `Input: ${count2(i.lines)} lines = ${count2(i.docLines)} in ${count2(i.docs)} documents + ${count2(i.empty)} empty + ${count2(i.rejected.count)} rejected` + (Object.keys(i.rejected.byReason).length ? ` (${Object.entries(i.rejected.byReason).map(([k, n]) => `${k} ${n}`).join(", ")})` : "") + (i.skipped.length ? `; ${i.skipped.length} files skipped` : "") + (i.broken.length ? `; ${i.broken.length} shards broken` : "")
+      `Input: ${counted(i.lines, "line")} = ${count2(i.docLines)} in ${counted(i.docs, "document")} + ${count2(i.empty)} empty + ${count2(i.rejected.count)} rejected` + (Object.keys(i.rejected.byReason).length ? ` (${Object.entries(i.rejected.byReason).map(([k, n]) => `${k} ${n}`).join(", ")})` : "") + (i.skipped.length ? `; ${counted(i.skipped.length, "file")} skipped` : "") + (i.broken.length ? `; ${counted(i.broken.length, "shard")} broken` : "")
     )
   );
-  lines.push(dim(`${fixed(report.timing.megabytesPerSecond, 1)} MB/s, ${report.timing.elapsedMs} ms, ${report.timing.cacheHits} shards from cache`));
+  lines.push(dim(`${fixed(report.timing.megabytesPerSecond, 1)} MB/s, ${report.timing.elapsedMs} ms, ${counted(report.timing.cacheHits, "shard")} from cache`));
   return `${lines.join("\n")}
 `;
 }

@@ -120,7 +120,7 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
     outcome(
       policy, 'input', 'corpus', broken.length, rules.input.maxBrokenShards, 'count', broken.length > rules.input.maxBrokenShards,
       broken.length === 0
-        ? `all ${corpus.shards.length} shards read to the end`
+        ? corpus.shards.length === 1 ? 'the one shard read to the end' : `all ${corpus.shards.length} shards read to the end`
         : `${broken.length} shard${broken.length === 1 ? '' : 's'} could not be read completely; figures cover only what was read before the break`,
       broken,
     ),

@@ -11,6 +11,11 @@ export function count(n: number | null | undefined): string {
   return n === null || n === undefined ? '–' : n.toLocaleString('en-US');
 }
 
+/** Formats a count and a noun, plural unless the count is 1 ("1 shard", "2,046 shards"). */
+export function counted(n: number, noun: string, plural = `${noun}s`): string {
+  return `${count(n)} ${n === 1 ? noun : plural}`;
+}
+
 /** Formats a ratio with a fixed number of decimals. */
 export function fixed(x: number | null | undefined, digits = 2): string {
   return x === null || x === undefined ? '–' : x.toFixed(digits);

@@ -3,7 +3,7 @@
 import type { Report, RuleOutcome } from '../judge/types.js';
 import { bar } from './bars.js';
 import { codePath, escapeMarkdown as esc } from './escape.js';
-import { bytes, count, fixed, inUnit, limitOf, percent, points } from './format.js';
+import { bytes, count, counted, fixed, inUnit, limitOf, percent, points } from './format.js';
 
 export interface MarkdownOptions {
   /** Links file:line locations to this URL prefix (e.g. a blob URL at the PR's head commit). */
@@ -32,7 +32,7 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
   out.push('');
   const est = report.totals.estimated ? '≈' : '';
   out.push(
-    `${count(report.totals.docs)} documents in ${count(report.input.shards)} shards, ${est}${bytes(report.totals.bytes)} of text` +
+    `${counted(report.totals.docs, 'document')} in ${counted(report.input.shards, 'shard')}, ${est}${bytes(report.totals.bytes)} of text` +
       (report.totals.tokens !== undefined ? `, ${est}${count(report.totals.tokens)} tokens (${esc(report.tokenizer?.main ?? '')})` : '') +
       `; policy ${codePath(report.policy.file)}.`,
   );
@@ -151,7 +151,7 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
 
   // Input
   const i = report.input;
-  out.push(`<details><summary>Input: ${count(i.lines)} lines = ${count(i.docLines)} in documents + ${count(i.empty)} empty + ${count(i.rejected.count)} rejected</summary>`);
+  out.push(`<details><summary>Input: ${counted(i.lines, 'line')} = ${count(i.docLines)} in documents + ${count(i.empty)} empty + ${count(i.rejected.count)} rejected</summary>`);
   out.push('');
   const reasons = Object.entries(i.rejected.byReason);
   if (reasons.length) out.push(`Rejected by reason: ${reasons.map(([r, n]) => `${r} ${count(n)}`).join(', ')}.`, '');

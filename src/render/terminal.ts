@@ -2,7 +2,7 @@
 // mix table. Colour only when asked (a TTY without NO_COLOR).
 import type { Report, RuleOutcome } from '../judge/types.js';
 import { bar } from './bars.js';
-import { bytes, count, fixed, inUnit, limitOf, percent, points, where } from './format.js';
+import { bytes, count, counted, fixed, inUnit, limitOf, percent, points, where } from './format.js';
 
 export interface TerminalOptions {
   color: boolean;
@@ -25,7 +25,7 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
   lines.push(paint[report.verdict](report.headline));
   lines.push(
     dim(
-      `${count(report.totals.docs)} documents, ${count(report.input.shards)} shards, ${est}${bytes(report.totals.bytes)} of text` +
+      `${counted(report.totals.docs, 'document')}, ${counted(report.input.shards, 'shard')}, ${est}${bytes(report.totals.bytes)} of text` +
         (report.totals.tokens !== undefined ? `, ${est}${count(report.totals.tokens)} tokens (${report.tokenizer?.main})` : '') +
         ` · policy ${report.policy.file}`,
     ),
@@ -104,13 +104,13 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
   lines.push('');
   lines.push(
     dim(
-      `Input: ${count(i.lines)} lines = ${count(i.docLines)} in ${count(i.docs)} documents + ${count(i.empty)} empty + ${count(i.rejected.count)} rejected` +
+      `Input: ${counted(i.lines, 'line')} = ${count(i.docLines)} in ${counted(i.docs, 'document')} + ${count(i.empty)} empty + ${count(i.rejected.count)} rejected` +
         (Object.keys(i.rejected.byReason).length ? ` (${Object.entries(i.rejected.byReason).map(([k, n]) => `${k} ${n}`).join(', ')})` : '') +
-        (i.skipped.length ? `; ${i.skipped.length} files skipped` : '') +
-        (i.broken.length ? `; ${i.broken.length} shards broken` : ''),
+        (i.skipped.length ? `; ${counted(i.skipped.length, 'file')} skipped` : '') +
+        (i.broken.length ? `; ${counted(i.broken.length, 'shard')} broken` : ''),
     ),
   );
-  lines.push(dim(`${fixed(report.timing.megabytesPerSecond, 1)} MB/s, ${report.timing.elapsedMs} ms, ${report.timing.cacheHits} shards from cache`));
+  lines.push(dim(`${fixed(report.timing.megabytesPerSecond, 1)} MB/s, ${report.timing.elapsedMs} ms, ${counted(report.timing.cacheHits, 'shard')} from cache`));
   return `${lines.join('\n')}\n`;
 }
 

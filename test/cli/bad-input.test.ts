@@ -154,3 +154,15 @@ describe('a damaged cache entry', () => {
     expect(second.report!.duplicates).toEqual(first.duplicates);
   });
 });
+
+describe('a corpus of one shard and one line', () => {
+  it('is counted in the singular: 1 document, 1 shard, 1 line', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/a.jsonl': lines(1, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache', '--no-color'], { json: true });
+    expect(r.report?.input.lines).toBe(1);
+    expect(r.stdout).toMatch(/^1 document, 1 shard, /m);
+    expect(r.stdout).toContain('the one shard read to the end');
+    expect(r.stdout).toMatch(/^Input: 1 line = 1 in 1 document \+ 0 empty \+ 0 rejected/m);
+    expect(r.stdout).toContain(', 0 shards from cache');
+  });
+});
