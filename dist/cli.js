@@ -1342,7 +1342,7 @@ function headlineOf(verdict, rules) {
     if (warning.length === 0) return `PASS with warnings: ${unsure}`;
     return `PASS with warnings: ${names(warning)}${unsure ? `; ${unsure}` : ""}`;
   }
-  return `PASS: all ${rules.length} judged checks hold`;
+  return rules.length === 1 ? "PASS: the one judged check holds" : `PASS: all ${rules.length} judged checks hold`;
 }
 
 // src/policy/load.ts

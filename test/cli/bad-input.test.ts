@@ -165,4 +165,13 @@ describe('a corpus of one shard and one line', () => {
     expect(r.stdout).toMatch(/^Input: 1 line = 1 in 1 document \+ 0 empty \+ 0 rejected/m);
     expect(r.stdout).toContain(', 0 shards from cache');
   });
+
+  it('with no rules but input, says that its one check holds', () => {
+    const policy = 'version: 1\nroot: .\ncorpus:\n  include: ["data/**/*"]\nlanguages:\n  eng:\n';
+    const root = corpus({ 'p.yaml': policy, 'data/a.jsonl': lines(1, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache', '--no-color'], { json: true });
+    expect(r.status).toBe(0);
+    expect(r.report?.rules.map((o) => o.rule)).toEqual(['input']);
+    expect(r.stdout).toContain('PASS: the one judged check holds');
+  });
 });
