@@ -6158,6 +6158,9 @@ function recordParser(textField, declaredLanguageField) {
     try {
       record = JSON.parse(line);
     } catch (error) {
+      if (line.charCodeAt(0) === 65279) {
+        return { reason: "invalid-json", detail: "the line starts with a byte order mark (U+FEFF), as where files were joined end to end; only a shard's first line may have one" };
+      }
       const message = error instanceof Error ? error.message : String(error);
       return { reason: "invalid-json", detail: message.length > MAX_PARSE_MESSAGE_CHARS ? `${message.slice(0, MAX_PARSE_MESSAGE_CHARS)}\u2026` : message };
     }

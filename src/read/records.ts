@@ -43,6 +43,11 @@ export function recordParser(textField: string, declaredLanguageField?: string):
     try {
       record = JSON.parse(line);
     } catch (error) {
+      // A BOM inside a shard is where files were joined end to end; JSON.parse's own message
+      // would quote the invisible character and leave the reader guessing.
+      if (line.charCodeAt(0) === 0xfeff) {
+        return { reason: 'invalid-json', detail: 'the line starts with a byte order mark (U+FEFF), as where files were joined end to end; only a shard\'s first line may have one' };
+      }
       const message = error instanceof Error ? error.message : String(error);
       return { reason: 'invalid-json', detail: message.length > MAX_PARSE_MESSAGE_CHARS ? `${message.slice(0, MAX_PARSE_MESSAGE_CHARS)}…` : message };
     }

@@ -128,6 +128,7 @@ describe('readShard on JSONL', () => {
     expect(account.empty).toBe(1);
     // A BOM inside the shard is U+FEFF before the JSON: JSON.parse does not accept it as whitespace.
     expect(account.rejected.byReason).toEqual({ 'invalid-json': 1 });
+    expect(account.rejected.samples[0]).toMatchObject({ line: 3, detail: expect.stringContaining('byte order mark (U+FEFF)') });
     expect(docs.map((d) => d.text)).toEqual(['one', 'three\r']);
   });
 
