@@ -6231,14 +6231,15 @@ async function pumpPlain(source, write, pace) {
 }
 async function pumpGzip(source, write, pace) {
   const gunzip = createGunzip({ chunkSize: GUNZIP_CHUNK_BYTES });
-  let readFailed = false;
-  source.once("error", () => readFailed = true);
+  let failedFirst;
+  source.on("error", () => failedFirst ??= "read");
+  gunzip.on("error", () => failedFirst ??= "gzip");
   pipeline(source, gunzip, () => {
   });
   const error = await drain(gunzip, write, pace);
   const compressedBytes = gunzip.bytesWritten;
   if (error === void 0) return { compressedBytes };
-  return { compressedBytes, error: readFailed ? `read failed: ${error}` : `gzip: ${error}` };
+  return { compressedBytes, error: failedFirst === "read" ? `read failed: ${error}` : `gzip: ${error}` };
 }
 async function pumpZstd(source, write, pace) {
   let compressedBytes = 0;

@@ -91,15 +91,18 @@ async function pumpGzip(source: Readable, write: (chunk: Buffer) => void, pace?:
   // createGunzip reads concatenated members (multi-member files, as `cat a.gz b.gz` makes) and reports a
   // stream cut short as "unexpected end of file".
   const gunzip = createGunzip({ chunkSize: GUNZIP_CHUNK_BYTES });
-  let readFailed = false;
-  source.once('error', () => (readFailed = true));
+  // Which failed first: pipeline passes either stream's error on to the other, so a corrupt stream
+  // also makes the source emit one (it was reported as a failed read).
+  let failedFirst: 'read' | 'gzip' | undefined;
+  source.on('error', () => (failedFirst ??= 'read'));
+  gunzip.on('error', () => (failedFirst ??= 'gzip'));
   // pipeline forwards a read error on the source into gunzip, where the iteration below sees it.
   pipeline(source, gunzip, () => {});
   const error = await drain(gunzip, write, pace);
   // bytesWritten: compressed bytes taken in by the engine.
   const compressedBytes = gunzip.bytesWritten;
   if (error === undefined) return { compressedBytes };
-  return { compressedBytes, error: readFailed ? `read failed: ${error}` : `gzip: ${error}` };
+  return { compressedBytes, error: failedFirst === 'read' ? `read failed: ${error}` : `gzip: ${error}` };
 }
 
 async function pumpZstd(source: Readable, write: (chunk: Buffer) => void, pace?: Pace): Promise<PumpResult> {

@@ -1,7 +1,7 @@
-import { mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { createReadStream, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { Readable } from 'node:stream';
+import { PassThrough, Readable } from 'node:stream';
 import { constants as zlibConstants, createGzip, gunzipSync, gzipSync } from 'node:zlib';
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -299,6 +299,33 @@ describe('compressed shards', () => {
     expect(account.docs).toBe(account.lines);
     expect(docs.map((d) => d.text)).toEqual(completeLines.toString().trimEnd().split('\n').map((l) => JSON.parse(l).text));
     expect(accountedLines(account)).toBe(account.lines);
+  });
+
+  it('reports a corrupt .gz as a gzip fault, not a failed read, with the lines decoded before it counted', async () => {
+    const lines = Array.from({ length: 20_000 }, (_, i) => JSON.stringify({ text: `Line ${i} of the wire feed, about the harbour and the night shift at the desk.` })).join('\n');
+    const gz = Buffer.from(gzipSync(Buffer.from(`${lines}\n`)));
+    // Bytes flipped in the middle: zlib fails there or at the trailer's CRC-32 (RFC 1952).
+    for (let i = gz.length >> 1; i < (gz.length >> 1) + 64; i++) gz[i]! ^= 0x55;
+    // As a file, and through a pass-through stream as the cache's hashing reader gives it (pipeline
+    // destroys that with zlib's error, which was then reported as a failed read).
+    const file = fileShard('corrupt.jsonl.gz', gz, 'gzip');
+    const tapped: ShardRef = {
+      ...file,
+      open: () => {
+        const tap = new PassThrough();
+        const source = createReadStream(file.absPath);
+        source.on('error', (err) => tap.destroy(err));
+        source.pipe(tap);
+        return tap;
+      },
+    };
+    for (const ref of [file, tapped]) {
+      const { account } = await readAll(ref);
+      expect(account.broken?.message).toMatch(/^gzip: /);
+      expect(account.lines).toBeGreaterThan(1000);
+      expect(account.broken?.afterLine).toBe(account.lines);
+      expect(accountedLines(account)).toBe(account.lines);
+    }
   });
 
   it('reports a truncated .zst as broken, though fzstd itself stops quietly, and counts the lines before', async () => {
