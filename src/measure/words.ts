@@ -541,17 +541,15 @@ export function segmenterWords(
     let cut = n;
     if (n - from > pieceUnits) {
       const last = Math.min(n, from + maxPieceUnits);
-      let found = false;
       for (let p = from + pieceUnits; p < last; p++) {
         if (isSafeCut(text, p)) {
           cut = p;
-          found = true;
           break;
         }
       }
-      // No safe cut there (no space, newline or ideographic punctuation): cut where the segmenter
-      // breaks, ending the piece within maxPieceUnits when it can.
-      if (!found && n - from > maxPieceUnits) cut = forcedCut(text, Math.max(from + 1, from + maxPieceUnits - 2 * FORCED_CUT_CONTEXT));
+      // No safe cut there (cut is still n: no space, newline or ideographic punctuation): cut where
+      // the segmenter breaks, ending the piece within maxPieceUnits when it can.
+      if (cut === n && n - from > maxPieceUnits) cut = forcedCut(text, Math.max(from + 1, from + maxPieceUnits - 2 * FORCED_CUT_CONTEXT));
     }
     const piece = from === 0 && cut === n ? text : text.slice(from, cut);
     for (const s of wordSegmenter().segment(piece)) if (s.isWordLike) onWord(from + s.index, from + s.index + s.segment.length);
