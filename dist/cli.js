@@ -19869,7 +19869,7 @@ function renderMarkdown(report, opts = {}) {
   }
   if (report.contamination) {
     const c = report.contamination;
-    out.push(`<details><summary>Evaluation overlap: ${count2(c.docs)} training document${c.docs === 1 ? " shares" : "s share"} a ${c.ngram}-word sequence with ${count2(c.evalItems)} evaluation item${c.evalItems === 1 ? "" : "s"}</summary>`);
+    out.push(`<details><summary>Evaluation overlap: ${counted(c.docs, "training document")} ${c.docs === 1 ? "shares" : "share"} a ${c.ngram}-word sequence with ${counted(c.evalItems, "evaluation item")}</summary>`);
     out.push("");
     for (const s of c.samples) out.push(`- ${loc(s.path, s.line)} overlaps ${codePath(s.detail ?? "")}`);
     out.push("");
@@ -19972,7 +19972,7 @@ function renderTerminal(report, opts) {
   }
   if (report.contamination && report.contamination.docs > 0) {
     lines.push("");
-    lines.push(bold("Evaluation overlap") + dim(`  ${report.contamination.docs} training document${report.contamination.docs === 1 ? " shares" : "s share"} a ${report.contamination.ngram}-word sequence with an evaluation item`));
+    lines.push(bold("Evaluation overlap") + dim(`  ${counted(report.contamination.docs, "training document")} ${report.contamination.docs === 1 ? "shares" : "share"} a ${report.contamination.ngram}-word sequence with an evaluation item`));
     for (const s of report.contamination.samples.slice(0, 5)) lines.push(`  ${clean2(where(s))} ${dim("overlaps")} ${clean2(s.detail ?? "")}`);
   }
   const i = report.input;

@@ -141,7 +141,7 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
   }
   if (report.contamination) {
     const c = report.contamination;
-    out.push(`<details><summary>Evaluation overlap: ${count(c.docs)} training document${c.docs === 1 ? ' shares' : 's share'} a ${c.ngram}-word sequence with ${count(c.evalItems)} evaluation item${c.evalItems === 1 ? '' : 's'}</summary>`);
+    out.push(`<details><summary>Evaluation overlap: ${counted(c.docs, 'training document')} ${c.docs === 1 ? 'shares' : 'share'} a ${c.ngram}-word sequence with ${counted(c.evalItems, 'evaluation item')}</summary>`);
     out.push('');
     for (const s of c.samples) out.push(`- ${loc(s.path, s.line)} overlaps ${codePath(s.detail ?? '')}`);
     out.push('');

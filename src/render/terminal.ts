@@ -96,7 +96,7 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
   }
   if (report.contamination && report.contamination.docs > 0) {
     lines.push('');
-    lines.push(bold('Evaluation overlap') + dim(`  ${report.contamination.docs} training document${report.contamination.docs === 1 ? ' shares' : 's share'} a ${report.contamination.ngram}-word sequence with an evaluation item`));
+    lines.push(bold('Evaluation overlap') + dim(`  ${counted(report.contamination.docs, 'training document')} ${report.contamination.docs === 1 ? 'shares' : 'share'} a ${report.contamination.ngram}-word sequence with an evaluation item`));
     for (const s of report.contamination.samples.slice(0, 5)) lines.push(`  ${clean(where(s))} ${dim('overlaps')} ${clean(s.detail ?? '')}`);
   }
 
