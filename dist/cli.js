@@ -17498,374 +17498,140 @@ function isBuiltinName(name) {
   return BUILTIN_NAMES.includes(name);
 }
 
-// src/measure/tokens/ranks.ts
-var NO_RANK = Infinity;
-var COUNT = 3;
-var SLOT_BITS = 4;
-var ARENA_BYTES = 5;
-var HEADER_WORDS = 8;
-var MAGIC_VALUE = 1936478769;
-function ownerHashes(owner) {
-  let a = 2166136261 | 0;
-  let b = 2654435769 | 0;
-  for (let i = 0; i < owner.length; i++) {
-    a = Math.imul(a ^ owner.charCodeAt(i), 16777619);
-    b = Math.imul(b ^ owner.charCodeAt(i), 1540483477) ^ b >>> 15;
-  }
-  return [a, b];
-}
-var MAGIC2 = 0;
-var OWNER_1 = 1;
-var OWNER_2 = 2;
-function stampOwner(header, owner, magic) {
-  const [a, b] = ownerHashes(owner);
-  header[OWNER_1] = a;
-  header[OWNER_2] = b;
-  header[MAGIC2] = magic;
-}
-function ownedBy(buffer, owner, magic, words) {
-  if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < words * 4) return false;
-  const header = new Int32Array(buffer, 0, words);
-  const [a, b] = ownerHashes(owner);
-  return header[MAGIC2] === magic && header[OWNER_1] === a && header[OWNER_2] === b;
-}
-function hashBytes(bytes3, start, end) {
-  let h = 2166136261 | 0;
-  for (let i = start; i < end; i++) h = Math.imul(h ^ bytes3[i], 16777619);
-  return h;
-}
-var RankTable = class _RankTable {
-  constructor(buffer) {
-    this.buffer = buffer;
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    const count3 = header[COUNT];
-    const slotCount = 1 << header[SLOT_BITS];
-    this.mask = slotCount - 1;
-    let at = HEADER_WORDS * 4;
-    this.ranks = new Float64Array(buffer, at, count3);
-    at += count3 * 8;
-    this.pairs = new Float64Array(buffer, at, 1 << 16);
-    at += (1 << 16) * 8;
-    this.offsets = new Int32Array(buffer, at, count3 + 1);
-    at += (count3 + 1) * 4;
-    this.slots = new Int32Array(buffer, at, slotCount);
-    at += slotCount * 4;
-    this.arena = new Uint8Array(buffer, at, header[ARENA_BYTES]);
-  }
-  buffer;
-  /** Rank of each two-byte token, indexed by first byte << 8 | second (NO_RANK where there is none). */
-  pairs;
-  offsets;
-  ranks;
-  slots;
-  mask;
-  arena;
-  /** Returns the table in `buffer` (from another thread's table) when it was made for the tokenizer `owner`, else null. */
-  static attach(buffer, owner) {
-    return ownedBy(buffer, owner, MAGIC_VALUE, HEADER_WORDS) ? new _RankTable(buffer) : null;
-  }
-  /** Builds a table from token bytes (concatenated in `arena`, token i at offsets[i]..offsets[i+1]) and ranks; `duplicate(i)` is called for a token listed before. */
-  static build(owner, arena, offsets2, ranks, count3, duplicate) {
-    let bits = 1;
-    while (1 << bits < count3 * 2) bits++;
-    const arenaBytes = offsets2[count3];
-    const bytes3 = HEADER_WORDS * 4 + count3 * 8 + (1 << 16) * 8 + (count3 + 1) * 4 + (1 << bits) * 4 + arenaBytes;
-    const buffer = new SharedArrayBuffer(bytes3);
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    header[COUNT] = count3;
-    header[SLOT_BITS] = bits;
-    header[ARENA_BYTES] = arenaBytes;
-    stampOwner(header, owner, MAGIC_VALUE);
-    const table3 = new _RankTable(buffer);
-    table3.ranks.set(ranks.subarray(0, count3));
-    table3.offsets.set(offsets2.subarray(0, count3 + 1));
-    table3.arena.set(arena.subarray(0, arenaBytes));
-    table3.pairs.fill(NO_RANK);
-    const { slots, mask } = table3;
-    const own = table3.arena;
-    for (let i = 0; i < count3; i++) {
-      const start = offsets2[i];
-      const end = offsets2[i + 1];
-      let slot = hashBytes(own, start, end) & mask;
-      for (; ; ) {
-        const v = slots[slot];
-        if (v === 0) {
-          slots[slot] = i + 1;
-          break;
-        }
-        if (table3.sameBytes(v - 1, own, start, end)) {
-          duplicate(i);
-          break;
-        }
-        slot = slot + 1 & mask;
-      }
-      if (end - start === 2) table3.pairs[own[start] << 8 | own[start + 1]] = ranks[i];
-    }
-    return table3;
-  }
-  sameBytes(token, bytes3, start, end) {
-    const from = this.offsets[token];
-    if (this.offsets[token + 1] - from !== end - start) return false;
-    const arena = this.arena;
-    for (let k = 0; k < end - start; k++) if (arena[from + k] !== bytes3[start + k]) return false;
-    return true;
-  }
-  /** Returns the rank of the token whose bytes are bytes[start, end), or NO_RANK. */
-  rank(bytes3, start, end) {
-    const { slots, mask } = this;
-    for (let slot = hashBytes(bytes3, start, end) & mask; ; slot = slot + 1 & mask) {
-      const v = slots[slot];
-      if (v === 0) return NO_RANK;
-      if (this.sameBytes(v - 1, bytes3, start, end)) return this.ranks[v - 1];
-    }
-  }
-  /** Returns the single bytes that are not tokens, as `0x..` strings (a byte-level vocabulary has none). */
-  missingBytes() {
-    const missing = [];
-    const one = new Uint8Array(1);
-    for (let b = 0; b < 256; b++) {
-      one[0] = b;
-      if (this.rank(one, 0, 1) === NO_RANK) missing.push(`0x${b.toString(16).padStart(2, "0")}`);
-    }
-    return missing;
-  }
-};
-var TokenList = class {
-  arena = new Uint8Array(1 << 20);
-  offsets = new Int32Array(1 << 16);
-  ranks = new Float64Array(1 << 16);
-  count = 0;
-  used = 0;
-  /** Makes room for one more token of at most `bytes` bytes. */
-  reserve(bytes3) {
-    if (this.used + bytes3 > this.arena.length) {
-      const a = new Uint8Array(Math.max(this.arena.length * 2, this.used + bytes3));
-      a.set(this.arena.subarray(0, this.used));
-      this.arena = a;
-    }
-    if (this.count + 2 > this.offsets.length) {
-      const o = new Int32Array(this.offsets.length * 2);
-      o.set(this.offsets);
-      this.offsets = o;
-      const r = new Float64Array(this.ranks.length * 2);
-      r.set(this.ranks);
-      this.ranks = r;
-    }
-  }
-  /** Ends the token whose bytes were written at used.. with `rank`. */
-  close(end, rank2) {
-    this.ranks[this.count] = rank2;
-    this.count++;
-    this.used = end;
-    this.offsets[this.count] = end;
-  }
-};
-var BASE64_VALUE = (() => {
-  const v = new Int8Array(128).fill(-1);
-  const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
-  for (let i = 0; i < alphabet.length; i++) v[alphabet.charCodeAt(i)] = i;
-  return v;
-})();
-function decodeBase64(text, start, end, out, at) {
-  const length = end - start;
-  let pad = 0;
-  if (length > 0 && text.charCodeAt(end - 1) === 61) pad = length > 1 && text.charCodeAt(end - 2) === 61 ? 2 : 1;
-  if (length === 0 || pad > 0 && length % 4 !== 0 || (length - pad) % 4 === 1) return -1;
-  const last = end - pad;
-  let bits = 0;
-  let held = 0;
-  for (let i = start; i < last; i++) {
-    const c = text.charCodeAt(i);
-    const v = c < 128 ? BASE64_VALUE[c] : -1;
-    if (v < 0) return -1;
-    bits = bits << 6 | v;
-    held += 6;
-    if (held >= 8) {
-      held -= 8;
-      out[at++] = bits >>> held & 255;
-    }
-  }
-  return at;
-}
-function parseRankFile(text, file, owner = file) {
-  const list = new TokenList();
-  const lineOf = [];
-  const lines = text.split("\n");
-  for (let i = 0; i < lines.length; i++) {
-    const line = lines[i].endsWith("\r") ? lines[i].slice(0, -1) : lines[i];
-    if (line.length === 0) {
-      if (i === lines.length - 1) continue;
-      throw new TokenizerError("load", file, "empty line in a rank file", { line: i + 1 });
-    }
-    const parts = line.split(" ");
-    if (parts.length !== 2) {
-      throw new TokenizerError("load", file, `expected "<base64 token> <rank>", got ${quote(line)}`, { line: i + 1 });
-    }
-    const [token, rank2] = parts;
-    if (token.length === 0 || !BASE64.test(token)) {
-      throw new TokenizerError("load", file, `token ${quote(token)} is not base64`, { line: i + 1 });
-    }
-    if (!RANK.test(rank2) || !Number.isSafeInteger(Number(rank2))) {
-      throw new TokenizerError("load", file, `rank ${quote(rank2)} is not a non-negative integer`, { line: i + 1 });
-    }
-    list.reserve(token.length);
-    const end = decodeBase64(token, 0, token.length, list.arena, list.used);
-    if (end < 0) throw new TokenizerError("load", file, `token ${quote(token)} is not base64`, { line: i + 1 });
-    list.close(end, Number(rank2));
-    lineOf.push(i + 1);
-  }
-  const table3 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, (t) => {
-    const raw = lines[lineOf[t] - 1].split(" ")[0];
-    throw new TokenizerError("load", file, `token ${quote(raw)} is listed twice`, { line: lineOf[t] });
-  });
-  requireEveryByte(table3, file);
-  return table3;
-}
-var BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
-var RANK = /^(?:0|[1-9][0-9]*)$/;
-function parseBuiltinRanks(bpeRanks, name, owner = `builtin:${name}`) {
-  const list = new TokenList();
-  const n = bpeRanks.length;
-  let p = 0;
-  while (p < n) {
-    let lineEnd = bpeRanks.indexOf("\n", p);
-    if (lineEnd < 0) lineEnd = n;
-    if (lineEnd > p) {
-      const tagEnd = bpeRanks.indexOf(" ", p);
-      const rankEnd = tagEnd < 0 || tagEnd >= lineEnd ? -1 : bpeRanks.indexOf(" ", tagEnd + 1);
-      const first = Number.parseInt(bpeRanks.slice(tagEnd + 1, rankEnd < 0 || rankEnd > lineEnd ? lineEnd : rankEnd), 10);
-      if (tagEnd < 0 || tagEnd >= lineEnd || !Number.isSafeInteger(first)) throw new TokenizerError("load", name, "builtin rank table is damaged");
-      let rank2 = first;
-      let q = rankEnd < 0 || rankEnd > lineEnd ? lineEnd : rankEnd + 1;
-      while (q < lineEnd) {
-        let tokenEnd = bpeRanks.indexOf(" ", q);
-        if (tokenEnd < 0 || tokenEnd > lineEnd) tokenEnd = lineEnd;
-        list.reserve(tokenEnd - q);
-        const end = decodeBase64(bpeRanks, q, tokenEnd, list.arena, list.used);
-        if (end < 0) throw new TokenizerError("load", name, "builtin rank table is damaged (bad base64)");
-        list.close(end, rank2++);
-        q = tokenEnd + 1;
-      }
-    }
-    p = lineEnd + 1;
-  }
-  const table3 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, () => {
-    throw new TokenizerError("load", name, "builtin rank table is damaged (a token is listed twice)");
-  });
-  requireEveryByte(table3, name);
-  return table3;
-}
-function requireEveryByte(table3, file) {
-  const missing = table3.missingBytes();
-  if (missing.length > 0) {
-    const shown = missing.slice(0, 5).join(", ") + (missing.length > 5 ? ", ..." : "");
-    throw new TokenizerError(
-      "load",
-      file,
-      `rank table lacks ${missing.length} of the 256 single-byte tokens (${shown}); a byte-level vocabulary needs them all (truncated file?)`
-    );
-  }
-}
-function quote(s) {
-  return JSON.stringify(s.length > 60 ? `${s.slice(0, 60)}...` : s);
-}
+// src/measure/kernels/tokens.generated.ts
+var WASM_BASE644 = "AGFzbQEAAAABTwpgA39/fwF/YAF/AGAAAX9gAAF8YAR/f39/AX9gAn9/AX9gCn9/f39/f39/f38Bf2AMf39/f39/f39/f39/AXxgAn9/AXxgBX9/f39/AX8CDwEDZW52B3Jlc29sdmUAAAMREAECAwQFAAYCAgcECAIFCQAEBQFwAQEBBQMBAAIGDwJ/AUHAvgQLfwBBwL4ECwe/AQ4GbWVtb3J5AgAKc2V0Q2xhc3NlcwABCXN0b3BwZWRBdAACBnRva2VucwADCHBpZWNlRW5kAAQLY291bnRQaWVjZXMABw5jb250aW51ZWRXb3JkcwAICWxlZnRXb3JkcwAJCndvcmRUb2tlbnMACgptZXJnZUNvdW50AAsMc2Nhbm5lZEJ5dGVzAA0Qc2NhbkJ1aWx0aW5SYW5rcwAOEGZpbGxCdWlsdGluUmFua3MAEAtfX2hlYXBfYmFzZQMBCpVbEA0AQQAgADYCgIqAgAALCwBBACgChIqAgAALCwBBACsDiIqAgAALIgBBACABNgKUioCAAEEAIAA2ApCKgIAAIAMgAhCFgICAAAuGFgEJf0F/IQICQAJAAkACQAJAAkACQAJAAkACQAJAAkAgAEF/ag4CAQACC0EAKAKAioCAACIDQQAoApCKgIAAIgQgAUEBdGovAQAiBWotAAAiAEGAAXENBiAAQcAAcSECAkAgAEEYcSIGRQ0AIAINACABQQBBARCGgICAACIBQX8gAUF/ShsPCwJAIABBAnFFDQBBACgClIqAgAAiBSABQQFqIgAgBSAAShshByABIAFBAmoiAiABIAJKGyIGQQFqIQIgBCAAQQF0aiEAA0AgBiABRg0IAkAgBSABQQFqIgFKDQAgBw8LIAAvAQAhBCAAQQJqIQAgAyAEai0AACIEQQJxDQALIAFBfyAEQRh0QRh1QX9KGw8LAkAgAkUNACABQQEgBkEARxCGgICAACICQX5HDQdBfyECAkAgBUEgRw0AQX8hAkEAKAKUioCAACABQQFqIgVMDQBBfyECIAMgBCAFQQF0ai8BAGotAAAiBkGAAXENCCAFQX8gBkEgcRshAgsgAiABIAJBf0obIAIgAEEgcRsiBUEASA0AQQAoApSKgIAAIgggBSAIIAVKGyECIAQgBUEBdGohBgJAA0AgAiAFRg0BIAVBAWohBSAGLwEAIQcgBkECaiEGIAMgB2otAAAiB0EgcQ0AC0F/IQIgB0EYdEEYdUEASA0IIAVBf2ohAgsCQCACQQBODQBBfw8LIAggAkwNByAEIAJBAXRqIQUCQANAAkACQCAFLwEAIgZBdmoOBAEDAwEACyAGQS9HDQILIAVBAmohBSAIIAJBAWoiAkcNAAsgCCECCyACQX5HDQcLQQAoApSKgIAAIgcgAUwNAgJAIABBBHFFDQAgB0F/aiEGIAFBAXQgBGpBAmohAiABIQACQANAAkAgBiAARw0AIAchAAwCCyAAQQFqIQAgAi8BACEFIAJBAmohAiADIAVqLQAAQQRxDQALCyAAQX9qIQYgACABTA0LIAQgBkEBdGohBCAAIQUDQAJAAkAgBC8BACIDQXZqDgQAAQEAAQsgBSECCyADQQ1GIANBCkZzDQggBEF+aiEEIAVBf2oiBSABTA0MDAALCyABQX9qIQYMCQtBACgCgIqAgAAiBEEAKAKQioCAACIGIAFBAXRqIgAvAQAiBWotAAAiA0GAAXENBQJAIAVBJ0cNAEEAIQJBACgClIqAgAAiByABTA0AAkAgByABQQFqIghMDQAgBiAIQQF0ai8BACECC0ECIQhBACEJAkAgByABQQJqIgpMDQAgBiAKQQF0ai8BACEJCwJAAkAgAkEgaiACIAJBv39qQRpJGyIHQZx/aiICQRBLDQBBASACdEGBhAZxDQELIAlBIGogCSAJQb9/akEaSRshAkEDIQgCQCAHQfIARw0AIAJB5QBGDQELAkAgB0H2AEcNACACQeUARg0BCyAHQewARw0BIAJB7ABHDQELIAggAWoPCwJAIANBAXFFDQBBACgClIqAgAAiAiABIAIgAUobIQIDQCACIAFGDQcgAUEBaiEBIAAvAQAhAyAAQQJqIQAgBCADai0AACIDQQFxDQALIAFBf2pBfyADQRh0QRh1QX9KGw8LAkAgA0ECcUUNAEEAKAKUioCAACIFIAFBAWoiACAFIABKGyEIIAEgAUECaiICIAEgAkobIgdBAWohAiAGIABBAXRqIQADQCAHIAFGDQcCQCAFIAFBAWoiAUoNACAIDwsgAC8BACEDIABBAmohACAEIANqLQAAIgNBAnENAAsgAUF/IANBGHRBGHVBf0obDwsCQAJAIANBwABxDQBBACgClIqAgAAhCAwBC0F/IQICQEEAKAKUioCAACIIIAFBAWoiB0wNAEF/IQIgBCAGIAdBAXRqLwEAai0AACIAQYABcQ0HAkAgAEEBcUUNACAGIAdBAXRqIQAgCCAHIAggB0obIgJBf2ohBQNAIAUgAUYNCSABQQFqIQEgAC8BACEDIABBAmohACAEIANqLQAAIgNBAXENAAsgAUF/IANBGHRBGHVBf0obDwtBfyECIAVBIEcNACAHQX8gAEEgcRshAgsgAiABIAJBf0obIAIgA0EgcRsiAEEASA0AIAggACAIIABKGyECIAYgAEEBdGohBQJAA0AgAiAARg0BIABBAWohACAFLwEAIQcgBUECaiEFIAQgB2otAAAiB0EgcQ0AC0F/IQIgB0EYdEEYdUEASA0HIABBf2ohAgsCQCACQQBODQBBfw8LIAggAkwNBiAGIAJBAXRqIQACQANAAkAgAC8BAEF2ag4EAAICAAILIABBAmohACAIIAJBAWoiAkcNAAsgCCECCyACQX5HDQYLIAggAUwNAgJAIANBBHFFDQAgCEF/aiEFIAFBAXQgBmpBAmohAiABIQACQANAAkAgBSAARw0AIAghAAwCCyAAQQFqIQAgAi8BACEDIAJBAmohAiAEIANqLQAAQQRxDQALCyAAQX9qIQcgACABTA0IIAYgB0EBdGohAyAAIQUDQAJAAkAgAy8BACIEQXZqDgQAAQEAAQsgBSECCyAEQQ1GIARBCkZzDQcgA0F+aiEDIAVBf2oiBSABTA0JDAALCyABQX9qIQcMBgtBACgCgIqAgAAiA0EAKAKQioCAACIFIAFBAXRqLwEAIgZqLQAAIgRBgAFxDQQgASEAIAQhBwJAAkAgBkFgag4IAQUFBQUFBQAFC0EAIQBBACgClIqAgAAiAiABTA0DAkAgAiABQQFqIgZMDQAgBSAGQQF0ai8BACEAC0ECIQZBACEIAkAgAiABQQJqIgdMDQAgBSAHQQF0ai8BACEICwJAAkAgAEGcf2oiAkEQSw0AQQEgAnRBgYQGcQ0BC0EDIQYCQCAAQfIARw0AIAhB5QBGDQELAkAgAEH2AEcNACAIQeUARg0BCyAAQewARw0EIAEhACAEIQcgCEHsAEcNBQsgBiABag8LIAEhACAEIQdBACgClIqAgAAgAUEBaiIGTA0DIAMgBSAGQQF0ai8BAGotAAAiAEGAAXENBCAAIAQgAEEjcSICGyEHIAYgASACGyEADAMLIAFBf2ohBgwGCyABQX9qIQcMAwsgASEAIAQhBwsCQCAHQQFxRQ0AQQAoApSKgIAAIgEgACABIABKGyECIAUgAEEBdGohAQNAIAIgAEYNAiAAQQFqIQAgAS8BACEEIAFBAmohASADIARqLQAAIgRBAXENAAsgAEF/akF/IARBGHRBGHVBf0obDwsCQCAHQQJxRQ0AQQAoApSKgIAAIgEgACABIABKGyECIAUgAEEBdGohAQNAIAIgAEYNAiAAQQFqIQAgAS8BACEEIAFBAmohASADIARqLQAAIgRBAnENAAsgAEF/akF/IARBGHRBGHVBf0obDwtBACgClIqAgAAhCAJAIAdBIHFFDQAgCCAAIAggAEobIQIgBSAAQQF0aiEBA0AgAiAARg0CIABBAWohACABLwEAIQQgAUECaiEBIAMgBGotAAAiBEEgcQ0ACyAAQX9qQX8gBEEYdEEYdUF/ShsPCyABIQICQCAIIAFMDQAgASECIARBBHFFDQAgCEF/aiEGIAFBAXQgBWpBAmohACABIQIDQAJAIAYgAkcNACAIIQIMAgsgAkEBaiECIAAvAQAhBCAAQQJqIQAgAyAEai0AAEEEcQ0ACwsgAiACIAhHIAIgAWtBAUdxayECCyACDwsgASEACyAAIAAgByAAIAFrQQFGGyAIIABGGw8LIAEhAAsgACAAIAYgACABa0EBRhsgByAARhsLsAwBCX8CQAJAAkAgAQ0AQX4hAwwBC0EAKAKUioCAACIEIABBAWoiBSAEIAVKGyIGQX9qIQNBACgCkIqAgAAiByAFQQF0aiEIQQAoAoCKgIAAIQkgACEKAkADQAJAIAMgCkcNACAGIQoMAgsgCkEBaiEKIAgvAQAhCyAIQQJqIQggCSALai0AACILQQhxDQALIAtBGHRBGHVBAE4NAEF/DwtBfyEDIApBAEgNAQJAIAQgCkwNAAJAIAkgByAKQQF0aiIILwEAai0AACILQRBxRQ0AIAQgCiAEIApKGyEDA0AgAyAKRg0DIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EQcQ0ACyAKQX9qQX8gC0EYdEEYdUF/ShshAwwCCyALQYABcQ0CC0F+IQMgCkEBdCAHakF+aiEIA0AgCiAFTA0BIApBf2ohCiAILwEAIQsgCEF+aiEIIAkgC2otAABBEHFFDQALIApBAWohAwsCQCACRQ0AIANBfkcNAEEAKAKUioCAACIEIAAgBCAAShshC0EAKAKQioCAACIHIABBAXRqIQhBACgCgIqAgAAhBSAAIQoCQANAIAsgCkYNASAKQQFqIQogCC8BACEJIAhBAmohCCAFIAlqLQAAIglBCHENAAtBfyEDIAlBGHRBGHVBAEgNAiAKQX9qIQsLQX8hAyALQQBIDQECQCAEIAtMDQACQCAFIAcgC0EBdGoiCi8BAGotAAAiCEEQcUUNACAEIAsgBCALShshAwNAIAMgC0YNAyALQQFqIQsgCi8BACEIIApBAmohCiAFIAhqLQAAIghBEHENAAsgC0F/akF/IAhBGHRBGHVBf0obIQMMAgsgCEGAAXENAgtBfiEDIAtBAXQgB2pBfmohCgNAIAsgAEwNASALQX9qIQsgCi8BACEIIApBfmohCiAFIAhqLQAAQRBxRQ0ACyALQQFqIQMLAkAgAUUNACADQX5HDQBBACEIAkACQEEAKAKUioCAACIFIABBAWoiCkwNAEEAKAKAioCAACIJQQAoApCKgIAAIgEgCkEBdGovAQBqLQAAIghBCHENAQtBf0F+IAhBgAFxGyEDDAELIAEgCkEBdGohCCAFIAogBSAKShsiBEF/aiEDIAAhCgJAA0ACQCADIApHDQAgBCEKDAILIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EIcQ0ACyALQRh0QRh1QQBODQBBfw8LAkAgCkEATg0AQX8PCyAFIAogBSAKShshAyABIApBAXRqIQgDQCADIApGDQEgCkEBaiEKIAgvAQAhCyAIQQJqIQggCSALai0AACILQRBxDQALIApBf2pBfyALQRh0QRh1QX9KGyEDCwJAIAJFDQAgA0F+Rw0AQQAhCAJAAkBBACgClIqAgAAiBSAATA0AQQAoAoCKgIAAIglBACgCkIqAgAAiASAAQQF0aiIKLwEAai0AACIIQQhxDQELQX9BfiAIQYABcRsPCyAFIAAgBSAAShshCAJAA0AgCCAARg0BIABBAWohACAKLwEAIQsgCkECaiEKIAkgC2otAAAiC0EIcQ0AC0F/IQMgC0EYdEEYdUEASA0CIABBf2ohCAsCQCAIQQBODQBBfw8LIAUgCCAFIAhKGyEDIAEgCEEBdGohCgNAIAMgCEYNASAIQQFqIQggCi8BACELIApBAmohCiAJIAtqLQAAIgtBEHENAAtBfyEDIAtBGHRBGHVBAEgNASAIQX9qIQMLQQAhCiADQQBIDQACQEEAKAKUioCAACIIIANMDQBBACEKQQAoApCKgIAAIgkgA0EBdGovAQBBJ0cNAEEAIQBBACELAkAgCCADQQFqIgpMDQAgCSAKQQF0ai8BACELC0ECIQoCQCAIIANBAmoiBUwNACAJIAVBAXRqLwEAIQALAkAgC0EgaiALIAtBv39qQRpJGyILQZx/aiIIQRBLDQBBASAIdEGBhAZxDQELIABBIGogACAAQb9/akEaSRshCEEDIQoCQCALQfIARw0AIAhB5QBGDQELAkAgC0H2AEcNACAIQeUARg0BC0EDQQAgCEHsAEYbQQAgC0HsAEYbIQoLIAogA2ohAwsgAwv+CAIBfA1/QQAgATYClIqAgABBACAANgKQioCAAEQAAAAAAAAAACEKAkAgAiABTg0ARAAAAAAAAAAAIQoDQAJAIAMgAiILEIWAgIAAIgJBAE4NACALIQIMAgsgAiALayEMQQAoApCKgIAAIQ1BxbvyiHghDgJAIAIgC0wNACAMQQNxIQ9BxbvyiHghDiALIRACQCACIAtBf3NqQQNJDQAgDEF8cSERIA0gC0EBdGohAEHFu/KIeCEOIAshEANAIA4gAC8BAHNBk4OACGwgAEECai8BAHNBk4OACGwgAEEEai8BAHNBk4OACGwgAEEGai8BAHNBk4OACGwhDiAAQQhqIQAgEEEEaiEQIBFBfGoiEQ0ACwsgD0UNACANIBBBAXRqIQADQCAOIAAvAQBzQZODgAhsIQ4gAEECaiEAIA9Bf2oiDw0ACwsCQAJAIAxBEEwNACALIAIgDhCAgICAACERDAELIAggDiAJcSISQQV0aiETAkACQCAHIBJBA3RqIhQoAgAiEUEQdiAMRw0AIBQoAgQgDkcNAAJAAkAgDEEBTg0AQQAhEAwBCyANIAtBAXRqIQBBACEQIBMhDwNAIA8vAQAgAC8BAEcNASAPQQJqIQ8gAEECaiEAIAwgEEEBaiIQRw0ADAMLCyAQIAxGDQELIAsgAiAOEICAgIAAIREgFCAONgIEIBQgESAMQRB0cjYCACAMQQFIDQEgEkEEdCEVQQAhDwJAIAxBCEkNACANIAtBAXRqIRYCQCATIA0gAkEBdGpPDQAgFiAIIAIgFWogC2tBAXRqSQ0BCyAMQXhxIg9BeGoiAEEDdkEBaiIOQQNxIRRBACESAkAgAEEYSQ0AIA5B/P///wNxIRdBACEAQQAhEgNAIBMgAGoiDiAWIABqIhD9AAEA/QsBACAOQRBqIBBBEGr9AAEA/QsBACAOQSBqIBBBIGr9AAEA/QsBACAOQTBqIBBBMGr9AAEA/QsBACAAQcAAaiEAIBJBIGohEiAXQXxqIhcNAAsLAkAgFEUNACANIAsgEmpBAXRqIQAgCCASIBVqQQF0aiEOA0AgDiAA/QABAP0LAQAgAEEQaiEAIA5BEGohDiAUQX9qIhQNAAsLIAwgD0YNAgsgAiAPQX9zaiALayEUAkAgDEEDcSIQRQ0AIA0gDyALakEBdGohACAIIA8gFWpBAXRqIQ4DQCAOIAAvAQA7AQAgAEECaiEAIA5BAmohDiAPQQFqIQ8gEEF/aiIQDQALCyAUQQNJDQEgAiAPayALayEQIAggDyAVakEBdGohACANIAsgD2pBAXRqIQ4DQCAAIA4vAQA7AQAgAEECaiAOQQJqLwEAOwEAIABBBGogDkEEai8BADsBACAAQQZqIA5BBmovAQA7AQAgAEEIaiEAIA5BCGohDiAQQXxqIhANAAwCCwsgEUH//wNxIRELIAUgBEECdCIAaiACNgIAIAYgAGogETYCACAEQQFqIQQgCiARt6AhCiACIAFIDQALC0EAIAo5A4iKgIAAQQAgAjYChIqAgAAgBAsLAEEAKAKYioCAAAsLAEEAKAKcioCAAAvCCwIBfBV/QQAgATYClIqAgABBACAANgKQioCAAAJAAkAgAkEBTg0ARAAAAAAAAAAAIQxBACENQQAhDgwBCyAFQXxqIQ9EAAAAAAAAAAAhDEEAIQ5BACENQQAhEEEAIREDQCADIBBBA3RqIgVBBGohEgJAAkAgBSgCACIFQQFIDQAgACAFQX9qIhNBAXRqLwEAQSBGDQELIAUhEwsgEigCACEUAkACQAJAIBEgBE4NACAPIBFBAnQiEmohBSAGIBJqIRICQANAIAVBBGoiFSgCACIWIBNKDQEgEkEEaiESIBUhBSAEIBFBAWoiEUcNAAsgBCERDAELIBYgFEcNAAJAAkAgEQ0AQQAhBQwBCyAFKAIAIQULIAUgE0cNACASKAIAIRcMAQtBACAUNgKUioCAAAJAIBMgFE4NAEEAIRcCQANAAkAgByATIhgQhYCAgAAiE0F/Sg0AQQAgATYClIqAgAAMAgsgEyAYayEZQQAoApCKgIAAIRpBxbvyiHghEgJAIBMgGEwNACAZQQNxIRVBxbvyiHghEiAYIRYCQCATIBhBf3NqQQNJDQAgGUF8cSEbIBogGEEBdGohBUHFu/KIeCESIBghFgNAIBIgBS8BAHNBk4OACGwgBUECai8BAHNBk4OACGwgBUEEai8BAHNBk4OACGwgBUEGai8BAHNBk4OACGwhEiAFQQhqIQUgFkEEaiEWIBtBfGoiGw0ACwsgFUUNACAaIBZBAXRqIQUDQCASIAUvAQBzQZODgAhsIRIgBUECaiEFIBVBf2oiFQ0ACwsCQAJAIBlBEEwNACAYIBMgEhCAgICAACEcDAELIAkgEiAKcSIdQQV0aiEeAkACQCAIIB1BA3RqIhsoAgAiHEEQdiAZRw0AIBsoAgQgEkcNAAJAAkAgGUEBTg0AQQAhFgwBCyAaIBhBAXRqIQVBACEWIB4hFQNAIBUvAQAgBS8BAEcNASAVQQJqIRUgBUECaiEFIBkgFkEBaiIWRw0ADAMLCyAWIBlGDQELIBggEyASEICAgIAAIRwgGyASNgIEIBsgHCAZQRB0cjYCACAZQQFIDQEgHUEEdCEfQQAhFQJAIBlBCEkNACAaIBhBAXRqISACQCAeIBogE0EBdGpPDQAgICAJIBMgH2ogGGtBAXRqSQ0BCyAZQXhxIhVBeGoiBUEDdkEBaiISQQNxIRtBACEdAkAgBUEYSQ0AIBJB/P///wNxISFBACEFQQAhHQNAIB4gBWoiEiAgIAVqIhb9AAEA/QsBACASQRBqIBZBEGr9AAEA/QsBACASQSBqIBZBIGr9AAEA/QsBACASQTBqIBZBMGr9AAEA/QsBACAFQcAAaiEFIB1BIGohHSAhQXxqIiENAAsLAkAgG0UNACAaIBggHWpBAXRqIQUgCSAdIB9qQQF0aiESA0AgEiAF/QABAP0LAQAgBUEQaiEFIBJBEGohEiAbQX9qIhsNAAsLIBkgFUYNAgsgEyAVQX9zaiAYayEbAkAgGUEDcSIWRQ0AIBogFSAYakEBdGohBSAJIBUgH2pBAXRqIRIDQCASIAUvAQA7AQAgBUECaiEFIBJBAmohEiAVQQFqIRUgFkF/aiIWDQALCyAbQQNJDQEgEyAVayAYayEWIAkgFSAfakEBdGohBSAaIBggFWpBAXRqIRIDQCAFIBIvAQA7AQAgBUECaiASQQJqLwEAOwEAIAVBBGogEkEEai8BADsBACAFQQZqIBJBBmovAQA7AQAgBUEIaiEFIBJBCGohEiAWQXxqIhYNAAwCCwsgHEH//wNxIRwLIBwgF2ohFyATIBRIDQALQQAgATYClIqAgAAgF0F/Sg0CCyALIA1BAnRqIBA2AgAgDUEBaiENDAILQQAhF0EAIAE2ApSKgIAACyAOIBdBAUpqIQ4gDCAXt6AhDAsgEEEBaiIQIAJHDQALC0EAIA02ApyKgIAAQQAgDjYCmIqAgAAgDAuhDgUFfwF7An8DfAF/QQAhBEEAIANBIGoiBTYCoIqAgABBACAFIAMoAgwiBkEDdGoiBzYCpIqAgABBAEEBIAMoAhB0IgNBf2o2ArCKgIAAQQAgB0GAgCBqIgU2AqiKgIAAQQAgBkECdCAFakEEaiIFNgKsioCAAEEAIAUgA0ECdGo2ArSKgIAAAkAgASACTg0AQQAhBQNAAkACQCAAIAFBAXRqLwEAIgNB/wBLDQBBASEEIAUhBgwBCwJAIANB/w9LDQAgBUHAioCAAGogA0EGdkHAAXI6AAAgBUEBaiEGIANBP3FBgH9yIQNBAiEEDAELAkACQCADQYDAAGpB//8DcUH/7wNLDQAgBUHAioCAAGogA0EMdkHgAXI6AAAgBUHBioCAAGogA0EGdkE/cUGAAXI6AAAgBUECaiEGIANBP3FBgH9yIQMMAQsCQCABQQFqIgggAk4NACADQf+3A0sNACAAIAhBAXRqLwEAIgRBgLgDSQ0AIARB/78DSw0AIAVBwIqAgABqIANBCnQgBGoiAUGAyIBlaiIDQRJ2QfABcjoAACAFQcGKgIAAaiADQQx2QT9xQYABcjoAACAFQcKKgIAAaiADQQZ2QT9xQYABcjoAACAFQQNqIQYgAUE/cUGAf3IhA0EEIQQgCCEBDAILIAVBwYqAgABqQb8BOgAAIAVBwIqAgABqQe8BOgAAIAVBAmohBkG9ASEDC0EDIQQLIAZBwIqAgABqIAM6AAAgBCAFaiEFIAFBAWoiASACSA0AC0EBIQQgBUECSQ0AQQAhA0EAIAUQjICAgABEAAAAAAAA8H9iDQAgBUEBaiEEAkACQCAFQQNJDQAgBEF8cSIDQXxqIgFBAnZBAWoiAkEDcSEGAkACQCABQQxPDQD9DAAAAAABAAAAAgAAAAMAAAAhCUEAIQIMAQsgAkH8////B3EhAP0MAAAAAAEAAAACAAAAAwAAACEJQQAhAkHAjoCAACEBA0AgASAJ/QsEACABQTBqIAn9DAwAAAAMAAAADAAAAAwAAAD9rgH9CwQAIAFBIGogCf0MCAAAAAgAAAAIAAAACAAAAP2uAf0LBAAgAUEQaiAJ/QwEAAAABAAAAAQAAAAEAAAA/a4B/QsEACABQcAAaiEBIAn9DBAAAAAQAAAAEAAAABAAAAD9rgEhCSACQRBqIQIgAEF8aiIADQALCwJAIAZFDQAgAkECdEHAjoCAAGohAQNAIAEgCf0LBAAgAUEQaiEBIAn9DAQAAAAEAAAABAAAAAQAAAD9rgEhCSAGQX9qIgYNAAsLIAQgA0YNAQsgA0ECdEHAjoCAAGohAQNAIAEgAzYCACABQQRqIQEgBCADQQFqIgNHDQALC0EBIQQgBUECSQ0AIAVBf2oiCEEBIAhBAUobIgFBAXEhAkEAIQNBAC0AwIqAgAAhBAJAIAVBAkYNACABQf7///8HcSEGQQAhA0HAnoCAACEBA0AgASAHIARB/wFxQQt0IANBwYqAgABqLQAAIgRBA3RyaisDADkDACABQQhqIAcgBEELdCADQcKKgIAAai0AACIEQQN0cmorAwA5AwAgAUEQaiEBIAYgA0ECaiIDRw0ACwsCQCACRQ0AIANBA3RBwJ6AgABqIAcgBEH/AXFBC3QgA0HBioCAAGotAABBA3RyaisDADkDAAtBASEEIAVBAkkNACAFQX5qIQpBACEHIAghAANAAkAgBUECTg0AIAUPCyAAQQNxIQsCQAJAIAogB2tBA08NAEQAAAAAAADwfyEMQX8hBEEAIQMMAQsgAEF8cSECRAAAAAAAAPB/IQxBfyEEQQAhA0HAnoCAACEBA0AgA0EDaiADQQJqIANBAWogAyAEIAErAwAiDSAMYyIGGyABQQhqKwMAIg4gDSAMIAYbIgxjIgQbIAFBEGorAwAiDSAOIAwgBBsiDGMiBBsgAUEYaisDACIOIA0gDCAEGyIMYyIGGyEEIA4gDCAGGyEMIAFBIGohASADQQRqIgMgAkcNAAsLAkAgC0UNACAIQQNxIQYgA0EDdEHAnoCAAGohAQNAIAMgBCABKwMAIg0gDGMiAhshBCANIAwgAhshDCABQQhqIQEgA0EBaiEDIAZBf2oiBg0ACwsCQCAEQQBODQAgBQ8LIARBAnQiA0HEjoCAAGoiAiADQciOgIAAaiILIAUgBGsiAUECdEF8avwKAAAgBEEDdCIGQcCegIAAaiIPIAZByJ6AgABqIAFBA3RBcGr8CgAAAkAgBCAFQX5qTg0AIA8gA0HAjoCAAGooAgAgCygCABCMgICAADkDAAsCQCAERQ0AIARBf2oiA0EDdEHAnoCAAGogA0ECdEHAjoCAAGooAgAgAigCABCMgICAADkDAAsgCEEDaiEIQQEhBCAHQQFqIQcgAEF/aiEAIAVBAkohAyAFQX9qIQUgAw0ACwsgBAvNBAMFfwF8BH9BxbvyiHghAgJAIAEgAEwNACABIABrIgJBA3EhAwJAAkAgAEF/cyABakEDTw0AQcW78oh4IQIgACEEDAELIAJBfHEhBUEAIQZBxbvyiHghAgNAIAIgACAGaiIEQcCKgIAAai0AAHNBk4OACGwgBEHBioCAAGotAABzQZODgAhsIARBwoqAgABqLQAAc0GTg4AIbCAEQcOKgIAAai0AAHNBk4OACGwhAiAFIAZBBGoiBkcNAAsgACAGaiEECyADRQ0AIARBwIqAgABqIQQDQCACIAQtAABzQZODgAhsIQIgBEEBaiEEIANBf2oiAw0ACwtEAAAAAAAA8H8hBwJAQQAoAqyKgIAAIgMgAkEAKAKwioCAACIFcSIGQQJ0aigCACICRQ0AQQAoAqiKgIAAIQgCQAJAIAEgAGsiCUEBSA0AQQAoArSKgIAAIQoDQAJAIAggAkECdGooAgAgCCACQX9qIgtBAnRqKAIAIgJrIAlHDQAgCiACaiEEIAAhAgNAAkAgBC0AACACQcCKgIAAai0AAEYNACABIAJGDQUMAgsgBEEBaiEEIAEgAkEBaiICRw0ADAQLCyADIAZBAWogBXEiBkECdGooAgAiAg0ADAMLCwJAIAlFDQADQCADIAZBAWogBXEiBkECdGooAgANAAwDCwsDQCAIIAJBAnRqKAIAIAggAkF/aiILQQJ0aigCAEYNASADIAZBAWogBXEiBkECdGooAgAiAkUNAgwACwtBACgCoIqAgAAgC0EDdGorAwAhBwsgBwsLAEEAKAK4voCAAAsSACAAIAFBAEEAQQAQj4CAgAALjAkDB38BfAt/AkAgA0UNACADQQA2AgALQQAhBUEAIQYCQAJAIAFBAUgNACAAQQFqIQdBACEGQQAhCEEAIQUDQAJAIAAgCGotAAAiCUEKRg0AAkACQCAJQSFPDQAgCEEBaiEKDAELA0AgByAIaiEJIAhBAWoiCyEIIAktAAAiCUEgSw0ACyALQQFqIQogCyEICwJAIAlBIEYNAEF/DwsCQCAIIAFIDQBBfw8LAkAgACAKai0AACILQVBqQf8BcUEJTQ0AQX8PC0QAAAAAAAAAACEMA0AgDEQAAAAAAAAkQKIgC0H/AXFBUGq3oCEMIAcgCmohCyAKQQFqIgkhCiALLQAAIgtBUGpB/wFxQQpJDQALAkAgCEEBaiAJRw0AQX8PCwJAIAxE////////P0NkRQ0AQX8PCwNAIAAgCWohCiAJQQFqIgshCSAKLQAAIgpBIEsNAAsgC0F/aiEIAkAgCkEgRw0AIAggAU4NAANAIAAgCCINaiEOIA1BAWohCEEAIQkDQCAOIAlqIQogCUEBaiILIQkgCkEBai0AACIKQSBLDQALAkAgCkEgRiIJDQAgCkEKRg0AQX8PCwJAIAtBAUcNAAJAIAlFDQBBfw8LIAAgCGotAAAhCgwCCyAOIAtqIQ8CQAJAAkAgC0F/aiIKQQFIDQBBACEJIA9Bf2otAABBPUcNAiAKQQFLDQFBfw8LQQAhCSALQQFHDQFBfw8LQX8hECAKQQNxDQZBfkF/IA9BfmotAABBPUYbIQkLQX8hECAJIAtqQX9qIglBBG9BAUYNBSAJQQZsIglBCG0hESAJQXlIDQUCQCAERQ0AIAQgBWohEkEAIRNBACEUAkAgEUEDSQ0AIA1BAmohDkEAIQlBACETA0AgEiAJaiIIQQJqIAAgDmoiCi0AAEGAiICAAGosAAAiFEEMdCAKQX9qLQAAQYCIgIAAaiwAACIVQRJ0ciAKQQFqLQAAQYCIgIAAaiwAACIWQQZ0ciAKQQJqLQAAQYCIgIAAaiwAACIXciIKOgAAIAhBAWogCkEIdjoAACAIIApBEHY6AAAgEyAUIBVyIBZyIBdyciETIA5BBGohDiAJQQZqIQogCUEDaiIUIQkgCiARTA0ACyAOQX9qIQgLAkAgESAUTA0AIAAgCGoiCC0AAEGAiICAAGosAAAhCiAIQQFqLQAAQYCIgIAAaiwAACEOQQAhCQJAIBEgFGtBAkciFQ0AIAhBAmotAABBgIiAgABqLAAAIQkLIBIgFGoiCCAOQQx0IApBEnRyIAlBBnRyIhRBEHY6AAAgEyAOIApyciAJciETIBUNACAIQQFqIBRBCHY6AAALIBNBAEgNBgsgESAFaiEFAkACQCACDQAgBkEBaiEGDAELIAIgBkEDdGogDDkDACADIAZBAWoiBkECdGogBTYCAAsCQCAPLQAAIgpBIEcNACAMRAAAAAAAAPA/oCEMIA0gC2oiCCABSA0BCwsgDSALaiEIC0F/IRAgCkH/AXFBCkcNAwsgCEEBaiIIIAFIDQALC0EAIAU2Ari+gIAAIAYhEAsgEAuUBwMLfwF7BH8gAigCDCEDQX4hBAJAIAMgACABIAJBIGoiBSAFIANBA3RqIgZBgIAgaiIHIAcgA0ECdGpBBGoiCEEBIAIoAhB0IglBAnQiCmoiCxCPgICAAEcNAEEAIQFBACgCuL6AgAAgAigCFEcNACAJQX9qIQwgAiADQQF0QQJ0aiENA0AgDSABaiIAQZABav0MAAAAAAAA8H8AAAAAAADwfyIO/QsDACAAQYABaiAO/QsDACAAQfAAaiAO/QsDACAAQeAAaiAO/QsDACAAQdAAaiAO/QsDACAAQcAAaiAO/QsDACAAQTBqIA79CwMAIABBIGogDv0LAwAgAUGAAWoiAUGAgCBHDQALQQAhDyAIQQAgCvwLAAJAIANBAU4NAEF/DwsgAiAJIANBA2xqQQJ0aiIKQaSAIGohEANAQcW78oh4IQACQCAHIA8iBEEBaiIPQQJ0aigCACIRIAcgBEECdGooAgAiEkwNACARIBJrIglBA3EhAkHFu/KIeCEAIBIhAQJAIBEgEkF/c2pBA0kNACASQaSAIGohDSAJQXxxIQlBxbvyiHghAANAIAAgCiANaiIBLQAAc0GTg4AIbCABQQFqLQAAc0GTg4AIbCABQQJqLQAAc0GTg4AIbCABQQNqLQAAc0GTg4AIbCEAIA1BBGohDSAJQXxqIgkNAAsgDUHc/19qIQELIAJFDQAgECABaiEBA0AgACABLQAAc0GTg4AIbCEAIAFBAWohASACQX9qIgINAAsLIBEgEmshCQJAAkAgCCAAIAxxIgJBAnRqIgAoAgAiAUUNAAJAIAlBAUgNACAQIBJqIREDQAJAIAcgAUECdGoiACgCACAAQXxqKAIAIgBrIAlHDQAgECAAaiEAIBEhASAJIQ0DQAJAIAAtAAAgAS0AAEYNACANRQ0IDAILIABBAWohACABQQFqIQEgDUF/aiINDQAMBwsLIAggAkEBaiAMcSICQQJ0aiIAKAIAIgENAAwCCwsCQCAJDQADQCAHIAFBAnRqIgAoAgAgAEF8aigCAEYNBSAIIAJBAWogDHEiAkECdGoiACgCACIBDQALIAAgDzYCAAwCCwNAIAggAkEBaiAMcSICQQJ0aiIAKAIADQALCyAAIA82AgAgCUECRw0AIAYgCyASaiIALQAAQQt0IABBAWotAABBA3RyaiAFIARBA3RqKwMAOQMAC0F/IQQgDyADRw0ACwsgBAsLiAIBAEGACAuAAv////////////////////////////////////////////////////////8+////PzQ1Njc4OTo7PD3/////////AAECAwQFBgcICQoLDA0ODxAREhMUFRYXGBn///////8aGxwdHh8gISIjJCUmJygpKissLS4vMDEyM/////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////////8=";
 
-// src/measure/tokens/shared-counts.ts
-var DEFAULT_SHARED_ENTRIES = 1 << 18;
-var UNITS_PER_ENTRY = 16;
-var USED = 3;
-var UNITS_USED = 4;
-var CAPACITY = 5;
-var SLOT_BITS2 = 6;
-var UNITS = 7;
-var HEADER_WORDS2 = 8;
-var MAGIC_VALUE2 = 1936474929;
-var SLOT_WORDS = 4;
-var BUSY = -1;
-var SharedPieceCounts = class _SharedPieceCounts {
-  constructor(buffer) {
-    this.buffer = buffer;
-    const header = new Int32Array(buffer, 0, HEADER_WORDS2);
-    this.header = header;
-    this.capacity = header[CAPACITY];
-    this.units = header[UNITS];
-    const slotCount = 1 << header[SLOT_BITS2];
-    this.mask = slotCount - 1;
-    let at = HEADER_WORDS2 * 4;
-    this.slots = new Int32Array(buffer, at, slotCount * SLOT_WORDS);
-    at += slotCount * SLOT_WORDS * 4;
-    this.arena = new Uint16Array(buffer, at, this.units);
+// src/measure/kernels/tokens-kernel.ts
+var KERNEL_PATTERN = { gpt2: 0, cl100k_base: 1, o200k_base: 2 };
+var MAX_KERNEL_UNITS = 1 << 18;
+var MAX_MERGE_UNITS = 170;
+var KEY_UNITS = 16;
+var TokenKernel = class {
+  kernel;
+  /** Capacity of the per-text buffers, in units of text. */
+  units = 0;
+  textAt = 0;
+  endsAt = 0;
+  countsAt = 0;
+  offsetsAt = 0;
+  leftAt = 0;
+  /** Length of the loaded text. */
+  n = 0;
+  buffer = null;
+  rankTables = /* @__PURE__ */ new WeakMap();
+  resolver = () => {
+    throw new Error("token kernel: no text is being counted");
+  };
+  /** Ends and counts of the loaded text's pieces (views, one entry per unit; valid until the next load). */
+  ends = new Int32Array(0);
+  counts = new Int32Array(0);
+  offsets = new Int32Array(0);
+  constructor(classes2) {
+    this.kernel = instantiateKernel(WASM_BASE644, {
+      resolve: (start, end, hash2) => this.resolver(start, end, hash2)
+    });
+    this.kernel.setClasses(this.kernel.place(classes2));
   }
-  buffer;
-  header;
-  slots;
-  arena;
-  /** Slot count − 1. */
-  mask;
-  capacity;
-  units;
-  /** Returns an empty table for the tokenizer `owner` holding up to `capacity` pieces (at least 1). */
-  static create(owner, capacity = DEFAULT_SHARED_ENTRIES) {
-    if (!(Number.isInteger(capacity) && capacity >= 1)) throw new RangeError(`shared count table: capacity must be a positive integer, got ${capacity}`);
-    let bits = 1;
-    while (1 << bits < capacity * 2) bits++;
-    const units = capacity * UNITS_PER_ENTRY;
-    const bytes3 = HEADER_WORDS2 * 4 + (1 << bits) * SLOT_WORDS * 4 + units * 2;
-    const buffer = new SharedArrayBuffer(bytes3);
-    const header = new Int32Array(buffer, 0, HEADER_WORDS2);
-    header[CAPACITY] = capacity;
-    header[SLOT_BITS2] = bits;
-    header[UNITS] = units;
-    stampOwner(header, owner, MAGIC_VALUE2);
-    return new _SharedPieceCounts(buffer);
-  }
-  /** Returns the table in `buffer` when it was made for the tokenizer `owner`, else null. */
-  static attach(buffer, owner) {
-    return ownedBy(buffer, owner, MAGIC_VALUE2, HEADER_WORDS2) ? new _SharedPieceCounts(buffer) : null;
-  }
-  /** Returns the count of text[start, end) (its hash as from hashRange), or -1 when no thread has added it. */
-  find(text, start, end, hash2) {
-    const { slots, arena, mask } = this;
-    const length = end - start;
-    for (let i = hash2 & mask; ; i = i + 1 & mask) {
-      const s = i * SLOT_WORDS;
-      const meta = Atomics.load(slots, s);
-      if (meta === 0) return -1;
-      if (meta >>> 16 !== length || slots[s + 1] !== hash2) continue;
-      let at = slots[s + 2];
-      let k = start;
-      while (k < end && arena[at] === text.charCodeAt(k)) {
-        at++;
-        k++;
-      }
-      if (k === end) return meta & 65535;
+  /** Returns where a rank table (ranks.ts's layout, in a SharedArrayBuffer) is in the kernel's memory, copying it there the first time. Call it before load(): the copy may grow the memory. */
+  placeRanks(buffer) {
+    let at = this.rankTables.get(buffer);
+    if (at === void 0) {
+      at = this.kernel.place(new Uint8Array(buffer));
+      this.rankTables.set(buffer, at);
     }
+    return at;
   }
-  /** Adds the count of text[start, end); returns false when the table is full (or the piece too long to keep). */
-  add(text, start, end, hash2, count3) {
-    const length = end - start;
-    if (length < 1 || length > MAX_CACHED_PIECE_LENGTH || count3 > 65535 || count3 < 0) return false;
-    const header = this.header;
-    if (Atomics.load(header, USED) >= this.capacity || Atomics.load(header, UNITS_USED) + length > this.units) return false;
-    if (Atomics.add(header, USED, 1) >= this.capacity) return false;
-    const at = Atomics.add(header, UNITS_USED, length);
-    if (at + length > this.units) return false;
-    const { slots, arena, mask } = this;
-    for (let k = 0; k < length; k++) arena[at + k] = text.charCodeAt(start + k);
-    for (let i = hash2 & mask; ; i = i + 1 & mask) {
-      const s = i * SLOT_WORDS;
-      if (Atomics.compareExchange(slots, s, 0, BUSY) !== 0) continue;
-      slots[s + 1] = hash2;
-      slots[s + 2] = at;
-      Atomics.store(slots, s, length << 16 | count3);
-      return true;
+  /**
+   * Builds the rank table of a js-tiktoken builtin from its `bpe_ranks` text (ASCII) as
+   * ranks.ts's parseBuiltinRanks does, byte for byte, and copies it out to a SharedArrayBuffer
+   * that placeRanks then finds already placed. The text stays in the kernel's memory (this runs
+   * once a thread, for the main tokenizer and the baseline at most).
+   */
+  buildRanks(text, layout) {
+    const n = text.length;
+    if (Buffer.byteLength(text, "utf8") !== n) return { damaged: true };
+    const textAt2 = this.kernel.allocate(n + 1);
+    const bytes3 = Buffer.from(this.kernel.memory.buffer, textAt2, n + 1);
+    bytes3.write(text, "latin1");
+    bytes3[n] = 10;
+    const count3 = this.kernel.scanBuiltinRanks(textAt2, n);
+    if (count3 < 0) return { damaged: true };
+    const { header, bytes: size } = layout(count3, this.kernel.scannedBytes());
+    const at = this.kernel.allocate(size);
+    const memory = this.kernel.memory.buffer;
+    new Int32Array(memory, at, header.length).set(header);
+    const result = this.kernel.fillBuiltinRanks(textAt2, n, at);
+    if (result === -2) return { damaged: true };
+    if (result >= 0) return { duplicate: result };
+    const table3 = new SharedArrayBuffer(size);
+    new Uint8Array(table3).set(new Uint8Array(this.kernel.memory.buffer, at, size));
+    this.rankTables.set(table3, at);
+    return { table: table3 };
+  }
+  /** The byte-pair token count of the loaded text's [start, end) (at most MAX_MERGE_UNITS units) under the rank table placed at `ranks`. */
+  merge(start, end, ranks) {
+    return this.kernel.mergeCount(this.textAt, start, end, ranks);
+  }
+  /** Reserves a cache of `entries` (a power of two) in the kernel's memory, empty. Call it before load(). */
+  createCache(entries) {
+    if (!(entries >= 1 && (entries & entries - 1) === 0)) throw new RangeError(`token kernel cache: entries must be a power of two, got ${entries}`);
+    const slots = this.kernel.allocate(entries * 8);
+    const keys = this.kernel.allocate(entries * KEY_UNITS * 2);
+    new Uint8Array(this.kernel.memory.buffer, slots, entries * 8).fill(0);
+    return { slots, keys, mask: entries - 1 };
+  }
+  /** Copies a text (at most MAX_KERNEL_UNITS long) into the kernel's memory; the resolver counts the pieces of it that the caches lack. */
+  load(text, resolver) {
+    const n = text.length;
+    if (n + 2 > this.units) {
+      this.units = Math.max(n + 2, this.units * 2, 4096);
+      this.textAt = this.kernel.allocate(this.units * 2);
+      this.endsAt = this.kernel.allocate(this.units * 4);
+      this.countsAt = this.kernel.allocate(this.units * 4);
+      this.offsetsAt = this.kernel.allocate(this.units * 4);
+      this.leftAt = this.kernel.allocate(this.units * 2);
+      this.buffer = null;
     }
+    const buffer = this.kernel.memory.buffer;
+    if (buffer !== this.buffer) {
+      this.buffer = buffer;
+      this.ends = new Int32Array(buffer, this.endsAt, this.units);
+      this.counts = new Int32Array(buffer, this.countsAt, this.units);
+      this.offsets = new Int32Array(buffer, this.offsetsAt, this.units);
+    }
+    this.kernel.writeUtf16(this.textAt, text);
+    this.n = n;
+    this.resolver = resolver;
   }
-  /** Entries added so far, by every thread (at most the capacity). */
-  get size() {
-    return Math.min(Atomics.load(this.header, USED), this.capacity);
+  /** Splits the loaded text from `from` under a pattern, writing pieces at ends/counts[first, ...); returns the index after the last one written. */
+  count(from, first, pattern, cache) {
+    return this.kernel.countPieces(this.textAt, this.n, from, pattern, first, this.endsAt, this.countsAt, cache.slots, cache.keys, cache.mask);
+  }
+  /** Where the last count() stopped: the text's length, or a piece the kernel cannot decide (a surrogate is involved). */
+  stoppedAt() {
+    return this.kernel.stoppedAt();
+  }
+  /** Tokens of the pieces the last count() wrote. */
+  tokens() {
+    return this.kernel.tokens();
+  }
+  /** The tokens of each word of the loaded text alone (`offsets`: start and end of each word, in order), given its `pieces` pieces in ends/counts. */
+  wordTokens(offsets2, pieces, pattern, cache) {
+    const words = offsets2.length >> 1;
+    this.offsets.set(offsets2);
+    const wordTokens = this.kernel.wordTokens(this.textAt, this.n, words, this.offsetsAt, pieces, this.endsAt, this.countsAt, pattern, cache.slots, cache.keys, cache.mask, this.leftAt);
+    const left = new Int32Array(this.kernel.memory.buffer, this.leftAt, this.kernel.leftWords());
+    return { wordTokens, continuedWords: this.kernel.continuedWords(), left };
+  }
+  /** The end of the piece at p of the loaded text, or -1 when a surrogate is involved (for the tests). */
+  pieceEnd(p, pattern) {
+    return this.kernel.pieceEnd(this.textAt, this.n, p, pattern);
   }
 };
+var kernel4;
+function tokenKernel(classes2) {
+  return kernel4 ??= new TokenKernel(classes2());
+}
 
 // src/measure/tokens/split.ts
 var LETTER = 1;
@@ -18062,113 +17828,387 @@ var splitCl100k = (text, p) => {
   return spaceRunWithNewlines(C, text, p, spaceRun(C, text, p));
 };
 
-// src/measure/kernels/tokens.generated.ts
-var WASM_BASE644 = "AGFzbQEAAAABRglgA39/fwF/YAF/AGAAAX9gAAF8YAR/f39/AX9gAn9/AX9gCn9/f39/f39/f38Bf2AMf39/f39/f39/f39/AXxgAn9/AXwCDwEDZW52B3Jlc29sdmUAAAMNDAECAwQFAAYCAgcECAQFAXABAQEFAwEAAgYPAn8BQcC8BAt/AEHAvAQLB4oBCwZtZW1vcnkCAApzZXRDbGFzc2VzAAEJc3RvcHBlZEF0AAIGdG9rZW5zAAMIcGllY2VFbmQABAtjb3VudFBpZWNlcwAHDmNvbnRpbnVlZFdvcmRzAAgJbGVmdFdvcmRzAAkKd29yZFRva2VucwAKCm1lcmdlQ291bnQACwtfX2hlYXBfYmFzZQMBCtJKDA0AQQAgADYCgIiAgAALCwBBACgChIiAgAALCwBBACsDiIiAgAALIgBBACABNgKUiICAAEEAIAA2ApCIgIAAIAMgAhCFgICAAAuGFgEJf0F/IQICQAJAAkACQAJAAkACQAJAAkACQAJAAkAgAEF/ag4CAQACC0EAKAKAiICAACIDQQAoApCIgIAAIgQgAUEBdGovAQAiBWotAAAiAEGAAXENBiAAQcAAcSECAkAgAEEYcSIGRQ0AIAINACABQQBBARCGgICAACIBQX8gAUF/ShsPCwJAIABBAnFFDQBBACgClIiAgAAiBSABQQFqIgAgBSAAShshByABIAFBAmoiAiABIAJKGyIGQQFqIQIgBCAAQQF0aiEAA0AgBiABRg0IAkAgBSABQQFqIgFKDQAgBw8LIAAvAQAhBCAAQQJqIQAgAyAEai0AACIEQQJxDQALIAFBfyAEQRh0QRh1QX9KGw8LAkAgAkUNACABQQEgBkEARxCGgICAACICQX5HDQdBfyECAkAgBUEgRw0AQX8hAkEAKAKUiICAACABQQFqIgVMDQBBfyECIAMgBCAFQQF0ai8BAGotAAAiBkGAAXENCCAFQX8gBkEgcRshAgsgAiABIAJBf0obIAIgAEEgcRsiBUEASA0AQQAoApSIgIAAIgggBSAIIAVKGyECIAQgBUEBdGohBgJAA0AgAiAFRg0BIAVBAWohBSAGLwEAIQcgBkECaiEGIAMgB2otAAAiB0EgcQ0AC0F/IQIgB0EYdEEYdUEASA0IIAVBf2ohAgsCQCACQQBODQBBfw8LIAggAkwNByAEIAJBAXRqIQUCQANAAkACQCAFLwEAIgZBdmoOBAEDAwEACyAGQS9HDQILIAVBAmohBSAIIAJBAWoiAkcNAAsgCCECCyACQX5HDQcLQQAoApSIgIAAIgcgAUwNAgJAIABBBHFFDQAgB0F/aiEGIAFBAXQgBGpBAmohAiABIQACQANAAkAgBiAARw0AIAchAAwCCyAAQQFqIQAgAi8BACEFIAJBAmohAiADIAVqLQAAQQRxDQALCyAAQX9qIQYgACABTA0LIAQgBkEBdGohBCAAIQUDQAJAAkAgBC8BACIDQXZqDgQAAQEAAQsgBSECCyADQQ1GIANBCkZzDQggBEF+aiEEIAVBf2oiBSABTA0MDAALCyABQX9qIQYMCQtBACgCgIiAgAAiBEEAKAKQiICAACIGIAFBAXRqIgAvAQAiBWotAAAiA0GAAXENBQJAIAVBJ0cNAEEAIQJBACgClIiAgAAiByABTA0AAkAgByABQQFqIghMDQAgBiAIQQF0ai8BACECC0ECIQhBACEJAkAgByABQQJqIgpMDQAgBiAKQQF0ai8BACEJCwJAAkAgAkEgaiACIAJBv39qQRpJGyIHQZx/aiICQRBLDQBBASACdEGBhAZxDQELIAlBIGogCSAJQb9/akEaSRshAkEDIQgCQCAHQfIARw0AIAJB5QBGDQELAkAgB0H2AEcNACACQeUARg0BCyAHQewARw0BIAJB7ABHDQELIAggAWoPCwJAIANBAXFFDQBBACgClIiAgAAiAiABIAIgAUobIQIDQCACIAFGDQcgAUEBaiEBIAAvAQAhAyAAQQJqIQAgBCADai0AACIDQQFxDQALIAFBf2pBfyADQRh0QRh1QX9KGw8LAkAgA0ECcUUNAEEAKAKUiICAACIFIAFBAWoiACAFIABKGyEIIAEgAUECaiICIAEgAkobIgdBAWohAiAGIABBAXRqIQADQCAHIAFGDQcCQCAFIAFBAWoiAUoNACAIDwsgAC8BACEDIABBAmohACAEIANqLQAAIgNBAnENAAsgAUF/IANBGHRBGHVBf0obDwsCQAJAIANBwABxDQBBACgClIiAgAAhCAwBC0F/IQICQEEAKAKUiICAACIIIAFBAWoiB0wNAEF/IQIgBCAGIAdBAXRqLwEAai0AACIAQYABcQ0HAkAgAEEBcUUNACAGIAdBAXRqIQAgCCAHIAggB0obIgJBf2ohBQNAIAUgAUYNCSABQQFqIQEgAC8BACEDIABBAmohACAEIANqLQAAIgNBAXENAAsgAUF/IANBGHRBGHVBf0obDwtBfyECIAVBIEcNACAHQX8gAEEgcRshAgsgAiABIAJBf0obIAIgA0EgcRsiAEEASA0AIAggACAIIABKGyECIAYgAEEBdGohBQJAA0AgAiAARg0BIABBAWohACAFLwEAIQcgBUECaiEFIAQgB2otAAAiB0EgcQ0AC0F/IQIgB0EYdEEYdUEASA0HIABBf2ohAgsCQCACQQBODQBBfw8LIAggAkwNBiAGIAJBAXRqIQACQANAAkAgAC8BAEF2ag4EAAICAAILIABBAmohACAIIAJBAWoiAkcNAAsgCCECCyACQX5HDQYLIAggAUwNAgJAIANBBHFFDQAgCEF/aiEFIAFBAXQgBmpBAmohAiABIQACQANAAkAgBSAARw0AIAghAAwCCyAAQQFqIQAgAi8BACEDIAJBAmohAiAEIANqLQAAQQRxDQALCyAAQX9qIQcgACABTA0IIAYgB0EBdGohAyAAIQUDQAJAAkAgAy8BACIEQXZqDgQAAQEAAQsgBSECCyAEQQ1GIARBCkZzDQcgA0F+aiEDIAVBf2oiBSABTA0JDAALCyABQX9qIQcMBgtBACgCgIiAgAAiA0EAKAKQiICAACIFIAFBAXRqLwEAIgZqLQAAIgRBgAFxDQQgASEAIAQhBwJAAkAgBkFgag4IAQUFBQUFBQAFC0EAIQBBACgClIiAgAAiAiABTA0DAkAgAiABQQFqIgZMDQAgBSAGQQF0ai8BACEAC0ECIQZBACEIAkAgAiABQQJqIgdMDQAgBSAHQQF0ai8BACEICwJAAkAgAEGcf2oiAkEQSw0AQQEgAnRBgYQGcQ0BC0EDIQYCQCAAQfIARw0AIAhB5QBGDQELAkAgAEH2AEcNACAIQeUARg0BCyAAQewARw0EIAEhACAEIQcgCEHsAEcNBQsgBiABag8LIAEhACAEIQdBACgClIiAgAAgAUEBaiIGTA0DIAMgBSAGQQF0ai8BAGotAAAiAEGAAXENBCAAIAQgAEEjcSICGyEHIAYgASACGyEADAMLIAFBf2ohBgwGCyABQX9qIQcMAwsgASEAIAQhBwsCQCAHQQFxRQ0AQQAoApSIgIAAIgEgACABIABKGyECIAUgAEEBdGohAQNAIAIgAEYNAiAAQQFqIQAgAS8BACEEIAFBAmohASADIARqLQAAIgRBAXENAAsgAEF/akF/IARBGHRBGHVBf0obDwsCQCAHQQJxRQ0AQQAoApSIgIAAIgEgACABIABKGyECIAUgAEEBdGohAQNAIAIgAEYNAiAAQQFqIQAgAS8BACEEIAFBAmohASADIARqLQAAIgRBAnENAAsgAEF/akF/IARBGHRBGHVBf0obDwtBACgClIiAgAAhCAJAIAdBIHFFDQAgCCAAIAggAEobIQIgBSAAQQF0aiEBA0AgAiAARg0CIABBAWohACABLwEAIQQgAUECaiEBIAMgBGotAAAiBEEgcQ0ACyAAQX9qQX8gBEEYdEEYdUF/ShsPCyABIQICQCAIIAFMDQAgASECIARBBHFFDQAgCEF/aiEGIAFBAXQgBWpBAmohACABIQIDQAJAIAYgAkcNACAIIQIMAgsgAkEBaiECIAAvAQAhBCAAQQJqIQAgAyAEai0AAEEEcQ0ACwsgAiACIAhHIAIgAWtBAUdxayECCyACDwsgASEACyAAIAAgByAAIAFrQQFGGyAIIABGGw8LIAEhAAsgACAAIAYgACABa0EBRhsgByAARhsLsAwBCX8CQAJAAkAgAQ0AQX4hAwwBC0EAKAKUiICAACIEIABBAWoiBSAEIAVKGyIGQX9qIQNBACgCkIiAgAAiByAFQQF0aiEIQQAoAoCIgIAAIQkgACEKAkADQAJAIAMgCkcNACAGIQoMAgsgCkEBaiEKIAgvAQAhCyAIQQJqIQggCSALai0AACILQQhxDQALIAtBGHRBGHVBAE4NAEF/DwtBfyEDIApBAEgNAQJAIAQgCkwNAAJAIAkgByAKQQF0aiIILwEAai0AACILQRBxRQ0AIAQgCiAEIApKGyEDA0AgAyAKRg0DIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EQcQ0ACyAKQX9qQX8gC0EYdEEYdUF/ShshAwwCCyALQYABcQ0CC0F+IQMgCkEBdCAHakF+aiEIA0AgCiAFTA0BIApBf2ohCiAILwEAIQsgCEF+aiEIIAkgC2otAABBEHFFDQALIApBAWohAwsCQCACRQ0AIANBfkcNAEEAKAKUiICAACIEIAAgBCAAShshC0EAKAKQiICAACIHIABBAXRqIQhBACgCgIiAgAAhBSAAIQoCQANAIAsgCkYNASAKQQFqIQogCC8BACEJIAhBAmohCCAFIAlqLQAAIglBCHENAAtBfyEDIAlBGHRBGHVBAEgNAiAKQX9qIQsLQX8hAyALQQBIDQECQCAEIAtMDQACQCAFIAcgC0EBdGoiCi8BAGotAAAiCEEQcUUNACAEIAsgBCALShshAwNAIAMgC0YNAyALQQFqIQsgCi8BACEIIApBAmohCiAFIAhqLQAAIghBEHENAAsgC0F/akF/IAhBGHRBGHVBf0obIQMMAgsgCEGAAXENAgtBfiEDIAtBAXQgB2pBfmohCgNAIAsgAEwNASALQX9qIQsgCi8BACEIIApBfmohCiAFIAhqLQAAQRBxRQ0ACyALQQFqIQMLAkAgAUUNACADQX5HDQBBACEIAkACQEEAKAKUiICAACIFIABBAWoiCkwNAEEAKAKAiICAACIJQQAoApCIgIAAIgEgCkEBdGovAQBqLQAAIghBCHENAQtBf0F+IAhBgAFxGyEDDAELIAEgCkEBdGohCCAFIAogBSAKShsiBEF/aiEDIAAhCgJAA0ACQCADIApHDQAgBCEKDAILIApBAWohCiAILwEAIQsgCEECaiEIIAkgC2otAAAiC0EIcQ0ACyALQRh0QRh1QQBODQBBfw8LAkAgCkEATg0AQX8PCyAFIAogBSAKShshAyABIApBAXRqIQgDQCADIApGDQEgCkEBaiEKIAgvAQAhCyAIQQJqIQggCSALai0AACILQRBxDQALIApBf2pBfyALQRh0QRh1QX9KGyEDCwJAIAJFDQAgA0F+Rw0AQQAhCAJAAkBBACgClIiAgAAiBSAATA0AQQAoAoCIgIAAIglBACgCkIiAgAAiASAAQQF0aiIKLwEAai0AACIIQQhxDQELQX9BfiAIQYABcRsPCyAFIAAgBSAAShshCAJAA0AgCCAARg0BIABBAWohACAKLwEAIQsgCkECaiEKIAkgC2otAAAiC0EIcQ0AC0F/IQMgC0EYdEEYdUEASA0CIABBf2ohCAsCQCAIQQBODQBBfw8LIAUgCCAFIAhKGyEDIAEgCEEBdGohCgNAIAMgCEYNASAIQQFqIQggCi8BACELIApBAmohCiAJIAtqLQAAIgtBEHENAAtBfyEDIAtBGHRBGHVBAEgNASAIQX9qIQMLQQAhCiADQQBIDQACQEEAKAKUiICAACIIIANMDQBBACEKQQAoApCIgIAAIgkgA0EBdGovAQBBJ0cNAEEAIQBBACELAkAgCCADQQFqIgpMDQAgCSAKQQF0ai8BACELC0ECIQoCQCAIIANBAmoiBUwNACAJIAVBAXRqLwEAIQALAkAgC0EgaiALIAtBv39qQRpJGyILQZx/aiIIQRBLDQBBASAIdEGBhAZxDQELIABBIGogACAAQb9/akEaSRshCEEDIQoCQCALQfIARw0AIAhB5QBGDQELAkAgC0H2AEcNACAIQeUARg0BC0EDQQAgCEHsAEYbQQAgC0HsAEYbIQoLIAogA2ohAwsgAwv+CAIBfA1/QQAgATYClIiAgABBACAANgKQiICAAEQAAAAAAAAAACEKAkAgAiABTg0ARAAAAAAAAAAAIQoDQAJAIAMgAiILEIWAgIAAIgJBAE4NACALIQIMAgsgAiALayEMQQAoApCIgIAAIQ1BxbvyiHghDgJAIAIgC0wNACAMQQNxIQ9BxbvyiHghDiALIRACQCACIAtBf3NqQQNJDQAgDEF8cSERIA0gC0EBdGohAEHFu/KIeCEOIAshEANAIA4gAC8BAHNBk4OACGwgAEECai8BAHNBk4OACGwgAEEEai8BAHNBk4OACGwgAEEGai8BAHNBk4OACGwhDiAAQQhqIQAgEEEEaiEQIBFBfGoiEQ0ACwsgD0UNACANIBBBAXRqIQADQCAOIAAvAQBzQZODgAhsIQ4gAEECaiEAIA9Bf2oiDw0ACwsCQAJAIAxBEEwNACALIAIgDhCAgICAACERDAELIAggDiAJcSISQQV0aiETAkACQCAHIBJBA3RqIhQoAgAiEUEQdiAMRw0AIBQoAgQgDkcNAAJAAkAgDEEBTg0AQQAhEAwBCyANIAtBAXRqIQBBACEQIBMhDwNAIA8vAQAgAC8BAEcNASAPQQJqIQ8gAEECaiEAIAwgEEEBaiIQRw0ADAMLCyAQIAxGDQELIAsgAiAOEICAgIAAIREgFCAONgIEIBQgESAMQRB0cjYCACAMQQFIDQEgEkEEdCEVQQAhDwJAIAxBCEkNACANIAtBAXRqIRYCQCATIA0gAkEBdGpPDQAgFiAIIAIgFWogC2tBAXRqSQ0BCyAMQXhxIg9BeGoiAEEDdkEBaiIOQQNxIRRBACESAkAgAEEYSQ0AIA5B/P///wNxIRdBACEAQQAhEgNAIBMgAGoiDiAWIABqIhD9AAEA/QsBACAOQRBqIBBBEGr9AAEA/QsBACAOQSBqIBBBIGr9AAEA/QsBACAOQTBqIBBBMGr9AAEA/QsBACAAQcAAaiEAIBJBIGohEiAXQXxqIhcNAAsLAkAgFEUNACANIAsgEmpBAXRqIQAgCCASIBVqQQF0aiEOA0AgDiAA/QABAP0LAQAgAEEQaiEAIA5BEGohDiAUQX9qIhQNAAsLIAwgD0YNAgsgAiAPQX9zaiALayEUAkAgDEEDcSIQRQ0AIA0gDyALakEBdGohACAIIA8gFWpBAXRqIQ4DQCAOIAAvAQA7AQAgAEECaiEAIA5BAmohDiAPQQFqIQ8gEEF/aiIQDQALCyAUQQNJDQEgAiAPayALayEQIAggDyAVakEBdGohACANIAsgD2pBAXRqIQ4DQCAAIA4vAQA7AQAgAEECaiAOQQJqLwEAOwEAIABBBGogDkEEai8BADsBACAAQQZqIA5BBmovAQA7AQAgAEEIaiEAIA5BCGohDiAQQXxqIhANAAwCCwsgEUH//wNxIRELIAUgBEECdCIAaiACNgIAIAYgAGogETYCACAEQQFqIQQgCiARt6AhCiACIAFIDQALC0EAIAo5A4iIgIAAQQAgAjYChIiAgAAgBAsLAEEAKAKYiICAAAsLAEEAKAKciICAAAvCCwIBfBV/QQAgATYClIiAgABBACAANgKQiICAAAJAAkAgAkEBTg0ARAAAAAAAAAAAIQxBACENQQAhDgwBCyAFQXxqIQ9EAAAAAAAAAAAhDEEAIQ5BACENQQAhEEEAIREDQCADIBBBA3RqIgVBBGohEgJAAkAgBSgCACIFQQFIDQAgACAFQX9qIhNBAXRqLwEAQSBGDQELIAUhEwsgEigCACEUAkACQAJAIBEgBE4NACAPIBFBAnQiEmohBSAGIBJqIRICQANAIAVBBGoiFSgCACIWIBNKDQEgEkEEaiESIBUhBSAEIBFBAWoiEUcNAAsgBCERDAELIBYgFEcNAAJAAkAgEQ0AQQAhBQwBCyAFKAIAIQULIAUgE0cNACASKAIAIRcMAQtBACAUNgKUiICAAAJAIBMgFE4NAEEAIRcCQANAAkAgByATIhgQhYCAgAAiE0F/Sg0AQQAgATYClIiAgAAMAgsgEyAYayEZQQAoApCIgIAAIRpBxbvyiHghEgJAIBMgGEwNACAZQQNxIRVBxbvyiHghEiAYIRYCQCATIBhBf3NqQQNJDQAgGUF8cSEbIBogGEEBdGohBUHFu/KIeCESIBghFgNAIBIgBS8BAHNBk4OACGwgBUECai8BAHNBk4OACGwgBUEEai8BAHNBk4OACGwgBUEGai8BAHNBk4OACGwhEiAFQQhqIQUgFkEEaiEWIBtBfGoiGw0ACwsgFUUNACAaIBZBAXRqIQUDQCASIAUvAQBzQZODgAhsIRIgBUECaiEFIBVBf2oiFQ0ACwsCQAJAIBlBEEwNACAYIBMgEhCAgICAACEcDAELIAkgEiAKcSIdQQV0aiEeAkACQCAIIB1BA3RqIhsoAgAiHEEQdiAZRw0AIBsoAgQgEkcNAAJAAkAgGUEBTg0AQQAhFgwBCyAaIBhBAXRqIQVBACEWIB4hFQNAIBUvAQAgBS8BAEcNASAVQQJqIRUgBUECaiEFIBkgFkEBaiIWRw0ADAMLCyAWIBlGDQELIBggEyASEICAgIAAIRwgGyASNgIEIBsgHCAZQRB0cjYCACAZQQFIDQEgHUEEdCEfQQAhFQJAIBlBCEkNACAaIBhBAXRqISACQCAeIBogE0EBdGpPDQAgICAJIBMgH2ogGGtBAXRqSQ0BCyAZQXhxIhVBeGoiBUEDdkEBaiISQQNxIRtBACEdAkAgBUEYSQ0AIBJB/P///wNxISFBACEFQQAhHQNAIB4gBWoiEiAgIAVqIhb9AAEA/QsBACASQRBqIBZBEGr9AAEA/QsBACASQSBqIBZBIGr9AAEA/QsBACASQTBqIBZBMGr9AAEA/QsBACAFQcAAaiEFIB1BIGohHSAhQXxqIiENAAsLAkAgG0UNACAaIBggHWpBAXRqIQUgCSAdIB9qQQF0aiESA0AgEiAF/QABAP0LAQAgBUEQaiEFIBJBEGohEiAbQX9qIhsNAAsLIBkgFUYNAgsgEyAVQX9zaiAYayEbAkAgGUEDcSIWRQ0AIBogFSAYakEBdGohBSAJIBUgH2pBAXRqIRIDQCASIAUvAQA7AQAgBUECaiEFIBJBAmohEiAVQQFqIRUgFkF/aiIWDQALCyAbQQNJDQEgEyAVayAYayEWIAkgFSAfakEBdGohBSAaIBggFWpBAXRqIRIDQCAFIBIvAQA7AQAgBUECaiASQQJqLwEAOwEAIAVBBGogEkEEai8BADsBACAFQQZqIBJBBmovAQA7AQAgBUEIaiEFIBJBCGohEiAWQXxqIhYNAAwCCwsgHEH//wNxIRwLIBwgF2ohFyATIBRIDQALQQAgATYClIiAgAAgF0F/Sg0CCyALIA1BAnRqIBA2AgAgDUEBaiENDAILQQAhF0EAIAE2ApSIgIAACyAOIBdBAUpqIQ4gDCAXt6AhDAsgEEEBaiIQIAJHDQALC0EAIA02ApyIgIAAQQAgDjYCmIiAgAAgDAuhDgUFfwF7An8DfAF/QQAhBEEAIANBIGoiBTYCoIiAgABBACAFIAMoAgwiBkEDdGoiBzYCpIiAgABBAEEBIAMoAhB0IgNBf2o2ArCIgIAAQQAgB0GAgCBqIgU2AqiIgIAAQQAgBkECdCAFakEEaiIFNgKsiICAAEEAIAUgA0ECdGo2ArSIgIAAAkAgASACTg0AQQAhBQNAAkACQCAAIAFBAXRqLwEAIgNB/wBLDQBBASEEIAUhBgwBCwJAIANB/w9LDQAgBUHAiICAAGogA0EGdkHAAXI6AAAgBUEBaiEGIANBP3FBgH9yIQNBAiEEDAELAkACQCADQYDAAGpB//8DcUH/7wNLDQAgBUHAiICAAGogA0EMdkHgAXI6AAAgBUHBiICAAGogA0EGdkE/cUGAAXI6AAAgBUECaiEGIANBP3FBgH9yIQMMAQsCQCABQQFqIgggAk4NACADQf+3A0sNACAAIAhBAXRqLwEAIgRBgLgDSQ0AIARB/78DSw0AIAVBwIiAgABqIANBCnQgBGoiAUGAyIBlaiIDQRJ2QfABcjoAACAFQcGIgIAAaiADQQx2QT9xQYABcjoAACAFQcKIgIAAaiADQQZ2QT9xQYABcjoAACAFQQNqIQYgAUE/cUGAf3IhA0EEIQQgCCEBDAILIAVBwYiAgABqQb8BOgAAIAVBwIiAgABqQe8BOgAAIAVBAmohBkG9ASEDC0EDIQQLIAZBwIiAgABqIAM6AAAgBCAFaiEFIAFBAWoiASACSA0AC0EBIQQgBUECSQ0AQQAhA0EAIAUQjICAgABEAAAAAAAA8H9iDQAgBUEBaiEEAkACQCAFQQNJDQAgBEF8cSIDQXxqIgFBAnZBAWoiAkEDcSEGAkACQCABQQxPDQD9DAAAAAABAAAAAgAAAAMAAAAhCUEAIQIMAQsgAkH8////B3EhAP0MAAAAAAEAAAACAAAAAwAAACEJQQAhAkHAjICAACEBA0AgASAJ/QsEACABQTBqIAn9DAwAAAAMAAAADAAAAAwAAAD9rgH9CwQAIAFBIGogCf0MCAAAAAgAAAAIAAAACAAAAP2uAf0LBAAgAUEQaiAJ/QwEAAAABAAAAAQAAAAEAAAA/a4B/QsEACABQcAAaiEBIAn9DBAAAAAQAAAAEAAAABAAAAD9rgEhCSACQRBqIQIgAEF8aiIADQALCwJAIAZFDQAgAkECdEHAjICAAGohAQNAIAEgCf0LBAAgAUEQaiEBIAn9DAQAAAAEAAAABAAAAAQAAAD9rgEhCSAGQX9qIgYNAAsLIAQgA0YNAQsgA0ECdEHAjICAAGohAQNAIAEgAzYCACABQQRqIQEgBCADQQFqIgNHDQALC0EBIQQgBUECSQ0AIAVBf2oiCEEBIAhBAUobIgFBAXEhAkEAIQNBAC0AwIiAgAAhBAJAIAVBAkYNACABQf7///8HcSEGQQAhA0HAnICAACEBA0AgASAHIARB/wFxQQt0IANBwYiAgABqLQAAIgRBA3RyaisDADkDACABQQhqIAcgBEELdCADQcKIgIAAai0AACIEQQN0cmorAwA5AwAgAUEQaiEBIAYgA0ECaiIDRw0ACwsCQCACRQ0AIANBA3RBwJyAgABqIAcgBEH/AXFBC3QgA0HBiICAAGotAABBA3RyaisDADkDAAtBASEEIAVBAkkNACAFQX5qIQpBACEHIAghAANAAkAgBUECTg0AIAUPCyAAQQNxIQsCQAJAIAogB2tBA08NAEQAAAAAAADwfyEMQX8hBEEAIQMMAQsgAEF8cSECRAAAAAAAAPB/IQxBfyEEQQAhA0HAnICAACEBA0AgA0EDaiADQQJqIANBAWogAyAEIAErAwAiDSAMYyIGGyABQQhqKwMAIg4gDSAMIAYbIgxjIgQbIAFBEGorAwAiDSAOIAwgBBsiDGMiBBsgAUEYaisDACIOIA0gDCAEGyIMYyIGGyEEIA4gDCAGGyEMIAFBIGohASADQQRqIgMgAkcNAAsLAkAgC0UNACAIQQNxIQYgA0EDdEHAnICAAGohAQNAIAMgBCABKwMAIg0gDGMiAhshBCANIAwgAhshDCABQQhqIQEgA0EBaiEDIAZBf2oiBg0ACwsCQCAEQQBODQAgBQ8LIARBAnQiA0HEjICAAGoiAiADQciMgIAAaiILIAUgBGsiAUECdEF8avwKAAAgBEEDdCIGQcCcgIAAaiIPIAZByJyAgABqIAFBA3RBcGr8CgAAAkAgBCAFQX5qTg0AIA8gA0HAjICAAGooAgAgCygCABCMgICAADkDAAsCQCAERQ0AIARBf2oiA0EDdEHAnICAAGogA0ECdEHAjICAAGooAgAgAigCABCMgICAADkDAAsgCEEDaiEIQQEhBCAHQQFqIQcgAEF/aiEAIAVBAkohAyAFQX9qIQUgAw0ACwsgBAvNBAMFfwF8BH9BxbvyiHghAgJAIAEgAEwNACABIABrIgJBA3EhAwJAAkAgAEF/cyABakEDTw0AQcW78oh4IQIgACEEDAELIAJBfHEhBUEAIQZBxbvyiHghAgNAIAIgACAGaiIEQcCIgIAAai0AAHNBk4OACGwgBEHBiICAAGotAABzQZODgAhsIARBwoiAgABqLQAAc0GTg4AIbCAEQcOIgIAAai0AAHNBk4OACGwhAiAFIAZBBGoiBkcNAAsgACAGaiEECyADRQ0AIARBwIiAgABqIQQDQCACIAQtAABzQZODgAhsIQIgBEEBaiEEIANBf2oiAw0ACwtEAAAAAAAA8H8hBwJAQQAoAqyIgIAAIgMgAkEAKAKwiICAACIFcSIGQQJ0aigCACICRQ0AQQAoAqiIgIAAIQgCQAJAIAEgAGsiCUEBSA0AQQAoArSIgIAAIQoDQAJAIAggAkECdGooAgAgCCACQX9qIgtBAnRqKAIAIgJrIAlHDQAgCiACaiEEIAAhAgNAAkAgBC0AACACQcCIgIAAai0AAEYNACABIAJGDQUMAgsgBEEBaiEEIAEgAkEBaiICRw0ADAQLCyADIAZBAWogBXEiBkECdGooAgAiAg0ADAMLCwJAIAlFDQADQCADIAZBAWogBXEiBkECdGooAgANAAwDCwsDQCAIIAJBAnRqKAIAIAggAkF/aiILQQJ0aigCAEYNASADIAZBAWogBXEiBkECdGooAgAiAkUNAgwACwtBACgCoIiAgAAgC0EDdGorAwAhBwsgBws=";
-
-// src/measure/kernels/tokens-kernel.ts
-var KERNEL_PATTERN = { gpt2: 0, cl100k_base: 1, o200k_base: 2 };
-var MAX_KERNEL_UNITS = 1 << 18;
-var MAX_MERGE_UNITS = 170;
-var KEY_UNITS = 16;
-var TokenKernel = class {
-  kernel;
-  /** Capacity of the per-text buffers, in units of text. */
-  units = 0;
-  textAt = 0;
-  endsAt = 0;
-  countsAt = 0;
-  offsetsAt = 0;
-  leftAt = 0;
-  /** Length of the loaded text. */
-  n = 0;
-  buffer = null;
-  rankTables = /* @__PURE__ */ new WeakMap();
-  resolver = () => {
-    throw new Error("token kernel: no text is being counted");
-  };
-  /** Ends and counts of the loaded text's pieces (views, one entry per unit; valid until the next load). */
-  ends = new Int32Array(0);
-  counts = new Int32Array(0);
-  offsets = new Int32Array(0);
-  constructor(classes2) {
-    this.kernel = instantiateKernel(WASM_BASE644, {
-      resolve: (start, end, hash2) => this.resolver(start, end, hash2)
-    });
-    this.kernel.setClasses(this.kernel.place(classes2));
+// src/measure/tokens/ranks.ts
+var NO_RANK = Infinity;
+var COUNT = 3;
+var SLOT_BITS = 4;
+var ARENA_BYTES = 5;
+var HEADER_WORDS = 8;
+var MAGIC_VALUE = 1936478769;
+function ownerHashes(owner) {
+  let a = 2166136261 | 0;
+  let b = 2654435769 | 0;
+  for (let i = 0; i < owner.length; i++) {
+    a = Math.imul(a ^ owner.charCodeAt(i), 16777619);
+    b = Math.imul(b ^ owner.charCodeAt(i), 1540483477) ^ b >>> 15;
   }
-  /** Returns where a rank table (ranks.ts's layout, in a SharedArrayBuffer) is in the kernel's memory, copying it there the first time. Call it before load(): the copy may grow the memory. */
-  placeRanks(buffer) {
-    let at = this.rankTables.get(buffer);
-    if (at === void 0) {
-      at = this.kernel.place(new Uint8Array(buffer));
-      this.rankTables.set(buffer, at);
+  return [a, b];
+}
+var MAGIC2 = 0;
+var OWNER_1 = 1;
+var OWNER_2 = 2;
+function stampOwner(header, owner, magic) {
+  const [a, b] = ownerHashes(owner);
+  header[OWNER_1] = a;
+  header[OWNER_2] = b;
+  header[MAGIC2] = magic;
+}
+function ownedBy(buffer, owner, magic, words) {
+  if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < words * 4) return false;
+  const header = new Int32Array(buffer, 0, words);
+  const [a, b] = ownerHashes(owner);
+  return header[MAGIC2] === magic && header[OWNER_1] === a && header[OWNER_2] === b;
+}
+function hashBytes(bytes3, start, end) {
+  let h = 2166136261 | 0;
+  for (let i = start; i < end; i++) h = Math.imul(h ^ bytes3[i], 16777619);
+  return h;
+}
+var RankTable = class _RankTable {
+  constructor(buffer) {
+    this.buffer = buffer;
+    const header = new Int32Array(buffer, 0, HEADER_WORDS);
+    const count3 = header[COUNT];
+    const slotCount = 1 << header[SLOT_BITS];
+    this.mask = slotCount - 1;
+    let at = HEADER_WORDS * 4;
+    this.ranks = new Float64Array(buffer, at, count3);
+    at += count3 * 8;
+    this.pairs = new Float64Array(buffer, at, 1 << 16);
+    at += (1 << 16) * 8;
+    this.offsets = new Int32Array(buffer, at, count3 + 1);
+    at += (count3 + 1) * 4;
+    this.slots = new Int32Array(buffer, at, slotCount);
+    at += slotCount * 4;
+    this.arena = new Uint8Array(buffer, at, header[ARENA_BYTES]);
+  }
+  buffer;
+  /** Rank of each two-byte token, indexed by first byte << 8 | second (NO_RANK where there is none). */
+  pairs;
+  offsets;
+  ranks;
+  slots;
+  mask;
+  arena;
+  /** Returns the table in `buffer` (from another thread's table, or one the token kernel built) when it was made for the tokenizer `owner`, else null. */
+  static attach(buffer, owner) {
+    return ownedBy(buffer, owner, MAGIC_VALUE, HEADER_WORDS) ? new _RankTable(buffer) : null;
+  }
+  /** Builds a table from token bytes (concatenated in `arena`, token i at offsets[i]..offsets[i+1]) and ranks; `duplicate(i)` is called for a token listed before. */
+  static build(owner, arena, offsets2, ranks, count3, duplicate) {
+    const arenaBytes = offsets2[count3];
+    const layout = rankTableLayout(owner, count3, arenaBytes);
+    const buffer = new SharedArrayBuffer(layout.bytes);
+    new Int32Array(buffer, 0, HEADER_WORDS).set(layout.header);
+    const table3 = new _RankTable(buffer);
+    table3.ranks.set(ranks.subarray(0, count3));
+    table3.offsets.set(offsets2.subarray(0, count3 + 1));
+    table3.arena.set(arena.subarray(0, arenaBytes));
+    table3.pairs.fill(NO_RANK);
+    const { slots, mask } = table3;
+    const own = table3.arena;
+    for (let i = 0; i < count3; i++) {
+      const start = offsets2[i];
+      const end = offsets2[i + 1];
+      let slot = hashBytes(own, start, end) & mask;
+      for (; ; ) {
+        const v = slots[slot];
+        if (v === 0) {
+          slots[slot] = i + 1;
+          break;
+        }
+        if (table3.sameBytes(v - 1, own, start, end)) {
+          duplicate(i);
+          break;
+        }
+        slot = slot + 1 & mask;
+      }
+      if (end - start === 2) table3.pairs[own[start] << 8 | own[start + 1]] = ranks[i];
     }
-    return at;
+    return table3;
   }
-  /** The byte-pair token count of the loaded text's [start, end) (at most MAX_MERGE_UNITS units) under the rank table placed at `ranks`. */
-  merge(start, end, ranks) {
-    return this.kernel.mergeCount(this.textAt, start, end, ranks);
+  sameBytes(token, bytes3, start, end) {
+    const from = this.offsets[token];
+    if (this.offsets[token + 1] - from !== end - start) return false;
+    const arena = this.arena;
+    for (let k = 0; k < end - start; k++) if (arena[from + k] !== bytes3[start + k]) return false;
+    return true;
   }
-  /** Reserves a cache of `entries` (a power of two) in the kernel's memory, empty. Call it before load(). */
-  createCache(entries) {
-    if (!(entries >= 1 && (entries & entries - 1) === 0)) throw new RangeError(`token kernel cache: entries must be a power of two, got ${entries}`);
-    const slots = this.kernel.allocate(entries * 8);
-    const keys = this.kernel.allocate(entries * KEY_UNITS * 2);
-    new Uint8Array(this.kernel.memory.buffer, slots, entries * 8).fill(0);
-    return { slots, keys, mask: entries - 1 };
-  }
-  /** Copies a text (at most MAX_KERNEL_UNITS long) into the kernel's memory; the resolver counts the pieces of it that the caches lack. */
-  load(text, resolver) {
-    const n = text.length;
-    if (n + 2 > this.units) {
-      this.units = Math.max(n + 2, this.units * 2, 4096);
-      this.textAt = this.kernel.allocate(this.units * 2);
-      this.endsAt = this.kernel.allocate(this.units * 4);
-      this.countsAt = this.kernel.allocate(this.units * 4);
-      this.offsetsAt = this.kernel.allocate(this.units * 4);
-      this.leftAt = this.kernel.allocate(this.units * 2);
-      this.buffer = null;
+  /** Returns the rank of the token whose bytes are bytes[start, end), or NO_RANK. */
+  rank(bytes3, start, end) {
+    const { slots, mask } = this;
+    for (let slot = hashBytes(bytes3, start, end) & mask; ; slot = slot + 1 & mask) {
+      const v = slots[slot];
+      if (v === 0) return NO_RANK;
+      if (this.sameBytes(v - 1, bytes3, start, end)) return this.ranks[v - 1];
     }
-    const buffer = this.kernel.memory.buffer;
-    if (buffer !== this.buffer) {
-      this.buffer = buffer;
-      this.ends = new Int32Array(buffer, this.endsAt, this.units);
-      this.counts = new Int32Array(buffer, this.countsAt, this.units);
-      this.offsets = new Int32Array(buffer, this.offsetsAt, this.units);
+  }
+  /** Returns the single bytes that are not tokens, as `0x..` strings (a byte-level vocabulary has none). */
+  missingBytes() {
+    const missing = [];
+    const one = new Uint8Array(1);
+    for (let b = 0; b < 256; b++) {
+      one[0] = b;
+      if (this.rank(one, 0, 1) === NO_RANK) missing.push(`0x${b.toString(16).padStart(2, "0")}`);
     }
-    this.kernel.writeUtf16(this.textAt, text);
-    this.n = n;
-    this.resolver = resolver;
-  }
-  /** Splits the loaded text from `from` under a pattern, writing pieces at ends/counts[first, ...); returns the index after the last one written. */
-  count(from, first, pattern, cache) {
-    return this.kernel.countPieces(this.textAt, this.n, from, pattern, first, this.endsAt, this.countsAt, cache.slots, cache.keys, cache.mask);
-  }
-  /** Where the last count() stopped: the text's length, or a piece the kernel cannot decide (a surrogate is involved). */
-  stoppedAt() {
-    return this.kernel.stoppedAt();
-  }
-  /** Tokens of the pieces the last count() wrote. */
-  tokens() {
-    return this.kernel.tokens();
-  }
-  /** The tokens of each word of the loaded text alone (`offsets`: start and end of each word, in order), given its `pieces` pieces in ends/counts. */
-  wordTokens(offsets2, pieces, pattern, cache) {
-    const words = offsets2.length >> 1;
-    this.offsets.set(offsets2);
-    const wordTokens = this.kernel.wordTokens(this.textAt, this.n, words, this.offsetsAt, pieces, this.endsAt, this.countsAt, pattern, cache.slots, cache.keys, cache.mask, this.leftAt);
-    const left = new Int32Array(this.kernel.memory.buffer, this.leftAt, this.kernel.leftWords());
-    return { wordTokens, continuedWords: this.kernel.continuedWords(), left };
-  }
-  /** The end of the piece at p of the loaded text, or -1 when a surrogate is involved (for the tests). */
-  pieceEnd(p, pattern) {
-    return this.kernel.pieceEnd(this.textAt, this.n, p, pattern);
+    return missing;
   }
 };
-var kernel4;
-function tokenKernel(classes2) {
-  return kernel4 ??= new TokenKernel(classes2());
+function rankTableLayout(owner, count3, arenaBytes) {
+  let bits = 1;
+  while (1 << bits < count3 * 2) bits++;
+  const header = new Int32Array(HEADER_WORDS);
+  header[COUNT] = count3;
+  header[SLOT_BITS] = bits;
+  header[ARENA_BYTES] = arenaBytes;
+  stampOwner(header, owner, MAGIC_VALUE);
+  return { header, bytes: HEADER_WORDS * 4 + count3 * 8 + (1 << 16) * 8 + (count3 + 1) * 4 + (1 << bits) * 4 + arenaBytes };
 }
+var TokenList = class {
+  arena = new Uint8Array(1 << 20);
+  offsets = new Int32Array(1 << 16);
+  ranks = new Float64Array(1 << 16);
+  count = 0;
+  used = 0;
+  /** Makes room for one more token of at most `bytes` bytes. */
+  reserve(bytes3) {
+    if (this.used + bytes3 > this.arena.length) {
+      const a = new Uint8Array(Math.max(this.arena.length * 2, this.used + bytes3));
+      a.set(this.arena.subarray(0, this.used));
+      this.arena = a;
+    }
+    if (this.count + 2 > this.offsets.length) {
+      const o = new Int32Array(this.offsets.length * 2);
+      o.set(this.offsets);
+      this.offsets = o;
+      const r = new Float64Array(this.ranks.length * 2);
+      r.set(this.ranks);
+      this.ranks = r;
+    }
+  }
+  /** Ends the token whose bytes were written at used.. with `rank`. */
+  close(end, rank2) {
+    this.ranks[this.count] = rank2;
+    this.count++;
+    this.used = end;
+    this.offsets[this.count] = end;
+  }
+};
+var BASE64_VALUE = (() => {
+  const v = new Int8Array(128).fill(-1);
+  const alphabet = "ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789+/";
+  for (let i = 0; i < alphabet.length; i++) v[alphabet.charCodeAt(i)] = i;
+  return v;
+})();
+function decodeBase64(text, start, end, out, at) {
+  const length = end - start;
+  let pad = 0;
+  if (length > 0 && text.charCodeAt(end - 1) === 61) pad = length > 1 && text.charCodeAt(end - 2) === 61 ? 2 : 1;
+  if (length === 0 || pad > 0 && length % 4 !== 0 || (length - pad) % 4 === 1) return -1;
+  const last = end - pad;
+  let bits = 0;
+  let held = 0;
+  for (let i = start; i < last; i++) {
+    const c = text.charCodeAt(i);
+    const v = c < 128 ? BASE64_VALUE[c] : -1;
+    if (v < 0) return -1;
+    bits = bits << 6 | v;
+    held += 6;
+    if (held >= 8) {
+      held -= 8;
+      out[at++] = bits >>> held & 255;
+    }
+  }
+  return at;
+}
+function parseRankFile(text, file, owner = file) {
+  const list = new TokenList();
+  const lineOf = [];
+  const lines = text.split("\n");
+  for (let i = 0; i < lines.length; i++) {
+    const line = lines[i].endsWith("\r") ? lines[i].slice(0, -1) : lines[i];
+    if (line.length === 0) {
+      if (i === lines.length - 1) continue;
+      throw new TokenizerError("load", file, "empty line in a rank file", { line: i + 1 });
+    }
+    const parts = line.split(" ");
+    if (parts.length !== 2) {
+      throw new TokenizerError("load", file, `expected "<base64 token> <rank>", got ${quote(line)}`, { line: i + 1 });
+    }
+    const [token, rank2] = parts;
+    if (token.length === 0 || !BASE64.test(token)) {
+      throw new TokenizerError("load", file, `token ${quote(token)} is not base64`, { line: i + 1 });
+    }
+    if (!RANK.test(rank2) || !Number.isSafeInteger(Number(rank2))) {
+      throw new TokenizerError("load", file, `rank ${quote(rank2)} is not a non-negative integer`, { line: i + 1 });
+    }
+    list.reserve(token.length);
+    const end = decodeBase64(token, 0, token.length, list.arena, list.used);
+    if (end < 0) throw new TokenizerError("load", file, `token ${quote(token)} is not base64`, { line: i + 1 });
+    list.close(end, Number(rank2));
+    lineOf.push(i + 1);
+  }
+  const table3 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, (t) => {
+    const raw = lines[lineOf[t] - 1].split(" ")[0];
+    throw new TokenizerError("load", file, `token ${quote(raw)} is listed twice`, { line: lineOf[t] });
+  });
+  requireEveryByte(table3, file);
+  return table3;
+}
+var BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
+var RANK = /^(?:0|[1-9][0-9]*)$/;
+function buildBuiltinRanks(bpeRanks, name, owner = `builtin:${name}`) {
+  if (kernelUnavailable() !== null) return parseBuiltinRanks(bpeRanks, name, owner);
+  const built = tokenKernel(unitClasses).buildRanks(bpeRanks, (count3, arenaBytes) => rankTableLayout(owner, count3, arenaBytes));
+  if ("damaged" in built) throw new TokenizerError("load", name, "builtin rank table is damaged");
+  if ("duplicate" in built) throw new TokenizerError("load", name, "builtin rank table is damaged (a token is listed twice)");
+  const table3 = RankTable.attach(built.table, owner);
+  requireEveryByte(table3, name);
+  return table3;
+}
+function parseBuiltinRanks(bpeRanks, name, owner = `builtin:${name}`) {
+  const list = new TokenList();
+  const n = bpeRanks.length;
+  let p = 0;
+  while (p < n) {
+    let lineEnd = bpeRanks.indexOf("\n", p);
+    if (lineEnd < 0) lineEnd = n;
+    if (lineEnd > p) {
+      const tagEnd = bpeRanks.indexOf(" ", p);
+      const rankEnd = tagEnd < 0 || tagEnd >= lineEnd ? -1 : bpeRanks.indexOf(" ", tagEnd + 1);
+      const first = Number.parseInt(bpeRanks.slice(tagEnd + 1, rankEnd < 0 || rankEnd > lineEnd ? lineEnd : rankEnd), 10);
+      if (tagEnd < 0 || tagEnd >= lineEnd || !Number.isSafeInteger(first)) throw new TokenizerError("load", name, "builtin rank table is damaged");
+      let rank2 = first;
+      let q = rankEnd < 0 || rankEnd > lineEnd ? lineEnd : rankEnd + 1;
+      while (q < lineEnd) {
+        let tokenEnd = bpeRanks.indexOf(" ", q);
+        if (tokenEnd < 0 || tokenEnd > lineEnd) tokenEnd = lineEnd;
+        list.reserve(tokenEnd - q);
+        const end = decodeBase64(bpeRanks, q, tokenEnd, list.arena, list.used);
+        if (end < 0) throw new TokenizerError("load", name, "builtin rank table is damaged (bad base64)");
+        list.close(end, rank2++);
+        q = tokenEnd + 1;
+      }
+    }
+    p = lineEnd + 1;
+  }
+  const table3 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, () => {
+    throw new TokenizerError("load", name, "builtin rank table is damaged (a token is listed twice)");
+  });
+  requireEveryByte(table3, name);
+  return table3;
+}
+function requireEveryByte(table3, file) {
+  const missing = table3.missingBytes();
+  if (missing.length > 0) {
+    const shown = missing.slice(0, 5).join(", ") + (missing.length > 5 ? ", ..." : "");
+    throw new TokenizerError(
+      "load",
+      file,
+      `rank table lacks ${missing.length} of the 256 single-byte tokens (${shown}); a byte-level vocabulary needs them all (truncated file?)`
+    );
+  }
+}
+function quote(s) {
+  return JSON.stringify(s.length > 60 ? `${s.slice(0, 60)}...` : s);
+}
+
+// src/measure/tokens/shared-counts.ts
+var DEFAULT_SHARED_ENTRIES = 1 << 18;
+var UNITS_PER_ENTRY = 16;
+var USED = 3;
+var UNITS_USED = 4;
+var CAPACITY = 5;
+var SLOT_BITS2 = 6;
+var UNITS = 7;
+var HEADER_WORDS2 = 8;
+var MAGIC_VALUE2 = 1936474929;
+var SLOT_WORDS = 4;
+var BUSY = -1;
+var SharedPieceCounts = class _SharedPieceCounts {
+  constructor(buffer) {
+    this.buffer = buffer;
+    const header = new Int32Array(buffer, 0, HEADER_WORDS2);
+    this.header = header;
+    this.capacity = header[CAPACITY];
+    this.units = header[UNITS];
+    const slotCount = 1 << header[SLOT_BITS2];
+    this.mask = slotCount - 1;
+    let at = HEADER_WORDS2 * 4;
+    this.slots = new Int32Array(buffer, at, slotCount * SLOT_WORDS);
+    at += slotCount * SLOT_WORDS * 4;
+    this.arena = new Uint16Array(buffer, at, this.units);
+  }
+  buffer;
+  header;
+  slots;
+  arena;
+  /** Slot count − 1. */
+  mask;
+  capacity;
+  units;
+  /** Returns an empty table for the tokenizer `owner` holding up to `capacity` pieces (at least 1). */
+  static create(owner, capacity = DEFAULT_SHARED_ENTRIES) {
+    if (!(Number.isInteger(capacity) && capacity >= 1)) throw new RangeError(`shared count table: capacity must be a positive integer, got ${capacity}`);
+    let bits = 1;
+    while (1 << bits < capacity * 2) bits++;
+    const units = capacity * UNITS_PER_ENTRY;
+    const bytes3 = HEADER_WORDS2 * 4 + (1 << bits) * SLOT_WORDS * 4 + units * 2;
+    const buffer = new SharedArrayBuffer(bytes3);
+    const header = new Int32Array(buffer, 0, HEADER_WORDS2);
+    header[CAPACITY] = capacity;
+    header[SLOT_BITS2] = bits;
+    header[UNITS] = units;
+    stampOwner(header, owner, MAGIC_VALUE2);
+    return new _SharedPieceCounts(buffer);
+  }
+  /** Returns the table in `buffer` when it was made for the tokenizer `owner`, else null. */
+  static attach(buffer, owner) {
+    return ownedBy(buffer, owner, MAGIC_VALUE2, HEADER_WORDS2) ? new _SharedPieceCounts(buffer) : null;
+  }
+  /** Returns the count of text[start, end) (its hash as from hashRange), or -1 when no thread has added it. */
+  find(text, start, end, hash2) {
+    const { slots, arena, mask } = this;
+    const length = end - start;
+    for (let i = hash2 & mask; ; i = i + 1 & mask) {
+      const s = i * SLOT_WORDS;
+      const meta = Atomics.load(slots, s);
+      if (meta === 0) return -1;
+      if (meta >>> 16 !== length || slots[s + 1] !== hash2) continue;
+      let at = slots[s + 2];
+      let k = start;
+      while (k < end && arena[at] === text.charCodeAt(k)) {
+        at++;
+        k++;
+      }
+      if (k === end) return meta & 65535;
+    }
+  }
+  /** Adds the count of text[start, end); returns false when the table is full (or the piece too long to keep). */
+  add(text, start, end, hash2, count3) {
+    const length = end - start;
+    if (length < 1 || length > MAX_CACHED_PIECE_LENGTH || count3 > 65535 || count3 < 0) return false;
+    const header = this.header;
+    if (Atomics.load(header, USED) >= this.capacity || Atomics.load(header, UNITS_USED) + length > this.units) return false;
+    if (Atomics.add(header, USED, 1) >= this.capacity) return false;
+    const at = Atomics.add(header, UNITS_USED, length);
+    if (at + length > this.units) return false;
+    const { slots, arena, mask } = this;
+    for (let k = 0; k < length; k++) arena[at + k] = text.charCodeAt(start + k);
+    for (let i = hash2 & mask; ; i = i + 1 & mask) {
+      const s = i * SLOT_WORDS;
+      if (Atomics.compareExchange(slots, s, 0, BUSY) !== 0) continue;
+      slots[s + 1] = hash2;
+      slots[s + 2] = at;
+      Atomics.store(slots, s, length << 16 | count3);
+      return true;
+    }
+  }
+  /** Entries added so far, by every thread (at most the capacity). */
+  get size() {
+    return Math.min(Atomics.load(this.header, USED), this.capacity);
+  }
+};
 
 // src/measure/tokens/bpe.ts
 var bytes = new Uint8Array(1024);
@@ -18587,7 +18627,7 @@ async function loadTokenizer(spec, options = {}) {
         return createRankCounter({
           id,
           label: name,
-          ranks: ranks ?? parseBuiltinRanks(data2.bpe_ranks, name, id),
+          ranks: ranks ?? buildBuiltinRanks(data2.bpe_ranks, name, id),
           // The same string as the module's pat_str (test/measure/tokens-split.test.ts checks it).
           pattern: BUILTIN_PATTERNS[name],
           shared: shared2,

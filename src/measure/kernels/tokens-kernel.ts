@@ -1,7 +1,7 @@
 // The token counter's WebAssembly kernel (tokens.c): splits a text under a builtin pattern,
 // looks its pieces up in a per-counter cache in the kernel's memory (calling back into
 // TypeScript for the pieces the cache lacks), runs the byte-pair merges of those pieces, and
-// counts each word's tokens alone for fertility. One instance per thread, made on first use;
+// counts each word's tokens alone for fertility; it also builds the builtins' rank tables. One instance per thread, made on first use;
 // every counter of the thread shares it and holds a cache of its own there.
 import { instantiateKernel, type KernelMemory } from './instance.js';
 import { WASM_BASE64 } from './tokens.generated.js';
@@ -16,7 +16,16 @@ interface TokensExports {
   continuedWords(): number;
   leftWords(): number;
   mergeCount(text: number, start: number, end: number, table: number): number;
+  scanBuiltinRanks(text: number, n: number): number;
+  scannedBytes(): number;
+  fillBuiltinRanks(text: number, n: number, table: number): number;
 }
+
+/** A rank table's header words and size in bytes, for its token count and token bytes (ranks.ts lays it out). */
+export type RankLayout = (count: number, arenaBytes: number) => { header: Int32Array; bytes: number };
+
+/** What buildRanks made: the table, or why there is none (the text is damaged, or token `duplicate` is listed twice). */
+export type BuiltRanks = { table: SharedArrayBuffer } | { damaged: true } | { duplicate: number };
 
 /** The kernel's numbers for the builtin split patterns. */
 export const KERNEL_PATTERN = { gpt2: 0, cl100k_base: 1, o200k_base: 2 } as const;
@@ -86,6 +95,35 @@ export class TokenKernel {
       this.rankTables.set(buffer, at);
     }
     return at;
+  }
+
+  /**
+   * Builds the rank table of a js-tiktoken builtin from its `bpe_ranks` text (ASCII) as
+   * ranks.ts's parseBuiltinRanks does, byte for byte, and copies it out to a SharedArrayBuffer
+   * that placeRanks then finds already placed. The text stays in the kernel's memory (this runs
+   * once a thread, for the main tokenizer and the baseline at most).
+   */
+  buildRanks(text: string, layout: RankLayout): BuiltRanks {
+    const n = text.length;
+    if (Buffer.byteLength(text, 'utf8') !== n) return { damaged: true };
+    // The text and a newline after it, which the kernel's loops stop at instead of checking the length.
+    const textAt = this.kernel.allocate(n + 1);
+    const bytes = Buffer.from(this.kernel.memory.buffer, textAt, n + 1);
+    bytes.write(text, 'latin1');
+    bytes[n] = 0x0a;
+    const count = this.kernel.scanBuiltinRanks(textAt, n);
+    if (count < 0) return { damaged: true };
+    const { header, bytes: size } = layout(count, this.kernel.scannedBytes());
+    const at = this.kernel.allocate(size);
+    const memory = this.kernel.memory.buffer;
+    new Int32Array(memory, at, header.length).set(header);
+    const result = this.kernel.fillBuiltinRanks(textAt, n, at);
+    if (result === -2) return { damaged: true };
+    if (result >= 0) return { duplicate: result };
+    const table = new SharedArrayBuffer(size);
+    new Uint8Array(table).set(new Uint8Array(this.kernel.memory.buffer, at, size));
+    this.rankTables.set(table, at);
+    return { table };
   }
 
   /** The byte-pair token count of the loaded text's [start, end) (at most MAX_MERGE_UNITS units) under the rank table placed at `ranks`. */

@@ -7,11 +7,14 @@
 // like them they stop at a surrogate, where the caller lets the regex decide one piece.
 // test/measure/tokens-split.test.ts holds these splitters to the patterns as it does the
 // TypeScript ones.
+// It also builds the rank tables of the builtin tokenizers from js-tiktoken's data
+// (fillBuiltinRanks), the bytes ranks.ts's parser builds, faster than that parser on a fresh thread.
 //
 // Build: node scripts/gen-kernels.mjs (clang --target=wasm32, wasm-ld; Debian packages
 // clang and lld). The binary is committed as a generated file beside this source.
 #include <stdint.h>
 
+typedef int8_t i8;
 typedef uint8_t u8;
 typedef uint16_t u16;
 typedef int32_t i32;
@@ -458,4 +461,155 @@ __attribute__((export_name("mergeCount"))) i32 mergeCount(const u16 *text, i32 s
     if (where > 0) pr[where - 1] = rank(b, s[where - 1], s[where + 1]);
   }
   return parts;
+}
+
+// ---- Building the rank table of a js-tiktoken builtin (ranks.ts parseBuiltinRanks, byte for
+// byte): its `bpe_ranks` text, in ASCII, is lines of `<tag> <first rank> <base64 token>...`, the
+// tokens one space apart and ranked from the first rank on. scanBuiltinRanks counts the tokens
+// and their bytes, so that the caller can lay the table out; fillBuiltinRanks writes it. Both take
+// the text followed by a newline.
+
+#define RANK_ARENA_BYTES 5
+
+static i32 scanned; // bytes of the tokens the last scanBuiltinRanks found
+
+__attribute__((export_name("scannedBytes"))) i32 scannedBytes(void) { return scanned; }
+
+// base64 value of each byte, -1 for a byte outside the alphabet.
+static const i8 BASE64[256] = {
+  -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1,
+  -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, 62, -1, -1, -1, 63, 52, 53, 54, 55, 56, 57, 58, 59, 60, 61, -1, -1, -1, -1, -1, -1,
+  -1, 0,  1,  2,  3,  4,  5,  6,  7,  8,  9,  10, 11, 12, 13, 14, 15, 16, 17, 18, 19, 20, 21, 22, 23, 24, 25, -1, -1, -1, -1, -1,
+  -1, 26, 27, 28, 29, 30, 31, 32, 33, 34, 35, 36, 37, 38, 39, 40, 41, 42, 43, 44, 45, 46, 47, 48, 49, 50, 51, -1, -1, -1, -1, -1,
+  -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1,
+  -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1,
+  -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1,
+  -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1, -1,
+};
+
+// The byte count of the base64 t[start, end), or -1 when its length and padding cannot be
+// base64 (ranks.ts decodeBase64's rules: padded to a multiple of 4, or unpadded but never one
+// character over; bits after the last whole byte are dropped). Its characters are not looked at.
+static i32 tokenBytes(const u8 *t, i32 start, i32 end) {
+  i32 length = end - start;
+  i32 pad = 0;
+  if (length > 0 && t[end - 1] == '=') pad = length > 1 && t[end - 2] == '=' ? 2 : 1;
+  if (length == 0 || (pad > 0 && length % 4 != 0) || (length - pad) % 4 == 1) return -1;
+  return (length - pad) * 6 / 8;
+}
+
+// Decodes the base64 t[start, end), of `bytes` bytes (tokenBytes), to out; returns 0, or -1
+// when a character is outside the alphabet.
+static i32 decodeToken(const u8 *t, i32 start, i32 bytes, u8 *out) {
+  i32 i = start;
+  i32 n = 0;
+  i32 bad = 0;
+  for (; n + 3 <= bytes; n += 3, i += 4) {
+    i32 a = BASE64[t[i]], b = BASE64[t[i + 1]], c = BASE64[t[i + 2]], d = BASE64[t[i + 3]];
+    bad |= a | b | c | d;
+    u32 v = ((u32)a << 18) | ((u32)b << 12) | ((u32)c << 6) | (u32)d;
+    out[n] = (u8)(v >> 16);
+    out[n + 1] = (u8)(v >> 8);
+    out[n + 2] = (u8)v;
+  }
+  if (n < bytes) {
+    // One or two bytes left, in two or three characters.
+    i32 a = BASE64[t[i]], b = BASE64[t[i + 1]], c = bytes - n == 2 ? BASE64[t[i + 2]] : 0;
+    bad |= a | b | c;
+    u32 v = ((u32)a << 18) | ((u32)b << 12) | ((u32)c << 6);
+    out[n] = (u8)(v >> 16);
+    if (bytes - n == 2) out[n + 1] = (u8)(v >> 8);
+  }
+  return bad < 0 ? -1 : 0;
+}
+
+// Walks the lines of t[0, n) (t[n] is a newline, the caller's sentinel); with a table, writes
+// each token's bytes, offset and rank. Returns the number of tokens, or -1 when the text is
+// damaged. One pass over the bytes: a field ends at the first byte at or below a space, which
+// must be a space or a newline.
+static i32 walkBuiltinRanks(const u8 *t, i32 n, double *ranks, i32 *offsets, u8 *bytes) {
+  i32 count = 0;
+  i32 used = 0;
+  if (offsets) offsets[0] = 0;
+  for (i32 p = 0; p < n; p++) {
+    if (t[p] == '\n') continue; // an empty line
+    // `<tag> `
+    while (t[p] > ' ') p++;
+    if (t[p] != ' ' || p >= n) return -1;
+    // The first rank: decimal digits (parseInt's, which stops at the first other character).
+    i32 q = ++p;
+    double rank = 0;
+    while (t[q] >= '0' && t[q] <= '9') rank = rank * 10 + (t[q++] - '0');
+    if (q == p || rank > 9007199254740991.0) return -1;
+    while (t[q] > ' ') q++;
+    p = q;
+    // ` <token>` until the newline; a space before it ends the line too.
+    while (t[p] == ' ' && p < n) {
+      i32 s = p + 1;
+      i32 e = s;
+      while (t[e] > ' ') e++;
+      if ((t[e] != ' ' && t[e] != '\n') || (e == s && t[e] == ' ')) return -1;
+      if (e == s) {
+        p = e;
+        break;
+      }
+      i32 size = tokenBytes(t, s, e);
+      if (size < 0 || (bytes && decodeToken(t, s, size, bytes + used) < 0)) return -1;
+      used += size;
+      if (ranks) {
+        ranks[count] = rank;
+        offsets[count + 1] = used;
+      }
+      rank += 1;
+      count++;
+      p = e;
+    }
+    if (t[p] != '\n') return -1;
+  }
+  scanned = used;
+  return count;
+}
+
+__attribute__((export_name("scanBuiltinRanks"))) i32 scanBuiltinRanks(const u8 *text, i32 n) { return walkBuiltinRanks(text, n, 0, 0, 0); }
+
+// Fills the table at `table` (its header's count, slot bits and arena size set from a scan of the
+// same text, the rest zero) as RankTable.build does; returns -1, or -2 when the text is damaged,
+// or the index of a token listed twice.
+__attribute__((export_name("fillBuiltinRanks"))) i32 fillBuiltinRanks(const u8 *text, i32 n, i32 *table) {
+  i32 count = table[RANK_COUNT];
+  u8 *at = (u8 *)(table + RANK_HEADER_WORDS);
+  double *ranks = (double *)at;
+  at += count * 8;
+  double *pairs = (double *)at;
+  at += (1 << 16) * 8;
+  i32 *offsets = (i32 *)at;
+  at += (count + 1) * 4;
+  i32 *slots = (i32 *)at;
+  u32 mask = (1u << table[RANK_SLOT_BITS]) - 1;
+  at += (mask + 1) * 4;
+  u8 *bytes = at;
+  if (walkBuiltinRanks(text, n, ranks, offsets, bytes) != count || scanned != table[RANK_ARENA_BYTES]) return -2;
+  for (i32 i = 0; i < 1 << 16; i++) pairs[i] = NO_RANK;
+  __builtin_memset(slots, 0, (mask + 1) * 4);
+  for (i32 i = 0; i < count; i++) {
+    i32 start = offsets[i];
+    i32 end = offsets[i + 1];
+    u32 h = 0x811c9dc5u;
+    for (i32 k = start; k < end; k++) h = (h ^ bytes[k]) * 0x01000193u;
+    for (u32 slot = h & mask;; slot = (slot + 1) & mask) {
+      i32 v = slots[slot];
+      if (v == 0) {
+        slots[slot] = i + 1;
+        break;
+      }
+      i32 from = offsets[v - 1];
+      if (offsets[v] - from == end - start) {
+        i32 k = 0;
+        while (k < end - start && bytes[from + k] == bytes[start + k]) k++;
+        if (k == end - start) return i;
+      }
+    }
+    if (end - start == 2) pairs[(bytes[start] << 8) | bytes[start + 1]] = ranks[i];
+  }
+  return -1;
 }

@@ -7,7 +7,7 @@ import type { TokenizerSpec } from '../../policy/types.js';
 import { TokenizerError } from './errors.js';
 import { createJsonCounter } from './hf.js';
 import { BUILTIN_NAMES, BUILTIN_PATTERNS, DEFAULT_RANK_FILE_PATTERN, isBuiltinName, type BuiltinName } from './patterns.js';
-import { parseBuiltinRanks, parseRankFile, RankTable } from './ranks.js';
+import { buildBuiltinRanks, parseRankFile, RankTable } from './ranks.js';
 import { DEFAULT_SHARED_ENTRIES, SharedPieceCounts } from './shared-counts.js';
 import { createRankCounter } from './tiktoken.js';
 import type { SharedTokenizerTables, TokenCounter } from './types.js';
@@ -70,7 +70,7 @@ export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = 
         return createRankCounter({
           id,
           label: name,
-          ranks: ranks ?? parseBuiltinRanks(data!.bpe_ranks, name, id),
+          ranks: ranks ?? buildBuiltinRanks(data!.bpe_ranks, name, id),
           // The same string as the module's pat_str (test/measure/tokens-split.test.ts checks it).
           pattern: BUILTIN_PATTERNS[name],
           shared,

@@ -8,7 +8,10 @@
 // process, tsx, shared 2-core machine under load): parsing js-tiktoken's data took 34-161 ms
 // against 107-325 ms, and every worker of a pooled run had parsed it again.
 
+import { kernelUnavailable } from '../kernels/instance.js';
+import { tokenKernel } from '../kernels/tokens-kernel.js';
 import { TokenizerError } from './errors.js';
+import { unitClasses } from './split.js';
 
 /** Rank of "no such token": above every real rank, so it never wins a merge. Ranks are doubles, since a rank file's ranks may pass 2^31. */
 export const NO_RANK = Infinity;
@@ -87,23 +90,17 @@ export class RankTable {
     this.arena = new Uint8Array(buffer, at, header[ARENA_BYTES]!);
   }
 
-  /** Returns the table in `buffer` (from another thread's table) when it was made for the tokenizer `owner`, else null. */
+  /** Returns the table in `buffer` (from another thread's table, or one the token kernel built) when it was made for the tokenizer `owner`, else null. */
   static attach(buffer: SharedArrayBuffer, owner: string): RankTable | null {
     return ownedBy(buffer, owner, MAGIC_VALUE, HEADER_WORDS) ? new RankTable(buffer) : null;
   }
 
   /** Builds a table from token bytes (concatenated in `arena`, token i at offsets[i]..offsets[i+1]) and ranks; `duplicate(i)` is called for a token listed before. */
   static build(owner: string, arena: Uint8Array, offsets: Int32Array, ranks: Float64Array, count: number, duplicate: (i: number) => void): RankTable {
-    let bits = 1;
-    while (1 << bits < count * 2) bits++;
     const arenaBytes = offsets[count]!;
-    const bytes = HEADER_WORDS * 4 + count * 8 + (1 << 16) * 8 + (count + 1) * 4 + (1 << bits) * 4 + arenaBytes;
-    const buffer = new SharedArrayBuffer(bytes);
-    const header = new Int32Array(buffer, 0, HEADER_WORDS);
-    header[COUNT] = count;
-    header[SLOT_BITS] = bits;
-    header[ARENA_BYTES] = arenaBytes;
-    stampOwner(header, owner, MAGIC_VALUE);
+    const layout = rankTableLayout(owner, count, arenaBytes);
+    const buffer = new SharedArrayBuffer(layout.bytes);
+    new Int32Array(buffer, 0, HEADER_WORDS).set(layout.header);
     const table = new RankTable(buffer);
     table.ranks.set(ranks.subarray(0, count));
     table.offsets.set(offsets.subarray(0, count + 1));
@@ -160,6 +157,18 @@ export class RankTable {
     }
     return missing;
   }
+}
+
+/** The header words and size in bytes of the table of `count` tokens of `arenaBytes` bytes in all, made for `owner`: slots for twice the tokens, a power of two. */
+export function rankTableLayout(owner: string, count: number, arenaBytes: number): { header: Int32Array; bytes: number } {
+  let bits = 1;
+  while (1 << bits < count * 2) bits++;
+  const header = new Int32Array(HEADER_WORDS);
+  header[COUNT] = count;
+  header[SLOT_BITS] = bits;
+  header[ARENA_BYTES] = arenaBytes;
+  stampOwner(header, owner, MAGIC_VALUE);
+  return { header, bytes: HEADER_WORDS * 4 + count * 8 + (1 << 16) * 8 + (count + 1) * 4 + (1 << bits) * 4 + arenaBytes };
 }
 
 /** Growable token list while parsing. */
@@ -273,7 +282,27 @@ export function parseRankFile(text: string, file: string, owner: string = file):
 const BASE64 = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/;
 const RANK = /^(?:0|[1-9][0-9]*)$/;
 
-/** Returns the rank table of a js-tiktoken builtin (`bpe_ranks`: lines of `<tag> <first rank> <base64 token>...`). */
+/**
+ * Returns the rank table of a js-tiktoken builtin, built by the token kernel (tokens.c
+ * fillBuiltinRanks), or by parseBuiltinRanks where WebAssembly is missing. The kernel builds the
+ * same bytes (test/measure/tokens-ranks.test.ts compares them for every builtin) in about half
+ * the time: o200k_base on a fresh thread, five processes of each, one build each, shared 2-core
+ * machine: 40-60 ms parsed here (the interpreter's and the optimiser's time more than the
+ * work's), 24-28 ms built by the kernel, its copy out to shared memory included. The main
+ * thread of every run that counts a token pays it before the first count, and the workers wait
+ * for it.
+ */
+export function buildBuiltinRanks(bpeRanks: string, name: string, owner: string = `builtin:${name}`): RankTable {
+  if (kernelUnavailable() !== null) return parseBuiltinRanks(bpeRanks, name, owner);
+  const built = tokenKernel(unitClasses).buildRanks(bpeRanks, (count, arenaBytes) => rankTableLayout(owner, count, arenaBytes));
+  if ('damaged' in built) throw new TokenizerError('load', name, 'builtin rank table is damaged');
+  if ('duplicate' in built) throw new TokenizerError('load', name, 'builtin rank table is damaged (a token is listed twice)');
+  const table = RankTable.attach(built.table, owner)!;
+  requireEveryByte(table, name);
+  return table;
+}
+
+/** Returns the rank table of a js-tiktoken builtin (`bpe_ranks`: lines of `<tag> <first rank> <base64 token>...`), parsed here. */
 export function parseBuiltinRanks(bpeRanks: string, name: string, owner: string = `builtin:${name}`): RankTable {
   const list = new TokenList();
   const n = bpeRanks.length;
