@@ -6,11 +6,11 @@
 // so text in an unlisted language is not forced into a listed one; a text with too
 // few letters, or one the detector cannot label, is `und`.
 import { parse } from 'bcp-47';
-import { iso6393To1, iso6393To2B } from 'iso-639-3';
 import type { DetectionSpec, LanguageSpec } from '../policy/types.js';
 import { MAJOR_LANGUAGES } from './language-candidates.js';
 import { createFrancLabeller, francLanguages, MAX_LENGTH, type FrancLabeller } from './language-franc.js';
 import { dominantScriptOf, scriptProfile } from './script.js';
+import { isoLanguages } from '../policy/data/iso-639-3.js';
 import { MACROLANGUAGE_MEMBERS } from '../policy/data/macrolanguages.js';
 
 /** Label for text in a language the policy does not list. */
@@ -49,15 +49,11 @@ let bibliographicCodes: Map<string, string> | undefined;
 export function iso6393Of(code: string): string | undefined {
   const c = code.toLowerCase();
   if (c.length === 2) {
-    twoLetterCodes ??= new Map(Object.entries(iso6393To1).map(([three, two]) => [two, three]));
+    twoLetterCodes ??= new Map(isoLanguages().flatMap((l) => (l.iso6391 ? [[l.iso6391, l.iso6393]] : [])));
     return twoLetterCodes.get(c);
   }
   if (c.length === 3) {
-    bibliographicCodes ??= new Map(
-      Object.entries(iso6393To2B)
-        .filter(([three, b]) => three !== b)
-        .map(([three, b]) => [b, three]),
-    );
+    bibliographicCodes ??= new Map(isoLanguages().flatMap((l) => (l.iso6392B && l.iso6392B !== l.iso6393 ? [[l.iso6392B, l.iso6393]] : [])));
     return bibliographicCodes.get(c) ?? c;
   }
   return undefined;

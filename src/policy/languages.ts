@@ -1,8 +1,8 @@
 // Language keys as a policy writes them (ISO 639-1 `hi`, ISO 639-3 `hin`,
 // BCP 47 `hi-IN` / `sr-Latn` / `zh-yue`) resolved to ISO 639-3 codes, with the
 // detector labels each one covers.
-import { iso6393 as ISO_639_3, type Language } from 'iso-639-3';
 import { parse as parseBcp47 } from 'bcp-47';
+import { isoLanguages, type IsoLanguage } from './data/iso-639-3.js';
 import { MACROLANGUAGE_MEMBERS } from './data/macrolanguages.js';
 import { lookUpScript } from './scripts.js';
 import { didYouMean, nearest } from './suggest.js';
@@ -38,19 +38,19 @@ export interface UnresolvedLanguage {
 }
 
 interface Tables {
-  by3: Map<string, Language>;
-  by1: Map<string, Language>;
-  by2B: Map<string, Language>;
-  byName: Map<string, Language>;
+  by3: Map<string, IsoLanguage>;
+  by1: Map<string, IsoLanguage>;
+  by2B: Map<string, IsoLanguage>;
+  byName: Map<string, IsoLanguage>;
 }
 
 let tables: Tables | undefined;
 
-/** Returns lookup tables over the iso-639-3 package, built once. */
+/** Returns lookup tables over the ISO 639-3 code table, built once. */
 function codeTables(): Tables {
   if (tables) return tables;
   const t: Tables = { by3: new Map(), by1: new Map(), by2B: new Map(), byName: new Map() };
-  for (const lang of ISO_639_3) {
+  for (const lang of isoLanguages()) {
     t.by3.set(lang.iso6393, lang);
     if (lang.iso6391) t.by1.set(lang.iso6391, lang);
     if (lang.iso6392B && lang.iso6392B !== lang.iso6393) t.by2B.set(lang.iso6392B, lang);
@@ -67,7 +67,7 @@ export function membersOf(code: string): readonly string[] {
 }
 
 /** Returns a resolved language for an ISO 639-3 entry. */
-function resolvedOf(lang: Language): ResolvedLanguage | UnresolvedLanguage {
+function resolvedOf(lang: IsoLanguage): ResolvedLanguage | UnresolvedLanguage {
   if (lang.scope === 'special') {
     return { ok: false, message: `\`${lang.iso6393}\` is a special ISO 639 code (${lang.name}), not a language` };
   }
