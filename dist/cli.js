@@ -6196,7 +6196,6 @@ function recordParser(textField, declaredLanguageField) {
 // src/read/source.ts
 import { createReadStream } from "node:fs";
 import { open } from "node:fs/promises";
-import { pipeline } from "node:stream";
 import { createGunzip } from "node:zlib";
 import { Decompress } from "fzstd";
 var READ_CHUNK_BYTES = 256 * 1024;
@@ -6252,12 +6251,52 @@ async function pumpGzip(source, write, pace) {
   let failedFirst;
   source.on("error", () => failedFirst ??= "read");
   gunzip.on("error", () => failedFirst ??= "gzip");
-  pipeline(source, gunzip, () => {
-  });
+  const fed = feedGzip(source, gunzip);
   const error = await drain(gunzip, write, pace);
+  await fed;
   const compressedBytes = gunzip.bytesWritten;
   if (error === void 0) return { compressedBytes };
   return { compressedBytes, error: failedFirst === "read" ? `read failed: ${error}` : `gzip: ${error}` };
+}
+var GZIP_TRAILER_BYTES = 8;
+async function feedGzip(source, gunzip) {
+  let held = Buffer.alloc(0);
+  try {
+    for await (const chunk of source) {
+      if (gunzip.destroyed) break;
+      const bytes3 = typeof chunk === "string" ? Buffer.from(chunk) : chunk;
+      const all = held.length === 0 ? bytes3 : Buffer.concat([held, bytes3]);
+      if (all.length <= GZIP_TRAILER_BYTES) {
+        held = all;
+        continue;
+      }
+      held = Buffer.from(all.subarray(all.length - GZIP_TRAILER_BYTES));
+      if (!gunzip.write(all.subarray(0, all.length - GZIP_TRAILER_BYTES))) await drainedOrClosed(gunzip);
+    }
+  } catch (error) {
+    gunzip.destroy(error instanceof Error ? error : new Error(String(error)));
+    return;
+  }
+  if (gunzip.destroyed) return;
+  if (held.length > 0) await closedOr(gunzip, (settle) => gunzip.write(held, settle));
+  if (!gunzip.destroyed) gunzip.end();
+}
+function drainedOrClosed(stream) {
+  return closedOr(stream, (settle) => stream.once("drain", settle));
+}
+function closedOr(stream, start) {
+  return new Promise((resolve) => {
+    if (stream.destroyed) {
+      resolve();
+      return;
+    }
+    const settle = () => {
+      stream.off("close", settle);
+      resolve();
+    };
+    stream.on("close", settle);
+    start(settle);
+  });
 }
 async function pumpZstd(source, write, pace) {
   let compressedBytes = 0;

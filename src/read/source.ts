@@ -3,8 +3,8 @@
 // a throw; an error thrown by the consumer is the consumer's and is thrown on.
 import { createReadStream } from 'node:fs';
 import { open } from 'node:fs/promises';
-import { pipeline, type Readable } from 'node:stream';
-import { createGunzip } from 'node:zlib';
+import type { Readable } from 'node:stream';
+import { createGunzip, type Gunzip } from 'node:zlib';
 import { Decompress } from 'fzstd';
 import type { ShardRef } from './types.js';
 
@@ -91,18 +91,76 @@ async function pumpGzip(source: Readable, write: (chunk: Buffer) => void, pace?:
   // createGunzip reads concatenated members (multi-member files, as `cat a.gz b.gz` makes) and reports a
   // stream cut short as "unexpected end of file".
   const gunzip = createGunzip({ chunkSize: GUNZIP_CHUNK_BYTES });
-  // Which failed first: pipeline passes either stream's error on to the other, so a corrupt stream
-  // also makes the source emit one (it was reported as a failed read).
+  // Which failed first: a read error is handed on to gunzip (where the iteration below sees it), and the
+  // message says which it was.
   let failedFirst: 'read' | 'gzip' | undefined;
   source.on('error', () => (failedFirst ??= 'read'));
   gunzip.on('error', () => (failedFirst ??= 'gzip'));
-  // pipeline forwards a read error on the source into gunzip, where the iteration below sees it.
-  pipeline(source, gunzip, () => {});
+  const fed = feedGzip(source, gunzip);
   const error = await drain(gunzip, write, pace);
+  await fed;
   // bytesWritten: compressed bytes taken in by the engine.
   const compressedBytes = gunzip.bytesWritten;
   if (error === undefined) return { compressedBytes };
   return { compressedBytes, error: failedFirst === 'read' ? `read failed: ${error}` : `gzip: ${error}` };
+}
+
+/** Bytes of a gzip member's trailer: CRC-32 and length of the uncompressed data (RFC 1952, 2.3). */
+const GZIP_TRAILER_BYTES = 8;
+
+/**
+ * Writes a gzip stream into gunzip with its last 8 bytes held back, writes those on their own, and
+ * ends gunzip only once they are taken in; never throws (a read error destroys gunzip with it).
+ *
+ * zlib hands on a write's partly filled output buffer only when the write completes, so the write
+ * that faults loses what it decompressed and had not handed on: up to one 128 KiB output chunk. And
+ * a write still queued when the stream is ended is decompressed as the finishing one, which is the
+ * write that faults on a stream cut short. So no write of text is the finishing one here (that is an
+ * empty write after the last), and a trailer whose CRC-32 or length does not match the data faults
+ * in a write of its own: in both cases every line before the fault is counted.
+ */
+async function feedGzip(source: Readable, gunzip: Gunzip): Promise<void> {
+  let held: Buffer = Buffer.alloc(0);
+  try {
+    for await (const chunk of source as AsyncIterable<Buffer | string>) {
+      if (gunzip.destroyed) break; // leaving the loop destroys the source
+      const bytes = typeof chunk === 'string' ? Buffer.from(chunk) : chunk;
+      const all = held.length === 0 ? bytes : Buffer.concat([held, bytes]);
+      if (all.length <= GZIP_TRAILER_BYTES) {
+        held = all;
+        continue;
+      }
+      held = Buffer.from(all.subarray(all.length - GZIP_TRAILER_BYTES));
+      if (!gunzip.write(all.subarray(0, all.length - GZIP_TRAILER_BYTES))) await drainedOrClosed(gunzip);
+    }
+  } catch (error) {
+    gunzip.destroy(error instanceof Error ? error : new Error(String(error)));
+    return;
+  }
+  if (gunzip.destroyed) return;
+  if (held.length > 0) await closedOr(gunzip, (settle) => gunzip.write(held, settle));
+  if (!gunzip.destroyed) gunzip.end();
+}
+
+/** Settles when a writable may take more, or is closed. */
+function drainedOrClosed(stream: Gunzip): Promise<void> {
+  return closedOr(stream, (settle) => stream.once('drain', settle));
+}
+
+/** Settles when `start` calls back, or when the stream closes first (a failed stream may never call back). */
+function closedOr(stream: Gunzip, start: (settle: () => void) => void): Promise<void> {
+  return new Promise((resolve) => {
+    if (stream.destroyed) {
+      resolve();
+      return;
+    }
+    const settle = (): void => {
+      stream.off('close', settle);
+      resolve();
+    };
+    stream.on('close', settle);
+    start(settle);
+  });
 }
 
 async function pumpZstd(source: Readable, write: (chunk: Buffer) => void, pace?: Pace): Promise<PumpResult> {

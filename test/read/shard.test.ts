@@ -2,7 +2,7 @@ import { createReadStream, mkdtempSync, readFileSync, readdirSync, rmSync, write
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { PassThrough, Readable } from 'node:stream';
-import { constants as zlibConstants, createGzip, gunzipSync, gzipSync } from 'node:zlib';
+import { constants as zlibConstants, createGzip, gunzipSync, gzipSync, inflateRawSync } from 'node:zlib';
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { init as zstdInit, compress as zstdCompress } from '@bokuweb/zstd-wasm';
@@ -301,6 +301,25 @@ describe('compressed shards', () => {
     expect(accountedLines(account)).toBe(account.lines);
   });
 
+  it('counts every line zlib can give of a truncated .gz read in many chunks', async () => {
+    // Hex text compresses about 2:1, so the cut file is read in several 256 KiB chunks (the test above
+    // reads one): whichever write zlib is given last, the lines it decompressed are counted.
+    const lines = Array.from({ length: 30_000 }, (_, i) => JSON.stringify({ text: `${i} ${randomBytes(48).toString('hex')}` }));
+    const gz = gzipSync(Buffer.from(`${lines.join('\n')}\n`));
+    const cut = gz.subarray(0, Math.floor(gz.length * 0.9));
+    expect(cut.length).toBeGreaterThan(4 * 256 * 1024);
+    // Reference: zlib itself, told to return what it can of the cut stream (Z_SYNC_FLUSH).
+    const prefix = gunzipSync(cut, { finishFlush: zlibConstants.Z_SYNC_FLUSH });
+    const complete = countLines(prefix.subarray(0, prefix.lastIndexOf(0x0a) + 1));
+    // As a file, and from memory in 64 KiB chunks, which all queue at once.
+    for (const ref of [fileShard('cut-long.jsonl.gz', cut, 'gzip'), memoryShard(cut, { compression: 'gzip', chunkBytes: 64 * 1024, path: 'cut-long.jsonl.gz' })]) {
+      const { account } = await readAll(ref);
+      expect(account.broken?.message).toMatch(/unexpected end of file/);
+      expect(account.lines).toBe(complete);
+      expect(account.broken?.afterLine).toBe(complete);
+    }
+  });
+
   it('reports a corrupt .gz as a gzip fault, not a failed read, with the lines decoded before it counted', async () => {
     const lines = Array.from({ length: 20_000 }, (_, i) => JSON.stringify({ text: `Line ${i} of the wire feed, about the harbour and the night shift at the desk.` })).join('\n');
     const gz = Buffer.from(gzipSync(Buffer.from(`${lines}\n`)));
@@ -324,6 +343,25 @@ describe('compressed shards', () => {
       expect(account.broken?.message).toMatch(/^gzip: /);
       expect(account.lines).toBeGreaterThan(1000);
       expect(account.broken?.afterLine).toBe(account.lines);
+      expect(accountedLines(account)).toBe(account.lines);
+    }
+  });
+
+  it('counts every line of a .gz whose trailer does not match its data, and reports it broken after the last', async () => {
+    const lines = Array.from({ length: 20_000 }, (_, i) => JSON.stringify({ text: `Item ${i} from the evening desk, filed after the late edition went to press.` }));
+    const plain = Buffer.from(`${lines.join('\n')}\n`);
+    const gz = Buffer.from(gzipSync(plain));
+    // RFC 1952, 2.3: a member ends with the CRC-32 and then the length of its data; flip a bit of each in turn.
+    for (const at of [gz.length - 8, gz.length - 2]) {
+      const bad = Buffer.from(gz);
+      bad[at]! ^= 0x01;
+      // Reference: zlib's raw inflate of the member's deflate data (after the 10-byte header, before the trailer) still gives all of it.
+      expect(inflateRawSync(bad.subarray(10, bad.length - 8)).equals(plain)).toBe(true);
+      const { account, docs } = await readAll(fileShard('trailer.jsonl.gz', bad, 'gzip'));
+      expect(account.broken?.message).toMatch(/^gzip: incorrect (data|length) check/);
+      expect(account.lines).toBe(20_000);
+      expect(account.broken?.afterLine).toBe(20_000);
+      expect(docs[19_999]!.text).toBe(JSON.parse(lines[19_999]!).text);
       expect(accountedLines(account)).toBe(account.lines);
     }
   });
