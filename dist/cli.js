@@ -10413,6 +10413,14 @@ function directIndex(a, b, c) {
   return (x | y | z) < 0 ? -1 : (x * 27 + y) * 27 + z;
 }
 var directId = new Int16Array(DIRECT).fill(-1);
+function isTrigramList(model) {
+  if (model.length % 4 !== 3) return false;
+  for (let i = 0; i < model.length; i++) {
+    const c = model.charCodeAt(i);
+    if (i % 4 === 3 ? c !== 124 : c === 0 || c === 124) return false;
+  }
+  return true;
+}
 function loadProfiles() {
   if (internBits > 0) return;
   let hashed = 0;
@@ -10423,7 +10431,8 @@ function loadProfiles() {
     for (const language in languages2) {
       const model = languages2[language];
       models.set(language, model);
-      for (const t of model.split("|")) if (directIndex(t.charCodeAt(0), t.charCodeAt(1), t.charCodeAt(2)) < 0) hashed++;
+      if (!isTrigramList(model)) throw new Error(`franc data: the profile of ${language} is not trigrams of three units joined by |`);
+      for (let i = 0; i < model.length; i += 4) if (directIndex(model.charCodeAt(i), model.charCodeAt(i + 1), model.charCodeAt(i + 2)) < 0) hashed++;
     }
     profiles.set(script, models);
   }
@@ -10431,10 +10440,7 @@ function loadProfiles() {
   internTable = new Int32Array(2 << internBits);
   for (const models of profiles.values()) {
     for (const model of models.values()) {
-      for (const t of model.split("|")) {
-        if (t.includes("\0")) throw new Error("franc data: a trigram with NUL, which countTrigrams uses as a sentinel");
-        internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), true);
-      }
+      for (let i = 0; i < model.length; i += 4) internedId(model.charCodeAt(i) << 16 | model.charCodeAt(i + 1), model.charCodeAt(i + 2), true);
     }
   }
   if (internCount >= 32767) throw new Error("franc data: too many trigrams for the 16-bit ids of internTable and directId");

@@ -199,6 +199,16 @@ function directIndex(a: number, b: number, c: number): number {
 /** Interned id of each direct-index trigram, -1 when in no profile (16 bits: half the cache lines of the hot loop's look-ups). */
 const directId = new Int16Array(DIRECT).fill(-1);
 
+/** Returns whether a profile is trigrams of three UTF-16 units joined by `|`, none holding NUL (countTrigrams' sentinel) or `|`. */
+function isTrigramList(model: string): boolean {
+  if (model.length % 4 !== 3) return false;
+  for (let i = 0; i < model.length; i++) {
+    const c = model.charCodeAt(i);
+    if (i % 4 === 3 ? c !== 0x7c : c === 0 || c === 0x7c) return false;
+  }
+  return true;
+}
+
 /** Interns every trigram of franc's data, once. */
 function loadProfiles(): void {
   if (internBits > 0) return;
@@ -210,7 +220,8 @@ function loadProfiles(): void {
     for (const language in languages) {
       const model = languages[language] as string;
       models.set(language, model);
-      for (const t of model.split('|')) if (directIndex(t.charCodeAt(0), t.charCodeAt(1), t.charCodeAt(2)) < 0) hashed++;
+      if (!isTrigramList(model)) throw new Error(`franc data: the profile of ${language} is not trigrams of three units joined by |`);
+      for (let i = 0; i < model.length; i += 4) if (directIndex(model.charCodeAt(i), model.charCodeAt(i + 1), model.charCodeAt(i + 2)) < 0) hashed++;
     }
     profiles.set(script, models);
   }
@@ -219,10 +230,9 @@ function loadProfiles(): void {
   internTable = new Int32Array(2 << internBits);
   for (const models of profiles.values()) {
     for (const model of models.values()) {
-      for (const t of model.split('|')) {
-        if (t.includes('\0')) throw new Error('franc data: a trigram with NUL, which countTrigrams uses as a sentinel');
-        internedId((t.charCodeAt(0) << 16) | t.charCodeAt(1), t.charCodeAt(2), true);
-      }
+      // Stepping over the string, not split('|'): 48,900 trigram strings made twice were two thirds of
+      // this on a fresh thread (a loop over franc's data alone: 12-17 ms with split, 4-8 ms so).
+      for (let i = 0; i < model.length; i += 4) internedId((model.charCodeAt(i) << 16) | model.charCodeAt(i + 1), model.charCodeAt(i + 2), true);
     }
   }
   if (internCount >= 0x7fff) throw new Error('franc data: too many trigrams for the 16-bit ids of internTable and directId');
