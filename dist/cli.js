@@ -5702,7 +5702,6 @@ async function loadPolicy(file, overrides = {}) {
 import { realpath, stat as stat2 } from "node:fs/promises";
 import { readdir } from "node:fs";
 import path4 from "node:path";
-import fg from "fast-glob";
 
 // src/read/classify.ts
 import iconv3 from "iconv-lite";
@@ -5776,6 +5775,7 @@ async function discoverShards(root, corpus) {
   const realRoot = await readableRoot(absRoot);
   const skipped = [];
   const lister = directoryLister(absRoot, realRoot, skipped);
+  const { default: fg } = await import("fast-glob");
   let entries;
   try {
     entries = await fg(corpus.include, {
