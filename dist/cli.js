@@ -4350,6 +4350,19 @@ function isoLanguages() {
   }
   return languages = out;
 }
+var tables;
+function isoTables() {
+  if (tables) return tables;
+  const t = { by3: /* @__PURE__ */ new Map(), by1: /* @__PURE__ */ new Map(), by2B: /* @__PURE__ */ new Map(), byName: /* @__PURE__ */ new Map() };
+  for (const lang of isoLanguages()) {
+    t.by3.set(lang.iso6393, lang);
+    if (lang.iso6391) t.by1.set(lang.iso6391, lang);
+    if (lang.iso6392B && lang.iso6392B !== lang.iso6393) t.by2B.set(lang.iso6392B, lang);
+    const name = lang.name.toLowerCase();
+    if (!t.byName.has(name)) t.byName.set(name, lang);
+  }
+  return tables = t;
+}
 
 // src/policy/data/macrolanguages.ts
 var MACROLANGUAGE_MEMBERS = {
@@ -5038,20 +5051,6 @@ var RESERVED_LANGUAGE_KEYS = {
   und: "text too short or unclear to label"
 };
 var NOT_A_CODE = "is not a language code; write ISO 639-1 (`hi`), ISO 639-3 (`hin`) or a BCP 47 tag (`hi-IN`, `sr-Latn`)";
-var tables;
-function codeTables() {
-  if (tables) return tables;
-  const t = { by3: /* @__PURE__ */ new Map(), by1: /* @__PURE__ */ new Map(), by2B: /* @__PURE__ */ new Map(), byName: /* @__PURE__ */ new Map() };
-  for (const lang of isoLanguages()) {
-    t.by3.set(lang.iso6393, lang);
-    if (lang.iso6391) t.by1.set(lang.iso6391, lang);
-    if (lang.iso6392B && lang.iso6392B !== lang.iso6393) t.by2B.set(lang.iso6392B, lang);
-    const name = lang.name.toLowerCase();
-    if (!t.byName.has(name)) t.byName.set(name, lang);
-  }
-  tables = t;
-  return t;
-}
 function membersOf(code) {
   return Object.hasOwn(MACROLANGUAGE_MEMBERS, code) ? MACROLANGUAGE_MEMBERS[code] : [];
 }
@@ -5062,7 +5061,7 @@ function resolvedOf(lang) {
   return { ok: true, iso6393: lang.iso6393, name: lang.name, covers: [lang.iso6393, ...membersOf(lang.iso6393)] };
 }
 function suggestionForName(key) {
-  const { byName } = codeTables();
+  const { byName } = isoTables();
   const exact = byName.get(key.toLowerCase());
   if (exact) return didYouMean(exact.iso6393);
   if (key.length < 4) return void 0;
@@ -5071,7 +5070,7 @@ function suggestionForName(key) {
   return lang ? `did you mean \`${lang.iso6393}\` (${lang.name})?` : void 0;
 }
 function resolvePrimary(code, written) {
-  const { by1, by3, by2B } = codeTables();
+  const { by1, by3, by2B } = isoTables();
   const lower = code.toLowerCase();
   if (lower.length === 2) {
     const lang = by1.get(lower);
@@ -14115,18 +14114,10 @@ function dominantScriptOf(profile) {
 // src/measure/language.ts
 var OTHER2 = "other";
 var UNDETERMINED = "und";
-var twoLetterCodes;
-var bibliographicCodes;
 function iso6393Of(code) {
   const c = code.toLowerCase();
-  if (c.length === 2) {
-    twoLetterCodes ??= new Map(isoLanguages().flatMap((l) => l.iso6391 ? [[l.iso6391, l.iso6393]] : []));
-    return twoLetterCodes.get(c);
-  }
-  if (c.length === 3) {
-    bibliographicCodes ??= new Map(isoLanguages().flatMap((l) => l.iso6392B && l.iso6392B !== l.iso6393 ? [[l.iso6392B, l.iso6393]] : []));
-    return bibliographicCodes.get(c) ?? c;
-  }
+  if (c.length === 2) return isoTables().by1.get(c)?.iso6393;
+  if (c.length === 3) return isoTables().by2B.get(c)?.iso6393 ?? c;
   return void 0;
 }
 function createLanguageDetector(languages2, detection) {

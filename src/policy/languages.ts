@@ -2,7 +2,7 @@
 // BCP 47 `hi-IN` / `sr-Latn` / `zh-yue`) resolved to ISO 639-3 codes, with the
 // detector labels each one covers.
 import { parse as parseBcp47 } from 'bcp-47';
-import { isoLanguages, type IsoLanguage } from './data/iso-639-3.js';
+import { isoTables, type IsoLanguage } from './data/iso-639-3.js';
 import { MACROLANGUAGE_MEMBERS } from './data/macrolanguages.js';
 import { lookUpScript } from './scripts.js';
 import { didYouMean, nearest } from './suggest.js';
@@ -37,30 +37,6 @@ export interface UnresolvedLanguage {
   suggestion?: string;
 }
 
-interface Tables {
-  by3: Map<string, IsoLanguage>;
-  by1: Map<string, IsoLanguage>;
-  by2B: Map<string, IsoLanguage>;
-  byName: Map<string, IsoLanguage>;
-}
-
-let tables: Tables | undefined;
-
-/** Returns lookup tables over the ISO 639-3 code table, built once. */
-function codeTables(): Tables {
-  if (tables) return tables;
-  const t: Tables = { by3: new Map(), by1: new Map(), by2B: new Map(), byName: new Map() };
-  for (const lang of isoLanguages()) {
-    t.by3.set(lang.iso6393, lang);
-    if (lang.iso6391) t.by1.set(lang.iso6391, lang);
-    if (lang.iso6392B && lang.iso6392B !== lang.iso6393) t.by2B.set(lang.iso6392B, lang);
-    const name = lang.name.toLowerCase();
-    if (!t.byName.has(name)) t.byName.set(name, lang);
-  }
-  tables = t;
-  return t;
-}
-
 /** Returns the macrolanguage members of a code (empty for an individual language). */
 export function membersOf(code: string): readonly string[] {
   return Object.hasOwn(MACROLANGUAGE_MEMBERS, code) ? MACROLANGUAGE_MEMBERS[code]! : [];
@@ -76,7 +52,7 @@ function resolvedOf(lang: IsoLanguage): ResolvedLanguage | UnresolvedLanguage {
 
 /** Returns the suggestion for a key that is not a code: the code of a language it names, or a near name. */
 function suggestionForName(key: string): string | undefined {
-  const { byName } = codeTables();
+  const { byName } = isoTables();
   const exact = byName.get(key.toLowerCase());
   if (exact) return didYouMean(exact.iso6393);
   if (key.length < 4) return undefined;
@@ -87,7 +63,7 @@ function suggestionForName(key: string): string | undefined {
 
 /** Returns a 2- or 3-letter primary language subtag resolved, or why not. */
 function resolvePrimary(code: string, written: string): ResolvedLanguage | UnresolvedLanguage {
-  const { by1, by3, by2B } = codeTables();
+  const { by1, by3, by2B } = isoTables();
   const lower = code.toLowerCase();
   if (lower.length === 2) {
     const lang = by1.get(lower);

@@ -28,3 +28,27 @@ export function isoLanguages(): readonly IsoLanguage[] {
   }
   return (languages = out);
 }
+
+/** The codes looked up by their 639-3, 639-1 and 639-2/B codes (B only where it differs) and lower-cased names (the first of a name). */
+export interface IsoTables {
+  by3: Map<string, IsoLanguage>;
+  by1: Map<string, IsoLanguage>;
+  by2B: Map<string, IsoLanguage>;
+  byName: Map<string, IsoLanguage>;
+}
+
+let tables: IsoTables | undefined;
+
+/** Returns the lookup tables over the code table, built once (the policy's language keys and the documents' declared tags use them). */
+export function isoTables(): IsoTables {
+  if (tables) return tables;
+  const t: IsoTables = { by3: new Map(), by1: new Map(), by2B: new Map(), byName: new Map() };
+  for (const lang of isoLanguages()) {
+    t.by3.set(lang.iso6393, lang);
+    if (lang.iso6391) t.by1.set(lang.iso6391, lang);
+    if (lang.iso6392B && lang.iso6392B !== lang.iso6393) t.by2B.set(lang.iso6392B, lang);
+    const name = lang.name.toLowerCase();
+    if (!t.byName.has(name)) t.byName.set(name, lang);
+  }
+  return (tables = t);
+}
