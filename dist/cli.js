@@ -17615,7 +17615,7 @@ var TokenKernel = class {
     if (result === -2) return { damaged: true };
     if (result >= 0) return { duplicate: result };
     const table3 = new SharedArrayBuffer(size);
-    new Uint8Array(table3).set(new Uint8Array(this.kernel.memory.buffer, at, size));
+    new Uint8Array(table3).set(new Uint8Array(memory, at, size));
     this.rankTables.set(table3, at);
     return { table: table3 };
   }

@@ -8,8 +8,8 @@
 // macrolanguage or special). Importing the package itself, a module of 7,867 object literals,
 // took 25-35 ms of every thread's start-up here; this module 5-6 ms to import and 6 ms to split
 // into rows, on first use (three runs each, `node -e` with performance.now(), shared 2-core
-// machine). The package stays the source, as a development dependency. test/policy/data.test.ts checks the
-// table against the package, so a new release of it shows up as a failing test until this is run.
+// machine). The package stays the source, as a development dependency. test/policy/data.test.ts
+// checks the table against the package, so a new release of it fails that test until this is run.
 import { readFileSync, writeFileSync } from 'node:fs';
 import { iso6393 } from 'iso-639-3';
 

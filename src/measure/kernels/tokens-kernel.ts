@@ -1,8 +1,9 @@
 // The token counter's WebAssembly kernel (tokens.c): splits a text under a builtin pattern,
 // looks its pieces up in a per-counter cache in the kernel's memory (calling back into
 // TypeScript for the pieces the cache lacks), runs the byte-pair merges of those pieces, and
-// counts each word's tokens alone for fertility; it also builds the builtins' rank tables. One instance per thread, made on first use;
-// every counter of the thread shares it and holds a cache of its own there.
+// counts each word's tokens alone for fertility; it also builds the builtins' rank tables. One
+// instance per thread, made on first use; every counter of the thread shares it and holds a cache
+// of its own there.
 import { instantiateKernel, type KernelMemory } from './instance.js';
 import { WASM_BASE64 } from './tokens.generated.js';
 
@@ -121,7 +122,7 @@ export class TokenKernel {
     if (result === -2) return { damaged: true };
     if (result >= 0) return { duplicate: result };
     const table = new SharedArrayBuffer(size);
-    new Uint8Array(table).set(new Uint8Array(this.kernel.memory.buffer, at, size));
+    new Uint8Array(table).set(new Uint8Array(memory, at, size));
     this.rankTables.set(table, at);
     return { table };
   }
