@@ -19848,9 +19848,21 @@ function limitOf(r) {
 function where(loc) {
   return loc.line === void 0 ? loc.path : `${loc.path}:${loc.line}`;
 }
+function firstRejections(report, limit) {
+  const shown = [];
+  for (const s of report.shards) {
+    for (const r of s.rejections) {
+      if (shown.length >= limit) break;
+      shown.push({ path: s.path, line: r.line, reason: r.reason, detail: r.detail });
+    }
+    if (shown.length >= limit) break;
+  }
+  return { shown, more: report.input.rejected.count - shown.length };
+}
 
 // src/render/markdown.ts
 var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\u2754" };
+var MAX_REJECTIONS_LISTED = 10;
 function renderMarkdown(report, opts = {}) {
   const out = [];
   const loc = (path5, line) => {
@@ -19973,6 +19985,9 @@ function renderMarkdown(report, opts = {}) {
   const reasons = Object.entries(i.rejected.byReason);
   if (reasons.length) out.push(`Rejected by reason: ${reasons.map(([r, n]) => `${r} ${count2(n)}`).join(", ")}.`, "");
   for (const b of i.broken) out.push(`- broken: ${loc(b.path)} after line ${b.afterLine}: ${escapeMarkdown(b.message)}`);
+  const rejections = firstRejections(report, MAX_REJECTIONS_LISTED);
+  for (const r of rejections.shown) out.push(`- rejected: ${loc(r.path, r.line)} ${r.reason}: ${escapeMarkdown(r.detail)}`);
+  if (rejections.more > 0) out.push(`- \u2026and ${counted(rejections.more, "more rejected line")} (each shard's first ones are in the JSON report)`);
   for (const s of i.skipped) out.push(`- skipped: ${codePath(s.path)} (${s.reason}): ${escapeMarkdown(s.detail)}`);
   const maxRows = opts.maxShardRows ?? 50;
   out.push("");
@@ -20073,10 +20088,15 @@ function renderTerminal(report, opts) {
       `Input: ${counted(i.lines, "line")} = ${count2(i.docLines)} in ${counted(i.docs, "document")} + ${count2(i.empty)} empty + ${count2(i.rejected.count)} rejected` + (Object.keys(i.rejected.byReason).length ? ` (${Object.entries(i.rejected.byReason).map(([k, n]) => `${k} ${n}`).join(", ")})` : "") + (i.skipped.length ? `; ${counted(i.skipped.length, "file")} skipped` : "") + (i.broken.length ? `; ${counted(i.broken.length, "shard")} broken` : "")
     )
   );
+  const shownAbove = report.rules.some((r) => r.rule === "input" && r.unit === "share" && r.verdict !== "pass" && r.locations.length > 0);
+  const rejections = shownAbove ? { shown: [], more: 0 } : firstRejections(report, MAX_REJECTIONS_SHOWN);
+  for (const r of rejections.shown) lines.push(`       ${dim("at")} ${clean2(where(r))}${dim(`  ${r.reason}: ${clean2(r.detail)}`)}`);
+  if (rejections.more > 0) lines.push(dim(`       and ${counted(rejections.more, "more rejected line")} (every shard's first ones are in the JSON report)`));
   lines.push(dim(`${fixed(report.timing.megabytesPerSecond, 1)} MB/s, ${report.timing.elapsedMs} ms, ${counted(report.timing.cacheHits, "shard")} from cache`));
   return `${lines.join("\n")}
 `;
 }
+var MAX_REJECTIONS_SHOWN = 3;
 function rank(r) {
   return r.verdict === "fail" ? 0 : r.verdict === "warn" ? 1 : r.verdict === "uncertain" ? 2 : 3;
 }

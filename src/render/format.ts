@@ -1,6 +1,8 @@
 // Number and text formatting shared by the views. Formatting only: every figure
 // is already in the report.
 
+import type { Report } from '../judge/types.js';
+
 /** Formats a share (0..1) as a percentage with one decimal, or an en dash for none. */
 export function percent(x: number | null | undefined): string {
   return x === null || x === undefined ? '–' : `${(x * 100).toFixed(1)} %`;
@@ -54,4 +56,17 @@ export function limitOf(r: { limit: number | null; unit: 'share' | 'count' | 'ra
 /** Returns a location as path:line. */
 export function where(loc: { path: string; line?: number }): string {
   return loc.line === undefined ? loc.path : `${loc.path}:${loc.line}`;
+}
+
+/** The first `limit` rejected lines of a report, in shard order, with how many more were rejected (some beyond each shard's kept samples). */
+export function firstRejections(report: Report, limit: number): { shown: Array<{ path: string; line: number; reason: string; detail: string }>; more: number } {
+  const shown: Array<{ path: string; line: number; reason: string; detail: string }> = [];
+  for (const s of report.shards) {
+    for (const r of s.rejections) {
+      if (shown.length >= limit) break;
+      shown.push({ path: s.path, line: r.line, reason: r.reason, detail: r.detail });
+    }
+    if (shown.length >= limit) break;
+  }
+  return { shown, more: report.input.rejected.count - shown.length };
 }

@@ -3,7 +3,7 @@
 import type { Report, RuleOutcome } from '../judge/types.js';
 import { bar } from './bars.js';
 import { codePath, escapeMarkdown as esc } from './escape.js';
-import { bytes, count, counted, fixed, inUnit, limitOf, percent, points } from './format.js';
+import { bytes, count, counted, firstRejections, fixed, inUnit, limitOf, percent, points } from './format.js';
 
 export interface MarkdownOptions {
   /** Links file:line locations to this URL prefix (e.g. a blob URL at the PR's head commit). */
@@ -17,6 +17,9 @@ export interface MarkdownOptions {
 const ICON: Record<RuleOutcome['verdict'], string> = { pass: '✅', warn: '⚠️', fail: '❌', uncertain: '❔' };
 
 /** Returns the report as GitHub-flavoured Markdown. */
+/** Rejected lines listed in the input section. */
+const MAX_REJECTIONS_LISTED = 10;
+
 export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): string {
   const out: string[] = [];
   const loc = (path: string, line?: number): string => {
@@ -156,6 +159,9 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
   const reasons = Object.entries(i.rejected.byReason);
   if (reasons.length) out.push(`Rejected by reason: ${reasons.map(([r, n]) => `${r} ${count(n)}`).join(', ')}.`, '');
   for (const b of i.broken) out.push(`- broken: ${loc(b.path)} after line ${b.afterLine}: ${esc(b.message)}`);
+  const rejections = firstRejections(report, MAX_REJECTIONS_LISTED);
+  for (const r of rejections.shown) out.push(`- rejected: ${loc(r.path, r.line)} ${r.reason}: ${esc(r.detail)}`);
+  if (rejections.more > 0) out.push(`- …and ${counted(rejections.more, 'more rejected line')} (each shard's first ones are in the JSON report)`);
   for (const s of i.skipped) out.push(`- skipped: ${codePath(s.path)} (${s.reason}): ${esc(s.detail)}`);
   const maxRows = opts.maxShardRows ?? 50;
   out.push('');

@@ -2,7 +2,7 @@
 // mix table. Colour only when asked (a TTY without NO_COLOR).
 import type { Report, RuleOutcome } from '../judge/types.js';
 import { bar } from './bars.js';
-import { bytes, count, counted, fixed, inUnit, limitOf, percent, points, where } from './format.js';
+import { bytes, count, counted, firstRejections, fixed, inUnit, limitOf, percent, points, where } from './format.js';
 
 export interface TerminalOptions {
   color: boolean;
@@ -110,9 +110,17 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
         (i.broken.length ? `; ${counted(i.broken.length, 'shard')} broken` : ''),
     ),
   );
+  // Where lines were rejected, unless a failing input rule has shown where above: the first few, in shard order.
+  const shownAbove = report.rules.some((r) => r.rule === 'input' && r.unit === 'share' && r.verdict !== 'pass' && r.locations.length > 0);
+  const rejections = shownAbove ? { shown: [], more: 0 } : firstRejections(report, MAX_REJECTIONS_SHOWN);
+  for (const r of rejections.shown) lines.push(`       ${dim('at')} ${clean(where(r))}${dim(`  ${r.reason}: ${clean(r.detail)}`)}`);
+  if (rejections.more > 0) lines.push(dim(`       and ${counted(rejections.more, 'more rejected line')} (every shard's first ones are in the JSON report)`));
   lines.push(dim(`${fixed(report.timing.megabytesPerSecond, 1)} MB/s, ${report.timing.elapsedMs} ms, ${counted(report.timing.cacheHits, 'shard')} from cache`));
   return `${lines.join('\n')}\n`;
 }
+
+/** Rejected lines the terminal view lists under the input line. */
+const MAX_REJECTIONS_SHOWN = 3;
 
 function rank(r: RuleOutcome): number {
   return r.verdict === 'fail' ? 0 : r.verdict === 'warn' ? 1 : r.verdict === 'uncertain' ? 2 : 3;

@@ -2,7 +2,7 @@
 // count: a typo'd policy, a missing field, no matching shards, a truncated .gz,
 // a non-UTF-8 file declared UTF-8, a 50 MB single line, a binary file.
 import { randomBytes } from 'node:crypto';
-import { writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
@@ -77,6 +77,30 @@ describe('broken shards are findings, and the scan goes on', () => {
     const s = r.report!.shards[0]!;
     expect(s).toMatchObject({ lines: 5, docs: 4, rejected: 1 });
     expect(s.rejections[0]).toMatchObject({ line: 3, reason: 'invalid-encoding' });
+  });
+
+  it('names where lines were rejected in the terminal and Markdown views, with no rule judging rejections', () => {
+    const bad = Buffer.concat([Buffer.from(lines(2, ENGLISH)), Buffer.from('[1, 2]\n{"text": 5}\n'), Buffer.from(lines(2, HINDI)), Buffer.from('{"body": "x"}\n{"text": "cut\n')]);
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/mixed.jsonl': bad });
+    const md = join(root, 'report.md');
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache', '--no-color', '--markdown', md]);
+    expect(r.status).toBe(0);
+    // The first three in the terminal, and how many more there are.
+    expect(r.stdout).toContain('at data/mixed.jsonl:3  not-an-object: the line parses to an array, not an object');
+    expect(r.stdout).toContain('at data/mixed.jsonl:4  non-string-text:');
+    expect(r.stdout).toContain('at data/mixed.jsonl:7  missing-text:');
+    expect(r.stdout).not.toContain('mixed.jsonl:8');
+    expect(r.stdout).toContain('and 1 more rejected line');
+    // All four in the Markdown.
+    const markdown = readFileSync(md, 'utf8');
+    for (const line of [3, 4, 7, 8]) expect(markdown).toContain(`- rejected: \`data/mixed.jsonl:${line}\``);
+  });
+
+  it('lists rejected lines once when a failing input rule already shows them', () => {
+    const root = corpus({ 'p.yaml': policyYaml('  input: { max-rejected: 0 }\n'), 'data/a.jsonl': `${lines(3, ENGLISH)}[1]\n` });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache', '--no-color']);
+    expect(r.status).toBe(1);
+    expect(r.stdout.match(/data\/a\.jsonl:4/g)).toHaveLength(1);
   });
 
   it('rejects a 50 MB single line without losing the lines around it', () => {
