@@ -807,6 +807,10 @@ function amount2(t, m, unit) {
 
 // src/judge/rules.ts
 var LOCATIONS_PER_RULE = 10;
+function signedPoints(off) {
+  const r = Math.round(off * 1e3) / 10;
+  return `${r > 0 ? "+" : r < 0 ? "\u2212" : "\xB1"}${Math.abs(r).toFixed(1)}`;
+}
 function pct(x) {
   return x === null ? "n/a" : `${(x * 100).toFixed(1)} %`;
 }
@@ -912,7 +916,7 @@ function judgeRules(policy, corpus, langs, sampled) {
         spec.target,
         "share",
         Math.abs(off) > rules.mix.tolerance + 1e-12,
-        `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} \xB1 ${(rules.mix.tolerance * 100).toFixed(1)} points (${off >= 0 ? "+" : ""}${(off * 100).toFixed(1)} points)`
+        `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} \xB1 ${(rules.mix.tolerance * 100).toFixed(1)} points (${signedPoints(off)} points)`
       );
       o.tolerance = rules.mix.tolerance;
       if (sampled) {

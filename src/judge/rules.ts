@@ -14,6 +14,12 @@ import type { LanguageFigures, Location, RuleOutcome, SamplingSetting, Verdict }
 export const LOCATIONS_PER_RULE = 10;
 
 /** Formats a share as a percentage with one decimal. */
+/** A share's distance from its target in points, signed as the views sign shifts: +8.3, −15.3 (U+2212), ±0.0. */
+function signedPoints(off: number): string {
+  const r = Math.round(off * 1000) / 10;
+  return `${r > 0 ? '+' : r < 0 ? '\u2212' : '±'}${Math.abs(r).toFixed(1)}`;
+}
+
 export function pct(x: number | null): string {
   return x === null ? 'n/a' : `${(x * 100).toFixed(1)} %`;
 }
@@ -143,7 +149,7 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
       const share = f ? (f.share[unit] ?? 0) : 0;
       const off = share - spec.target;
       const o = outcome(policy, 'mix', `language:${spec.key}`, share, spec.target, 'share', Math.abs(off) > rules.mix.tolerance + 1e-12,
-        `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} ± ${(rules.mix.tolerance * 100).toFixed(1)} points (${off >= 0 ? '+' : ''}${(off * 100).toFixed(1)} points)`);
+        `${spec.key} is ${pct(share)} of ${unit}, target ${pct(spec.target)} ± ${(rules.mix.tolerance * 100).toFixed(1)} points (${signedPoints(off)} points)`);
       o.tolerance = rules.mix.tolerance;
       if (sampled) {
         onSample(policy, o, sampled, sampled.share(spec.key, unit), unit === 'docs' ? 'wilson' : 'wilson-linearized',

@@ -29,6 +29,9 @@ describe('the newsroom demo', () => {
     const f = failed(r);
     // The skewing shard pushes English past 60 % ± 5 points of tokens.
     expect(f.some((o) => o.rule === 'mix' && o.scope === 'language:eng' && o.measured! > 0.65)).toBe(true);
+    // Shares off target are signed as the views sign shifts: + above, − (U+2212) below.
+    expect(f.find((o) => o.rule === 'mix' && o.scope === 'language:eng')!.message).toMatch(/\(\+\d+\.\d points\)$/);
+    expect(f.find((o) => o.rule === 'mix' && o.scope === 'language:hin')!.message).toMatch(/\(\u2212\d+\.\d points\)$/);
     // Romanised Hindi filed under Hindi: impure against Devanagari, and detected as something else.
     const script = f.find((o) => o.rule === 'script' && o.scope === 'language:hin');
     expect(script).toBeDefined();
