@@ -20148,7 +20148,8 @@ var UsageError = class extends Error {
 };
 function parseCli(argv, env, isTTY) {
   const [command, ...rest] = argv;
-  if (command === void 0 || command === "-h" || command === "--help" || command === "help") return { command: "help" };
+  if (command === void 0) throw new UsageError("no command given: use `sluice check`, `sluice scan` or `sluice merge`; try `sluice --help`");
+  if (command === "-h" || command === "--help" || command === "help") return { command: "help" };
   if (command === "-v" || command === "--version") return { command: "version" };
   if (command !== "check" && command !== "scan" && command !== "merge") throw new UsageError(`unknown command \`${command}\`; try \`sluice --help\``);
   let parsed;

@@ -73,7 +73,10 @@ export class UsageError extends Error {
 /** Returns the command the arguments ask for. */
 export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean): CliCommand {
   const [command, ...rest] = argv;
-  if (command === undefined || command === '-h' || command === '--help' || command === 'help') return { command: 'help' };
+  // No command at all is a usage error, not a request for help: in a CI step, a gate that
+  // exits 0 without judging anything would pass the merge unnoticed.
+  if (command === undefined) throw new UsageError('no command given: use `sluice check`, `sluice scan` or `sluice merge`; try `sluice --help`');
+  if (command === '-h' || command === '--help' || command === 'help') return { command: 'help' };
   if (command === '-v' || command === '--version') return { command: 'version' };
   if (command !== 'check' && command !== 'scan' && command !== 'merge') throw new UsageError(`unknown command \`${command}\`; try \`sluice --help\``);
   let parsed;

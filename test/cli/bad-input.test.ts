@@ -137,6 +137,14 @@ describe('the command line', () => {
     expect(r.stdout).toContain('sluice check');
   });
 
+  it('exits 2 with no command at all, so a CI step that forgot it does not pass the gate', () => {
+    const r = sluice([]);
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toContain('no command given');
+    expect(r.stderr.trim().split('\n')).toHaveLength(1);
+  });
+
   it('exits 2 on an unknown command, with a one-line reason', () => {
     const r = sluice(['chek']);
     expect(r.status).toBe(2);
