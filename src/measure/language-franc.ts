@@ -35,7 +35,7 @@ import { FRANC_CLASS_MASKS, FRANC_EXPRESSIONS, FRANC_RANGE_CLASSES, FRANC_RANGE_
 import { francKernel, type FrancKernel } from './kernels/franc-kernel.js';
 import { lazyRangeTable } from './range-table.js';
 
-/** franc's sample: the first 2048 UTF-16 units are enough to tell languages apart. */
+/** franc's sample: the first 2048 UTF-16 units are enough to tell languages apart (kernels/franc.c: MAX_SAMPLE, the same). */
 export const MAX_LENGTH = 2048;
 /** franc's default minimum text length (UTF-16 units) below which it answers `und`. */
 export const MIN_LENGTH = 10;
@@ -377,12 +377,13 @@ function placeTables(): void {
   const foldedAt = kernel.place(cleaningTable());
   const directAt = kernel.place(directId);
   const internAt = kernel.place(internTable);
-  const tallyAt = kernel.allocate(internCount * 2);
+  // One slot more than there are ids: the kernel counts trigrams no profile has there.
+  const tallyAt = kernel.allocate((internCount + 1) * 2);
   const distinctAt = kernel.allocate(SCRATCH_UNITS * 4);
   textAt = kernel.allocate(MAX_LENGTH * 2);
   cleanedAt = kernel.allocate(SCRATCH_UNITS * 2);
-  new Uint16Array(kernel.memory.buffer, tallyAt, internCount).fill(0);
-  kernel.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt);
+  new Uint16Array(kernel.memory.buffer, tallyAt, internCount + 1).fill(0);
+  kernel.setTables(foldedAt, directAt, internAt, internBits, tallyAt, distinctAt, internCount);
 }
 
 /**

@@ -3,7 +3,7 @@ import { WASM_BASE64 } from './franc.generated.js';
 import { instantiateKernel, type KernelMemory } from './instance.js';
 
 interface FrancExports {
-  setTables(folded: number, directId: number, internTable: number, internBits: number, idTally: number, distinctIds: number): void;
+  setTables(folded: number, directId: number, internTable: number, internBits: number, idTally: number, distinctIds: number, ids: number): void;
   sampleFlags(): number;
   countTrigrams(text: number, end: number): number;
   countCleaned(cleaned: number, n: number): number;
