@@ -19009,6 +19009,21 @@ function readOptionsOf(policy) {
 var AnalyzerSetupError = class extends Error {
   name = "AnalyzerSetupError";
 };
+async function readEvaluation(policy) {
+  const rule = policy.rules.contamination;
+  if (!rule) return void 0;
+  const found = await discoverShards(policy.root, { ...policy.corpus, include: rule.eval, exclude: [] });
+  if (found.shards.length === 0) {
+    throw new AnalyzerSetupError(`${policy.file}: rules.contamination.eval (${rule.eval.join(", ")}) matched no evaluation files under ${policy.root}`);
+  }
+  const read = readOptionsOf(policy);
+  const items = [];
+  for (const ref of found.shards) {
+    const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
+    if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
+  }
+  return { items, files: found.shards.map((s) => s.path) };
+}
 async function prepareAnalyzers(policy, options = {}) {
   const unavailable = kernelUnavailable();
   if (unavailable) throw new AnalyzerSetupError(unavailable);
@@ -19030,18 +19045,10 @@ async function prepareAnalyzers(policy, options = {}) {
   let evalFiles = [];
   if (policy.rules.contamination) {
     const rule = policy.rules.contamination;
-    const found = await discoverShards(policy.root, { ...policy.corpus, include: rule.eval, exclude: [] });
-    if (found.shards.length === 0) {
-      throw new AnalyzerSetupError(`${policy.file}: rules.contamination.eval (${rule.eval.join(", ")}) matched no evaluation files under ${policy.root}`);
-    }
-    const items = [];
-    for (const ref of found.shards) {
-      const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
-      if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
-    }
-    evalItems = items;
-    evalId = evalSetId(items, rule.ngram);
-    evalFiles = found.shards.map((s) => s.path);
+    const evaluation = options.evaluation ?? await readEvaluation(policy);
+    evalItems = evaluation?.items ?? [];
+    evalFiles = evaluation?.files ?? [];
+    evalId = evalSetId(evalItems, rule.ngram);
   }
   const settingsId = settingsIdOf({
     tool: TOOL_VERSION,
@@ -19104,6 +19111,7 @@ async function prepareAnalyzers(policy, options = {}) {
       }
     },
     settingsId,
+    ...evalItems ? { evaluation: { items: evalItems, files: evalFiles } } : {},
     scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId, ...policy.sampling ? { sampling: policy.sampling } : {} },
     analyzers,
     async finish(corpus, newShards) {
@@ -19462,8 +19470,8 @@ async function setupOrThrow(step) {
     throw err;
   }
 }
-async function prepareOrThrow(policy) {
-  return setupOrThrow(() => prepareAnalyzers(policy, { deferTokenizerData: true }));
+async function prepareOrThrow(policy, evaluation) {
+  return setupOrThrow(() => prepareAnalyzers(policy, { deferTokenizerData: true, ...evaluation ? { evaluation } : {} }));
 }
 async function measureCorpus(policy, opts, given = {}) {
   const started = performance.now();
@@ -19471,13 +19479,17 @@ async function measureCorpus(policy, opts, given = {}) {
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
   const early = [];
   const entry = opts.workerEntry;
+  let evaluation;
   if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && holdsAnything(opts.cacheDir))) {
     const threads = threadsFor(discovery.shards, opts);
-    const init = workerInitOf(policy, opts, "not yet known");
-    for (let w = 1; w < threads; w++) early.push(takePrestartedWorker(init) ?? startWorker(entry, init));
+    if (threads > 1) {
+      evaluation = await setupOrThrow(() => readEvaluation(policy));
+      const init = workerInitOf(policy, "not yet known", evaluation);
+      for (let w = 1; w < threads; w++) early.push(takePrestartedWorker(init) ?? startWorker(entry, init));
+    }
   }
   try {
-    const prepared = given.prepared ?? await prepareOrThrow(policy);
+    const prepared = given.prepared ?? await prepareOrThrow(policy, evaluation);
     const { results, cached } = await measureShards(policy, discovery.shards, prepared, opts, started, early);
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
@@ -19497,9 +19509,9 @@ function holdsAnything(dir) {
     return true;
   }
 }
-function workerInitOf(policy, opts, settingsId) {
-  const init = { role: "sluice-shard-worker", policyFile: policy.file, settingsId };
-  if (opts.root !== void 0) init.root = opts.root;
+function workerInitOf(policy, settingsId, evaluation) {
+  const init = { role: "sluice-shard-worker", policy, settingsId };
+  if (evaluation) init.evaluation = evaluation;
   return init;
 }
 function threadsFor(shards, opts) {
@@ -19571,7 +19583,7 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     const split = shardsToSplit(files, workers, opts.minSplitBytes);
     const whole = files.filter((r) => !split.has(r));
     const tail = tailShards(whole, workers);
-    const init = workerInitOf(policy, opts, prepared.settingsId);
+    const init = workerInitOf(policy, prepared.settingsId, prepared.evaluation);
     const pending = [];
     const plan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(
@@ -19744,8 +19756,7 @@ async function runShardWorker() {
   const init = await initOf(port);
   const post = (m) => port.postMessage(m);
   try {
-    const policy = await loadPolicyOrThrow(init.policyFile, init.root);
-    const prepared = await prepareAnalyzers(policy);
+    const prepared = await prepareAnalyzers(init.policy, init.evaluation ? { evaluation: init.evaluation } : {});
     port.on("message", (msg) => {
       if (msg.type === "close") {
         port.close();

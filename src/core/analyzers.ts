@@ -32,6 +32,14 @@ export interface PreparedAnalyzers {
   adoptCounts(tables: SharedCountTables): void;
   /** Loads what the analyzers deferred (with `deferTokenizerData`); await it before the first document is measured. */
   ready(): Promise<void>;
+  /** The evaluation set as read (contamination on), for the workers of a pooled run: see PrepareOptions.evaluation. */
+  evaluation?: EvaluationSet;
+}
+
+/** The evaluation items of a policy's contamination rule and the files they came from. */
+export interface EvaluationSet {
+  items: EvalItem[];
+  files: string[];
 }
 
 export interface PrepareOptions {
@@ -40,6 +48,11 @@ export interface PrepareOptions {
    * from the cache never imports it (about 30 ms of a warm run that takes half a second).
    */
   deferTokenizerData?: boolean;
+  /**
+   * The evaluation set another thread has read for this policy (readEvaluation): used as
+   * given instead of listing and reading the files again (see WorkerInit in pool.ts).
+   */
+  evaluation?: EvaluationSet;
 }
 
 /** Per tokenizer of a policy, its tables in shared memory: piece counts and ranks (see measure/tokens/shared-counts.ts, ranks.ts). */
@@ -58,6 +71,23 @@ export function readOptionsOf(policy: Policy): ReadOptions {
 /** A setting that cannot be used (tokenizer or evaluation files unreadable): the run cannot be judged. */
 export class AnalyzerSetupError extends Error {
   override name = 'AnalyzerSetupError';
+}
+
+/** Lists and reads the evaluation files of a policy's contamination rule (undefined without the rule); AnalyzerSetupError when none match or one cannot be read. */
+export async function readEvaluation(policy: Policy): Promise<EvaluationSet | undefined> {
+  const rule = policy.rules.contamination;
+  if (!rule) return undefined;
+  const found = await discoverShards(policy.root, { ...policy.corpus, include: rule.eval, exclude: [] });
+  if (found.shards.length === 0) {
+    throw new AnalyzerSetupError(`${policy.file}: rules.contamination.eval (${rule.eval.join(', ')}) matched no evaluation files under ${policy.root}`);
+  }
+  const read = readOptionsOf(policy);
+  const items: EvalItem[] = [];
+  for (const ref of found.shards) {
+    const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
+    if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
+  }
+  return { items, files: found.shards.map((s) => s.path) };
 }
 
 /** Returns the analyzers of a policy, ready to scan shards. */
@@ -89,18 +119,10 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
   let evalFiles: string[] = [];
   if (policy.rules.contamination) {
     const rule = policy.rules.contamination;
-    const found = await discoverShards(policy.root, { ...policy.corpus, include: rule.eval, exclude: [] });
-    if (found.shards.length === 0) {
-      throw new AnalyzerSetupError(`${policy.file}: rules.contamination.eval (${rule.eval.join(', ')}) matched no evaluation files under ${policy.root}`);
-    }
-    const items: EvalItem[] = [];
-    for (const ref of found.shards) {
-      const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
-      if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
-    }
-    evalItems = items;
-    evalId = evalSetId(items, rule.ngram);
-    evalFiles = found.shards.map((s) => s.path);
+    const evaluation = options.evaluation ?? (await readEvaluation(policy));
+    evalItems = evaluation?.items ?? [];
+    evalFiles = evaluation?.files ?? [];
+    evalId = evalSetId(evalItems, rule.ngram);
   }
 
   const settingsId = settingsIdOf({
@@ -171,6 +193,7 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
       }
     },
     settingsId,
+    ...(evalItems ? { evaluation: { items: evalItems, files: evalFiles } } : {}),
     scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId, ...(policy.sampling ? { sampling: policy.sampling } : {}) },
     analyzers,
     async finish(corpus, newShards) {

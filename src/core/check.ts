@@ -12,7 +12,7 @@ import type { CorpusResult } from '../results/corpus.js';
 import { contentIdOf, measureBatch, scanShard, scanShardInBatches, type BatchPlan } from '../results/scan.js';
 import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
-import { AnalyzerSetupError, prepareAnalyzers, type PreparedAnalyzers } from './analyzers.js';
+import { AnalyzerSetupError, prepareAnalyzers, readEvaluation, type EvaluationSet, type PreparedAnalyzers } from './analyzers.js';
 import { existsSync, opendirSync } from 'node:fs';
 import {
   canRunWorkers,
@@ -178,8 +178,8 @@ async function setupOrThrow<T>(step: () => Promise<T>): Promise<T> {
 }
 
 /** Returns the analyzers of a policy, or throws ConfigError when a tokenizer or evaluation file cannot be used. */
-export async function prepareOrThrow(policy: Policy): Promise<PreparedAnalyzers> {
-  return setupOrThrow(() => prepareAnalyzers(policy, { deferTokenizerData: true }));
+export async function prepareOrThrow(policy: Policy, evaluation?: EvaluationSet): Promise<PreparedAnalyzers> {
+  return setupOrThrow(() => prepareAnalyzers(policy, { deferTokenizerData: true, ...(evaluation ? { evaluation } : {}) }));
 }
 
 /**
@@ -195,17 +195,22 @@ export async function measureCorpus(
   const started = performance.now();
   const discovery = given.discovery ?? (await discoverOrThrow(policy));
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
-  // Workers load the policy and tokenizers themselves (about half a second each): when the run will
-  // need them and no cache can spare the work, they start now, alongside this thread's own loading.
+  // Workers load the bundle and build their analyzers themselves (about half a second each): when
+  // the run will need them and no cache can spare the work, they start now, alongside this
+  // thread's own loading, with the policy and the evaluation set this thread has read.
   const early: StartedWorker[] = [];
   const entry = opts.workerEntry;
+  let evaluation: EvaluationSet | undefined;
   if (!given.prepared && canRunWorkers(entry) && !(opts.cacheDir !== null && holdsAnything(opts.cacheDir))) {
     const threads = threadsFor(discovery.shards, opts);
-    const init = workerInitOf(policy, opts, 'not yet known');
-    for (let w = 1; w < threads; w++) early.push(takePrestartedWorker(init) ?? startWorker(entry, init));
+    if (threads > 1) {
+      evaluation = await setupOrThrow(() => readEvaluation(policy));
+      const init = workerInitOf(policy, 'not yet known', evaluation);
+      for (let w = 1; w < threads; w++) early.push(takePrestartedWorker(init) ?? startWorker(entry, init));
+    }
   }
   try {
-    const prepared = given.prepared ?? (await prepareOrThrow(policy));
+    const prepared = given.prepared ?? (await prepareOrThrow(policy, evaluation));
     const { results, cached } = await measureShards(policy, discovery.shards, prepared, opts, started, early);
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
@@ -229,9 +234,9 @@ function holdsAnything(dir: string): boolean {
 }
 
 /** Returns what a worker needs to rebuild this policy's analyzers. */
-function workerInitOf(policy: Policy, opts: CheckOptions, settingsId: string): WorkerInit {
-  const init: WorkerInit = { role: 'sluice-shard-worker', policyFile: policy.file, settingsId };
-  if (opts.root !== undefined) init.root = opts.root;
+function workerInitOf(policy: Policy, settingsId: string, evaluation: EvaluationSet | undefined): WorkerInit {
+  const init: WorkerInit = { role: 'sluice-shard-worker', policy, settingsId };
+  if (evaluation) init.evaluation = evaluation;
   return init;
 }
 
@@ -341,7 +346,7 @@ export async function measureShards(
     const split = shardsToSplit(files, workers, opts.minSplitBytes);
     const whole = files.filter((r) => !split.has(r));
     const tail = tailShards(whole, workers);
-    const init = workerInitOf(policy, opts, prepared.settingsId);
+    const init = workerInitOf(policy, prepared.settingsId, prepared.evaluation);
     const pending: Promise<void>[] = [];
     const plan: BatchPlan = { batchChars: BATCH_CHARS, inFlight: BATCHES_IN_FLIGHT_PER_THREAD * workers };
     await measureInPool(

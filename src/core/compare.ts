@@ -421,9 +421,8 @@ export async function withBaseTokenizer(policy: Policy, top: string, baseCommit:
 
 /** Returns the policy's report at head (the working tree) and at a base commit, and their comparison; unchanged shards are measured once. */
 export async function compareWithBase(givenPolicy: Policy, opts: CompareOptions): Promise<CompareResult> {
+  // Worker threads are handed this policy as it is (base tokenizer included), not its file.
   const policy = await withBaseTokenizer(givenPolicy, opts.top, opts.baseCommit, opts.baseLabel);
-  // Worker threads load the policy from its file, which does not name the base tokenizer: measure here instead.
-  if (policy !== givenPolicy) opts = { ...opts, check: { ...opts.check, workers: 1 } };
   const rootRel = await rootInRepo(opts.top, policy);
   const [headKeyOf, baseShards, renames] = await Promise.all([
     workingTreeKeys(opts.top, rootRel),

@@ -1,9 +1,9 @@
-// The worker side of the pool: rebuild the policy's analyzers once, then measure
+// The worker side of the pool: build the policy's analyzers once, from the policy and
+// evaluation set the main thread sends, then measure
 // each shard, or batch of a shard's documents, the main thread sends. Started from the same bundle as the front end.
 import { parentPort, workerData, isMainThread } from 'node:worker_threads';
 import { measureBatch, scanShard } from '../results/scan.js';
 import { prepareAnalyzers } from './analyzers.js';
-import { loadPolicyOrThrow } from './check.js';
 import { throwIfFaultInjected, transferablesOf, type FromWorker, type ToWorker, type WorkerInit } from './pool.js';
 
 /** A worker measuring a whole shard tells the main thread how far it has read every this many bytes. */
@@ -34,8 +34,7 @@ export async function runShardWorker(): Promise<void> {
   const init = await initOf(port);
   const post = (m: FromWorker): void => port.postMessage(m);
   try {
-    const policy = await loadPolicyOrThrow(init.policyFile, init.root);
-    const prepared = await prepareAnalyzers(policy);
+    const prepared = await prepareAnalyzers(init.policy, init.evaluation ? { evaluation: init.evaluation } : {});
     port.on('message', (msg: ToWorker) => {
       if (msg.type === 'close') {
         port.close();

@@ -30,7 +30,9 @@ const POLICY = policyYaml({ extraRules: '  fertility: { max-regression: 0.03 }' 
 const COMMON = ['the', 'council', 'ward', 'market', 'river', 'new', 'road', 'school', 'water', 'story'];
 
 describe('a pull request that changes the tokenizer file', () => {
-  it('is compared with the base branch tokenizer and fails when fertility rises', async () => {
+  // On one thread, and on two: the workers are handed the policy with the base tokenizer in it
+  // (a file written from git for this run), so they measure the baseline as this thread does.
+  it.each([['1'], ['2']])('is compared with the base branch tokenizer and fails when fertility rises (workers: %s)', async (workers) => {
     const api = await fakeGitHub();
     const { repo } = newsroomRepo(2, POLICY);
     repo.write('tok/newsroom.tiktoken', rankFile(COMMON));
@@ -38,7 +40,7 @@ describe('a pull request that changes the tokenizer file', () => {
     // The PR drops every merge: each word costs as many tokens as it has bytes.
     repo.write('tok/newsroom.tiktoken', rankFile([]));
     const head = repo.commit('Tokenizer without merges');
-    const run = await runBundle({ repo, event: 'pull_request', api, pr: { number: 61, baseSha: base, headSha: head } });
+    const run = await runBundle({ repo, event: 'pull_request', api, pr: { number: 61, baseSha: base, headSha: head }, inputs: { workers, cache: 'false' } });
     expect(run.code, run.stdout).toBe(1);
     const eng = (run.report as unknown as { languages: Record<string, { fertility: { tokenizer: string; fertility: number }; baseline: { tokenizer: string; fertility: number } }> }).languages.eng!;
     expect(eng.baseline.tokenizer).toMatch(/^tok\/newsroom\.tiktoken at /);

@@ -1,7 +1,8 @@
 // Shards that only the main thread can open (the Action reads the base tree's shards from git) are
 // read there and measured in batches by the workers: the results are those of one thread, and a
 // failure inside a worker still fails the run with the shard named.
-import { createReadStream } from 'node:fs';
+import { cpSync, createReadStream, mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { discoverOrThrow, loadPolicyOrThrow, measureShards, prepareOrThrow, type CheckOptions } from '../../src/core/check.js';
@@ -62,5 +63,38 @@ describe('shards only the main thread can open', () => {
     expect(seen.length).toBeGreaterThan(results.length);
     expect(seen.every((p, i) => i === 0 || p.bytes >= seen[i - 1]!.bytes)).toBe(true);
     expect(seen.at(-1)).toEqual({ bytes: total, shardsDone: results.length });
+  });
+});
+
+describe('the workers of a pooled run', () => {
+  it('measure under the policy and evaluation set the main thread loaded, not the files as they are later', async () => {
+    // The workers are handed the main thread's policy and evaluation items; they no longer read
+    // either from disk. So a policy file and an evaluation file that change (here: become
+    // unreadable YAML and an empty file) after the run has loaded them change nothing, and every
+    // thread measures under the same settings.
+    // A copy of the demo: its data, its policy, and an evaluation file of our own.
+    const dir = mkdtempSync(join(tmpdir(), 'sluice-worker-policy-'));
+    cpSync(join(REPO, 'examples/newsroom/data'), join(dir, 'data'), { recursive: true });
+    mkdirSync(join(dir, 'policies'));
+    mkdirSync(join(dir, 'evals'));
+    const evalFile = join(dir, 'evals', 'quiz.jsonl');
+    writeFileSync(evalFile, `${JSON.stringify({ text: 'an evaluation item that no story of the newsroom repeats, kept for this test only' })}\n`);
+    const file = join(dir, 'policies', 'policy.yaml');
+    writeFileSync(file, readFileSync(POLICY, 'utf8'));
+    try {
+      const policy = await loadPolicyOrThrow(file);
+      expect(policy.rules.contamination).toBeDefined();
+      const prepared = await prepareOrThrow(policy);
+      expect(prepared.evaluation?.items).toHaveLength(1);
+      const { shards } = await discoverOrThrow(policy);
+      const one = (await measureShards(policy, shards, prepared, { policies: [file], cacheDir: null, workers: 1 })).results;
+      writeFileSync(file, 'version: [this is no longer a policy\n');
+      writeFileSync(evalFile, '');
+      const pooled = (await measureShards(policy, shards, prepared, { policies: [file], cacheDir: null, workers: 3, workerEntry: ENTRY })).results;
+      expect(pooled.length).toBe(one.length);
+      expect(comparable(pooled)).toBe(comparable(one));
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });
