@@ -19001,6 +19001,7 @@ function summarizeDuplicates(f, languageKeys) {
 
 // src/core/analyzers.ts
 var REJECTION_SAMPLES = 10;
+var WARM_UP_TEXT = "A worker measures this sentence once, before its first shard, and keeps nothing of it.";
 function readOptionsOf(policy) {
   const opts = { textField: policy.corpus.text, maxLineBytes: policy.corpus.maxLineBytes, maxSamples: REJECTION_SAMPLES };
   if (policy.corpus.declaredLanguage !== void 0) opts.declaredLanguageField = policy.corpus.declaredLanguage;
@@ -19112,6 +19113,11 @@ async function prepareAnalyzers(policy, options = {}) {
     },
     settingsId,
     ...evalItems ? { evaluation: { items: evalItems, files: evalFiles } } : {},
+    warmUp() {
+      analyzers.measure({ text: WARM_UP_TEXT });
+      analyzers.duplicates?.().add({ ordinal: 0, line: 1, language: 0, text: WARM_UP_TEXT });
+      analyzers.contamination?.(WARM_UP_TEXT);
+    },
     scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId, ...policy.sampling ? { sampling: policy.sampling } : {} },
     analyzers,
     async finish(corpus, newShards) {
@@ -19793,6 +19799,10 @@ async function runShardWorker() {
       })();
     });
     post({ type: "ready", settingsId: prepared.settingsId });
+    try {
+      prepared.warmUp();
+    } catch {
+    }
   } catch (err) {
     post({ type: "error", id: null, message: err.message });
   }

@@ -34,7 +34,17 @@ export interface PreparedAnalyzers {
   ready(): Promise<void>;
   /** The evaluation set as read (contamination on), for the workers of a pooled run: see PrepareOptions.evaluation. */
   evaluation?: EvaluationSet;
+  /**
+   * Builds the tables the analyzers otherwise build at their first document (franc's profiles,
+   * the character class tables, the evaluation index) by measuring a short text and discarding
+   * the result. A worker calls it while it waits for the main thread's tokenizer tables; the
+   * token counters are left alone, since they would build rank tables of their own.
+   */
+  warmUp(): void;
 }
+
+/** The text warmUp measures: plain Latin-script prose, which every analyzer accepts. */
+const WARM_UP_TEXT = 'A worker measures this sentence once, before its first shard, and keeps nothing of it.';
 
 /** The evaluation items of a policy's contamination rule and the files they came from. */
 export interface EvaluationSet {
@@ -194,6 +204,11 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
     },
     settingsId,
     ...(evalItems ? { evaluation: { items: evalItems, files: evalFiles } } : {}),
+    warmUp() {
+      analyzers.measure({ text: WARM_UP_TEXT });
+      analyzers.duplicates?.().add({ ordinal: 0, line: 1, language: 0, text: WARM_UP_TEXT });
+      analyzers.contamination?.(WARM_UP_TEXT);
+    },
     scan: { read, languageKeys: policy.languages.map((l) => l.key), settingsId, ...(policy.sampling ? { sampling: policy.sampling } : {}) },
     analyzers,
     async finish(corpus, newShards) {
