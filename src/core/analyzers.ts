@@ -124,16 +124,10 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
   // The evaluation items are read now (their content keys the cache), and indexed at the first
   // document checked against them: a run whose shards all come from the cache never builds the
   // index (on the bench corpus, about a tenth of such a run's time, more for larger eval sets).
-  let evalItems: EvalItem[] | undefined;
-  let evalId: string | undefined;
-  let evalFiles: string[] = [];
-  if (policy.rules.contamination) {
-    const rule = policy.rules.contamination;
-    const evaluation = options.evaluation ?? (await readEvaluation(policy));
-    evalItems = evaluation?.items ?? [];
-    evalFiles = evaluation?.files ?? [];
-    evalId = evalSetId(evalItems, rule.ngram);
-  }
+  const contamination = policy.rules.contamination;
+  const evaluation = contamination ? (options.evaluation ?? (await readEvaluation(policy))) : undefined;
+  const evalItems = evaluation?.items;
+  const evalId = contamination && evalItems ? evalSetId(evalItems, contamination.ngram) : undefined;
 
   const settingsId = settingsIdOf({
     tool: TOOL_VERSION,
@@ -203,7 +197,7 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
       }
     },
     settingsId,
-    ...(evalItems ? { evaluation: { items: evalItems, files: evalFiles } } : {}),
+    ...(evaluation ? { evaluation } : {}),
     warmUp() {
       analyzers.measure({ text: WARM_UP_TEXT });
       analyzers.duplicates?.().add({ ordinal: 0, line: 1, language: 0, text: WARM_UP_TEXT });
@@ -239,8 +233,8 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
         corpus.duplicates = summarizeDuplicates(findings, policy.sampling ? [...keys, 'other', UNSAMPLED_LANGUAGE] : keys);
         if (findings.againstExisting) corpus.duplicatesAgainstExisting = findings.againstExisting;
       }
-      if (evalItems && policy.rules.contamination) {
-        corpus.contamination = { ngram: policy.rules.contamination.ngram, evalFiles, evalItems: evalItems.length };
+      if (evaluation && policy.rules.contamination) {
+        corpus.contamination = { ngram: policy.rules.contamination.ngram, evalFiles: evaluation.files, evalItems: evaluation.items.length };
       }
     },
   };
