@@ -57,14 +57,16 @@ static inline i32 hashedId(const i32 *restrict table, u32 bits, u32 hi, u32 lo) 
   }
 }
 
+// Counts trigram (a, b, c) and returns the new number of distinct ids. A trigram no profile has
+// is counted in the spare slot and never listed; a new id is written every time and kept only
+// when new: no branch on a coin flip either way.
 static inline i32 tally(u32 a, u32 b, u32 c, i32 sa, i32 sb, i32 sc, i32 distinct) {
   i32 id = (sa | sb | sc) >= 0 ? directId[(sa * 27 + sb) * 27 + sc] : hashedId(internTable, internBits, (a << 16) | b, c);
-  if (id < 0) return distinct;
-  u32 n = idTally[id];
-  idTally[id] = (u16)(n + 1);
-  // Written every time and kept only when new: no branch on a coin flip.
+  u32 slot = id < 0 ? absentSlot : (u32)id;
+  u32 n = idTally[slot];
+  idTally[slot] = (u16)(n + 1);
   distinctIds[distinct] = id;
-  return distinct + (n == 0);
+  return distinct + ((n == 0) & (id >= 0));
 }
 
 /** Sets the tallies of the last count back to 0. */
@@ -117,12 +119,7 @@ __attribute__((export_name("countTrigrams"))) i32 countTrigrams(const u16 *restr
   for (i32 p = 1; p < n; p++) {
     u32 c = compact[p];
     i32 sc = symbolOf(c);
-    i32 id = (sa | sb | sc) >= 0 ? directId[(sa * 27 + sb) * 27 + sc] : hashedId(internTable, internBits, (a << 16) | b, c);
-    u32 slot = id < 0 ? absentSlot : (u32)id;
-    u32 count = idTally[slot];
-    idTally[slot] = (u16)(count + 1);
-    distinctIds[distinct] = id;
-    distinct += (count == 0) & (id >= 0);
+    distinct = tally(a, b, c, sa, sb, sc, distinct);
     a = b;
     sa = sb;
     b = c;
