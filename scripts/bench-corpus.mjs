@@ -234,11 +234,27 @@ export const POLICY_FEATURES = {
   full: { tokenizer: true, duplicates: true, contamination: true },
 };
 
+/**
+ * Returns shares (summing to 1) rounded to thousandths that still sum to exactly 1: each is
+ * rounded down and the thousandths left over go to the largest remainders. Rounding each to
+ * the nearest can sum to 1.001, which the policy loader rejects (it did for a 200 MB corpus).
+ */
+export function thousandths(shares) {
+  const keys = Object.keys(shares);
+  const floors = Object.fromEntries(keys.map((k) => [k, Math.floor(shares[k] * 1000)]));
+  let left = 1000 - keys.reduce((a, k) => a + floors[k], 0);
+  for (const k of [...keys].sort((a, b) => shares[b] * 1000 - floors[b] - (shares[a] * 1000 - floors[a]) || (a < b ? -1 : 1))) {
+    if (left <= 0) break;
+    floors[k] += 1;
+    left -= 1;
+  }
+  return Object.fromEntries(keys.map((k) => [k, floors[k] / 1000]));
+}
+
 /** Returns the YAML of a benchmark policy over the corpus in `dir` with the given features on. */
 export function policyYaml(name, features, manifest) {
   const unit = features.tokenizer ? 'tokens' : 'bytes';
-  const targets = manifest.targets[unit];
-  const round = (x) => Math.round(x * 1000) / 1000;
+  const targets = thousandths(manifest.targets[unit]);
   const lines = [
     `# Benchmark policy \`${name}\`, written by scripts/bench-corpus.mjs. Targets are the corpus's own`,
     `# shares in ${unit}${unit === 'tokens' ? ' (estimated from a sample)' : ''}, so the mix rule measures without failing.`,
@@ -251,7 +267,7 @@ export function policyYaml(name, features, manifest) {
     '  declared-language: lang',
     '  subset: "data/{subset}/**"',
     'languages:',
-    ...LANGUAGES.map((l) => `  ${l.key}: { scripts: [${l.script}], target: ${round(targets[l.key])} }`),
+    ...LANGUAGES.map((l) => `  ${l.key}: { scripts: [${l.script}], target: ${targets[l.key]} }`),
   ];
   if (features.tokenizer) lines.push('tokenizer: { builtin: o200k_base }');
   lines.push(
