@@ -5,7 +5,6 @@ import { createHash } from 'node:crypto';
 import { readFile } from 'node:fs/promises';
 import type { TokenizerSpec } from '../../policy/types.js';
 import { TokenizerError } from './errors.js';
-import { createJsonCounter } from './hf.js';
 import { BUILTIN_NAMES, BUILTIN_PATTERNS, DEFAULT_RANK_FILE_PATTERN, isBuiltinName, type BuiltinName } from './patterns.js';
 import { buildBuiltinRanks, parseRankFile, RankTable } from './ranks.js';
 import { DEFAULT_SHARED_ENTRIES, SharedPieceCounts } from './shared-counts.js';
@@ -122,6 +121,9 @@ export async function loadTokenizer(spec: TokenizerSpec, options: LoadOptions = 
     } catch (cause) {
       throw new TokenizerError('load', spec.file, `not valid JSON: ${(cause as Error).message}`, { cause });
     }
+    // Imported here, not at the top: only a policy naming a tokenizer.json needs the library,
+    // and loading it cost every run about 10 ms of start-up (and as much on every worker).
+    const { createJsonCounter } = await import('./hf.js');
     return createJsonCounter(json, spec.file, `tokenizer.json:sha256:${digest}`, generationSize);
   }
   throw new TokenizerError('load', spec.file, `unknown tokenizer format ${JSON.stringify(spec.format)} (expected tokenizer.json or tiktoken)`);
