@@ -23249,6 +23249,10 @@ function formatPath(path5) {
   }
   return out;
 }
+function formatPolicyKeyProblem(policy, key, message) {
+  const at = policy.positions?.[key];
+  return formatProblem({ file: policy.file, ...at ? { line: at.line, column: at.column } : {}, path: key, message });
+}
 function formatProblem(p) {
   let where2 = p.file;
   if (p.line !== void 0) {
@@ -27724,6 +27728,8 @@ function parsePolicyDetailed(text, file, opts = {}) {
   );
   if (problems.length > 0) return failed();
   const policy = built.policy;
+  policy.positions = { "corpus.include": doc.locate(["corpus", "include"], "value") };
+  if (policy.rules.contamination) policy.positions["rules.contamination.eval"] = doc.locate(["rules", "contamination", "eval"], "value");
   return {
     result: { ok: true, policy, warnings: sorted(warnings) },
     files: built.files.map((f) => ({ ...f, position: doc.locate(f.path, "value") })),
@@ -41617,7 +41623,7 @@ async function readEvaluation(policy) {
   if (!rule) return void 0;
   const found = await discoverShards(policy.root, { ...policy.corpus, include: rule.eval, exclude: [] });
   if (found.shards.length === 0) {
-    throw new AnalyzerSetupError(`${policy.file}: rules.contamination.eval (${rule.eval.join(", ")}) matched no evaluation files under ${policy.root}`);
+    throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, "rules.contamination.eval", `(${rule.eval.join(", ")}) matched no evaluation files under ${policy.root}`));
   }
   const read = readOptionsOf(policy);
   const items = [];
@@ -42054,14 +42060,18 @@ async function discoverOrThrow(policy) {
   try {
     discovery = await discoverShards(policy.root, policy.corpus);
   } catch (err2) {
-    throw new ConfigError(`${policy.file}: ${err2.message}`);
+    throw new ConfigError(formatPolicyKeyProblem(policy, "corpus.include", err2.message));
   }
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
   return discovery;
 }
 function noShards(policy, skipped) {
   return new ConfigError(
-    `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(", ")}) under ${policy.root}` + (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0].path} (${skipped[0].reason})` : "")
+    formatPolicyKeyProblem(
+      policy,
+      "corpus.include",
+      `no shards matched (${policy.corpus.include.join(", ")}) under ${policy.root}` + (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0].path} (${skipped[0].reason})` : "")
+    )
   );
 }
 async function setupOrThrow(step) {

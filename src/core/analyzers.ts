@@ -5,6 +5,7 @@ import { relative } from 'node:path';
 import { createMeasurer, forEachWord, kernelUnavailable, wordOffsets } from '../measure/index.js';
 import { buildEvalIndex, duplicateOptionsFrom, DuplicateIndexBuilder, evalSetId, findContamination, type EvalIndex, type EvalItem } from '../measure/duplicates/index.js';
 import { dictionaryFertility, loadTokenizer, measureTokens, readWordList, TokenizerError, type SharedTokenizerTables, type TokenCounter } from '../measure/tokens/index.js';
+import { formatPolicyKeyProblem } from '../policy/index.js';
 import type { Policy } from '../policy/types.js';
 import { discoverShards, readShard } from '../read/index.js';
 import type { ReadOptions } from '../read/types.js';
@@ -89,7 +90,7 @@ export async function readEvaluation(policy: Policy): Promise<EvaluationSet | un
   if (!rule) return undefined;
   const found = await discoverShards(policy.root, { ...policy.corpus, include: rule.eval, exclude: [] });
   if (found.shards.length === 0) {
-    throw new AnalyzerSetupError(`${policy.file}: rules.contamination.eval (${rule.eval.join(', ')}) matched no evaluation files under ${policy.root}`);
+    throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, 'rules.contamination.eval', `(${rule.eval.join(', ')}) matched no evaluation files under ${policy.root}`));
   }
   const read = readOptionsOf(policy);
   const items: EvalItem[] = [];

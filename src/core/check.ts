@@ -3,7 +3,7 @@
 // at the edges; every figure is computed inside the stages.
 import { buildReport } from '../judge/report.js';
 import type { Report } from '../judge/types.js';
-import { formatProblem, loadPolicy } from '../policy/index.js';
+import { formatPolicyKeyProblem, formatProblem, loadPolicy } from '../policy/index.js';
 import type { Policy } from '../policy/types.js';
 import { discoverShards, textSizeHint } from '../read/index.js';
 import type { Discovery, ShardRef, SkippedFile } from '../read/types.js';
@@ -154,7 +154,7 @@ export async function discoverOrThrow(policy: Policy): Promise<Discovery> {
   try {
     discovery = await discoverShards(policy.root, policy.corpus);
   } catch (err) {
-    throw new ConfigError(`${policy.file}: ${(err as Error).message}`);
+    throw new ConfigError(formatPolicyKeyProblem(policy, 'corpus.include', (err as Error).message));
   }
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
   return discovery;
@@ -162,8 +162,12 @@ export async function discoverOrThrow(policy: Policy): Promise<Discovery> {
 
 function noShards(policy: Policy, skipped: readonly SkippedFile[]): ConfigError {
   return new ConfigError(
-    `${policy.file}: no shards matched corpus.include (${policy.corpus.include.join(', ')}) under ${policy.root}` +
-      (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0]!.path} (${skipped[0]!.reason})` : ''),
+    formatPolicyKeyProblem(
+      policy,
+      'corpus.include',
+      `no shards matched (${policy.corpus.include.join(', ')}) under ${policy.root}` +
+        (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0]!.path} (${skipped[0]!.reason})` : ''),
+    ),
   );
 }
 

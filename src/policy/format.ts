@@ -1,6 +1,6 @@
 // How policy problems are written for people: one line each, in the
 // `file:line:col: key.path: message` form that editors and CI logs turn into links.
-import type { PolicyProblem } from './types.js';
+import type { Policy, PolicyProblem, PositionedKey } from './types.js';
 
 /** A key path as segments: map keys are strings, list positions numbers. */
 export type KeyPath = readonly (string | number)[];
@@ -17,6 +17,12 @@ export function formatPath(path: KeyPath): string {
     else out += `[${JSON.stringify(seg)}]`;
   }
   return out;
+}
+
+/** Returns one line about a key of a loaded policy, `file:line:col: key: message`, its position left out when the policy does not have it. */
+export function formatPolicyKeyProblem(policy: Policy, key: PositionedKey, message: string): string {
+  const at = policy.positions?.[key];
+  return formatProblem({ file: policy.file, ...(at ? { line: at.line, column: at.column } : {}), path: key, message });
 }
 
 /** Returns one line: `file:line:col: key.path: message (did you mean `x`?)`; parts that are unknown are left out. */

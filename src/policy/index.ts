@@ -2,7 +2,7 @@
 // every later stage reads.
 export { loadPolicy, nearestGitRoot } from './load.js';
 export { parsePolicyText, POLICY_VERSION, type ParseOptions } from './parse.js';
-export { formatProblem, formatPath } from './format.js';
+export { formatProblem, formatPath, formatPolicyKeyProblem } from './format.js';
 export { resolveLanguageKey } from './languages.js';
 export { lookUpScript } from './scripts.js';
 export { BUILTIN_TOKENIZERS } from './build.js';

@@ -109,6 +109,8 @@ export function parsePolicyDetailed(text: string, file: string, opts: ParseOptio
   if (problems.length > 0) return failed();
 
   const policy: Policy = built.policy;
+  policy.positions = { 'corpus.include': doc.locate(['corpus', 'include'], 'value') };
+  if (policy.rules.contamination) policy.positions['rules.contamination.eval'] = doc.locate(['rules', 'contamination', 'eval'], 'value');
   return {
     result: { ok: true, policy, warnings: sorted(warnings) },
     files: built.files.map((f) => ({ ...f, position: doc.locate(f.path, 'value') })),

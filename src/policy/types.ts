@@ -156,6 +156,9 @@ export type TokenizerSpec =
     }
   | { kind: 'builtin'; name: 'gpt2' | 'r50k_base' | 'p50k_base' | 'cl100k_base' | 'o200k_base' };
 
+/** Keys whose values are checked against the files only when a run starts, and so are named with their position there. */
+export type PositionedKey = 'corpus.include' | 'rules.contamination.eval';
+
 export interface Policy {
   version: 1;
   /** Absolute path of the policy file. */
@@ -173,6 +176,8 @@ export interface Policy {
   tokenizer?: TokenizerSpec;
   baseline?: TokenizerSpec;
   sampling?: SamplingSpec;
+  /** Where the values of those keys are written in the policy file (1-based line and column), when it was read from YAML. */
+  positions?: Partial<Record<PositionedKey, { line: number; column: number }>>;
 }
 
 /** A policy that cannot be judged: file, 1-based line and column, key path, and a suggestion. */

@@ -38,7 +38,17 @@ describe('a policy that cannot be judged exits 2 with the file, line and key', (
     const root = corpus({ 'p.yaml': policyYaml(), 'other/a.jsonl': lines(3, ENGLISH) });
     const r = sluice(['check', join(root, 'p.yaml')]);
     expect(r.status).toBe(2);
-    expect(r.stderr).toContain('no shards matched corpus.include (data/**/*)');
+    // Line and column of the value in policyYaml(): `  include: ["data/**/*"]` is line 5.
+    expect(r.stderr).toContain('p.yaml:5:12: corpus.include: no shards matched (data/**/*)');
+  });
+
+  it('says where the evaluation glob is written when it matches no file', () => {
+    const rule = '  contamination: { eval: ["evals/*.jsonl"], ngram: 13, max-docs: 0 }\n';
+    const root = corpus({ 'p.yaml': policyYaml(rule), 'data/a.jsonl': lines(3, ENGLISH), 'eval/a.jsonl': lines(2, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('p.yaml:11:26: rules.contamination.eval: (evals/*.jsonl) matched no evaluation files');
+    expect(r.stdout).toBe('');
   });
 
   it('says when the policy file does not exist', () => {
