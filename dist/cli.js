@@ -41630,6 +41630,13 @@ async function readEvaluation(policy) {
   for (const ref of found.shards) {
     const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
     if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
+    if (account.rejected.count > 0) {
+      const first = account.rejected.samples.slice(0, 3).map((r) => `line ${r.line} (${r.reason}: ${r.detail})`).join("; ");
+      const more = account.rejected.count > 3 ? `, and ${account.rejected.count - 3} more` : "";
+      throw new AnalyzerSetupError(
+        `${ref.path}: ${account.rejected.count === 1 ? "1 line of this evaluation file is" : `${account.rejected.count} lines of this evaluation file are`} not an item the contamination check can use: ${first}${more}`
+      );
+    }
   }
   return { items, files: found.shards.map((s) => s.path) };
 }

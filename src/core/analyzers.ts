@@ -97,6 +97,18 @@ export async function readEvaluation(policy: Policy): Promise<EvaluationSet | un
   for (const ref of found.shards) {
     const account = await readShard(ref, read, (doc) => items.push({ file: ref.path, line: doc.line, text: doc.text }));
     if (account.broken) throw new AnalyzerSetupError(`${ref.path}: evaluation file could not be read to its end: ${account.broken.message}`);
+    // An evaluation item that cannot be read is one whose copies the check would not look for:
+    // the run cannot say the corpus is clean of the set, so it stops, naming the lines.
+    if (account.rejected.count > 0) {
+      const first = account.rejected.samples
+        .slice(0, 3)
+        .map((r) => `line ${r.line} (${r.reason}: ${r.detail})`)
+        .join('; ');
+      const more = account.rejected.count > 3 ? `, and ${account.rejected.count - 3} more` : '';
+      throw new AnalyzerSetupError(
+        `${ref.path}: ${account.rejected.count === 1 ? '1 line of this evaluation file is' : `${account.rejected.count} lines of this evaluation file are`} not an item the contamination check can use: ${first}${more}`,
+      );
+    }
   }
   return { items, files: found.shards.map((s) => s.path) };
 }

@@ -42,6 +42,22 @@ describe('a policy that cannot be judged exits 2 with the file, line and key', (
     expect(r.stderr).toContain('p.yaml:5:12: corpus.include: no shards matched (data/**/*)');
   });
 
+  it('stops on an evaluation line that is not an item, naming it, instead of checking for fewer items', () => {
+    // The copy in the shard would be found if the item were read: with it dropped, the check passed.
+    const item = 'Which ward of the district opened the first night school for bus drivers this winter, beside the old depot?';
+    const rule = '  contamination: { eval: ["evals/*.jsonl"], ngram: 13, max-docs: 0 }\n';
+    const evalLines = `${JSON.stringify({ text: item }).replace(/}$/, ',}')}\n${JSON.stringify({ id: 2 })}\n\n`;
+    const root = corpus({ 'p.yaml': policyYaml(rule), 'data/a.jsonl': lines(3, `${ENGLISH} ${item}`), 'evals/q.jsonl': evalLines });
+    const r = sluice(['check', join(root, 'p.yaml')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain('evals/q.jsonl: 2 lines of this evaluation file are not an item the contamination check can use: line 1 (invalid-json: ');
+    expect(r.stderr).toContain('line 2 (missing-text: ');
+    expect(r.stdout).toBe('');
+    // The same file without the broken lines: the copy is found (exit 1, the rule fails).
+    writeFileSync(join(root, 'evals/q.jsonl'), `${JSON.stringify({ text: item })}\n`);
+    expect(sluice(['check', join(root, 'p.yaml')]).status).toBe(1);
+  });
+
   it('says where the evaluation glob is written when it matches no file', () => {
     const rule = '  contamination: { eval: ["evals/*.jsonl"], ngram: 13, max-docs: 0 }\n';
     const root = corpus({ 'p.yaml': policyYaml(rule), 'data/a.jsonl': lines(3, ENGLISH), 'eval/a.jsonl': lines(2, ENGLISH) });
