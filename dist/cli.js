@@ -16486,13 +16486,13 @@ var require_async = __commonJS({
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
     function read(path5, settings, callback) {
-      settings.fs.lstat(path5, (lstatError, lstat) => {
+      settings.fs.lstat(path5, (lstatError, lstat2) => {
         if (lstatError !== null) {
           callFailureCallback(callback, lstatError);
           return;
         }
-        if (!lstat.isSymbolicLink() || !settings.followSymbolicLink) {
-          callSuccessCallback(callback, lstat);
+        if (!lstat2.isSymbolicLink() || !settings.followSymbolicLink) {
+          callSuccessCallback(callback, lstat2);
           return;
         }
         settings.fs.stat(path5, (statError, stat3) => {
@@ -16501,7 +16501,7 @@ var require_async = __commonJS({
               callFailureCallback(callback, statError);
               return;
             }
-            callSuccessCallback(callback, lstat);
+            callSuccessCallback(callback, lstat2);
             return;
           }
           if (settings.markSymbolicLink) {
@@ -16528,9 +16528,9 @@ var require_sync = __commonJS({
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
     function read(path5, settings) {
-      const lstat = settings.fs.lstatSync(path5);
-      if (!lstat.isSymbolicLink() || !settings.followSymbolicLink) {
-        return lstat;
+      const lstat2 = settings.fs.lstatSync(path5);
+      if (!lstat2.isSymbolicLink() || !settings.followSymbolicLink) {
+        return lstat2;
       }
       try {
         const stat3 = settings.fs.statSync(path5);
@@ -16540,7 +16540,7 @@ var require_sync = __commonJS({
         return stat3;
       } catch (error) {
         if (!settings.throwErrorOnBrokenSymbolicLink) {
-          return lstat;
+          return lstat2;
         }
         throw error;
       }
@@ -22749,11 +22749,13 @@ function judgeRules(policy, corpus, langs, sampled) {
   const out = [];
   const { rules } = policy;
   const n = (x) => sampled ? `\u2248${Math.round(x)}` : `${x}`;
-  const broken = [
-    ...corpus.shards.filter((s) => s.read.broken).map((s) => ({ path: s.path, line: s.read.broken.afterLine + 1, detail: s.read.broken.message })),
-    // Files the globs match but sluice cannot read make the report incomplete; links out of
-    // the root and second paths to one file are deliberate skips, reported but not judged.
-    ...corpus.skipped.filter((s) => s.reason === "unreadable" || s.reason === "unsupported-format" || s.reason === "not-a-file").map((s) => ({ path: s.path, detail: `${s.reason}: ${s.detail}` }))
+  const brokenOff = corpus.shards.filter((s) => s.read.broken).map((s) => ({ path: s.path, line: s.read.broken.afterLine + 1, detail: s.read.broken.message }));
+  const unreadable = corpus.skipped.filter((s) => s.reason === "unreadable" || s.reason === "unsupported-format" || s.reason === "not-a-file").map((s) => ({ path: s.path, detail: `${s.reason}: ${s.detail}` }));
+  const broken = [...brokenOff, ...unreadable];
+  const plural = (k, one, many) => `${k} ${k === 1 ? one : many}`;
+  const brokenParts = [
+    ...brokenOff.length ? [`${plural(brokenOff.length, "shard", "shards")} could not be read to the end (figures cover what was read before the break)`] : [],
+    ...unreadable.length ? [`${plural(unreadable.length, "matched file", "matched files")} could not be read at all`] : []
   ];
   out.push(
     outcome(
@@ -22764,10 +22766,27 @@ function judgeRules(policy, corpus, langs, sampled) {
       rules.input.maxBrokenShards,
       "count",
       broken.length > rules.input.maxBrokenShards,
-      broken.length === 0 ? corpus.shards.length === 1 ? "the one shard read to the end" : `all ${corpus.shards.length} shards read to the end` : `${broken.length} shard${broken.length === 1 ? "" : "s"} could not be read completely; figures cover only what was read before the break`,
+      broken.length === 0 ? corpus.shards.length === 1 ? "the one shard read to the end" : `all ${corpus.shards.length} shards read to the end` : brokenParts.join("; "),
       broken
     )
   );
+  if (corpus.tally.input.docs === 0) {
+    const { lines } = corpus.tally.input;
+    const locs = corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
+    out.push(
+      outcome(
+        policy,
+        "input",
+        "corpus",
+        0,
+        null,
+        "count",
+        true,
+        lines === 0 ? "no documents: the shards hold no lines" : `no documents: all ${plural(lines, "line", "lines")} read are empty or rejected`,
+        locs
+      )
+    );
+  }
   if (rules.input.maxRejected !== void 0) {
     const { lines, rejected } = corpus.tally.input;
     const share = ratio(rejected, lines) ?? 0;
@@ -27803,7 +27822,7 @@ async function loadPolicy(file, overrides = {}) {
 }
 
 // src/read/discover.ts
-import { realpath, stat as stat2 } from "node:fs/promises";
+import { lstat, realpath, stat as stat2 } from "node:fs/promises";
 import { readdir } from "node:fs";
 import path4 from "node:path";
 
@@ -27967,6 +27986,14 @@ function chooseOnePathPerFile(found, skipped) {
   }
   return kept;
 }
+async function exists(p) {
+  try {
+    await lstat(p);
+    return true;
+  } catch {
+    return false;
+  }
+}
 function directoryLister(absRoot, realRoot, skipped) {
   const realOf = /* @__PURE__ */ new Map();
   const resolve = (dir) => {
@@ -27983,6 +28010,7 @@ function directoryLister(absRoot, realRoot, skipped) {
     try {
       real = await resolve(dir);
     } catch (error) {
+      if (error.code === "ENOENT" && !await exists(dir)) return "skip";
       skipped.push({ path: rel, reason: "unreadable", detail: `cannot resolve the directory: ${messageOf(error)}` });
       return "skip";
     }
@@ -42077,7 +42105,7 @@ function noShards(policy, skipped) {
     formatPolicyKeyProblem(
       policy,
       "corpus.include",
-      `no shards matched (${policy.corpus.include.join(", ")}) under ${policy.root}` + (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0].path} (${skipped[0].reason})` : "")
+      `no shards matched (${policy.corpus.include.join(", ")}) under ${policy.root}` + (skipped.length ? `; ${skipped.length === 1 ? "1 path matched but was" : `${skipped.length} paths matched but were`} skipped, e.g. ${skipped[0].path} (${skipped[0].reason})` : "")
     )
   );
 }

@@ -166,7 +166,7 @@ function noShards(policy: Policy, skipped: readonly SkippedFile[]): ConfigError 
       policy,
       'corpus.include',
       `no shards matched (${policy.corpus.include.join(', ')}) under ${policy.root}` +
-        (skipped.length ? `; ${skipped.length} files matched but were skipped, e.g. ${skipped[0]!.path} (${skipped[0]!.reason})` : ''),
+        (skipped.length ? `; ${skipped.length === 1 ? '1 path matched but was' : `${skipped.length} paths matched but were`} skipped, e.g. ${skipped[0]!.path} (${skipped[0]!.reason})` : ''),
     ),
   );
 }

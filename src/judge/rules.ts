@@ -114,23 +114,38 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
   const n = (x: number): string => (sampled ? `≈${Math.round(x)}` : `${x}`);
 
   // input: broken shards, files matched but unreadable, rejected lines.
-  const broken: Location[] = [
-    ...corpus.shards.filter((s) => s.read.broken).map((s) => ({ path: s.path, line: s.read.broken!.afterLine + 1, detail: s.read.broken!.message })),
-    // Files the globs match but sluice cannot read make the report incomplete; links out of
-    // the root and second paths to one file are deliberate skips, reported but not judged.
-    ...corpus.skipped
-      .filter((s) => s.reason === 'unreadable' || s.reason === 'unsupported-format' || s.reason === 'not-a-file')
-      .map((s) => ({ path: s.path, detail: `${s.reason}: ${s.detail}` })),
+  const brokenOff: Location[] = corpus.shards
+    .filter((s) => s.read.broken)
+    .map((s) => ({ path: s.path, line: s.read.broken!.afterLine + 1, detail: s.read.broken!.message }));
+  // Files the globs match but sluice cannot read make the report incomplete; links out of
+  // the root and second paths to one file are deliberate skips, reported but not judged.
+  const unreadable: Location[] = corpus.skipped
+    .filter((s) => s.reason === 'unreadable' || s.reason === 'unsupported-format' || s.reason === 'not-a-file')
+    .map((s) => ({ path: s.path, detail: `${s.reason}: ${s.detail}` }));
+  const broken = [...brokenOff, ...unreadable];
+  const plural = (k: number, one: string, many: string): string => `${k} ${k === 1 ? one : many}`;
+  const brokenParts = [
+    ...(brokenOff.length ? [`${plural(brokenOff.length, 'shard', 'shards')} could not be read to the end (figures cover what was read before the break)`] : []),
+    ...(unreadable.length ? [`${plural(unreadable.length, 'matched file', 'matched files')} could not be read at all`] : []),
   ];
   out.push(
     outcome(
       policy, 'input', 'corpus', broken.length, rules.input.maxBrokenShards, 'count', broken.length > rules.input.maxBrokenShards,
       broken.length === 0
         ? corpus.shards.length === 1 ? 'the one shard read to the end' : `all ${corpus.shards.length} shards read to the end`
-        : `${broken.length} shard${broken.length === 1 ? '' : 's'} could not be read completely; figures cover only what was read before the break`,
+        : brokenParts.join('; '),
       broken,
     ),
   );
+  // A corpus with no document has nothing for the other rules to judge: their passing would say nothing.
+  if (corpus.tally.input.docs === 0) {
+    const { lines } = corpus.tally.input;
+    const locs = corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
+    out.push(
+      outcome(policy, 'input', 'corpus', 0, null, 'count', true,
+        lines === 0 ? 'no documents: the shards hold no lines' : `no documents: all ${plural(lines, 'line', 'lines')} read are empty or rejected`, locs),
+    );
+  }
   if (rules.input.maxRejected !== undefined) {
     const { lines, rejected } = corpus.tally.input;
     const share = ratio(rejected, lines) ?? 0;

@@ -8,7 +8,7 @@
 // reached under two paths (two links, or a hard link) is read once, under the path that has
 // no link in it when there is one, else under the first path in sort order; the other paths are
 // skipped as `same-file`, naming the path that is read.
-import { realpath, stat } from 'node:fs/promises';
+import { lstat, realpath, stat } from 'node:fs/promises';
 import { readdir, type Stats } from 'node:fs';
 import path from 'node:path';
 import type { CorpusSpec } from '../policy/types.js';
@@ -131,6 +131,16 @@ function chooseOnePathPerFile(found: Found[], skipped: SkippedFile[]): Found[] {
 }
 
 /** A readdir for fast-glob that does not list directories outside the root or loops back into the walk. */
+/** Returns whether anything (a link to nowhere included) is at a path. */
+async function exists(p: string): Promise<boolean> {
+  try {
+    await lstat(p);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 function directoryLister(absRoot: string, realRoot: string, skipped: SkippedFile[]) {
   const realOf = new Map<string, Promise<string>>();
   const resolve = (dir: string): Promise<string> => {
@@ -148,6 +158,10 @@ function directoryLister(absRoot: string, realRoot: string, skipped: SkippedFile
     try {
       real = await resolve(dir);
     } catch (error) {
+      // A glob's fixed part naming a directory that is not there (`archive/*.jsonl` with no
+      // archive/) matches nothing, as a glob naming a file that is not there does; a path that
+      // is there but cannot be resolved (a link to nowhere, no permission) is reported.
+      if ((error as NodeJS.ErrnoException).code === 'ENOENT' && !(await exists(dir))) return 'skip';
       skipped.push({ path: rel, reason: 'unreadable', detail: `cannot resolve the directory: ${messageOf(error)}` });
       return 'skip';
     }

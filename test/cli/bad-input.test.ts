@@ -58,6 +58,16 @@ describe('a policy that cannot be judged exits 2 with the file, line and key', (
     expect(sluice(['check', join(root, 'p.yaml')]).status).toBe(1);
   });
 
+  it('fails a corpus with no document, even when no rule limits rejected lines', () => {
+    // Every line rejected and no rules.input.max-rejected: the other rules have nothing to judge.
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/a.jsonl': `not json\n${JSON.stringify({ body: ENGLISH })}\n\n` });
+    const r = sluice(['check', join(root, 'p.yaml'), '--json', join(root, 'r.json')]);
+    expect(r.status).toBe(1);
+    expect(r.stdout).toContain('no documents: all 3 lines read are empty or rejected');
+    const report = JSON.parse(readFileSync(join(root, 'r.json'), 'utf8'));
+    expect(report.verdict).toBe('fail');
+  });
+
   it('says where the evaluation glob is written when it matches no file', () => {
     const rule = '  contamination: { eval: ["evals/*.jsonl"], ngram: 13, max-docs: 0 }\n';
     const root = corpus({ 'p.yaml': policyYaml(rule), 'data/a.jsonl': lines(3, ENGLISH), 'eval/a.jsonl': lines(2, ENGLISH) });

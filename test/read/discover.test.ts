@@ -128,6 +128,19 @@ describe('discoverShards', () => {
     expect(found.skipped.some((s) => s.path.startsWith('data/en/up/'))).toBe(false);
   });
 
+  it('matches nothing, silently, through a glob whose directory is not there, and reports a directory link to nowhere', async () => {
+    const gone = path.join(top, 'gone-dir');
+    symlinkSync(gone, path.join(root, 'dangling-dir'));
+    try {
+      const d = await discoverShards(root, corpus({ include: ['data/en/*.jsonl', 'archive/*.jsonl', 'archive/**/*.jsonl', 'dangling-dir/*.jsonl'] }));
+      expect(d.shards.map((s) => s.path)).toContain('data/en/wire-a.jsonl');
+      expect(d.skipped.filter((s) => s.path.startsWith('archive'))).toEqual([]);
+      expect(d.skipped.find((s) => s.path === 'dangling-dir')?.reason).toBe('unreadable');
+    } finally {
+      rmSync(path.join(root, 'dangling-dir'));
+    }
+  });
+
   it('reports a dangling link as unreadable', () => {
     expect(found.skipped.find((s) => s.path === 'data/en/dangling.jsonl')?.reason).toBe('unreadable');
   });
