@@ -3848,7 +3848,7 @@ var require_identity = __commonJS({
     var NODE_TYPE = /* @__PURE__ */ Symbol.for("yaml.node.type");
     var isAlias2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === ALIAS;
     var isDocument = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === DOC;
-    var isMap2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === MAP;
+    var isMap3 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === MAP;
     var isPair2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR;
     var isScalar2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SCALAR;
     var isSeq2 = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SEQ;
@@ -3884,7 +3884,7 @@ var require_identity = __commonJS({
     exports.isAlias = isAlias2;
     exports.isCollection = isCollection;
     exports.isDocument = isDocument;
-    exports.isMap = isMap2;
+    exports.isMap = isMap3;
     exports.isNode = isNode;
     exports.isPair = isPair2;
     exports.isScalar = isScalar2;
@@ -3912,17 +3912,17 @@ var require_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP;
     visit.REMOVE = REMOVE;
-    function visit_(key, node, visitor, path5) {
-      const ctrl = callVisitor(key, node, visitor, path5);
+    function visit_(key, node, visitor, path6) {
+      const ctrl = callVisitor(key, node, visitor, path6);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path5, ctrl);
-        return visit_(key, ctrl, visitor, path5);
+        replaceNode(key, path6, ctrl);
+        return visit_(key, ctrl, visitor, path6);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path5 = Object.freeze(path5.concat(node));
+          path6 = Object.freeze(path6.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = visit_(i, node.items[i], visitor, path5);
+            const ci = visit_(i, node.items[i], visitor, path6);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3933,13 +3933,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path5 = Object.freeze(path5.concat(node));
-          const ck = visit_("key", node.key, visitor, path5);
+          path6 = Object.freeze(path6.concat(node));
+          const ck = visit_("key", node.key, visitor, path6);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = visit_("value", node.value, visitor, path5);
+          const cv = visit_("value", node.value, visitor, path6);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -3960,17 +3960,17 @@ var require_visit = __commonJS({
     visitAsync.BREAK = BREAK;
     visitAsync.SKIP = SKIP;
     visitAsync.REMOVE = REMOVE;
-    async function visitAsync_(key, node, visitor, path5) {
-      const ctrl = await callVisitor(key, node, visitor, path5);
+    async function visitAsync_(key, node, visitor, path6) {
+      const ctrl = await callVisitor(key, node, visitor, path6);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path5, ctrl);
-        return visitAsync_(key, ctrl, visitor, path5);
+        replaceNode(key, path6, ctrl);
+        return visitAsync_(key, ctrl, visitor, path6);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path5 = Object.freeze(path5.concat(node));
+          path6 = Object.freeze(path6.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = await visitAsync_(i, node.items[i], visitor, path5);
+            const ci = await visitAsync_(i, node.items[i], visitor, path6);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3981,13 +3981,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path5 = Object.freeze(path5.concat(node));
-          const ck = await visitAsync_("key", node.key, visitor, path5);
+          path6 = Object.freeze(path6.concat(node));
+          const ck = await visitAsync_("key", node.key, visitor, path6);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = await visitAsync_("value", node.value, visitor, path5);
+          const cv = await visitAsync_("value", node.value, visitor, path6);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -4014,23 +4014,23 @@ var require_visit = __commonJS({
       }
       return visitor;
     }
-    function callVisitor(key, node, visitor, path5) {
+    function callVisitor(key, node, visitor, path6) {
       if (typeof visitor === "function")
-        return visitor(key, node, path5);
+        return visitor(key, node, path6);
       if (identity.isMap(node))
-        return visitor.Map?.(key, node, path5);
+        return visitor.Map?.(key, node, path6);
       if (identity.isSeq(node))
-        return visitor.Seq?.(key, node, path5);
+        return visitor.Seq?.(key, node, path6);
       if (identity.isPair(node))
-        return visitor.Pair?.(key, node, path5);
+        return visitor.Pair?.(key, node, path6);
       if (identity.isScalar(node))
-        return visitor.Scalar?.(key, node, path5);
+        return visitor.Scalar?.(key, node, path6);
       if (identity.isAlias(node))
-        return visitor.Alias?.(key, node, path5);
+        return visitor.Alias?.(key, node, path6);
       return void 0;
     }
-    function replaceNode(key, path5, node) {
-      const parent = path5[path5.length - 1];
+    function replaceNode(key, path6, node) {
+      const parent = path6[path6.length - 1];
       if (identity.isCollection(parent)) {
         parent.items[key] = node;
       } else if (identity.isPair(parent)) {
@@ -4642,10 +4642,10 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path5, value) {
+    function collectionFromPath(schema, path6, value) {
       let v = value;
-      for (let i = path5.length - 1; i >= 0; --i) {
-        const k = path5[i];
+      for (let i = path6.length - 1; i >= 0; --i) {
+        const k = path6[i];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
           const a = [];
           a[k] = v;
@@ -4664,7 +4664,7 @@ var require_Collection = __commonJS({
         sourceObjects: /* @__PURE__ */ new Map()
       });
     }
-    var isEmptyPath = (path5) => path5 == null || typeof path5 === "object" && !!path5[Symbol.iterator]().next().done;
+    var isEmptyPath = (path6) => path6 == null || typeof path6 === "object" && !!path6[Symbol.iterator]().next().done;
     var Collection = class extends Node.NodeBase {
       constructor(type, schema) {
         super(type);
@@ -4694,11 +4694,11 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path5, value) {
-        if (isEmptyPath(path5))
+      addIn(path6, value) {
+        if (isEmptyPath(path6))
           this.add(value);
         else {
-          const [key, ...rest] = path5;
+          const [key, ...rest] = path6;
           const node = this.get(key, true);
           if (identity.isCollection(node))
             node.addIn(rest, value);
@@ -4712,8 +4712,8 @@ var require_Collection = __commonJS({
        * Removes a value from the collection.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path5) {
-        const [key, ...rest] = path5;
+      deleteIn(path6) {
+        const [key, ...rest] = path6;
         if (rest.length === 0)
           return this.delete(key);
         const node = this.get(key, true);
@@ -4727,8 +4727,8 @@ var require_Collection = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path5, keepScalar) {
-        const [key, ...rest] = path5;
+      getIn(path6, keepScalar) {
+        const [key, ...rest] = path6;
         const node = this.get(key, true);
         if (rest.length === 0)
           return !keepScalar && identity.isScalar(node) ? node.value : node;
@@ -4746,8 +4746,8 @@ var require_Collection = __commonJS({
       /**
        * Checks if the collection includes a value with the key `key`.
        */
-      hasIn(path5) {
-        const [key, ...rest] = path5;
+      hasIn(path6) {
+        const [key, ...rest] = path6;
         if (rest.length === 0)
           return this.has(key);
         const node = this.get(key, true);
@@ -4757,8 +4757,8 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path5, value) {
-        const [key, ...rest] = path5;
+      setIn(path6, value) {
+        const [key, ...rest] = path6;
         if (rest.length === 0) {
           this.set(key, value);
         } else {
@@ -7273,9 +7273,9 @@ var require_Document = __commonJS({
           this.contents.add(value);
       }
       /** Adds a value to the document. */
-      addIn(path5, value) {
+      addIn(path6, value) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path5, value);
+          this.contents.addIn(path6, value);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -7350,14 +7350,14 @@ var require_Document = __commonJS({
        * Removes a value from the document.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path5) {
-        if (Collection.isEmptyPath(path5)) {
+      deleteIn(path6) {
+        if (Collection.isEmptyPath(path6)) {
           if (this.contents == null)
             return false;
           this.contents = null;
           return true;
         }
-        return assertCollection(this.contents) ? this.contents.deleteIn(path5) : false;
+        return assertCollection(this.contents) ? this.contents.deleteIn(path6) : false;
       }
       /**
        * Returns item at `key`, or `undefined` if not found. By default unwraps
@@ -7372,10 +7372,10 @@ var require_Document = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path5, keepScalar) {
-        if (Collection.isEmptyPath(path5))
+      getIn(path6, keepScalar) {
+        if (Collection.isEmptyPath(path6))
           return !keepScalar && identity.isScalar(this.contents) ? this.contents.value : this.contents;
-        return identity.isCollection(this.contents) ? this.contents.getIn(path5, keepScalar) : void 0;
+        return identity.isCollection(this.contents) ? this.contents.getIn(path6, keepScalar) : void 0;
       }
       /**
        * Checks if the document includes a value with the key `key`.
@@ -7386,10 +7386,10 @@ var require_Document = __commonJS({
       /**
        * Checks if the document includes a value at `path`.
        */
-      hasIn(path5) {
-        if (Collection.isEmptyPath(path5))
+      hasIn(path6) {
+        if (Collection.isEmptyPath(path6))
           return this.contents !== void 0;
-        return identity.isCollection(this.contents) ? this.contents.hasIn(path5) : false;
+        return identity.isCollection(this.contents) ? this.contents.hasIn(path6) : false;
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
@@ -7406,13 +7406,13 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path5, value) {
-        if (Collection.isEmptyPath(path5)) {
+      setIn(path6, value) {
+        if (Collection.isEmptyPath(path6)) {
           this.contents = value;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path5), value);
+          this.contents = Collection.collectionFromPath(this.schema, Array.from(path6), value);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path5, value);
+          this.contents.setIn(path6, value);
         }
       }
       /**
@@ -7996,9 +7996,9 @@ var require_resolve_flow_collection = __commonJS({
     var blockMsg = "Block collections are not allowed within flow collections";
     var isBlock = (token) => token && (token.type === "block-map" || token.type === "block-seq");
     function resolveFlowCollection({ composeNode, composeEmptyNode }, ctx, fc, onError, tag) {
-      const isMap2 = fc.start.source === "{";
-      const fcName = isMap2 ? "flow map" : "flow sequence";
-      const NodeClass = tag?.nodeClass ?? (isMap2 ? YAMLMap.YAMLMap : YAMLSeq.YAMLSeq);
+      const isMap3 = fc.start.source === "{";
+      const fcName = isMap3 ? "flow map" : "flow sequence";
+      const NodeClass = tag?.nodeClass ?? (isMap3 ? YAMLMap.YAMLMap : YAMLSeq.YAMLSeq);
       const coll = new NodeClass(ctx.schema);
       coll.flow = true;
       const atRoot = ctx.atRoot;
@@ -8034,7 +8034,7 @@ var require_resolve_flow_collection = __commonJS({
             offset = props.end;
             continue;
           }
-          if (!isMap2 && ctx.options.strict && utilContainsNewline.containsNewline(key))
+          if (!isMap3 && ctx.options.strict && utilContainsNewline.containsNewline(key))
             onError(
               key,
               // checked by containsNewline()
@@ -8074,7 +8074,7 @@ var require_resolve_flow_collection = __commonJS({
             }
           }
         }
-        if (!isMap2 && !sep && !props.found) {
+        if (!isMap3 && !sep && !props.found) {
           const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
@@ -8097,7 +8097,7 @@ var require_resolve_flow_collection = __commonJS({
             startOnNewline: false
           });
           if (valueProps.found) {
-            if (!isMap2 && !props.found && ctx.options.strict) {
+            if (!isMap3 && !props.found && ctx.options.strict) {
               if (sep)
                 for (const st of sep) {
                   if (st === valueProps.found)
@@ -8129,7 +8129,7 @@ var require_resolve_flow_collection = __commonJS({
           const pair = new Pair.Pair(keyNode, valueNode);
           if (ctx.options.keepSourceTokens)
             pair.srcToken = collItem;
-          if (isMap2) {
+          if (isMap3) {
             const map = coll;
             if (utilMapIncludes.mapIncludes(ctx, map.items, keyNode))
               onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
@@ -8145,7 +8145,7 @@ var require_resolve_flow_collection = __commonJS({
           offset = valueNode ? valueNode.range[2] : valueProps.end;
         }
       }
-      const expectedEnd = isMap2 ? "}" : "]";
+      const expectedEnd = isMap3 ? "}" : "]";
       const [ce, ...ee] = fc.end;
       let cePos = offset;
       if (ce?.source === expectedEnd)
@@ -9373,9 +9373,9 @@ var require_cst_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP;
     visit.REMOVE = REMOVE;
-    visit.itemAtPath = (cst, path5) => {
+    visit.itemAtPath = (cst, path6) => {
       let item = cst;
-      for (const [field, index2] of path5) {
+      for (const [field, index2] of path6) {
         const tok = item?.[field];
         if (tok && "items" in tok) {
           item = tok.items[index2];
@@ -9384,23 +9384,23 @@ var require_cst_visit = __commonJS({
       }
       return item;
     };
-    visit.parentCollection = (cst, path5) => {
-      const parent = visit.itemAtPath(cst, path5.slice(0, -1));
-      const field = path5[path5.length - 1][0];
+    visit.parentCollection = (cst, path6) => {
+      const parent = visit.itemAtPath(cst, path6.slice(0, -1));
+      const field = path6[path6.length - 1][0];
       const coll = parent?.[field];
       if (coll && "items" in coll)
         return coll;
       throw new Error("Parent collection not found");
     };
-    function _visit(path5, item, visitor) {
-      let ctrl = visitor(item, path5);
+    function _visit(path6, item, visitor) {
+      let ctrl = visitor(item, path6);
       if (typeof ctrl === "symbol")
         return ctrl;
       for (const field of ["key", "value"]) {
         const token = item[field];
         if (token && "items" in token) {
           for (let i = 0; i < token.items.length; ++i) {
-            const ci = _visit(Object.freeze(path5.concat([[field, i]])), token.items[i], visitor);
+            const ci = _visit(Object.freeze(path6.concat([[field, i]])), token.items[i], visitor);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -9411,10 +9411,10 @@ var require_cst_visit = __commonJS({
             }
           }
           if (typeof ctrl === "function" && field === "key")
-            ctrl = ctrl(item, path5);
+            ctrl = ctrl(item, path6);
         }
       }
-      return typeof ctrl === "function" ? ctrl(item, path5) : ctrl;
+      return typeof ctrl === "function" ? ctrl(item, path6) : ctrl;
     }
     exports.visit = visit;
   }
@@ -11489,8 +11489,8 @@ var require_utils = __commonJS({
       }
       return output;
     };
-    exports.basename = (path5, { windows } = {}) => {
-      const segs = path5.split(windows ? /[\\/]/ : "/");
+    exports.basename = (path6, { windows } = {}) => {
+      const segs = path6.split(windows ? /[\\/]/ : "/");
       const last = segs[segs.length - 1];
       if (last === "") {
         return segs[segs.length - 2];
@@ -12827,7 +12827,7 @@ var require_path = __commonJS({
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.convertPosixPathToPattern = exports.convertWindowsPathToPattern = exports.convertPathToPattern = exports.escapePosixPath = exports.escapeWindowsPath = exports.escape = exports.removeLeadingDotSegment = exports.makeAbsolute = exports.unixify = void 0;
     var os = __require("os");
-    var path5 = __require("path");
+    var path6 = __require("path");
     var IS_WINDOWS_PLATFORM = os.platform() === "win32";
     var LEADING_DOT_SEGMENT_CHARACTERS_COUNT = 2;
     var POSIX_UNESCAPED_GLOB_SYMBOLS_RE = /(\\?)([()*?[\]{|}]|^!|[!+@](?=\()|\\(?![!()*+?@[\]{|}]))/g;
@@ -12839,7 +12839,7 @@ var require_path = __commonJS({
     }
     exports.unixify = unixify;
     function makeAbsolute(cwd, filepath) {
-      return path5.resolve(cwd, filepath);
+      return path6.resolve(cwd, filepath);
     }
     exports.makeAbsolute = makeAbsolute;
     function removeLeadingDotSegment(entry) {
@@ -14136,7 +14136,7 @@ var require_braces = __commonJS({
 var require_constants3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/constants.js"(exports, module) {
     "use strict";
-    var path5 = __require("path");
+    var path6 = __require("path");
     var WIN_SLASH = "\\\\/";
     var WIN_NO_SLASH = `[^${WIN_SLASH}]`;
     var DEFAULT_MAX_EXTGLOB_RECURSION = 0;
@@ -14310,7 +14310,7 @@ var require_constants3 = __commonJS({
       /* | */
       CHAR_ZERO_WIDTH_NOBREAK_SPACE: 65279,
       /* \uFEFF */
-      SEP: path5.sep,
+      SEP: path6.sep,
       /**
        * Create EXTGLOB_CHARS
        */
@@ -14337,7 +14337,7 @@ var require_constants3 = __commonJS({
 var require_utils3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/utils.js"(exports) {
     "use strict";
-    var path5 = __require("path");
+    var path6 = __require("path");
     var win32 = process.platform === "win32";
     var {
       REGEX_BACKSLASH,
@@ -14366,7 +14366,7 @@ var require_utils3 = __commonJS({
       if (options && typeof options.windows === "boolean") {
         return options.windows;
       }
-      return win32 === true || path5.sep === "\\";
+      return win32 === true || path6.sep === "\\";
     };
     exports.escapeLast = (input, char, lastIdx) => {
       const idx = input.lastIndexOf(char, lastIdx);
@@ -15730,7 +15730,7 @@ var require_parse3 = __commonJS({
 var require_picomatch3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/picomatch.js"(exports, module) {
     "use strict";
-    var path5 = __require("path");
+    var path6 = __require("path");
     var scan3 = require_scan2();
     var parse2 = require_parse3();
     var utils = require_utils3();
@@ -15815,7 +15815,7 @@ var require_picomatch3 = __commonJS({
     };
     picomatch2.matchBase = (input, glob, options, posix = utils.isWindows(options)) => {
       const regex = glob instanceof RegExp ? glob : picomatch2.makeRe(glob, options);
-      return regex.test(path5.basename(input));
+      return regex.test(path6.basename(input));
     };
     picomatch2.isMatch = (str, patterns, options) => picomatch2(patterns, options)(str);
     picomatch2.parse = (pattern, options) => {
@@ -16042,7 +16042,7 @@ var require_pattern = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.isAbsolute = exports.partitionAbsoluteAndRelative = exports.removeDuplicateSlashes = exports.matchAny = exports.convertPatternsToRe = exports.makeRe = exports.getPatternParts = exports.expandBraceExpansion = exports.expandPatternsWithBraceExpansion = exports.isAffectDepthOfReadingPattern = exports.endsWithSlashGlobStar = exports.hasGlobStar = exports.getBaseDirectory = exports.isPatternRelatedToParentDirectory = exports.getPatternsOutsideCurrentDirectory = exports.getPatternsInsideCurrentDirectory = exports.getPositivePatterns = exports.getNegativePatterns = exports.isPositivePattern = exports.isNegativePattern = exports.convertToNegativePattern = exports.convertToPositivePattern = exports.isDynamicPattern = exports.isStaticPattern = void 0;
-    var path5 = __require("path");
+    var path6 = __require("path");
     var globParent = require_glob_parent();
     var micromatch = require_micromatch();
     var GLOBSTAR = "**";
@@ -16137,7 +16137,7 @@ var require_pattern = __commonJS({
     }
     exports.endsWithSlashGlobStar = endsWithSlashGlobStar;
     function isAffectDepthOfReadingPattern(pattern) {
-      const basename = path5.basename(pattern);
+      const basename = path6.basename(pattern);
       return endsWithSlashGlobStar(pattern) || isStaticPattern(basename);
     }
     exports.isAffectDepthOfReadingPattern = isAffectDepthOfReadingPattern;
@@ -16195,7 +16195,7 @@ var require_pattern = __commonJS({
     }
     exports.partitionAbsoluteAndRelative = partitionAbsoluteAndRelative;
     function isAbsolute(pattern) {
-      return path5.isAbsolute(pattern);
+      return path6.isAbsolute(pattern);
     }
     exports.isAbsolute = isAbsolute;
   }
@@ -16372,8 +16372,8 @@ var require_utils4 = __commonJS({
     exports.errno = errno;
     var fs = require_fs();
     exports.fs = fs;
-    var path5 = require_path();
-    exports.path = path5;
+    var path6 = require_path();
+    exports.path = path6;
     var pattern = require_pattern();
     exports.pattern = pattern;
     var stream = require_stream();
@@ -16485,8 +16485,8 @@ var require_async = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path5, settings, callback) {
-      settings.fs.lstat(path5, (lstatError, lstat2) => {
+    function read(path6, settings, callback) {
+      settings.fs.lstat(path6, (lstatError, lstat2) => {
         if (lstatError !== null) {
           callFailureCallback(callback, lstatError);
           return;
@@ -16495,7 +16495,7 @@ var require_async = __commonJS({
           callSuccessCallback(callback, lstat2);
           return;
         }
-        settings.fs.stat(path5, (statError, stat3) => {
+        settings.fs.stat(path6, (statError, stat3) => {
           if (statError !== null) {
             if (settings.throwErrorOnBrokenSymbolicLink) {
               callFailureCallback(callback, statError);
@@ -16527,13 +16527,13 @@ var require_sync = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path5, settings) {
-      const lstat2 = settings.fs.lstatSync(path5);
+    function read(path6, settings) {
+      const lstat2 = settings.fs.lstatSync(path6);
       if (!lstat2.isSymbolicLink() || !settings.followSymbolicLink) {
         return lstat2;
       }
       try {
-        const stat3 = settings.fs.statSync(path5);
+        const stat3 = settings.fs.statSync(path6);
         if (settings.markSymbolicLink) {
           stat3.isSymbolicLink = () => true;
         }
@@ -16604,19 +16604,19 @@ var require_out = __commonJS({
     var sync = require_sync();
     var settings_1 = require_settings();
     exports.Settings = settings_1.default;
-    function stat3(path5, optionsOrSettingsOrCallback, callback) {
+    function stat3(path6, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path5, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path6, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path5, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path6, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.stat = stat3;
-    function statSync(path5, optionsOrSettings) {
+    function statSync2(path6, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path5, settings);
+      return sync.read(path6, settings);
     }
-    exports.statSync = statSync;
+    exports.statSync = statSync2;
     function getSettings(settingsOrOptions = {}) {
       if (settingsOrOptions instanceof settings_1.default) {
         return settingsOrOptions;
@@ -16830,16 +16830,16 @@ var require_async2 = __commonJS({
           return;
         }
         const tasks = names.map((name) => {
-          const path5 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
+          const path6 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
           return (done) => {
-            fsStat.stat(path5, settings.fsStatSettings, (error, stats) => {
+            fsStat.stat(path6, settings.fsStatSettings, (error, stats) => {
               if (error !== null) {
                 done(error);
                 return;
               }
               const entry = {
                 name,
-                path: path5,
+                path: path6,
                 dirent: utils.fs.createDirentFromStats(name, stats)
               };
               if (settings.stats) {
@@ -16957,7 +16957,7 @@ var require_settings2 = __commonJS({
   "node_modules/@nodelib/fs.scandir/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path5 = __require("path");
+    var path6 = __require("path");
     var fsStat = require_out();
     var fs = require_fs4();
     var Settings = class {
@@ -16965,7 +16965,7 @@ var require_settings2 = __commonJS({
         this._options = _options;
         this.followSymbolicLinks = this._getValue(this._options.followSymbolicLinks, false);
         this.fs = fs.createFileSystemAdapter(this._options.fs);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path5.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path6.sep);
         this.stats = this._getValue(this._options.stats, false);
         this.throwErrorOnBrokenSymbolicLink = this._getValue(this._options.throwErrorOnBrokenSymbolicLink, true);
         this.fsStatSettings = new fsStat.Settings({
@@ -16992,17 +16992,17 @@ var require_out2 = __commonJS({
     var sync = require_sync2();
     var settings_1 = require_settings2();
     exports.Settings = settings_1.default;
-    function scandir(path5, optionsOrSettingsOrCallback, callback) {
+    function scandir(path6, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path5, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path6, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path5, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path6, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.scandir = scandir;
-    function scandirSync(path5, optionsOrSettings) {
+    function scandirSync(path6, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path5, settings);
+      return sync.read(path6, settings);
     }
     exports.scandirSync = scandirSync;
     function getSettings(settingsOrOptions = {}) {
@@ -17650,7 +17650,7 @@ var require_settings3 = __commonJS({
   "node_modules/@nodelib/fs.walk/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path5 = __require("path");
+    var path6 = __require("path");
     var fsScandir = require_out2();
     var Settings = class {
       constructor(_options = {}) {
@@ -17660,7 +17660,7 @@ var require_settings3 = __commonJS({
         this.deepFilter = this._getValue(this._options.deepFilter, null);
         this.entryFilter = this._getValue(this._options.entryFilter, null);
         this.errorFilter = this._getValue(this._options.errorFilter, null);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path5.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path6.sep);
         this.fsScandirSettings = new fsScandir.Settings({
           followSymbolicLinks: this._options.followSymbolicLinks,
           fs: this._options.fs,
@@ -17722,7 +17722,7 @@ var require_reader2 = __commonJS({
   "node_modules/fast-glob/out/readers/reader.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path5 = __require("path");
+    var path6 = __require("path");
     var fsStat = require_out();
     var utils = require_utils4();
     var Reader = class {
@@ -17735,7 +17735,7 @@ var require_reader2 = __commonJS({
         });
       }
       _getFullEntryPath(filepath) {
-        return path5.resolve(this._settings.cwd, filepath);
+        return path6.resolve(this._settings.cwd, filepath);
       }
       _makeEntry(stats, pattern) {
         const entry = {
@@ -18151,7 +18151,7 @@ var require_provider = __commonJS({
   "node_modules/fast-glob/out/providers/provider.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path5 = __require("path");
+    var path6 = __require("path");
     var deep_1 = require_deep();
     var entry_1 = require_entry();
     var error_1 = require_error();
@@ -18165,7 +18165,7 @@ var require_provider = __commonJS({
         this.entryTransformer = new entry_2.default(this._settings);
       }
       _getRootDirectory(task) {
-        return path5.resolve(this._settings.cwd, task.base);
+        return path6.resolve(this._settings.cwd, task.base);
       }
       _getReaderOptions(task) {
         const basePath = task.base === "." ? "" : task.base;
@@ -21886,7 +21886,9 @@ var init_hf = __esm({
 });
 
 // src/cli/main.ts
+import { statSync } from "node:fs";
 import { writeFile as writeFile2 } from "node:fs/promises";
+import path5 from "node:path";
 
 // src/judge/report.ts
 import { relative } from "node:path";
@@ -23259,9 +23261,9 @@ import path3 from "node:path";
 
 // src/policy/format.ts
 var PLAIN_KEY = /^[A-Za-z0-9_$-]+$/;
-function formatPath(path5) {
+function formatPath(path6) {
   let out = "";
-  for (const seg of path5) {
+  for (const seg of path6) {
     if (typeof seg === "number") out += `[${seg}]`;
     else if (PLAIN_KEY.test(seg)) out += out === "" ? seg : `.${seg}`;
     else out += `[${JSON.stringify(seg)}]`;
@@ -23317,8 +23319,8 @@ function readPolicyYaml(text) {
       errors.push({ position: { line: 1, column: 1 }, path: [], message: e.message });
     }
   }
-  const locate2 = (path5, part = "value") => {
-    const found = walk(doc, path5);
+  const locate2 = (path6, part = "value") => {
+    const found = walk(doc, path6);
     const node = part === "key" ? found.key ?? found.value : found.value ?? found.key;
     const offset = node?.range?.[0];
     return offset === void 0 ? { line: 1, column: 1 } : pos(offset);
@@ -23336,10 +23338,10 @@ function keyText(pair) {
 function resolved(doc, node) {
   return (0, import_yaml.isAlias)(node) ? node.resolve(doc) : node;
 }
-function walk(doc, path5) {
+function walk(doc, path6) {
   let value = resolved(doc, doc.contents);
   let key;
-  for (const seg of path5) {
+  for (const seg of path6) {
     if ((0, import_yaml.isMap)(value)) {
       const pair = value.items.find((p) => keyText(p) === String(seg));
       if (!pair) break;
@@ -23359,7 +23361,7 @@ function walk(doc, path5) {
   return { key, value: value ?? void 0 };
 }
 function pathAtOffset(doc, offset) {
-  const path5 = [];
+  const path6 = [];
   let node = doc.contents;
   for (; ; ) {
     if ((0, import_yaml.isMap)(node)) {
@@ -23369,23 +23371,23 @@ function pathAtOffset(doc, offset) {
         return start !== void 0 && end !== void 0 && start <= offset && offset <= end;
       });
       const k = pair && keyText(pair);
-      if (!pair || k === void 0) return path5;
-      path5.push(k);
+      if (!pair || k === void 0) return path6;
+      path6.push(k);
       node = pair.value;
     } else if ((0, import_yaml.isSeq)(node)) {
       const i = node.items.findIndex((it) => {
         const r = it?.range;
         return r != null && r[0] <= offset && offset <= r[2];
       });
-      if (i < 0) return path5;
-      path5.push(i);
+      if (i < 0) return path6;
+      path6.push(i);
       node = node.items[i];
     } else {
-      return path5;
+      return path6;
     }
   }
 }
-function findDuplicates(doc, node, path5, pos, out) {
+function findDuplicates(doc, node, path6, pos, out) {
   if ((0, import_yaml.isMap)(node)) {
     const seen = /* @__PURE__ */ new Map();
     for (const pair of node.items) {
@@ -23397,17 +23399,17 @@ function findDuplicates(doc, node, path5, pos, out) {
         if (first) {
           out.push({
             position: pos(start),
-            path: [...path5, k],
+            path: [...path6, k],
             message: `duplicate key \`${k}\` (first set on line ${first.line}); a key may appear once per mapping`
           });
         } else {
           seen.set(k, pos(start));
         }
       }
-      findDuplicates(doc, pair.value, k === void 0 ? path5 : [...path5, k], pos, out);
+      findDuplicates(doc, pair.value, k === void 0 ? path6 : [...path6, k], pos, out);
     }
   } else if ((0, import_yaml.isSeq)(node)) {
-    node.items.forEach((item, i) => findDuplicates(doc, item, [...path5, i], pos, out));
+    node.items.forEach((item, i) => findDuplicates(doc, item, [...path6, i], pos, out));
   }
 }
 
@@ -25983,7 +25985,7 @@ function schemaKeyIndex() {
   return keyIndex;
 }
 function issueOf(e, root) {
-  const path5 = pointerPath(e.instancePath, root);
+  const path6 = pointerPath(e.instancePath, root);
   const p = e.params;
   const data2 = e.data;
   switch (e.keyword) {
@@ -26003,15 +26005,15 @@ function issueOf(e, root) {
           message += `; expected one of ${valid.map((k) => `\`${k}\``).join(", ")}`;
         }
       }
-      return { path: [...path5, key], part: "key", message, ...suggestion ? { suggestion } : {} };
+      return { path: [...path6, key], part: "key", message, ...suggestion ? { suggestion } : {} };
     }
     case "required": {
       const key = String(p.missingProperty);
-      return { path: [...path5, key], part: "key", message: `missing required key \`${key}\`` };
+      return { path: [...path6, key], part: "key", message: `missing required key \`${key}\`` };
     }
     case "dependentRequired": {
       return {
-        path: [...path5, String(p.property)],
+        path: [...path6, String(p.property)],
         part: "key",
         message: `\`${String(p.property)}\` is only used together with \`${String(p.missingProperty)}\`; set \`${String(p.missingProperty)}\` too or remove it`
       };
@@ -26019,9 +26021,9 @@ function issueOf(e, root) {
     case "false schema": {
       const m = /\/dependentSchemas\/([^/]+)\//.exec(e.schemaPath);
       const with_ = m ? m[1].replace(/~1/g, "/").replace(/~0/g, "~") : void 0;
-      const key = String(path5[path5.length - 1]);
+      const key = String(path6[path6.length - 1]);
       return {
-        path: path5,
+        path: path6,
         part: "key",
         message: with_ ? `set either \`${with_}\` or \`${key}\`, not both` : `\`${key}\` is not allowed here`
       };
@@ -26034,25 +26036,25 @@ function issueOf(e, root) {
         suggestion = `write shares as fractions: \`${Number.parseFloat(data2) / 100}\``;
       } else if (typeof data2 === "string" && numeric && data2.trim() !== "" && Number.isFinite(Number(data2))) {
         suggestion = `write it without quotes: \`${data2.trim()}\``;
-      } else if (path5.length === 2 && path5[0] === "languages" && typeof data2 === "number") {
-        suggestion = `write \`${String(path5[1])}: { target: ${data2} }\``;
+      } else if (path6.length === 2 && path6[0] === "languages" && typeof data2 === "number") {
+        suggestion = `write \`${String(path6[1])}: { target: ${data2} }\``;
       } else if (typeof data2 === "string" && want.includes("a list") && want.length === 1) {
         suggestion = `write a list: \`[${data2}]\``;
       }
-      return { path: path5, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path6, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "enum": {
       const allowed = p.allowedValues.map(String);
       const near = typeof data2 === "string" ? nearest(data2, allowed) : void 0;
       return {
-        path: path5,
+        path: path6,
         part: "value",
         message: `must be one of ${allowed.map((v) => `\`${v}\``).join(", ")}, not ${kindOf(data2)}`,
         ...near ? { suggestion: didYouMean(near) } : {}
       };
     }
     case "const": {
-      return { path: path5, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
+      return { path: path6, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
     }
     case "minimum":
     case "maximum":
@@ -26063,24 +26065,24 @@ function issueOf(e, root) {
       if (e.keyword === "maximum" && p.limit === 1 && typeof data2 === "number" && data2 > 1 && data2 <= 100) {
         suggestion = `shares are fractions of 1: ${data2} % is \`${data2 / 100}\``;
       }
-      return { path: path5, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path6, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "minProperties": {
       const names = propertyNames(e.parentSchema);
       const dependent = new Set(Object.keys(e.parentSchema?.dependentRequired ?? {}));
       const primary = names.filter((k) => !dependent.has(k));
       const what = primary.length > 0 && primary.length <= MAX_LISTED_KEYS ? `; set ${primary.map((k) => `\`${k}\``).join(" or ")}` : "";
-      return { path: path5, part: "value", message: `must not be empty${what}` };
+      return { path: path6, part: "value", message: `must not be empty${what}` };
     }
     case "minItems":
-      return { path: path5, part: "value", message: "must not be an empty list" };
+      return { path: path6, part: "value", message: "must not be an empty list" };
     case "minLength":
-      return { path: path5, part: "value", message: "must not be empty" };
+      return { path: path6, part: "value", message: "must not be empty" };
     case "uniqueItems":
       const item = Array.isArray(data2) ? data2[Number(p.j)] : void 0;
-      return { path: path5, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
+      return { path: path6, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
     default:
-      return { path: path5, part: "value", message: e.message ?? `fails the \`${e.keyword}\` check` };
+      return { path: path6, part: "value", message: e.message ?? `fails the \`${e.keyword}\` check` };
   }
 }
 
@@ -31079,6 +31081,38 @@ function storedShardResult(r) {
   const { duplicateIndex, ...rest } = r;
   return duplicateIndex ? { ...rest, duplicateIndex: Buffer.from(duplicateIndex).toString("base64") } : rest;
 }
+var isCount = (x) => typeof x === "number" && Number.isInteger(x) && x >= 0;
+var isMap2 = (x) => typeof x === "object" && x !== null && !Array.isArray(x);
+function storedResultProblem(value) {
+  if (!isMap2(value)) return "not an object";
+  for (const key of ["path", "contentId", "settingsId", "format", "compression", "encoding"]) {
+    if (typeof value[key] !== "string") return `\`${key}\` is missing or not a string`;
+  }
+  const read = value.read;
+  if (!isMap2(read)) return "`read` is missing";
+  for (const key of ["lines", "docs", "docLines", "empty", "bytes", "compressedBytes"]) {
+    if (!isCount(read[key])) return `\`read.${key}\` is missing or not a count`;
+  }
+  const rejected = read.rejected;
+  if (!isMap2(rejected) || !isCount(rejected.count) || !isMap2(rejected.byReason) || !Array.isArray(rejected.samples)) return "`read.rejected` is missing or incomplete";
+  const { lines, docs, docLines, empty: empty2 } = read;
+  if (docLines + empty2 + rejected.count !== lines) {
+    return `its lines do not add up: ${docLines} in documents + ${empty2} empty + ${rejected.count} rejected \u2260 ${lines} read`;
+  }
+  if (docs > docLines) return `it has more documents (${docs}) than lines in documents (${docLines})`;
+  const byReason = Object.values(rejected.byReason);
+  if (!byReason.every(isCount) || byReason.reduce((a, b) => a + b, 0) !== rejected.count) return "its rejected lines by reason do not add up to their count";
+  for (const key of ["languages", "scripts", "anomalyMasks", "anomalyDocs", "declared"]) {
+    if (!isMap2(value[key])) return `\`${key}\` is missing`;
+  }
+  for (const [lang, tally] of Object.entries(value.languages)) {
+    if (!isMap2(tally) || !isCount(tally.docs)) return `\`languages.${lang}\` is incomplete`;
+  }
+  const samples = value.samples;
+  if (!isMap2(samples) || !Array.isArray(samples.impure) || !Array.isArray(samples.anomalous) || !Array.isArray(samples.mismatch)) return "`samples` is missing or incomplete";
+  if (value.duplicateIndex !== void 0 && typeof value.duplicateIndex !== "string") return "`duplicateIndex` is not base64 text";
+  return null;
+}
 function shardResultFromStored(value) {
   const v = value;
   if (!v || typeof v !== "object" || v.schema !== RESULT_SCHEMA) return void 0;
@@ -31099,10 +31133,13 @@ function canonicalJson(value) {
   });
 }
 var ResultCache = class {
-  constructor(dir) {
+  /** needsDuplicateIndex: the settings measure duplicates, so an entry without its shard's index is not whole. */
+  constructor(dir, needsDuplicateIndex = false) {
     this.dir = dir;
+    this.needsDuplicateIndex = needsDuplicateIndex;
   }
   dir;
+  needsDuplicateIndex;
   hits = 0;
   misses = 0;
   file(contentId, settingsId) {
@@ -31111,13 +31148,14 @@ var ResultCache = class {
   /** Returns the cached result for this content under these settings, or undefined. */
   async get(contentId, settingsId, at) {
     try {
-      const r = shardResultFromStored(JSON.parse(await readFile2(this.file(contentId, settingsId), "utf8")));
+      const stored = JSON.parse(await readFile2(this.file(contentId, settingsId), "utf8"));
+      const r = storedResultProblem(stored) === null ? shardResultFromStored(stored) : void 0;
       if (!r || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at.encoding || r.format !== at.format) {
         this.misses += 1;
         return void 0;
       }
       this.hits += 1;
-      if (r.duplicateIndex && !inspectIndex(r.duplicateIndex).ok) {
+      if (r.duplicateIndex ? !inspectIndex(r.duplicateIndex).ok : this.needsDuplicateIndex) {
         this.misses += 1;
         return void 0;
       }
@@ -41595,9 +41633,10 @@ function hunspellWord(line) {
 // src/results/duplicates.ts
 var CLUSTERS_LISTED = 20;
 function joinShardIndexes(shards, options, newShards) {
-  const withIndex = shards.filter((s) => s.duplicateIndex !== void 0);
+  const without = shards.find((s) => s.duplicateIndex === void 0);
+  if (without) throw new DuplicateIndexError(without.path, "its result carries no duplicate index, though duplicates are measured");
   return joinDuplicates(
-    withIndex.map((s) => ({ shard: s.path, index: s.duplicateIndex })),
+    shards.map((s) => ({ shard: s.path, index: s.duplicateIndex })),
     { ...options, maxClusters: CLUSTERS_LISTED, ...newShards ? { newShards } : {} }
   );
 }
@@ -41807,8 +41846,8 @@ var ShardFailure = class extends Error {
   shard;
   name = "ShardFailure";
 };
-function throwIfFaultInjected(path5) {
-  if (process.env.SLUICE_FAULT_SHARD && path5 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+function throwIfFaultInjected(path6) {
+  if (process.env.SLUICE_FAULT_SHARD && path6 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
 }
 function workOf(ref) {
   return ref.textBytesHint ?? ref.sizeBytes;
@@ -41818,8 +41857,8 @@ function defaultWorkers() {
 }
 function canRunWorkers(entry) {
   if (!entry) return false;
-  const path5 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
-  return path5.endsWith(".js") && existsSync(path5);
+  const path6 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
+  return path6.endsWith(".js") && existsSync(path6);
 }
 function startWorker(entry, init) {
   const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
@@ -42181,7 +42220,7 @@ async function assembleCorpus(policy, prepared, results, cached, skipped, newSha
   return corpus;
 }
 async function measureShards(policy, shards, prepared, opts, started = performance.now(), early = []) {
-  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
+  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir, prepared.analyzers.duplicates !== void 0) : null;
   const results = [];
   const cached = /* @__PURE__ */ new Set();
   const keys = /* @__PURE__ */ new Map();
@@ -42192,8 +42231,8 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     for (const b of reading.values()) inFlight += b;
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes3 + inFlight, elapsedMs: performance.now() - started });
   };
-  const readingAt = (path5, b) => {
-    reading.set(path5, b);
+  const readingAt = (path6, b) => {
+    reading.set(path6, b);
     if (opts.onProgress) report();
   };
   const done = (r) => {
@@ -42219,9 +42258,16 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     });
   }
   if (todo.length > 0) await setupOrThrow(() => prepared.ready());
+  let cacheWritable = true;
   const store = async (r) => {
     const key = keys.get(r.path);
-    if (cache && key) await cache.put({ ...r, contentId: key });
+    if (!cache || !key || !cacheWritable) return;
+    try {
+      await cache.put({ ...r, contentId: key });
+    } catch (err2) {
+      cacheWritable = false;
+      opts.onWarning?.(`cannot write the cache in ${cache.dir} (${err2.message}); this run's results are not cached`);
+    }
   };
   const progressOf = (ref) => opts.onProgress ? (b) => readingAt(ref.path, b) : void 0;
   const workers = threadsFor(todo, opts);
@@ -42293,8 +42339,8 @@ import { readFile as readFile5 } from "node:fs/promises";
 import { createHash as createHash6 } from "node:crypto";
 var PARTIAL_FORMAT = "sluice-partial";
 var PARTIAL_VERSION = 1;
-function partitionOf(path5, count3) {
-  const h = createHash6("sha256").update(path5).digest();
+function partitionOf(path6, count3) {
+  const h = createHash6("sha256").update(path6).digest();
   return h.readUInt32BE(0) % count3 + 1;
 }
 function partialToJson(p) {
@@ -42311,6 +42357,9 @@ function partialFromJson(text) {
   if (v.version !== PARTIAL_VERSION) return { ok: false, reason: `partial format version ${String(v.version)}, this sluice reads ${PARTIAL_VERSION}` };
   const results = [];
   for (const r of v.results ?? []) {
+    const problem = storedResultProblem(r);
+    const where2 = typeof r?.path === "string" ? `the result of ${r.path}` : `shard result ${results.length + 1}`;
+    if (problem !== null && r?.schema === RESULT_SCHEMA) return { ok: false, reason: `${where2} is damaged: ${problem}` };
     const parsed = shardResultFromStored(r);
     if (!parsed) return { ok: false, reason: "holds a shard result of another result schema (written by another sluice version)" };
     results.push(parsed);
@@ -42376,7 +42425,14 @@ async function mergePartials(policyFile, partFiles, opts) {
   const skipped = parts.flatMap((p) => p.partial.skipped).sort((a, b) => a.path < b.path ? -1 : 1);
   if (shardsInCorpus.size > 1) throw new ConfigError(`merge: the parts saw different corpora (${[...shardsInCorpus].join(" vs ")} shards): scan all partitions of the same commit`);
   if (results.length !== [...shardsInCorpus][0]) throw new ConfigError(`merge: the parts hold ${results.length} shards, the corpus has ${[...shardsInCorpus][0]}`);
-  const corpus = await assembleCorpus(policy, prepared, results, /* @__PURE__ */ new Set(), skipped, opts.newShards, started);
+  let corpus;
+  try {
+    corpus = await assembleCorpus(policy, prepared, results, /* @__PURE__ */ new Set(), skipped, opts.newShards, started);
+  } catch (err2) {
+    if (!(err2 instanceof DuplicateIndexError)) throw err2;
+    const holder = parts.find((p) => p.partial.results.some((r) => r.path === err2.shard));
+    throw new ConfigError(`${holder ? `${holder.file}: ` : ""}${err2.message}: scan that partition again`);
+  }
   return buildReport(policy, corpus, opts.cwd);
 }
 
@@ -42471,8 +42527,8 @@ var HTML_SPECIAL = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'":
 function escapeMarkdown(text) {
   return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, (c) => `U+${c.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`).replace(MARKDOWN_PUNCT, (c) => `\\${c}`).replace(/[&<>"']/g, (c) => HTML_SPECIAL[c]).replace(/@/g, "&#64;").replace(/:\/\//g, "&#58;//").replace(/\r?\n|\r/g, " ");
 }
-function codePath(path5) {
-  const safe = path5.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
+function codePath(path6) {
+  const safe = path6.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
   return `\`${safe}\``;
 }
 
@@ -42531,10 +42587,10 @@ var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\
 var MAX_REJECTIONS_LISTED = 10;
 function renderMarkdown(report, opts = {}) {
   const out = [];
-  const loc = (path5, line) => {
-    const text = codePath(line === void 0 ? path5 : `${path5}:${line}`);
+  const loc = (path6, line) => {
+    const text = codePath(line === void 0 ? path6 : `${path6}:${line}`);
     if (!opts.linkBase) return text;
-    const href = `${opts.linkBase}/${path5.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
+    const href = `${opts.linkBase}/${path6.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
     return `[${text}](${href})`;
   };
   out.push(`## ${ICON[report.verdict]} sluice \xB7 ${escapeMarkdown(report.policy.name)}: ${report.verdict.toUpperCase()}`);
@@ -42918,7 +42974,7 @@ async function scan2(opts) {
     workerEntry: import.meta.url
   });
   progress.clear();
-  await writeFile2(opts.out, partialToJson(partial));
+  await writeOutput("--out", opts.out, partialToJson(partial));
   const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
   process.stdout.write(`partition ${opts.partition.index}/${opts.partition.count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents \u2192 ${opts.out}
 `);
@@ -42939,12 +42995,44 @@ async function emit(reports, opts) {
 ` : renderTerminal(report, { color: opts.color }));
   }
   const single = reports.length === 1;
+  const seen = /* @__PURE__ */ new Map();
+  const names = reports.map((r) => {
+    const n = (seen.get(r.policy.name) ?? 0) + 1;
+    seen.set(r.policy.name, n);
+    return n === 1 ? r.policy.name : `${r.policy.name}-${n}`;
+  });
   const suffixed = (file, name) => single ? file : file.replace(/(\.[^./]+)?$/, (ext) => `.${name}${ext}`);
-  for (const report of reports) {
-    if (opts.json) await writeFile2(suffixed(opts.json, report.policy.name), renderJson(report));
-    if (opts.markdown) await writeFile2(suffixed(opts.markdown, report.policy.name), renderMarkdown(report));
+  for (const [i, report] of reports.entries()) {
+    if (opts.json) await writeOutput("--json", suffixed(opts.json, names[i]), renderJson(report));
+    if (opts.markdown) await writeOutput("--markdown", suffixed(opts.markdown, names[i]), renderMarkdown(report));
   }
   return reports.some((r) => r.verdict === "fail") ? 1 : 0;
+}
+async function writeOutput(option, file, text) {
+  try {
+    await writeFile2(file, text);
+  } catch (err2) {
+    throw new UsageError(`${option} ${file}: cannot write it: ${err2.message}`);
+  }
+}
+function checkPaths(outputs, policies, cacheDir) {
+  const kind = (p) => {
+    try {
+      return statSync(p).isDirectory() ? "dir" : "file";
+    } catch {
+      return "none";
+    }
+  };
+  const policyFiles = new Set(policies.map((p) => path5.resolve(p)));
+  for (const [option, file] of outputs) {
+    if (file === void 0) continue;
+    if (kind(file) === "dir") throw new UsageError(`${option} ${file}: is a directory; give a file name to write to`);
+    const parent = path5.dirname(path5.resolve(file));
+    const parentKind = kind(parent);
+    if (parentKind !== "dir") throw new UsageError(`${option} ${file}: ${parent} ${parentKind === "none" ? "does not exist" : "is not a directory"}`);
+    if (policyFiles.has(path5.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
+  }
+  if (cacheDir !== null && kind(cacheDir) === "file") throw new UsageError(`--cache-dir ${cacheDir}: is a file, not a directory`);
 }
 function progressPrinter() {
   const tty = process.stderr.isTTY === true;
@@ -42975,8 +43063,15 @@ async function main() {
 `);
       return 0;
     }
-    if (cmd.command === "scan") return await scan2(cmd);
-    if (cmd.command === "merge") return await merge(cmd);
+    if (cmd.command === "scan") {
+      checkPaths([["--out", cmd.out]], [cmd.policy], cmd.cacheDir);
+      return await scan2(cmd);
+    }
+    if (cmd.command === "merge") {
+      checkPaths([["--json", cmd.json], ["--markdown", cmd.markdown]], [cmd.policy, ...cmd.parts], null);
+      return await merge(cmd);
+    }
+    checkPaths([["--json", cmd.json], ["--markdown", cmd.markdown]], cmd.policies, cmd.cacheDir);
     return await check(cmd);
   } catch (err2) {
     if (err2 instanceof UsageError || err2 instanceof ConfigError || err2 instanceof ShardFailure) {

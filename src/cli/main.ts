@@ -1,5 +1,7 @@
 // `sluice` on the command line: parse arguments, call the core, print, exit.
+import { statSync } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
+import path from 'node:path';
 import { ConfigError, runCheck, type Progress } from '../core/check.js';
 import { mergePartials, scanPartition } from '../core/partition.js';
 import { ShardFailure } from '../core/pool.js';
@@ -40,7 +42,7 @@ async function scan(opts: ScanCliOptions): Promise<number> {
     workerEntry: import.meta.url,
   });
   progress.clear();
-  await writeFile(opts.out, partialToJson(partial));
+  await writeOutput('--out', opts.out, partialToJson(partial));
   const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
   process.stdout.write(`partition ${opts.partition.index}/${opts.partition.count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents → ${opts.out}\n`);
   return 0;
@@ -60,12 +62,53 @@ async function emit(reports: Report[], opts: Pick<CheckCliOptions, 'quiet' | 'co
     process.stdout.write(opts.quiet ? `${report.headline}\n` : renderTerminal(report, { color: opts.color }));
   }
   const single = reports.length === 1;
+  // One file per policy, named by the policy's name; two policies of one name get -2, -3, ... rather than one file.
+  const seen = new Map<string, number>();
+  const names = reports.map((r) => {
+    const n = (seen.get(r.policy.name) ?? 0) + 1;
+    seen.set(r.policy.name, n);
+    return n === 1 ? r.policy.name : `${r.policy.name}-${n}`;
+  });
   const suffixed = (file: string, name: string): string => (single ? file : file.replace(/(\.[^./]+)?$/, (ext) => `.${name}${ext}`));
-  for (const report of reports) {
-    if (opts.json) await writeFile(suffixed(opts.json, report.policy.name), renderJson(report));
-    if (opts.markdown) await writeFile(suffixed(opts.markdown, report.policy.name), renderMarkdown(report));
+  for (const [i, report] of reports.entries()) {
+    if (opts.json) await writeOutput('--json', suffixed(opts.json, names[i]!), renderJson(report));
+    if (opts.markdown) await writeOutput('--markdown', suffixed(opts.markdown, names[i]!), renderMarkdown(report));
   }
   return reports.some((r) => r.verdict === 'fail') ? 1 : 0;
+}
+
+/** Writes a report or partial result where an option says, or says which option's path could not be written. */
+async function writeOutput(option: string, file: string, text: string): Promise<void> {
+  try {
+    await writeFile(file, text);
+  } catch (err) {
+    throw new UsageError(`${option} ${file}: cannot write it: ${(err as Error).message}`);
+  }
+}
+
+/**
+ * Refuses, before anything is read, output paths that could not be written at the end of a long
+ * run (a directory, a directory that is not there) or that would overwrite a policy file, and a
+ * cache directory that is a file.
+ */
+function checkPaths(outputs: Array<[string, string | undefined]>, policies: readonly string[], cacheDir: string | null): void {
+  const kind = (p: string): 'dir' | 'file' | 'none' => {
+    try {
+      return statSync(p).isDirectory() ? 'dir' : 'file';
+    } catch {
+      return 'none';
+    }
+  };
+  const policyFiles = new Set(policies.map((p) => path.resolve(p)));
+  for (const [option, file] of outputs) {
+    if (file === undefined) continue;
+    if (kind(file) === 'dir') throw new UsageError(`${option} ${file}: is a directory; give a file name to write to`);
+    const parent = path.dirname(path.resolve(file));
+    const parentKind = kind(parent);
+    if (parentKind !== 'dir') throw new UsageError(`${option} ${file}: ${parent} ${parentKind === 'none' ? 'does not exist' : 'is not a directory'}`);
+    if (policyFiles.has(path.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
+  }
+  if (cacheDir !== null && kind(cacheDir) === 'file') throw new UsageError(`--cache-dir ${cacheDir}: is a file, not a directory`);
 }
 
 // Progress on stderr, only on a terminal and only once a scan has run a second.
@@ -98,8 +141,15 @@ async function main(): Promise<number> {
       process.stdout.write(`${TOOL_VERSION}\n`);
       return 0;
     }
-    if (cmd.command === 'scan') return await scan(cmd);
-    if (cmd.command === 'merge') return await merge(cmd);
+    if (cmd.command === 'scan') {
+      checkPaths([['--out', cmd.out]], [cmd.policy], cmd.cacheDir);
+      return await scan(cmd);
+    }
+    if (cmd.command === 'merge') {
+      checkPaths([['--json', cmd.json], ['--markdown', cmd.markdown]], [cmd.policy, ...cmd.parts], null);
+      return await merge(cmd);
+    }
+    checkPaths([['--json', cmd.json], ['--markdown', cmd.markdown]], cmd.policies, cmd.cacheDir);
     return await check(cmd);
   } catch (err) {
     if (err instanceof UsageError || err instanceof ConfigError || err instanceof ShardFailure) {

@@ -290,7 +290,7 @@ export async function measureShards(
   /** Workers started earlier for this run (taken when the pool needs them; the caller stops any left). */
   early: StartedWorker[] = [],
 ): Promise<{ results: ShardResult[]; cached: Set<string> }> {
-  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir) : null;
+  const cache = opts.cacheDir ? new ResultCache(opts.cacheDir, prepared.analyzers.duplicates !== undefined) : null;
   const results: ShardResult[] = [];
   const cached = new Set<string>();
   const keys = new Map<string, string>();
@@ -336,9 +336,17 @@ export async function measureShards(
   // wholly from the cache never imports it, is needed now.
   if (todo.length > 0) await setupOrThrow(() => prepared.ready());
 
+  // A cache that cannot be written costs the next run time, not this run its report: said once, then left alone.
+  let cacheWritable = true;
   const store = async (r: ShardResult): Promise<void> => {
     const key = keys.get(r.path);
-    if (cache && key) await cache.put({ ...r, contentId: key });
+    if (!cache || !key || !cacheWritable) return;
+    try {
+      await cache.put({ ...r, contentId: key });
+    } catch (err) {
+      cacheWritable = false;
+      opts.onWarning?.(`cannot write the cache in ${cache.dir} (${(err as Error).message}); this run's results are not cached`);
+    }
   };
   // Told the bytes read so far of a shard measured in this thread, when progress is shown.
   const progressOf = (ref: ShardRef): ((b: number) => void) | undefined => (opts.onProgress ? (b) => readingAt(ref.path, b) : undefined);

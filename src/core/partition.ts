@@ -3,6 +3,7 @@
 // together and cover every partition once, then joins duplicates across all of
 // them and judges — the same report a single machine would give.
 import { readFile } from 'node:fs/promises';
+import { DuplicateIndexError } from '../measure/duplicates/index.js';
 import { buildReport } from '../judge/report.js';
 import type { Report } from '../judge/types.js';
 import { partitionOf, PARTIAL_FORMAT, PARTIAL_VERSION, partialFromJson, type Partial } from '../results/partition.js';
@@ -70,6 +71,14 @@ export async function mergePartials(policyFile: string, partFiles: string[], opt
   const skipped: SkippedFile[] = parts.flatMap((p) => p.partial.skipped).sort((a, b) => (a.path < b.path ? -1 : 1));
   if (shardsInCorpus.size > 1) throw new ConfigError(`merge: the parts saw different corpora (${[...shardsInCorpus].join(' vs ')} shards): scan all partitions of the same commit`);
   if (results.length !== [...shardsInCorpus][0]) throw new ConfigError(`merge: the parts hold ${results.length} shards, the corpus has ${[...shardsInCorpus][0]}`);
-  const corpus = await assembleCorpus(policy, prepared, results, new Set(), skipped, opts.newShards, started);
+  let corpus;
+  try {
+    corpus = await assembleCorpus(policy, prepared, results, new Set(), skipped, opts.newShards, started);
+  } catch (err) {
+    if (!(err instanceof DuplicateIndexError)) throw err;
+    // Named with the part that holds the shard: that part is the one to scan again.
+    const holder = parts.find((p) => p.partial.results.some((r) => r.path === err.shard));
+    throw new ConfigError(`${holder ? `${holder.file}: ` : ''}${err.message}: scan that partition again`);
+  }
   return buildReport(policy, corpus, opts.cwd);
 }

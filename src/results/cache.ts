@@ -5,7 +5,7 @@ import { createHash } from 'node:crypto';
 import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import { inspectIndex } from '../measure/duplicates/index.js';
-import { shardResultFromStored, storedShardResult } from './serialize.js';
+import { shardResultFromStored, storedResultProblem, storedShardResult } from './serialize.js';
 import type { ShardResult } from './types.js';
 
 /** Returns a stable id for a JSON-able settings object (sha256 of its canonical JSON, 16 hex digits). */
@@ -27,7 +27,11 @@ export function canonicalJson(value: unknown): string {
 export class ResultCache {
   hits = 0;
   misses = 0;
-  constructor(readonly dir: string) {}
+  /** needsDuplicateIndex: the settings measure duplicates, so an entry without its shard's index is not whole. */
+  constructor(
+    readonly dir: string,
+    private readonly needsDuplicateIndex = false,
+  ) {}
 
   private file(contentId: string, settingsId: string): string {
     return join(this.dir, `${settingsId}-${contentId}.json`);
@@ -36,7 +40,9 @@ export class ResultCache {
   /** Returns the cached result for this content under these settings, or undefined. */
   async get(contentId: string, settingsId: string, at: { path: string; subset?: string; encoding: string; format: string }): Promise<ShardResult | undefined> {
     try {
-      const r = shardResultFromStored(JSON.parse(await readFile(this.file(contentId, settingsId), 'utf8')));
+      const stored: unknown = JSON.parse(await readFile(this.file(contentId, settingsId), 'utf8'));
+      // An entry cut short or edited by hand is measured again rather than summed.
+      const r = storedResultProblem(stored) === null ? shardResultFromStored(stored) : undefined;
       // The same bytes decoded with another encoding or format are another result.
       if (!r || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at.encoding || r.format !== at.format) {
         this.misses += 1;
@@ -45,7 +51,7 @@ export class ResultCache {
       this.hits += 1;
       // The same bytes may sit at another path (a rename): report them where they are now.
       // A damaged duplicate index would make the cross-shard join fail: measure the shard again instead.
-      if (r.duplicateIndex && !inspectIndex(r.duplicateIndex).ok) {
+      if (r.duplicateIndex ? !inspectIndex(r.duplicateIndex).ok : this.needsDuplicateIndex) {
         this.misses += 1;
         return undefined;
       }

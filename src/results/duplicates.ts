@@ -1,17 +1,18 @@
 // Cross-shard duplicates: join every shard's index blob and turn the findings
 // into the summary the judge reads, with languages and shards by name.
-import { joinDuplicates, type DuplicateFindings, type DuplicateOptions } from '../measure/duplicates/index.js';
+import { DuplicateIndexError, joinDuplicates, type DuplicateFindings, type DuplicateOptions } from '../measure/duplicates/index.js';
 import type { DuplicateSummary } from './corpus.js';
 import type { ShardResult } from './types.js';
 
 /** Clusters listed in a report; the counts stay complete. */
 export const CLUSTERS_LISTED = 20;
 
-/** Returns the joined duplicate findings over shards that carry an index (in path order), optionally with some shards taken as new. */
+/** Returns the joined duplicate findings over the shards' indexes (in path order), optionally with some shards taken as new; DuplicateIndexError for a shard without one, whose documents the join would miss. */
 export function joinShardIndexes(shards: readonly ShardResult[], options: DuplicateOptions, newShards?: string[]): DuplicateFindings {
-  const withIndex = shards.filter((s) => s.duplicateIndex !== undefined);
+  const without = shards.find((s) => s.duplicateIndex === undefined);
+  if (without) throw new DuplicateIndexError(without.path, 'its result carries no duplicate index, though duplicates are measured');
   return joinDuplicates(
-    withIndex.map((s) => ({ shard: s.path, index: s.duplicateIndex! })),
+    shards.map((s) => ({ shard: s.path, index: s.duplicateIndex! })),
     { ...options, maxClusters: CLUSTERS_LISTED, ...(newShards ? { newShards } : {}) },
   );
 }

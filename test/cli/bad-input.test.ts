@@ -221,6 +221,98 @@ describe('a damaged cache entry', () => {
     expect(second.report!.timing).toMatchObject({ cacheHits: 1, cacheMisses: 1 });
     expect(second.report!.duplicates).toEqual(first.duplicates);
   });
+
+  it('is measured again when a field is missing, its index is gone or its lines do not add up', async () => {
+    const { readdirSync, readFileSync: read, writeFileSync: write } = await import('node:fs');
+    const root = corpus({
+      'p.yaml': policyYaml('  duplicates: { max-exact: 0.5 }\n'),
+      'data/a.jsonl': lines(20, ENGLISH) + lines(20, ENGLISH),
+      'data/b.jsonl': lines(20, HINDI),
+    });
+    const cacheDir = join(root, '.cache');
+    const first = sluice(['check', join(root, 'p.yaml'), '--cache-dir', cacheDir], { json: true }).report!;
+    const damages: Array<(e: Record<string, unknown>) => void> = [
+      (e) => delete e.languages,
+      (e) => delete e.duplicateIndex,
+      (e) => ((e.read as { lines: number }).lines = 999),
+    ];
+    for (const damage of damages) {
+      for (const f of readdirSync(cacheDir)) {
+        const stored = JSON.parse(read(join(cacheDir, f), 'utf8'));
+        damage(stored);
+        write(join(cacheDir, f), JSON.stringify(stored));
+      }
+      const again = sluice(['check', join(root, 'p.yaml'), '--cache-dir', cacheDir], { json: true });
+      expect(again.stderr).not.toContain('error');
+      expect(again.report!.timing).toMatchObject({ cacheHits: 0, cacheMisses: 2 });
+      expect(again.report!.input).toEqual(first.input);
+      expect(again.report!.duplicates).toEqual(first.duplicates);
+    }
+  });
+});
+
+describe('output and cache paths', () => {
+  it('are refused before the run when the report could not be written or would overwrite an input', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/a.jsonl': lines(3, ENGLISH) });
+    const cases: Array<[string[], string]> = [
+      [['--json', join(root, 'data')], `--json ${join(root, 'data')}: is a directory`],
+      [['--markdown', '/nonexistent-dir/r.md'], '--markdown /nonexistent-dir/r.md: /nonexistent-dir does not exist'],
+      [['--json', join(root, 'p.yaml')], 'is an input of this run; the report would overwrite it'],
+      [['--cache-dir', join(root, 'p.yaml')], 'is a file, not a directory'],
+    ];
+    for (const [args, message] of cases) {
+      const r = sluice(['check', join(root, 'p.yaml'), ...args]);
+      expect(r.status).toBe(2);
+      expect(r.stderr).toContain(message);
+      expect(r.stderr).not.toContain('internal error');
+      expect(r.stdout).toBe(''); // refused before anything was measured
+    }
+    expect(readFileSync(join(root, 'p.yaml'), 'utf8')).toBe(policyYaml());
+    const scan = sluice(['scan', '--policy', join(root, 'p.yaml'), '--partition', '1/1', '--out', join(root, 'data')]);
+    expect(scan.status).toBe(2);
+    expect(scan.stderr).toContain('--out');
+  });
+
+  it('a cache that cannot be written is said once, and the run still judges', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/a.jsonl': lines(3, ENGLISH), 'data/b.jsonl': lines(3, HINDI) });
+    const r = sluice(['check', join(root, 'p.yaml'), '--cache-dir', '/dev/null/cache'], { json: true });
+    expect(r.status).toBe(0);
+    expect(r.stderr.match(/cannot write the cache in \/dev\/null\/cache/g)).toHaveLength(1);
+    expect(r.report!.input.docs).toBe(6);
+  });
+
+  it('two policies of one name get a report file each', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'q.yaml': policyYaml(), 'data/a.jsonl': lines(3, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml'), join(root, 'q.yaml'), '--json', join(root, 'r.json')]);
+    expect(r.status).toBe(0);
+    expect(JSON.parse(readFileSync(join(root, 'r.t.json'), 'utf8')).policy.name).toBe('t');
+    expect(JSON.parse(readFileSync(join(root, 'r.t-2.json'), 'utf8')).policy.name).toBe('t');
+  });
+});
+
+describe('a damaged partial result', () => {
+  it('is refused by merge, naming the part file and what is wrong', async () => {
+    const { readFileSync: read, writeFileSync: write } = await import('node:fs');
+    const root = corpus({ 'p.yaml': policyYaml('  duplicates: { max-exact: 0.5 }\n'), 'data/a.jsonl': lines(20, ENGLISH), 'data/b.jsonl': lines(20, HINDI) });
+    const part = join(root, 'part-1.json');
+    expect(sluice(['scan', '--policy', join(root, 'p.yaml'), '--partition', '1/1', '--out', part, '--no-cache']).status).toBe(0);
+    const good = read(part, 'utf8');
+    const cases: Array<[(r: Record<string, unknown>) => void, string]> = [
+      [(r) => delete r.languages, 'is damaged: `languages` is missing'],
+      [(r) => ((r.read as { lines: number }).lines = 5000), 'is damaged: its lines do not add up'],
+      [(r) => delete r.duplicateIndex, 'carries no duplicate index'],
+    ];
+    for (const [damage, message] of cases) {
+      const p = JSON.parse(good);
+      damage(p.results[0]);
+      write(part, JSON.stringify(p));
+      const r = sluice(['merge', part, '--policy', join(root, 'p.yaml')]);
+      expect(r.status).toBe(2);
+      expect(r.stderr).toContain(part);
+      expect(r.stderr).toContain(message);
+      expect(r.stderr).not.toContain('internal error');
+    }
+  });
 });
 
 describe('a corpus of one shard and one line', () => {
