@@ -29221,7 +29221,7 @@ var AccountingSink = class {
   }
   tooLong(bytes3, _offset) {
     const line = ++this.account.lines;
-    this.reject(line, "line-too-long", `line of ${bytes3} bytes is longer than maxLineBytes (${this.opts.maxLineBytes}); skipped unread`);
+    this.reject(line, "line-too-long", `line of ${bytes3} bytes is longer than corpus.max-line-bytes (${this.opts.maxLineBytes}); skipped unread`);
   }
   reject(line, reason, detail) {
     const rejected = this.account.rejected;
@@ -41852,6 +41852,9 @@ function throwIfFaultInjected(path6) {
 function workOf(ref) {
   return ref.textBytesHint ?? ref.sizeBytes;
 }
+function maxWorkers() {
+  return 2 * availableParallelism();
+}
 function defaultWorkers() {
   return availableParallelism();
 }
@@ -42202,7 +42205,7 @@ function workerInitOf(policy, settingsId, evaluation) {
 }
 function threadsFor(shards, opts) {
   const diskBytes = shards.reduce((n, r) => n + r.sizeBytes, 0);
-  const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
+  const workers = opts.workers !== void 0 ? Math.min(opts.workers, maxWorkers()) : Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
   if (workers <= 1) return 1;
   return shards.length > 1 || shards.some((r) => r.open !== void 0) || shardsToSplit(shards, workers, opts.minSplitBytes).size > 0 ? workers : 1;
 }
@@ -43008,6 +43011,11 @@ async function emit(reports, opts) {
   }
   return reports.some((r) => r.verdict === "fail") ? 1 : 0;
 }
+function warnOfWorkers(workers) {
+  const most = maxWorkers();
+  if (workers !== void 0 && workers > most) process.stderr.write(`warning: --workers ${workers}: measuring on ${most} threads, twice this machine's cores; more would only take turns on them, each with its own memory
+`);
+}
 async function writeOutput(option, file, text) {
   try {
     await writeFile2(file, text);
@@ -43065,6 +43073,7 @@ async function main() {
     }
     if (cmd.command === "scan") {
       checkPaths([["--out", cmd.out]], [cmd.policy], cmd.cacheDir);
+      warnOfWorkers(cmd.workers);
       return await scan2(cmd);
     }
     if (cmd.command === "merge") {
@@ -43072,6 +43081,7 @@ async function main() {
       return await merge(cmd);
     }
     checkPaths([["--json", cmd.json], ["--markdown", cmd.markdown]], cmd.policies, cmd.cacheDir);
+    warnOfWorkers(cmd.workers);
     return await check(cmd);
   } catch (err2) {
     if (err2 instanceof UsageError || err2 instanceof ConfigError || err2 instanceof ShardFailure) {

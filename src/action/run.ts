@@ -6,6 +6,7 @@ import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { ConfigError, loadPolicyOrThrow, measureCorpus, type CheckOptions } from '../core/check.js';
+import { maxWorkers } from '../core/pool.js';
 import { baseMemoKey, compareWithBase, git, gitTopLevel, resolveCommit, rootInRepo, workingTreeKeys, writeBaseMemo, type Comparison } from '../core/compare.js';
 import { buildReport } from '../judge/report.js';
 import type { Report, Verdict } from '../judge/types.js';
@@ -108,6 +109,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
     ...(s.workerEntry ? { workerEntry: s.workerEntry } : {}),
     ...(s.workers !== null ? { workers: s.workers } : {}),
   };
+  if (s.workers !== null && s.workers > maxWorkers()) warn(`sluice: input \`workers\` is ${s.workers}: measuring on ${maxWorkers()} threads, twice this runner's cores`);
   const judged: Judged[] = [];
   await mkdir(s.reportDir, { recursive: true });
   // One file stem per policy; two policies with one name get -2, -3, ...

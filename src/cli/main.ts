@@ -4,7 +4,7 @@ import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { ConfigError, runCheck, type Progress } from '../core/check.js';
 import { mergePartials, scanPartition } from '../core/partition.js';
-import { ShardFailure } from '../core/pool.js';
+import { maxWorkers, ShardFailure } from '../core/pool.js';
 import { isShardWorker, runShardWorker } from '../core/worker.js';
 import type { Report } from '../judge/types.js';
 import { partialToJson } from '../results/partition.js';
@@ -77,6 +77,12 @@ async function emit(reports: Report[], opts: Pick<CheckCliOptions, 'quiet' | 'co
   return reports.some((r) => r.verdict === 'fail') ? 1 : 0;
 }
 
+/** Says when --workers asks for more threads than a run starts (the core caps them: see maxWorkers). */
+function warnOfWorkers(workers: number | undefined): void {
+  const most = maxWorkers();
+  if (workers !== undefined && workers > most) process.stderr.write(`warning: --workers ${workers}: measuring on ${most} threads, twice this machine's cores; more would only take turns on them, each with its own memory\n`);
+}
+
 /** Writes a report or partial result where an option says, or says which option's path could not be written. */
 async function writeOutput(option: string, file: string, text: string): Promise<void> {
   try {
@@ -143,6 +149,7 @@ async function main(): Promise<number> {
     }
     if (cmd.command === 'scan') {
       checkPaths([['--out', cmd.out]], [cmd.policy], cmd.cacheDir);
+      warnOfWorkers(cmd.workers);
       return await scan(cmd);
     }
     if (cmd.command === 'merge') {
@@ -150,6 +157,7 @@ async function main(): Promise<number> {
       return await merge(cmd);
     }
     checkPaths([['--json', cmd.json], ['--markdown', cmd.markdown]], cmd.policies, cmd.cacheDir);
+    warnOfWorkers(cmd.workers);
     return await check(cmd);
   } catch (err) {
     if (err instanceof UsageError || err instanceof ConfigError || err instanceof ShardFailure) {

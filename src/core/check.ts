@@ -17,6 +17,7 @@ import { existsSync, opendirSync } from 'node:fs';
 import {
   canRunWorkers,
   defaultWorkers,
+  maxWorkers,
   dropPrestartedWorker,
   measureInPool,
   startWorker,
@@ -251,7 +252,7 @@ function workerInitOf(policy: Policy, settingsId: string, evaluation: Evaluation
  */
 function threadsFor(shards: readonly ShardRef[], opts: CheckOptions): number {
   const diskBytes = shards.reduce((n, r) => n + r.sizeBytes, 0);
-  const workers = opts.workers ?? Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
+  const workers = opts.workers !== undefined ? Math.min(opts.workers, maxWorkers()) : Math.min(defaultWorkers(), Math.max(1, Math.floor(diskBytes / WORK_PER_WORKER_BYTES)));
   if (workers <= 1) return 1;
   // One shard is worth spreading only in batches: when it is large, or when only this thread can open it anyway.
   return shards.length > 1 || shards.some((r) => r.open !== undefined) || shardsToSplit(shards, workers, opts.minSplitBytes).size > 0 ? workers : 1;

@@ -68,6 +68,15 @@ export function workOf(ref: ShardRef): number {
   return ref.textBytesHint ?? ref.sizeBytes;
 }
 
+/**
+ * Returns the most threads a run measures on: twice the cores. Threads beyond the cores only take
+ * turns on them, and each holds its own analyzers (about 70-150 MB with a tokenizer), so a count
+ * given by mistake (`--workers 1000`) would exhaust memory rather than finish sooner.
+ */
+export function maxWorkers(): number {
+  return 2 * availableParallelism();
+}
+
 /** Returns the default worker count: the cores this process may use. */
 export function defaultWorkers(): number {
   return availableParallelism();

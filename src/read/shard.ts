@@ -78,7 +78,7 @@ abstract class AccountingSink implements LineSink {
 
   tooLong(bytes: number, _offset: number): void {
     const line = ++this.account.lines;
-    this.reject(line, 'line-too-long', `line of ${bytes} bytes is longer than maxLineBytes (${this.opts.maxLineBytes}); skipped unread`);
+    this.reject(line, 'line-too-long', `line of ${bytes} bytes is longer than corpus.max-line-bytes (${this.opts.maxLineBytes}); skipped unread`);
   }
 
   protected reject(line: number, reason: RejectReason, detail: string): void {

@@ -3,6 +3,7 @@
 // a non-UTF-8 file declared UTF-8, a 50 MB single line, a binary file.
 import { randomBytes } from 'node:crypto';
 import { readFileSync, writeFileSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
@@ -278,6 +279,14 @@ describe('output and cache paths', () => {
     const r = sluice(['check', join(root, 'p.yaml'), '--cache-dir', '/dev/null/cache'], { json: true });
     expect(r.status).toBe(0);
     expect(r.stderr.match(/cannot write the cache in \/dev\/null\/cache/g)).toHaveLength(1);
+    expect(r.report!.input.docs).toBe(6);
+  });
+
+  it('--workers far above the cores is capped at twice the cores, with a warning', () => {
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/a.jsonl': lines(3, ENGLISH), 'data/b.jsonl': lines(3, HINDI) });
+    const r = sluice(['check', join(root, 'p.yaml'), '--workers', '1000', '--split-mb', '0'], { json: true });
+    expect(r.status).toBe(0);
+    expect(r.stderr).toContain(`--workers 1000: measuring on ${2 * availableParallelism()} threads`);
     expect(r.report!.input.docs).toBe(6);
   });
 
