@@ -27751,6 +27751,8 @@ function parsePolicyDetailed(text, file, opts = {}) {
   const policy = built.policy;
   policy.positions = { "corpus.include": doc.locate(["corpus", "include"], "value") };
   if (policy.rules.contamination) policy.positions["rules.contamination.eval"] = doc.locate(["rules", "contamination", "eval"], "value");
+  if (policy.tokenizer) policy.positions.tokenizer = doc.locate(["tokenizer"], "value");
+  if (policy.baseline) policy.positions.baseline = doc.locate(["baseline"], "value");
   return {
     result: { ok: true, policy, warnings: sorted(warnings) },
     files: built.files.map((f) => ({ ...f, position: doc.locate(f.path, "value") })),
@@ -41717,9 +41719,14 @@ async function prepareAnalyzers(policy, options = {}) {
   try {
     const load = { deferBuiltin: options.deferTokenizerData === true };
     if (policy.tokenizer) main2 = await loadTokenizer(policy.tokenizer, load);
+  } catch (err2) {
+    throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, "tokenizer", err2.message));
+  }
+  try {
+    const load = { deferBuiltin: options.deferTokenizerData === true };
     if (policy.baseline) baseline = await loadTokenizer(policy.baseline, load);
   } catch (err2) {
-    throw new AnalyzerSetupError(`${policy.file}: tokenizer: ${err2.message}`);
+    throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, "baseline", err2.message));
   }
   const dupRule = policy.rules.duplicates;
   const dupOptions = dupRule ? duplicateOptionsFrom(dupRule) : void 0;
@@ -41762,9 +41769,13 @@ async function prepareAnalyzers(policy, options = {}) {
   const ready = () => loaded ??= (async () => {
     try {
       await main2?.ready?.();
+    } catch (err2) {
+      throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, "tokenizer", err2.message));
+    }
+    try {
       await baseline?.ready?.();
     } catch (err2) {
-      throw new AnalyzerSetupError(`${policy.file}: tokenizer: ${err2.message}`);
+      throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, "baseline", err2.message));
     }
   })();
   return {

@@ -126,9 +126,14 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
   try {
     const load = { deferBuiltin: options.deferTokenizerData === true };
     if (policy.tokenizer) main = await loadTokenizer(policy.tokenizer, load);
+  } catch (err) {
+    throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, 'tokenizer', (err as Error).message));
+  }
+  try {
+    const load = { deferBuiltin: options.deferTokenizerData === true };
     if (policy.baseline) baseline = await loadTokenizer(policy.baseline, load);
   } catch (err) {
-    throw new AnalyzerSetupError(`${policy.file}: tokenizer: ${(err as Error).message}`);
+    throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, 'baseline', (err as Error).message));
   }
 
   const dupRule = policy.rules.duplicates;
@@ -181,9 +186,13 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
     (loaded ??= (async () => {
       try {
         await main?.ready?.();
+      } catch (err) {
+        throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, 'tokenizer', (err as Error).message));
+      }
+      try {
         await baseline?.ready?.();
       } catch (err) {
-        throw new AnalyzerSetupError(`${policy.file}: tokenizer: ${(err as Error).message}`);
+        throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, 'baseline', (err as Error).message));
       }
     })());
   return {

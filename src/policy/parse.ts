@@ -111,6 +111,8 @@ export function parsePolicyDetailed(text: string, file: string, opts: ParseOptio
   const policy: Policy = built.policy;
   policy.positions = { 'corpus.include': doc.locate(['corpus', 'include'], 'value') };
   if (policy.rules.contamination) policy.positions['rules.contamination.eval'] = doc.locate(['rules', 'contamination', 'eval'], 'value');
+  if (policy.tokenizer) policy.positions.tokenizer = doc.locate(['tokenizer'], 'value');
+  if (policy.baseline) policy.positions.baseline = doc.locate(['baseline'], 'value');
   return {
     result: { ok: true, policy, warnings: sorted(warnings) },
     files: built.files.map((f) => ({ ...f, position: doc.locate(f.path, 'value') })),

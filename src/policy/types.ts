@@ -157,7 +157,7 @@ export type TokenizerSpec =
   | { kind: 'builtin'; name: 'gpt2' | 'r50k_base' | 'p50k_base' | 'cl100k_base' | 'o200k_base' };
 
 /** Keys whose values are checked against the files only when a run starts, and so are named with their position there. */
-export type PositionedKey = 'corpus.include' | 'rules.contamination.eval';
+export type PositionedKey = 'corpus.include' | 'rules.contamination.eval' | 'tokenizer' | 'baseline';
 
 export interface Policy {
   version: 1;

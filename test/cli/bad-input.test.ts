@@ -69,6 +69,13 @@ describe('a policy that cannot be judged exits 2 with the file, line and key', (
     expect(report.verdict).toBe('fail');
   });
 
+  it('says where the tokenizer is written when its file cannot be used', () => {
+    const root = corpus({ 'p.yaml': policyYaml('tokenizer: { file: tok.json }\n'), 'tok.json': 'not a tokenizer\n', 'data/a.jsonl': lines(3, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/p\.yaml:11:12: tokenizer: tok\.json: not valid JSON/);
+  });
+
   it('says where the evaluation glob is written when it matches no file', () => {
     const rule = '  contamination: { eval: ["evals/*.jsonl"], ngram: 13, max-docs: 0 }\n';
     const root = corpus({ 'p.yaml': policyYaml(rule), 'data/a.jsonl': lines(3, ENGLISH), 'eval/a.jsonl': lines(2, ENGLISH) });
