@@ -15,15 +15,15 @@ var __esm = (fn, res, err2) => function __init() {
   if (err2) throw err2[0];
   try {
     return fn && (res = (0, fn[__getOwnPropNames(fn)[0]])(fn = 0)), res;
-  } catch (e) {
-    throw err2 = [e], e;
+  } catch (e2) {
+    throw err2 = [e2], e2;
   }
 };
 var __commonJS = (cb, mod) => function __require2() {
   try {
     return mod || (0, cb[__getOwnPropNames(cb)[0]])((mod = { exports: {} }).exports, mod), mod.exports;
-  } catch (e) {
-    throw mod = 0, e;
+  } catch (e2) {
+    throw mod = 0, e2;
   }
 };
 var __export = (target, all) => {
@@ -100,7 +100,7 @@ var require_safer = __commonJS({
     if (!safer.kStringMaxLength) {
       try {
         safer.kStringMaxLength = process.binding("buffer").kStringMaxLength;
-      } catch (e) {
+      } catch (e2) {
       }
     }
     if (!safer.constants) {
@@ -3630,8 +3630,8 @@ var require_streams = __commonJS({
           var res = this.conv.write(chunk);
           if (res && res.length) this.push(res);
           done();
-        } catch (e) {
-          done(e);
+        } catch (e2) {
+          done(e2);
         }
       };
       IconvLiteEncoderStream.prototype._flush = function(done) {
@@ -3639,8 +3639,8 @@ var require_streams = __commonJS({
           var res = this.conv.end();
           if (res && res.length) this.push(res);
           done();
-        } catch (e) {
-          done(e);
+        } catch (e2) {
+          done(e2);
         }
       };
       IconvLiteEncoderStream.prototype.collect = function(cb) {
@@ -3671,8 +3671,8 @@ var require_streams = __commonJS({
           var res = this.conv.write(chunk);
           if (res && res.length) this.push(res, this.encoding);
           done();
-        } catch (e) {
-          done(e);
+        } catch (e2) {
+          done(e2);
         }
       };
       IconvLiteDecoderStream.prototype._flush = function(done) {
@@ -3680,8 +3680,8 @@ var require_streams = __commonJS({
           var res = this.conv.end();
           if (res && res.length) this.push(res, this.encoding);
           done();
-        } catch (e) {
-          done(e);
+        } catch (e2) {
+          done(e2);
         }
       };
       IconvLiteDecoderStream.prototype.collect = function(cb) {
@@ -3737,7 +3737,7 @@ var require_lib = __commonJS({
       try {
         module.exports.getCodec(enc);
         return true;
-      } catch (e) {
+      } catch (e2) {
         return false;
       }
     };
@@ -3820,7 +3820,7 @@ var require_lib = __commonJS({
     var streamModule;
     try {
       streamModule = __require("stream");
-    } catch (e) {
+    } catch (e2) {
     }
     if (streamModule && streamModule.Transform) {
       module.exports.enableStreamingAPI(streamModule);
@@ -3898,7 +3898,7 @@ var require_visit = __commonJS({
     "use strict";
     var identity = require_identity();
     var BREAK = /* @__PURE__ */ Symbol("break visit");
-    var SKIP = /* @__PURE__ */ Symbol("skip children");
+    var SKIP2 = /* @__PURE__ */ Symbol("skip children");
     var REMOVE = /* @__PURE__ */ Symbol("remove node");
     function visit(node, visitor) {
       const visitor_ = initVisitor(visitor);
@@ -3910,7 +3910,7 @@ var require_visit = __commonJS({
         visit_(null, node, visitor_, Object.freeze([]));
     }
     visit.BREAK = BREAK;
-    visit.SKIP = SKIP;
+    visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
     function visit_(key, node, visitor, path6) {
       const ctrl = callVisitor(key, node, visitor, path6);
@@ -3958,7 +3958,7 @@ var require_visit = __commonJS({
         await visitAsync_(null, node, visitor_, Object.freeze([]));
     }
     visitAsync.BREAK = BREAK;
-    visitAsync.SKIP = SKIP;
+    visitAsync.SKIP = SKIP2;
     visitAsync.REMOVE = REMOVE;
     async function visitAsync_(key, node, visitor, path6) {
       const ctrl = await callVisitor(key, node, visitor, path6);
@@ -4570,13 +4570,13 @@ var require_createNode = __commonJS({
     var defaultTagPrefix = "tag:yaml.org,2002:";
     function findTagObject(value, tagName, tags) {
       if (tagName) {
-        const match = tags.filter((t) => t.tag === tagName);
-        const tagObj = match.find((t) => !t.format) ?? match[0];
+        const match = tags.filter((t2) => t2.tag === tagName);
+        const tagObj = match.find((t2) => !t2.format) ?? match[0];
         if (!tagObj)
           throw new Error(`Tag ${tagName} not found`);
         return tagObj;
       }
-      return tags.find((t) => t.identify?.(value) && !t.format);
+      return tags.find((t2) => t2.identify?.(value) && !t2.format);
     }
     function createNode(value, tagName, ctx) {
       if (identity.isDocument(value))
@@ -5203,10 +5203,10 @@ ${indent}`);
       let res = _stringify(type);
       if (res === null) {
         const { defaultKeyType, defaultStringType } = ctx.options;
-        const t = implicitKey && defaultKeyType || defaultStringType;
-        res = _stringify(t);
+        const t2 = implicitKey && defaultKeyType || defaultStringType;
+        res = _stringify(t2);
         if (res === null)
-          throw new Error(`Unsupported default string type ${t}`);
+          throw new Error(`Unsupported default string type ${t2}`);
       }
       return res;
     }
@@ -5266,24 +5266,24 @@ var require_stringify = __commonJS({
     }
     function getTagObject(tags, item) {
       if (item.tag) {
-        const match = tags.filter((t) => t.tag === item.tag);
+        const match = tags.filter((t2) => t2.tag === item.tag);
         if (match.length > 0)
-          return match.find((t) => t.format === item.format) ?? match[0];
+          return match.find((t2) => t2.format === item.format) ?? match[0];
       }
       let tagObj = void 0;
       let obj;
       if (identity.isScalar(item)) {
         obj = item.value;
-        let match = tags.filter((t) => t.identify?.(obj));
+        let match = tags.filter((t2) => t2.identify?.(obj));
         if (match.length > 1) {
-          const testMatch = match.filter((t) => t.test);
+          const testMatch = match.filter((t2) => t2.test);
           if (testMatch.length > 0)
             match = testMatch;
         }
-        tagObj = match.find((t) => t.format === item.format) ?? match.find((t) => !t.format);
+        tagObj = match.find((t2) => t2.format === item.format) ?? match.find((t2) => !t2.format);
       } else {
         obj = item;
-        tagObj = tags.find((t) => t.nodeClass && obj instanceof t.nodeClass);
+        tagObj = tags.find((t2) => t2.nodeClass && obj instanceof t2.nodeClass);
       }
       if (!tagObj) {
         const name = obj?.constructor?.name ?? (obj === null ? "null" : typeof obj);
@@ -8212,7 +8212,7 @@ var require_compose_collection = __commonJS({
       if (!tagToken || !tagName || tagName === "!" || tagName === YAMLMap.YAMLMap.tagName && expType === "map" || tagName === YAMLSeq.YAMLSeq.tagName && expType === "seq") {
         return resolveCollection(CN, ctx, token, onError, tagName);
       }
-      let tag = ctx.schema.tags.find((t) => t.tag === tagName && t.collection === expType);
+      let tag = ctx.schema.tags.find((t2) => t2.tag === tagName && t2.collection === expType);
       if (!tag) {
         const kt = ctx.schema.knownTags[tagName];
         if (kt?.collection === expType) {
@@ -9363,7 +9363,7 @@ var require_cst_visit = __commonJS({
   "node_modules/yaml/dist/parse/cst-visit.js"(exports) {
     "use strict";
     var BREAK = /* @__PURE__ */ Symbol("break visit");
-    var SKIP = /* @__PURE__ */ Symbol("skip children");
+    var SKIP2 = /* @__PURE__ */ Symbol("skip children");
     var REMOVE = /* @__PURE__ */ Symbol("remove item");
     function visit(cst, visitor) {
       if ("type" in cst && cst.type === "document")
@@ -9371,7 +9371,7 @@ var require_cst_visit = __commonJS({
       _visit(Object.freeze([]), cst, visitor);
     }
     visit.BREAK = BREAK;
-    visit.SKIP = SKIP;
+    visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
     visit.itemAtPath = (cst, path6) => {
       let item = cst;
@@ -12249,8 +12249,8 @@ var require_parse = __commonJS({
             brace.value = brace.output = "\\{";
             value = output = "\\}";
             state.output = out;
-            for (const t of toks) {
-              state.output += t.output || t.value;
+            for (const t2 of toks) {
+              state.output += t2.output || t2.value;
             }
           }
           push({ type: "brace", value, output });
@@ -15373,8 +15373,8 @@ var require_parse3 = __commonJS({
             brace.value = brace.output = "\\{";
             value = output = "\\}";
             state.output = out;
-            for (const t of toks) {
-              state.output += t.output || t.value;
+            for (const t2 of toks) {
+              state.output += t2.output || t2.value;
             }
           }
           push({ type: "brace", value, output });
@@ -19709,8 +19709,8 @@ var init_tokenizers = __esm({
        * @returns The normalized text.
        */
       normalize(text) {
-        return this.normalizers.reduce((t, normalizer) => {
-          return normalizer ? normalizer.normalize(t) : t;
+        return this.normalizers.reduce((t2, normalizer) => {
+          return normalizer ? normalizer.normalize(t2) : t2;
         }, text);
       }
     };
@@ -20915,11 +20915,11 @@ var init_tokenizers = __esm({
             continue;
           }
           const bpe_token_list = this.bpe(token);
-          for (const t of bpe_token_list) {
-            if (this.tokens_to_ids.has(t)) {
-              output_tokens.push(t);
+          for (const t2 of bpe_token_list) {
+            if (this.tokens_to_ids.has(t2)) {
+              output_tokens.push(t2);
             } else if (this.byte_fallback) {
-              const byte_tokens = Array.from(this.text_encoder.encode(t)).map(
+              const byte_tokens = Array.from(this.text_encoder.encode(t2)).map(
                 (x) => `<0x${x.toString(16).toUpperCase().padStart(2, "0")}>`
               );
               if (byte_tokens.every((x) => this.tokens_to_ids.has(x))) {
@@ -21493,7 +21493,7 @@ var init_tokenizers = __esm({
           add_special_tokens
         });
         const input_ids = tokens.map(
-          (t) => this.added_tokens_map.get(t)?.id ?? this.model.tokens_to_ids.get(t) ?? this.model.unk_token_id
+          (t2) => this.added_tokens_map.get(t2)?.id ?? this.model.tokens_to_ids.get(t2) ?? this.model.unk_token_id
         );
         const result = {
           ids: input_ids,
@@ -21841,7 +21841,7 @@ function planFastPath(lib) {
     } catch {
       return null;
     }
-    if (!Array.isArray(out) || out.length !== probe.length || out.some((t, i) => t !== probe[i])) return null;
+    if (!Array.isArray(out) || out.length !== probe.length || out.some((t2, i) => t2 !== probe[i])) return null;
   }
   if (lib.pre_tokenizer === null) return null;
   const stages = [];
@@ -21862,8 +21862,8 @@ function planFastPath(lib) {
     const bl = splitter;
     const mapper = new ByteLevelPreTokenizer({ ...bl.config, use_regex: false, add_prefix_space: false });
     split = (parts) => parts.flatMap((text) => {
-      const t = bl.add_prefix_space && !text.startsWith(" ") ? " " + text : text;
-      return t.match(bl.pattern) ?? [];
+      const t2 = bl.add_prefix_space && !text.startsWith(" ") ? " " + text : text;
+      return t2.match(bl.pattern) ?? [];
     });
     rest = [mapper, ...rest];
   }
@@ -22016,23 +22016,23 @@ var MomentTally = class _MomentTally {
   /** Adds one measured document; the keys match ShardTally's (detected language; purity basis for the script sums). */
   add(m, tokens) {
     const put2 = _MomentTally.put;
-    const t = this.of(m.language);
-    put2(t, F.bytes2, m.bytes * m.bytes);
-    put2(t, F.chars2, m.chars * m.chars);
-    put2(t, F.words2, m.words * m.words);
+    const t2 = this.of(m.language);
+    put2(t2, F.bytes2, m.bytes * m.bytes);
+    put2(t2, F.chars2, m.chars * m.chars);
+    put2(t2, F.words2, m.words * m.words);
     const main2 = tokens?.main;
     const base = tokens?.baseline;
     if (main2) {
-      put2(t, F.tokens2, main2.tokens * main2.tokens);
-      put2(t, F.wordTokens2, main2.wordTokens * main2.wordTokens);
-      put2(t, F.wordTokensWords, main2.wordTokens * m.words);
-      put2(t, F.continued2, main2.continuedWords * main2.continuedWords);
-      put2(t, F.continuedWords, main2.continuedWords * m.words);
+      put2(t2, F.tokens2, main2.tokens * main2.tokens);
+      put2(t2, F.wordTokens2, main2.wordTokens * main2.wordTokens);
+      put2(t2, F.wordTokensWords, main2.wordTokens * m.words);
+      put2(t2, F.continued2, main2.continuedWords * main2.continuedWords);
+      put2(t2, F.continuedWords, main2.continuedWords * m.words);
     }
     if (base) {
-      put2(t, F.baselineTokens2, base.tokens * base.tokens);
-      put2(t, F.baselineWordTokens2, base.wordTokens * base.wordTokens);
-      if (main2) put2(t, F.wordTokensBaseline, main2.wordTokens * base.wordTokens);
+      put2(t2, F.baselineTokens2, base.tokens * base.tokens);
+      put2(t2, F.baselineWordTokens2, base.wordTokens * base.wordTokens);
+      if (main2) put2(t2, F.wordTokensBaseline, main2.wordTokens * base.wordTokens);
     }
     if (m.purity !== null) {
       let scriptChars = 0;
@@ -22053,22 +22053,22 @@ function shardWeight(r) {
 function scaleShardResult(r) {
   const w = shardWeight(r);
   if (!r.sample || w === 1) return r;
-  const scaleTokens = (t) => t && { tokens: t.tokens * w, unknown: t.unknown * w, wordTokens: t.wordTokens * w, continuedWords: t.continuedWords * w };
+  const scaleTokens = (t2) => t2 && { tokens: t2.tokens * w, unknown: t2.unknown * w, wordTokens: t2.wordTokens * w, continuedWords: t2.continuedWords * w };
   const scaleCounts = (c) => Object.fromEntries(Object.entries(c).map(([k, n]) => [k, n * w]));
   const languages2 = {};
-  for (const [k, t] of Object.entries(r.languages)) {
+  for (const [k, t2] of Object.entries(r.languages)) {
     const s = {
-      docs: t.docs * w,
-      bytes: t.bytes * w,
-      chars: t.chars * w,
-      words: t.words * w,
-      purityDocs: t.purityDocs * w,
-      scriptChars: t.scriptChars * w,
-      expectedScriptChars: t.expectedScriptChars * w,
-      purityHistogram: t.purityHistogram.map((n) => n * w)
+      docs: t2.docs * w,
+      bytes: t2.bytes * w,
+      chars: t2.chars * w,
+      words: t2.words * w,
+      purityDocs: t2.purityDocs * w,
+      scriptChars: t2.scriptChars * w,
+      expectedScriptChars: t2.expectedScriptChars * w,
+      purityHistogram: t2.purityHistogram.map((n) => n * w)
     };
-    const tokens = scaleTokens(t.tokens);
-    const baseline = scaleTokens(t.baseline);
+    const tokens = scaleTokens(t2.tokens);
+    const baseline = scaleTokens(t2.baseline);
     if (tokens) s.tokens = tokens;
     if (baseline) s.baseline = baseline;
     languages2[k] = s;
@@ -22269,19 +22269,19 @@ var ShardTally = class {
     for (const key of [...languageKeys, "other", "und"]) this.languages[key] = emptyLanguageTally();
   }
   lang(key) {
-    let t = this.languages[key];
-    if (!t) this.languages[key] = t = emptyLanguageTally();
-    return t;
+    let t2 = this.languages[key];
+    if (!t2) this.languages[key] = t2 = emptyLanguageTally();
+    return t2;
   }
   /** Adds one document's measures, with its line for located samples. */
   add(line, m, tokens) {
-    const t = this.lang(m.language);
-    t.docs += 1;
-    t.bytes += m.bytes;
-    t.chars += m.chars;
-    t.words += m.words;
-    if (tokens?.main) addTokens(t.tokens ??= emptyTokenTally(), tokens.main);
-    if (tokens?.baseline) addTokens(t.baseline ??= emptyTokenTally(), tokens.baseline);
+    const t2 = this.lang(m.language);
+    t2.docs += 1;
+    t2.bytes += m.bytes;
+    t2.chars += m.chars;
+    t2.words += m.words;
+    if (tokens?.main) addTokens(t2.tokens ??= emptyTokenTally(), tokens.main);
+    if (tokens?.baseline) addTokens(t2.baseline ??= emptyTokenTally(), tokens.baseline);
     let scriptChars = 0;
     for (const [script, n] of Object.entries(m.scripts)) {
       this.scripts[script] = (this.scripts[script] ?? 0) + n;
@@ -22326,7 +22326,7 @@ var ShardTally = class {
    * document here would have kept (the first N by line; for impure, the N lowest by purity, then line).
    */
   absorb(o) {
-    for (const [key, t] of Object.entries(o.languages)) this.languages[key] = addLanguageTallies(this.lang(key), t);
+    for (const [key, t2] of Object.entries(o.languages)) this.languages[key] = addLanguageTallies(this.lang(key), t2);
     addCounts(this.scripts, o.scripts);
     addCounts(this.anomalyMasks, o.anomalyMasks);
     addCounts(this.anomalyDocs, o.anomalyDocs);
@@ -22386,8 +22386,8 @@ function mergeShardResults(results, languageKeys) {
     input: { lines: 0, docs: 0, docLines: 0, empty: 0, rejected: 0, byReason: {}, bytes: 0, compressedBytes: 0 }
   };
   for (const r of results) {
-    for (const [k, t] of Object.entries(r.languages)) {
-      out.languages[k] = addLanguageTallies(out.languages[k] ?? emptyLanguageTally(), t);
+    for (const [k, t2] of Object.entries(r.languages)) {
+      out.languages[k] = addLanguageTallies(out.languages[k] ?? emptyLanguageTally(), t2);
     }
     addCounts(out.scripts, r.scripts);
     addCounts(out.anomalyMasks, r.anomalyMasks);
@@ -22413,18 +22413,18 @@ function addCounts(into, from) {
 function ratio(a, b) {
   return b === 0 ? null : a / b;
 }
-function amountIn(t, unit) {
+function amountIn(t2, unit) {
   switch (unit) {
     case "docs":
-      return t.docs;
+      return t2.docs;
     case "bytes":
-      return t.bytes;
+      return t2.bytes;
     case "chars":
-      return t.chars;
+      return t2.chars;
     case "words":
-      return t.words;
+      return t2.words;
     case "tokens":
-      return t.tokens?.tokens ?? 0;
+      return t2.tokens?.tokens ?? 0;
   }
 }
 function docsBelowPurity(histogram, minPurity) {
@@ -22433,15 +22433,15 @@ function docsBelowPurity(histogram, minPurity) {
   for (let i = 0; i < firstPure && i < histogram.length; i++) n += histogram[i];
   return n;
 }
-function tokenFigures(t, tokens, tokenizer) {
+function tokenFigures(t2, tokens, tokenizer) {
   return {
     tokenizer: tokenizer.label,
     tokens: tokens.tokens,
-    fertility: ratio(tokens.wordTokens, t.words),
-    continuedWords: ratio(tokens.continuedWords, t.words),
-    tokensPerWord: ratio(tokens.tokens, t.words),
-    charsPerToken: ratio(t.chars, tokens.tokens),
-    bytesPerToken: ratio(t.bytes, tokens.tokens),
+    fertility: ratio(tokens.wordTokens, t2.words),
+    continuedWords: ratio(tokens.continuedWords, t2.words),
+    tokensPerWord: ratio(tokens.tokens, t2.words),
+    charsPerToken: ratio(t2.chars, tokens.tokens),
+    bytesPerToken: ratio(t2.bytes, tokens.tokens),
     unknownRate: tokenizer.hasUnknown ? ratio(tokens.unknown, tokens.tokens) : null
   };
 }
@@ -22452,28 +22452,28 @@ function languageFigures(policy, corpus) {
   const totals = { docs: total("docs"), bytes: total("bytes"), chars: total("chars"), words: total("words"), tokens: total("tokens") };
   const out = {};
   for (const key of keys) {
-    const t = langs[key];
-    if (!t) continue;
+    const t2 = langs[key];
+    if (!t2) continue;
     const share = {
-      docs: ratio(t.docs, totals.docs) ?? 0,
-      bytes: ratio(t.bytes, totals.bytes) ?? 0,
-      chars: ratio(t.chars, totals.chars) ?? 0,
-      words: ratio(t.words, totals.words) ?? 0
+      docs: ratio(t2.docs, totals.docs) ?? 0,
+      bytes: ratio(t2.bytes, totals.bytes) ?? 0,
+      chars: ratio(t2.chars, totals.chars) ?? 0,
+      words: ratio(t2.words, totals.words) ?? 0
     };
-    if (corpus.tokenizer) share.tokens = ratio(t.tokens?.tokens ?? 0, totals.tokens) ?? 0;
+    if (corpus.tokenizer) share.tokens = ratio(t2.tokens?.tokens ?? 0, totals.tokens) ?? 0;
     const spec = policy.languages.find((l) => l.key === key);
     const f = {
       key,
-      docs: t.docs,
-      bytes: t.bytes,
-      chars: t.chars,
-      words: t.words,
+      docs: t2.docs,
+      bytes: t2.bytes,
+      chars: t2.chars,
+      words: t2.words,
       share,
-      purity: ratio(t.expectedScriptChars, t.scriptChars),
-      purityDocs: t.purityDocs
+      purity: ratio(t2.expectedScriptChars, t2.scriptChars),
+      purityDocs: t2.purityDocs
     };
     if (spec?.target !== void 0) f.target = spec.target;
-    if (policy.rules.script) f.impureDocs = docsBelowPurity(t.purityHistogram, policy.rules.script.minPurity);
+    if (policy.rules.script) f.impureDocs = docsBelowPurity(t2.purityHistogram, policy.rules.script.minPurity);
     const declaredRow = corpus.tally.declared[key];
     if (declaredRow) {
       const declaredDocs = Object.values(declaredRow).reduce((a, b) => a + b, 0);
@@ -22481,14 +22481,14 @@ function languageFigures(policy, corpus) {
       f.mismatchDocs = declaredDocs - (declaredRow[key] ?? 0) - (declaredRow["und"] ?? 0);
       f.detectedAs = declaredRow;
     }
-    if (corpus.tokenizer && t.tokens) {
-      f.tokens = t.tokens.tokens;
-      f.fertility = tokenFigures(t, t.tokens, corpus.tokenizer);
+    if (corpus.tokenizer && t2.tokens) {
+      f.tokens = t2.tokens.tokens;
+      f.fertility = tokenFigures(t2, t2.tokens, corpus.tokenizer);
       const dict = corpus.dictionary?.[key];
       if (dict) f.fertility.dictionary = { entries: dict.main.entries, fertility: dict.main.fertility, continuedWords: dict.main.continued, list: dict.main.list };
     }
-    if (corpus.baseline && t.baseline) {
-      f.baseline = tokenFigures(t, t.baseline, corpus.baseline);
+    if (corpus.baseline && t2.baseline) {
+      f.baseline = tokenFigures(t2, t2.baseline, corpus.baseline);
       const dict = corpus.dictionary?.[key]?.baseline;
       if (dict) f.baseline.dictionary = { entries: dict.entries, fertility: dict.fertility, continuedWords: dict.continued, list: dict.list };
     }
@@ -22542,13 +22542,13 @@ function ratioEstimate(strata, scale = 1) {
   else effectiveN = kish > 0 ? X * X / kish : Infinity;
   return { estimate: R, variance, effectiveN, strata };
 }
-function intervalOf(e, method, offset = 0) {
-  if (e.estimate === null) return void 0;
+function intervalOf(e2, method, offset = 0) {
+  if (e2.estimate === null) return void 0;
   if (method === "linearized-normal") {
-    const half = Z_95 * Math.sqrt(e.variance);
-    return { low: e.estimate - half + offset, high: e.estimate + half + offset, method };
+    const half = Z_95 * Math.sqrt(e2.variance);
+    return { low: e2.estimate - half + offset, high: e2.estimate + half + offset, method };
   }
-  const w = wilsonInterval(Math.min(1, Math.max(0, e.estimate)), e.effectiveN);
+  const w = wilsonInterval(Math.min(1, Math.max(0, e2.estimate)), e2.effectiveN);
   return { low: w.low + offset, high: w.high + offset, method };
 }
 function intervalAtScale(strata, method, scale, offset = 0) {
@@ -22562,9 +22562,9 @@ function placeInterval(iv, bounds, eps = 1e-12) {
 }
 function scaleToSettle(strata, method, bounds, offset = 0, margin = 0) {
   const full = Math.max(1, ...strata.filter((s) => s.n > 0).map((s) => s.N / s.n));
-  const e = ratioEstimate(strata).estimate;
-  if (e === null) return null;
-  const toward = (b) => b + margin * (e + offset - b);
+  const e2 = ratioEstimate(strata).estimate;
+  if (e2 === null) return null;
+  const toward = (b) => b + margin * (e2 + offset - b);
   const target = { high: toward(bounds.high), ...bounds.low !== void 0 ? { low: toward(bounds.low) } : {} };
   const settled = (scale) => {
     const iv = intervalAtScale(strata, method, scale, offset);
@@ -22600,29 +22600,29 @@ var SampledCorpus = class {
     return this.strata((r) => {
       let x = 0;
       let xx = 0;
-      for (const [k, t2] of Object.entries(r.languages)) {
-        x += amount(t2, unit);
-        xx += amount2(t2, r.sample?.moments[k], unit);
+      for (const [k, t3] of Object.entries(r.languages)) {
+        x += amount(t3, unit);
+        xx += amount2(t3, r.sample?.moments[k], unit);
       }
-      const t = r.languages[key];
-      const y = t ? amount(t, unit) : 0;
-      const yy = t ? amount2(t, r.sample?.moments[key], unit) : 0;
+      const t2 = r.languages[key];
+      const y = t2 ? amount(t2, unit) : 0;
+      const yy = t2 ? amount2(t2, r.sample?.moments[key], unit) : 0;
       return { y, x, yy, xx, xy: yy };
     });
   }
   /** Returns the strata of a language's purity (expected-script characters ÷ script characters). */
   purity(key) {
     return this.strata((r) => {
-      const t = r.languages[key];
+      const t2 = r.languages[key];
       const m = r.sample?.moments[key] ?? emptyMoments();
-      return { y: t?.expectedScriptChars ?? 0, x: t?.scriptChars ?? 0, yy: m.expected2, xx: m.scriptChars2, xy: m.expectedScriptChars };
+      return { y: t2?.expectedScriptChars ?? 0, x: t2?.scriptChars ?? 0, yy: m.expected2, xx: m.scriptChars2, xy: m.expectedScriptChars };
     });
   }
   /** Returns the strata of the share of a language's purity-judged documents below `minPurity`. */
   impure(key, minPurity) {
     return this.strata((r) => {
-      const t = r.languages[key];
-      return indicator(t ? docsBelowPurity(t.purityHistogram, minPurity) : 0, t?.purityDocs ?? 0);
+      const t2 = r.languages[key];
+      return indicator(t2 ? docsBelowPurity(t2.purityHistogram, minPurity) : 0, t2?.purityDocs ?? 0);
     });
   }
   /** Returns the strata of the share of documents declaring `key` that the detector labels otherwise. */
@@ -22644,18 +22644,18 @@ var SampledCorpus = class {
   /** Returns the strata of a language's fertility (word tokens ÷ words) or continued words (continued ÷ words) under the main tokenizer. */
   perWord(key, what) {
     return this.strata((r) => {
-      const t = r.languages[key];
+      const t2 = r.languages[key];
       const m = r.sample?.moments[key] ?? emptyMoments();
-      if (what === "fertility") return { y: t?.tokens?.wordTokens ?? 0, x: t?.words ?? 0, yy: m.wordTokens2, xx: m.words2, xy: m.wordTokensWords };
-      return { y: t?.tokens?.continuedWords ?? 0, x: t?.words ?? 0, yy: m.continued2, xx: m.words2, xy: m.continuedWords };
+      if (what === "fertility") return { y: t2?.tokens?.wordTokens ?? 0, x: t2?.words ?? 0, yy: m.wordTokens2, xx: m.words2, xy: m.wordTokensWords };
+      return { y: t2?.tokens?.continuedWords ?? 0, x: t2?.words ?? 0, yy: m.continued2, xx: m.words2, xy: m.continuedWords };
     });
   }
   /** Returns the strata of a language's word tokens under the main tokenizer ÷ under the baseline (fertility ratio). */
   againstBaseline(key) {
     return this.strata((r) => {
-      const t = r.languages[key];
+      const t2 = r.languages[key];
       const m = r.sample?.moments[key] ?? emptyMoments();
-      return { y: t?.tokens?.wordTokens ?? 0, x: t?.baseline?.wordTokens ?? 0, yy: m.wordTokens2, xx: m.baselineWordTokens2, xy: m.wordTokensBaseline };
+      return { y: t2?.tokens?.wordTokens ?? 0, x: t2?.baseline?.wordTokens ?? 0, yy: m.wordTokens2, xx: m.baselineWordTokens2, xy: m.wordTokensBaseline };
     });
   }
   /** Returns the strata of any document count (x = 1 per measured document): what the sample size is counted in. */
@@ -22667,16 +22667,16 @@ function intervalFrom(strata, method, offset = 0) {
   return intervalOf(ratioEstimate(strata), method, offset);
 }
 function measuredDocsOf(r) {
-  return Object.values(r.languages).reduce((s, t) => s + t.docs, 0);
+  return Object.values(r.languages).reduce((s, t2) => s + t2.docs, 0);
 }
 function indicator(y, x) {
   return { y, x, yy: y, xx: x, xy: y };
 }
-function amount(t, unit) {
-  return unit === "baseline" ? t.baseline?.tokens ?? 0 : amountIn(t, unit);
+function amount(t2, unit) {
+  return unit === "baseline" ? t2.baseline?.tokens ?? 0 : amountIn(t2, unit);
 }
-function amount2(t, m, unit) {
-  if (unit === "docs") return t.docs;
+function amount2(t2, m, unit) {
+  if (unit === "docs") return t2.docs;
   if (!m) return 0;
   switch (unit) {
     case "bytes":
@@ -23037,12 +23037,12 @@ function buildReport(policy, measured, cwd = process.cwd()) {
       empty: s.read.empty,
       rejected: s.read.rejected.count,
       bytes: s.read.bytes,
-      languages: Object.fromEntries(Object.entries(s.languages).filter(([, t]) => t.docs > 0).map(([k, t]) => [k, t.docs])),
+      languages: Object.fromEntries(Object.entries(s.languages).filter(([, t2]) => t2.docs > 0).map(([k, t2]) => [k, t2.docs])),
       rejections: s.read.rejected.samples,
       fromCache: corpus.cached.has(s.path)
     };
     if (s.subset !== void 0) fig.subset = s.subset;
-    if (corpus.tokenizer) fig.tokens = Object.values(s.languages).reduce((n, t) => n + (t.tokens?.tokens ?? 0), 0);
+    if (corpus.tokenizer) fig.tokens = Object.values(s.languages).reduce((n, t2) => n + (t2.tokens?.tokens ?? 0), 0);
     if (s.read.broken) fig.broken = s.read.broken;
     if (s.sample) fig.measuredDocs = s.sample.docs;
     return fig;
@@ -23051,13 +23051,13 @@ function buildReport(policy, measured, cwd = process.cwd()) {
   for (const s of corpus.shards) {
     const key = s.subset ?? "(none)";
     const sub = subsets[key] ??= { docs: 0, bytes: 0, words: 0, languages: {} };
-    for (const [lang, t] of Object.entries(s.languages)) {
-      if (t.docs === 0) continue;
-      sub.docs += t.docs;
-      sub.bytes += t.bytes;
-      sub.words += t.words;
-      if (t.tokens) sub.tokens = (sub.tokens ?? 0) + t.tokens.tokens;
-      sub.languages[lang] = (sub.languages[lang] ?? 0) + t.docs;
+    for (const [lang, t2] of Object.entries(s.languages)) {
+      if (t2.docs === 0) continue;
+      sub.docs += t2.docs;
+      sub.bytes += t2.bytes;
+      sub.words += t2.words;
+      if (t2.tokens) sub.tokens = (sub.tokens ?? 0) + t2.tokens.tokens;
+      sub.languages[lang] = (sub.languages[lang] ?? 0) + t2.docs;
     }
   }
   const report = {
@@ -23097,19 +23097,19 @@ function buildReport(policy, measured, cwd = process.cwd()) {
       report.tokenizer.baseline = corpus.baseline.label;
       if (sampled) {
         const intervals = {};
-        for (const [k, t] of Object.entries(corpus.tally.languages)) {
-          if (t.docs === 0) continue;
+        for (const [k, t2] of Object.entries(corpus.tally.languages)) {
+          if (t2.docs === 0) continue;
           const iv = intervalFrom(sampled.share(k, "baseline"), "wilson-linearized");
           if (iv) intervals[k] = iv;
         }
         report.tokenizer.mixUnderBaselineIntervals = intervals;
       }
-      const baseTotal = Object.values(corpus.tally.languages).reduce((n, t) => n + (t.baseline?.tokens ?? 0), 0);
+      const baseTotal = Object.values(corpus.tally.languages).reduce((n, t2) => n + (t2.baseline?.tokens ?? 0), 0);
       const under = {};
       const shift = {};
-      for (const [k, t] of Object.entries(corpus.tally.languages)) {
-        if (t.docs === 0) continue;
-        under[k] = ratio(t.baseline?.tokens ?? 0, baseTotal) ?? 0;
+      for (const [k, t2] of Object.entries(corpus.tally.languages)) {
+        if (t2.docs === 0) continue;
+        under[k] = ratio(t2.baseline?.tokens ?? 0, baseTotal) ?? 0;
         shift[k] = ((languages2[k]?.share.tokens ?? 0) - under[k]) * 100;
       }
       report.tokenizer.mixUnderBaseline = under;
@@ -23208,13 +23208,13 @@ function addLanguageIntervals(policy, languages2, sampled, hasTokens) {
 }
 function roundEstimates(report) {
   const r = Math.round;
-  const t = report.totals;
-  t.docs = r(t.docs);
-  t.bytes = r(t.bytes);
-  t.chars = r(t.chars);
-  t.words = r(t.words);
-  if (t.tokens !== void 0) t.tokens = r(t.tokens);
-  t.estimated = true;
+  const t2 = report.totals;
+  t2.docs = r(t2.docs);
+  t2.bytes = r(t2.bytes);
+  t2.chars = r(t2.chars);
+  t2.words = r(t2.words);
+  if (t2.tokens !== void 0) t2.tokens = r(t2.tokens);
+  t2.estimated = true;
   for (const f of Object.values(report.languages)) {
     f.docs = r(f.docs);
     f.bytes = r(f.bytes);
@@ -23299,15 +23299,15 @@ function readPolicyYaml(text) {
     const { line, col } = lineCounter.linePos(offset);
     return { line, column: col };
   };
-  const errors = doc.errors.map((e) => ({
-    position: pos(e.pos[0]),
-    path: pathAtOffset(doc, e.pos[0]),
-    message: plainMessage(e.message)
+  const errors = doc.errors.map((e2) => ({
+    position: pos(e2.pos[0]),
+    path: pathAtOffset(doc, e2.pos[0]),
+    message: plainMessage(e2.message)
   }));
-  const warnings = doc.warnings.map((e) => ({
-    position: pos(e.pos[0]),
-    path: pathAtOffset(doc, e.pos[0]),
-    message: plainMessage(e.message)
+  const warnings = doc.warnings.map((e2) => ({
+    position: pos(e2.pos[0]),
+    path: pathAtOffset(doc, e2.pos[0]),
+    message: plainMessage(e2.message)
   }));
   const duplicates = [];
   findDuplicates(doc, doc.contents, [], pos, duplicates);
@@ -23315,8 +23315,8 @@ function readPolicyYaml(text) {
   if (errors.length === 0) {
     try {
       value = doc.toJS({ maxAliasCount: MAX_ALIAS_COUNT });
-    } catch (e) {
-      errors.push({ position: { line: 1, column: 1 }, path: [], message: e.message });
+    } catch (e2) {
+      errors.push({ position: { line: 1, column: 1 }, path: [], message: e2.message });
     }
   }
   const locate2 = (path6, part = "value") => {
@@ -25916,10 +25916,10 @@ function checkAgainstSchema(value) {
   if (validate2(value)) return [];
   const issues = [];
   const seen = /* @__PURE__ */ new Set();
-  const wrongType = new Set((validate2.errors ?? []).filter((e) => e.keyword === "type").map((e) => e.instancePath));
-  for (const e of validate2.errors ?? []) {
-    if (e.keyword !== "type" && wrongType.has(e.instancePath)) continue;
-    const issue = issueOf(e, value);
+  const wrongType = new Set((validate2.errors ?? []).filter((e2) => e2.keyword === "type").map((e2) => e2.instancePath));
+  for (const e2 of validate2.errors ?? []) {
+    if (e2.keyword !== "type" && wrongType.has(e2.instancePath)) continue;
+    const issue = issueOf(e2, value);
     const id = `${issue.path.join("\0")}${issue.message}`;
     if (seen.has(id)) continue;
     seen.add(id);
@@ -25984,14 +25984,14 @@ function schemaKeyIndex() {
   visit(POLICY_SCHEMA, "", 0);
   return keyIndex;
 }
-function issueOf(e, root) {
-  const path6 = pointerPath(e.instancePath, root);
-  const p = e.params;
-  const data2 = e.data;
-  switch (e.keyword) {
+function issueOf(e2, root) {
+  const path6 = pointerPath(e2.instancePath, root);
+  const p = e2.params;
+  const data2 = e2.data;
+  switch (e2.keyword) {
     case "additionalProperties": {
       const key = String(p.additionalProperty);
-      const valid = propertyNames(e.parentSchema);
+      const valid = propertyNames(e2.parentSchema);
       const near = nearest(key, valid);
       let message = `unknown key \`${key}\``;
       let suggestion;
@@ -26019,7 +26019,7 @@ function issueOf(e, root) {
       };
     }
     case "false schema": {
-      const m = /\/dependentSchemas\/([^/]+)\//.exec(e.schemaPath);
+      const m = /\/dependentSchemas\/([^/]+)\//.exec(e2.schemaPath);
       const with_ = m ? m[1].replace(/~1/g, "/").replace(/~0/g, "~") : void 0;
       const key = String(path6[path6.length - 1]);
       return {
@@ -26029,7 +26029,7 @@ function issueOf(e, root) {
       };
     }
     case "type": {
-      const want = [].concat(p.type).map((t) => TYPE_WORDS[t] ?? t);
+      const want = [].concat(p.type).map((t2) => TYPE_WORDS[t2] ?? t2);
       let suggestion;
       const numeric = want.includes(TYPE_WORDS.number) || want.includes(TYPE_WORDS.integer);
       if (typeof data2 === "string" && /^\s*\d+(\.\d+)?\s*%\s*$/.test(data2) && numeric) {
@@ -26062,14 +26062,14 @@ function issueOf(e, root) {
     case "exclusiveMaximum": {
       const cmp = String(p.comparison).replace(">=", "\u2265").replace("<=", "\u2264");
       let suggestion;
-      if (e.keyword === "maximum" && p.limit === 1 && typeof data2 === "number" && data2 > 1 && data2 <= 100) {
+      if (e2.keyword === "maximum" && p.limit === 1 && typeof data2 === "number" && data2 > 1 && data2 <= 100) {
         suggestion = `shares are fractions of 1: ${data2} % is \`${data2 / 100}\``;
       }
       return { path: path6, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "minProperties": {
-      const names = propertyNames(e.parentSchema);
-      const dependent = new Set(Object.keys(e.parentSchema?.dependentRequired ?? {}));
+      const names = propertyNames(e2.parentSchema);
+      const dependent = new Set(Object.keys(e2.parentSchema?.dependentRequired ?? {}));
       const primary = names.filter((k) => !dependent.has(k));
       const what = primary.length > 0 && primary.length <= MAX_LISTED_KEYS ? `; set ${primary.map((k) => `\`${k}\``).join(" or ")}` : "";
       return { path: path6, part: "value", message: `must not be empty${what}` };
@@ -26082,7 +26082,7 @@ function issueOf(e, root) {
       const item = Array.isArray(data2) ? data2[Number(p.j)] : void 0;
       return { path: path6, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
     default:
-      return { path: path6, part: "value", message: e.message ?? `fails the \`${e.keyword}\` check` };
+      return { path: path6, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
   }
 }
 
@@ -26477,15 +26477,15 @@ function isoLanguages() {
 var tables;
 function isoTables() {
   if (tables) return tables;
-  const t = { by3: /* @__PURE__ */ new Map(), by1: /* @__PURE__ */ new Map(), by2B: /* @__PURE__ */ new Map(), byName: /* @__PURE__ */ new Map() };
+  const t2 = { by3: /* @__PURE__ */ new Map(), by1: /* @__PURE__ */ new Map(), by2B: /* @__PURE__ */ new Map(), byName: /* @__PURE__ */ new Map() };
   for (const lang of isoLanguages()) {
-    t.by3.set(lang.iso6393, lang);
-    if (lang.iso6391) t.by1.set(lang.iso6391, lang);
-    if (lang.iso6392B && lang.iso6392B !== lang.iso6393) t.by2B.set(lang.iso6392B, lang);
+    t2.by3.set(lang.iso6393, lang);
+    if (lang.iso6391) t2.by1.set(lang.iso6391, lang);
+    if (lang.iso6392B && lang.iso6392B !== lang.iso6393) t2.by2B.set(lang.iso6392B, lang);
     const name = lang.name.toLowerCase();
-    if (!t.byName.has(name)) t.byName.set(name, lang);
+    if (!t2.byName.has(name)) t2.byName.set(name, lang);
   }
-  return tables = t;
+  return tables = t2;
 }
 
 // src/policy/data/macrolanguages.ts
@@ -27403,15 +27403,15 @@ function encodingSuggestion(enc) {
   return near ? { suggestion: didYouMean(near) } : {};
 }
 function buildTokenizer(v, at, root, files, sink) {
-  const t = asObj(v);
-  if (!t) return void 0;
-  const builtin = asStr(t.builtin);
+  const t2 = asObj(v);
+  if (!t2) return void 0;
+  const builtin = asStr(t2.builtin);
   if (builtin !== void 0) {
     return BUILTIN_TOKENIZERS.includes(builtin) ? { kind: "builtin", name: builtin } : void 0;
   }
-  const file = asStr(t.file);
+  const file = asStr(t2.file);
   if (file === void 0) return void 0;
-  const written = asStr(t.format);
+  const written = asStr(t2.format);
   let format;
   if (written === "tokenizer.json" || written === "tiktoken") format = written;
   else if (written === void 0) {
@@ -27424,7 +27424,7 @@ function buildTokenizer(v, at, root, files, sink) {
       return void 0;
     }
   } else return void 0;
-  const pattern = asStr(t.pattern);
+  const pattern = asStr(t2.pattern);
   if (format === "tokenizer.json" && pattern !== void 0) {
     sink.problem([...at, "pattern"], "`pattern` is only used with tiktoken rank files; a tokenizer.json carries its own pre-tokenizer", { part: "key" });
   }
@@ -27434,9 +27434,9 @@ function buildTokenizer(v, at, root, files, sink) {
     } else if (!BUILTIN_TOKENIZERS.includes(pattern)) {
       try {
         new RegExp(pattern, "gu");
-      } catch (e) {
+      } catch (e2) {
         const near = nearest(pattern, BUILTIN_TOKENIZERS);
-        sink.problem([...at, "pattern"], `neither a builtin name nor a valid regular expression: ${e.message}`, {
+        sink.problem([...at, "pattern"], `neither a builtin name nor a valid regular expression: ${e2.message}`, {
           ...near ? { suggestion: didYouMean(near) } : {}
         });
       }
@@ -27712,7 +27712,7 @@ function parsePolicyDetailed(text, file, opts = {}) {
     locate: doc.locate
   });
   for (const w of doc.warnings) warnings.push(make(w.path, w.position, w.message));
-  for (const e of doc.errors) problems.push(make(e.path, e.position, `YAML syntax: ${e.message}`));
+  for (const e2 of doc.errors) problems.push(make(e2.path, e2.position, `YAML syntax: ${e2.message}`));
   if (problems.length > 0) return failed();
   for (const d of doc.duplicates) problems.push(make(d.path, d.position, d.message));
   const value = doc.value;
@@ -27778,9 +27778,9 @@ async function kindOfPath(p) {
   try {
     const s = await stat(p);
     return s.isDirectory() ? "dir" : "file";
-  } catch (e) {
-    const code = e.code;
-    return { missing: code === "ENOENT" ? "does not exist" : `cannot be read (${code ?? e.message})` };
+  } catch (e2) {
+    const code = e2.code;
+    return { missing: code === "ENOENT" ? "does not exist" : `cannot be read (${code ?? e2.message})` };
   }
 }
 async function loadPolicy(file, overrides = {}) {
@@ -27788,9 +27788,9 @@ async function loadPolicy(file, overrides = {}) {
   let text;
   try {
     text = await readFile(absFile, "utf8");
-  } catch (e) {
-    const code = e.code;
-    const why = code === "ENOENT" ? "no such file" : code === "EISDIR" ? "it is a directory" : e.message;
+  } catch (e2) {
+    const code = e2.code;
+    const why = code === "ENOENT" ? "no such file" : code === "EISDIR" ? "it is a directory" : e2.message;
     return { ok: false, problems: [{ file, path: "", message: `cannot read the policy file: ${why}` }], warnings: [] };
   }
   const policyDir = path3.dirname(absFile);
@@ -28340,37 +28340,37 @@ var u8 = Uint8Array;
 var u16 = Uint16Array;
 var i16 = Int16Array;
 var i32 = Int32Array;
-var slc = function(v, s, e) {
+var slc = function(v, s, e2) {
   if (u8.prototype.slice)
-    return u8.prototype.slice.call(v, s, e);
+    return u8.prototype.slice.call(v, s, e2);
   if (s == null || s < 0)
     s = 0;
-  if (e == null || e > v.length)
-    e = v.length;
-  var n = new u8(e - s);
-  n.set(v.subarray(s, e));
+  if (e2 == null || e2 > v.length)
+    e2 = v.length;
+  var n = new u8(e2 - s);
+  n.set(v.subarray(s, e2));
   return n;
 };
-var fill = function(v, n, s, e) {
+var fill = function(v, n, s, e2) {
   if (u8.prototype.fill)
-    return u8.prototype.fill.call(v, n, s, e);
+    return u8.prototype.fill.call(v, n, s, e2);
   if (s == null || s < 0)
     s = 0;
-  if (e == null || e > v.length)
-    e = v.length;
-  for (; s < e; ++s)
+  if (e2 == null || e2 > v.length)
+    e2 = v.length;
+  for (; s < e2; ++s)
     v[s] = n;
   return v;
 };
-var cpw = function(v, t, s, e) {
+var cpw = function(v, t2, s, e2) {
   if (u8.prototype.copyWithin)
-    return u8.prototype.copyWithin.call(v, t, s, e);
+    return u8.prototype.copyWithin.call(v, t2, s, e2);
   if (s == null || s < 0)
     s = 0;
-  if (e == null || e > v.length)
-    e = v.length;
-  while (s < e) {
-    v[t++] = v[s++];
+  if (e2 == null || e2 > v.length)
+    e2 = v.length;
+  while (s < e2) {
+    v[t2++] = v[s++];
   }
 };
 var ec = [
@@ -28382,13 +28382,13 @@ var ec = [
   "unexpected EOF"
 ];
 var err = function(ind, msg, nt) {
-  var e = new Error(msg || ec[ind]);
-  e.code = ind;
+  var e2 = new Error(msg || ec[ind]);
+  e2.code = ind;
   if (Error.captureStackTrace)
-    Error.captureStackTrace(e, err);
+    Error.captureStackTrace(e2, err);
   if (!nt)
-    throw e;
-  return e;
+    throw e2;
+  return e2;
 };
 var rb = function(d, b, n) {
   var i = 0, o = 0;
@@ -29004,6 +29004,299 @@ var Decompress = /* @__PURE__ */ (function() {
   return Decompress2;
 })();
 
+// node_modules/xxhash-wasm/esm/xxhash-wasm.js
+var t = new Uint8Array([0, 97, 115, 109, 1, 0, 0, 0, 1, 48, 8, 96, 3, 127, 127, 127, 1, 127, 96, 3, 127, 127, 127, 0, 96, 2, 127, 127, 0, 96, 1, 127, 1, 127, 96, 3, 127, 127, 126, 1, 126, 96, 3, 126, 127, 127, 1, 126, 96, 2, 127, 126, 0, 96, 1, 127, 1, 126, 3, 11, 10, 0, 0, 2, 1, 3, 4, 5, 6, 1, 7, 5, 3, 1, 0, 1, 7, 85, 9, 3, 109, 101, 109, 2, 0, 5, 120, 120, 104, 51, 50, 0, 0, 6, 105, 110, 105, 116, 51, 50, 0, 2, 8, 117, 112, 100, 97, 116, 101, 51, 50, 0, 3, 8, 100, 105, 103, 101, 115, 116, 51, 50, 0, 4, 5, 120, 120, 104, 54, 52, 0, 5, 6, 105, 110, 105, 116, 54, 52, 0, 7, 8, 117, 112, 100, 97, 116, 101, 54, 52, 0, 8, 8, 100, 105, 103, 101, 115, 116, 54, 52, 0, 9, 10, 251, 22, 10, 242, 1, 1, 4, 127, 32, 0, 32, 1, 106, 33, 3, 32, 1, 65, 16, 79, 4, 127, 32, 3, 65, 16, 107, 33, 6, 32, 2, 65, 168, 136, 141, 161, 2, 106, 33, 3, 32, 2, 65, 137, 235, 208, 208, 7, 107, 33, 4, 32, 2, 65, 207, 140, 162, 142, 6, 106, 33, 5, 3, 64, 32, 3, 32, 0, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 33, 3, 32, 4, 32, 0, 65, 4, 106, 34, 0, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 33, 4, 32, 2, 32, 0, 65, 4, 106, 34, 0, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 33, 2, 32, 5, 32, 0, 65, 4, 106, 34, 0, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 33, 5, 32, 6, 32, 0, 65, 4, 106, 34, 0, 79, 13, 0, 11, 32, 2, 65, 12, 119, 32, 5, 65, 18, 119, 106, 32, 4, 65, 7, 119, 106, 32, 3, 65, 1, 119, 106, 5, 32, 2, 65, 177, 207, 217, 178, 1, 106, 11, 32, 1, 106, 32, 0, 32, 1, 65, 15, 113, 16, 1, 11, 146, 1, 0, 32, 1, 32, 2, 106, 33, 2, 3, 64, 32, 1, 65, 4, 106, 32, 2, 75, 69, 4, 64, 32, 0, 32, 1, 40, 2, 0, 65, 189, 220, 202, 149, 124, 108, 106, 65, 17, 119, 65, 175, 214, 211, 190, 2, 108, 33, 0, 32, 1, 65, 4, 106, 33, 1, 12, 1, 11, 11, 3, 64, 32, 1, 32, 2, 79, 69, 4, 64, 32, 0, 32, 1, 45, 0, 0, 65, 177, 207, 217, 178, 1, 108, 106, 65, 11, 119, 65, 177, 243, 221, 241, 121, 108, 33, 0, 32, 1, 65, 1, 106, 33, 1, 12, 1, 11, 11, 32, 0, 32, 0, 65, 15, 118, 115, 65, 247, 148, 175, 175, 120, 108, 34, 0, 65, 13, 118, 32, 0, 115, 65, 189, 220, 202, 149, 124, 108, 34, 0, 65, 16, 118, 32, 0, 115, 11, 63, 0, 32, 0, 65, 8, 106, 32, 1, 65, 168, 136, 141, 161, 2, 106, 54, 2, 0, 32, 0, 65, 12, 106, 32, 1, 65, 137, 235, 208, 208, 7, 107, 54, 2, 0, 32, 0, 65, 16, 106, 32, 1, 54, 2, 0, 32, 0, 65, 20, 106, 32, 1, 65, 207, 140, 162, 142, 6, 106, 54, 2, 0, 11, 195, 4, 1, 6, 127, 32, 1, 32, 2, 106, 33, 6, 32, 0, 65, 24, 106, 33, 4, 32, 0, 65, 40, 106, 40, 2, 0, 33, 3, 32, 0, 32, 0, 40, 2, 0, 32, 2, 106, 54, 2, 0, 32, 0, 65, 4, 106, 34, 5, 32, 5, 40, 2, 0, 32, 2, 65, 16, 79, 32, 0, 40, 2, 0, 65, 16, 79, 114, 114, 54, 2, 0, 32, 2, 32, 3, 106, 65, 16, 73, 4, 64, 32, 3, 32, 4, 106, 32, 1, 32, 2, 252, 10, 0, 0, 32, 0, 65, 40, 106, 32, 2, 32, 3, 106, 54, 2, 0, 15, 11, 32, 3, 4, 64, 32, 3, 32, 4, 106, 32, 1, 65, 16, 32, 3, 107, 34, 2, 252, 10, 0, 0, 32, 0, 65, 8, 106, 34, 3, 32, 3, 40, 2, 0, 32, 4, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 54, 2, 0, 32, 0, 65, 12, 106, 34, 3, 32, 3, 40, 2, 0, 32, 4, 65, 4, 106, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 54, 2, 0, 32, 0, 65, 16, 106, 34, 3, 32, 3, 40, 2, 0, 32, 4, 65, 8, 106, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 54, 2, 0, 32, 0, 65, 20, 106, 34, 3, 32, 3, 40, 2, 0, 32, 4, 65, 12, 106, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 54, 2, 0, 32, 0, 65, 40, 106, 65, 0, 54, 2, 0, 32, 1, 32, 2, 106, 33, 1, 11, 32, 1, 32, 6, 65, 16, 107, 77, 4, 64, 32, 6, 65, 16, 107, 33, 8, 32, 0, 65, 8, 106, 40, 2, 0, 33, 2, 32, 0, 65, 12, 106, 40, 2, 0, 33, 3, 32, 0, 65, 16, 106, 40, 2, 0, 33, 5, 32, 0, 65, 20, 106, 40, 2, 0, 33, 7, 3, 64, 32, 2, 32, 1, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 33, 2, 32, 3, 32, 1, 65, 4, 106, 34, 1, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 33, 3, 32, 5, 32, 1, 65, 4, 106, 34, 1, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 33, 5, 32, 7, 32, 1, 65, 4, 106, 34, 1, 40, 2, 0, 65, 247, 148, 175, 175, 120, 108, 106, 65, 13, 119, 65, 177, 243, 221, 241, 121, 108, 33, 7, 32, 8, 32, 1, 65, 4, 106, 34, 1, 79, 13, 0, 11, 32, 0, 65, 8, 106, 32, 2, 54, 2, 0, 32, 0, 65, 12, 106, 32, 3, 54, 2, 0, 32, 0, 65, 16, 106, 32, 5, 54, 2, 0, 32, 0, 65, 20, 106, 32, 7, 54, 2, 0, 11, 32, 1, 32, 6, 73, 4, 64, 32, 4, 32, 1, 32, 6, 32, 1, 107, 34, 1, 252, 10, 0, 0, 32, 0, 65, 40, 106, 32, 1, 54, 2, 0, 11, 11, 97, 1, 1, 127, 32, 0, 65, 16, 106, 40, 2, 0, 33, 1, 32, 0, 65, 4, 106, 40, 2, 0, 4, 127, 32, 1, 65, 12, 119, 32, 0, 65, 20, 106, 40, 2, 0, 65, 18, 119, 106, 32, 0, 65, 12, 106, 40, 2, 0, 65, 7, 119, 106, 32, 0, 65, 8, 106, 40, 2, 0, 65, 1, 119, 106, 5, 32, 1, 65, 177, 207, 217, 178, 1, 106, 11, 32, 0, 40, 2, 0, 106, 32, 0, 65, 24, 106, 32, 0, 65, 40, 106, 40, 2, 0, 16, 1, 11, 255, 3, 2, 3, 126, 1, 127, 32, 0, 32, 1, 106, 33, 6, 32, 1, 65, 32, 79, 4, 126, 32, 6, 65, 32, 107, 33, 6, 32, 2, 66, 214, 235, 130, 238, 234, 253, 137, 245, 224, 0, 124, 33, 3, 32, 2, 66, 177, 169, 172, 193, 173, 184, 212, 166, 61, 125, 33, 4, 32, 2, 66, 249, 234, 208, 208, 231, 201, 161, 228, 225, 0, 124, 33, 5, 3, 64, 32, 3, 32, 0, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 3, 32, 4, 32, 0, 65, 8, 106, 34, 0, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 4, 32, 2, 32, 0, 65, 8, 106, 34, 0, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 2, 32, 5, 32, 0, 65, 8, 106, 34, 0, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 5, 32, 6, 32, 0, 65, 8, 106, 34, 0, 79, 13, 0, 11, 32, 2, 66, 12, 137, 32, 5, 66, 18, 137, 124, 32, 4, 66, 7, 137, 124, 32, 3, 66, 1, 137, 124, 32, 3, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 32, 4, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 32, 2, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 32, 5, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 5, 32, 2, 66, 197, 207, 217, 178, 241, 229, 186, 234, 39, 124, 11, 32, 1, 173, 124, 32, 0, 32, 1, 65, 31, 113, 16, 6, 11, 134, 2, 0, 32, 1, 32, 2, 106, 33, 2, 3, 64, 32, 2, 32, 1, 65, 8, 106, 79, 4, 64, 32, 1, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 32, 0, 133, 66, 27, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 33, 0, 32, 1, 65, 8, 106, 33, 1, 12, 1, 11, 11, 32, 1, 65, 4, 106, 32, 2, 77, 4, 64, 32, 0, 32, 1, 53, 2, 0, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 23, 137, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 249, 243, 221, 241, 153, 246, 153, 171, 22, 124, 33, 0, 32, 1, 65, 4, 106, 33, 1, 11, 3, 64, 32, 1, 32, 2, 73, 4, 64, 32, 0, 32, 1, 49, 0, 0, 66, 197, 207, 217, 178, 241, 229, 186, 234, 39, 126, 133, 66, 11, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 0, 32, 1, 65, 1, 106, 33, 1, 12, 1, 11, 11, 32, 0, 32, 0, 66, 33, 136, 133, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 34, 0, 32, 0, 66, 29, 136, 133, 66, 249, 243, 221, 241, 153, 246, 153, 171, 22, 126, 34, 0, 32, 0, 66, 32, 136, 133, 11, 77, 0, 32, 0, 65, 8, 106, 32, 1, 66, 214, 235, 130, 238, 234, 253, 137, 245, 224, 0, 124, 55, 3, 0, 32, 0, 65, 16, 106, 32, 1, 66, 177, 169, 172, 193, 173, 184, 212, 166, 61, 125, 55, 3, 0, 32, 0, 65, 24, 106, 32, 1, 55, 3, 0, 32, 0, 65, 32, 106, 32, 1, 66, 249, 234, 208, 208, 231, 201, 161, 228, 225, 0, 124, 55, 3, 0, 11, 244, 4, 2, 3, 127, 4, 126, 32, 1, 32, 2, 106, 33, 5, 32, 0, 65, 40, 106, 33, 4, 32, 0, 65, 200, 0, 106, 40, 2, 0, 33, 3, 32, 0, 32, 0, 41, 3, 0, 32, 2, 173, 124, 55, 3, 0, 32, 2, 32, 3, 106, 65, 32, 73, 4, 64, 32, 3, 32, 4, 106, 32, 1, 32, 2, 252, 10, 0, 0, 32, 0, 65, 200, 0, 106, 32, 2, 32, 3, 106, 54, 2, 0, 15, 11, 32, 3, 4, 64, 32, 3, 32, 4, 106, 32, 1, 65, 32, 32, 3, 107, 34, 2, 252, 10, 0, 0, 32, 0, 65, 8, 106, 34, 3, 32, 3, 41, 3, 0, 32, 4, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 55, 3, 0, 32, 0, 65, 16, 106, 34, 3, 32, 3, 41, 3, 0, 32, 4, 65, 8, 106, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 55, 3, 0, 32, 0, 65, 24, 106, 34, 3, 32, 3, 41, 3, 0, 32, 4, 65, 16, 106, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 55, 3, 0, 32, 0, 65, 32, 106, 34, 3, 32, 3, 41, 3, 0, 32, 4, 65, 24, 106, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 55, 3, 0, 32, 0, 65, 200, 0, 106, 65, 0, 54, 2, 0, 32, 1, 32, 2, 106, 33, 1, 11, 32, 1, 65, 32, 106, 32, 5, 77, 4, 64, 32, 5, 65, 32, 107, 33, 2, 32, 0, 65, 8, 106, 41, 3, 0, 33, 6, 32, 0, 65, 16, 106, 41, 3, 0, 33, 7, 32, 0, 65, 24, 106, 41, 3, 0, 33, 8, 32, 0, 65, 32, 106, 41, 3, 0, 33, 9, 3, 64, 32, 6, 32, 1, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 6, 32, 7, 32, 1, 65, 8, 106, 34, 1, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 7, 32, 8, 32, 1, 65, 8, 106, 34, 1, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 8, 32, 9, 32, 1, 65, 8, 106, 34, 1, 41, 3, 0, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 124, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 33, 9, 32, 2, 32, 1, 65, 8, 106, 34, 1, 79, 13, 0, 11, 32, 0, 65, 8, 106, 32, 6, 55, 3, 0, 32, 0, 65, 16, 106, 32, 7, 55, 3, 0, 32, 0, 65, 24, 106, 32, 8, 55, 3, 0, 32, 0, 65, 32, 106, 32, 9, 55, 3, 0, 11, 32, 1, 32, 5, 73, 4, 64, 32, 4, 32, 1, 32, 5, 32, 1, 107, 34, 1, 252, 10, 0, 0, 32, 0, 65, 200, 0, 106, 32, 1, 54, 2, 0, 11, 11, 188, 2, 1, 5, 126, 32, 0, 65, 24, 106, 41, 3, 0, 33, 1, 32, 0, 41, 3, 0, 34, 2, 66, 32, 90, 4, 126, 32, 0, 65, 8, 106, 41, 3, 0, 34, 3, 66, 1, 137, 32, 0, 65, 16, 106, 41, 3, 0, 34, 4, 66, 7, 137, 124, 32, 1, 66, 12, 137, 32, 0, 65, 32, 106, 41, 3, 0, 34, 5, 66, 18, 137, 124, 124, 32, 3, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 32, 4, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 32, 1, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 32, 5, 66, 207, 214, 211, 190, 210, 199, 171, 217, 66, 126, 66, 31, 137, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 133, 66, 135, 149, 175, 175, 152, 182, 222, 155, 158, 127, 126, 66, 157, 163, 181, 234, 131, 177, 141, 138, 250, 0, 125, 5, 32, 1, 66, 197, 207, 217, 178, 241, 229, 186, 234, 39, 124, 11, 32, 2, 124, 32, 0, 65, 40, 106, 32, 2, 66, 31, 131, 167, 16, 6, 11]);
+async function e() {
+  return (function(t2) {
+    const { exports: { mem: e2, xxh32: n, xxh64: r, init32: i, update32: a, digest32: o, init64: s, update64: u, digest64: c } } = t2;
+    let h = new Uint8Array(e2.buffer);
+    function g(t3, n2) {
+      if (e2.buffer.byteLength < t3 + n2) {
+        const r2 = Math.ceil((t3 + n2 - e2.buffer.byteLength) / 65536);
+        e2.grow(r2), h = new Uint8Array(e2.buffer);
+      }
+    }
+    function f(t3, e3, n2, r2, i2, a2) {
+      g(t3);
+      const o2 = new Uint8Array(t3);
+      return h.set(o2), n2(0, e3), o2.set(h.subarray(0, t3)), { update(e4) {
+        let n3;
+        return h.set(o2), "string" == typeof e4 ? (g(3 * e4.length, t3), n3 = w.encodeInto(e4, h.subarray(t3)).written) : (g(e4.byteLength, t3), h.set(e4, t3), n3 = e4.byteLength), r2(0, t3, n3), o2.set(h.subarray(0, t3)), this;
+      }, digest: () => (h.set(o2), a2(i2(0))) };
+    }
+    function y(t3) {
+      return t3 >>> 0;
+    }
+    const b = 2n ** 64n - 1n;
+    function d(t3) {
+      return t3 & b;
+    }
+    const w = new TextEncoder(), l = 0, p = 0n;
+    function x(t3, e3 = l) {
+      return g(3 * t3.length, 0), y(n(0, w.encodeInto(t3, h).written, e3));
+    }
+    function L(t3, e3 = p) {
+      return g(3 * t3.length, 0), d(r(0, w.encodeInto(t3, h).written, e3));
+    }
+    return { h32: x, h32ToString: (t3, e3 = l) => x(t3, e3).toString(16).padStart(8, "0"), h32Raw: (t3, e3 = l) => (g(t3.byteLength, 0), h.set(t3), y(n(0, t3.byteLength, e3))), create32: (t3 = l) => f(48, t3, i, a, o, y), h64: L, h64ToString: (t3, e3 = p) => L(t3, e3).toString(16).padStart(16, "0"), h64Raw: (t3, e3 = p) => (g(t3.byteLength, 0), h.set(t3), d(r(0, t3.byteLength, e3))), create64: (t3 = p) => f(88, t3, s, u, c, d) };
+  })((await WebAssembly.instantiate(t)).instance);
+}
+
+// src/read/zstd-frames.ts
+var ZSTD_MAGIC = 4247762216;
+var SKIPPABLE_MAGIC_MASK = 4294967280;
+var SKIPPABLE_MAGIC = 407710288;
+var MAX_BLOCK_BYTES = 128 * 1024;
+var hashing;
+function xxhashApi() {
+  hashing ??= e().catch((error) => {
+    hashing = void 0;
+    throw error;
+  });
+  return hashing;
+}
+var MAGIC = 0;
+var DESCRIPTOR = 1;
+var HEADER = 2;
+var BLOCK_HEADER = 3;
+var BLOCK = 4;
+var CHECKSUM = 5;
+var SKIP_SIZE = 6;
+var SKIP = 7;
+var ZstdFrameReader = class {
+  constructor(api, write) {
+    this.api = api;
+    this.write = write;
+  }
+  api;
+  write;
+  stage = MAGIC;
+  field = new Uint8Array(16);
+  have = 0;
+  need = 4;
+  /** Bytes of a block's content or a skippable frame's data still to come. */
+  left = 0;
+  /** Frames begun, skippable ones included: the current frame's number, from 1. */
+  frames = 0;
+  /** Offset in the file of the chunk being walked. */
+  offset = 0;
+  frame;
+  broken;
+  consumerError;
+  /** Walks one chunk of the compressed stream, feeding each zstd frame's bytes to its decompressor. */
+  push(chunk) {
+    if (this.broken !== void 0) return this.broken;
+    const field = this.field;
+    const end = chunk.length;
+    let pos = 0;
+    let span = this.frame === void 0 ? -1 : 0;
+    while (pos < end) {
+      if (this.stage === BLOCK || this.stage === SKIP) {
+        const n = Math.min(this.left, end - pos);
+        pos += n;
+        this.left -= n;
+        if (this.left > 0) break;
+        if (this.passed()) {
+          const error = this.endFrame(chunk.subarray(span, pos));
+          if (error !== void 0) return this.fail(error);
+          span = -1;
+        }
+        continue;
+      }
+      while (this.have < this.need && pos < end) field[this.have++] = chunk[pos++];
+      if (this.have < this.need) break;
+      this.have = 0;
+      switch (this.stage) {
+        case MAGIC: {
+          const magic = readU32(field, 0);
+          this.frames++;
+          if (magic === ZSTD_MAGIC) {
+            this.frame = this.startFrame();
+            if (pos >= 4) span = pos - 4;
+            else {
+              const error = this.feed(field.slice(0, 4), false);
+              if (error !== void 0) return this.fail(error);
+              span = pos;
+            }
+            this.expect(DESCRIPTOR, 1);
+          } else if ((magic & SKIPPABLE_MAGIC_MASK) >>> 0 === SKIPPABLE_MAGIC) {
+            this.expect(SKIP_SIZE, 4);
+          } else {
+            const at = this.offset + pos - 4;
+            return this.fail(
+              `invalid zstd data: frame ${this.frames}, at byte ${at}, starts with ${hex32(magic)}, which is neither a zstd frame's magic number (0xFD2FB528) nor a skippable frame's (0x184D2A50 to 0x184D2A5F)`
+            );
+          }
+          break;
+        }
+        case DESCRIPTOR: {
+          const d = field[0];
+          if (d & 8) return this.fail(this.flush(chunk, span, pos) ?? `invalid zstd data: frame ${this.frames}'s header has its reserved bit set`);
+          const frame = this.frame;
+          frame.hasChecksum = (d & 4) !== 0;
+          if (frame.hasChecksum) frame.hash = this.api.create64(0n);
+          const singleSegment = d >> 5 & 1;
+          this.expect(HEADER, 1 + (singleSegment ? 0 : 1) + DID_BYTES[d & 3] + fcsBytes(d));
+          this.have = 1;
+          break;
+        }
+        case HEADER: {
+          const d = field[0];
+          const singleSegment = d >> 5 & 1;
+          const didBytes = DID_BYTES[d & 3];
+          let at = singleSegment ? 1 : 2;
+          const dictionary = readLE(field, at, didBytes);
+          at += didBytes;
+          if (dictionary !== 0) {
+            return this.fail(
+              this.flush(chunk, span, pos) ?? `frame ${this.frames} was compressed with a dictionary (Dictionary_ID ${dictionary}), which cannot be read without it`
+            );
+          }
+          const sizeBytes = fcsBytes(d);
+          if (sizeBytes > 0) this.frame.contentSize = readLE(field, at, sizeBytes) + (sizeBytes === 2 ? 256 : 0);
+          this.expect(BLOCK_HEADER, 3);
+          break;
+        }
+        case BLOCK_HEADER: {
+          const h = field[0] | field[1] << 8 | field[2] << 16;
+          const type = h >> 1 & 3;
+          const size = h >>> 3;
+          this.frame.lastBlock = (h & 1) === 1;
+          if (type === 3) return this.fail(this.flush(chunk, span, pos) ?? `invalid zstd data: frame ${this.frames} has a block of the reserved type`);
+          if (size > MAX_BLOCK_BYTES) {
+            return this.fail(this.flush(chunk, span, pos) ?? `invalid zstd data: frame ${this.frames} has a block of ${size} bytes, over the 128 KiB limit`);
+          }
+          this.stage = BLOCK;
+          this.left = type === 1 ? 1 : size;
+          if (this.left === 0 && this.passed()) {
+            const error = this.endFrame(chunk.subarray(span, pos));
+            if (error !== void 0) return this.fail(error);
+            span = -1;
+          }
+          break;
+        }
+        case CHECKSUM: {
+          const error = this.endFrame(chunk.subarray(span, pos));
+          if (error !== void 0) return this.fail(error);
+          span = -1;
+          break;
+        }
+        case SKIP_SIZE:
+          this.stage = SKIP;
+          this.left = readU32(field, 0);
+          if (this.left === 0) this.passed();
+          break;
+      }
+    }
+    if (span >= 0 && span < end) {
+      const error = this.feed(chunk.subarray(span), false);
+      if (error !== void 0) return this.fail(error);
+    }
+    this.offset += end;
+    return void 0;
+  }
+  /** Says whether the stream ended where a frame may end. */
+  end() {
+    if (this.broken !== void 0) return this.broken;
+    if (this.frames === 0 && this.have === 0) return this.fail("unexpected end of file (no frame)");
+    if (this.stage === MAGIC && this.have === 0) return void 0;
+    if (this.stage === MAGIC) {
+      return this.fail(`unexpected end of file: ${this.have} byte${this.have === 1 ? "" : "s"} after frame ${this.frames}, too few for another frame`);
+    }
+    return this.fail(`unexpected end of file: the file ends inside frame ${this.frames}`);
+  }
+  /** After a block's content or a skippable frame's data, sets what comes next; true when that ends a frame with no checksum. */
+  passed() {
+    if (this.stage === SKIP) this.expect(MAGIC, 4);
+    else if (!this.frame.lastBlock) this.expect(BLOCK_HEADER, 3);
+    else if (this.frame.hasChecksum) this.expect(CHECKSUM, 4);
+    else return true;
+    return false;
+  }
+  expect(stage, need) {
+    this.stage = stage;
+    this.need = need;
+    this.have = 0;
+  }
+  fail(error) {
+    this.broken = error;
+    this.frame = void 0;
+    return error;
+  }
+  /** On a fault found at `pos`, hands the decompressor the frame's bytes before it, so what they decode to is counted; returns its own error if it fails first. */
+  flush(chunk, span, pos) {
+    return span >= 0 && pos > span ? this.feed(chunk.subarray(span, pos), false) : void 0;
+  }
+  startFrame() {
+    const frame = {
+      number: this.frames,
+      decompressor: new Decompress((data2) => {
+        if (data2.length === 0) return;
+        frame.produced += data2.length;
+        frame.hash?.update(data2);
+        try {
+          this.write(data2);
+        } catch (error) {
+          this.consumerError = { error };
+          throw error;
+        }
+      }),
+      hasChecksum: false,
+      lastBlock: false,
+      contentSize: void 0,
+      produced: 0,
+      hash: void 0
+    };
+    return frame;
+  }
+  /** Pushes bytes of the current frame to its decompressor; returns its error, prefixed with the frame's number. */
+  feed(bytes3, final) {
+    const frame = this.frame;
+    try {
+      frame.decompressor.push(bytes3, final);
+      return void 0;
+    } catch (error) {
+      if (this.consumerError !== void 0) throw this.consumerError.error;
+      return `frame ${frame.number}: ${error instanceof Error ? error.message : String(error)}`;
+    }
+  }
+  /** Ends the current frame with its last bytes, then holds its output to the frame's content size and checksum. */
+  endFrame(last) {
+    const frame = this.frame;
+    const error = this.feed(last, true);
+    this.frame = void 0;
+    this.expect(MAGIC, 4);
+    if (error !== void 0) return error;
+    if (frame.contentSize !== void 0 && frame.produced !== frame.contentSize) {
+      return `frame ${frame.number} decompresses to ${frame.produced} bytes, but its header gives ${frame.contentSize} (Frame_Content_Size): the data is damaged`;
+    }
+    if (frame.hash !== void 0) {
+      const stored = readU32(this.field, 0);
+      const actual = Number(frame.hash.digest() & 0xffffffffn);
+      if (actual !== stored) {
+        return `frame ${frame.number} fails its content checksum (the frame stores ${hex32(stored)}, its decompressed data hashes to ${hex32(actual)}): the data is damaged`;
+      }
+    }
+    return void 0;
+  }
+};
+var DID_BYTES = [0, 1, 2, 4];
+function fcsBytes(descriptor) {
+  const flag = descriptor >> 6;
+  return flag === 0 ? descriptor >> 5 & 1 : 1 << flag;
+}
+function readU32(bytes3, at) {
+  return (bytes3[at] | bytes3[at + 1] << 8 | bytes3[at + 2] << 16 | bytes3[at + 3] << 24) >>> 0;
+}
+function readLE(bytes3, at, n) {
+  let value = 0;
+  for (let i = n - 1; i >= 0; i--) value = value * 256 + bytes3[at + i];
+  return value;
+}
+function hex32(value) {
+  return `0x${value.toString(16).toUpperCase().padStart(8, "0")}`;
+}
+
 // src/read/source.ts
 var READ_CHUNK_BYTES = 256 * 1024;
 var ZSTD_READ_CHUNK_BYTES = 64 * 1024;
@@ -29106,38 +29399,27 @@ function closedOr(stream, start) {
   });
 }
 async function pumpZstd(source, write, pace) {
+  let api;
+  try {
+    api = await xxhashApi();
+  } catch (error) {
+    source.destroy();
+    throw error;
+  }
   let compressedBytes = 0;
-  let consumerError;
-  const decompressor = new Decompress((data2) => {
-    if (data2.length === 0) return;
-    try {
-      write(Buffer.from(data2.buffer, data2.byteOffset, data2.byteLength));
-    } catch (error) {
-      consumerError = { error };
-      throw error;
-    }
-  });
-  const push = (chunk, final) => {
-    try {
-      decompressor.push(chunk, final);
-      return void 0;
-    } catch (error) {
-      if (consumerError !== void 0) throw consumerError.error;
-      return messageOf2(error);
-    }
-  };
+  const reader = new ZstdFrameReader(api, (data2) => write(Buffer.from(data2.buffer, data2.byteOffset, data2.byteLength)));
   let broken;
   const readError = await drain(
     source,
     (chunk) => {
       compressedBytes += chunk.length;
-      broken = push(chunk, false);
+      broken = reader.push(chunk);
       if (broken !== void 0) throw new StopSignal();
     },
     pace
   );
-  if (readError === void 0 && broken === void 0) broken = push(new Uint8Array(0), true);
   if (readError !== void 0) return { compressedBytes, error: `read failed: ${readError}` };
+  broken ??= reader.end();
   return broken === void 0 ? { compressedBytes } : { compressedBytes, error: `zstd: ${broken}` };
 }
 var StopSignal = class extends Error {
@@ -29561,17 +29843,17 @@ var Sketcher = class {
       }
     }
     const rounds = this.fillRounds;
-    for (let t = 1; empty2 > 0 && t < rounds; t++) {
-      const ts = Math.imul(t, 2654435761);
+    for (let t2 = 1; empty2 > 0 && t2 < rounds; t2++) {
+      const ts = Math.imul(t2, 2654435761);
       for (let i = 0; i < count3; i++) {
         const x = mix(set[i] ^ ts);
         const b = Math.imul(x >>> 16, k) >>> 16;
         const r = rnd[b];
         if (r < 0) {
-          rnd[b] = t;
+          rnd[b] = t2;
           val[b] = x;
           empty2--;
-        } else if (r === t && x < val[b]) {
+        } else if (r === t2 && x < val[b]) {
           val[b] = x;
         }
       }
@@ -29611,10 +29893,10 @@ var Sketcher = class {
   probes() {
     if (this.probeTable) return this.probeTable;
     const k = this.hashes;
-    const t = new Int32Array(k * PROBE_TABLE);
-    for (let i = 0; i < k; i++) for (let a = 0; a < PROBE_TABLE; a++) t[i * PROBE_TABLE + a] = probeBin(i, a, k);
-    this.probeTable = t;
-    return t;
+    const t2 = new Int32Array(k * PROBE_TABLE);
+    for (let i = 0; i < k; i++) for (let a = 0; a < PROBE_TABLE; a++) t2[i * PROBE_TABLE + a] = probeBin(i, a, k);
+    this.probeTable = t2;
+    return t2;
   }
 };
 function probeBin(bin, attempt, k) {
@@ -29653,20 +29935,20 @@ var PUNCT = 4;
 var table;
 function classTable() {
   if (table) return table;
-  const t = new Uint8Array(65536);
+  const t2 = new Uint8Array(65536);
   const units = new Uint16Array(65536);
   for (let c = 0; c < 65536; c++) units[c] = c >= 55296 && c < 57344 ? 0 : c;
   let all = "";
   for (let c = 0; c < 65536; c += 4096) all += String.fromCharCode(...units.subarray(c, c + 4096));
   for (const [re, cls] of CLASS_RUNS) {
     for (const m of all.matchAll(re)) {
-      for (let i = m.index, end = m.index + m[0].length; i < end; i++) t[i] = cls;
+      for (let i = m.index, end = m.index + m[0].length; i < end; i++) t2[i] = cls;
     }
   }
-  for (let c = 55296; c < 56320; c++) t[c] = HIGH_SURROGATE;
-  for (let c = 56320; c < 57344; c++) t[c] = OTHER;
-  table = t;
-  return t;
+  for (let c = 55296; c < 56320; c++) t2[c] = HIGH_SURROGATE;
+  for (let c = 56320; c < 57344; c++) t2[c] = OTHER;
+  table = t2;
+  return t2;
 }
 function astralClass(text, i) {
   return classOfAstral(text.slice(i, i + 2));
@@ -29703,7 +29985,7 @@ function grow(buf) {
   }
 }
 function hashWords(prepared, buf) {
-  const t = classTable();
+  const t2 = classTable();
   const two = buf.lane2 !== null;
   const n = prepared.length;
   let count3 = 0;
@@ -29713,7 +29995,7 @@ function hashWords(prepared, buf) {
   let len2 = 0;
   for (let i = 0; i < n; i++) {
     const c = prepared.charCodeAt(i);
-    let cls = t[c];
+    let cls = t2[c];
     let c2 = -1;
     if (cls === HIGH_SURROGATE) {
       const lo = i + 1 < n ? prepared.charCodeAt(i + 1) : 0;
@@ -29744,7 +30026,7 @@ function hashWords(prepared, buf) {
       const from = i;
       while (i + 1 < n) {
         const d = prepared.charCodeAt(i + 1);
-        if (t[d] !== WORD) break;
+        if (t2[d] !== WORD) break;
         h1 = Math.imul(h1 ^ d, 16777619);
         if (two) h2 = Math.imul(h2 ^ d, 739982445);
         i++;
@@ -29838,7 +30120,7 @@ var DocumentScanner = class {
   }
   /** The scan in TypeScript: one fused pass, as duplicates.c makes it; classifying each code unit once is most of the cost. */
   scanHere(prepared, strip) {
-    const t = classTable();
+    const t2 = classTable();
     let words = this.ownWords;
     let words2 = this.ownWords2;
     const two = words2 !== null;
@@ -29854,7 +30136,7 @@ var DocumentScanner = class {
     const n = prepared.length;
     for (let i = 0; i < n; i++) {
       const c = prepared.charCodeAt(i);
-      let cls = t[c];
+      let cls = t2[c];
       let lo = -1;
       if (cls === HIGH_SURROGATE) {
         const next = i + 1 < n ? prepared.charCodeAt(i + 1) : 0;
@@ -29897,7 +30179,7 @@ var DocumentScanner = class {
         const from = i;
         while (i + 1 < n) {
           const d = prepared.charCodeAt(i + 1);
-          if (t[d] !== WORD) break;
+          if (t2[d] !== WORD) break;
           wh = Math.imul(wh ^ d, 16777619);
           if (two) wh2 = Math.imul(wh2 ^ d, 739982445);
           h1 = Math.imul(h1 ^ d, EXACT_PRIME_12);
@@ -30022,7 +30304,7 @@ function jaccardFromAgreement(agreeing, hashes, bits) {
 }
 
 // src/measure/duplicates/format.ts
-var MAGIC = [83, 76, 68, 88];
+var MAGIC2 = [83, 76, 68, 88];
 var FORMAT_VERSION = 1;
 var HEADER_BYTES = 32;
 var EXACT_BYTES = 8;
@@ -30078,7 +30360,7 @@ function parseIndex(blob, verifyChecksum = true) {
   if (!(blob instanceof Uint8Array)) return { ok: false, reason: "not a byte array" };
   if (blob.length < HEADER_BYTES) return { ok: false, reason: `truncated: ${blob.length} bytes, shorter than the ${HEADER_BYTES}-byte header` };
   for (let i = 0; i < 4; i++) {
-    if (blob[i] !== MAGIC[i]) return { ok: false, reason: "not a duplicate index (bad magic bytes)" };
+    if (blob[i] !== MAGIC2[i]) return { ok: false, reason: "not a duplicate index (bad magic bytes)" };
   }
   const view = new DataView(blob.buffer, blob.byteOffset, blob.byteLength);
   const version = view.getUint8(4);
@@ -30371,7 +30653,7 @@ var DuplicateIndexBuilder = class {
     const total = HEADER_BYTES + this.exact.length + this.signatures.length + this.stream.length;
     const blob = new Uint8Array(total);
     const view = new DataView(blob.buffer);
-    for (let i = 0; i < 4; i++) blob[i] = MAGIC[i];
+    for (let i = 0; i < 4; i++) blob[i] = MAGIC2[i];
     view.setUint8(4, FORMAT_VERSION);
     view.setUint8(5, this.options.punctuation === "strip" ? 1 : 0);
     view.setUint8(6, this.options.shingle);
@@ -30513,8 +30795,8 @@ function joinDuplicates(shards, opts) {
       const l = Array.from(members, loOf);
       if (l.some((v) => v !== l[0])) {
         const sorted2 = Array.from(members, (g, x) => [l[x], g]).sort((a, b) => a[0] - b[0] || a[1] - b[1]);
-        members = sorted2.map((e) => e[1]);
-        lows = sorted2.map((e) => e[0]);
+        members = sorted2.map((e2) => e2[1]);
+        lows = sorted2.map((e2) => e2[0]);
       } else lows = l;
     }
     for (let x = 0; x < members.length; ) {
@@ -30669,9 +30951,9 @@ function joinDuplicates(shards, opts) {
       const slot = exactSlot.get(r);
       if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
     }
-    const t = rootOf[g];
-    if (t >= 0 && t !== g) {
-      const slot = nearSlot.get(t);
+    const t2 = rootOf[g];
+    if (t2 >= 0 && t2 !== g) {
+      const slot = nearSlot.get(t2);
       if (slot !== void 0 && copies[slot].length < maxCopies) copies[slot].push(g);
     }
   }
@@ -30702,7 +30984,7 @@ function joinDuplicates(shards, opts) {
     exactDocs: totalTally.exactDocs,
     nearDocs: totalTally.nearDocs,
     perShard,
-    perLanguage: [...perLanguage2].sort((a, b) => a[0] - b[0]).map(([language, t]) => ({ language, ...t })),
+    perLanguage: [...perLanguage2].sort((a, b) => a[0] - b[0]).map(([language, t2]) => ({ language, ...t2 })),
     clusters,
     exactClusters,
     nearClusters,
@@ -30722,12 +31004,12 @@ function joinDuplicates(shards, opts) {
     }
   };
 }
-function count(t, kind, exact, near) {
-  t.docs++;
-  if (kind === KIND_EMPTY) t.emptyDocs++;
-  if (kind === KIND_WORDLESS) t.wordlessDocs++;
-  if (exact) t.exactDocs++;
-  if (near) t.nearDocs++;
+function count(t2, kind, exact, near) {
+  t2.docs++;
+  if (kind === KIND_EMPTY) t2.emptyDocs++;
+  if (kind === KIND_WORDLESS) t2.wordlessDocs++;
+  if (exact) t2.exactDocs++;
+  if (near) t2.nearDocs++;
 }
 function wantsExisting(f) {
   return (f & (CLASS_HAS_NEW | CLASS_HAS_EXISTING | NEAR_EXISTING)) === CLASS_HAS_NEW;
@@ -33338,7 +33620,7 @@ function astralFrancClass(cp) {
 var classCounts = new Int32Array(FRANC_CLASS_MASKS.length);
 var expressionCounts = new Int32Array(FRANC_EXPRESSIONS.length);
 var CLASS_EXPRESSIONS = FRANC_CLASS_MASKS.map(
-  (mask) => FRANC_EXPRESSIONS.map((_, e) => e).filter((e) => (mask & 1 << e) !== 0)
+  (mask) => FRANC_EXPRESSIONS.map((_, e2) => e2).filter((e2) => (mask & 1 << e2) !== 0)
 );
 function countClassesByCodePoint(table3, text, end) {
   classCounts.fill(0);
@@ -33372,10 +33654,10 @@ function topExpression(kernel5, text, end) {
   for (let c = 1; c < classCounts.length; c++) {
     const n = classCounts[c];
     if (n === 0) continue;
-    for (const e of CLASS_EXPRESSIONS[c]) expressionCounts[e] = expressionCounts[e] + n;
+    for (const e2 of CLASS_EXPRESSIONS[c]) expressionCounts[e2] = expressionCounts[e2] + n;
   }
   let best = 0;
-  for (let e = 1; e < expressionCounts.length; e++) if (expressionCounts[e] > expressionCounts[best]) best = e;
+  for (let e2 = 1; e2 < expressionCounts.length; e2++) if (expressionCounts[e2] > expressionCounts[best]) best = e2;
   return { expression: best, count: expressionCounts[best] };
 }
 var LATIN = FRANC_EXPRESSIONS.indexOf("Latin");
@@ -33480,8 +33762,8 @@ function invertAnew(group, languages2) {
     const model = models.get(language).split("|");
     if (model.length >= 32767) throw new Error(`franc data: the profile of ${language} is too long for the kernel's 16-bit ranks`);
     for (let r = model.length - 1; r >= 0; r--) {
-      const t = model[r];
-      rankOf.set(internedId(t.charCodeAt(0) << 16 | t.charCodeAt(1), t.charCodeAt(2), false), r);
+      const t2 = model[r];
+      rankOf.set(internedId(t2.charCodeAt(0) << 16 | t2.charCodeAt(1), t2.charCodeAt(2), false), r);
     }
     return rankOf;
   });
@@ -33638,7 +33920,7 @@ function createFrancLabeller(only, minLength = MIN_LENGTH) {
 }
 function francLanguages() {
   loadProfiles();
-  const single = FRANC_EXPRESSIONS.filter((e) => !groupLanguages.has(e));
+  const single = FRANC_EXPRESSIONS.filter((e2) => !groupLanguages.has(e2));
   return [.../* @__PURE__ */ new Set([...[...groupLanguages.values()].flat(), ...single])];
 }
 
@@ -39974,9 +40256,9 @@ function scanHere(text, record, tally) {
           end = coreEnd = i + 1;
           state = IN;
         } else {
-          const e2 = pendingEnd(end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors);
-          if (e2 >= 0) {
-            if (record) out = put(out, count3, start, e2);
+          const e3 = pendingEnd(end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors);
+          if (e3 >= 0) {
+            if (record) out = put(out, count3, start, e3);
             count3++;
           }
           state = OUT;
@@ -40006,9 +40288,9 @@ function scanHere(text, record, tally) {
     }
     end = i + 1;
   }
-  const e = state === IN ? wordLike(last, hasCore, connectors, end > coreEnd) ? end : -1 : state === PENDING ? pendingEnd(end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors) : -1;
-  if (e >= 0) {
-    if (record) out = put(out, count3, start, e);
+  const e2 = state === IN ? wordLike(last, hasCore, connectors, end > coreEnd) ? end : -1 : state === PENDING ? pendingEnd(end, coreEnd, midAt, midEnd, last, mid, hasCore, connectors) : -1;
+  if (e2 >= 0) {
+    if (record) out = put(out, count3, start, e2);
     count3++;
   }
   offsets = out;
@@ -40438,13 +40720,13 @@ function trailing(text, i, slash) {
   }
 }
 function digits(C, text, p) {
-  let e = p + 1;
-  while (e < p + 3) {
-    const d = classAt(C, text, e);
-    if ((d & NUMBER) === 0) return (d & SURROGATE) === 0 ? e : -1;
-    e++;
+  let e2 = p + 1;
+  while (e2 < p + 3) {
+    const d = classAt(C, text, e2);
+    if ((d & NUMBER) === 0) return (d & SURROGATE) === 0 ? e2 : -1;
+    e2++;
   }
-  return e;
+  return e2;
 }
 function punctuation(C, text, p, c, slash) {
   let s = -1;
@@ -40507,12 +40789,12 @@ function upperAndLower(C, text, s) {
   return u < 0 ? -1 : run(C, text, u, LOWERISH);
 }
 function o200kWord(C, text, p, prefixed, letterish) {
-  let e = -2;
-  if (prefixed) e = upperThenLower(C, text, p + 1);
-  if (e === -2 && letterish) e = upperThenLower(C, text, p);
-  if (e === -2 && prefixed) e = upperAndLower(C, text, p + 1);
-  if (e === -2 && letterish) e = upperAndLower(C, text, p);
-  return e < 0 ? e : e + contraction(text, e, true);
+  let e2 = -2;
+  if (prefixed) e2 = upperThenLower(C, text, p + 1);
+  if (e2 === -2 && letterish) e2 = upperThenLower(C, text, p);
+  if (e2 === -2 && prefixed) e2 = upperAndLower(C, text, p + 1);
+  if (e2 === -2 && letterish) e2 = upperAndLower(C, text, p);
+  return e2 < 0 ? e2 : e2 + contraction(text, e2, true);
 }
 var splitO200k = (text, p) => {
   const C = unitClasses();
@@ -40520,13 +40802,13 @@ var splitO200k = (text, p) => {
   if ((c & SURROGATE) !== 0) return -1;
   const letterish = (c & (UPPERISH | LOWERISH)) !== 0;
   if (letterish && (c & PREFIX) === 0) {
-    const e = o200kWord(C, text, p, false, true);
-    return e < 0 ? -1 : e;
+    const e2 = o200kWord(C, text, p, false, true);
+    return e2 < 0 ? -1 : e2;
   }
   if ((c & NUMBER) !== 0) return digits(C, text, p);
   if ((c & PREFIX) !== 0) {
-    const e = o200kWord(C, text, p, true, letterish);
-    if (e !== -2) return e;
+    const e2 = o200kWord(C, text, p, true, letterish);
+    if (e2 !== -2) return e2;
     const o = punctuation(C, text, p, c, true);
     if (o !== -2) return o;
   }
@@ -40568,20 +40850,20 @@ function ownerHashes(owner) {
   }
   return [a, b];
 }
-var MAGIC2 = 0;
+var MAGIC3 = 0;
 var OWNER_1 = 1;
 var OWNER_2 = 2;
 function stampOwner(header, owner, magic) {
   const [a, b] = ownerHashes(owner);
   header[OWNER_1] = a;
   header[OWNER_2] = b;
-  header[MAGIC2] = magic;
+  header[MAGIC3] = magic;
 }
 function ownedBy(buffer, owner, magic, words) {
   if (!(buffer instanceof SharedArrayBuffer) || buffer.byteLength < words * 4) return false;
   const header = new Int32Array(buffer, 0, words);
   const [a, b] = ownerHashes(owner);
-  return header[MAGIC2] === magic && header[OWNER_1] === a && header[OWNER_2] === b;
+  return header[MAGIC3] === magic && header[OWNER_1] === a && header[OWNER_2] === b;
 }
 function hashBytes(bytes3, start, end) {
   let h = 2166136261 | 0;
@@ -40772,9 +41054,9 @@ function parseRankFile(text, file, owner = file) {
     list.close(end, Number(rank2));
     lineOf.push(i + 1);
   }
-  const table3 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, (t) => {
-    const raw = lines[lineOf[t] - 1].split(" ")[0];
-    throw new TokenizerError("load", file, `token ${quote(raw)} is listed twice`, { line: lineOf[t] });
+  const table3 = RankTable.build(owner, list.arena, list.offsets, list.ranks, list.count, (t2) => {
+    const raw = lines[lineOf[t2] - 1].split(" ")[0];
+    throw new TokenizerError("load", file, `token ${quote(raw)} is listed twice`, { line: lineOf[t2] });
   });
   requireEveryByte(table3, file);
   return table3;
@@ -41037,19 +41319,19 @@ function heapMergeCount(b, n, ranks) {
   const before = (x, y) => rank2[x] < rank2[y] || rank2[x] === rank2[y] && left[x] < left[y];
   const push = (r, i, j, k) => {
     if (r === NO_RANK) return;
-    const e = pairs++;
-    rank2[e] = r;
-    left[e] = i;
-    pairMid[e] = j;
-    pairEnd[e] = k;
+    const e2 = pairs++;
+    rank2[e2] = r;
+    left[e2] = i;
+    pairMid[e2] = j;
+    pairEnd[e2] = k;
     let at = size++;
     while (at > 0) {
       const up = at - 1 >> 1;
-      if (!before(e, h[up])) break;
+      if (!before(e2, h[up])) break;
       h[at] = h[up];
       at = up;
     }
-    h[at] = e;
+    h[at] = e2;
   };
   const pop = () => {
     const top = h[0];
@@ -41073,10 +41355,10 @@ function heapMergeCount(b, n, ranks) {
   for (let i = 0; i + 1 < n; i++) push(ranks.pairs[b[i] << 8 | b[i + 1]], i, i + 1, i + 2);
   let parts = n;
   while (size > 0) {
-    const e = pop();
-    const i = left[e];
-    const j = pairMid[e];
-    const k = pairEnd[e];
+    const e2 = pop();
+    const i = left[e2];
+    const j = pairMid[e2];
+    const k = pairEnd[e2];
     if (prev[i] === -2 || next[i] !== j || next[j] !== k) continue;
     next[i] = k;
     if (k < n) prev[k] = i;
@@ -41199,13 +41481,13 @@ function createRankCounter(options) {
     let tokens = 0;
     const n = text.length;
     while (p < n) {
-      let e = splitter(text, p);
-      if (e < 0) e = regexPieceEnd(text, p);
-      if (e < 0) return tokens + countByRegex(text, p, pieces);
-      const c = countRange(text, p, e);
+      let e2 = splitter(text, p);
+      if (e2 < 0) e2 = regexPieceEnd(text, p);
+      if (e2 < 0) return tokens + countByRegex(text, p, pieces);
+      const c = countRange(text, p, e2);
       tokens += c;
-      pieces?.push(e, c);
-      p = e;
+      pieces?.push(e2, c);
+      p = e2;
     }
     return tokens;
   };
@@ -41229,19 +41511,19 @@ function createRankCounter(options) {
       tokens += kernel5.tokens();
       p = kernel5.stoppedAt();
       if (p >= n) break;
-      const e = regexPieceEnd(text, p);
-      if (e < 0) {
+      const e2 = regexPieceEnd(text, p);
+      if (e2 < 0) {
         kernelPieces += k - byRegex;
         pieces?.append(kernel5.ends, kernel5.counts, k);
         return tokens + countByRegex(text, p, pieces);
       }
-      const c = countRange(text, p, e);
-      kernel5.ends[k] = e;
+      const c = countRange(text, p, e2);
+      kernel5.ends[k] = e2;
       kernel5.counts[k] = c;
       k++;
       byRegex++;
       tokens += c;
-      p = e;
+      p = e2;
     }
     kernelPieces += k - byRegex;
     pieces?.append(kernel5.ends, kernel5.counts, k);
@@ -41891,7 +42173,7 @@ function holdEvents(worker, earlier) {
     else handlers.exit(event[1]);
   };
   worker.on("message", (m) => deliver(["message", m]));
-  worker.on("error", (e) => deliver(["error", e]));
+  worker.on("error", (e2) => deliver(["error", e2]));
   worker.on("exit", (code) => deliver(["exit", code]));
   return {
     worker,
@@ -41948,7 +42230,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
   };
   const fail = (err2) => {
     failed ??= err2;
-    for (const t of batchQueue.splice(0)) t.reject(failed);
+    for (const t2 of batchQueue.splice(0)) t2.reject(failed);
     wake();
     tellWholeTaken();
     return failed;
@@ -42032,7 +42314,7 @@ async function measureInPool(work, init, entry, workers, onResult, here, started
           void worker.terminate();
           if (err2) {
             const failure = fail(err2);
-            for (const t of current.splice(0)) if (t.kind === "batch") t.reject(failure);
+            for (const t2 of current.splice(0)) if (t2.kind === "batch") t2.reject(failure);
             reject(failure);
           } else resolve();
         };
@@ -42682,11 +42964,11 @@ function renderMarkdown(report, opts = {}) {
     out.push(`| language | fertility | continued words | tokens/word | chars/token | bytes/token | dictionary fertility${hasBase ? " | baseline fertility | change | mix shift" : ""} |`);
     out.push(`|---|---:|---:|---:|---:|---:|---:|${hasBase ? "---:|---:|---:|" : ""}`);
     for (const f of withFertility) {
-      const t = f.fertility;
+      const t2 = f.fertility;
       const b = f.baseline;
-      const change = b?.fertility && t.fertility ? t.fertility / b.fertility - 1 : null;
+      const change = b?.fertility && t2.fertility ? t2.fertility / b.fertility - 1 : null;
       out.push(
-        `| ${escapeMarkdown(f.key)} | ${fixed(t.fertility, 3)} | ${percent(t.continuedWords)} | ${fixed(t.tokensPerWord, 3)} | ${fixed(t.charsPerToken, 2)} | ${fixed(t.bytesPerToken, 2)} | ${t.dictionary ? fixed(t.dictionary.fertility, 3) : "\u2013"}` + (hasBase ? ` | ${fixed(b?.fertility, 3)} | ${change === null ? "\u2013" : `${change >= 0 ? "+" : ""}${percent(change)}`} | ${points(report.tokenizer?.mixShiftPoints?.[f.key])}` : "") + " |"
+        `| ${escapeMarkdown(f.key)} | ${fixed(t2.fertility, 3)} | ${percent(t2.continuedWords)} | ${fixed(t2.tokensPerWord, 3)} | ${fixed(t2.charsPerToken, 2)} | ${fixed(t2.bytesPerToken, 2)} | ${t2.dictionary ? fixed(t2.dictionary.fertility, 3) : "\u2013"}` + (hasBase ? ` | ${fixed(b?.fertility, 3)} | ${change === null ? "\u2013" : `${change >= 0 ? "+" : ""}${percent(change)}`} | ${points(report.tokenizer?.mixShiftPoints?.[f.key])}` : "") + " |"
       );
     }
     out.push("");
@@ -42797,10 +43079,10 @@ function renderTerminal(report, opts) {
     const base = report.tokenizer?.baseline;
     lines.push(bold(`Fertility (subword tokens per word) under ${report.tokenizer?.main}${base ? ` vs ${base}` : ""}`));
     for (const f of fert) {
-      const t = f.fertility;
+      const t2 = f.fertility;
       const b = f.baseline;
       lines.push(
-        `  ${clean2(f.key).padEnd(9)} ${fixed(t.fertility, 3).padStart(6)}  continued ${percent(t.continuedWords).padStart(7)}  chars/token ${fixed(t.charsPerToken, 2).padStart(5)}` + (t.dictionary ? `  dictionary ${fixed(t.dictionary.fertility, 3)}` : "") + (b ? dim(`  ${base}: ${fixed(b.fertility, 3)}, mix shift ${points(report.tokenizer?.mixShiftPoints?.[f.key])}`) : "")
+        `  ${clean2(f.key).padEnd(9)} ${fixed(t2.fertility, 3).padStart(6)}  continued ${percent(t2.continuedWords).padStart(7)}  chars/token ${fixed(t2.charsPerToken, 2).padStart(5)}` + (t2.dictionary ? `  dictionary ${fixed(t2.dictionary.fertility, 3)}` : "") + (b ? dim(`  ${base}: ${fixed(b.fertility, 3)}, mix shift ${points(report.tokenizer?.mixShiftPoints?.[f.key])}`) : "")
       );
     }
   }
