@@ -25,7 +25,7 @@ import { buildBenchCorpus, writeBenchPolicies } from './bench-corpus.mjs';
 
 const ROOT = fileURLToPath(new URL('..', import.meta.url));
 
-/** Default corpus size: large enough that start-up is a small part of a run, small enough for ~2 minutes on 2 cores. */
+/** Default corpus size: under a minute on 2 cores. Start-up and the final join are still about a fifth of a check at this size (README, Speed); `--mb 200` shows rates nearer a large corpus's. */
 const DEFAULT_MB = 40;
 const QUICK_MB = 10;
 /** Naive-pipeline sample: the four libraries together run at about 0.3 MB/s here, so 2 MB is about 7 s. */
