@@ -41998,14 +41998,13 @@ async function prepareAnalyzers(policy, options = {}) {
   const read = readOptionsOf(policy);
   let main2;
   let baseline;
+  const load = { deferBuiltin: options.deferTokenizerData === true };
   try {
-    const load = { deferBuiltin: options.deferTokenizerData === true };
     if (policy.tokenizer) main2 = await loadTokenizer(policy.tokenizer, load);
   } catch (err2) {
     throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, "tokenizer", err2.message));
   }
   try {
-    const load = { deferBuiltin: options.deferTokenizerData === true };
     if (policy.baseline) baseline = await loadTokenizer(policy.baseline, load);
   } catch (err2) {
     throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, "baseline", err2.message));

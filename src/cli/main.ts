@@ -94,8 +94,8 @@ async function writeOutput(option: string, file: string, text: string): Promise<
 
 /**
  * Refuses, before anything is read, output paths that could not be written at the end of a long
- * run (a directory, a directory that is not there) or that would overwrite a policy file, and a
- * cache directory that is a file.
+ * run (a directory, a directory that is not there) or that would overwrite an input of the run (the
+ * policy, a part file), and a cache directory that is a file.
  */
 function checkPaths(outputs: Array<[string, string | undefined]>, policies: readonly string[], cacheDir: string | null): void {
   const kind = (p: string): 'dir' | 'file' | 'none' => {

@@ -123,14 +123,13 @@ export async function prepareAnalyzers(policy: Policy, options: PrepareOptions =
 
   let main: TokenCounter | undefined;
   let baseline: TokenCounter | undefined;
+  const load = { deferBuiltin: options.deferTokenizerData === true };
   try {
-    const load = { deferBuiltin: options.deferTokenizerData === true };
     if (policy.tokenizer) main = await loadTokenizer(policy.tokenizer, load);
   } catch (err) {
     throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, 'tokenizer', (err as Error).message));
   }
   try {
-    const load = { deferBuiltin: options.deferTokenizerData === true };
     if (policy.baseline) baseline = await loadTokenizer(policy.baseline, load);
   } catch (err) {
     throw new AnalyzerSetupError(formatPolicyKeyProblem(policy, 'baseline', (err as Error).message));
