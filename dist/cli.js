@@ -3912,17 +3912,17 @@ var require_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
-    function visit_(key, node, visitor, path6) {
-      const ctrl = callVisitor(key, node, visitor, path6);
+    function visit_(key, node, visitor, path7) {
+      const ctrl = callVisitor(key, node, visitor, path7);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path6, ctrl);
-        return visit_(key, ctrl, visitor, path6);
+        replaceNode(key, path7, ctrl);
+        return visit_(key, ctrl, visitor, path7);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path6 = Object.freeze(path6.concat(node));
+          path7 = Object.freeze(path7.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = visit_(i, node.items[i], visitor, path6);
+            const ci = visit_(i, node.items[i], visitor, path7);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3933,13 +3933,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path6 = Object.freeze(path6.concat(node));
-          const ck = visit_("key", node.key, visitor, path6);
+          path7 = Object.freeze(path7.concat(node));
+          const ck = visit_("key", node.key, visitor, path7);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = visit_("value", node.value, visitor, path6);
+          const cv = visit_("value", node.value, visitor, path7);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -3960,17 +3960,17 @@ var require_visit = __commonJS({
     visitAsync.BREAK = BREAK;
     visitAsync.SKIP = SKIP2;
     visitAsync.REMOVE = REMOVE;
-    async function visitAsync_(key, node, visitor, path6) {
-      const ctrl = await callVisitor(key, node, visitor, path6);
+    async function visitAsync_(key, node, visitor, path7) {
+      const ctrl = await callVisitor(key, node, visitor, path7);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path6, ctrl);
-        return visitAsync_(key, ctrl, visitor, path6);
+        replaceNode(key, path7, ctrl);
+        return visitAsync_(key, ctrl, visitor, path7);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path6 = Object.freeze(path6.concat(node));
+          path7 = Object.freeze(path7.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = await visitAsync_(i, node.items[i], visitor, path6);
+            const ci = await visitAsync_(i, node.items[i], visitor, path7);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3981,13 +3981,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path6 = Object.freeze(path6.concat(node));
-          const ck = await visitAsync_("key", node.key, visitor, path6);
+          path7 = Object.freeze(path7.concat(node));
+          const ck = await visitAsync_("key", node.key, visitor, path7);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = await visitAsync_("value", node.value, visitor, path6);
+          const cv = await visitAsync_("value", node.value, visitor, path7);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -4014,23 +4014,23 @@ var require_visit = __commonJS({
       }
       return visitor;
     }
-    function callVisitor(key, node, visitor, path6) {
+    function callVisitor(key, node, visitor, path7) {
       if (typeof visitor === "function")
-        return visitor(key, node, path6);
+        return visitor(key, node, path7);
       if (identity.isMap(node))
-        return visitor.Map?.(key, node, path6);
+        return visitor.Map?.(key, node, path7);
       if (identity.isSeq(node))
-        return visitor.Seq?.(key, node, path6);
+        return visitor.Seq?.(key, node, path7);
       if (identity.isPair(node))
-        return visitor.Pair?.(key, node, path6);
+        return visitor.Pair?.(key, node, path7);
       if (identity.isScalar(node))
-        return visitor.Scalar?.(key, node, path6);
+        return visitor.Scalar?.(key, node, path7);
       if (identity.isAlias(node))
-        return visitor.Alias?.(key, node, path6);
+        return visitor.Alias?.(key, node, path7);
       return void 0;
     }
-    function replaceNode(key, path6, node) {
-      const parent = path6[path6.length - 1];
+    function replaceNode(key, path7, node) {
+      const parent = path7[path7.length - 1];
       if (identity.isCollection(parent)) {
         parent.items[key] = node;
       } else if (identity.isPair(parent)) {
@@ -4642,10 +4642,10 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path6, value) {
+    function collectionFromPath(schema, path7, value) {
       let v = value;
-      for (let i = path6.length - 1; i >= 0; --i) {
-        const k = path6[i];
+      for (let i = path7.length - 1; i >= 0; --i) {
+        const k = path7[i];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
           const a = [];
           a[k] = v;
@@ -4664,7 +4664,7 @@ var require_Collection = __commonJS({
         sourceObjects: /* @__PURE__ */ new Map()
       });
     }
-    var isEmptyPath = (path6) => path6 == null || typeof path6 === "object" && !!path6[Symbol.iterator]().next().done;
+    var isEmptyPath = (path7) => path7 == null || typeof path7 === "object" && !!path7[Symbol.iterator]().next().done;
     var Collection = class extends Node.NodeBase {
       constructor(type, schema) {
         super(type);
@@ -4694,11 +4694,11 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path6, value) {
-        if (isEmptyPath(path6))
+      addIn(path7, value) {
+        if (isEmptyPath(path7))
           this.add(value);
         else {
-          const [key, ...rest] = path6;
+          const [key, ...rest] = path7;
           const node = this.get(key, true);
           if (identity.isCollection(node))
             node.addIn(rest, value);
@@ -4712,8 +4712,8 @@ var require_Collection = __commonJS({
        * Removes a value from the collection.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path6) {
-        const [key, ...rest] = path6;
+      deleteIn(path7) {
+        const [key, ...rest] = path7;
         if (rest.length === 0)
           return this.delete(key);
         const node = this.get(key, true);
@@ -4727,8 +4727,8 @@ var require_Collection = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path6, keepScalar) {
-        const [key, ...rest] = path6;
+      getIn(path7, keepScalar) {
+        const [key, ...rest] = path7;
         const node = this.get(key, true);
         if (rest.length === 0)
           return !keepScalar && identity.isScalar(node) ? node.value : node;
@@ -4746,8 +4746,8 @@ var require_Collection = __commonJS({
       /**
        * Checks if the collection includes a value with the key `key`.
        */
-      hasIn(path6) {
-        const [key, ...rest] = path6;
+      hasIn(path7) {
+        const [key, ...rest] = path7;
         if (rest.length === 0)
           return this.has(key);
         const node = this.get(key, true);
@@ -4757,8 +4757,8 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path6, value) {
-        const [key, ...rest] = path6;
+      setIn(path7, value) {
+        const [key, ...rest] = path7;
         if (rest.length === 0) {
           this.set(key, value);
         } else {
@@ -7273,9 +7273,9 @@ var require_Document = __commonJS({
           this.contents.add(value);
       }
       /** Adds a value to the document. */
-      addIn(path6, value) {
+      addIn(path7, value) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path6, value);
+          this.contents.addIn(path7, value);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -7350,14 +7350,14 @@ var require_Document = __commonJS({
        * Removes a value from the document.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path6) {
-        if (Collection.isEmptyPath(path6)) {
+      deleteIn(path7) {
+        if (Collection.isEmptyPath(path7)) {
           if (this.contents == null)
             return false;
           this.contents = null;
           return true;
         }
-        return assertCollection(this.contents) ? this.contents.deleteIn(path6) : false;
+        return assertCollection(this.contents) ? this.contents.deleteIn(path7) : false;
       }
       /**
        * Returns item at `key`, or `undefined` if not found. By default unwraps
@@ -7372,10 +7372,10 @@ var require_Document = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path6, keepScalar) {
-        if (Collection.isEmptyPath(path6))
+      getIn(path7, keepScalar) {
+        if (Collection.isEmptyPath(path7))
           return !keepScalar && identity.isScalar(this.contents) ? this.contents.value : this.contents;
-        return identity.isCollection(this.contents) ? this.contents.getIn(path6, keepScalar) : void 0;
+        return identity.isCollection(this.contents) ? this.contents.getIn(path7, keepScalar) : void 0;
       }
       /**
        * Checks if the document includes a value with the key `key`.
@@ -7386,10 +7386,10 @@ var require_Document = __commonJS({
       /**
        * Checks if the document includes a value at `path`.
        */
-      hasIn(path6) {
-        if (Collection.isEmptyPath(path6))
+      hasIn(path7) {
+        if (Collection.isEmptyPath(path7))
           return this.contents !== void 0;
-        return identity.isCollection(this.contents) ? this.contents.hasIn(path6) : false;
+        return identity.isCollection(this.contents) ? this.contents.hasIn(path7) : false;
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
@@ -7406,13 +7406,13 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path6, value) {
-        if (Collection.isEmptyPath(path6)) {
+      setIn(path7, value) {
+        if (Collection.isEmptyPath(path7)) {
           this.contents = value;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path6), value);
+          this.contents = Collection.collectionFromPath(this.schema, Array.from(path7), value);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path6, value);
+          this.contents.setIn(path7, value);
         }
       }
       /**
@@ -9373,9 +9373,9 @@ var require_cst_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
-    visit.itemAtPath = (cst, path6) => {
+    visit.itemAtPath = (cst, path7) => {
       let item = cst;
-      for (const [field, index2] of path6) {
+      for (const [field, index2] of path7) {
         const tok = item?.[field];
         if (tok && "items" in tok) {
           item = tok.items[index2];
@@ -9384,23 +9384,23 @@ var require_cst_visit = __commonJS({
       }
       return item;
     };
-    visit.parentCollection = (cst, path6) => {
-      const parent = visit.itemAtPath(cst, path6.slice(0, -1));
-      const field = path6[path6.length - 1][0];
+    visit.parentCollection = (cst, path7) => {
+      const parent = visit.itemAtPath(cst, path7.slice(0, -1));
+      const field = path7[path7.length - 1][0];
       const coll = parent?.[field];
       if (coll && "items" in coll)
         return coll;
       throw new Error("Parent collection not found");
     };
-    function _visit(path6, item, visitor) {
-      let ctrl = visitor(item, path6);
+    function _visit(path7, item, visitor) {
+      let ctrl = visitor(item, path7);
       if (typeof ctrl === "symbol")
         return ctrl;
       for (const field of ["key", "value"]) {
         const token = item[field];
         if (token && "items" in token) {
           for (let i = 0; i < token.items.length; ++i) {
-            const ci = _visit(Object.freeze(path6.concat([[field, i]])), token.items[i], visitor);
+            const ci = _visit(Object.freeze(path7.concat([[field, i]])), token.items[i], visitor);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -9411,10 +9411,10 @@ var require_cst_visit = __commonJS({
             }
           }
           if (typeof ctrl === "function" && field === "key")
-            ctrl = ctrl(item, path6);
+            ctrl = ctrl(item, path7);
         }
       }
-      return typeof ctrl === "function" ? ctrl(item, path6) : ctrl;
+      return typeof ctrl === "function" ? ctrl(item, path7) : ctrl;
     }
     exports.visit = visit;
   }
@@ -11489,8 +11489,8 @@ var require_utils = __commonJS({
       }
       return output;
     };
-    exports.basename = (path6, { windows } = {}) => {
-      const segs = path6.split(windows ? /[\\/]/ : "/");
+    exports.basename = (path7, { windows } = {}) => {
+      const segs = path7.split(windows ? /[\\/]/ : "/");
       const last = segs[segs.length - 1];
       if (last === "") {
         return segs[segs.length - 2];
@@ -12827,7 +12827,7 @@ var require_path = __commonJS({
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.convertPosixPathToPattern = exports.convertWindowsPathToPattern = exports.convertPathToPattern = exports.escapePosixPath = exports.escapeWindowsPath = exports.escape = exports.removeLeadingDotSegment = exports.makeAbsolute = exports.unixify = void 0;
     var os = __require("os");
-    var path6 = __require("path");
+    var path7 = __require("path");
     var IS_WINDOWS_PLATFORM = os.platform() === "win32";
     var LEADING_DOT_SEGMENT_CHARACTERS_COUNT = 2;
     var POSIX_UNESCAPED_GLOB_SYMBOLS_RE = /(\\?)([()*?[\]{|}]|^!|[!+@](?=\()|\\(?![!()*+?@[\]{|}]))/g;
@@ -12839,7 +12839,7 @@ var require_path = __commonJS({
     }
     exports.unixify = unixify;
     function makeAbsolute(cwd, filepath) {
-      return path6.resolve(cwd, filepath);
+      return path7.resolve(cwd, filepath);
     }
     exports.makeAbsolute = makeAbsolute;
     function removeLeadingDotSegment(entry) {
@@ -14136,7 +14136,7 @@ var require_braces = __commonJS({
 var require_constants3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/constants.js"(exports, module) {
     "use strict";
-    var path6 = __require("path");
+    var path7 = __require("path");
     var WIN_SLASH = "\\\\/";
     var WIN_NO_SLASH = `[^${WIN_SLASH}]`;
     var DEFAULT_MAX_EXTGLOB_RECURSION = 0;
@@ -14310,7 +14310,7 @@ var require_constants3 = __commonJS({
       /* | */
       CHAR_ZERO_WIDTH_NOBREAK_SPACE: 65279,
       /* \uFEFF */
-      SEP: path6.sep,
+      SEP: path7.sep,
       /**
        * Create EXTGLOB_CHARS
        */
@@ -14337,7 +14337,7 @@ var require_constants3 = __commonJS({
 var require_utils3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/utils.js"(exports) {
     "use strict";
-    var path6 = __require("path");
+    var path7 = __require("path");
     var win32 = process.platform === "win32";
     var {
       REGEX_BACKSLASH,
@@ -14366,7 +14366,7 @@ var require_utils3 = __commonJS({
       if (options && typeof options.windows === "boolean") {
         return options.windows;
       }
-      return win32 === true || path6.sep === "\\";
+      return win32 === true || path7.sep === "\\";
     };
     exports.escapeLast = (input, char, lastIdx) => {
       const idx = input.lastIndexOf(char, lastIdx);
@@ -15730,7 +15730,7 @@ var require_parse3 = __commonJS({
 var require_picomatch3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/picomatch.js"(exports, module) {
     "use strict";
-    var path6 = __require("path");
+    var path7 = __require("path");
     var scan3 = require_scan2();
     var parse2 = require_parse3();
     var utils = require_utils3();
@@ -15815,7 +15815,7 @@ var require_picomatch3 = __commonJS({
     };
     picomatch2.matchBase = (input, glob, options, posix = utils.isWindows(options)) => {
       const regex = glob instanceof RegExp ? glob : picomatch2.makeRe(glob, options);
-      return regex.test(path6.basename(input));
+      return regex.test(path7.basename(input));
     };
     picomatch2.isMatch = (str, patterns, options) => picomatch2(patterns, options)(str);
     picomatch2.parse = (pattern, options) => {
@@ -16042,7 +16042,7 @@ var require_pattern = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.isAbsolute = exports.partitionAbsoluteAndRelative = exports.removeDuplicateSlashes = exports.matchAny = exports.convertPatternsToRe = exports.makeRe = exports.getPatternParts = exports.expandBraceExpansion = exports.expandPatternsWithBraceExpansion = exports.isAffectDepthOfReadingPattern = exports.endsWithSlashGlobStar = exports.hasGlobStar = exports.getBaseDirectory = exports.isPatternRelatedToParentDirectory = exports.getPatternsOutsideCurrentDirectory = exports.getPatternsInsideCurrentDirectory = exports.getPositivePatterns = exports.getNegativePatterns = exports.isPositivePattern = exports.isNegativePattern = exports.convertToNegativePattern = exports.convertToPositivePattern = exports.isDynamicPattern = exports.isStaticPattern = void 0;
-    var path6 = __require("path");
+    var path7 = __require("path");
     var globParent = require_glob_parent();
     var micromatch = require_micromatch();
     var GLOBSTAR = "**";
@@ -16137,7 +16137,7 @@ var require_pattern = __commonJS({
     }
     exports.endsWithSlashGlobStar = endsWithSlashGlobStar;
     function isAffectDepthOfReadingPattern(pattern) {
-      const basename = path6.basename(pattern);
+      const basename = path7.basename(pattern);
       return endsWithSlashGlobStar(pattern) || isStaticPattern(basename);
     }
     exports.isAffectDepthOfReadingPattern = isAffectDepthOfReadingPattern;
@@ -16195,7 +16195,7 @@ var require_pattern = __commonJS({
     }
     exports.partitionAbsoluteAndRelative = partitionAbsoluteAndRelative;
     function isAbsolute(pattern) {
-      return path6.isAbsolute(pattern);
+      return path7.isAbsolute(pattern);
     }
     exports.isAbsolute = isAbsolute;
   }
@@ -16372,8 +16372,8 @@ var require_utils4 = __commonJS({
     exports.errno = errno;
     var fs = require_fs();
     exports.fs = fs;
-    var path6 = require_path();
-    exports.path = path6;
+    var path7 = require_path();
+    exports.path = path7;
     var pattern = require_pattern();
     exports.pattern = pattern;
     var stream = require_stream();
@@ -16485,8 +16485,8 @@ var require_async = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path6, settings, callback) {
-      settings.fs.lstat(path6, (lstatError, lstat2) => {
+    function read(path7, settings, callback) {
+      settings.fs.lstat(path7, (lstatError, lstat2) => {
         if (lstatError !== null) {
           callFailureCallback(callback, lstatError);
           return;
@@ -16495,7 +16495,7 @@ var require_async = __commonJS({
           callSuccessCallback(callback, lstat2);
           return;
         }
-        settings.fs.stat(path6, (statError, stat3) => {
+        settings.fs.stat(path7, (statError, stat3) => {
           if (statError !== null) {
             if (settings.throwErrorOnBrokenSymbolicLink) {
               callFailureCallback(callback, statError);
@@ -16527,13 +16527,13 @@ var require_sync = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path6, settings) {
-      const lstat2 = settings.fs.lstatSync(path6);
+    function read(path7, settings) {
+      const lstat2 = settings.fs.lstatSync(path7);
       if (!lstat2.isSymbolicLink() || !settings.followSymbolicLink) {
         return lstat2;
       }
       try {
-        const stat3 = settings.fs.statSync(path6);
+        const stat3 = settings.fs.statSync(path7);
         if (settings.markSymbolicLink) {
           stat3.isSymbolicLink = () => true;
         }
@@ -16604,17 +16604,17 @@ var require_out = __commonJS({
     var sync = require_sync();
     var settings_1 = require_settings();
     exports.Settings = settings_1.default;
-    function stat3(path6, optionsOrSettingsOrCallback, callback) {
+    function stat3(path7, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path6, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path7, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path6, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path7, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.stat = stat3;
-    function statSync2(path6, optionsOrSettings) {
+    function statSync2(path7, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path6, settings);
+      return sync.read(path7, settings);
     }
     exports.statSync = statSync2;
     function getSettings(settingsOrOptions = {}) {
@@ -16830,16 +16830,16 @@ var require_async2 = __commonJS({
           return;
         }
         const tasks = names.map((name) => {
-          const path6 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
+          const path7 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
           return (done) => {
-            fsStat.stat(path6, settings.fsStatSettings, (error, stats) => {
+            fsStat.stat(path7, settings.fsStatSettings, (error, stats) => {
               if (error !== null) {
                 done(error);
                 return;
               }
               const entry = {
                 name,
-                path: path6,
+                path: path7,
                 dirent: utils.fs.createDirentFromStats(name, stats)
               };
               if (settings.stats) {
@@ -16957,7 +16957,7 @@ var require_settings2 = __commonJS({
   "node_modules/@nodelib/fs.scandir/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path6 = __require("path");
+    var path7 = __require("path");
     var fsStat = require_out();
     var fs = require_fs4();
     var Settings = class {
@@ -16965,7 +16965,7 @@ var require_settings2 = __commonJS({
         this._options = _options;
         this.followSymbolicLinks = this._getValue(this._options.followSymbolicLinks, false);
         this.fs = fs.createFileSystemAdapter(this._options.fs);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path6.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path7.sep);
         this.stats = this._getValue(this._options.stats, false);
         this.throwErrorOnBrokenSymbolicLink = this._getValue(this._options.throwErrorOnBrokenSymbolicLink, true);
         this.fsStatSettings = new fsStat.Settings({
@@ -16992,17 +16992,17 @@ var require_out2 = __commonJS({
     var sync = require_sync2();
     var settings_1 = require_settings2();
     exports.Settings = settings_1.default;
-    function scandir(path6, optionsOrSettingsOrCallback, callback) {
+    function scandir(path7, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path6, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path7, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path6, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path7, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.scandir = scandir;
-    function scandirSync(path6, optionsOrSettings) {
+    function scandirSync(path7, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path6, settings);
+      return sync.read(path7, settings);
     }
     exports.scandirSync = scandirSync;
     function getSettings(settingsOrOptions = {}) {
@@ -17650,7 +17650,7 @@ var require_settings3 = __commonJS({
   "node_modules/@nodelib/fs.walk/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path6 = __require("path");
+    var path7 = __require("path");
     var fsScandir = require_out2();
     var Settings = class {
       constructor(_options = {}) {
@@ -17660,7 +17660,7 @@ var require_settings3 = __commonJS({
         this.deepFilter = this._getValue(this._options.deepFilter, null);
         this.entryFilter = this._getValue(this._options.entryFilter, null);
         this.errorFilter = this._getValue(this._options.errorFilter, null);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path6.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path7.sep);
         this.fsScandirSettings = new fsScandir.Settings({
           followSymbolicLinks: this._options.followSymbolicLinks,
           fs: this._options.fs,
@@ -17722,7 +17722,7 @@ var require_reader2 = __commonJS({
   "node_modules/fast-glob/out/readers/reader.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path6 = __require("path");
+    var path7 = __require("path");
     var fsStat = require_out();
     var utils = require_utils4();
     var Reader = class {
@@ -17735,7 +17735,7 @@ var require_reader2 = __commonJS({
         });
       }
       _getFullEntryPath(filepath) {
-        return path6.resolve(this._settings.cwd, filepath);
+        return path7.resolve(this._settings.cwd, filepath);
       }
       _makeEntry(stats, pattern) {
         const entry = {
@@ -18151,7 +18151,7 @@ var require_provider = __commonJS({
   "node_modules/fast-glob/out/providers/provider.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path6 = __require("path");
+    var path7 = __require("path");
     var deep_1 = require_deep();
     var entry_1 = require_entry();
     var error_1 = require_error();
@@ -18165,7 +18165,7 @@ var require_provider = __commonJS({
         this.entryTransformer = new entry_2.default(this._settings);
       }
       _getRootDirectory(task) {
-        return path6.resolve(this._settings.cwd, task.base);
+        return path7.resolve(this._settings.cwd, task.base);
       }
       _getReaderOptions(task) {
         const basePath = task.base === "." ? "" : task.base;
@@ -21888,7 +21888,7 @@ var init_hf = __esm({
 // src/cli/main.ts
 import { statSync } from "node:fs";
 import { writeFile as writeFile2 } from "node:fs/promises";
-import path5 from "node:path";
+import path6 from "node:path";
 
 // src/judge/report.ts
 import { relative } from "node:path";
@@ -23261,9 +23261,9 @@ import path3 from "node:path";
 
 // src/policy/format.ts
 var PLAIN_KEY = /^[A-Za-z0-9_$-]+$/;
-function formatPath(path6) {
+function formatPath(path7) {
   let out = "";
-  for (const seg of path6) {
+  for (const seg of path7) {
     if (typeof seg === "number") out += `[${seg}]`;
     else if (PLAIN_KEY.test(seg)) out += out === "" ? seg : `.${seg}`;
     else out += `[${JSON.stringify(seg)}]`;
@@ -23319,8 +23319,8 @@ function readPolicyYaml(text) {
       errors.push({ position: { line: 1, column: 1 }, path: [], message: e2.message });
     }
   }
-  const locate2 = (path6, part = "value") => {
-    const found = walk(doc, path6);
+  const locate2 = (path7, part = "value") => {
+    const found = walk(doc, path7);
     const node = part === "key" ? found.key ?? found.value : found.value ?? found.key;
     const offset = node?.range?.[0];
     return offset === void 0 ? { line: 1, column: 1 } : pos(offset);
@@ -23338,10 +23338,10 @@ function keyText(pair) {
 function resolved(doc, node) {
   return (0, import_yaml.isAlias)(node) ? node.resolve(doc) : node;
 }
-function walk(doc, path6) {
+function walk(doc, path7) {
   let value = resolved(doc, doc.contents);
   let key;
-  for (const seg of path6) {
+  for (const seg of path7) {
     if ((0, import_yaml.isMap)(value)) {
       const pair = value.items.find((p) => keyText(p) === String(seg));
       if (!pair) break;
@@ -23361,7 +23361,7 @@ function walk(doc, path6) {
   return { key, value: value ?? void 0 };
 }
 function pathAtOffset(doc, offset) {
-  const path6 = [];
+  const path7 = [];
   let node = doc.contents;
   for (; ; ) {
     if ((0, import_yaml.isMap)(node)) {
@@ -23371,23 +23371,23 @@ function pathAtOffset(doc, offset) {
         return start !== void 0 && end !== void 0 && start <= offset && offset <= end;
       });
       const k = pair && keyText(pair);
-      if (!pair || k === void 0) return path6;
-      path6.push(k);
+      if (!pair || k === void 0) return path7;
+      path7.push(k);
       node = pair.value;
     } else if ((0, import_yaml.isSeq)(node)) {
       const i = node.items.findIndex((it) => {
         const r = it?.range;
         return r != null && r[0] <= offset && offset <= r[2];
       });
-      if (i < 0) return path6;
-      path6.push(i);
+      if (i < 0) return path7;
+      path7.push(i);
       node = node.items[i];
     } else {
-      return path6;
+      return path7;
     }
   }
 }
-function findDuplicates(doc, node, path6, pos, out) {
+function findDuplicates(doc, node, path7, pos, out) {
   if ((0, import_yaml.isMap)(node)) {
     const seen = /* @__PURE__ */ new Map();
     for (const pair of node.items) {
@@ -23399,17 +23399,17 @@ function findDuplicates(doc, node, path6, pos, out) {
         if (first) {
           out.push({
             position: pos(start),
-            path: [...path6, k],
+            path: [...path7, k],
             message: `duplicate key \`${k}\` (first set on line ${first.line}); a key may appear once per mapping`
           });
         } else {
           seen.set(k, pos(start));
         }
       }
-      findDuplicates(doc, pair.value, k === void 0 ? path6 : [...path6, k], pos, out);
+      findDuplicates(doc, pair.value, k === void 0 ? path7 : [...path7, k], pos, out);
     }
   } else if ((0, import_yaml.isSeq)(node)) {
-    node.items.forEach((item, i) => findDuplicates(doc, item, [...path6, i], pos, out));
+    node.items.forEach((item, i) => findDuplicates(doc, item, [...path7, i], pos, out));
   }
 }
 
@@ -25985,7 +25985,7 @@ function schemaKeyIndex() {
   return keyIndex;
 }
 function issueOf(e2, root) {
-  const path6 = pointerPath(e2.instancePath, root);
+  const path7 = pointerPath(e2.instancePath, root);
   const p = e2.params;
   const data2 = e2.data;
   switch (e2.keyword) {
@@ -26005,15 +26005,15 @@ function issueOf(e2, root) {
           message += `; expected one of ${valid.map((k) => `\`${k}\``).join(", ")}`;
         }
       }
-      return { path: [...path6, key], part: "key", message, ...suggestion ? { suggestion } : {} };
+      return { path: [...path7, key], part: "key", message, ...suggestion ? { suggestion } : {} };
     }
     case "required": {
       const key = String(p.missingProperty);
-      return { path: [...path6, key], part: "key", message: `missing required key \`${key}\`` };
+      return { path: [...path7, key], part: "key", message: `missing required key \`${key}\`` };
     }
     case "dependentRequired": {
       return {
-        path: [...path6, String(p.property)],
+        path: [...path7, String(p.property)],
         part: "key",
         message: `\`${String(p.property)}\` is only used together with \`${String(p.missingProperty)}\`; set \`${String(p.missingProperty)}\` too or remove it`
       };
@@ -26021,9 +26021,9 @@ function issueOf(e2, root) {
     case "false schema": {
       const m = /\/dependentSchemas\/([^/]+)\//.exec(e2.schemaPath);
       const with_ = m ? m[1].replace(/~1/g, "/").replace(/~0/g, "~") : void 0;
-      const key = String(path6[path6.length - 1]);
+      const key = String(path7[path7.length - 1]);
       return {
-        path: path6,
+        path: path7,
         part: "key",
         message: with_ ? `set either \`${with_}\` or \`${key}\`, not both` : `\`${key}\` is not allowed here`
       };
@@ -26036,25 +26036,25 @@ function issueOf(e2, root) {
         suggestion = `write shares as fractions: \`${Number.parseFloat(data2) / 100}\``;
       } else if (typeof data2 === "string" && numeric && data2.trim() !== "" && Number.isFinite(Number(data2))) {
         suggestion = `write it without quotes: \`${data2.trim()}\``;
-      } else if (path6.length === 2 && path6[0] === "languages" && typeof data2 === "number") {
-        suggestion = `write \`${String(path6[1])}: { target: ${data2} }\``;
+      } else if (path7.length === 2 && path7[0] === "languages" && typeof data2 === "number") {
+        suggestion = `write \`${String(path7[1])}: { target: ${data2} }\``;
       } else if (typeof data2 === "string" && want.includes("a list") && want.length === 1) {
         suggestion = `write a list: \`[${data2}]\``;
       }
-      return { path: path6, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path7, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "enum": {
       const allowed = p.allowedValues.map(String);
       const near = typeof data2 === "string" ? nearest(data2, allowed) : void 0;
       return {
-        path: path6,
+        path: path7,
         part: "value",
         message: `must be one of ${allowed.map((v) => `\`${v}\``).join(", ")}, not ${kindOf(data2)}`,
         ...near ? { suggestion: didYouMean(near) } : {}
       };
     }
     case "const": {
-      return { path: path6, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
+      return { path: path7, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
     }
     case "minimum":
     case "maximum":
@@ -26065,24 +26065,24 @@ function issueOf(e2, root) {
       if (e2.keyword === "maximum" && p.limit === 1 && typeof data2 === "number" && data2 > 1 && data2 <= 100) {
         suggestion = `shares are fractions of 1: ${data2} % is \`${data2 / 100}\``;
       }
-      return { path: path6, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path7, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "minProperties": {
       const names = propertyNames(e2.parentSchema);
       const dependent = new Set(Object.keys(e2.parentSchema?.dependentRequired ?? {}));
       const primary = names.filter((k) => !dependent.has(k));
       const what = primary.length > 0 && primary.length <= MAX_LISTED_KEYS ? `; set ${primary.map((k) => `\`${k}\``).join(" or ")}` : "";
-      return { path: path6, part: "value", message: `must not be empty${what}` };
+      return { path: path7, part: "value", message: `must not be empty${what}` };
     }
     case "minItems":
-      return { path: path6, part: "value", message: "must not be an empty list" };
+      return { path: path7, part: "value", message: "must not be an empty list" };
     case "minLength":
-      return { path: path6, part: "value", message: "must not be empty" };
+      return { path: path7, part: "value", message: "must not be empty" };
     case "uniqueItems":
       const item = Array.isArray(data2) ? data2[Number(p.j)] : void 0;
-      return { path: path6, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
+      return { path: path7, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
     default:
-      return { path: path6, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
+      return { path: path7, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
   }
 }
 
@@ -42123,7 +42123,8 @@ async function prepareAnalyzers(policy, options = {}) {
 }
 
 // src/core/check.ts
-import { existsSync as existsSync2, opendirSync } from "node:fs";
+import { existsSync as existsSync2, opendirSync, realpathSync } from "node:fs";
+import path5 from "node:path";
 
 // src/core/pool.ts
 import { existsSync } from "node:fs";
@@ -42138,8 +42139,8 @@ var ShardFailure = class extends Error {
   shard;
   name = "ShardFailure";
 };
-function throwIfFaultInjected(path6) {
-  if (process.env.SLUICE_FAULT_SHARD && path6 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+function throwIfFaultInjected(path7) {
+  if (process.env.SLUICE_FAULT_SHARD && path7 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
 }
 function workOf(ref) {
   return ref.textBytesHint ?? ref.sizeBytes;
@@ -42152,8 +42153,8 @@ function defaultWorkers() {
 }
 function canRunWorkers(entry) {
   if (!entry) return false;
-  const path6 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
-  return path6.endsWith(".js") && existsSync(path6);
+  const path7 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
+  return path7.endsWith(".js") && existsSync(path7);
 }
 function startWorker(entry, init) {
   const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
@@ -42458,6 +42459,7 @@ async function measureCorpus(policy, opts, given = {}) {
   const started = performance.now();
   const discovery = given.discovery ?? await discoverOrThrow(policy);
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
+  refuseOutputsAmongShards(discovery.shards, opts.outputs);
   const early = [];
   const entry = opts.workerEntry;
   let evaluation;
@@ -42475,6 +42477,21 @@ async function measureCorpus(policy, opts, given = {}) {
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
     for (const w of early) void w.worker.terminate();
+  }
+}
+function refuseOutputsAmongShards(shards, outputs) {
+  if (!outputs?.length) return;
+  const real = (p) => {
+    try {
+      return realpathSync(p);
+    } catch {
+      return path5.resolve(p);
+    }
+  };
+  const byPath = new Map(shards.map((s) => [real(s.absPath), s.path]));
+  for (const { option, file } of outputs) {
+    const shard = byPath.get(real(file));
+    if (shard !== void 0) throw new ConfigError(`${option} ${file}: is the shard ${shard}; the report would overwrite it`);
   }
 }
 function holdsAnything(dir) {
@@ -42526,8 +42543,8 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     for (const b of reading.values()) inFlight += b;
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes3 + inFlight, elapsedMs: performance.now() - started });
   };
-  const readingAt = (path6, b) => {
-    reading.set(path6, b);
+  const readingAt = (path7, b) => {
+    reading.set(path7, b);
     if (opts.onProgress) report();
   };
   const done = (r) => {
@@ -42634,8 +42651,8 @@ import { readFile as readFile5 } from "node:fs/promises";
 import { createHash as createHash6 } from "node:crypto";
 var PARTIAL_FORMAT = "sluice-partial";
 var PARTIAL_VERSION = 1;
-function partitionOf(path6, count3) {
-  const h = createHash6("sha256").update(path6).digest();
+function partitionOf(path7, count3) {
+  const h = createHash6("sha256").update(path7).digest();
   return h.readUInt32BE(0) % count3 + 1;
 }
 function partialToJson(p) {
@@ -42670,6 +42687,7 @@ async function scanPartition(policyFile, index2, count3, opts) {
   const started = performance.now();
   const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
   const discovery = await discoverOrThrow(policy);
+  refuseOutputsAmongShards(discovery.shards, opts.outputs);
   const mine = discovery.shards.filter((s) => partitionOf(s.path, count3) === index2);
   const prepared = await prepareOrThrow(policy);
   const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
@@ -42822,8 +42840,8 @@ var HTML_SPECIAL = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'":
 function escapeMarkdown(text) {
   return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, (c) => `U+${c.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`).replace(MARKDOWN_PUNCT, (c) => `\\${c}`).replace(/[&<>"']/g, (c) => HTML_SPECIAL[c]).replace(/@/g, "&#64;").replace(/:\/\//g, "&#58;//").replace(/\r?\n|\r/g, " ");
 }
-function codePath(path6) {
-  const safe = path6.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
+function codePath(path7) {
+  const safe = path7.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
   return `\`${safe}\``;
 }
 
@@ -42882,10 +42900,10 @@ var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\
 var MAX_REJECTIONS_LISTED = 10;
 function renderMarkdown(report, opts = {}) {
   const out = [];
-  const loc = (path6, line) => {
-    const text = codePath(line === void 0 ? path6 : `${path6}:${line}`);
+  const loc = (path7, line) => {
+    const text = codePath(line === void 0 ? path7 : `${path7}:${line}`);
     if (!opts.linkBase) return text;
-    const href = `${opts.linkBase}/${path6.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
+    const href = `${opts.linkBase}/${path7.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
     return `[${text}](${href})`;
   };
   out.push(`## ${ICON[report.verdict]} sluice \xB7 ${escapeMarkdown(report.policy.name)}: ${report.verdict.toUpperCase()}`);
@@ -43251,7 +43269,8 @@ async function check(opts) {
 `),
     workerEntry: import.meta.url,
     ...opts.workers !== void 0 ? { workers: opts.workers } : {},
-    ...opts.minSplitBytes !== void 0 ? { minSplitBytes: opts.minSplitBytes } : {}
+    ...opts.minSplitBytes !== void 0 ? { minSplitBytes: opts.minSplitBytes } : {},
+    outputs: outputsOf([["--json", opts.json], ["--markdown", opts.markdown]])
   });
   progress.clear();
   return emit(reports, opts);
@@ -43266,7 +43285,8 @@ async function scan2(opts) {
     onProgress: progress.update,
     onWarning: (m) => process.stderr.write(`warning: ${m}
 `),
-    workerEntry: import.meta.url
+    workerEntry: import.meta.url,
+    outputs: outputsOf([["--out", opts.out]])
   });
   progress.clear();
   await writeOutput("--out", opts.out, partialToJson(partial));
@@ -43303,6 +43323,9 @@ async function emit(reports, opts) {
   }
   return reports.some((r) => r.verdict === "fail") ? 1 : 0;
 }
+function outputsOf(options) {
+  return options.flatMap(([option, file]) => file === void 0 ? [] : [{ option, file }]);
+}
 function warnOfWorkers(workers) {
   const most = maxWorkers();
   if (workers !== void 0 && workers > most) process.stderr.write(`warning: --workers ${workers}: measuring on ${most} threads, twice this machine's cores; more would only take turns on them, each with its own memory
@@ -43323,14 +43346,14 @@ function checkPaths(outputs, policies, cacheDir) {
       return "none";
     }
   };
-  const policyFiles = new Set(policies.map((p) => path5.resolve(p)));
+  const policyFiles = new Set(policies.map((p) => path6.resolve(p)));
   for (const [option, file] of outputs) {
     if (file === void 0) continue;
     if (kind(file) === "dir") throw new UsageError(`${option} ${file}: is a directory; give a file name to write to`);
-    const parent = path5.dirname(path5.resolve(file));
+    const parent = path6.dirname(path6.resolve(file));
     const parentKind = kind(parent);
     if (parentKind !== "dir") throw new UsageError(`${option} ${file}: ${parent} ${parentKind === "none" ? "does not exist" : "is not a directory"}`);
-    if (policyFiles.has(path5.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
+    if (policyFiles.has(path6.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
   }
   if (cacheDir !== null && kind(cacheDir) === "file") throw new UsageError(`--cache-dir ${cacheDir}: is a file, not a directory`);
 }

@@ -25,6 +25,7 @@ async function check(opts: CheckCliOptions): Promise<number> {
     workerEntry: import.meta.url,
     ...(opts.workers !== undefined ? { workers: opts.workers } : {}),
     ...(opts.minSplitBytes !== undefined ? { minSplitBytes: opts.minSplitBytes } : {}),
+    outputs: outputsOf([['--json', opts.json], ['--markdown', opts.markdown]]),
   });
   progress.clear();
   return emit(reports, opts);
@@ -40,6 +41,7 @@ async function scan(opts: ScanCliOptions): Promise<number> {
     onProgress: progress.update,
     onWarning: (m) => process.stderr.write(`warning: ${m}\n`),
     workerEntry: import.meta.url,
+    outputs: outputsOf([['--out', opts.out]]),
   });
   progress.clear();
   await writeOutput('--out', opts.out, partialToJson(partial));
@@ -75,6 +77,11 @@ async function emit(reports: Report[], opts: Pick<CheckCliOptions, 'quiet' | 'co
     if (opts.markdown) await writeOutput('--markdown', suffixed(opts.markdown, names[i]!), renderMarkdown(report));
   }
   return reports.some((r) => r.verdict === 'fail') ? 1 : 0;
+}
+
+/** The output options given, as the core checks them against the shards. */
+function outputsOf(options: Array<[string, string | undefined]>): Array<{ option: string; file: string }> {
+  return options.flatMap(([option, file]) => (file === undefined ? [] : [{ option, file }]));
 }
 
 /** Says when --workers asks for more threads than a run starts (the core caps them: see maxWorkers). */

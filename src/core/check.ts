@@ -13,7 +13,8 @@ import { contentIdOf, measureBatch, scanShard, scanShardInBatches, type BatchPla
 import { mergeShardResults } from '../results/tally.js';
 import type { ShardResult } from '../results/types.js';
 import { AnalyzerSetupError, prepareAnalyzers, readEvaluation, type EvaluationSet, type PreparedAnalyzers } from './analyzers.js';
-import { existsSync, opendirSync } from 'node:fs';
+import { existsSync, opendirSync, realpathSync } from 'node:fs';
+import path from 'node:path';
 import {
   canRunWorkers,
   defaultWorkers,
@@ -131,6 +132,8 @@ export interface CheckOptions {
   contentKey?: (ref: ShardRef) => Promise<string>;
   /** Shards taken as new: duplicates they add against the other shards are reported separately. */
   newShards?: string[];
+  /** Files the caller will write when the run ends (reports, a partial result): a run whose shards include one of them stops before reading, rather than overwrite a shard. */
+  outputs?: readonly { option: string; file: string }[];
   /** Threads measuring shards (default: one per WORK_PER_WORKER_BYTES of compressed shards to measure, up to the available cores); 1 measures in this thread. */
   workers?: number;
   /** The built script workers start from (the front end's own bundle, import.meta.url); without one, shards are measured in this thread. */
@@ -200,6 +203,7 @@ export async function measureCorpus(
   const started = performance.now();
   const discovery = given.discovery ?? (await discoverOrThrow(policy));
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
+  refuseOutputsAmongShards(discovery.shards, opts.outputs);
   // Workers load the bundle and build their analyzers themselves (about half a second each): when
   // the run will need them and no cache can spare the work, they start now, alongside this
   // thread's own loading, with the policy and the evaluation set this thread has read.
@@ -220,6 +224,23 @@ export async function measureCorpus(
     return await assembleCorpus(policy, prepared, results, cached, discovery.skipped, opts.newShards, started);
   } finally {
     for (const w of early) void w.worker.terminate();
+  }
+}
+
+/** Throws ConfigError when an output file the caller will write is one of the shards (by resolved path). */
+export function refuseOutputsAmongShards(shards: readonly ShardRef[], outputs: CheckOptions['outputs']): void {
+  if (!outputs?.length) return;
+  const real = (p: string): string => {
+    try {
+      return realpathSync(p);
+    } catch {
+      return path.resolve(p);
+    }
+  };
+  const byPath = new Map(shards.map((s) => [real(s.absPath), s.path]));
+  for (const { option, file } of outputs) {
+    const shard = byPath.get(real(file));
+    if (shard !== undefined) throw new ConfigError(`${option} ${file}: is the shard ${shard}; the report would overwrite it`);
   }
 }
 

@@ -9,7 +9,7 @@ import type { Report } from '../judge/types.js';
 import { partitionOf, PARTIAL_FORMAT, PARTIAL_VERSION, partialFromJson, type Partial } from '../results/partition.js';
 import type { ShardResult } from '../results/types.js';
 import type { SkippedFile } from '../read/types.js';
-import { assembleCorpus, ConfigError, discoverOrThrow, loadPolicyOrThrow, measureShards, prepareOrThrow, type CheckOptions } from './check.js';
+import { assembleCorpus, ConfigError, discoverOrThrow, loadPolicyOrThrow, measureShards, prepareOrThrow, refuseOutputsAmongShards, type CheckOptions } from './check.js';
 
 /** Returns the partial result of partition `index` of `count` (1-based). */
 export async function scanPartition(policyFile: string, index: number, count: number, opts: Omit<CheckOptions, 'policies'>): Promise<Partial> {
@@ -19,6 +19,7 @@ export async function scanPartition(policyFile: string, index: number, count: nu
   const started = performance.now();
   const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
   const discovery = await discoverOrThrow(policy);
+  refuseOutputsAmongShards(discovery.shards, opts.outputs);
   const mine = discovery.shards.filter((s) => partitionOf(s.path, count) === index);
   const prepared = await prepareOrThrow(policy);
   const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);

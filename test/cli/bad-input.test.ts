@@ -276,6 +276,14 @@ describe('output and cache paths', () => {
       expect(r.stdout).toBe(''); // refused before anything was measured
     }
     expect(readFileSync(join(root, 'p.yaml'), 'utf8')).toBe(policyYaml());
+    // A shard, known only once the globs are listed: refused before it is read.
+    const shard = join(root, 'data/a.jsonl');
+    for (const args of [['check', join(root, 'p.yaml'), '--json', shard], ['scan', '--policy', join(root, 'p.yaml'), '--partition', '1/1', '--out', shard]]) {
+      const r = sluice(args);
+      expect(r.status).toBe(2);
+      expect(r.stderr).toContain(`${shard}: is the shard data/a.jsonl; the report would overwrite it`);
+    }
+    expect(readFileSync(shard, 'utf8')).toBe(lines(3, ENGLISH));
     const scan = sluice(['scan', '--policy', join(root, 'p.yaml'), '--partition', '1/1', '--out', join(root, 'data')]);
     expect(scan.status).toBe(2);
     expect(scan.stderr).toContain('--out');
