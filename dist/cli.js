@@ -195,7 +195,7 @@ var require_internal = __commonJS({
       // Codec.
       _internal: InternalCodec
     };
-    function InternalCodec(codecOptions, iconv5) {
+    function InternalCodec(codecOptions, iconv6) {
       this.enc = codecOptions.encodingName;
       this.bomAware = codecOptions.bomAware;
       if (this.enc === "base64") {
@@ -207,7 +207,7 @@ var require_internal = __commonJS({
         this.encoder = InternalEncoderCesu8;
         if (Buffer2.from("eda0bdedb2a9", "hex").toString() !== "\u{1F4A9}") {
           this.decoder = InternalDecoderCesu8;
-          this.defaultCharUnicode = iconv5.defaultCharUnicode;
+          this.defaultCharUnicode = iconv6.defaultCharUnicode;
         }
       }
     }
@@ -364,8 +364,8 @@ var require_utf32 = __commonJS({
     "use strict";
     var Buffer2 = require_safer().Buffer;
     exports._utf32 = Utf32Codec;
-    function Utf32Codec(codecOptions, iconv5) {
-      this.iconv = iconv5;
+    function Utf32Codec(codecOptions, iconv6) {
+      this.iconv = iconv6;
       this.bomAware = true;
       this.isLE = codecOptions.isLE;
     }
@@ -493,8 +493,8 @@ var require_utf32 = __commonJS({
     };
     exports.utf32 = Utf32AutoCodec;
     exports.ucs4 = "utf32";
-    function Utf32AutoCodec(options, iconv5) {
-      this.iconv = iconv5;
+    function Utf32AutoCodec(options, iconv6) {
+      this.iconv = iconv6;
     }
     Utf32AutoCodec.prototype.encoder = Utf32AutoEncoder;
     Utf32AutoCodec.prototype.decoder = Utf32AutoDecoder;
@@ -644,8 +644,8 @@ var require_utf16 = __commonJS({
       this.overflowByte = -1;
     };
     exports.utf16 = Utf16Codec;
-    function Utf16Codec(codecOptions, iconv5) {
-      this.iconv = iconv5;
+    function Utf16Codec(codecOptions, iconv6) {
+      this.iconv = iconv6;
     }
     Utf16Codec.prototype.encoder = Utf16Encoder;
     Utf16Codec.prototype.decoder = Utf16Decoder;
@@ -743,8 +743,8 @@ var require_utf7 = __commonJS({
     var Buffer2 = require_safer().Buffer;
     exports.utf7 = Utf7Codec;
     exports.unicode11utf7 = "utf7";
-    function Utf7Codec(codecOptions, iconv5) {
-      this.iconv = iconv5;
+    function Utf7Codec(codecOptions, iconv6) {
+      this.iconv = iconv6;
     }
     Utf7Codec.prototype.encoder = Utf7Encoder;
     Utf7Codec.prototype.decoder = Utf7Decoder;
@@ -826,8 +826,8 @@ var require_utf7 = __commonJS({
       return res;
     };
     exports.utf7imap = Utf7IMAPCodec;
-    function Utf7IMAPCodec(codecOptions, iconv5) {
-      this.iconv = iconv5;
+    function Utf7IMAPCodec(codecOptions, iconv6) {
+      this.iconv = iconv6;
     }
     Utf7IMAPCodec.prototype.encoder = Utf7IMAPEncoder;
     Utf7IMAPCodec.prototype.decoder = Utf7IMAPDecoder;
@@ -960,7 +960,7 @@ var require_sbcs_codec = __commonJS({
     "use strict";
     var Buffer2 = require_safer().Buffer;
     exports._sbcs = SBCSCodec;
-    function SBCSCodec(codecOptions, iconv5) {
+    function SBCSCodec(codecOptions, iconv6) {
       if (!codecOptions) {
         throw new Error("SBCS codec is called without the data.");
       }
@@ -975,7 +975,7 @@ var require_sbcs_codec = __commonJS({
         codecOptions.chars = asciiString + codecOptions.chars;
       }
       this.decodeBuf = Buffer2.from(codecOptions.chars, "ucs2");
-      var encodeBuf = Buffer2.alloc(65536, iconv5.defaultCharSingleByte.charCodeAt(0));
+      var encodeBuf = Buffer2.alloc(65536, iconv6.defaultCharSingleByte.charCodeAt(0));
       for (var i = 0; i < codecOptions.chars.length; i++) {
         encodeBuf[codecOptions.chars.charCodeAt(i)] = i;
       }
@@ -1642,7 +1642,7 @@ var require_dbcs_codec = __commonJS({
       UNASSIGNED_NODE[i] = UNASSIGNED;
     }
     var i;
-    function DBCSCodec(codecOptions, iconv5) {
+    function DBCSCodec(codecOptions, iconv6) {
       this.encodingName = codecOptions.encodingName;
       if (!codecOptions) {
         throw new Error("DBCS codec is called without the data.");
@@ -1691,7 +1691,7 @@ var require_dbcs_codec = __commonJS({
           }
         }
       }
-      this.defaultCharUnicode = iconv5.defaultCharUnicode;
+      this.defaultCharUnicode = iconv6.defaultCharUnicode;
       this.encodeTable = [];
       this.encodeTableSeq = [];
       var skipEncodeChars = {};
@@ -1715,7 +1715,7 @@ var require_dbcs_codec = __commonJS({
           }
         }
       }
-      this.defCharSB = this.encodeTable[0][iconv5.defaultCharSingleByte.charCodeAt(0)];
+      this.defCharSB = this.encodeTable[0][iconv6.defaultCharSingleByte.charCodeAt(0)];
       if (this.defCharSB === UNASSIGNED) this.defCharSB = this.encodeTable[0]["?"];
       if (this.defCharSB === UNASSIGNED) this.defCharSB = "?".charCodeAt(0);
     }
@@ -26087,8 +26087,16 @@ function issueOf(e2, root) {
 }
 
 // src/policy/build.ts
-var import_iconv_lite2 = __toESM(require_lib(), 1);
+var import_iconv_lite3 = __toESM(require_lib(), 1);
 import path from "node:path";
+
+// src/policy/encodings.ts
+var import_iconv_lite2 = __toESM(require_lib(), 1);
+function isLineSplittableEncoding(encoding) {
+  if (!import_iconv_lite2.default.encodingExists(encoding)) return false;
+  const probe = import_iconv_lite2.default.encode("a\n{", encoding, { addBOM: false });
+  return probe.length === 3 && probe[0] === 97 && probe[1] === 10 && probe[2] === 123;
+}
 
 // src/policy/data/default-scripts.ts
 var DEFAULT_SCRIPTS = {
@@ -27378,10 +27386,14 @@ function buildCorpus(c, sink) {
     const where2 = ["corpus", "encodings", glob];
     checkGlob(glob, where2, sink);
     if (typeof enc !== "string" || enc.length === 0) continue;
-    if (!import_iconv_lite2.default.encodingExists(enc)) {
+    if (!import_iconv_lite3.default.encodingExists(enc)) {
       sink.problem(where2, `unknown encoding \`${enc}\` (encoding names are those iconv-lite knows, e.g. \`windows-1256\`)`, {
         ...encodingSuggestion(enc)
       });
+      continue;
+    }
+    if (!isLineSplittableEncoding(enc)) {
+      sink.problem(where2, `encoding \`${enc}\` does not keep ASCII bytes as they are, and sluice splits lines at byte 0x0A: convert such shards to UTF-8`);
       continue;
     }
     encodings.push({ glob, encoding: enc });
@@ -27398,7 +27410,7 @@ function buildCorpus(c, sink) {
 }
 function encodingSuggestion(enc) {
   const canonical = enc.toLowerCase().replace(/[^a-z0-9]/g, "");
-  const names = Object.keys(import_iconv_lite2.default.encodings ?? {}).filter((k) => !k.startsWith("_") && !/^\d+$/.test(k));
+  const names = Object.keys(import_iconv_lite3.default.encodings ?? {}).filter((k) => !k.startsWith("_") && !/^\d+$/.test(k));
   const near = nearest(canonical, names);
   return near ? { suggestion: didYouMean(near) } : {};
 }
@@ -27831,7 +27843,7 @@ import { readdir } from "node:fs";
 import path4 from "node:path";
 
 // src/read/classify.ts
-var import_iconv_lite3 = __toESM(require_lib(), 1);
+var import_iconv_lite4 = __toESM(require_lib(), 1);
 var import_picomatch = __toESM(require_picomatch2(), 1);
 var DEFAULT_ENCODING = "utf-8";
 var SUBSET_PLACEHOLDER = "{subset}";
@@ -27851,11 +27863,6 @@ function shardKindOf(filePath) {
   const format = FORMAT_BY_EXTENSION[last];
   return format !== void 0 ? { format, compression: "none" } : { unsupported: last === "" ? "" : `.${last}` };
 }
-function isLineSplittableEncoding(encoding) {
-  if (!import_iconv_lite3.default.encodingExists(encoding)) return false;
-  const probe = import_iconv_lite3.default.encode("a\n{", encoding, { addBOM: false });
-  return probe.length === 3 && probe[0] === 97 && probe[1] === 10 && probe[2] === 123;
-}
 function subsetExtractor(pattern) {
   const count3 = pattern.split(SUBSET_PLACEHOLDER).length - 1;
   if (count3 !== 1) {
@@ -27870,7 +27877,7 @@ function subsetExtractor(pattern) {
 }
 function pathClassifier(corpus) {
   const overrides = corpus.encodings.map(({ glob, encoding }) => {
-    if (!import_iconv_lite3.default.encodingExists(encoding)) {
+    if (!import_iconv_lite4.default.encodingExists(encoding)) {
       throw new Error(`corpus.encodings: glob \`${glob}\` names encoding \`${encoding}\`, which iconv-lite does not know`);
     }
     if (!isLineSplittableEncoding(encoding)) {
@@ -28100,7 +28107,7 @@ function messageOf(error) {
 import { isUtf8 as isUtf82 } from "node:buffer";
 
 // src/read/decode.ts
-var import_iconv_lite4 = __toESM(require_lib(), 1);
+var import_iconv_lite5 = __toESM(require_lib(), 1);
 import { isUtf8 } from "node:buffer";
 function firstInvalidUtf8(bytes3) {
   const n = bytes3.length;
@@ -28154,13 +28161,13 @@ function legacyLineDecoder(encoding) {
       const nul = line.indexOf(0);
       if (nul !== -1) return { reason: "binary", at: nul };
     }
-    const text = import_iconv_lite4.default.decode(line, encoding, { stripBOM: false });
+    const text = import_iconv_lite5.default.decode(line, encoding, { stripBOM: false });
     if (!text.includes("\uFFFD")) return text;
     return { reason: "invalid-encoding", at: firstUndecodableByte(line, encoding) };
   };
 }
 function firstUndecodableByte(line, encoding) {
-  const decoder = import_iconv_lite4.default.getDecoder(encoding, { stripBOM: false });
+  const decoder = import_iconv_lite5.default.getDecoder(encoding, { stripBOM: false });
   for (let i = 0; i < line.length; i++) {
     if (decoder.write(line.subarray(i, i + 1)).includes("\uFFFD")) return i;
   }
@@ -42430,7 +42437,7 @@ async function discoverOrThrow(policy) {
   try {
     discovery = await discoverShards(policy.root, policy.corpus);
   } catch (err2) {
-    throw new ConfigError(formatPolicyKeyProblem(policy, "corpus.include", err2.message));
+    throw new ConfigError(`${policy.file}: ${err2.message}`);
   }
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
   return discovery;

@@ -158,7 +158,8 @@ export async function discoverOrThrow(policy: Policy): Promise<Discovery> {
   try {
     discovery = await discoverShards(policy.root, policy.corpus);
   } catch (err) {
-    throw new ConfigError(formatPolicyKeyProblem(policy, 'corpus.include', (err as Error).message));
+    // The message names its key (corpus.subset, corpus.encodings) or the root it could not list.
+    throw new ConfigError(`${policy.file}: ${(err as Error).message}`);
   }
   if (discovery.shards.length === 0) throw noShards(policy, discovery.skipped);
   return discovery;

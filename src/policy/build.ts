@@ -5,6 +5,7 @@
 // and a wrong-typed entry is skipped rather than trusted.
 import path from 'node:path';
 import iconv from 'iconv-lite';
+import { isLineSplittableEncoding } from './encodings.js';
 import type { KeyPath } from './format.js';
 import type {
   AnomalyKind,
@@ -211,6 +212,10 @@ function buildCorpus(c: Obj, sink: BuildSink): CorpusSpec {
       sink.problem(where, `unknown encoding \`${enc}\` (encoding names are those iconv-lite knows, e.g. \`windows-1256\`)`, {
         ...encodingSuggestion(enc),
       });
+      continue;
+    }
+    if (!isLineSplittableEncoding(enc)) {
+      sink.problem(where, `encoding \`${enc}\` does not keep ASCII bytes as they are, and sluice splits lines at byte 0x0A: convert such shards to UTF-8`);
       continue;
     }
     encodings.push({ glob, encoding: enc });

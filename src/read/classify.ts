@@ -3,6 +3,7 @@
 // Kept apart from discovery so that a shard taken from elsewhere (a git blob of the
 // base branch) is classified by exactly the same rules.
 import iconv from 'iconv-lite';
+import { isLineSplittableEncoding } from '../policy/encodings.js';
 import picomatch from 'picomatch';
 import type { CorpusSpec } from '../policy/types.js';
 import type { Compression, ShardFormat } from './types.js';
@@ -45,13 +46,8 @@ export function shardKindOf(filePath: string): ShardKind | { unsupported: string
   return format !== undefined ? { format, compression: 'none' } : { unsupported: last === '' ? '' : `.${last}` };
 }
 
-/** Returns true when iconv-lite knows the encoding and it keeps ASCII bytes as they are, so lines can be split at byte 0x0A. */
-export function isLineSplittableEncoding(encoding: string): boolean {
-  if (!iconv.encodingExists(encoding)) return false;
-  // UTF-16/32 put NUL bytes around every ASCII character; splitting such bytes at 0x0A would cut characters in half.
-  const probe = iconv.encode('a\n{', encoding, { addBOM: false });
-  return probe.length === 3 && probe[0] === 0x61 && probe[1] === 0x0a && probe[2] === 0x7b;
-}
+// Re-exported for the read stage's callers; the policy stage refuses such encodings first, with their position.
+export { isLineSplittableEncoding };
 
 /** Returns a function that extracts the subset segment from a path, or undefined when the path does not match; throws when the pattern has not exactly one `{subset}`. */
 export function subsetExtractor(pattern: string): (filePath: string) => string | undefined {

@@ -69,6 +69,13 @@ describe('a policy that cannot be judged exits 2 with the file, line and key', (
     expect(report.verdict).toBe('fail');
   });
 
+  it('says where an encoding that lines cannot be split in is written', () => {
+    const root = corpus({ 'p.yaml': policyYaml().replace('  include: ["data/**/*"]\n', '  include: ["data/**/*"]\n  encodings: { "data/*.txt": utf-16le }\n'), 'data/a.jsonl': lines(3, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml')]);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toMatch(/p\.yaml:6:\d+: corpus\.encodings\["data\/\*\.txt"\]: encoding `utf-16le` does not keep ASCII bytes/);
+  });
+
   it('says where the tokenizer is written when its file cannot be used', () => {
     const root = corpus({ 'p.yaml': policyYaml('tokenizer: { file: tok.json }\n'), 'tok.json': 'not a tokenizer\n', 'data/a.jsonl': lines(3, ENGLISH) });
     const r = sluice(['check', join(root, 'p.yaml')]);
