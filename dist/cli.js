@@ -29054,6 +29054,7 @@ var ZSTD_MAGIC = 4247762216;
 var SKIPPABLE_MAGIC_MASK = 4294967280;
 var SKIPPABLE_MAGIC = 407710288;
 var MAX_BLOCK_BYTES = 128 * 1024;
+var MAX_WINDOW_BYTES = 128 * 2 ** 20;
 var hashing;
 function xxhashApi() {
   hashing ??= e().catch((error) => {
@@ -29161,6 +29162,13 @@ var ZstdFrameReader = class {
           }
           const sizeBytes = fcsBytes(d);
           if (sizeBytes > 0) this.frame.contentSize = readLE(field, at, sizeBytes) + (sizeBytes === 2 ? 256 : 0);
+          const w = field[1];
+          const window2 = singleSegment ? this.frame.contentSize ?? 0 : 2 ** (10 + (w >> 3)) * (1 + (w & 7) / 8);
+          if (window2 > MAX_WINDOW_BYTES) {
+            return this.fail(
+              `frame ${this.frames} needs a window of ${(window2 / 2 ** 20).toFixed(0)} MiB, more than the ${MAX_WINDOW_BYTES / 2 ** 20} MiB sluice decodes (as the zstd tool does without --long or --memory); recompress the shard without --long, or the header is damaged`
+            );
+          }
           this.expect(BLOCK_HEADER, 3);
           break;
         }

@@ -14,6 +14,8 @@ const SKIPPABLE_MAGIC_MASK = 0xfffffff0;
 const SKIPPABLE_MAGIC = 0x184d2a50;
 /** RFC 8878 §3.1.1.2: Block_Maximum_Size is at most 128 KiB, for every block type. */
 const MAX_BLOCK_BYTES = 128 * 1024;
+/** Largest window decoded: 128 MiB, the zstd tool's default limit for decompression (its --memory; from memory, zstd 1.5 man page). */
+const MAX_WINDOW_BYTES = 128 * 2 ** 20;
 
 let hashing: Promise<XXHashAPI> | undefined;
 
@@ -152,6 +154,16 @@ export class ZstdFrameReader {
           }
           const sizeBytes = fcsBytes(d);
           if (sizeBytes > 0) this.frame!.contentSize = readLE(field, at, sizeBytes) + (sizeBytes === 2 ? 256 : 0);
+          // RFC 8878 §3.1.1.1.2: the window is 2^(10 + Exponent) plus Mantissa eighths of that, or
+          // the content size in a single segment. The decompressor allocates it whole, so a damaged
+          // header could ask for gigabytes: refused before this frame's bytes reach it.
+          const w = field[1]!;
+          const window = singleSegment ? (this.frame!.contentSize ?? 0) : 2 ** (10 + (w >> 3)) * (1 + (w & 7) / 8);
+          if (window > MAX_WINDOW_BYTES) {
+            return this.fail(
+              `frame ${this.frames} needs a window of ${(window / 2 ** 20).toFixed(0)} MiB, more than the ${MAX_WINDOW_BYTES / 2 ** 20} MiB sluice decodes (as the zstd tool does without --long or --memory); recompress the shard without --long, or the header is damaged`,
+            );
+          }
           this.expect(BLOCK_HEADER, 3);
           break;
         }

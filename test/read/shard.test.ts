@@ -493,6 +493,16 @@ describe('compressed shards', () => {
       }
     });
 
+    it('refuses a frame whose window is over 128 MiB before decoding it, keeping the frames before', async () => {
+      // RFC 8878 §3.1.1.1.2: Window_Descriptor 0xA8 is Exponent 21, Mantissa 0: a window of 2^31 bytes.
+      // Header: magic, descriptor 0x00 (no single segment, checksum, dictionary or size), the window byte;
+      // then a last, raw block of 2 bytes.
+      const huge = Buffer.from([0x28, 0xb5, 0x2f, 0xfd, 0x00, 0xa8, 0x11, 0x00, 0x00, 0x7b, 0x7d]);
+      const { account, docs } = await readAll(fileShard('wide.jsonl.zst', Buffer.concat([zstA, huge]), 'zstd'));
+      expect(docs.map((d) => d.text)).toEqual(textsOf(plainA));
+      expect(account.broken?.message).toMatch(/^zstd: frame 2 needs a window of 2048 MiB, more than the 128 MiB sluice decodes/);
+    });
+
     it('reports a zero-byte .zst as broken, as `zstd -t` does ("unexpected end of file")', async () => {
       const { account } = await readAll(fileShard('empty.jsonl.zst', Buffer.alloc(0), 'zstd'));
       expect(account.broken?.message).toBe('zstd: unexpected end of file (no frame)');
