@@ -16495,7 +16495,7 @@ var require_async = __commonJS({
           callSuccessCallback(callback, lstat2);
           return;
         }
-        settings.fs.stat(path7, (statError, stat3) => {
+        settings.fs.stat(path7, (statError, stat4) => {
           if (statError !== null) {
             if (settings.throwErrorOnBrokenSymbolicLink) {
               callFailureCallback(callback, statError);
@@ -16505,9 +16505,9 @@ var require_async = __commonJS({
             return;
           }
           if (settings.markSymbolicLink) {
-            stat3.isSymbolicLink = () => true;
+            stat4.isSymbolicLink = () => true;
           }
-          callSuccessCallback(callback, stat3);
+          callSuccessCallback(callback, stat4);
         });
       });
     }
@@ -16533,11 +16533,11 @@ var require_sync = __commonJS({
         return lstat2;
       }
       try {
-        const stat3 = settings.fs.statSync(path7);
+        const stat4 = settings.fs.statSync(path7);
         if (settings.markSymbolicLink) {
-          stat3.isSymbolicLink = () => true;
+          stat4.isSymbolicLink = () => true;
         }
-        return stat3;
+        return stat4;
       } catch (error) {
         if (!settings.throwErrorOnBrokenSymbolicLink) {
           return lstat2;
@@ -16604,14 +16604,14 @@ var require_out = __commonJS({
     var sync = require_sync();
     var settings_1 = require_settings();
     exports.Settings = settings_1.default;
-    function stat3(path7, optionsOrSettingsOrCallback, callback) {
+    function stat4(path7, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
         async.read(path7, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
       async.read(path7, getSettings(optionsOrSettingsOrCallback), callback);
     }
-    exports.stat = stat3;
+    exports.stat = stat4;
     function statSync2(path7, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
       return sync.read(path7, settings);
@@ -29600,8 +29600,8 @@ var TextSink = class extends AccountingSink {
 
 // src/results/cache.ts
 import { createHash as createHash3 } from "node:crypto";
-import { mkdir, readFile as readFile2, rename, writeFile } from "node:fs/promises";
-import { join } from "node:path";
+import { mkdir, readFile as readFile2, rename, stat as stat3, writeFile } from "node:fs/promises";
+import { dirname, join } from "node:path";
 
 // src/measure/duplicates/hash.ts
 function mix32(h) {
@@ -31431,6 +31431,22 @@ function canonicalJson(value) {
     return v;
   });
 }
+async function makeDirectory(dir) {
+  try {
+    await mkdir(dir);
+    return;
+  } catch (error) {
+    const code = error.code;
+    if (code === "EEXIST" && (await stat3(dir)).isDirectory()) return;
+    if (code !== "ENOENT" || dirname(dir) === dir) throw error;
+  }
+  await makeDirectory(dirname(dir));
+  try {
+    await mkdir(dir);
+  } catch (error) {
+    if (error.code !== "EEXIST" || !(await stat3(dir)).isDirectory()) throw error;
+  }
+}
 var ResultCache = class {
   /** needsDuplicateIndex: the settings measure duplicates, so an entry without its shard's index is not whole. */
   constructor(dir, needsDuplicateIndex = false) {
@@ -31470,7 +31486,7 @@ var ResultCache = class {
   /** Stores a result; broken shards are never cached, so they are read again next time. */
   async put(result) {
     if (result.read.broken) return;
-    await mkdir(this.dir, { recursive: true });
+    await makeDirectory(this.dir);
     const target = this.file(result.contentId, result.settingsId);
     const tmp = `${target}.${process.pid}.tmp`;
     await writeFile(tmp, JSON.stringify(storedShardResult(result)));

@@ -2,7 +2,7 @@
 // whole corpus otherwise), write the reports, the job summary, the PR comment and
 // the file annotations, keep the shard cache, and say whether the step fails.
 import { createHash } from 'node:crypto';
-import { mkdir, mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { ConfigError, loadPolicyOrThrow, measureCorpus, type CheckOptions } from '../core/check.js';
@@ -12,6 +12,7 @@ import { buildReport } from '../judge/report.js';
 import type { Report, Verdict } from '../judge/types.js';
 import type { Policy } from '../policy/types.js';
 import { renderJson } from '../render/json.js';
+import { makeDirectory } from '../results/cache.js';
 import { contentIdOf } from '../results/scan.js';
 import { TOOL_VERSION } from '../version.js';
 import { annotationsOf, capAnnotations, type Annotation } from './annotations.js';
@@ -95,7 +96,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
   const keyPrefix = `sluice-results-${CACHE_LAYOUT}-${s.runnerOs}-`;
   const cacheKey = `${keyPrefix}${policyHash.digest('hex').slice(0, 16)}-${s.sha || 'local'}`;
   const cacheDir = s.cache ? s.cacheDir : await mkdtemp(path.join(tmpdir(), 'sluice-results-'));
-  await mkdir(cacheDir, { recursive: true });
+  await makeDirectory(cacheDir);
   // A limit changed in the policy does not change what is measured: fall back to any entry (results carry their own settings id).
   const restored = s.cache ? await restoreResults(cacheDir, cacheKey, [cacheKey.slice(0, cacheKey.lastIndexOf('-') + 1), keyPrefix], io.info, warn) : undefined;
 
@@ -111,7 +112,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
   };
   if (s.workers !== null && s.workers > maxWorkers()) warn(`sluice: input \`workers\` is ${s.workers}: measuring on ${maxWorkers()} threads, twice this runner's cores`);
   const judged: Judged[] = [];
-  await mkdir(s.reportDir, { recursive: true });
+  await makeDirectory(s.reportDir);
   // One file stem per policy; two policies with one name get -2, -3, ...
   const seen = new Map<string, number>();
   const stems = policies.map((p) => {

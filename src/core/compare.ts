@@ -6,7 +6,8 @@
 import { execFile, spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { createWriteStream } from 'node:fs';
-import { mkdir, mkdtemp, readFile, realpath, rename, writeFile } from 'node:fs/promises';
+import { mkdtemp, readFile, realpath, rename, writeFile } from 'node:fs/promises';
+import { makeDirectory } from '../results/cache.js';
 import { tmpdir } from 'node:os';
 import { pipeline } from 'node:stream/promises';
 import path from 'node:path';
@@ -129,7 +130,7 @@ async function readBaseMemo(cacheDir: string, settingsId: string, key: string): 
 /** Stores the memo of a judged commit: a push to the default branch writes it, and pull requests against that commit read it. */
 export async function writeBaseMemo(cacheDir: string, settingsId: string, key: string, report: Report, corpus: CorpusResult): Promise<void> {
   const memo: BaseMemo = { report, docs: Object.fromEntries(corpus.shards.map((s) => [s.path, s.read.docs])) };
-  await mkdir(cacheDir, { recursive: true });
+  await makeDirectory(cacheDir);
   const file = path.join(cacheDir, `${settingsId}-${key}.json`);
   await writeFile(`${file}.tmp`, JSON.stringify(memo));
   await rename(`${file}.tmp`, file);

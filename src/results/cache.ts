@@ -2,8 +2,8 @@
 // identity of the measurement settings, so a changed policy or tokenizer never
 // reuses a stale result, and an unchanged shard is never measured twice.
 import { createHash } from 'node:crypto';
-import { mkdir, readFile, rename, writeFile } from 'node:fs/promises';
-import { join } from 'node:path';
+import { mkdir, readFile, rename, stat, writeFile } from 'node:fs/promises';
+import { dirname, join } from 'node:path';
 import { inspectIndex } from '../measure/duplicates/index.js';
 import { shardResultFromStored, storedResultProblem, storedShardResult } from './serialize.js';
 import type { ShardResult } from './types.js';
@@ -21,6 +21,28 @@ export function canonicalJson(value: unknown): string {
     }
     return v;
   });
+}
+
+/**
+ * Makes a directory and any missing parents, one level at a time. `mkdir` with `recursive` never
+ * settles on a path whose parent exists but refuses it with ENOENT (a path under /proc: Node 20
+ * retries it forever); here the second refusal is thrown.
+ */
+export async function makeDirectory(dir: string): Promise<void> {
+  try {
+    await mkdir(dir);
+    return;
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    if (code === 'EEXIST' && (await stat(dir)).isDirectory()) return;
+    if (code !== 'ENOENT' || dirname(dir) === dir) throw error;
+  }
+  await makeDirectory(dirname(dir));
+  try {
+    await mkdir(dir);
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code !== 'EEXIST' || !(await stat(dir)).isDirectory()) throw error;
+  }
 }
 
 /** A directory of cached shard results. */
@@ -68,7 +90,7 @@ export class ResultCache {
   /** Stores a result; broken shards are never cached, so they are read again next time. */
   async put(result: ShardResult): Promise<void> {
     if (result.read.broken) return;
-    await mkdir(this.dir, { recursive: true });
+    await makeDirectory(this.dir);
     const target = this.file(result.contentId, result.settingsId);
     const tmp = `${target}.${process.pid}.tmp`;
     await writeFile(tmp, JSON.stringify(storedShardResult(result)));

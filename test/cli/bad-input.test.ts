@@ -312,6 +312,15 @@ describe('output and cache paths', () => {
     expect(r.report!.input.docs).toBe(6);
   });
 
+  it('a cache directory that cannot be made under /proc is said once, instead of the run hanging', () => {
+    // Node 20's recursive mkdir retries such a path forever (its parent exists, and refuses it with ENOENT).
+    const root = corpus({ 'p.yaml': policyYaml(), 'data/a.jsonl': lines(3, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml'), '--cache-dir', '/proc/sluice-cache-test'], { json: true });
+    expect(r.status).toBe(0);
+    expect(r.stderr).toContain('cannot write the cache in /proc/sluice-cache-test');
+    expect(r.report!.input.docs).toBe(3);
+  });
+
   it('two policies of one name get a report file each', () => {
     const root = corpus({ 'p.yaml': policyYaml(), 'q.yaml': policyYaml(), 'data/a.jsonl': lines(3, ENGLISH) });
     const r = sluice(['check', join(root, 'p.yaml'), join(root, 'q.yaml'), '--json', join(root, 'r.json')]);
