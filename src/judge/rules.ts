@@ -137,22 +137,22 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
       broken,
     ),
   );
+  const rejectedAt = (): Location[] =>
+    corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
   // A corpus with no document has nothing for the other rules to judge: their passing would say nothing.
   if (corpus.tally.input.docs === 0) {
     const { lines } = corpus.tally.input;
-    const locs = corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
     out.push(
       outcome(policy, 'input', 'corpus', 0, null, 'count', true,
-        lines === 0 ? 'no documents: the shards hold no lines' : `no documents: all ${plural(lines, 'line', 'lines')} read are empty or rejected`, locs),
+        lines === 0 ? 'no documents: the shards hold no lines' : `no documents: all ${plural(lines, 'line', 'lines')} read are empty or rejected`, rejectedAt()),
     );
   }
   if (rules.input.maxRejected !== undefined) {
     const { lines, rejected } = corpus.tally.input;
     const share = ratio(rejected, lines) ?? 0;
-    const locs = corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
     out.push(
       outcome(policy, 'input', 'corpus', share, rules.input.maxRejected, 'share', share > rules.input.maxRejected,
-        `${rejected} of ${lines} lines rejected (${pct(share)}; limit ${pct(rules.input.maxRejected)})`, locs),
+        `${rejected} of ${lines} lines rejected (${pct(share)}; limit ${pct(rules.input.maxRejected)})`, rejectedAt()),
     );
   }
 
