@@ -5,7 +5,7 @@ import { createHash } from 'node:crypto';
 import { mkdir, readFile, rename, stat, writeFile } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import { inspectIndex } from '../measure/duplicates/index.js';
-import { shardResultFromStored, storedResultProblem, storedShardResult } from './serialize.js';
+import { shardResultFromStored, storedShardResult } from './serialize.js';
 import type { ShardResult } from './types.js';
 
 /** Returns a stable id for a JSON-able settings object (sha256 of its canonical JSON, 16 hex digits). */
@@ -62,9 +62,9 @@ export class ResultCache {
   /** Returns the cached result for this content under these settings, or undefined. */
   async get(contentId: string, settingsId: string, at: { path: string; subset?: string; encoding: string; format: string }): Promise<ShardResult | undefined> {
     try {
-      const stored: unknown = JSON.parse(await readFile(this.file(contentId, settingsId), 'utf8'));
-      // An entry cut short or edited by hand is measured again rather than summed.
-      const r = storedResultProblem(stored) === null ? shardResultFromStored(stored) : undefined;
+      const stored = shardResultFromStored(JSON.parse(await readFile(this.file(contentId, settingsId), 'utf8')));
+      // An entry of another schema, or cut short or edited by hand, is measured again rather than summed.
+      const r = 'result' in stored ? stored.result : undefined;
       // The same bytes decoded with another encoding or format are another result.
       if (!r || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at.encoding || r.format !== at.format) {
         this.misses += 1;

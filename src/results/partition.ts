@@ -3,8 +3,8 @@
 // carry the settings id so that parts measured under other settings never mix.
 import { createHash } from 'node:crypto';
 import type { SkippedFile } from '../read/types.js';
-import { shardResultFromStored, storedResultProblem, storedShardResult } from './serialize.js';
-import { RESULT_SCHEMA, type ShardResult } from './types.js';
+import { shardResultFromStored, storedShardResult } from './serialize.js';
+import type { ShardResult } from './types.js';
 
 export const PARTIAL_FORMAT = 'sluice-partial';
 export const PARTIAL_VERSION = 1;
@@ -44,12 +44,13 @@ export function partialFromJson(text: string): { ok: true; partial: Partial } | 
   if (v.version !== PARTIAL_VERSION) return { ok: false, reason: `partial format version ${String(v.version)}, this sluice reads ${PARTIAL_VERSION}` };
   const results: ShardResult[] = [];
   for (const r of (v.results as unknown[]) ?? []) {
-    const problem = storedResultProblem(r);
-    const where = typeof (r as { path?: unknown })?.path === 'string' ? `the result of ${(r as { path: string }).path}` : `shard result ${results.length + 1}`;
-    if (problem !== null && (r as { schema?: unknown })?.schema === RESULT_SCHEMA) return { ok: false, reason: `${where} is damaged: ${problem}` };
     const parsed = shardResultFromStored(r);
-    if (!parsed) return { ok: false, reason: 'holds a shard result of another result schema (written by another sluice version)' };
-    results.push(parsed);
+    if ('otherSchema' in parsed) return { ok: false, reason: 'holds a shard result of another result schema (written by another sluice version)' };
+    if ('damaged' in parsed) {
+      const where = typeof (r as { path?: unknown }).path === 'string' ? `the result of ${(r as { path: string }).path}` : `shard result ${results.length + 1}`;
+      return { ok: false, reason: `${where} is damaged: ${parsed.damaged}` };
+    }
+    results.push(parsed.result);
   }
   return { ok: true, partial: { ...(v as unknown as Partial), results } };
 }

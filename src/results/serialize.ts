@@ -19,7 +19,7 @@ const isMap = (x: unknown): x is Record<string, unknown> => typeof x === 'object
  * (cache entries, other runners' partial results) that may have been cut short or edited; one
  * that fails this is measured again or refused, never summed into a report.
  */
-export function storedResultProblem(value: unknown): string | null {
+function storedResultProblem(value: unknown): string | null {
   if (!isMap(value)) return 'not an object';
   for (const key of ['path', 'contentId', 'settingsId', 'format', 'compression', 'encoding'] as const) {
     if (typeof value[key] !== 'string') return `\`${key}\` is missing or not a string`;
@@ -50,10 +50,11 @@ export function storedResultProblem(value: unknown): string | null {
   return null;
 }
 
-/** Returns a shard result from its stored form, or undefined when it was stored by another result schema (check storedResultProblem first). */
-export function shardResultFromStored(value: unknown): ShardResult | undefined {
-  const v = value as StoredShardResult | null;
-  if (!v || typeof v !== 'object' || v.schema !== RESULT_SCHEMA) return undefined;
-  const { duplicateIndex, ...rest } = v;
-  return duplicateIndex ? { ...rest, duplicateIndex: new Uint8Array(Buffer.from(duplicateIndex, 'base64')) } : rest;
+/** Returns a shard result from its stored form; `otherSchema` when another result schema stored it, `damaged` (why) when it is of this schema but fails storedResultProblem. */
+export function shardResultFromStored(value: unknown): { result: ShardResult } | { otherSchema: true } | { damaged: string } {
+  if ((value as { schema?: unknown } | null)?.schema !== RESULT_SCHEMA) return { otherSchema: true };
+  const problem = storedResultProblem(value);
+  if (problem !== null) return { damaged: problem };
+  const { duplicateIndex, ...rest } = value as StoredShardResult;
+  return { result: duplicateIndex ? { ...rest, duplicateIndex: new Uint8Array(Buffer.from(duplicateIndex, 'base64')) } : rest };
 }
