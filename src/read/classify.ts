@@ -46,8 +46,6 @@ export function shardKindOf(filePath: string): ShardKind | { unsupported: string
   return format !== undefined ? { format, compression: 'none' } : { unsupported: last === '' ? '' : `.${last}` };
 }
 
-// Re-exported for the read stage's callers; the policy stage refuses such encodings first, with their position.
-export { isLineSplittableEncoding };
 
 /** Returns a function that extracts the subset segment from a path, or undefined when the path does not match; throws when the pattern has not exactly one `{subset}`. */
 export function subsetExtractor(pattern: string): (filePath: string) => string | undefined {
