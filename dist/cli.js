@@ -22772,9 +22772,9 @@ function judgeRules(policy, corpus, langs, sampled) {
       broken
     )
   );
+  const rejectedAt = () => corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
   if (corpus.tally.input.docs === 0) {
     const { lines } = corpus.tally.input;
-    const locs = corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
     out.push(
       outcome(
         policy,
@@ -22785,14 +22785,13 @@ function judgeRules(policy, corpus, langs, sampled) {
         "count",
         true,
         lines === 0 ? "no documents: the shards hold no lines" : `no documents: all ${plural(lines, "line", "lines")} read are empty or rejected`,
-        locs
+        rejectedAt()
       )
     );
   }
   if (rules.input.maxRejected !== void 0) {
     const { lines, rejected } = corpus.tally.input;
     const share = ratio(rejected, lines) ?? 0;
-    const locs = corpus.shards.flatMap((s) => s.read.rejected.samples.map((r) => ({ path: s.path, line: r.line, detail: `${r.reason}: ${r.detail}` })));
     out.push(
       outcome(
         policy,
@@ -22803,7 +22802,7 @@ function judgeRules(policy, corpus, langs, sampled) {
         "share",
         share > rules.input.maxRejected,
         `${rejected} of ${lines} lines rejected (${pct(share)}; limit ${pct(rules.input.maxRejected)})`,
-        locs
+        rejectedAt()
       )
     );
   }
@@ -31413,10 +31412,11 @@ function storedResultProblem(value) {
   return null;
 }
 function shardResultFromStored(value) {
-  const v = value;
-  if (!v || typeof v !== "object" || v.schema !== RESULT_SCHEMA) return void 0;
-  const { duplicateIndex, ...rest } = v;
-  return duplicateIndex ? { ...rest, duplicateIndex: new Uint8Array(Buffer.from(duplicateIndex, "base64")) } : rest;
+  if (value?.schema !== RESULT_SCHEMA) return { otherSchema: true };
+  const problem = storedResultProblem(value);
+  if (problem !== null) return { damaged: problem };
+  const { duplicateIndex, ...rest } = value;
+  return { result: duplicateIndex ? { ...rest, duplicateIndex: new Uint8Array(Buffer.from(duplicateIndex, "base64")) } : rest };
 }
 
 // src/results/cache.ts
@@ -31463,8 +31463,8 @@ var ResultCache = class {
   /** Returns the cached result for this content under these settings, or undefined. */
   async get(contentId, settingsId, at) {
     try {
-      const stored = JSON.parse(await readFile2(this.file(contentId, settingsId), "utf8"));
-      const r = storedResultProblem(stored) === null ? shardResultFromStored(stored) : void 0;
+      const stored = shardResultFromStored(JSON.parse(await readFile2(this.file(contentId, settingsId), "utf8")));
+      const r = "result" in stored ? stored.result : void 0;
       if (!r || r.contentId !== contentId || r.settingsId !== settingsId || r.encoding !== at.encoding || r.format !== at.format) {
         this.misses += 1;
         return void 0;
@@ -42665,6 +42665,14 @@ async function measureShards(policy, shards, prepared, opts, started = performan
   }
   return { results, cached };
 }
+function repeatSuffixes(names) {
+  const seen = /* @__PURE__ */ new Map();
+  return names.map((name) => {
+    const n = (seen.get(name) ?? 0) + 1;
+    seen.set(name, n);
+    return n === 1 ? "" : `-${n}`;
+  });
+}
 async function runCheck(opts) {
   const reports = [];
   for (const file of opts.policies) {
@@ -42700,12 +42708,13 @@ function partialFromJson(text) {
   if (v.version !== PARTIAL_VERSION) return { ok: false, reason: `partial format version ${String(v.version)}, this sluice reads ${PARTIAL_VERSION}` };
   const results = [];
   for (const r of v.results ?? []) {
-    const problem = storedResultProblem(r);
-    const where2 = typeof r?.path === "string" ? `the result of ${r.path}` : `shard result ${results.length + 1}`;
-    if (problem !== null && r?.schema === RESULT_SCHEMA) return { ok: false, reason: `${where2} is damaged: ${problem}` };
     const parsed = shardResultFromStored(r);
-    if (!parsed) return { ok: false, reason: "holds a shard result of another result schema (written by another sluice version)" };
-    results.push(parsed);
+    if ("otherSchema" in parsed) return { ok: false, reason: "holds a shard result of another result schema (written by another sluice version)" };
+    if ("damaged" in parsed) {
+      const where2 = typeof r.path === "string" ? `the result of ${r.path}` : `shard result ${results.length + 1}`;
+      return { ok: false, reason: `${where2} is damaged: ${parsed.damaged}` };
+    }
+    results.push(parsed.result);
   }
   return { ok: true, partial: { ...v, results } };
 }
@@ -43341,12 +43350,8 @@ async function emit(reports, opts) {
 ` : renderTerminal(report, { color: opts.color }));
   }
   const single = reports.length === 1;
-  const seen = /* @__PURE__ */ new Map();
-  const names = reports.map((r) => {
-    const n = (seen.get(r.policy.name) ?? 0) + 1;
-    seen.set(r.policy.name, n);
-    return n === 1 ? r.policy.name : `${r.policy.name}-${n}`;
-  });
+  const suffixes = repeatSuffixes(reports.map((r) => r.policy.name));
+  const names = reports.map((r, i) => `${r.policy.name}${suffixes[i]}`);
   const suffixed = (file, name) => single ? file : file.replace(/(\.[^./]+)?$/, (ext) => `.${name}${ext}`);
   for (const [i, report] of reports.entries()) {
     if (opts.json) await writeOutput("--json", suffixed(opts.json, names[i]), renderJson(report));

@@ -5,7 +5,7 @@ import { createHash } from 'node:crypto';
 import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { ConfigError, loadPolicyOrThrow, measureCorpus, type CheckOptions } from '../core/check.js';
+import { ConfigError, loadPolicyOrThrow, measureCorpus, repeatSuffixes, type CheckOptions } from '../core/check.js';
 import { maxWorkers } from '../core/pool.js';
 import { baseMemoKey, compareWithBase, git, gitTopLevel, resolveCommit, rootInRepo, workingTreeKeys, writeBaseMemo, type Comparison } from '../core/compare.js';
 import { buildReport } from '../judge/report.js';
@@ -114,12 +114,8 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
   const judged: Judged[] = [];
   await makeDirectory(s.reportDir);
   // One file stem per policy; two policies with one name get -2, -3, ...
-  const seen = new Map<string, number>();
-  const stems = policies.map((p) => {
-    const n = (seen.get(p.name) ?? 0) + 1;
-    seen.set(p.name, n);
-    return path.join(s.reportDir, `${fileNameOf(p.name)}${n > 1 ? `-${n}` : ''}`);
-  });
+  const suffixes = repeatSuffixes(policies.map((p) => p.name));
+  const stems = policies.map((p, i) => path.join(s.reportDir, `${fileNameOf(p.name)}${suffixes[i]}`));
   for (const [i, policy] of policies.entries()) {
     const stem = stems[i]!;
     judged.push(

@@ -2,7 +2,7 @@
 import { statSync } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { ConfigError, runCheck, type Progress } from '../core/check.js';
+import { ConfigError, repeatSuffixes, runCheck, type Progress } from '../core/check.js';
 import { mergePartials, scanPartition } from '../core/partition.js';
 import { maxWorkers, ShardFailure } from '../core/pool.js';
 import { isShardWorker, runShardWorker } from '../core/worker.js';
@@ -65,12 +65,8 @@ async function emit(reports: Report[], opts: Pick<CheckCliOptions, 'quiet' | 'co
   }
   const single = reports.length === 1;
   // One file per policy, named by the policy's name; two policies of one name get -2, -3, ... rather than one file.
-  const seen = new Map<string, number>();
-  const names = reports.map((r) => {
-    const n = (seen.get(r.policy.name) ?? 0) + 1;
-    seen.set(r.policy.name, n);
-    return n === 1 ? r.policy.name : `${r.policy.name}-${n}`;
-  });
+  const suffixes = repeatSuffixes(reports.map((r) => r.policy.name));
+  const names = reports.map((r, i) => `${r.policy.name}${suffixes[i]}`);
   const suffixed = (file: string, name: string): string => (single ? file : file.replace(/(\.[^./]+)?$/, (ext) => `.${name}${ext}`));
   for (const [i, report] of reports.entries()) {
     if (opts.json) await writeOutput('--json', suffixed(opts.json, names[i]!), renderJson(report));

@@ -432,6 +432,16 @@ export async function measureShards(
 }
 
 /** Returns one report per policy file. */
+/** Returns, per name, the suffix that keeps its output file apart from earlier ones of the same name: '' the first time, then -2, -3, ... */
+export function repeatSuffixes(names: readonly string[]): string[] {
+  const seen = new Map<string, number>();
+  return names.map((name) => {
+    const n = (seen.get(name) ?? 0) + 1;
+    seen.set(name, n);
+    return n === 1 ? '' : `-${n}`;
+  });
+}
+
 export async function runCheck(opts: CheckOptions): Promise<Report[]> {
   const reports: Report[] = [];
   for (const file of opts.policies) {
