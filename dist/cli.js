@@ -22706,6 +22706,9 @@ function outcome(policy, rule, scope, measured, limit, unit, failed, message, lo
   const verdict = !failed ? "pass" : severity === "error" ? "fail" : "warn";
   return { rule, scope, measured, limit, unit, severity, verdict, message, locations: locations.slice(0, LOCATIONS_PER_RULE) };
 }
+function unjudged(policy, rule, scope, limit, unit, message) {
+  return { ...outcome(policy, rule, scope, null, limit, unit, false, message), verdict: "unjudged" };
+}
 function onSample(policy, o, sampled, strata, method, bounds, offset = 0) {
   const iv = intervalOf(ratioEstimate(strata), method, offset);
   if (!iv) return o;
@@ -22849,7 +22852,10 @@ function judgeRules(policy, corpus, langs, sampled) {
     const { minPurity, maxImpureDocs } = rules.script;
     for (const spec of policy.languages) {
       const f = langs[spec.key];
-      if (!f || f.purityDocs === 0) continue;
+      if (!f || f.purityDocs === 0) {
+        out.push(unjudged(policy, "script", `language:${spec.key}`, maxImpureDocs, "share", `not judged: ${noneOf(spec.key, f?.docs ?? 0, "letters", sampled !== void 0)}`));
+        continue;
+      }
       const impure = f.impureDocs ?? 0;
       const share = ratio(impure, f.purityDocs) ?? 0;
       const locs = corpus.shards.flatMap(
@@ -22899,8 +22905,16 @@ function judgeRules(policy, corpus, langs, sampled) {
     for (const spec of policy.languages) {
       const f = langs[spec.key];
       const main2 = f?.fertility;
-      if (!main2 || main2.fertility === null) continue;
       const max = fr.max[spec.key];
+      const maxCont = fr.maxContinued[spec.key];
+      if (!main2 || main2.fertility === null) {
+        const why = `not judged: ${noneOf(spec.key, f?.docs ?? 0, "words", sampled !== void 0)}`;
+        const scope = `language:${spec.key}`;
+        if (max !== void 0) out.push(unjudged(policy, "fertility", scope, max, "ratio", why));
+        if (maxCont !== void 0) out.push(unjudged(policy, "fertility", scope, maxCont, "share", why));
+        if (fr.maxRegression !== void 0 && policy.baseline) out.push(unjudged(policy, "fertility", scope, fr.maxRegression, "share", why));
+        continue;
+      }
       if (max !== void 0) {
         const o = outcome(
           policy,
@@ -22915,7 +22929,6 @@ function judgeRules(policy, corpus, langs, sampled) {
         if (sampled) onSample(policy, o, sampled, sampled.perWord(spec.key, "fertility"), "linearized-normal", { high: max });
         out.push(o);
       }
-      const maxCont = fr.maxContinued[spec.key];
       if (maxCont !== void 0 && main2.continuedWords !== null) {
         const o = outcome(
           policy,
@@ -22996,6 +23009,10 @@ function judgeRules(policy, corpus, langs, sampled) {
     ));
   }
   return out;
+}
+function noneOf(key, docs, what, sampled) {
+  const where2 = sampled ? " in the sample" : "";
+  return docs === 0 ? `no ${key} documents${where2}` : `none of the ${sampled ? `\u2248${Math.round(docs)}` : docs} ${key} documents${where2} has ${what}`;
 }
 function overallVerdict(outcomes) {
   if (outcomes.some((o) => o.verdict === "fail")) return "fail";
@@ -23244,14 +23261,20 @@ function headlineOf(verdict, rules) {
   const failing = rules.filter((r) => r.verdict === "fail");
   const warning = rules.filter((r) => r.verdict === "warn");
   const uncertain = rules.filter((r) => r.verdict === "uncertain");
+  const unjudged2 = rules.filter((r) => r.verdict === "unjudged");
+  const judged = rules.length - unjudged2.length;
   const names = (list) => [...new Set(list.map((r) => r.scope === "corpus" ? r.rule : `${r.rule} (${r.scope.replace(/^language:/, "")})`))].join(", ");
-  const unsure = uncertain.length ? `${uncertain.length} rule${uncertain.length === 1 ? "" : "s"} uncertain on the sample (a larger sample settles ${uncertain.length === 1 ? "it" : "them"}): ${names(uncertain)}` : "";
-  if (verdict === "fail") return `FAIL: ${failing.length} check${failing.length === 1 ? "" : "s"} at error severity failed: ${names(failing)}${unsure ? `; ${unsure}` : ""}`;
+  const notes = [
+    ...uncertain.length ? [`${uncertain.length} rule${uncertain.length === 1 ? "" : "s"} uncertain on the sample (a larger sample settles ${uncertain.length === 1 ? "it" : "them"}): ${names(uncertain)}`] : [],
+    ...unjudged2.length ? [`${unjudged2.length} check${unjudged2.length === 1 ? "" : "s"} not judged, with nothing to measure: ${names(unjudged2)}`] : []
+  ];
+  const after = notes.map((n) => `; ${n}`).join("");
+  if (verdict === "fail") return `FAIL: ${failing.length} check${failing.length === 1 ? "" : "s"} at error severity failed: ${names(failing)}${after}`;
   if (verdict === "warn") {
-    if (warning.length === 0) return `PASS with warnings: ${unsure}`;
-    return `PASS with warnings: ${names(warning)}${unsure ? `; ${unsure}` : ""}`;
+    if (warning.length === 0) return `PASS with warnings: ${notes.join("; ")}`;
+    return `PASS with warnings: ${names(warning)}${after}`;
   }
-  return rules.length === 1 ? "PASS: the one judged check holds" : `PASS: all ${rules.length} judged checks hold`;
+  return `${judged === 1 ? "PASS: the one judged check holds" : `PASS: all ${judged} judged checks hold`}${after}`;
 }
 
 // src/policy/load.ts
@@ -42936,7 +42959,7 @@ function firstRejections(report, limit) {
 }
 
 // src/render/markdown.ts
-var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\u2754" };
+var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\u2754", unjudged: "\u26AA" };
 var MAX_REJECTIONS_LISTED = 10;
 function renderMarkdown(report, opts = {}) {
   const out = [];
@@ -42964,13 +42987,13 @@ function renderMarkdown(report, opts = {}) {
     for (const [m, text] of Object.entries(s.methods)) out.push(`- \`${m}\`: ${escapeMarkdown(text)}`);
     out.push("");
   }
-  const notPassing = report.rules.filter((r) => r.verdict !== "pass");
-  const ordered = [...notPassing, ...report.rules.filter((r) => r.verdict === "pass")];
+  const notPassing = report.rules.filter((r) => r.verdict !== "pass" && r.verdict !== "unjudged");
+  const ordered = [...notPassing, ...report.rules.filter((r) => r.verdict === "unjudged"), ...report.rules.filter((r) => r.verdict === "pass")];
   const withCi = report.sampling !== void 0;
   out.push(`| | rule | scope | measured |${withCi ? " 95 % interval |" : ""} limit | finding |`);
   out.push(`|---|---|---|---:|${withCi ? "---:|" : ""}---:|---|`);
   for (const r of ordered) {
-    const ci = withCi ? ` ${r.interval ? `${inUnit(r.interval.low, r.unit)} \u2013 ${inUnit(r.interval.high, r.unit)}` : "exact"} |` : "";
+    const ci = withCi ? ` ${r.interval ? `${inUnit(r.interval.low, r.unit)} \u2013 ${inUnit(r.interval.high, r.unit)}` : r.measured === null ? "\u2013" : "exact"} |` : "";
     out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === "warn" ? " (warn)" : ""} | ${escapeMarkdown(r.scope.replace(/^language:/, ""))} | ${inUnit(r.measured, r.unit)} |${ci} ${limitOf(r)} | ${escapeMarkdown(r.message)} |`);
   }
   out.push("");
@@ -43084,8 +43107,8 @@ function renderMarkdown(report, opts = {}) {
 function renderTerminal(report, opts) {
   const c = (code) => (s) => opts.color ? `\x1B[${code}m${s}\x1B[0m` : s;
   const red = c(31), green = c(32), yellow = c(33), dim = c(2), bold = c(1);
-  const paint = { pass: green, warn: yellow, fail: red, uncertain: yellow };
-  const mark = { pass: "ok  ", warn: "WARN", fail: "FAIL", uncertain: "??  " };
+  const paint = { pass: green, warn: yellow, fail: red, uncertain: yellow, unjudged: dim };
+  const mark = { pass: "ok  ", warn: "WARN", fail: "FAIL", uncertain: "??  ", unjudged: "--  " };
   const est = report.totals.estimated ? "\u2248" : "";
   const lines = [];
   lines.push(`${bold(`sluice \xB7 ${clean2(report.policy.name)}`)}  ${paint[report.verdict](bold(report.verdict.toUpperCase()))}`);
@@ -43173,7 +43196,7 @@ function renderTerminal(report, opts) {
 }
 var MAX_REJECTIONS_SHOWN = 3;
 function rank(r) {
-  return r.verdict === "fail" ? 0 : r.verdict === "warn" ? 1 : r.verdict === "uncertain" ? 2 : 3;
+  return r.verdict === "fail" ? 0 : r.verdict === "warn" ? 1 : r.verdict === "uncertain" ? 2 : r.verdict === "unjudged" ? 3 : 4;
 }
 function samplingLine(report) {
   const s = report.sampling;

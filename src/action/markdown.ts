@@ -20,7 +20,7 @@ const MAX_CHANGE_ROWS = 50;
 /** Width of the mix bars, in cells: two fit side by side in a comment column. */
 const BAR_CELLS = 12;
 
-const ICON: Record<RuleVerdict | 'none', string> = { pass: '✅', warn: '⚠️', fail: '❌', uncertain: '❔', none: '➖' };
+const ICON: Record<RuleVerdict | 'none', string> = { pass: '✅', warn: '⚠️', fail: '❌', uncertain: '❔', unjudged: '⚪', none: '➖' };
 
 /** Returns the hidden line that identifies the comment of one policy, so later runs edit it instead of adding another. */
 export function commentMarker(policyName: string): string {

@@ -344,7 +344,7 @@ export function compareReports(base: Report | null, head: Report, commit: string
   const id = (r: { rule: string; scope: string }): string => `${r.rule}\u0000${r.scope}`;
   const baseRules = new Map<string, RuleVerdict>();
   // A rule may have several outcomes per scope (input: broken and rejected); the worst stands for the pair.
-  const RANK: Record<RuleVerdict, number> = { pass: 0, uncertain: 1, warn: 2, fail: 3 };
+  const RANK: Record<RuleVerdict, number> = { pass: 0, unjudged: 1, uncertain: 2, warn: 3, fail: 4 };
   const worst = (a: RuleVerdict | undefined, b: RuleVerdict): RuleVerdict => (a !== undefined && RANK[a] > RANK[b] ? a : b);
   for (const r of base?.rules ?? []) baseRules.set(id(r), worst(baseRules.get(id(r)), r.verdict));
   const headRules = new Map<string, { verdict: RuleVerdict; message: string; rule: string; scope: string }>();

@@ -268,15 +268,19 @@ function headlineOf(verdict: Report['verdict'], rules: Report['rules']): string 
   const failing = rules.filter((r) => r.verdict === 'fail');
   const warning = rules.filter((r) => r.verdict === 'warn');
   const uncertain = rules.filter((r) => r.verdict === 'uncertain');
+  const unjudged = rules.filter((r) => r.verdict === 'unjudged');
+  const judged = rules.length - unjudged.length;
   const names = (list: typeof rules): string => [...new Set(list.map((r) => (r.scope === 'corpus' ? r.rule : `${r.rule} (${r.scope.replace(/^language:/, '')})`)))].join(', ');
-  // Only a sample has uncertain rules; without one the headline reads as it always has.
-  const unsure = uncertain.length
-    ? `${uncertain.length} rule${uncertain.length === 1 ? '' : 's'} uncertain on the sample (a larger sample settles ${uncertain.length === 1 ? 'it' : 'them'}): ${names(uncertain)}`
-    : '';
-  if (verdict === 'fail') return `FAIL: ${failing.length} check${failing.length === 1 ? '' : 's'} at error severity failed: ${names(failing)}${unsure ? `; ${unsure}` : ''}`;
+  // Only a sample has uncertain rules, and only a listed language without documents (or without letters or words) unjudged ones; without either the headline reads as it always has.
+  const notes = [
+    ...(uncertain.length ? [`${uncertain.length} rule${uncertain.length === 1 ? '' : 's'} uncertain on the sample (a larger sample settles ${uncertain.length === 1 ? 'it' : 'them'}): ${names(uncertain)}`] : []),
+    ...(unjudged.length ? [`${unjudged.length} check${unjudged.length === 1 ? '' : 's'} not judged, with nothing to measure: ${names(unjudged)}`] : []),
+  ];
+  const after = notes.map((n) => `; ${n}`).join('');
+  if (verdict === 'fail') return `FAIL: ${failing.length} check${failing.length === 1 ? '' : 's'} at error severity failed: ${names(failing)}${after}`;
   if (verdict === 'warn') {
-    if (warning.length === 0) return `PASS with warnings: ${unsure}`;
-    return `PASS with warnings: ${names(warning)}${unsure ? `; ${unsure}` : ''}`;
+    if (warning.length === 0) return `PASS with warnings: ${notes.join('; ')}`;
+    return `PASS with warnings: ${names(warning)}${after}`;
   }
-  return rules.length === 1 ? 'PASS: the one judged check holds' : `PASS: all ${rules.length} judged checks hold`;
+  return `${judged === 1 ? 'PASS: the one judged check holds' : `PASS: all ${judged} judged checks hold`}${after}`;
 }

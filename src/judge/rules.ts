@@ -40,6 +40,11 @@ function outcome(
   return { rule, scope, measured, limit, unit, severity, verdict, message, locations: locations.slice(0, LOCATIONS_PER_RULE) };
 }
 
+/** Returns the outcome of a check with nothing to work its figure out from: listed in the report, judged neither way. */
+function unjudged(policy: Policy, rule: RuleName, scope: string, limit: number | null, unit: RuleOutcome['unit'], message: string): RuleOutcome {
+  return { ...outcome(policy, rule, scope, null, limit, unit, false, message), verdict: 'unjudged' };
+}
+
 /**
  * Judges an outcome on a sample: sets its interval and, from where the interval lies against the
  * bounds, its verdict (failing only when the whole interval is past the limit) and, when it
@@ -186,7 +191,10 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
     const { minPurity, maxImpureDocs } = rules.script;
     for (const spec of policy.languages) {
       const f = langs[spec.key];
-      if (!f || f.purityDocs === 0) continue;
+      if (!f || f.purityDocs === 0) {
+        out.push(unjudged(policy, 'script', `language:${spec.key}`, maxImpureDocs, 'share', `not judged: ${noneOf(spec.key, f?.docs ?? 0, 'letters', sampled !== undefined)}`));
+        continue;
+      }
       const impure = f.impureDocs ?? 0;
       const share = ratio(impure, f.purityDocs) ?? 0;
       const locs = corpus.shards.flatMap((s) =>
@@ -220,15 +228,23 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
     for (const spec of policy.languages) {
       const f = langs[spec.key];
       const main = f?.fertility;
-      if (!main || main.fertility === null) continue;
       const max = fr.max[spec.key];
+      const maxCont = fr.maxContinued[spec.key];
+      if (!main || main.fertility === null) {
+        const why = `not judged: ${noneOf(spec.key, f?.docs ?? 0, 'words', sampled !== undefined)}`;
+        const scope = `language:${spec.key}`;
+        if (max !== undefined) out.push(unjudged(policy, 'fertility', scope, max, 'ratio', why));
+        if (maxCont !== undefined) out.push(unjudged(policy, 'fertility', scope, maxCont, 'share', why));
+        // Against a baseline only: without one (no `baseline`, no change to the tokenizer file) there is no rise to judge.
+        if (fr.maxRegression !== undefined && policy.baseline) out.push(unjudged(policy, 'fertility', scope, fr.maxRegression, 'share', why));
+        continue;
+      }
       if (max !== undefined) {
         const o = outcome(policy, 'fertility', `language:${spec.key}`, main.fertility, max, 'ratio', main.fertility > max,
           `${spec.key}: ${main.fertility.toFixed(3)} tokens per word under ${main.tokenizer} (limit ${max})`);
         if (sampled) onSample(policy, o, sampled, sampled.perWord(spec.key, 'fertility'), 'linearized-normal', { high: max });
         out.push(o);
       }
-      const maxCont = fr.maxContinued[spec.key];
       if (maxCont !== undefined && main.continuedWords !== null) {
         const o = outcome(policy, 'fertility', `language:${spec.key}`, main.continuedWords, maxCont, 'share', main.continuedWords > maxCont,
           `${spec.key}: ${pct(main.continuedWords)} of words split into 2+ tokens under ${main.tokenizer} (limit ${pct(maxCont)})`);
@@ -272,7 +288,13 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
   return out;
 }
 
-/** Returns the overall verdict: fail if any error-severity rule failed, warn if any warn-severity rule did or any rule is uncertain on a sample (neither blocks the merge). */
+// Says why a language's figure cannot be worked out: no documents at all, or none with what the figure is over.
+function noneOf(key: string, docs: number, what: 'letters' | 'words', sampled: boolean): string {
+  const where = sampled ? ' in the sample' : '';
+  return docs === 0 ? `no ${key} documents${where}` : `none of the ${sampled ? `≈${Math.round(docs)}` : docs} ${key} documents${where} has ${what}`;
+}
+
+/** Returns the overall verdict: fail if any error-severity rule failed, warn if any warn-severity rule did or any rule is uncertain on a sample (neither blocks the merge). An unjudged rule leaves the verdict as the others make it; the headline names it. */
 export function overallVerdict(outcomes: readonly RuleOutcome[]): Verdict {
   if (outcomes.some((o) => o.verdict === 'fail')) return 'fail';
   if (outcomes.some((o) => o.verdict === 'warn' || o.verdict === 'uncertain')) return 'warn';

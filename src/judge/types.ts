@@ -8,8 +8,12 @@ export type { Interval, IntervalMethod } from './intervals.js';
 
 export type Verdict = 'pass' | 'warn' | 'fail';
 
-/** A rule's verdict: `uncertain` when, on a sample, the figure's confidence interval straddles the limit (it does not block the merge). */
-export type RuleVerdict = Verdict | 'uncertain';
+/**
+ * A rule's verdict: `uncertain` when, on a sample, the figure's confidence interval straddles the limit;
+ * `unjudged` when there is nothing to work the figure out from (a listed language with no documents,
+ * or none with letters or words). Neither blocks the merge; the headline names both.
+ */
+export type RuleVerdict = Verdict | 'uncertain' | 'unjudged';
 
 /** A sampling setting as the policy spells it, ready to paste. */
 export type SamplingSetting = { 'docs-per-shard': number } | { fraction: number };

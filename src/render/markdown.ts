@@ -14,7 +14,7 @@ export interface MarkdownOptions {
   maxShardRows?: number;
 }
 
-const ICON: Record<RuleOutcome['verdict'], string> = { pass: '✅', warn: '⚠️', fail: '❌', uncertain: '❔' };
+const ICON: Record<RuleOutcome['verdict'], string> = { pass: '✅', warn: '⚠️', fail: '❌', uncertain: '❔', unjudged: '⚪' };
 
 /** Returns the report as GitHub-flavoured Markdown. */
 /** Rejected lines listed in the input section. */
@@ -52,13 +52,14 @@ export function renderMarkdown(report: Report, opts: MarkdownOptions = {}): stri
     out.push('');
   }
 
-  const notPassing = report.rules.filter((r) => r.verdict !== 'pass');
-  const ordered = [...notPassing, ...report.rules.filter((r) => r.verdict === 'pass')];
+  // Findings first, then what could not be judged, then what holds.
+  const notPassing = report.rules.filter((r) => r.verdict !== 'pass' && r.verdict !== 'unjudged');
+  const ordered = [...notPassing, ...report.rules.filter((r) => r.verdict === 'unjudged'), ...report.rules.filter((r) => r.verdict === 'pass')];
   const withCi = report.sampling !== undefined;
   out.push(`| | rule | scope | measured |${withCi ? ' 95 % interval |' : ''} limit | finding |`);
   out.push(`|---|---|---|---:|${withCi ? '---:|' : ''}---:|---|`);
   for (const r of ordered) {
-    const ci = withCi ? ` ${r.interval ? `${inUnit(r.interval.low, r.unit)} – ${inUnit(r.interval.high, r.unit)}` : 'exact'} |` : '';
+    const ci = withCi ? ` ${r.interval ? `${inUnit(r.interval.low, r.unit)} – ${inUnit(r.interval.high, r.unit)}` : r.measured === null ? '–' : 'exact'} |` : '';
     out.push(`| ${ICON[r.verdict]} | ${r.rule}${r.severity === 'warn' ? ' (warn)' : ''} | ${esc(r.scope.replace(/^language:/, ''))} | ${inUnit(r.measured, r.unit)} |${ci} ${limitOf(r)} | ${esc(r.message)} |`);
   }
   out.push('');

@@ -16,8 +16,8 @@ type Paint = (s: string) => string;
 export function renderTerminal(report: Report, opts: TerminalOptions): string {
   const c = (code: number): Paint => (s) => (opts.color ? `\u001b[${code}m${s}\u001b[0m` : s);
   const red = c(31), green = c(32), yellow = c(33), dim = c(2), bold = c(1);
-  const paint: Record<RuleOutcome['verdict'], Paint> = { pass: green, warn: yellow, fail: red, uncertain: yellow };
-  const mark: Record<RuleOutcome['verdict'], string> = { pass: 'ok  ', warn: 'WARN', fail: 'FAIL', uncertain: '??  ' };
+  const paint: Record<RuleOutcome['verdict'], Paint> = { pass: green, warn: yellow, fail: red, uncertain: yellow, unjudged: dim };
+  const mark: Record<RuleOutcome['verdict'], string> = { pass: 'ok  ', warn: 'WARN', fail: 'FAIL', uncertain: '??  ', unjudged: '--  ' };
   const est = report.totals.estimated ? '≈' : '';
   const lines: string[] = [];
 
@@ -123,7 +123,7 @@ export function renderTerminal(report: Report, opts: TerminalOptions): string {
 const MAX_REJECTIONS_SHOWN = 3;
 
 function rank(r: RuleOutcome): number {
-  return r.verdict === 'fail' ? 0 : r.verdict === 'warn' ? 1 : r.verdict === 'uncertain' ? 2 : 3;
+  return r.verdict === 'fail' ? 0 : r.verdict === 'warn' ? 1 : r.verdict === 'uncertain' ? 2 : r.verdict === 'unjudged' ? 3 : 4;
 }
 
 /** Returns the line saying what a sampled report measured and how its intervals are made. */

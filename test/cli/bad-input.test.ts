@@ -6,8 +6,9 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
+import { Ajv2020 } from 'ajv/dist/2020.js';
 import { describe, expect, it } from 'vitest';
-import { corpus, ENGLISH, HINDI, policyYaml, sluice } from './helpers.js';
+import { REPO, corpus, ENGLISH, HINDI, policyYaml, sluice } from './helpers.js';
 
 const lines = (n: number, text: string): string => Array.from({ length: n }, (_, i) => JSON.stringify({ text: `${text} (${i})` })).join('\n') + '\n';
 
@@ -373,5 +374,51 @@ describe('a corpus of one shard and one line', () => {
     expect(r.status).toBe(0);
     expect(r.report?.rules.map((o) => o.rule)).toEqual(['input']);
     expect(r.stdout).toContain('PASS: the one judged check holds');
+  });
+});
+
+describe('a check with nothing to measure is listed as not judged, never left out', () => {
+  // Before, a listed language without documents dropped out of the script and fertility rules:
+  // the headline counted fewer checks and nothing said that two of them had not been judged.
+  const rules = '  script: { min-purity: 0.9, max-impure-docs: 0.02 }\n  fertility: { max: { eng: 2.5, hin: 3.5 } }\ntokenizer: { builtin: o200k_base }\n';
+
+  it('a listed language with no documents: its script and fertility checks are unjudged, and the headline names them', () => {
+    const root = corpus({ 'p.yaml': policyYaml(rules), 'data/a.jsonl': lines(4, ENGLISH) });
+    const md = join(root, 'report.md');
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache', '--no-color', '--markdown', md], { json: true });
+    expect(r.status).toBe(0);
+    const hin = r.report!.rules.filter((o) => o.scope === 'language:hin' && o.rule !== 'mix');
+    expect(hin.map((o) => [o.rule, o.verdict, o.measured])).toEqual([
+      ['script', 'unjudged', null],
+      ['fertility', 'unjudged', null],
+    ]);
+    expect(hin.every((o) => o.message === 'not judged: no hin documents')).toBe(true);
+    // The English checks are judged as before.
+    expect(r.report!.rules.filter((o) => o.scope === 'language:eng').map((o) => o.verdict)).toEqual(['pass', 'pass', 'pass']);
+    const judged = r.report!.rules.length - 2;
+    expect(r.report!.verdict).toBe('pass');
+    expect(r.report!.headline).toBe(`PASS: all ${judged} judged checks hold; 2 checks not judged, with nothing to measure: script (hin), fertility (hin)`);
+    expect(r.stdout).toMatch(/^-- +script +hin +– limit .*not judged: no hin documents$/m);
+    expect(readFileSync(md, 'utf8')).toMatch(/^\| ⚪ \| script \| hin \| – \|.*\| not judged: no hin documents \|$/m);
+    const validate = new Ajv2020({ strict: true, allErrors: true }).compile(JSON.parse(readFileSync(join(REPO, 'schemas/report.schema.json'), 'utf8')));
+    validate(r.report);
+    expect(validate.errors ?? []).toEqual([]);
+  });
+
+  it('on a sample, says the sample holds none of the language', () => {
+    const root = corpus({ 'p.yaml': policyYaml(`${rules}sampling: { docs-per-shard: 2 }\n`), 'data/a.jsonl': lines(6, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache', '--no-color'], { json: true });
+    expect(r.status).toBe(0);
+    expect(r.report!.rules.filter((o) => o.verdict === 'unjudged').map((o) => `${o.rule}: ${o.message}`)).toEqual([
+      'script: not judged: no hin documents in the sample',
+      'fertility: not judged: no hin documents in the sample',
+    ]);
+  });
+
+  it('an unjudged check beside a failing one: the failure decides the verdict, the headline names both', () => {
+    const root = corpus({ 'p.yaml': policyYaml(rules.replace('eng: 2.5', 'eng: 0.5')), 'data/a.jsonl': lines(4, ENGLISH) });
+    const r = sluice(['check', join(root, 'p.yaml'), '--no-cache', '--no-color'], { json: true });
+    expect(r.status).toBe(1);
+    expect(r.report!.headline).toBe('FAIL: 1 check at error severity failed: fertility (eng); 2 checks not judged, with nothing to measure: script (hin), fertility (hin)');
   });
 });
