@@ -26495,14 +26495,49 @@ var languages;
 function isoLanguages() {
   if (languages) return languages;
   const out = [];
-  for (const row of ISO_639_3_ROWS.split("\n")) {
-    const [iso6393, iso6392B, iso6391, scope, name] = row.split("|");
-    const language = { iso6393, scope: SCOPES[scope], name };
-    if (iso6392B) language.iso6392B = iso6392B;
-    if (iso6391) language.iso6391 = iso6391;
-    out.push(language);
-  }
+  for (const row of ISO_639_3_ROWS.split("\n")) out.push(rowOf(row));
   return languages = out;
+}
+function isoLanguageOf(code, part) {
+  if (code.length !== (part === 1 ? 2 : 3) || !/^[a-z]+$/.test(code)) return void 0;
+  const memo = part === 3 ? by3 : part === 1 ? by1 : by2B;
+  const known = memo.get(code);
+  if (known !== void 0 || memo.has(code)) return known;
+  const found = findRow(code, part);
+  memo.set(code, found);
+  return found;
+}
+var by3 = /* @__PURE__ */ new Map();
+var by1 = /* @__PURE__ */ new Map();
+var by2B = /* @__PURE__ */ new Map();
+function findRow(code, part) {
+  const rows = ISO_639_3_ROWS;
+  if (part === 3) {
+    if (rows.startsWith(`${code}|`)) return rowAt(0);
+    const i = rows.indexOf(`
+${code}|`);
+    return i < 0 ? void 0 : rowAt(i + 1);
+  }
+  for (let i = rows.indexOf(`|${code}|`); i >= 0; i = rows.indexOf(`|${code}|`, i + 1)) {
+    const start = rows.lastIndexOf("\n", i) + 1;
+    if (part === 1 ? i === start + 4 || i === start + 7 : i === start + 3) {
+      const lang = rowAt(start);
+      if (part === "2B" && lang.iso6392B === lang.iso6393) return void 0;
+      return lang;
+    }
+  }
+  return void 0;
+}
+function rowAt(start) {
+  const end = ISO_639_3_ROWS.indexOf("\n", start);
+  return rowOf(ISO_639_3_ROWS.slice(start, end < 0 ? void 0 : end));
+}
+function rowOf(row) {
+  const [iso6393, iso6392B, iso6391, scope, name] = row.split("|");
+  const language = { iso6393, scope: SCOPES[scope], name };
+  if (iso6392B) language.iso6392B = iso6392B;
+  if (iso6391) language.iso6391 = iso6391;
+  return language;
 }
 var tables;
 function isoTables() {
@@ -27224,17 +27259,16 @@ function suggestionForName(key) {
   return lang ? `did you mean \`${lang.iso6393}\` (${lang.name})?` : void 0;
 }
 function resolvePrimary(code, written) {
-  const { by1, by3, by2B } = isoTables();
   const lower = code.toLowerCase();
   if (lower.length === 2) {
-    const lang = by1.get(lower);
+    const lang = isoLanguageOf(lower, 1);
     if (lang) return resolvedOf(lang);
     return { ok: false, message: `\`${written}\` is not an ISO 639-1 code` };
   }
   if (lower.length === 3) {
-    const lang = by3.get(lower);
+    const lang = isoLanguageOf(lower, 3);
     if (lang) return resolvedOf(lang);
-    const bib = by2B.get(lower);
+    const bib = isoLanguageOf(lower, "2B");
     if (bib) {
       return {
         ok: false,
@@ -33822,15 +33856,15 @@ function invertAnew(group, languages2) {
     return rankOf;
   });
   const stride = Math.max(8, Math.ceil(languages2.length / 8) * 8);
-  const rowOf = new Int32Array(internCount);
+  const rowOf2 = new Int32Array(internCount);
   let rowCount = 1;
-  for (const rankOf of perLanguage2) for (const id of rankOf.keys()) if (rowOf[id] === 0) rowOf[id] = rowCount++;
+  for (const rankOf of perLanguage2) for (const id of rankOf.keys()) if (rowOf2[id] === 0) rowOf2[id] = rowCount++;
   const rows = new Int16Array(rowCount * stride);
   perLanguage2.forEach((rankOf, l) => {
-    for (const [id, rank2] of rankOf) rows[rowOf[id] * stride + l] = rank2 + 1;
+    for (const [id, rank2] of rankOf) rows[rowOf2[id] * stride + l] = rank2 + 1;
   });
   const kernel5 = francKernel();
-  return { languages: languages2, rowOfAt: kernel5.place(rowOf), rowsAt: kernel5.place(rows), stride };
+  return { languages: languages2, rowOfAt: kernel5.place(rowOf2), rowsAt: kernel5.place(rows), stride };
 }
 var foldedUnit;
 var SEPARATOR = 32;
@@ -37471,8 +37505,8 @@ var OTHER2 = "other";
 var UNDETERMINED = "und";
 function iso6393Of(code) {
   const c = code.toLowerCase();
-  if (c.length === 2) return isoTables().by1.get(c)?.iso6393;
-  if (c.length === 3) return isoTables().by2B.get(c)?.iso6393 ?? c;
+  if (c.length === 2) return isoLanguageOf(c, 1)?.iso6393;
+  if (c.length === 3) return isoLanguageOf(c, "2B")?.iso6393 ?? c;
   return void 0;
 }
 function createLanguageDetector(languages2, detection) {

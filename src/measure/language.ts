@@ -10,7 +10,7 @@ import type { DetectionSpec, LanguageSpec } from '../policy/types.js';
 import { MAJOR_LANGUAGES } from './language-candidates.js';
 import { createFrancLabeller, francLanguages, MAX_LENGTH, type FrancLabeller } from './language-franc.js';
 import { dominantScriptOf, scriptProfile } from './script.js';
-import { isoTables } from '../policy/data/iso-639-3.js';
+import { isoLanguageOf } from '../policy/data/iso-639-3.js';
 import { MACROLANGUAGE_MEMBERS } from '../policy/data/macrolanguages.js';
 
 /** Label for text in a language the policy does not list. */
@@ -45,8 +45,8 @@ type Route = { direct: string } | { labeller: FrancLabeller } | null;
 /** Returns the ISO 639-3 code of an ISO 639-1 (`hi`), 639-2/B (`fre`) or 639-3 (`hin`) code, lower-cased; undefined when it is none. */
 export function iso6393Of(code: string): string | undefined {
   const c = code.toLowerCase();
-  if (c.length === 2) return isoTables().by1.get(c)?.iso6393;
-  if (c.length === 3) return isoTables().by2B.get(c)?.iso6393 ?? c;
+  if (c.length === 2) return isoLanguageOf(c, 1)?.iso6393;
+  if (c.length === 3) return isoLanguageOf(c, '2B')?.iso6393 ?? c;
   return undefined;
 }
 

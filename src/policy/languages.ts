@@ -2,7 +2,7 @@
 // BCP 47 `hi-IN` / `sr-Latn` / `zh-yue`) resolved to ISO 639-3 codes, with the
 // detector labels each one covers.
 import { parse as parseBcp47 } from 'bcp-47';
-import { isoTables, type IsoLanguage } from './data/iso-639-3.js';
+import { isoLanguageOf, isoTables, type IsoLanguage } from './data/iso-639-3.js';
 import { MACROLANGUAGE_MEMBERS } from './data/macrolanguages.js';
 import { lookUpScript } from './scripts.js';
 import { didYouMean, nearest } from './suggest.js';
@@ -63,17 +63,16 @@ function suggestionForName(key: string): string | undefined {
 
 /** Returns a 2- or 3-letter primary language subtag resolved, or why not. */
 function resolvePrimary(code: string, written: string): ResolvedLanguage | UnresolvedLanguage {
-  const { by1, by3, by2B } = isoTables();
   const lower = code.toLowerCase();
   if (lower.length === 2) {
-    const lang = by1.get(lower);
+    const lang = isoLanguageOf(lower, 1);
     if (lang) return resolvedOf(lang);
     return { ok: false, message: `\`${written}\` is not an ISO 639-1 code` };
   }
   if (lower.length === 3) {
-    const lang = by3.get(lower);
+    const lang = isoLanguageOf(lower, 3);
     if (lang) return resolvedOf(lang);
-    const bib = by2B.get(lower);
+    const bib = isoLanguageOf(lower, '2B');
     if (bib) {
       return {
         ok: false,
