@@ -3912,17 +3912,17 @@ var require_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
-    function visit_(key, node, visitor, path7) {
-      const ctrl = callVisitor(key, node, visitor, path7);
+    function visit_(key, node, visitor, path8) {
+      const ctrl = callVisitor(key, node, visitor, path8);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path7, ctrl);
-        return visit_(key, ctrl, visitor, path7);
+        replaceNode(key, path8, ctrl);
+        return visit_(key, ctrl, visitor, path8);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path7 = Object.freeze(path7.concat(node));
+          path8 = Object.freeze(path8.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = visit_(i, node.items[i], visitor, path7);
+            const ci = visit_(i, node.items[i], visitor, path8);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3933,13 +3933,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path7 = Object.freeze(path7.concat(node));
-          const ck = visit_("key", node.key, visitor, path7);
+          path8 = Object.freeze(path8.concat(node));
+          const ck = visit_("key", node.key, visitor, path8);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = visit_("value", node.value, visitor, path7);
+          const cv = visit_("value", node.value, visitor, path8);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -3960,17 +3960,17 @@ var require_visit = __commonJS({
     visitAsync.BREAK = BREAK;
     visitAsync.SKIP = SKIP2;
     visitAsync.REMOVE = REMOVE;
-    async function visitAsync_(key, node, visitor, path7) {
-      const ctrl = await callVisitor(key, node, visitor, path7);
+    async function visitAsync_(key, node, visitor, path8) {
+      const ctrl = await callVisitor(key, node, visitor, path8);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path7, ctrl);
-        return visitAsync_(key, ctrl, visitor, path7);
+        replaceNode(key, path8, ctrl);
+        return visitAsync_(key, ctrl, visitor, path8);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path7 = Object.freeze(path7.concat(node));
+          path8 = Object.freeze(path8.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = await visitAsync_(i, node.items[i], visitor, path7);
+            const ci = await visitAsync_(i, node.items[i], visitor, path8);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3981,13 +3981,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path7 = Object.freeze(path7.concat(node));
-          const ck = await visitAsync_("key", node.key, visitor, path7);
+          path8 = Object.freeze(path8.concat(node));
+          const ck = await visitAsync_("key", node.key, visitor, path8);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = await visitAsync_("value", node.value, visitor, path7);
+          const cv = await visitAsync_("value", node.value, visitor, path8);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -4014,23 +4014,23 @@ var require_visit = __commonJS({
       }
       return visitor;
     }
-    function callVisitor(key, node, visitor, path7) {
+    function callVisitor(key, node, visitor, path8) {
       if (typeof visitor === "function")
-        return visitor(key, node, path7);
+        return visitor(key, node, path8);
       if (identity.isMap(node))
-        return visitor.Map?.(key, node, path7);
+        return visitor.Map?.(key, node, path8);
       if (identity.isSeq(node))
-        return visitor.Seq?.(key, node, path7);
+        return visitor.Seq?.(key, node, path8);
       if (identity.isPair(node))
-        return visitor.Pair?.(key, node, path7);
+        return visitor.Pair?.(key, node, path8);
       if (identity.isScalar(node))
-        return visitor.Scalar?.(key, node, path7);
+        return visitor.Scalar?.(key, node, path8);
       if (identity.isAlias(node))
-        return visitor.Alias?.(key, node, path7);
+        return visitor.Alias?.(key, node, path8);
       return void 0;
     }
-    function replaceNode(key, path7, node) {
-      const parent = path7[path7.length - 1];
+    function replaceNode(key, path8, node) {
+      const parent = path8[path8.length - 1];
       if (identity.isCollection(parent)) {
         parent.items[key] = node;
       } else if (identity.isPair(parent)) {
@@ -4642,10 +4642,10 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path7, value) {
+    function collectionFromPath(schema, path8, value) {
       let v = value;
-      for (let i = path7.length - 1; i >= 0; --i) {
-        const k = path7[i];
+      for (let i = path8.length - 1; i >= 0; --i) {
+        const k = path8[i];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
           const a = [];
           a[k] = v;
@@ -4664,7 +4664,7 @@ var require_Collection = __commonJS({
         sourceObjects: /* @__PURE__ */ new Map()
       });
     }
-    var isEmptyPath = (path7) => path7 == null || typeof path7 === "object" && !!path7[Symbol.iterator]().next().done;
+    var isEmptyPath = (path8) => path8 == null || typeof path8 === "object" && !!path8[Symbol.iterator]().next().done;
     var Collection = class extends Node.NodeBase {
       constructor(type, schema) {
         super(type);
@@ -4694,11 +4694,11 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path7, value) {
-        if (isEmptyPath(path7))
+      addIn(path8, value) {
+        if (isEmptyPath(path8))
           this.add(value);
         else {
-          const [key, ...rest] = path7;
+          const [key, ...rest] = path8;
           const node = this.get(key, true);
           if (identity.isCollection(node))
             node.addIn(rest, value);
@@ -4712,8 +4712,8 @@ var require_Collection = __commonJS({
        * Removes a value from the collection.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path7) {
-        const [key, ...rest] = path7;
+      deleteIn(path8) {
+        const [key, ...rest] = path8;
         if (rest.length === 0)
           return this.delete(key);
         const node = this.get(key, true);
@@ -4727,8 +4727,8 @@ var require_Collection = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path7, keepScalar) {
-        const [key, ...rest] = path7;
+      getIn(path8, keepScalar) {
+        const [key, ...rest] = path8;
         const node = this.get(key, true);
         if (rest.length === 0)
           return !keepScalar && identity.isScalar(node) ? node.value : node;
@@ -4746,8 +4746,8 @@ var require_Collection = __commonJS({
       /**
        * Checks if the collection includes a value with the key `key`.
        */
-      hasIn(path7) {
-        const [key, ...rest] = path7;
+      hasIn(path8) {
+        const [key, ...rest] = path8;
         if (rest.length === 0)
           return this.has(key);
         const node = this.get(key, true);
@@ -4757,8 +4757,8 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path7, value) {
-        const [key, ...rest] = path7;
+      setIn(path8, value) {
+        const [key, ...rest] = path8;
         if (rest.length === 0) {
           this.set(key, value);
         } else {
@@ -7273,9 +7273,9 @@ var require_Document = __commonJS({
           this.contents.add(value);
       }
       /** Adds a value to the document. */
-      addIn(path7, value) {
+      addIn(path8, value) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path7, value);
+          this.contents.addIn(path8, value);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -7350,14 +7350,14 @@ var require_Document = __commonJS({
        * Removes a value from the document.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path7) {
-        if (Collection.isEmptyPath(path7)) {
+      deleteIn(path8) {
+        if (Collection.isEmptyPath(path8)) {
           if (this.contents == null)
             return false;
           this.contents = null;
           return true;
         }
-        return assertCollection(this.contents) ? this.contents.deleteIn(path7) : false;
+        return assertCollection(this.contents) ? this.contents.deleteIn(path8) : false;
       }
       /**
        * Returns item at `key`, or `undefined` if not found. By default unwraps
@@ -7372,10 +7372,10 @@ var require_Document = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path7, keepScalar) {
-        if (Collection.isEmptyPath(path7))
+      getIn(path8, keepScalar) {
+        if (Collection.isEmptyPath(path8))
           return !keepScalar && identity.isScalar(this.contents) ? this.contents.value : this.contents;
-        return identity.isCollection(this.contents) ? this.contents.getIn(path7, keepScalar) : void 0;
+        return identity.isCollection(this.contents) ? this.contents.getIn(path8, keepScalar) : void 0;
       }
       /**
        * Checks if the document includes a value with the key `key`.
@@ -7386,10 +7386,10 @@ var require_Document = __commonJS({
       /**
        * Checks if the document includes a value at `path`.
        */
-      hasIn(path7) {
-        if (Collection.isEmptyPath(path7))
+      hasIn(path8) {
+        if (Collection.isEmptyPath(path8))
           return this.contents !== void 0;
-        return identity.isCollection(this.contents) ? this.contents.hasIn(path7) : false;
+        return identity.isCollection(this.contents) ? this.contents.hasIn(path8) : false;
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
@@ -7406,13 +7406,13 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path7, value) {
-        if (Collection.isEmptyPath(path7)) {
+      setIn(path8, value) {
+        if (Collection.isEmptyPath(path8)) {
           this.contents = value;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path7), value);
+          this.contents = Collection.collectionFromPath(this.schema, Array.from(path8), value);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path7, value);
+          this.contents.setIn(path8, value);
         }
       }
       /**
@@ -9373,9 +9373,9 @@ var require_cst_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
-    visit.itemAtPath = (cst, path7) => {
+    visit.itemAtPath = (cst, path8) => {
       let item = cst;
-      for (const [field, index2] of path7) {
+      for (const [field, index2] of path8) {
         const tok = item?.[field];
         if (tok && "items" in tok) {
           item = tok.items[index2];
@@ -9384,23 +9384,23 @@ var require_cst_visit = __commonJS({
       }
       return item;
     };
-    visit.parentCollection = (cst, path7) => {
-      const parent = visit.itemAtPath(cst, path7.slice(0, -1));
-      const field = path7[path7.length - 1][0];
+    visit.parentCollection = (cst, path8) => {
+      const parent = visit.itemAtPath(cst, path8.slice(0, -1));
+      const field = path8[path8.length - 1][0];
       const coll = parent?.[field];
       if (coll && "items" in coll)
         return coll;
       throw new Error("Parent collection not found");
     };
-    function _visit(path7, item, visitor) {
-      let ctrl = visitor(item, path7);
+    function _visit(path8, item, visitor) {
+      let ctrl = visitor(item, path8);
       if (typeof ctrl === "symbol")
         return ctrl;
       for (const field of ["key", "value"]) {
         const token = item[field];
         if (token && "items" in token) {
           for (let i = 0; i < token.items.length; ++i) {
-            const ci = _visit(Object.freeze(path7.concat([[field, i]])), token.items[i], visitor);
+            const ci = _visit(Object.freeze(path8.concat([[field, i]])), token.items[i], visitor);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -9411,10 +9411,10 @@ var require_cst_visit = __commonJS({
             }
           }
           if (typeof ctrl === "function" && field === "key")
-            ctrl = ctrl(item, path7);
+            ctrl = ctrl(item, path8);
         }
       }
-      return typeof ctrl === "function" ? ctrl(item, path7) : ctrl;
+      return typeof ctrl === "function" ? ctrl(item, path8) : ctrl;
     }
     exports.visit = visit;
   }
@@ -11489,8 +11489,8 @@ var require_utils = __commonJS({
       }
       return output;
     };
-    exports.basename = (path7, { windows } = {}) => {
-      const segs = path7.split(windows ? /[\\/]/ : "/");
+    exports.basename = (path8, { windows } = {}) => {
+      const segs = path8.split(windows ? /[\\/]/ : "/");
       const last = segs[segs.length - 1];
       if (last === "") {
         return segs[segs.length - 2];
@@ -12827,7 +12827,7 @@ var require_path = __commonJS({
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.convertPosixPathToPattern = exports.convertWindowsPathToPattern = exports.convertPathToPattern = exports.escapePosixPath = exports.escapeWindowsPath = exports.escape = exports.removeLeadingDotSegment = exports.makeAbsolute = exports.unixify = void 0;
     var os = __require("os");
-    var path7 = __require("path");
+    var path8 = __require("path");
     var IS_WINDOWS_PLATFORM = os.platform() === "win32";
     var LEADING_DOT_SEGMENT_CHARACTERS_COUNT = 2;
     var POSIX_UNESCAPED_GLOB_SYMBOLS_RE = /(\\?)([()*?[\]{|}]|^!|[!+@](?=\()|\\(?![!()*+?@[\]{|}]))/g;
@@ -12839,7 +12839,7 @@ var require_path = __commonJS({
     }
     exports.unixify = unixify;
     function makeAbsolute(cwd, filepath) {
-      return path7.resolve(cwd, filepath);
+      return path8.resolve(cwd, filepath);
     }
     exports.makeAbsolute = makeAbsolute;
     function removeLeadingDotSegment(entry) {
@@ -14136,7 +14136,7 @@ var require_braces = __commonJS({
 var require_constants3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/constants.js"(exports, module) {
     "use strict";
-    var path7 = __require("path");
+    var path8 = __require("path");
     var WIN_SLASH = "\\\\/";
     var WIN_NO_SLASH = `[^${WIN_SLASH}]`;
     var DEFAULT_MAX_EXTGLOB_RECURSION = 0;
@@ -14310,7 +14310,7 @@ var require_constants3 = __commonJS({
       /* | */
       CHAR_ZERO_WIDTH_NOBREAK_SPACE: 65279,
       /* \uFEFF */
-      SEP: path7.sep,
+      SEP: path8.sep,
       /**
        * Create EXTGLOB_CHARS
        */
@@ -14337,7 +14337,7 @@ var require_constants3 = __commonJS({
 var require_utils3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/utils.js"(exports) {
     "use strict";
-    var path7 = __require("path");
+    var path8 = __require("path");
     var win32 = process.platform === "win32";
     var {
       REGEX_BACKSLASH,
@@ -14366,7 +14366,7 @@ var require_utils3 = __commonJS({
       if (options && typeof options.windows === "boolean") {
         return options.windows;
       }
-      return win32 === true || path7.sep === "\\";
+      return win32 === true || path8.sep === "\\";
     };
     exports.escapeLast = (input, char, lastIdx) => {
       const idx = input.lastIndexOf(char, lastIdx);
@@ -15730,7 +15730,7 @@ var require_parse3 = __commonJS({
 var require_picomatch3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/picomatch.js"(exports, module) {
     "use strict";
-    var path7 = __require("path");
+    var path8 = __require("path");
     var scan3 = require_scan2();
     var parse2 = require_parse3();
     var utils = require_utils3();
@@ -15815,7 +15815,7 @@ var require_picomatch3 = __commonJS({
     };
     picomatch2.matchBase = (input, glob, options, posix = utils.isWindows(options)) => {
       const regex = glob instanceof RegExp ? glob : picomatch2.makeRe(glob, options);
-      return regex.test(path7.basename(input));
+      return regex.test(path8.basename(input));
     };
     picomatch2.isMatch = (str, patterns, options) => picomatch2(patterns, options)(str);
     picomatch2.parse = (pattern, options) => {
@@ -16042,7 +16042,7 @@ var require_pattern = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.isAbsolute = exports.partitionAbsoluteAndRelative = exports.removeDuplicateSlashes = exports.matchAny = exports.convertPatternsToRe = exports.makeRe = exports.getPatternParts = exports.expandBraceExpansion = exports.expandPatternsWithBraceExpansion = exports.isAffectDepthOfReadingPattern = exports.endsWithSlashGlobStar = exports.hasGlobStar = exports.getBaseDirectory = exports.isPatternRelatedToParentDirectory = exports.getPatternsOutsideCurrentDirectory = exports.getPatternsInsideCurrentDirectory = exports.getPositivePatterns = exports.getNegativePatterns = exports.isPositivePattern = exports.isNegativePattern = exports.convertToNegativePattern = exports.convertToPositivePattern = exports.isDynamicPattern = exports.isStaticPattern = void 0;
-    var path7 = __require("path");
+    var path8 = __require("path");
     var globParent = require_glob_parent();
     var micromatch = require_micromatch();
     var GLOBSTAR = "**";
@@ -16137,7 +16137,7 @@ var require_pattern = __commonJS({
     }
     exports.endsWithSlashGlobStar = endsWithSlashGlobStar;
     function isAffectDepthOfReadingPattern(pattern) {
-      const basename = path7.basename(pattern);
+      const basename = path8.basename(pattern);
       return endsWithSlashGlobStar(pattern) || isStaticPattern(basename);
     }
     exports.isAffectDepthOfReadingPattern = isAffectDepthOfReadingPattern;
@@ -16195,7 +16195,7 @@ var require_pattern = __commonJS({
     }
     exports.partitionAbsoluteAndRelative = partitionAbsoluteAndRelative;
     function isAbsolute(pattern) {
-      return path7.isAbsolute(pattern);
+      return path8.isAbsolute(pattern);
     }
     exports.isAbsolute = isAbsolute;
   }
@@ -16372,8 +16372,8 @@ var require_utils4 = __commonJS({
     exports.errno = errno;
     var fs = require_fs();
     exports.fs = fs;
-    var path7 = require_path();
-    exports.path = path7;
+    var path8 = require_path();
+    exports.path = path8;
     var pattern = require_pattern();
     exports.pattern = pattern;
     var stream = require_stream();
@@ -16485,8 +16485,8 @@ var require_async = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path7, settings, callback) {
-      settings.fs.lstat(path7, (lstatError, lstat2) => {
+    function read(path8, settings, callback) {
+      settings.fs.lstat(path8, (lstatError, lstat2) => {
         if (lstatError !== null) {
           callFailureCallback(callback, lstatError);
           return;
@@ -16495,7 +16495,7 @@ var require_async = __commonJS({
           callSuccessCallback(callback, lstat2);
           return;
         }
-        settings.fs.stat(path7, (statError, stat4) => {
+        settings.fs.stat(path8, (statError, stat4) => {
           if (statError !== null) {
             if (settings.throwErrorOnBrokenSymbolicLink) {
               callFailureCallback(callback, statError);
@@ -16527,13 +16527,13 @@ var require_sync = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path7, settings) {
-      const lstat2 = settings.fs.lstatSync(path7);
+    function read(path8, settings) {
+      const lstat2 = settings.fs.lstatSync(path8);
       if (!lstat2.isSymbolicLink() || !settings.followSymbolicLink) {
         return lstat2;
       }
       try {
-        const stat4 = settings.fs.statSync(path7);
+        const stat4 = settings.fs.statSync(path8);
         if (settings.markSymbolicLink) {
           stat4.isSymbolicLink = () => true;
         }
@@ -16604,17 +16604,17 @@ var require_out = __commonJS({
     var sync = require_sync();
     var settings_1 = require_settings();
     exports.Settings = settings_1.default;
-    function stat4(path7, optionsOrSettingsOrCallback, callback) {
+    function stat4(path8, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path7, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path8, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path7, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path8, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.stat = stat4;
-    function statSync2(path7, optionsOrSettings) {
+    function statSync2(path8, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path7, settings);
+      return sync.read(path8, settings);
     }
     exports.statSync = statSync2;
     function getSettings(settingsOrOptions = {}) {
@@ -16830,16 +16830,16 @@ var require_async2 = __commonJS({
           return;
         }
         const tasks = names.map((name) => {
-          const path7 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
+          const path8 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
           return (done) => {
-            fsStat.stat(path7, settings.fsStatSettings, (error, stats) => {
+            fsStat.stat(path8, settings.fsStatSettings, (error, stats) => {
               if (error !== null) {
                 done(error);
                 return;
               }
               const entry = {
                 name,
-                path: path7,
+                path: path8,
                 dirent: utils.fs.createDirentFromStats(name, stats)
               };
               if (settings.stats) {
@@ -16957,7 +16957,7 @@ var require_settings2 = __commonJS({
   "node_modules/@nodelib/fs.scandir/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path7 = __require("path");
+    var path8 = __require("path");
     var fsStat = require_out();
     var fs = require_fs4();
     var Settings = class {
@@ -16965,7 +16965,7 @@ var require_settings2 = __commonJS({
         this._options = _options;
         this.followSymbolicLinks = this._getValue(this._options.followSymbolicLinks, false);
         this.fs = fs.createFileSystemAdapter(this._options.fs);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path7.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path8.sep);
         this.stats = this._getValue(this._options.stats, false);
         this.throwErrorOnBrokenSymbolicLink = this._getValue(this._options.throwErrorOnBrokenSymbolicLink, true);
         this.fsStatSettings = new fsStat.Settings({
@@ -16992,17 +16992,17 @@ var require_out2 = __commonJS({
     var sync = require_sync2();
     var settings_1 = require_settings2();
     exports.Settings = settings_1.default;
-    function scandir(path7, optionsOrSettingsOrCallback, callback) {
+    function scandir(path8, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path7, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path8, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path7, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path8, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.scandir = scandir;
-    function scandirSync(path7, optionsOrSettings) {
+    function scandirSync(path8, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path7, settings);
+      return sync.read(path8, settings);
     }
     exports.scandirSync = scandirSync;
     function getSettings(settingsOrOptions = {}) {
@@ -17650,7 +17650,7 @@ var require_settings3 = __commonJS({
   "node_modules/@nodelib/fs.walk/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path7 = __require("path");
+    var path8 = __require("path");
     var fsScandir = require_out2();
     var Settings = class {
       constructor(_options = {}) {
@@ -17660,7 +17660,7 @@ var require_settings3 = __commonJS({
         this.deepFilter = this._getValue(this._options.deepFilter, null);
         this.entryFilter = this._getValue(this._options.entryFilter, null);
         this.errorFilter = this._getValue(this._options.errorFilter, null);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path7.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path8.sep);
         this.fsScandirSettings = new fsScandir.Settings({
           followSymbolicLinks: this._options.followSymbolicLinks,
           fs: this._options.fs,
@@ -17722,7 +17722,7 @@ var require_reader2 = __commonJS({
   "node_modules/fast-glob/out/readers/reader.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path7 = __require("path");
+    var path8 = __require("path");
     var fsStat = require_out();
     var utils = require_utils4();
     var Reader = class {
@@ -17735,7 +17735,7 @@ var require_reader2 = __commonJS({
         });
       }
       _getFullEntryPath(filepath) {
-        return path7.resolve(this._settings.cwd, filepath);
+        return path8.resolve(this._settings.cwd, filepath);
       }
       _makeEntry(stats, pattern) {
         const entry = {
@@ -18151,7 +18151,7 @@ var require_provider = __commonJS({
   "node_modules/fast-glob/out/providers/provider.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path7 = __require("path");
+    var path8 = __require("path");
     var deep_1 = require_deep();
     var entry_1 = require_entry();
     var error_1 = require_error();
@@ -18165,7 +18165,7 @@ var require_provider = __commonJS({
         this.entryTransformer = new entry_2.default(this._settings);
       }
       _getRootDirectory(task) {
-        return path7.resolve(this._settings.cwd, task.base);
+        return path8.resolve(this._settings.cwd, task.base);
       }
       _getReaderOptions(task) {
         const basePath = task.base === "." ? "" : task.base;
@@ -21887,8 +21887,8 @@ var init_hf = __esm({
 
 // src/cli/main.ts
 import { statSync } from "node:fs";
-import { writeFile as writeFile2 } from "node:fs/promises";
-import path6 from "node:path";
+import { writeFile as writeFile3 } from "node:fs/promises";
+import path7 from "node:path";
 
 // src/judge/report.ts
 import { relative } from "node:path";
@@ -23283,9 +23283,9 @@ import path3 from "node:path";
 
 // src/policy/format.ts
 var PLAIN_KEY = /^[A-Za-z0-9_$-]+$/;
-function formatPath(path7) {
+function formatPath(path8) {
   let out = "";
-  for (const seg of path7) {
+  for (const seg of path8) {
     if (typeof seg === "number") out += `[${seg}]`;
     else if (PLAIN_KEY.test(seg)) out += out === "" ? seg : `.${seg}`;
     else out += `[${JSON.stringify(seg)}]`;
@@ -23341,8 +23341,8 @@ function readPolicyYaml(text) {
       errors.push({ position: { line: 1, column: 1 }, path: [], message: e2.message });
     }
   }
-  const locate2 = (path7, part = "value") => {
-    const found = walk(doc, path7);
+  const locate2 = (path8, part = "value") => {
+    const found = walk(doc, path8);
     const node = part === "key" ? found.key ?? found.value : found.value ?? found.key;
     const offset = node?.range?.[0];
     return offset === void 0 ? { line: 1, column: 1 } : pos(offset);
@@ -23360,10 +23360,10 @@ function keyText(pair) {
 function resolved(doc, node) {
   return (0, import_yaml.isAlias)(node) ? node.resolve(doc) : node;
 }
-function walk(doc, path7) {
+function walk(doc, path8) {
   let value = resolved(doc, doc.contents);
   let key;
-  for (const seg of path7) {
+  for (const seg of path8) {
     if ((0, import_yaml.isMap)(value)) {
       const pair = value.items.find((p) => keyText(p) === String(seg));
       if (!pair) break;
@@ -23383,7 +23383,7 @@ function walk(doc, path7) {
   return { key, value: value ?? void 0 };
 }
 function pathAtOffset(doc, offset) {
-  const path7 = [];
+  const path8 = [];
   let node = doc.contents;
   for (; ; ) {
     if ((0, import_yaml.isMap)(node)) {
@@ -23393,23 +23393,23 @@ function pathAtOffset(doc, offset) {
         return start !== void 0 && end !== void 0 && start <= offset && offset <= end;
       });
       const k = pair && keyText(pair);
-      if (!pair || k === void 0) return path7;
-      path7.push(k);
+      if (!pair || k === void 0) return path8;
+      path8.push(k);
       node = pair.value;
     } else if ((0, import_yaml.isSeq)(node)) {
       const i = node.items.findIndex((it) => {
         const r = it?.range;
         return r != null && r[0] <= offset && offset <= r[2];
       });
-      if (i < 0) return path7;
-      path7.push(i);
+      if (i < 0) return path8;
+      path8.push(i);
       node = node.items[i];
     } else {
-      return path7;
+      return path8;
     }
   }
 }
-function findDuplicates(doc, node, path7, pos, out) {
+function findDuplicates(doc, node, path8, pos, out) {
   if ((0, import_yaml.isMap)(node)) {
     const seen = /* @__PURE__ */ new Map();
     for (const pair of node.items) {
@@ -23421,17 +23421,17 @@ function findDuplicates(doc, node, path7, pos, out) {
         if (first) {
           out.push({
             position: pos(start),
-            path: [...path7, k],
+            path: [...path8, k],
             message: `duplicate key \`${k}\` (first set on line ${first.line}); a key may appear once per mapping`
           });
         } else {
           seen.set(k, pos(start));
         }
       }
-      findDuplicates(doc, pair.value, k === void 0 ? path7 : [...path7, k], pos, out);
+      findDuplicates(doc, pair.value, k === void 0 ? path8 : [...path8, k], pos, out);
     }
   } else if ((0, import_yaml.isSeq)(node)) {
-    node.items.forEach((item, i) => findDuplicates(doc, item, [...path7, i], pos, out));
+    node.items.forEach((item, i) => findDuplicates(doc, item, [...path8, i], pos, out));
   }
 }
 
@@ -26007,7 +26007,7 @@ function schemaKeyIndex() {
   return keyIndex;
 }
 function issueOf(e2, root) {
-  const path7 = pointerPath(e2.instancePath, root);
+  const path8 = pointerPath(e2.instancePath, root);
   const p = e2.params;
   const data2 = e2.data;
   switch (e2.keyword) {
@@ -26027,15 +26027,15 @@ function issueOf(e2, root) {
           message += `; expected one of ${valid.map((k) => `\`${k}\``).join(", ")}`;
         }
       }
-      return { path: [...path7, key], part: "key", message, ...suggestion ? { suggestion } : {} };
+      return { path: [...path8, key], part: "key", message, ...suggestion ? { suggestion } : {} };
     }
     case "required": {
       const key = String(p.missingProperty);
-      return { path: [...path7, key], part: "key", message: `missing required key \`${key}\`` };
+      return { path: [...path8, key], part: "key", message: `missing required key \`${key}\`` };
     }
     case "dependentRequired": {
       return {
-        path: [...path7, String(p.property)],
+        path: [...path8, String(p.property)],
         part: "key",
         message: `\`${String(p.property)}\` is only used together with \`${String(p.missingProperty)}\`; set \`${String(p.missingProperty)}\` too or remove it`
       };
@@ -26043,9 +26043,9 @@ function issueOf(e2, root) {
     case "false schema": {
       const m = /\/dependentSchemas\/([^/]+)\//.exec(e2.schemaPath);
       const with_ = m ? m[1].replace(/~1/g, "/").replace(/~0/g, "~") : void 0;
-      const key = String(path7[path7.length - 1]);
+      const key = String(path8[path8.length - 1]);
       return {
-        path: path7,
+        path: path8,
         part: "key",
         message: with_ ? `set either \`${with_}\` or \`${key}\`, not both` : `\`${key}\` is not allowed here`
       };
@@ -26058,25 +26058,25 @@ function issueOf(e2, root) {
         suggestion = `write shares as fractions: \`${Number.parseFloat(data2) / 100}\``;
       } else if (typeof data2 === "string" && numeric && data2.trim() !== "" && Number.isFinite(Number(data2))) {
         suggestion = `write it without quotes: \`${data2.trim()}\``;
-      } else if (path7.length === 2 && path7[0] === "languages" && typeof data2 === "number") {
-        suggestion = `write \`${String(path7[1])}: { target: ${data2} }\``;
+      } else if (path8.length === 2 && path8[0] === "languages" && typeof data2 === "number") {
+        suggestion = `write \`${String(path8[1])}: { target: ${data2} }\``;
       } else if (typeof data2 === "string" && want.includes("a list") && want.length === 1) {
         suggestion = `write a list: \`[${data2}]\``;
       }
-      return { path: path7, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path8, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "enum": {
       const allowed = p.allowedValues.map(String);
       const near = typeof data2 === "string" ? nearest(data2, allowed) : void 0;
       return {
-        path: path7,
+        path: path8,
         part: "value",
         message: `must be one of ${allowed.map((v) => `\`${v}\``).join(", ")}, not ${kindOf(data2)}`,
         ...near ? { suggestion: didYouMean(near) } : {}
       };
     }
     case "const": {
-      return { path: path7, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
+      return { path: path8, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
     }
     case "minimum":
     case "maximum":
@@ -26087,24 +26087,24 @@ function issueOf(e2, root) {
       if (e2.keyword === "maximum" && p.limit === 1 && typeof data2 === "number" && data2 > 1 && data2 <= 100) {
         suggestion = `shares are fractions of 1: ${data2} % is \`${data2 / 100}\``;
       }
-      return { path: path7, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path8, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "minProperties": {
       const names = propertyNames(e2.parentSchema);
       const dependent = new Set(Object.keys(e2.parentSchema?.dependentRequired ?? {}));
       const primary = names.filter((k) => !dependent.has(k));
       const what = primary.length > 0 && primary.length <= MAX_LISTED_KEYS ? `; set ${primary.map((k) => `\`${k}\``).join(" or ")}` : "";
-      return { path: path7, part: "value", message: `must not be empty${what}` };
+      return { path: path8, part: "value", message: `must not be empty${what}` };
     }
     case "minItems":
-      return { path: path7, part: "value", message: "must not be an empty list" };
+      return { path: path8, part: "value", message: "must not be an empty list" };
     case "minLength":
-      return { path: path7, part: "value", message: "must not be empty" };
+      return { path: path8, part: "value", message: "must not be empty" };
     case "uniqueItems":
       const item = Array.isArray(data2) ? data2[Number(p.j)] : void 0;
-      return { path: path7, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
+      return { path: path8, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
     default:
-      return { path: path7, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
+      return { path: path8, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
   }
 }
 
@@ -42227,8 +42227,8 @@ var ShardFailure = class extends Error {
   shard;
   name = "ShardFailure";
 };
-function throwIfFaultInjected(path7) {
-  if (process.env.SLUICE_FAULT_SHARD && path7 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+function throwIfFaultInjected(path8) {
+  if (process.env.SLUICE_FAULT_SHARD && path8 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
 }
 function workOf(ref) {
   return ref.textBytesHint ?? ref.sizeBytes;
@@ -42241,8 +42241,8 @@ function defaultWorkers() {
 }
 function canRunWorkers(entry) {
   if (!entry) return false;
-  const path7 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
-  return path7.endsWith(".js") && existsSync(path7);
+  const path8 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
+  return path8.endsWith(".js") && existsSync(path8);
 }
 function startWorker(entry, init) {
   const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
@@ -42631,8 +42631,8 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     for (const b of reading.values()) inFlight += b;
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes3 + inFlight, elapsedMs: performance.now() - started });
   };
-  const readingAt = (path7, b) => {
-    reading.set(path7, b);
+  const readingAt = (path8, b) => {
+    reading.set(path8, b);
     if (opts.onProgress) report();
   };
   const done = (r) => {
@@ -42741,14 +42741,15 @@ async function runCheck(opts) {
 }
 
 // src/core/partition.ts
-import { readFile as readFile5 } from "node:fs/promises";
+import { readFile as readFile6 } from "node:fs/promises";
 
 // src/results/partition.ts
 import { createHash as createHash6 } from "node:crypto";
 var PARTIAL_FORMAT = "sluice-partial";
 var PARTIAL_VERSION = 1;
-function partitionOf(path7, count3) {
-  const h = createHash6("sha256").update(path7).digest();
+var GIT_OBJECT_ID = /^(?:[0-9a-f]{40}|[0-9a-f]{64})$/;
+function partitionOf(path8, count3) {
+  const h = createHash6("sha256").update(path8).digest();
   return h.readUInt32BE(0) % count3 + 1;
 }
 function partialToJson(p) {
@@ -42773,7 +42774,67 @@ function partialFromJson(text) {
     }
     results.push(parsed.result);
   }
+  if (v.blobs !== void 0) {
+    const blobs = v.blobs;
+    const bad = typeof blobs !== "object" || blobs === null || Array.isArray(blobs) ? "" : Object.entries(blobs).find(([, b]) => typeof b !== "string" || !GIT_OBJECT_ID.test(b))?.[0];
+    if (bad !== void 0) return { ok: false, reason: bad === "" ? "`blobs` is not an object of paths and git blob ids" : `\`blobs\` holds no git blob id for ${bad}` };
+  }
   return { ok: true, partial: { ...v, results } };
+}
+
+// src/core/compare.ts
+import { execFile, spawn } from "node:child_process";
+import { mkdtemp, readFile as readFile5, realpath as realpath2, rename as rename2, writeFile as writeFile2 } from "node:fs/promises";
+import path6 from "node:path";
+var GIT_MAX_BUFFER_BYTES = 1024 * 1024 * 1024;
+var FILE_MODES = /* @__PURE__ */ new Set(["100644", "100755"]);
+var GitError = class extends Error {
+  name = "GitError";
+};
+function git(cwd, args) {
+  return new Promise((resolve, reject) => {
+    execFile("git", args, { cwd, maxBuffer: GIT_MAX_BUFFER_BYTES, encoding: "utf8" }, (err2, stdout, stderr) => {
+      if (err2) reject(new GitError(`git ${args.join(" ")}: ${(stderr || err2.message).trim()}`));
+      else resolve(stdout);
+    });
+  });
+}
+async function gitTopLevel(dir) {
+  try {
+    return await realpath2((await git(dir, ["rev-parse", "--show-toplevel"])).trim());
+  } catch {
+    return null;
+  }
+}
+async function rootInRepo(top, policy) {
+  const rel = path6.relative(top, await realpath2(policy.root)).split(path6.sep).join("/");
+  if (rel === ".." || rel.startsWith("../") || path6.isAbsolute(rel)) {
+    throw new ConfigError(`${policy.file}: root ${policy.root} is outside the git repository ${top}; a base comparison needs the corpus in the repository`);
+  }
+  return rel;
+}
+async function cleanBlobs(top, rootRel) {
+  const scope = rootRel === "" ? "." : rootRel;
+  const [staged, status] = await Promise.all([
+    git(top, ["ls-files", "-s", "-z", "--full-name", "--", scope]),
+    // status refreshes stat data first, so a touched but unchanged file is not taken as changed.
+    git(top, ["status", "--porcelain=v1", "-z", "--untracked-files=all", "--no-renames", "--", scope])
+  ]);
+  const blobs = /* @__PURE__ */ new Map();
+  for (const entry of staged.split("\0")) {
+    if (!entry) continue;
+    const tab = entry.indexOf("	");
+    const [mode, blob, stage] = entry.slice(0, tab).split(" ");
+    if (stage === "0" && FILE_MODES.has(mode ?? "")) blobs.set(entry.slice(tab + 1), blob);
+  }
+  for (const entry of status.split("\0")) {
+    if (entry.length < 4) continue;
+    if (entry[1] !== " " || entry.startsWith("??")) blobs.delete(entry.slice(3));
+  }
+  const out = /* @__PURE__ */ new Map();
+  const prefix = rootRel === "" ? "" : `${rootRel}/`;
+  for (const [gitPath, blob] of blobs) if (gitPath.startsWith(prefix)) out.set(gitPath.slice(prefix.length), blob);
+  return out;
 }
 
 // src/core/partition.ts
@@ -42789,6 +42850,7 @@ async function scanPartition(policyFile, index2, count3, opts) {
   const prepared = await prepareOrThrow(policy);
   const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
   results.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+  const blobs = await blobsOf(policy, results);
   return {
     format: PARTIAL_FORMAT,
     version: PARTIAL_VERSION,
@@ -42797,28 +42859,38 @@ async function scanPartition(policyFile, index2, count3, opts) {
     partition: { index: index2, count: count3 },
     shardsInCorpus: discovery.shards.length,
     results,
-    skipped: discovery.skipped.filter((s) => partitionOf(s.path, count3) === index2)
+    skipped: discovery.skipped.filter((s) => partitionOf(s.path, count3) === index2),
+    ...blobs ? { blobs } : {}
   };
 }
-async function mergePartials(policyFile, partFiles, opts) {
-  const started = performance.now();
-  const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
-  const prepared = await prepareOrThrow(policy);
-  if (partFiles.length === 0) throw new ConfigError("merge: no partial result files given");
-  const parts = [];
-  for (const file of partFiles) {
-    let text;
-    try {
-      text = await readFile5(file, "utf8");
-    } catch (err2) {
-      throw new ConfigError(`${file}: cannot read: ${err2.message}`);
+async function blobsOf(policy, results) {
+  const top = await gitTopLevel(policy.root);
+  if (top === null) return void 0;
+  const clean3 = await cleanBlobs(top, await rootInRepo(top, policy));
+  const out = {};
+  for (const r of results) {
+    const blob = clean3.get(r.path);
+    if (blob !== void 0) out[r.path] = blob;
+  }
+  return out;
+}
+async function readPartialFile(file) {
+  let text;
+  try {
+    text = await readFile6(file, "utf8");
+  } catch (err2) {
+    throw new ConfigError(`${file}: cannot read: ${err2.message}`);
+  }
+  const parsed = partialFromJson(text);
+  if (!parsed.ok) throw new ConfigError(`${file}: ${parsed.reason}`);
+  return { file, partial: parsed.partial };
+}
+function checkPartialSet(parts, policy, settingsId) {
+  if (parts.length === 0) throw new ConfigError("merge: no partial result files given");
+  for (const { file, partial } of parts) {
+    if (partial.settingsId !== settingsId) {
+      throw new ConfigError(`${file}: measured under other settings (${partial.settingsId}) than ${policy.file} gives now (${settingsId}): scan it again with this policy and sluice version`);
     }
-    const parsed = partialFromJson(text);
-    if (!parsed.ok) throw new ConfigError(`${file}: ${parsed.reason}`);
-    if (parsed.partial.settingsId !== prepared.settingsId) {
-      throw new ConfigError(`${file}: measured under other settings (${parsed.partial.settingsId}) than ${policy.file} gives now (${prepared.settingsId}): scan it again with this policy and sluice version`);
-    }
-    parts.push({ file, partial: parsed.partial });
   }
   const count3 = parts[0].partial.partition.count;
   const seen = /* @__PURE__ */ new Map();
@@ -42835,6 +42907,16 @@ async function mergePartials(policyFile, partFiles, opts) {
   const skipped = parts.flatMap((p) => p.partial.skipped).sort((a, b) => a.path < b.path ? -1 : 1);
   if (shardsInCorpus.size > 1) throw new ConfigError(`merge: the parts saw different corpora (${[...shardsInCorpus].join(" vs ")} shards): scan all partitions of the same commit`);
   if (results.length !== [...shardsInCorpus][0]) throw new ConfigError(`merge: the parts hold ${results.length} shards, the corpus has ${[...shardsInCorpus][0]}`);
+  return { parts, results, skipped };
+}
+async function mergePartials(policyFile, partFiles, opts) {
+  const started = performance.now();
+  const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
+  const prepared = await prepareOrThrow(policy);
+  if (partFiles.length === 0) throw new ConfigError("merge: no partial result files given");
+  const read = [];
+  for (const file of partFiles) read.push(await readPartialFile(file));
+  const { parts, results, skipped } = checkPartialSet(read, policy, prepared.settingsId);
   let corpus;
   try {
     corpus = await assembleCorpus(policy, prepared, results, /* @__PURE__ */ new Set(), skipped, opts.newShards, started);
@@ -42937,8 +43019,8 @@ var HTML_SPECIAL = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'":
 function escapeMarkdown(text) {
   return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, (c) => `U+${c.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`).replace(MARKDOWN_PUNCT, (c) => `\\${c}`).replace(/[&<>"']/g, (c) => HTML_SPECIAL[c]).replace(/@/g, "&#64;").replace(/:\/\//g, "&#58;//").replace(/\r?\n|\r/g, " ");
 }
-function codePath(path7) {
-  const safe = path7.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
+function codePath(path8) {
+  const safe = path8.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
   return `\`${safe}\``;
 }
 
@@ -42997,10 +43079,10 @@ var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\
 var MAX_REJECTIONS_LISTED = 10;
 function renderMarkdown(report, opts = {}) {
   const out = [];
-  const loc = (path7, line) => {
-    const text = codePath(line === void 0 ? path7 : `${path7}:${line}`);
+  const loc = (path8, line) => {
+    const text = codePath(line === void 0 ? path8 : `${path8}:${line}`);
     if (!opts.linkBase) return text;
-    const href = `${opts.linkBase}/${path7.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
+    const href = `${opts.linkBase}/${path8.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
     return `[${text}](${href})`;
   };
   out.push(`## ${ICON[report.verdict]} sluice \xB7 ${escapeMarkdown(report.policy.name)}: ${report.verdict.toUpperCase()}`);
@@ -43426,7 +43508,7 @@ function warnOfWorkers(workers) {
 }
 async function writeOutput(option, file, text) {
   try {
-    await writeFile2(file, text);
+    await writeFile3(file, text);
   } catch (err2) {
     throw new UsageError(`${option} ${file}: cannot write it: ${err2.message}`);
   }
@@ -43439,14 +43521,14 @@ function checkPaths(outputs, policies, cacheDir) {
       return "none";
     }
   };
-  const policyFiles = new Set(policies.map((p) => path6.resolve(p)));
+  const policyFiles = new Set(policies.map((p) => path7.resolve(p)));
   for (const [option, file] of outputs) {
     if (file === void 0) continue;
     if (kind(file) === "dir") throw new UsageError(`${option} ${file}: is a directory; give a file name to write to`);
-    const parent = path6.dirname(path6.resolve(file));
+    const parent = path7.dirname(path7.resolve(file));
     const parentKind = kind(parent);
     if (parentKind !== "dir") throw new UsageError(`${option} ${file}: ${parent} ${parentKind === "none" ? "does not exist" : "is not a directory"}`);
-    if (policyFiles.has(path6.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
+    if (policyFiles.has(path7.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
   }
   if (cacheDir !== null && kind(cacheDir) === "file") throw new UsageError(`--cache-dir ${cacheDir}: is a file, not a directory`);
 }

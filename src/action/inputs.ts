@@ -35,6 +35,8 @@ export interface ActionSettings {
   base: string | null;
   comment: CommentMode;
   failOn: FailOn;
+  /** The `parts` input: patterns (relative to the workspace) of partial results from `sluice scan --partition` jobs whose shard results are taken instead of measuring; empty: measure here. */
+  parts: string[];
   /** Absolute directory the JSON and Markdown reports are written to. */
   reportDir: string;
   cache: boolean;
@@ -127,6 +129,10 @@ export function settingsFromEnv(env: NodeJS.ProcessEnv): ActionSettings {
     base: inputOf(env, 'base') || null,
     comment: oneOf(env, 'comment', COMMENT_MODES, 'on-change'),
     failOn: oneOf(env, 'fail-on', FAIL_ON, 'error'),
+    parts: inputOf(env, 'parts')
+      .split(/\r?\n/)
+      .map((p) => p.trim())
+      .filter((p) => p !== ''),
     reportDir: path.resolve(workspace, inputOf(env, 'report-dir') || 'sluice-report'),
     cache: booleanInput(env, 'cache', true),
     workers: workersInput(env),

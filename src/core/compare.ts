@@ -255,6 +255,16 @@ export function baseShardRefs(top: string, commit: string, policy: Policy, shard
 
 /** Returns the content key of working-tree shards: the index's blob id when the file is as the index has it, else sha256 of its bytes. */
 export async function workingTreeKeys(top: string, rootRel: string): Promise<(ref: ShardRef) => Promise<string>> {
+  const blobs = await cleanBlobs(top, rootRel);
+  return async (ref) => blobs.get(ref.path) ?? (await contentIdOf(ref));
+}
+
+/**
+ * Returns the git blob id of each file under the policy root (`rootRel`, from the repository's
+ * top) that is as the index has it, keyed by its path relative to the root; a file changed in the
+ * work tree, untracked or in a merge conflict has none.
+ */
+export async function cleanBlobs(top: string, rootRel: string): Promise<Map<string, string>> {
   const scope = rootRel === '' ? '.' : rootRel;
   const [staged, status] = await Promise.all([
     git(top, ['ls-files', '-s', '-z', '--full-name', '--', scope]),
@@ -273,7 +283,10 @@ export async function workingTreeKeys(top: string, rootRel: string): Promise<(re
     // XY path: Y is the work tree against the index; `??` is untracked.
     if (entry[1] !== ' ' || entry.startsWith('??')) blobs.delete(entry.slice(3));
   }
-  return async (ref) => blobs.get(rootRel === '' ? ref.path : `${rootRel}/${ref.path}`) ?? (await contentIdOf(ref));
+  const out = new Map<string, string>();
+  const prefix = rootRel === '' ? '' : `${rootRel}/`;
+  for (const [gitPath, blob] of blobs) if (gitPath.startsWith(prefix)) out.set(gitPath.slice(prefix.length), blob);
+  return out;
 }
 
 /** Returns each base→head rename git finds (similarity, not only equal bytes), as policy-root-relative paths. */

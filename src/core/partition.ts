@@ -6,10 +6,12 @@ import { readFile } from 'node:fs/promises';
 import { DuplicateIndexError } from '../measure/duplicates/index.js';
 import { buildReport } from '../judge/report.js';
 import type { Report } from '../judge/types.js';
+import type { Policy } from '../policy/types.js';
 import { partitionOf, PARTIAL_FORMAT, PARTIAL_VERSION, partialFromJson, type Partial } from '../results/partition.js';
 import type { ShardResult } from '../results/types.js';
 import type { SkippedFile } from '../read/types.js';
 import { assembleCorpus, ConfigError, discoverOrThrow, loadPolicyOrThrow, measureShards, prepareOrThrow, refuseOutputsAmongShards, type CheckOptions } from './check.js';
+import { cleanBlobs, gitTopLevel, rootInRepo } from './compare.js';
 
 /** Returns the partial result of partition `index` of `count` (1-based). */
 export async function scanPartition(policyFile: string, index: number, count: number, opts: Omit<CheckOptions, 'policies'>): Promise<Partial> {
@@ -24,6 +26,7 @@ export async function scanPartition(policyFile: string, index: number, count: nu
   const prepared = await prepareOrThrow(policy);
   const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
   results.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
+  const blobs = await blobsOf(policy, results);
   return {
     format: PARTIAL_FORMAT,
     version: PARTIAL_VERSION,
@@ -33,29 +36,54 @@ export async function scanPartition(policyFile: string, index: number, count: nu
     shardsInCorpus: discovery.shards.length,
     results,
     skipped: discovery.skipped.filter((s) => partitionOf(s.path, count) === index),
+    ...(blobs ? { blobs } : {}),
   };
 }
 
-/** Returns the report of a policy over the merged partial results; throws ConfigError when the parts are not one complete set measured under this policy. */
-export async function mergePartials(policyFile: string, partFiles: string[], opts: Omit<CheckOptions, 'policies'>): Promise<Report> {
-  const started = performance.now();
-  const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
-  const prepared = await prepareOrThrow(policy);
-  if (partFiles.length === 0) throw new ConfigError('merge: no partial result files given');
-  const parts: Array<{ file: string; partial: Partial }> = [];
-  for (const file of partFiles) {
-    let text: string;
-    try {
-      text = await readFile(file, 'utf8');
-    } catch (err) {
-      throw new ConfigError(`${file}: cannot read: ${(err as Error).message}`);
+/** Returns the git blob id of each measured shard whose file is as the index has it, when the root is in a git work tree; undefined outside one. */
+async function blobsOf(policy: Policy, results: readonly ShardResult[]): Promise<Record<string, string> | undefined> {
+  const top = await gitTopLevel(policy.root);
+  if (top === null) return undefined;
+  const clean = await cleanBlobs(top, await rootInRepo(top, policy));
+  const out: Record<string, string> = {};
+  for (const r of results) {
+    const blob = clean.get(r.path);
+    if (blob !== undefined) out[r.path] = blob;
+  }
+  return out;
+}
+
+/** The parts of one complete partitioned scan, checked to belong together. */
+export interface PartialSet {
+  parts: Array<{ file: string; partial: Partial }>;
+  results: ShardResult[];
+  skipped: SkippedFile[];
+}
+
+/** Reads one partial result file; throws ConfigError naming it when it cannot be read or is not a partial. */
+export async function readPartialFile(file: string): Promise<{ file: string; partial: Partial }> {
+  let text: string;
+  try {
+    text = await readFile(file, 'utf8');
+  } catch (err) {
+    throw new ConfigError(`${file}: cannot read: ${(err as Error).message}`);
+  }
+  const parsed = partialFromJson(text);
+  if (!parsed.ok) throw new ConfigError(`${file}: ${parsed.reason}`);
+  return { file, partial: parsed.partial };
+}
+
+/**
+ * Returns read parts as one set; throws ConfigError naming the file when one was measured under
+ * other settings than `settingsId` (those `policy` gives now), or when the parts are not exactly
+ * one of each partition of one corpus.
+ */
+export function checkPartialSet(parts: Array<{ file: string; partial: Partial }>, policy: { file: string }, settingsId: string): PartialSet {
+  if (parts.length === 0) throw new ConfigError('merge: no partial result files given');
+  for (const { file, partial } of parts) {
+    if (partial.settingsId !== settingsId) {
+      throw new ConfigError(`${file}: measured under other settings (${partial.settingsId}) than ${policy.file} gives now (${settingsId}): scan it again with this policy and sluice version`);
     }
-    const parsed = partialFromJson(text);
-    if (!parsed.ok) throw new ConfigError(`${file}: ${parsed.reason}`);
-    if (parsed.partial.settingsId !== prepared.settingsId) {
-      throw new ConfigError(`${file}: measured under other settings (${parsed.partial.settingsId}) than ${policy.file} gives now (${prepared.settingsId}): scan it again with this policy and sluice version`);
-    }
-    parts.push({ file, partial: parsed.partial });
   }
   const count = parts[0]!.partial.partition.count;
   const seen = new Map<number, string>();
@@ -72,6 +100,17 @@ export async function mergePartials(policyFile: string, partFiles: string[], opt
   const skipped: SkippedFile[] = parts.flatMap((p) => p.partial.skipped).sort((a, b) => (a.path < b.path ? -1 : 1));
   if (shardsInCorpus.size > 1) throw new ConfigError(`merge: the parts saw different corpora (${[...shardsInCorpus].join(' vs ')} shards): scan all partitions of the same commit`);
   if (results.length !== [...shardsInCorpus][0]) throw new ConfigError(`merge: the parts hold ${results.length} shards, the corpus has ${[...shardsInCorpus][0]}`);
+  return { parts, results, skipped };
+}
+
+export async function mergePartials(policyFile: string, partFiles: string[], opts: Omit<CheckOptions, 'policies'>): Promise<Report> {
+  const started = performance.now();
+  const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
+  const prepared = await prepareOrThrow(policy);
+  if (partFiles.length === 0) throw new ConfigError('merge: no partial result files given');
+  const read: Array<{ file: string; partial: Partial }> = [];
+  for (const file of partFiles) read.push(await readPartialFile(file));
+  const { parts, results, skipped } = checkPartialSet(read, policy, prepared.settingsId);
   let corpus;
   try {
     corpus = await assembleCorpus(policy, prepared, results, new Set(), skipped, opts.newShards, started);

@@ -9,6 +9,9 @@ import type { ShardResult } from './types.js';
 export const PARTIAL_FORMAT = 'sluice-partial';
 export const PARTIAL_VERSION = 1;
 
+/** A git object id: SHA-1, or SHA-256 in a repository of that object format. */
+const GIT_OBJECT_ID = /^(?:[0-9a-f]{40}|[0-9a-f]{64})$/;
+
 /** Returns the 1-based partition of a shard path among `count`: a hash of the path, so a shard stays in its partition as others are added. */
 export function partitionOf(path: string, count: number): number {
   const h = createHash('sha256').update(path).digest();
@@ -25,6 +28,12 @@ export interface Partial {
   shardsInCorpus: number;
   results: ShardResult[];
   skipped: SkippedFile[];
+  /**
+   * The git blob id of each measured shard whose file was as the index had it, by path; absent
+   * when the scan ran outside a git work tree. A job with the same blob at a path can take the
+   * shard's result as measured (the Action's `parts` input) without reading the file again.
+   */
+  blobs?: Record<string, string>;
 }
 
 /** Returns a partial as JSON text. */
@@ -51,6 +60,11 @@ export function partialFromJson(text: string): { ok: true; partial: Partial } | 
       return { ok: false, reason: `${where} is damaged: ${parsed.damaged}` };
     }
     results.push(parsed.result);
+  }
+  if (v.blobs !== undefined) {
+    const blobs = v.blobs as Record<string, unknown> | null;
+    const bad = typeof blobs !== 'object' || blobs === null || Array.isArray(blobs) ? '' : Object.entries(blobs).find(([, b]) => typeof b !== 'string' || !GIT_OBJECT_ID.test(b))?.[0];
+    if (bad !== undefined) return { ok: false, reason: bad === '' ? '`blobs` is not an object of paths and git blob ids' : `\`blobs\` holds no git blob id for ${bad}` };
   }
   return { ok: true, partial: { ...(v as unknown as Partial), results } };
 }
