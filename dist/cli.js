@@ -42850,7 +42850,7 @@ async function scanPartition(policyFile, index2, count3, opts) {
   const prepared = await prepareOrThrow(policy);
   const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
   results.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
-  const blobs = await blobsOf(policy, results);
+  const blobs = await blobsOf(policy, results, opts.onWarning);
   return {
     format: PARTIAL_FORMAT,
     version: PARTIAL_VERSION,
@@ -42863,10 +42863,16 @@ async function scanPartition(policyFile, index2, count3, opts) {
     ...blobs ? { blobs } : {}
   };
 }
-async function blobsOf(policy, results) {
+async function blobsOf(policy, results, onWarning) {
   const top = await gitTopLevel(policy.root);
   if (top === null) return void 0;
-  const clean3 = await cleanBlobs(top, await rootInRepo(top, policy));
+  let clean3;
+  try {
+    clean3 = await cleanBlobs(top, await rootInRepo(top, policy));
+  } catch (err2) {
+    onWarning?.(`the part records no git blob ids (${err2.message}); a job given it as \`parts\` measures its shards again`);
+    return void 0;
+  }
   const out = {};
   for (const r of results) {
     const blob = clean3.get(r.path);

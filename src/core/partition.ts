@@ -26,7 +26,7 @@ export async function scanPartition(policyFile: string, index: number, count: nu
   const prepared = await prepareOrThrow(policy);
   const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
   results.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
-  const blobs = await blobsOf(policy, results);
+  const blobs = await blobsOf(policy, results, opts.onWarning);
   return {
     format: PARTIAL_FORMAT,
     version: PARTIAL_VERSION,
@@ -40,11 +40,21 @@ export async function scanPartition(policyFile: string, index: number, count: nu
   };
 }
 
-/** Returns the git blob id of each measured shard whose file is as the index has it, when the root is in a git work tree; undefined outside one. */
-async function blobsOf(policy: Policy, results: readonly ShardResult[]): Promise<Record<string, string> | undefined> {
+/**
+ * Returns the git blob id of each measured shard whose file is as the index has it, when the root
+ * is in a git work tree; undefined outside one, or (with a warning) when git cannot list the index:
+ * the ids only spare a later job reading the shards again.
+ */
+async function blobsOf(policy: Policy, results: readonly ShardResult[], onWarning?: (m: string) => void): Promise<Record<string, string> | undefined> {
   const top = await gitTopLevel(policy.root);
   if (top === null) return undefined;
-  const clean = await cleanBlobs(top, await rootInRepo(top, policy));
+  let clean: Map<string, string>;
+  try {
+    clean = await cleanBlobs(top, await rootInRepo(top, policy));
+  } catch (err) {
+    onWarning?.(`the part records no git blob ids (${(err as Error).message}); a job given it as \`parts\` measures its shards again`);
+    return undefined;
+  }
   const out: Record<string, string> = {};
   for (const r of results) {
     const blob = clean.get(r.path);
