@@ -22699,7 +22699,7 @@ function signedPoints(off) {
   return `${r > 0 ? "+" : r < 0 ? "\u2212" : "\xB1"}${Math.abs(r).toFixed(1)}`;
 }
 function pct(x) {
-  return x === null ? "n/a" : `${(x * 100).toFixed(1)} %`;
+  return x === null ? "n/a" : `${(x * 100).toFixed(1).replace(/^-(?=0\.0$)/, "").replace(/^-/, "\u2212")} %`;
 }
 function outcome(policy, rule, scope, measured, limit, unit, failed, message, locations = []) {
   const severity = policy.severity[rule] ?? "error";
@@ -43032,7 +43032,7 @@ function codePath(path8) {
 
 // src/render/format.ts
 function percent(x) {
-  return x === null || x === void 0 ? "\u2013" : `${(x * 100).toFixed(1)} %`;
+  return x === null || x === void 0 ? "\u2013" : `${(x * 100).toFixed(1).replace(/^-(?=0\.0$)/, "").replace(/^-/, "\u2212")} %`;
 }
 function count2(n) {
   return n === null || n === void 0 ? "\u2013" : n.toLocaleString("en-US");

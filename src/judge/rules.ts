@@ -13,15 +13,15 @@ import type { LanguageFigures, Location, RuleOutcome, SamplingSetting, Verdict }
 /** How many file:line locations one outcome lists; the counts stay complete. */
 export const LOCATIONS_PER_RULE = 10;
 
-/** Formats a share as a percentage with one decimal. */
 /** A share's distance from its target in points, signed as the views sign shifts: +8.3, −15.3 (U+2212), ±0.0. */
 function signedPoints(off: number): string {
   const r = Math.round(off * 1000) / 10;
   return `${r > 0 ? '+' : r < 0 ? '\u2212' : '±'}${Math.abs(r).toFixed(1)}`;
 }
 
+/** Formats a share as a percentage with one decimal, a negative one with U+2212 as the views write signs (−79.9 %). */
 export function pct(x: number | null): string {
-  return x === null ? 'n/a' : `${(x * 100).toFixed(1)} %`;
+  return x === null ? 'n/a' : `${(x * 100).toFixed(1).replace(/^-(?=0\.0$)/, '').replace(/^-/, '\u2212')} %`;
 }
 
 function outcome(

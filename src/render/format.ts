@@ -3,9 +3,9 @@
 
 import type { Report } from '../judge/types.js';
 
-/** Formats a share (0..1) as a percentage with one decimal, or an en dash for none. */
+/** Formats a share (0..1) as a percentage with one decimal (a negative change with U+2212, as points are signed), or an en dash for none. */
 export function percent(x: number | null | undefined): string {
-  return x === null || x === undefined ? '–' : `${(x * 100).toFixed(1)} %`;
+  return x === null || x === undefined ? '–' : `${(x * 100).toFixed(1).replace(/^-(?=0\.0$)/, '').replace(/^-/, '\u2212')} %`;
 }
 
 /** Formats a count with thin grouping (12,345). */

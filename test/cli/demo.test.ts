@@ -63,6 +63,11 @@ describe('the newsroom demo', () => {
     // GPT-2's byte-level vocabulary splits Devanagari into many more pieces (measured on UDHR Hindi on this machine class: ~8.3).
     expect(hin.baseline!.fertility!).toBeGreaterThan(3 * hin.fertility!.fertility!);
     expect(clean.report!.tokenizer!.mixShiftPoints!.hin).toBeLessThan(-10);
+    // The fall is written with the minus sign the shifts use (U+2212), in the message and the terminal's column alike.
+    const regression = clean.report!.rules.find((o) => o.rule === 'fertility' && o.scope === 'language:hin' && o.message.includes(' vs '));
+    expect(regression?.message).toMatch(/ vs 7\.\d{3} under gpt2 \(\u2212\d+\.\d %; limit \+5\.0 %\)$/);
+    expect(clean.stdout).toMatch(/fertility +hin +\u2212\d+\.\d % limit 5\.0 %/);
+    expect(clean.stdout).not.toMatch(/-\d+\.\d %/);
   });
 
   it('passes the clean corpus with exit 0', () => {
