@@ -12607,9 +12607,9 @@ var require_picomatch = __commonJS({
     var utils = require_utils();
     var constants = require_constants();
     var isObject = (val) => val && typeof val === "object" && !Array.isArray(val);
-    var picomatch2 = (glob, options, returnState = false) => {
+    var picomatch3 = (glob, options, returnState = false) => {
       if (Array.isArray(glob)) {
-        const fns = glob.map((input) => picomatch2(input, options, returnState));
+        const fns = glob.map((input) => picomatch3(input, options, returnState));
         const arrayMatcher = (str) => {
           for (const isMatch of fns) {
             const state2 = isMatch(str);
@@ -12625,16 +12625,16 @@ var require_picomatch = __commonJS({
       }
       const opts = options || {};
       const posix = opts.windows;
-      const regex = isState ? picomatch2.compileRe(glob, options) : picomatch2.makeRe(glob, options, false, true);
+      const regex = isState ? picomatch3.compileRe(glob, options) : picomatch3.makeRe(glob, options, false, true);
       const state = regex.state;
       delete regex.state;
       let isIgnored = () => false;
       if (opts.ignore) {
         const ignoreOpts = { ...options, ignore: null, onMatch: null, onResult: null };
-        isIgnored = picomatch2(opts.ignore, ignoreOpts, returnState);
+        isIgnored = picomatch3(opts.ignore, ignoreOpts, returnState);
       }
       const matcher = (input, returnObject = false) => {
-        const { isMatch, match, output } = picomatch2.test(input, regex, options, { glob, posix });
+        const { isMatch, match, output } = picomatch3.test(input, regex, options, { glob, posix });
         const result = { glob, state, regex, posix, input, output, match, isMatch };
         if (typeof opts.onResult === "function") {
           opts.onResult(result);
@@ -12660,7 +12660,7 @@ var require_picomatch = __commonJS({
       }
       return matcher;
     };
-    picomatch2.test = (input, regex, options, { glob, posix } = {}) => {
+    picomatch3.test = (input, regex, options, { glob, posix } = {}) => {
       if (typeof input !== "string") {
         throw new TypeError("Expected input to be a string");
       }
@@ -12677,24 +12677,24 @@ var require_picomatch = __commonJS({
       }
       if (match === false || opts.capture === true) {
         if (opts.matchBase === true || opts.basename === true) {
-          match = picomatch2.matchBase(input, regex, options, posix);
+          match = picomatch3.matchBase(input, regex, options, posix);
         } else {
           match = regex.exec(output);
         }
       }
       return { isMatch: Boolean(match), match, output };
     };
-    picomatch2.matchBase = (input, glob, options) => {
-      const regex = glob instanceof RegExp ? glob : picomatch2.makeRe(glob, options);
+    picomatch3.matchBase = (input, glob, options) => {
+      const regex = glob instanceof RegExp ? glob : picomatch3.makeRe(glob, options);
       return regex.test(utils.basename(input));
     };
-    picomatch2.isMatch = (str, patterns, options) => picomatch2(patterns, options)(str);
-    picomatch2.parse = (pattern, options) => {
-      if (Array.isArray(pattern)) return pattern.map((p) => picomatch2.parse(p, options));
+    picomatch3.isMatch = (str, patterns, options) => picomatch3(patterns, options)(str);
+    picomatch3.parse = (pattern, options) => {
+      if (Array.isArray(pattern)) return pattern.map((p) => picomatch3.parse(p, options));
       return parse2(pattern, { ...options, fastpaths: false });
     };
-    picomatch2.scan = (input, options) => scan3(input, options);
-    picomatch2.compileRe = (state, options, returnOutput = false, returnState = false) => {
+    picomatch3.scan = (input, options) => scan3(input, options);
+    picomatch3.compileRe = (state, options, returnOutput = false, returnState = false) => {
       if (returnOutput === true) {
         return state.output;
       }
@@ -12705,13 +12705,13 @@ var require_picomatch = __commonJS({
       if (state && state.negated === true) {
         source = `^(?!${source}).*$`;
       }
-      const regex = picomatch2.toRegex(source, options);
+      const regex = picomatch3.toRegex(source, options);
       if (returnState === true) {
         regex.state = state;
       }
       return regex;
     };
-    picomatch2.makeRe = (input, options = {}, returnOutput = false, returnState = false) => {
+    picomatch3.makeRe = (input, options = {}, returnOutput = false, returnState = false) => {
       if (!input || typeof input !== "string") {
         throw new TypeError("Expected a non-empty string");
       }
@@ -12722,9 +12722,9 @@ var require_picomatch = __commonJS({
       if (!parsed.output) {
         parsed = parse2(input, options);
       }
-      return picomatch2.compileRe(parsed, options, returnOutput, returnState);
+      return picomatch3.compileRe(parsed, options, returnOutput, returnState);
     };
-    picomatch2.toRegex = (source, options) => {
+    picomatch3.toRegex = (source, options) => {
       try {
         const opts = options || {};
         return new RegExp(source, opts.flags || (opts.nocase ? "i" : ""));
@@ -12733,8 +12733,8 @@ var require_picomatch = __commonJS({
         return /$^/;
       }
     };
-    picomatch2.constants = constants;
-    module.exports = picomatch2;
+    picomatch3.constants = constants;
+    module.exports = picomatch3;
   }
 });
 
@@ -12744,14 +12744,14 @@ var require_picomatch2 = __commonJS({
     "use strict";
     var pico = require_picomatch();
     var utils = require_utils();
-    function picomatch2(glob, options, returnState = false) {
+    function picomatch3(glob, options, returnState = false) {
       if (options && (options.windows === null || options.windows === void 0)) {
         options = { ...options, windows: utils.isWindows() };
       }
       return pico(glob, options, returnState);
     }
-    Object.assign(picomatch2, pico);
-    module.exports = picomatch2;
+    Object.assign(picomatch3, pico);
+    module.exports = picomatch3;
   }
 });
 
@@ -15736,9 +15736,9 @@ var require_picomatch3 = __commonJS({
     var utils = require_utils3();
     var constants = require_constants3();
     var isObject = (val) => val && typeof val === "object" && !Array.isArray(val);
-    var picomatch2 = (glob, options, returnState = false) => {
+    var picomatch3 = (glob, options, returnState = false) => {
       if (Array.isArray(glob)) {
-        const fns = glob.map((input) => picomatch2(input, options, returnState));
+        const fns = glob.map((input) => picomatch3(input, options, returnState));
         const arrayMatcher = (str) => {
           for (const isMatch of fns) {
             const state2 = isMatch(str);
@@ -15754,16 +15754,16 @@ var require_picomatch3 = __commonJS({
       }
       const opts = options || {};
       const posix = utils.isWindows(options);
-      const regex = isState ? picomatch2.compileRe(glob, options) : picomatch2.makeRe(glob, options, false, true);
+      const regex = isState ? picomatch3.compileRe(glob, options) : picomatch3.makeRe(glob, options, false, true);
       const state = regex.state;
       delete regex.state;
       let isIgnored = () => false;
       if (opts.ignore) {
         const ignoreOpts = { ...options, ignore: null, onMatch: null, onResult: null };
-        isIgnored = picomatch2(opts.ignore, ignoreOpts, returnState);
+        isIgnored = picomatch3(opts.ignore, ignoreOpts, returnState);
       }
       const matcher = (input, returnObject = false) => {
-        const { isMatch, match, output } = picomatch2.test(input, regex, options, { glob, posix });
+        const { isMatch, match, output } = picomatch3.test(input, regex, options, { glob, posix });
         const result = { glob, state, regex, posix, input, output, match, isMatch };
         if (typeof opts.onResult === "function") {
           opts.onResult(result);
@@ -15789,7 +15789,7 @@ var require_picomatch3 = __commonJS({
       }
       return matcher;
     };
-    picomatch2.test = (input, regex, options, { glob, posix } = {}) => {
+    picomatch3.test = (input, regex, options, { glob, posix } = {}) => {
       if (typeof input !== "string") {
         throw new TypeError("Expected input to be a string");
       }
@@ -15806,24 +15806,24 @@ var require_picomatch3 = __commonJS({
       }
       if (match === false || opts.capture === true) {
         if (opts.matchBase === true || opts.basename === true) {
-          match = picomatch2.matchBase(input, regex, options, posix);
+          match = picomatch3.matchBase(input, regex, options, posix);
         } else {
           match = regex.exec(output);
         }
       }
       return { isMatch: Boolean(match), match, output };
     };
-    picomatch2.matchBase = (input, glob, options, posix = utils.isWindows(options)) => {
-      const regex = glob instanceof RegExp ? glob : picomatch2.makeRe(glob, options);
+    picomatch3.matchBase = (input, glob, options, posix = utils.isWindows(options)) => {
+      const regex = glob instanceof RegExp ? glob : picomatch3.makeRe(glob, options);
       return regex.test(path8.basename(input));
     };
-    picomatch2.isMatch = (str, patterns, options) => picomatch2(patterns, options)(str);
-    picomatch2.parse = (pattern, options) => {
-      if (Array.isArray(pattern)) return pattern.map((p) => picomatch2.parse(p, options));
+    picomatch3.isMatch = (str, patterns, options) => picomatch3(patterns, options)(str);
+    picomatch3.parse = (pattern, options) => {
+      if (Array.isArray(pattern)) return pattern.map((p) => picomatch3.parse(p, options));
       return parse2(pattern, { ...options, fastpaths: false });
     };
-    picomatch2.scan = (input, options) => scan3(input, options);
-    picomatch2.compileRe = (state, options, returnOutput = false, returnState = false) => {
+    picomatch3.scan = (input, options) => scan3(input, options);
+    picomatch3.compileRe = (state, options, returnOutput = false, returnState = false) => {
       if (returnOutput === true) {
         return state.output;
       }
@@ -15834,13 +15834,13 @@ var require_picomatch3 = __commonJS({
       if (state && state.negated === true) {
         source = `^(?!${source}).*$`;
       }
-      const regex = picomatch2.toRegex(source, options);
+      const regex = picomatch3.toRegex(source, options);
       if (returnState === true) {
         regex.state = state;
       }
       return regex;
     };
-    picomatch2.makeRe = (input, options = {}, returnOutput = false, returnState = false) => {
+    picomatch3.makeRe = (input, options = {}, returnOutput = false, returnState = false) => {
       if (!input || typeof input !== "string") {
         throw new TypeError("Expected a non-empty string");
       }
@@ -15851,9 +15851,9 @@ var require_picomatch3 = __commonJS({
       if (!parsed.output) {
         parsed = parse2(input, options);
       }
-      return picomatch2.compileRe(parsed, options, returnOutput, returnState);
+      return picomatch3.compileRe(parsed, options, returnOutput, returnState);
     };
-    picomatch2.toRegex = (source, options) => {
+    picomatch3.toRegex = (source, options) => {
       try {
         const opts = options || {};
         return new RegExp(source, opts.flags || (opts.nocase ? "i" : ""));
@@ -15862,8 +15862,8 @@ var require_picomatch3 = __commonJS({
         return /$^/;
       }
     };
-    picomatch2.constants = constants;
-    module.exports = picomatch2;
+    picomatch3.constants = constants;
+    module.exports = picomatch3;
   }
 });
 
@@ -15881,7 +15881,7 @@ var require_micromatch = __commonJS({
     "use strict";
     var util = __require("util");
     var braces = require_braces();
-    var picomatch2 = require_picomatch4();
+    var picomatch3 = require_picomatch4();
     var utils = require_utils3();
     var isEmptyString = (v) => v === "" || v === "./";
     var hasBraces = (v) => {
@@ -15902,7 +15902,7 @@ var require_micromatch = __commonJS({
         }
       };
       for (let i = 0; i < patterns.length; i++) {
-        let isMatch = picomatch2(String(patterns[i]), { ...options, onResult }, true);
+        let isMatch = picomatch3(String(patterns[i]), { ...options, onResult }, true);
         let negated = isMatch.state.negated || isMatch.state.negatedExtglob;
         if (negated) negatives++;
         for (let item of list) {
@@ -15930,8 +15930,8 @@ var require_micromatch = __commonJS({
       return matches;
     };
     micromatch.match = micromatch;
-    micromatch.matcher = (pattern, options) => picomatch2(pattern, options);
-    micromatch.isMatch = (str, patterns, options) => picomatch2(patterns, options)(str);
+    micromatch.matcher = (pattern, options) => picomatch3(pattern, options);
+    micromatch.isMatch = (str, patterns, options) => picomatch3(patterns, options)(str);
     micromatch.any = micromatch.isMatch;
     micromatch.not = (list, patterns, options = {}) => {
       patterns = [].concat(patterns).map(String);
@@ -15978,7 +15978,7 @@ var require_micromatch = __commonJS({
     micromatch.some = (list, patterns, options) => {
       let items = [].concat(list);
       for (let pattern of [].concat(patterns)) {
-        let isMatch = picomatch2(String(pattern), options);
+        let isMatch = picomatch3(String(pattern), options);
         if (items.some((item) => isMatch(item))) {
           return true;
         }
@@ -15988,7 +15988,7 @@ var require_micromatch = __commonJS({
     micromatch.every = (list, patterns, options) => {
       let items = [].concat(list);
       for (let pattern of [].concat(patterns)) {
-        let isMatch = picomatch2(String(pattern), options);
+        let isMatch = picomatch3(String(pattern), options);
         if (!items.every((item) => isMatch(item))) {
           return false;
         }
@@ -15999,23 +15999,23 @@ var require_micromatch = __commonJS({
       if (typeof str !== "string") {
         throw new TypeError(`Expected a string: "${util.inspect(str)}"`);
       }
-      return [].concat(patterns).every((p) => picomatch2(p, options)(str));
+      return [].concat(patterns).every((p) => picomatch3(p, options)(str));
     };
     micromatch.capture = (glob, input, options) => {
       let posix = utils.isWindows(options);
-      let regex = picomatch2.makeRe(String(glob), { ...options, capture: true });
+      let regex = picomatch3.makeRe(String(glob), { ...options, capture: true });
       let match = regex.exec(posix ? utils.toPosixSlashes(input) : input);
       if (match) {
         return match.slice(1).map((v) => v === void 0 ? "" : v);
       }
     };
-    micromatch.makeRe = (...args) => picomatch2.makeRe(...args);
-    micromatch.scan = (...args) => picomatch2.scan(...args);
+    micromatch.makeRe = (...args) => picomatch3.makeRe(...args);
+    micromatch.scan = (...args) => picomatch3.scan(...args);
     micromatch.parse = (patterns, options) => {
       let res = [];
       for (let pattern of [].concat(patterns || [])) {
         for (let str of braces(String(pattern), options)) {
-          res.push(picomatch2.parse(str, options));
+          res.push(picomatch3.parse(str, options));
         }
       }
       return res;
@@ -33856,15 +33856,15 @@ function invertAnew(group, languages2) {
     return rankOf;
   });
   const stride = Math.max(8, Math.ceil(languages2.length / 8) * 8);
-  const rowOf2 = new Int32Array(internCount);
+  const rowOf3 = new Int32Array(internCount);
   let rowCount = 1;
-  for (const rankOf of perLanguage2) for (const id of rankOf.keys()) if (rowOf2[id] === 0) rowOf2[id] = rowCount++;
+  for (const rankOf of perLanguage2) for (const id of rankOf.keys()) if (rowOf3[id] === 0) rowOf3[id] = rowCount++;
   const rows = new Int16Array(rowCount * stride);
   perLanguage2.forEach((rankOf, l) => {
-    for (const [id, rank2] of rankOf) rows[rowOf2[id] * stride + l] = rank2 + 1;
+    for (const [id, rank2] of rankOf) rows[rowOf3[id] * stride + l] = rank2 + 1;
   });
   const kernel5 = francKernel();
-  return { languages: languages2, rowOfAt: kernel5.place(rowOf2), rowsAt: kernel5.place(rows), stride };
+  return { languages: languages2, rowOfAt: kernel5.place(rowOf3), rowsAt: kernel5.place(rows), stride };
 }
 var foldedUnit;
 var SEPARATOR = 32;
@@ -42740,16 +42740,336 @@ async function runCheck(opts) {
   return reports;
 }
 
+// src/core/compare.ts
+import { execFile, spawn } from "node:child_process";
+import { createHash as createHash6 } from "node:crypto";
+import { createWriteStream } from "node:fs";
+import { mkdtemp, readFile as readFile5, realpath as realpath2, rename as rename2, rm, writeFile as writeFile2 } from "node:fs/promises";
+var import_picomatch2 = __toESM(require_picomatch2(), 1);
+import { tmpdir } from "node:os";
+import { pipeline } from "node:stream/promises";
+import path6 from "node:path";
+
+// src/judge/comparison.ts
+function shardChanges(base, head, gitRenames, docs = { base: /* @__PURE__ */ new Map(), head: /* @__PURE__ */ new Map() }) {
+  const changes = [];
+  const added = [...head.keys()].filter((p) => !base.has(p));
+  const deleted = new Set([...base.keys()].filter((p) => !head.has(p)));
+  const deletedByKey = /* @__PURE__ */ new Map();
+  for (const p of deleted) deletedByKey.set(base.get(p), p);
+  const d = (b, h) => ({ base: b === void 0 ? null : docs.base.get(b) ?? null, head: h === void 0 ? null : docs.head.get(h) ?? null });
+  for (const p of added) {
+    const from = [gitRenames.get(p), deletedByKey.get(head.get(p))].find((f) => f !== void 0 && deleted.has(f));
+    if (from !== void 0) {
+      deleted.delete(from);
+      changes.push({ status: "renamed", path: p, from, edited: base.get(from) !== head.get(p), docs: d(from, p) });
+    } else changes.push({ status: "added", path: p, docs: d(void 0, p) });
+  }
+  for (const [p, key] of head) if (base.has(p) && base.get(p) !== key) changes.push({ status: "modified", path: p, docs: d(p, p) });
+  for (const p of deleted) changes.push({ status: "deleted", path: p, docs: d(p, void 0) });
+  return changes.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+}
+function compareReports(base, head, commit, label, changes, addedDuplicates) {
+  const unit = head.mixUnit;
+  const keys = [.../* @__PURE__ */ new Set([...Object.keys(head.languages), ...Object.keys(base?.languages ?? {})])];
+  const languages2 = [];
+  for (const key of keys) {
+    const h = head.languages[key];
+    const b = base?.languages[key];
+    if (!h?.docs && !b?.docs && h?.target === void 0) continue;
+    const share = { base: b ? b.share[unit] ?? null : base ? 0 : null, head: h ? h.share[unit] ?? null : 0 };
+    const fertility = { base: b?.fertility?.fertility ?? null, head: h?.fertility?.fertility ?? null };
+    const row = {
+      key,
+      share,
+      shiftPoints: share.base !== null && share.head !== null ? (share.head - share.base) * 100 : null,
+      fertility,
+      fertilityChange: fertility.base && fertility.head !== null ? fertility.head / fertility.base - 1 : null
+    };
+    const target = h?.target ?? b?.target;
+    if (target !== void 0) row.target = target;
+    languages2.push(row);
+  }
+  const id = (r) => `${r.rule}\0${r.scope}`;
+  const baseRules = /* @__PURE__ */ new Map();
+  const RANK2 = { pass: 0, unjudged: 1, uncertain: 2, warn: 3, fail: 4 };
+  const worst = (a, b) => a !== void 0 && RANK2[a] > RANK2[b] ? a : b;
+  for (const r of base?.rules ?? []) baseRules.set(id(r), worst(baseRules.get(id(r)), r.verdict));
+  const headRules = /* @__PURE__ */ new Map();
+  for (const r of head.rules) {
+    const prev = headRules.get(id(r));
+    const verdict = worst(prev?.verdict, r.verdict);
+    headRules.set(id(r), { verdict, message: prev && prev.verdict === verdict ? prev.message : r.message, rule: r.rule, scope: r.scope });
+  }
+  const flipped = [];
+  if (base) {
+    for (const [k, h] of headRules) {
+      const from = baseRules.get(k) ?? "none";
+      if (from !== h.verdict) flipped.push({ rule: h.rule, scope: h.scope, from, to: h.verdict, message: h.message });
+    }
+    for (const r of base.rules) {
+      if (!headRules.has(id(r)) && r.verdict !== "pass" && !flipped.some((f) => id(f) === id(r))) flipped.push({ rule: r.rule, scope: r.scope, from: baseRules.get(id(r)), to: "none", message: r.message });
+    }
+  }
+  const comparison = {
+    base: { commit, label },
+    mixUnit: unit,
+    changes,
+    shards: { base: base?.input.shards ?? null, head: head.input.shards },
+    docs: { base: base?.totals.docs ?? null, head: head.totals.docs },
+    words: { base: base?.totals.words ?? null, head: head.totals.words },
+    tokens: { base: base?.totals.tokens ?? null, head: head.totals.tokens ?? null },
+    languages: languages2,
+    verdict: { base: base?.verdict ?? null, head: head.verdict },
+    flipped
+  };
+  if (addedDuplicates) comparison.addedDuplicates = addedDuplicates;
+  return comparison;
+}
+
+// src/core/compare.ts
+var GIT_MAX_BUFFER_BYTES = 1024 * 1024 * 1024;
+var FILE_MODES = /* @__PURE__ */ new Set(["100644", "100755"]);
+async function baseMemoKey(policy, settingsId, commit) {
+  const text = await readFile5(policy.file, "utf8");
+  return `base${createHash6("sha256").update(`${text}\0${settingsId}\0${commit}`).digest("hex").slice(0, 32)}`;
+}
+async function readBaseMemo(cacheDir, settingsId, key) {
+  try {
+    return JSON.parse(await readFile5(path6.join(cacheDir, `${settingsId}-${key}.json`), "utf8"));
+  } catch {
+    return void 0;
+  }
+}
+async function writeBaseMemo(cacheDir, settingsId, key, report, corpus) {
+  const memo = { report, docs: Object.fromEntries(corpus.shards.map((s) => [s.path, s.read.docs])) };
+  await makeDirectory(cacheDir);
+  const file = path6.join(cacheDir, `${settingsId}-${key}.json`);
+  await writeFile2(`${file}.tmp`, JSON.stringify(memo));
+  await rename2(`${file}.tmp`, file);
+}
+var GitError = class extends Error {
+  name = "GitError";
+};
+function git(cwd, args) {
+  return new Promise((resolve, reject) => {
+    execFile("git", args, { cwd, maxBuffer: GIT_MAX_BUFFER_BYTES, encoding: "utf8" }, (err2, stdout, stderr) => {
+      if (err2) reject(new GitError(`git ${args.join(" ")}: ${(stderr || err2.message).trim()}`));
+      else resolve(stdout);
+    });
+  });
+}
+async function gitTopLevel(dir) {
+  try {
+    return await realpath2((await git(dir, ["rev-parse", "--show-toplevel"])).trim());
+  } catch {
+    return null;
+  }
+}
+async function resolveCommit(top, ref) {
+  try {
+    return (await git(top, ["rev-parse", "--verify", "--quiet", `${ref}^{commit}`])).trim();
+  } catch {
+    throw new ConfigError(
+      `base \`${ref}\` is not a commit in this clone; check out with enough history to contain it (actions/checkout with \`fetch-depth: 0\`, or fetch the base ref before running sluice)`
+    );
+  }
+}
+async function rootInRepo(top, policy) {
+  const rel = path6.relative(top, await realpath2(policy.root)).split(path6.sep).join("/");
+  if (rel === ".." || rel.startsWith("../") || path6.isAbsolute(rel)) {
+    throw new ConfigError(`${policy.file}: root ${policy.root} is outside the git repository ${top}; a base comparison needs the corpus in the repository`);
+  }
+  return rel;
+}
+function corpusMatcher(policy) {
+  const include = (0, import_picomatch2.default)(policy.corpus.include, { dot: false });
+  const exclude = policy.corpus.exclude.length ? (0, import_picomatch2.default)(policy.corpus.exclude, { dot: false }) : () => false;
+  return (p) => include(p) && !exclude(p);
+}
+async function listCommitShards(top, commit, policy, rootRel) {
+  const out = await git(top, ["ls-tree", "-r", "-l", "-z", "--full-tree", commit, "--", rootRel === "" ? "." : rootRel]);
+  const matches = corpusMatcher(policy);
+  const shards = [];
+  for (const entry of out.split("\0")) {
+    if (!entry) continue;
+    const tab = entry.indexOf("	");
+    const [mode, type, blob, size] = entry.slice(0, tab).split(/ +/);
+    const gitPath = entry.slice(tab + 1);
+    if (type !== "blob" || !FILE_MODES.has(mode ?? "")) continue;
+    const rel = rootRel === "" ? gitPath : gitPath.slice(rootRel.length + 1);
+    if (!matches(rel)) continue;
+    shards.push({ path: rel, gitPath, blob, sizeBytes: Number(size) });
+  }
+  return shards.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
+}
+function blobStream(top, blob) {
+  const child = spawn("git", ["cat-file", "blob", blob], { cwd: top, stdio: ["ignore", "pipe", "pipe"] });
+  let stderr = "";
+  child.stderr.on("data", (c) => stderr += c.toString());
+  child.on("close", (code) => {
+    if (code !== 0) child.stdout.destroy(new GitError(`git cat-file blob ${blob}: ${stderr.trim() || `exit ${code}`}`));
+  });
+  child.on("error", (err2) => child.stdout.destroy(err2));
+  return child.stdout;
+}
+function baseShardRefs(top, commit, policy, shards, onRead) {
+  const classify = pathClassifier(policy.corpus);
+  const refs = [];
+  for (const s of shards) {
+    const c = classify(s.path);
+    if (!c.supported) continue;
+    const ref = {
+      path: s.path,
+      absPath: `${commit.slice(0, 12)}:${s.gitPath}`,
+      format: c.format,
+      compression: c.compression,
+      encoding: c.encoding,
+      sizeBytes: s.sizeBytes,
+      open: () => {
+        onRead?.();
+        return blobStream(top, s.blob);
+      }
+    };
+    if (c.subset !== void 0) ref.subset = c.subset;
+    refs.push(ref);
+  }
+  return refs;
+}
+async function workingTreeKeys(top, rootRel) {
+  const blobs = await cleanBlobs(top, rootRel);
+  return async (ref) => blobs.get(ref.path) ?? await contentIdOf(ref);
+}
+async function cleanBlobs(top, rootRel) {
+  const scope = rootRel === "" ? "." : rootRel;
+  const [staged, status] = await Promise.all([
+    git(top, ["ls-files", "-s", "-z", "--full-name", "--", scope]),
+    // status refreshes stat data first, so a touched but unchanged file is not taken as changed.
+    git(top, ["status", "--porcelain=v1", "-z", "--untracked-files=all", "--no-renames", "--", scope])
+  ]);
+  const blobs = /* @__PURE__ */ new Map();
+  for (const entry of staged.split("\0")) {
+    if (!entry) continue;
+    const tab = entry.indexOf("	");
+    const [mode, blob, stage] = entry.slice(0, tab).split(" ");
+    if (stage === "0" && FILE_MODES.has(mode ?? "")) blobs.set(entry.slice(tab + 1), blob);
+  }
+  for (const entry of status.split("\0")) {
+    if (entry.length < 4) continue;
+    if (entry[1] !== " " || entry.startsWith("??")) blobs.delete(entry.slice(3));
+  }
+  const out = /* @__PURE__ */ new Map();
+  const prefix = rootRel === "" ? "" : `${rootRel}/`;
+  for (const [gitPath, blob] of blobs) if (gitPath.startsWith(prefix)) out.set(gitPath.slice(prefix.length), blob);
+  return out;
+}
+async function renamesBetween(top, commit, rootRel) {
+  const out = await git(top, ["diff", "--name-status", "-z", "-M", "--no-ext-diff", commit, "HEAD", "--", rootRel === "" ? "." : rootRel]);
+  const parts = out.split("\0");
+  const renames = /* @__PURE__ */ new Map();
+  const strip = (p) => rootRel === "" ? p : p.slice(rootRel.length + 1);
+  for (let i = 0; i < parts.length; ) {
+    const status = parts[i] ?? "";
+    if (!status) break;
+    if (status.startsWith("R") || status.startsWith("C")) {
+      if (status.startsWith("R")) renames.set(strip(parts[i + 2]), strip(parts[i + 1]));
+      i += 3;
+    } else i += 2;
+  }
+  return renames;
+}
+async function withBaseTokenizer(policy, top, baseCommit, baseLabel) {
+  const tok = policy.tokenizer;
+  if (!tok || tok.kind !== "file" || policy.baseline) return policy;
+  const rel = path6.relative(top, await realpath2(tok.absPath).catch(() => tok.absPath)).split(path6.sep).join("/");
+  if (rel.startsWith("..")) return policy;
+  let baseBlob;
+  let headBlob;
+  try {
+    baseBlob = (await git(top, ["rev-parse", `${baseCommit}:${rel}`])).trim();
+    headBlob = (await git(top, ["hash-object", "--", rel])).trim();
+  } catch {
+    return policy;
+  }
+  if (baseBlob === headBlob) return policy;
+  const dir = await mkdtemp(path6.join(tmpdir(), "sluice-base-tokenizer-"));
+  const file = path6.join(dir, path6.basename(rel));
+  await pipeline(blobStream(top, baseBlob), createWriteStream(file));
+  const baseline = { ...tok, file: `${tok.file} at ${baseLabel}`, absPath: file };
+  return { ...policy, baseline };
+}
+async function compareWithBase(givenPolicy, opts) {
+  const policy = await withBaseTokenizer(givenPolicy, opts.top, opts.baseCommit, opts.baseLabel);
+  const rootRel = await rootInRepo(opts.top, policy);
+  const [headKeyOf, baseShards, renames] = await Promise.all([
+    workingTreeKeys(opts.top, rootRel),
+    listCommitShards(opts.top, opts.baseCommit, policy, rootRel),
+    renamesBetween(opts.top, opts.baseCommit, rootRel)
+  ]);
+  const discovery = await discoverOrThrow(policy);
+  const prepared = await prepareOrThrow(policy);
+  const headKeys = /* @__PURE__ */ new Map();
+  for (const ref of discovery.shards) headKeys.set(ref.path, await headKeyOf(ref));
+  const baseKeys = new Map(baseShards.map((s) => [s.path, s.blob]));
+  for (const k of [...headKeys.values(), ...baseKeys.values()]) opts.onKey?.(k);
+  const isNew = (c) => c.status === "added" || c.status === "modified" || c.status === "renamed" && c.edited === true;
+  const newShards = shardChanges(baseKeys, headKeys, renames).filter(isNew).map((c) => c.path);
+  const headCorpus = await measureCorpus(policy, { ...opts.check, contentKey: async (ref) => headKeys.get(ref.path) ?? headKeyOf(ref), newShards }, { discovery, prepared });
+  const headReport = buildReport(policy, headCorpus, opts.check.cwd);
+  let base = null;
+  let baseDocs = /* @__PURE__ */ new Map();
+  let baseBlobReads = 0;
+  const refs = baseShardRefs(opts.top, opts.baseCommit, policy, baseShards, () => baseBlobReads += 1);
+  if (refs.length > 0) {
+    const { settingsId } = prepared;
+    const memoKey = opts.check.cacheDir ? await baseMemoKey(policy, settingsId, opts.baseCommit) : void 0;
+    if (memoKey) opts.onKey?.(memoKey);
+    const memo = memoKey ? await readBaseMemo(opts.check.cacheDir, settingsId, memoKey) : void 0;
+    if (memo) {
+      base = { report: memo.report };
+      baseDocs = new Map(Object.entries(memo.docs));
+    } else {
+      const { newShards: _unused, ...baseCheck } = opts.check;
+      const corpus = await measureCorpus(policy, { ...baseCheck, contentKey: async (ref) => baseKeys.get(ref.path) }, { discovery: { shards: refs, skipped: discovery.skipped }, prepared });
+      base = { corpus, report: buildReport(policy, corpus, opts.check.cwd) };
+      baseDocs = new Map(corpus.shards.map((s) => [s.path, s.read.docs]));
+      if (memoKey) await writeBaseMemo(opts.check.cacheDir, settingsId, memoKey, base.report, corpus);
+    }
+  }
+  const docsOf = (corpus) => new Map((corpus?.shards ?? []).map((s) => [s.path, s.read.docs]));
+  const changes = shardChanges(baseKeys, headKeys, renames, { base: baseDocs, head: docsOf(headCorpus) });
+  const comparison = compareReports(base?.report ?? null, headReport, opts.baseCommit, opts.baseLabel, changes, headCorpus.duplicatesAgainstExisting);
+  return { head: { report: headReport, corpus: headCorpus }, base, comparison, baseBlobReads };
+}
+async function runCheckAgainstBase(opts, baseRef) {
+  const out = [];
+  const scratch3 = opts.cacheDir === null ? await mkdtemp(path6.join(tmpdir(), "sluice-compare-")) : null;
+  const check2 = scratch3 === null ? opts : { ...opts, cacheDir: scratch3 };
+  try {
+    for (const file of opts.policies) {
+      const policy = await loadPolicyOrThrow(file, opts.root, opts.onWarning);
+      const top = await gitTopLevel(policy.root);
+      if (top === null) throw new ConfigError(`--base ${baseRef}: the corpus of ${policy.file} (${policy.root}) is not in a git work tree, so it has no base to compare with`);
+      const commit = await resolveCommit(top, baseRef);
+      const r = await compareWithBase(policy, { check: check2, top, baseCommit: commit, baseLabel: baseRef });
+      out.push({ report: r.head.report, comparison: r.comparison, baseShardsRead: r.baseBlobReads });
+    }
+  } finally {
+    if (scratch3 !== null) await rm(scratch3, { recursive: true, force: true });
+  }
+  return out;
+}
+
 // src/core/partition.ts
 import { readFile as readFile6 } from "node:fs/promises";
 
 // src/results/partition.ts
-import { createHash as createHash6 } from "node:crypto";
+import { createHash as createHash7 } from "node:crypto";
 var PARTIAL_FORMAT = "sluice-partial";
 var PARTIAL_VERSION = 1;
 var GIT_OBJECT_ID = /^(?:[0-9a-f]{40}|[0-9a-f]{64})$/;
 function partitionOf(path8, count3) {
-  const h = createHash6("sha256").update(path8).digest();
+  const h = createHash7("sha256").update(path8).digest();
   return h.readUInt32BE(0) % count3 + 1;
 }
 function partialToJson(p) {
@@ -42780,61 +43100,6 @@ function partialFromJson(text) {
     if (bad !== void 0) return { ok: false, reason: bad === "" ? "`blobs` is not an object of paths and git blob ids" : `\`blobs\` holds no git blob id for ${bad}` };
   }
   return { ok: true, partial: { ...v, results } };
-}
-
-// src/core/compare.ts
-import { execFile, spawn } from "node:child_process";
-import { mkdtemp, readFile as readFile5, realpath as realpath2, rename as rename2, writeFile as writeFile2 } from "node:fs/promises";
-import path6 from "node:path";
-var GIT_MAX_BUFFER_BYTES = 1024 * 1024 * 1024;
-var FILE_MODES = /* @__PURE__ */ new Set(["100644", "100755"]);
-var GitError = class extends Error {
-  name = "GitError";
-};
-function git(cwd, args) {
-  return new Promise((resolve, reject) => {
-    execFile("git", args, { cwd, maxBuffer: GIT_MAX_BUFFER_BYTES, encoding: "utf8" }, (err2, stdout, stderr) => {
-      if (err2) reject(new GitError(`git ${args.join(" ")}: ${(stderr || err2.message).trim()}`));
-      else resolve(stdout);
-    });
-  });
-}
-async function gitTopLevel(dir) {
-  try {
-    return await realpath2((await git(dir, ["rev-parse", "--show-toplevel"])).trim());
-  } catch {
-    return null;
-  }
-}
-async function rootInRepo(top, policy) {
-  const rel = path6.relative(top, await realpath2(policy.root)).split(path6.sep).join("/");
-  if (rel === ".." || rel.startsWith("../") || path6.isAbsolute(rel)) {
-    throw new ConfigError(`${policy.file}: root ${policy.root} is outside the git repository ${top}; a base comparison needs the corpus in the repository`);
-  }
-  return rel;
-}
-async function cleanBlobs(top, rootRel) {
-  const scope = rootRel === "" ? "." : rootRel;
-  const [staged, status] = await Promise.all([
-    git(top, ["ls-files", "-s", "-z", "--full-name", "--", scope]),
-    // status refreshes stat data first, so a touched but unchanged file is not taken as changed.
-    git(top, ["status", "--porcelain=v1", "-z", "--untracked-files=all", "--no-renames", "--", scope])
-  ]);
-  const blobs = /* @__PURE__ */ new Map();
-  for (const entry of staged.split("\0")) {
-    if (!entry) continue;
-    const tab = entry.indexOf("	");
-    const [mode, blob, stage] = entry.slice(0, tab).split(" ");
-    if (stage === "0" && FILE_MODES.has(mode ?? "")) blobs.set(entry.slice(tab + 1), blob);
-  }
-  for (const entry of status.split("\0")) {
-    if (entry.length < 4) continue;
-    if (entry[1] !== " " || entry.startsWith("??")) blobs.delete(entry.slice(3));
-  }
-  const out = /* @__PURE__ */ new Map();
-  const prefix = rootRel === "" ? "" : `${rootRel}/`;
-  for (const [gitPath, blob] of blobs) if (gitPath.startsWith(prefix)) out.set(gitPath.slice(prefix.length), blob);
-  return out;
 }
 
 // src/core/partition.ts
@@ -43003,12 +43268,6 @@ async function runShardWorker() {
   }
 }
 
-// src/render/json.ts
-function renderJson(report) {
-  return `${JSON.stringify(report, null, 2)}
-`;
-}
-
 // src/render/bars.ts
 var FULL = "\u2588";
 var PARTIAL = ["", "\u258F", "\u258E", "\u258D", "\u258C", "\u258B", "\u258A", "\u2589"];
@@ -43047,6 +43306,11 @@ function points(x) {
   if (x === null || x === void 0) return "\u2013";
   const r = Math.round(x * 10) / 10;
   return `${r > 0 ? "+" : r < 0 ? "\u2212" : "\xB1"}${Math.abs(r).toFixed(1)} pt`;
+}
+function signedPercent(x) {
+  if (x === null || x === void 0) return "\u2013";
+  const r = Math.round(x * 1e3) / 10;
+  return `${r > 0 ? "+" : r < 0 ? "\u2212" : "\xB1"}${Math.abs(r).toFixed(1)} %`;
 }
 function bytes2(n) {
   if (n < 1e3) return `${n} B`;
@@ -43328,6 +43592,153 @@ function clean2(s) {
   return s.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u202A-\u202E\u2066-\u2069]/g, (ch) => `U+${ch.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`);
 }
 
+// src/render/comparison.ts
+var MAX_CHANGE_ROWS = 50;
+var BAR_CELLS = 12;
+var ICON2 = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\u2754", unjudged: "\u26AA", none: "\u2796" };
+function urlSegment(segment) {
+  return encodeURIComponent(segment).replace(/[!'()*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`);
+}
+function linkTo(p, linkBase, text = codePath(p)) {
+  if (!linkBase) return text;
+  return `[${text}](${linkBase}/${p.split("/").map(urlSegment).join("/")})`;
+}
+function signed(n) {
+  if (n === null) return "\u2013";
+  return n > 0 ? `+${count2(n)}` : n < 0 ? `\u2212${count2(-n)}` : "\xB10";
+}
+function rowOf2(label, d) {
+  return `| ${label} | ${count2(d.base)} | ${count2(d.head)} | ${d.base === null || d.head === null ? "\u2013" : signed(d.head - d.base)} |`;
+}
+function changeCounts(changes) {
+  const by = (s) => changes.filter((c) => c.status === s).length;
+  const parts = ["added", "modified", "renamed", "deleted"].filter((s) => by(s) > 0).map((s) => `${by(s)} ${s}`);
+  return parts.length ? parts.join(", ") : "no shard changed";
+}
+function renderComparison(c, opts = {}) {
+  const out = [];
+  const baseName = `${codePath(c.base.label)}${c.base.label.startsWith(c.base.commit.slice(0, 7)) ? "" : ` (${codePath(c.base.commit.slice(0, 7))})`}`;
+  out.push(`### Against base ${baseName}`, "");
+  if (c.verdict.base === null) out.push(`The base has no shard this policy covers: every shard is new.`, "");
+  out.push("| | base | head | change |", "|---|---:|---:|---:|");
+  out.push(`| verdict | ${c.verdict.base === null ? "\u2013" : `${ICON2[c.verdict.base]} ${c.verdict.base}`} | ${ICON2[c.verdict.head]} ${c.verdict.head} | |`);
+  out.push(`| shards | ${count2(c.shards.base)} | ${count2(c.shards.head)} | ${changeCounts(c.changes)} |`);
+  out.push(rowOf2("documents", c.docs), rowOf2("words", c.words));
+  if (c.tokens.head !== null || c.tokens.base !== null) out.push(rowOf2("tokens", c.tokens));
+  for (const l of c.languages) {
+    out.push(`| ${escapeMarkdown(l.key)}: share of ${c.mixUnit} | ${percent(l.share.base)} | ${percent(l.share.head)} | ${points(l.shiftPoints)} |`);
+  }
+  if (c.addedDuplicates) {
+    const d = c.addedDuplicates;
+    out.push(`| duplicates the change adds against the rest | | | ${count2(d.exactDocs)} exact, ${count2(d.nearDocs)} near of ${count2(d.docs)} new documents |`);
+  }
+  out.push("");
+  if (c.flipped.length > 0) {
+    out.push("**Rules that changed:**", "");
+    for (const f of c.flipped) {
+      out.push(`- ${ICON2[f.to]} ${escapeMarkdown(f.rule)} \xB7 ${escapeMarkdown(f.scope.replace(/^language:/, ""))}: ${f.from} \u2192 ${f.to}${f.to !== "none" ? ` (${escapeMarkdown(f.message)})` : ""}`);
+    }
+    out.push("");
+  } else if (c.verdict.base !== null) {
+    out.push("No rule changed its verdict.", "");
+  }
+  out.push(`<details><summary>Mix against base (share of ${c.mixUnit})</summary>`, "");
+  out.push("| language | target | base | head | shift | base | head |", "|---|---:|---:|---:|---:|---|---|");
+  for (const l of c.languages) {
+    out.push(`| ${escapeMarkdown(l.key)} | ${percent(l.target)} | ${percent(l.share.base)} | ${percent(l.share.head)} | ${points(l.shiftPoints)} | ${bar(l.share.base ?? 0, BAR_CELLS)} | ${bar(l.share.head ?? 0, BAR_CELLS)} |`);
+  }
+  out.push("", "</details>", "");
+  const withFertility = c.languages.filter((l) => l.fertility.base !== null || l.fertility.head !== null);
+  if (withFertility.length > 0) {
+    out.push("<details><summary>Fertility against base (tokens per word, running text)</summary>", "");
+    out.push("| language | base | head | change |", "|---|---:|---:|---:|");
+    for (const l of withFertility) {
+      out.push(`| ${escapeMarkdown(l.key)} | ${fixed(l.fertility.base, 3)} | ${fixed(l.fertility.head, 3)} | ${signedPercent(l.fertilityChange)} |`);
+    }
+    out.push("", "</details>", "");
+  }
+  if (c.changes.length > 0) {
+    out.push(`<details><summary>Changed shards: ${changeCounts(c.changes)}</summary>`, "");
+    out.push("| change | shard | docs at base | docs at head |", "|---|---|---:|---:|");
+    for (const ch of c.changes.slice(0, MAX_CHANGE_ROWS)) {
+      const what = ch.status === "renamed" ? `renamed from ${codePath(ch.from ?? "")}${ch.edited ? " and edited" : ""}` : ch.status;
+      const shown = ch.status === "deleted" ? codePath(ch.path) : linkTo(ch.path, opts.linkBase);
+      out.push(`| ${what} | ${shown} | ${count2(ch.docs.base)} | ${count2(ch.docs.head)} |`);
+    }
+    if (c.changes.length > MAX_CHANGE_ROWS) out.push("", `\u2026and ${c.changes.length - MAX_CHANGE_ROWS} more (all are in the comparison JSON).`);
+    out.push("", "</details>", "");
+  }
+  if (c.addedDuplicates && c.addedDuplicates.perShard.some((s) => s.exactDocs + s.nearDocs > 0)) {
+    out.push(`<details><summary>Duplicates added against the rest of the corpus</summary>`, "");
+    out.push("| new or changed shard | documents | exact copies of existing | near copies of existing |", "|---|---:|---:|---:|");
+    for (const s of c.addedDuplicates.perShard.filter((x) => x.exactDocs + x.nearDocs > 0).slice(0, MAX_CHANGE_ROWS)) {
+      out.push(`| ${linkTo(s.shard, opts.linkBase)} | ${count2(s.docs)} | ${count2(s.exactDocs)} | ${count2(s.nearDocs)} |`);
+    }
+    out.push("", "</details>", "");
+  }
+  return out.join("\n").trimEnd();
+}
+function renderMarkdownWithComparison(report, comparison, opts = {}) {
+  const before = comparison ? renderComparison(comparison, opts) : void 0;
+  return renderMarkdown(report, { ...opts.linkBase ? { linkBase: opts.linkBase } : {}, ...before ? { before } : {} });
+}
+var TERMINAL_CHANGE_ROWS = 10;
+function renderComparisonTerminal(c, opts) {
+  const paintOf = (code) => (s) => opts.color ? `\x1B[${code}m${s}\x1B[0m` : s;
+  const bold = paintOf(1), dim = paintOf(2);
+  const byVerdict = { pass: paintOf(32), warn: paintOf(33), fail: paintOf(31), uncertain: paintOf(33), unjudged: dim, none: dim };
+  const verdict = (v) => byVerdict[v](v === "none" ? "none" : v.toUpperCase());
+  const lines = [];
+  const label = clean2(c.base.label);
+  lines.push(`${bold(`Against base ${label}`)}${label.startsWith(c.base.commit.slice(0, 7)) ? "" : dim(` (${c.base.commit.slice(0, 7)})`)}  ${c.verdict.base === null ? dim("no shard at base") : verdict(c.verdict.base)} ${dim("\u2192")} ${verdict(c.verdict.head)}`);
+  if (c.verdict.base === null) lines.push(dim("  the base has no shard this policy covers: every shard is new"));
+  const delta = (d) => `${count2(d.base)} \u2192 ${count2(d.head)}${d.base === null || d.head === null ? "" : dim(` (${signed(d.head - d.base)})`)}`;
+  lines.push(`  shards ${delta(c.shards)}: ${changeCounts(c.changes)}`);
+  lines.push(`  documents ${delta(c.docs)}, words ${delta(c.words)}${c.tokens.head !== null || c.tokens.base !== null ? `, tokens ${delta(c.tokens)}` : ""}`);
+  if (c.languages.length > 0) {
+    const shares = `share of ${c.mixUnit}`;
+    lines.push(dim(`  ${"".padEnd(17)} ${shares.padEnd(33)} fertility (tokens per word)`));
+    lines.push(dim(`  ${"language".padEnd(9)} ${"target".padStart(7)} ${"base".padStart(7)} ${"head".padStart(7)} ${"shift".padStart(9)}   ${"base".padStart(7)} ${"head".padStart(7)} ${"change".padStart(8)}`));
+    for (const l of c.languages) {
+      lines.push(
+        `  ${clean2(l.key).padEnd(9)} ${percent(l.target).padStart(7)} ${percent(l.share.base).padStart(7)} ${percent(l.share.head).padStart(7)} ${points(l.shiftPoints).padStart(9)}   ${fixed(l.fertility.base, 3).padStart(7)} ${fixed(l.fertility.head, 3).padStart(7)} ${signedPercent(l.fertilityChange).padStart(8)}`
+      );
+    }
+  }
+  if (c.addedDuplicates) {
+    const d = c.addedDuplicates;
+    lines.push(`  duplicates the change adds against the rest: ${count2(d.exactDocs)} exact, ${count2(d.nearDocs)} near of ${count2(d.docs)} new documents`);
+    for (const s of d.perShard.filter((x) => x.exactDocs + x.nearDocs > 0).slice(0, TERMINAL_CHANGE_ROWS)) {
+      lines.push(`    ${clean2(s.shard)} ${dim(`${count2(s.exactDocs)} exact, ${count2(s.nearDocs)} near of ${count2(s.docs)}`)}`);
+    }
+  }
+  if (c.flipped.length > 0) {
+    lines.push("  rules that changed:");
+    for (const f of c.flipped) {
+      lines.push(`    ${f.rule} \xB7 ${clean2(f.scope.replace(/^language:/, ""))}: ${verdict(f.from)} ${dim("\u2192")} ${verdict(f.to)}${f.to !== "none" ? dim(`  ${clean2(f.message)}`) : ""}`);
+    }
+  } else if (c.verdict.base !== null) lines.push(dim("  no rule changed its verdict"));
+  if (c.changes.length > 0) {
+    lines.push("  changed shards:");
+    for (const ch of c.changes.slice(0, TERMINAL_CHANGE_ROWS)) {
+      const what = ch.status === "renamed" ? `renamed from ${clean2(ch.from ?? "")}${ch.edited ? " and edited" : ""}` : ch.status;
+      lines.push(`    ${ch.status.padEnd(8)} ${clean2(ch.path)}${dim(`  ${ch.status === "renamed" ? `${what}, ` : ""}documents ${count2(ch.docs.base)} \u2192 ${count2(ch.docs.head)}`)}`);
+    }
+    if (c.changes.length > TERMINAL_CHANGE_ROWS) lines.push(dim(`    \u2026and ${c.changes.length - TERMINAL_CHANGE_ROWS} more (all are in the comparison JSON)`));
+  }
+  if (opts.baseShardsRead !== void 0 && c.shards.base !== null) {
+    lines.push(dim(`  ${count2(opts.baseShardsRead)} of ${counted(c.shards.base, "base shard")} read from git; the others have the head's bytes and were measured once`));
+  }
+  return `${lines.join("\n")}
+`;
+}
+
+// src/render/json.ts
+function renderJson(report) {
+  return `${JSON.stringify(report, null, 2)}
+`;
+}
+
 // src/cli/options.ts
 import { parseArgs } from "node:util";
 var USAGE = `sluice: a merge gate for the quality of multilingual training corpora
@@ -43344,6 +43755,11 @@ Options for check:
       --json FILE        write the JSON report (schemas/report.schema.json) to FILE
       --markdown FILE    write the Markdown report to FILE
       --root DIR         judge the shards under DIR instead of the policy's root
+      --base REF         also measure the corpus as git commit REF has it (a branch, tag or commit)
+                         and compare: shards changed, mix shift, fertility change, duplicates the
+                         change adds, rules that changed verdict (terminal and --markdown); the
+                         verdict is the working tree's
+      --comparison-json FILE   with --base, write the comparison as JSON to FILE
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
       --workers N        threads measuring shards (default: one per 2 MB of compressed shards
@@ -43387,7 +43803,9 @@ function parseCli(argv, env, isTTY) {
         workers: { type: "string" },
         "split-mb": { type: "string" },
         partition: { type: "string" },
-        out: { type: "string" }
+        out: { type: "string" },
+        base: { type: "string" },
+        "comparison-json": { type: "string" }
       }
     });
   } catch (err2) {
@@ -43408,6 +43826,7 @@ function parseCli(argv, env, isTTY) {
   }
   const cacheDir = v["no-cache"] ? null : v["cache-dir"] ?? ".sluice-cache";
   const color = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
+  if (command !== "check" && (v.base !== void 0 || v["comparison-json"] !== void 0)) throw new UsageError(`--base and --comparison-json are options of \`sluice check\`, not of \`sluice ${command}\``);
   if (command === "scan") {
     const m = /^(\d+)\/(\d+)$/.exec(v.partition ?? "");
     if (!m) throw new UsageError("scan needs --partition I/N, e.g. --partition 1/8");
@@ -43439,13 +43858,19 @@ function parseCli(argv, env, isTTY) {
   if (v.json !== void 0) out.json = v.json;
   if (v.markdown !== void 0) out.markdown = v.markdown;
   if (v.root !== void 0) out.root = v.root;
+  if (v["comparison-json"] !== void 0 && v.base === void 0) throw new UsageError("--comparison-json needs --base REF: the comparison is with a base commit");
+  if (v.base !== void 0) {
+    if (v.base.trim() === "" || v.base.startsWith("-")) throw new UsageError(`--base takes a git ref (a branch, tag or commit), got \`${v.base}\``);
+    out.base = v.base;
+  }
+  if (v["comparison-json"] !== void 0) out.comparisonJson = v["comparison-json"];
   return out;
 }
 
 // src/cli/main.ts
 async function check(opts) {
   const progress = progressPrinter();
-  const reports = await runCheck({
+  const options = {
     policies: opts.policies,
     cacheDir: opts.cacheDir,
     ...opts.root !== void 0 ? { root: opts.root } : {},
@@ -43455,10 +43880,16 @@ async function check(opts) {
     workerEntry: import.meta.url,
     ...opts.workers !== void 0 ? { workers: opts.workers } : {},
     ...opts.minSplitBytes !== void 0 ? { minSplitBytes: opts.minSplitBytes } : {},
-    outputs: outputsOf([["--json", opts.json], ["--markdown", opts.markdown]])
-  });
+    outputs: outputsOf([["--json", opts.json], ["--markdown", opts.markdown], ["--comparison-json", opts.comparisonJson]])
+  };
+  if (opts.base !== void 0) {
+    const judged = await runCheckAgainstBase(options, opts.base);
+    progress.clear();
+    return emit(judged, opts);
+  }
+  const reports = await runCheck(options);
   progress.clear();
-  return emit(reports, opts);
+  return emit(reports.map((report) => ({ report, comparison: null })), opts);
 }
 async function scan2(opts) {
   const progress = progressPrinter();
@@ -43487,12 +43918,18 @@ async function merge(opts) {
     onWarning: (m) => process.stderr.write(`warning: ${m}
 `)
   });
-  return emit([report], opts);
+  return emit([{ report, comparison: null }], opts);
 }
-async function emit(reports, opts) {
-  for (const report of reports) {
-    process.stdout.write(opts.quiet ? `${report.headline}
-` : renderTerminal(report, { color: opts.color }));
+async function emit(judged, opts) {
+  const reports = judged.map((j) => j.report);
+  for (const { report, comparison, baseShardsRead } of judged) {
+    if (opts.quiet) process.stdout.write(`${report.headline}
+`);
+    else {
+      const against = comparison ? `
+${renderComparisonTerminal(comparison, { color: opts.color, ...baseShardsRead !== void 0 ? { baseShardsRead } : {} })}` : "";
+      process.stdout.write(renderTerminal(report, { color: opts.color }) + against);
+    }
   }
   const single = reports.length === 1;
   const suffixes = repeatSuffixes(reports.map((r) => r.policy.name));
@@ -43500,7 +43937,10 @@ async function emit(reports, opts) {
   const suffixed = (file, name) => single ? file : file.replace(/(\.[^./]+)?$/, (ext) => `.${name}${ext}`);
   for (const [i, report] of reports.entries()) {
     if (opts.json) await writeOutput("--json", suffixed(opts.json, names[i]), renderJson(report));
-    if (opts.markdown) await writeOutput("--markdown", suffixed(opts.markdown, names[i]), renderMarkdown(report));
+    const comparison = judged[i].comparison;
+    if (opts.markdown) await writeOutput("--markdown", suffixed(opts.markdown, names[i]), comparison ? renderMarkdownWithComparison(report, comparison) : renderMarkdown(report));
+    if (opts.comparisonJson && comparison) await writeOutput("--comparison-json", suffixed(opts.comparisonJson, names[i]), `${JSON.stringify(comparison, null, 2)}
+`);
   }
   return reports.some((r) => r.verdict === "fail") ? 1 : 0;
 }
@@ -43576,11 +44016,11 @@ async function main() {
       checkPaths([["--json", cmd.json], ["--markdown", cmd.markdown]], [cmd.policy, ...cmd.parts], null);
       return await merge(cmd);
     }
-    checkPaths([["--json", cmd.json], ["--markdown", cmd.markdown]], cmd.policies, cmd.cacheDir);
+    checkPaths([["--json", cmd.json], ["--markdown", cmd.markdown], ["--comparison-json", cmd.comparisonJson]], cmd.policies, cmd.cacheDir);
     warnOfWorkers(cmd.workers);
     return await check(cmd);
   } catch (err2) {
-    if (err2 instanceof UsageError || err2 instanceof ConfigError || err2 instanceof ShardFailure) {
+    if (err2 instanceof UsageError || err2 instanceof ConfigError || err2 instanceof ShardFailure || err2 instanceof GitError) {
       process.stderr.write(`sluice: ${err2.message}
 `);
       return 2;

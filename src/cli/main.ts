@@ -2,13 +2,16 @@
 import { statSync } from 'node:fs';
 import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { ConfigError, repeatSuffixes, runCheck, type Progress } from '../core/check.js';
+import { ConfigError, repeatSuffixes, runCheck, type CheckOptions, type Progress } from '../core/check.js';
+import { GitError, runCheckAgainstBase } from '../core/compare.js';
 import { mergePartials, scanPartition } from '../core/partition.js';
 import { maxWorkers, ShardFailure } from '../core/pool.js';
 import { isShardWorker, runShardWorker } from '../core/worker.js';
+import type { Comparison } from '../judge/comparison.js';
 import type { Report } from '../judge/types.js';
 import { partialToJson } from '../results/partition.js';
 import { TOOL_VERSION } from '../judge/report.js';
+import { renderComparisonTerminal, renderMarkdownWithComparison } from '../render/comparison.js';
 import { renderJson } from '../render/json.js';
 import { renderMarkdown } from '../render/markdown.js';
 import { renderTerminal } from '../render/terminal.js';
@@ -16,7 +19,7 @@ import { parseCli, USAGE, UsageError, type CheckCliOptions, type MergeCliOptions
 
 async function check(opts: CheckCliOptions): Promise<number> {
   const progress = progressPrinter();
-  const reports = await runCheck({
+  const options: CheckOptions = {
     policies: opts.policies,
     cacheDir: opts.cacheDir,
     ...(opts.root !== undefined ? { root: opts.root } : {}),
@@ -25,10 +28,16 @@ async function check(opts: CheckCliOptions): Promise<number> {
     workerEntry: import.meta.url,
     ...(opts.workers !== undefined ? { workers: opts.workers } : {}),
     ...(opts.minSplitBytes !== undefined ? { minSplitBytes: opts.minSplitBytes } : {}),
-    outputs: outputsOf([['--json', opts.json], ['--markdown', opts.markdown]]),
-  });
+    outputs: outputsOf([['--json', opts.json], ['--markdown', opts.markdown], ['--comparison-json', opts.comparisonJson]]),
+  };
+  if (opts.base !== undefined) {
+    const judged = await runCheckAgainstBase(options, opts.base);
+    progress.clear();
+    return emit(judged, opts);
+  }
+  const reports = await runCheck(options);
   progress.clear();
-  return emit(reports, opts);
+  return emit(reports.map((report) => ({ report, comparison: null })), opts);
 }
 
 async function scan(opts: ScanCliOptions): Promise<number> {
@@ -56,12 +65,17 @@ async function merge(opts: MergeCliOptions): Promise<number> {
     ...(opts.root !== undefined ? { root: opts.root } : {}),
     onWarning: (m) => process.stderr.write(`warning: ${m}\n`),
   });
-  return emit([report], opts);
+  return emit([{ report, comparison: null }], opts);
 }
 
-async function emit(reports: Report[], opts: Pick<CheckCliOptions, 'quiet' | 'color' | 'json' | 'markdown'>): Promise<number> {
-  for (const report of reports) {
-    process.stdout.write(opts.quiet ? `${report.headline}\n` : renderTerminal(report, { color: opts.color }));
+async function emit(judged: Array<{ report: Report; comparison: Comparison | null; baseShardsRead?: number }>, opts: Pick<CheckCliOptions, 'quiet' | 'color' | 'json' | 'markdown' | 'comparisonJson'>): Promise<number> {
+  const reports = judged.map((j) => j.report);
+  for (const { report, comparison, baseShardsRead } of judged) {
+    if (opts.quiet) process.stdout.write(`${report.headline}\n`);
+    else {
+      const against = comparison ? `\n${renderComparisonTerminal(comparison, { color: opts.color, ...(baseShardsRead !== undefined ? { baseShardsRead } : {}) })}` : '';
+      process.stdout.write(renderTerminal(report, { color: opts.color }) + against);
+    }
   }
   const single = reports.length === 1;
   // One file per policy, named by the policy's name; two policies of one name get -2, -3, ... rather than one file.
@@ -70,7 +84,9 @@ async function emit(reports: Report[], opts: Pick<CheckCliOptions, 'quiet' | 'co
   const suffixed = (file: string, name: string): string => (single ? file : file.replace(/(\.[^./]+)?$/, (ext) => `.${name}${ext}`));
   for (const [i, report] of reports.entries()) {
     if (opts.json) await writeOutput('--json', suffixed(opts.json, names[i]!), renderJson(report));
-    if (opts.markdown) await writeOutput('--markdown', suffixed(opts.markdown, names[i]!), renderMarkdown(report));
+    const comparison = judged[i]!.comparison;
+    if (opts.markdown) await writeOutput('--markdown', suffixed(opts.markdown, names[i]!), comparison ? renderMarkdownWithComparison(report, comparison) : renderMarkdown(report));
+    if (opts.comparisonJson && comparison) await writeOutput('--comparison-json', suffixed(opts.comparisonJson, names[i]!), `${JSON.stringify(comparison, null, 2)}\n`);
   }
   return reports.some((r) => r.verdict === 'fail') ? 1 : 0;
 }
@@ -159,11 +175,11 @@ async function main(): Promise<number> {
       checkPaths([['--json', cmd.json], ['--markdown', cmd.markdown]], [cmd.policy, ...cmd.parts], null);
       return await merge(cmd);
     }
-    checkPaths([['--json', cmd.json], ['--markdown', cmd.markdown]], cmd.policies, cmd.cacheDir);
+    checkPaths([['--json', cmd.json], ['--markdown', cmd.markdown], ['--comparison-json', cmd.comparisonJson]], cmd.policies, cmd.cacheDir);
     warnOfWorkers(cmd.workers);
     return await check(cmd);
   } catch (err) {
-    if (err instanceof UsageError || err instanceof ConfigError || err instanceof ShardFailure) {
+    if (err instanceof UsageError || err instanceof ConfigError || err instanceof ShardFailure || err instanceof GitError) {
       process.stderr.write(`sluice: ${err.message}\n`);
       return 2;
     }

@@ -16,6 +16,11 @@ Options for check:
       --json FILE        write the JSON report (schemas/report.schema.json) to FILE
       --markdown FILE    write the Markdown report to FILE
       --root DIR         judge the shards under DIR instead of the policy's root
+      --base REF         also measure the corpus as git commit REF has it (a branch, tag or commit)
+                         and compare: shards changed, mix shift, fertility change, duplicates the
+                         change adds, rules that changed verdict (terminal and --markdown); the
+                         verdict is the working tree's
+      --comparison-json FILE   with --base, write the comparison as JSON to FILE
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
       --workers N        threads measuring shards (default: one per 2 MB of compressed shards
@@ -44,6 +49,9 @@ export interface CheckCliOptions {
   workers?: number;
   /** Bytes of text (decompressed) from which a shard may be split into batches across the workers. */
   minSplitBytes?: number;
+  /** A git ref to compare the working tree's corpus with. */
+  base?: string;
+  comparisonJson?: string;
 }
 
 export interface ScanCliOptions {
@@ -57,7 +65,7 @@ export interface ScanCliOptions {
   minSplitBytes?: number;
 }
 
-export interface MergeCliOptions extends Omit<CheckCliOptions, 'command' | 'policies'> {
+export interface MergeCliOptions extends Omit<CheckCliOptions, 'command' | 'policies' | 'base' | 'comparisonJson'> {
   command: 'merge';
   policy: string;
   parts: string[];
@@ -99,6 +107,8 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
         'split-mb': { type: 'string' },
         partition: { type: 'string' },
         out: { type: 'string' },
+        base: { type: 'string' },
+        'comparison-json': { type: 'string' },
       },
     });
   } catch (err) {
@@ -119,6 +129,7 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
   }
   const cacheDir = v['no-cache'] ? null : (v['cache-dir'] ?? '.sluice-cache');
   const color = v['no-color'] ? false : v.color ? true : isTTY && !('NO_COLOR' in env && env.NO_COLOR !== '');
+  if (command !== 'check' && (v.base !== undefined || v['comparison-json'] !== undefined)) throw new UsageError(`--base and --comparison-json are options of \`sluice check\`, not of \`sluice ${command}\``);
   if (command === 'scan') {
     const m = /^(\d+)\/(\d+)$/.exec(v.partition ?? '');
     if (!m) throw new UsageError('scan needs --partition I/N, e.g. --partition 1/8');
@@ -150,5 +161,11 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
   if (v.json !== undefined) out.json = v.json;
   if (v.markdown !== undefined) out.markdown = v.markdown;
   if (v.root !== undefined) out.root = v.root;
+  if (v['comparison-json'] !== undefined && v.base === undefined) throw new UsageError('--comparison-json needs --base REF: the comparison is with a base commit');
+  if (v.base !== undefined) {
+    if (v.base.trim() === '' || v.base.startsWith('-')) throw new UsageError(`--base takes a git ref (a branch, tag or commit), got \`${v.base}\``);
+    out.base = v.base;
+  }
+  if (v['comparison-json'] !== undefined) out.comparisonJson = v['comparison-json'];
   return out;
 }

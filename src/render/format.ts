@@ -30,6 +30,13 @@ export function points(x: number | null | undefined): string {
   return `${r > 0 ? '+' : r < 0 ? '−' : '±'}${Math.abs(r).toFixed(1)} pt`;
 }
 
+/** Formats a signed relative change (0.012 → +1.2 %), U+2212 for a fall and ± for none at one decimal, or an en dash for none. */
+export function signedPercent(x: number | null | undefined): string {
+  if (x === null || x === undefined) return '–';
+  const r = Math.round(x * 1000) / 10;
+  return `${r > 0 ? '+' : r < 0 ? '−' : '±'}${Math.abs(r).toFixed(1)} %`;
+}
+
 /** Formats bytes in SI units. */
 export function bytes(n: number): string {
   if (n < 1e3) return `${n} B`;

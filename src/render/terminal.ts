@@ -136,6 +136,7 @@ export function samplingLine(report: Report): string {
 }
 
 // Data and file names may hold terminal escapes or bidi controls; show them as code points.
-function clean(s: string): string {
+/** Returns text from the data with control and bidirectional characters written as U+XXXX, so it cannot move the cursor or reorder the line. */
+export function clean(s: string): string {
   return s.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u202A-\u202E\u2066-\u2069]/g, (ch) => `U+${ch.codePointAt(0)!.toString(16).toUpperCase().padStart(4, '0')}`);
 }

@@ -1,0 +1,95 @@
+// `sluice check --base REF`: the working tree's corpus judged and compared with a git commit,
+// by the same core the Action uses on a pull request (the comparison JSON is the same).
+import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { fakeGitHub, newsroomRepo, policyYaml, runBundle, stories } from '../action/harness.js';
+import { sluice } from './helpers.js';
+
+/** A repository with a base commit on main and a branch that adds, edits and renames shards. */
+function branchRepo(): ReturnType<typeof newsroomRepo> & { head: string } {
+  const { repo, base } = newsroomRepo(3, policyYaml({ duplicates: true }));
+  repo.git('checkout', '-q', '-b', 'desk/update');
+  repo.write('data/hin/hin-new.jsonl', stories('hin', 10, 1700));
+  repo.write('data/eng/eng-copy.jsonl', stories('eng', 10, 1));
+  repo.write('data/eng/eng-002.jsonl', stories('eng', 12, 2));
+  repo.git('mv', 'data/hin/hin-001.jsonl', 'data/hin/hin-renamed.jsonl');
+  return { repo, base, head: repo.commit('Desk: new and re-filed stories') };
+}
+
+const withoutTiming = (r: object): string => JSON.stringify({ ...r, timing: null }, (k, v: unknown) => (k === 'fromCache' ? undefined : v));
+
+describe('sluice check --base', () => {
+  it('compares the working tree with the base commit, as the Action compares a pull request', async () => {
+    const { repo, base, head } = branchRepo();
+    const out = mkdtempSync(path.join(tmpdir(), 'sluice-base-'));
+    const files = { json: path.join(out, 'r.json'), md: path.join(out, 'r.md'), cmp: path.join(out, 'c.json') };
+    const run = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--json', files.json, '--markdown', files.md, '--comparison-json', files.cmp, '--no-cache'], { cwd: repo.dir });
+    expect(run.status, run.stderr).toBe(0);
+    expect(run.stdout).toMatch(/Against base main \([0-9a-f]{7}\) {2}PASS → PASS/);
+    expect(run.stdout).toContain('shards 6 → 8 (+2): 2 added, 1 modified, 1 renamed');
+    expect(run.stdout).toMatch(/renamed +data\/hin\/hin-renamed\.jsonl {2}renamed from data\/hin\/hin-001\.jsonl, documents 10 → 10/);
+    // Of the six base shards only eng-002's old version is read: the others, the renamed one too, have the head's blob.
+    expect(run.stdout).toContain('1 of 6 base shards read from git; the others have the head\'s bytes and were measured once');
+    // eng-copy.jsonl is a copy of eng-001.jsonl, which is already in the corpus.
+    expect(run.stdout).toContain('duplicates the change adds against the rest: 10 exact, 0 near of 32 new documents');
+
+    const comparison = JSON.parse(readFileSync(files.cmp, 'utf8')) as { base: { commit: string }; changes: Array<{ status: string; path: string; from?: string }> };
+    expect(comparison.base.commit).toBe(base);
+    expect(comparison.changes.map((c) => [c.status, c.path, c.from ?? ''])).toEqual([
+      ['modified', 'data/eng/eng-002.jsonl', ''],
+      ['added', 'data/eng/eng-copy.jsonl', ''],
+      ['added', 'data/hin/hin-new.jsonl', ''],
+      ['renamed', 'data/hin/hin-renamed.jsonl', 'data/hin/hin-001.jsonl'],
+    ]);
+    expect(readFileSync(files.md, 'utf8')).toContain('### Against base `main`');
+
+    // The report is the working tree's, as a check without --base gives it.
+    const plain = sluice(['check', 'policies/newsroom.yaml', '--no-cache'], { cwd: repo.dir, json: true });
+    expect(withoutTiming(JSON.parse(readFileSync(files.json, 'utf8')) as object)).toBe(withoutTiming(plain.report!));
+
+    // And the comparison is the one the Action writes for the same pull request.
+    const api = await fakeGitHub();
+    const action = await runBundle({ repo, event: 'pull_request', api, pr: { number: 71, baseSha: base, headSha: head }, inputs: { comment: 'never' } });
+    await api.close();
+    expect(action.code, action.stdout).toBe(0);
+    const fromAction = JSON.parse(readFileSync(path.join(action.reportDir, 'newsroom.comparison.json'), 'utf8')) as { base: { label: string } };
+    expect({ ...fromAction, base: { ...fromAction.base, label: 'main' } }).toEqual(comparison);
+  });
+
+  it('fails the run (exit 1) on the working tree\'s verdict, whatever the base had', () => {
+    const { repo } = newsroomRepo(2);
+    repo.git('checkout', '-q', '-b', 'desk/english');
+    for (let i = 0; i < 4; i++) repo.write(`data/eng/extra-${i}.jsonl`, stories('eng', 10, 300 + i));
+    repo.commit('Desk: a batch of English');
+    const run = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache'], { cwd: repo.dir });
+    expect(run.status).toBe(1);
+    expect(run.stdout).toMatch(/Against base main \([0-9a-f]{7}\) {2}PASS → FAIL/);
+    expect(run.stdout).toMatch(/mix · hin: PASS → FAIL/);
+  });
+
+  it('says why it cannot compare: a ref that is no commit, a corpus outside git, options that need --base', () => {
+    const { repo } = newsroomRepo(1);
+    const noRef = sluice(['check', 'policies/newsroom.yaml', '--base', 'no-such-branch', '--no-cache'], { cwd: repo.dir });
+    expect(noRef.status).toBe(2);
+    expect(noRef.stderr).toContain('base `no-such-branch` is not a commit in this clone');
+
+    // The same kind of corpus, outside any git work tree.
+    const outside = mkdtempSync(path.join(tmpdir(), 'sluice-nogit-'));
+    mkdirSync(path.join(outside, 'policies'));
+    mkdirSync(path.join(outside, 'data', 'eng'), { recursive: true });
+    writeFileSync(path.join(outside, 'policies', 'newsroom.yaml'), policyYaml());
+    writeFileSync(path.join(outside, 'data', 'eng', 'eng-000.jsonl'), stories('eng', 10, 0));
+    const noGit = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache'], { cwd: outside });
+    expect(noGit.status).toBe(2);
+    expect(noGit.stderr).toMatch(/--base main: the corpus of .*newsroom\.yaml .* is not in a git work tree/);
+
+    const needsBase = sluice(['check', 'policies/newsroom.yaml', '--comparison-json', 'c.json'], { cwd: repo.dir });
+    expect(needsBase.status).toBe(2);
+    expect(needsBase.stderr).toContain('--comparison-json needs --base REF');
+    const notScan = sluice(['scan', '--policy', 'policies/newsroom.yaml', '--partition', '1/1', '--out', 'p.json', '--base', 'main'], { cwd: repo.dir });
+    expect(notScan.status).toBe(2);
+    expect(notScan.stderr).toContain('--base and --comparison-json are options of `sluice check`, not of `sluice scan`');
+  });
+});
