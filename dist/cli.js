@@ -43923,7 +43923,7 @@ async function merge(opts) {
 async function emit(judged, opts) {
   const reports = judged.map((j) => j.report);
   for (const { report, comparison, baseShardsRead } of judged) {
-    if (opts.quiet) process.stdout.write(`${report.headline}
+    if (opts.quiet) process.stdout.write(`${report.headline}${comparison ? ` (against base ${comparison.base.label}: ${comparison.verdict.base ?? "no shards"} \u2192 ${comparison.verdict.head})` : ""}
 `);
     else {
       const against = comparison ? `

@@ -71,7 +71,7 @@ async function merge(opts: MergeCliOptions): Promise<number> {
 async function emit(judged: Array<{ report: Report; comparison: Comparison | null; baseShardsRead?: number }>, opts: Pick<CheckCliOptions, 'quiet' | 'color' | 'json' | 'markdown' | 'comparisonJson'>): Promise<number> {
   const reports = judged.map((j) => j.report);
   for (const { report, comparison, baseShardsRead } of judged) {
-    if (opts.quiet) process.stdout.write(`${report.headline}\n`);
+    if (opts.quiet) process.stdout.write(`${report.headline}${comparison ? ` (against base ${comparison.base.label}: ${comparison.verdict.base ?? 'no shards'} → ${comparison.verdict.head})` : ''}\n`);
     else {
       const against = comparison ? `\n${renderComparisonTerminal(comparison, { color: opts.color, ...(baseShardsRead !== undefined ? { baseShardsRead } : {}) })}` : '';
       process.stdout.write(renderTerminal(report, { color: opts.color }) + against);

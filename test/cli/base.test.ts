@@ -67,6 +67,9 @@ describe('sluice check --base', () => {
     expect(run.status).toBe(1);
     expect(run.stdout).toMatch(/Against base main \([0-9a-f]{7}\) {2}PASS → FAIL/);
     expect(run.stdout).toMatch(/mix · hin: PASS → FAIL/);
+    const quiet = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache', '--quiet'], { cwd: repo.dir });
+    expect(quiet.status).toBe(1);
+    expect(quiet.stdout).toMatch(/^FAIL: .* \(against base main: pass → fail\)\n$/);
   });
 
   it('says why it cannot compare: a ref that is no commit, a corpus outside git, options that need --base', () => {
