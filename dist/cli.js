@@ -43697,7 +43697,7 @@ function renderComparisonTerminal(c, opts) {
   lines.push(`  documents ${delta(c.docs)}, words ${delta(c.words)}${c.tokens.head !== null || c.tokens.base !== null ? `, tokens ${delta(c.tokens)}` : ""}`);
   if (c.languages.length > 0) {
     const shares = `share of ${c.mixUnit}`;
-    lines.push(dim(`  ${"".padEnd(17)} ${shares.padEnd(33)} fertility (tokens per word)`));
+    lines.push(dim(`  ${"".padEnd(9)} ${shares.padEnd(33)}   fertility (tokens per word)`));
     lines.push(dim(`  ${"language".padEnd(9)} ${"target".padStart(7)} ${"base".padStart(7)} ${"head".padStart(7)} ${"shift".padStart(9)}   ${"base".padStart(7)} ${"head".padStart(7)} ${"change".padStart(8)}`));
     for (const l of c.languages) {
       lines.push(
