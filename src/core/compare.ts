@@ -23,9 +23,6 @@ import { contentIdOf } from '../results/scan.js';
 import { ConfigError, discoverOrThrow, loadPolicyOrThrow, measureCorpus, prepareOrThrow, type CheckOptions } from './check.js';
 import { compareReports, shardChanges, type Comparison, type ShardChange } from '../judge/comparison.js';
 
-export { compareReports, shardChanges } from '../judge/comparison.js';
-export type { Comparison, Delta, LanguageDelta, RuleFlip, ShardChange } from '../judge/comparison.js';
-
 /** Largest git output read at once: ls-tree of a few hundred thousand shards is tens of MB. */
 const GIT_MAX_BUFFER_BYTES = 1024 * 1024 * 1024;
 

@@ -113,6 +113,7 @@ export function checkPartialSet(parts: Array<{ file: string; partial: Partial }>
   return { parts, results, skipped };
 }
 
+/** Returns the report of a policy over the merged partial results; throws ConfigError when the parts are not one complete set measured under this policy. */
 export async function mergePartials(policyFile: string, partFiles: string[], opts: Omit<CheckOptions, 'policies'>): Promise<Report> {
   const started = performance.now();
   const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);

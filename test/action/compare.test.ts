@@ -1,7 +1,7 @@
 // Base against head: which shards a PR adds, changes, renames or deletes, and the
 // duplicates it adds against the corpus already there.
 import { describe, expect, it } from 'vitest';
-import { shardChanges } from '../../src/core/compare.js';
+import { shardChanges } from '../../src/judge/comparison.js';
 import { fakeGitHub, newsroomRepo, policyYaml, runBundle, stories } from './harness.js';
 
 describe('shard changes', () => {
