@@ -43113,10 +43113,10 @@ async function scanPartition(policyFile, index2, count3, opts) {
   refuseOutputsAmongShards(discovery.shards, opts.outputs);
   const mine = discovery.shards.filter((s) => partitionOf(s.path, count3) === index2);
   const prepared = await prepareOrThrow(policy);
-  const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
+  const { results, cached } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
   results.sort((a, b) => a.path < b.path ? -1 : a.path > b.path ? 1 : 0);
   const blobs = await blobsOf(policy, results, opts.onWarning);
-  return {
+  const partial = {
     format: PARTIAL_FORMAT,
     version: PARTIAL_VERSION,
     policy: policy.name,
@@ -43127,6 +43127,7 @@ async function scanPartition(policyFile, index2, count3, opts) {
     skipped: discovery.skipped.filter((s) => partitionOf(s.path, count3) === index2),
     ...blobs ? { blobs } : {}
   };
+  return { partial, fromCache: cached.size };
 }
 async function blobsOf(policy, results, onWarning) {
   const top = await gitTopLevel(policy.root);
@@ -43893,7 +43894,7 @@ async function check(opts) {
 }
 async function scan2(opts) {
   const progress = progressPrinter();
-  const partial = await scanPartition(opts.policy, opts.partition.index, opts.partition.count, {
+  const { partial, fromCache } = await scanPartition(opts.policy, opts.partition.index, opts.partition.count, {
     cacheDir: opts.cacheDir,
     ...opts.root !== void 0 ? { root: opts.root } : {},
     ...opts.workers !== void 0 ? { workers: opts.workers } : {},
@@ -43907,7 +43908,7 @@ async function scan2(opts) {
   progress.clear();
   await writeOutput("--out", opts.out, partialToJson(partial));
   const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
-  process.stdout.write(`partition ${opts.partition.index}/${opts.partition.count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents \u2192 ${opts.out}
+  process.stdout.write(`partition ${opts.partition.index}/${opts.partition.count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents${fromCache > 0 ? `, ${fromCache} from cache` : ""} \u2192 ${opts.out}
 `);
   return 0;
 }

@@ -35,6 +35,8 @@ export interface ActionSettings {
   base: string | null;
   comment: CommentMode;
   failOn: FailOn;
+  /** The `partition` input (`I/N`): scan that share of the shards and write a partial result per policy instead of judging; null: judge. */
+  partition: { index: number; count: number } | null;
   /** The `parts` input: patterns (relative to the workspace) of partial results from `sluice scan --partition` jobs whose shard results are taken instead of measuring; empty: measure here. */
   parts: string[];
   /** Absolute directory the JSON and Markdown reports are written to. */
@@ -79,6 +81,15 @@ function booleanInput(env: NodeJS.ProcessEnv, name: string, fallback: boolean): 
   throw new ConfigError(`input \`${name}\`: \`${inputOf(env, name)}\` is not \`true\` or \`false\``);
 }
 
+function partitionInput(env: NodeJS.ProcessEnv): { index: number; count: number } | null {
+  const value = inputOf(env, 'partition');
+  if (value === '') return null;
+  const m = /^(\d+)\s*\/\s*(\d+)$/.exec(value);
+  const [index, count] = m ? [Number(m[1]), Number(m[2])] : [0, 0];
+  if (!m || count < 1 || index < 1 || index > count) throw new ConfigError(`input \`partition\`: \`${value}\` is not I/N with 1 ≤ I ≤ N (e.g. \`3/8\`, from a matrix)`);
+  return { index, count };
+}
+
 function workersInput(env: NodeJS.ProcessEnv): number | null {
   const value = inputOf(env, 'workers');
   if (value === '') return null;
@@ -121,6 +132,10 @@ export function settingsFromEnv(env: NodeJS.ProcessEnv): ActionSettings {
     }
   }
 
+  if (inputOf(env, 'partition') !== '' && inputOf(env, 'parts') !== '') {
+    throw new ConfigError('inputs `partition` and `parts` go to different jobs: the scan jobs of a matrix take `partition`, the final job that judges takes their `parts`');
+  }
+
   const [owner, repo] = (env['GITHUB_REPOSITORY'] ?? '').split('/');
   const runnerTemp = env['RUNNER_TEMP'] || tmpdir();
   return {
@@ -129,6 +144,7 @@ export function settingsFromEnv(env: NodeJS.ProcessEnv): ActionSettings {
     base: inputOf(env, 'base') || null,
     comment: oneOf(env, 'comment', COMMENT_MODES, 'on-change'),
     failOn: oneOf(env, 'fail-on', FAIL_ON, 'error'),
+    partition: partitionInput(env),
     parts: inputOf(env, 'parts')
       .split(/\r?\n/)
       .map((p) => p.trim())

@@ -18,6 +18,8 @@ import { contentIdOf } from '../results/scan.js';
 import { TOOL_VERSION } from '../version.js';
 import { annotationsOf, capAnnotations, type Annotation } from './annotations.js';
 import { readParts, seedFromParts } from './parts.js';
+import { scanPartition } from '../core/partition.js';
+import { partialToJson } from '../results/partition.js';
 import { pruneResults, restoreResults, saveResults } from './cache.js';
 import { upsertComment } from './comment.js';
 import type { ActionSettings } from './inputs.js';
@@ -96,7 +98,9 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
   const policyHash = createHash('sha256').update(TOOL_VERSION);
   for (const p of policies) policyHash.update(p.file).update('\0').update(await readFile(p.file));
   const keyPrefix = `sluice-results-${CACHE_LAYOUT}-${s.runnerOs}-`;
-  const cacheKey = `${keyPrefix}${policyHash.digest('hex').slice(0, 16)}-${s.sha || 'local'}`;
+  // A partition's scan job keeps a cache of its own share (the other jobs keep theirs).
+  const share = s.partition ? `part${s.partition.index}of${s.partition.count}-` : '';
+  const cacheKey = `${keyPrefix}${policyHash.digest('hex').slice(0, 16)}-${share}${s.sha || 'local'}`;
   const cacheDir = s.cache ? s.cacheDir : await mkdtemp(path.join(tmpdir(), 'sluice-results-'));
   await makeDirectory(cacheDir);
   // A limit changed in the policy does not change what is measured: fall back to any entry (results carry their own settings id).
@@ -122,6 +126,44 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
   // One file stem per policy; two policies with one name get -2, -3, ...
   const suffixes = repeatSuffixes(policies.map((p) => p.name));
   const stems = policies.map((p, i) => path.join(s.reportDir, `${fileNameOf(p.name)}${suffixes[i]}`));
+
+  if (s.partition) {
+    // A scan job of a matrix: measure this share of each policy's shards and write the part; the final job judges.
+    const { index, count } = s.partition;
+    const written: string[] = [];
+    let measured = false;
+    for (const [i, policy] of policies.entries()) {
+      const file = `${stems[i]!}.part-${index}-of-${count}.json`;
+      await io.group(`sluice: ${policy.name}, partition ${index}/${count}`, async () => {
+        const rootRel = top ? await rootInRepo(top, policy).catch(() => null) : null;
+        const keyOf = top && rootRel !== null ? await workingTreeKeys(top, rootRel) : contentIdOf;
+        const { partial, fromCache } = await scanPartition(policy.file, index, count, {
+          ...check,
+          contentKey: async (ref) => {
+            const k = await keyOf(ref);
+            usedKeys.add(k);
+            return k;
+          },
+        });
+        usedSettings.add(partial.settingsId);
+        await writeFile(file, partialToJson(partial));
+        const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
+        if (fromCache < partial.results.length) measured = true;
+        io.info(`sluice ${policy.name}: partition ${index}/${count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents, ${fromCache} from cache → ${file}`);
+      });
+      written.push(file);
+    }
+    if (s.cache) {
+      const removed = await pruneResults(cacheDir, usedSettings, usedKeys);
+      if (removed > 0) io.info(`sluice: dropped ${removed} cached results outside this partition`);
+      if (measured || restored !== cacheKey) await saveResults(cacheDir, cacheKey, io.info, warn);
+    } else {
+      await rm(cacheDir, { recursive: true, force: true });
+    }
+    io.setOutput('parts', written.join('\n'));
+    io.setOutput('verdict', '');
+    return { verdict: 'pass', failure: null, reports: [] };
+  }
   for (const [i, policy] of policies.entries()) {
     const stem = stems[i]!;
     judged.push(

@@ -42,7 +42,7 @@ async function check(opts: CheckCliOptions): Promise<number> {
 
 async function scan(opts: ScanCliOptions): Promise<number> {
   const progress = progressPrinter();
-  const partial = await scanPartition(opts.policy, opts.partition.index, opts.partition.count, {
+  const { partial, fromCache } = await scanPartition(opts.policy, opts.partition.index, opts.partition.count, {
     cacheDir: opts.cacheDir,
     ...(opts.root !== undefined ? { root: opts.root } : {}),
     ...(opts.workers !== undefined ? { workers: opts.workers } : {}),
@@ -55,7 +55,7 @@ async function scan(opts: ScanCliOptions): Promise<number> {
   progress.clear();
   await writeOutput('--out', opts.out, partialToJson(partial));
   const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
-  process.stdout.write(`partition ${opts.partition.index}/${opts.partition.count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents → ${opts.out}\n`);
+  process.stdout.write(`partition ${opts.partition.index}/${opts.partition.count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents${fromCache > 0 ? `, ${fromCache} from cache` : ''} → ${opts.out}\n`);
   return 0;
 }
 

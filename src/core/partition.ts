@@ -13,8 +13,14 @@ import type { SkippedFile } from '../read/types.js';
 import { assembleCorpus, ConfigError, discoverOrThrow, loadPolicyOrThrow, measureShards, prepareOrThrow, refuseOutputsAmongShards, type CheckOptions } from './check.js';
 import { cleanBlobs, gitTopLevel, rootInRepo } from './compare.js';
 
+/** A partition scanned: its partial result, and how many of its shards came from the cache. */
+export interface ScannedPartition {
+  partial: Partial;
+  fromCache: number;
+}
+
 /** Returns the partial result of partition `index` of `count` (1-based). */
-export async function scanPartition(policyFile: string, index: number, count: number, opts: Omit<CheckOptions, 'policies'>): Promise<Partial> {
+export async function scanPartition(policyFile: string, index: number, count: number, opts: Omit<CheckOptions, 'policies'>): Promise<ScannedPartition> {
   if (!Number.isInteger(count) || count < 1 || !Number.isInteger(index) || index < 1 || index > count) {
     throw new ConfigError(`--partition must be I/N with 1 ≤ I ≤ N, got ${index}/${count}`);
   }
@@ -24,10 +30,10 @@ export async function scanPartition(policyFile: string, index: number, count: nu
   refuseOutputsAmongShards(discovery.shards, opts.outputs);
   const mine = discovery.shards.filter((s) => partitionOf(s.path, count) === index);
   const prepared = await prepareOrThrow(policy);
-  const { results } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
+  const { results, cached } = await measureShards(policy, mine, prepared, { ...opts, policies: [policyFile] }, started);
   results.sort((a, b) => (a.path < b.path ? -1 : a.path > b.path ? 1 : 0));
   const blobs = await blobsOf(policy, results, opts.onWarning);
-  return {
+  const partial: Partial = {
     format: PARTIAL_FORMAT,
     version: PARTIAL_VERSION,
     policy: policy.name,
@@ -38,6 +44,7 @@ export async function scanPartition(policyFile: string, index: number, count: nu
     skipped: discovery.skipped.filter((s) => partitionOf(s.path, count) === index),
     ...(blobs ? { blobs } : {}),
   };
+  return { partial, fromCache: cached.size };
 }
 
 /**

@@ -21,7 +21,7 @@ describe('action.yml', () => {
   });
 
   it('documents every input with a description and a default, and README.md lists the same', () => {
-    expect(Object.keys(action.inputs)).toEqual(['policy', 'github-token', 'base', 'comment', 'fail-on', 'report-dir', 'cache', 'workers', 'parts']);
+    expect(Object.keys(action.inputs)).toEqual(['policy', 'github-token', 'base', 'comment', 'fail-on', 'report-dir', 'cache', 'workers', 'partition', 'parts']);
     for (const [name, input] of Object.entries(action.inputs)) {
       expect(input.description.length, name).toBeGreaterThan(20);
       expect(typeof input.default, name).toBe('string');
@@ -32,7 +32,7 @@ describe('action.yml', () => {
   });
 
   it('documents every output the run sets', () => {
-    expect(Object.keys(action.outputs)).toEqual(['verdict', 'report', 'failed-rules', 'warned-rules']);
+    expect(Object.keys(action.outputs)).toEqual(['verdict', 'report', 'failed-rules', 'warned-rules', 'parts']);
     for (const name of Object.keys(action.outputs)) expect(docs).toContain(`| \`${name}\` |`);
   });
 

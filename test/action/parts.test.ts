@@ -2,7 +2,8 @@
 // the Action, given their parts, takes those results instead of measuring, then compares with
 // base and comments exactly as a one-job run does.
 import { spawnSync } from 'node:child_process';
-import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { copyFileSync, mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PARTIAL_FORMAT, PARTIAL_VERSION, partialFromJson } from '../../src/results/partition.js';
@@ -123,5 +124,62 @@ describe('the blob ids a part carries', () => {
     expect(partialFromJson(part({ 'data/a.jsonl': '473a0f4c3be8a93681a267e3b1e9a7dcda1185436fe141f7749120a303721813' })).ok).toBe(true);
     expect(partialFromJson(part({ 'data/a.jsonl': 'E69DE29B' }))).toEqual({ ok: false, reason: '`blobs` holds no git blob id for data/a.jsonl' });
     expect(partialFromJson(part(['e69de29bb2d1d6434b8b29ae775ad8c2e48c5391']))).toEqual({ ok: false, reason: '`blobs` is not an object of paths and git blob ids' });
+  });
+});
+
+describe('the Action as a scan job of a matrix (input `partition`)', () => {
+  let api: FakeGitHub;
+  beforeAll(async () => {
+    api = await fakeGitHub();
+  });
+  afterAll(() => api.close());
+
+  it('writes its part and judges nothing; the final job given all parts reports as a one-job run', async () => {
+    const { repo, base, head } = pullRequestRepo();
+    const pr = { number: 65, baseSha: base, headSha: head };
+    const alone = await runBundle({ repo, event: 'pull_request', api, pr, inputs: { comment: 'never' } });
+    expect(alone.code, alone.stdout).toBe(0);
+
+    mkdirSync(path.join(repo.dir, 'artifacts'), { recursive: true });
+    // Each scan job on a runner of its own (RUNNER_TEMP holds the shard cache).
+    const temps = [1, 2].map(() => mkdtempSync(path.join(tmpdir(), 'sluice-scan-job-')));
+    let shards = 0;
+    for (const i of [1, 2]) {
+      const job = await runBundle({ repo, event: 'pull_request', api, pr, runnerTemp: temps[i - 1]!, inputs: { partition: `${i}/2` } });
+      expect(job.code, job.stdout + job.stderr).toBe(0);
+      expect(job.outputs['verdict']).toBe('');
+      const written = job.outputs['parts']!;
+      expect(path.basename(written)).toBe(`newsroom.part-${i}-of-2.json`);
+      const m = new RegExp(`partition ${i}/2: (\\d+) of 8 shards, \\d+ documents, 0 from cache`).exec(job.stdout);
+      expect(m, job.stdout).not.toBeNull();
+      shards += Number(m![1]);
+      copyFileSync(written, path.join(repo.dir, 'artifacts', path.basename(written)));
+    }
+    expect(shards).toBe(8);
+    // A scan job posts nothing: no comment, no summary of a verdict.
+    expect(api.requests).toHaveLength(0);
+
+    // Run again on the same runner's cache: the share is taken from it, nothing measured.
+    const again = await runBundle({ repo, event: 'pull_request', api, pr, runnerTemp: temps[0]!, inputs: { partition: '1/2' } });
+    expect(again.stdout).toMatch(/partition 1\/2: (\d+) of 8 shards, \d+ documents, \1 from cache/);
+
+    const fanned = await runBundle({ repo, event: 'pull_request', api, pr, inputs: { comment: 'never', parts: 'artifacts/*.json' } });
+    expect(fanned.code, fanned.stdout).toBe(0);
+    expect(fanned.stdout).toContain('took 8 shard results from 2 parts');
+    expect(judged(fanned.report)).toEqual(judged(alone.report));
+    expect(fanned.summary).toBe(alone.summary);
+  });
+
+  it('names the input when `partition` is not I/N, or comes with `parts`', async () => {
+    const { repo, base, head } = pullRequestRepo();
+    const pr = { number: 66, baseSha: base, headSha: head };
+    for (const bad of ['0/2', '3/2', 'two', '1/0']) {
+      const run = await runBundle({ repo, event: 'pull_request', api, pr, inputs: { partition: bad } });
+      expect(run.code, bad).not.toBe(0);
+      expect(run.stdout, bad).toContain(`input \`partition\`: \`${bad}\` is not I/N with 1 ≤ I ≤ N`);
+    }
+    const both = await runBundle({ repo, event: 'pull_request', api, pr, inputs: { partition: '1/2', parts: 'artifacts/*.json' } });
+    expect(both.code).not.toBe(0);
+    expect(both.stdout).toContain('inputs `partition` and `parts` go to different jobs');
   });
 });
