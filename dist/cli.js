@@ -3912,17 +3912,17 @@ var require_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
-    function visit_(key, node, visitor, path8) {
-      const ctrl = callVisitor(key, node, visitor, path8);
+    function visit_(key, node, visitor, path9) {
+      const ctrl = callVisitor(key, node, visitor, path9);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path8, ctrl);
-        return visit_(key, ctrl, visitor, path8);
+        replaceNode(key, path9, ctrl);
+        return visit_(key, ctrl, visitor, path9);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path8 = Object.freeze(path8.concat(node));
+          path9 = Object.freeze(path9.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = visit_(i, node.items[i], visitor, path8);
+            const ci = visit_(i, node.items[i], visitor, path9);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3933,13 +3933,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path8 = Object.freeze(path8.concat(node));
-          const ck = visit_("key", node.key, visitor, path8);
+          path9 = Object.freeze(path9.concat(node));
+          const ck = visit_("key", node.key, visitor, path9);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = visit_("value", node.value, visitor, path8);
+          const cv = visit_("value", node.value, visitor, path9);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -3960,17 +3960,17 @@ var require_visit = __commonJS({
     visitAsync.BREAK = BREAK;
     visitAsync.SKIP = SKIP2;
     visitAsync.REMOVE = REMOVE;
-    async function visitAsync_(key, node, visitor, path8) {
-      const ctrl = await callVisitor(key, node, visitor, path8);
+    async function visitAsync_(key, node, visitor, path9) {
+      const ctrl = await callVisitor(key, node, visitor, path9);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path8, ctrl);
-        return visitAsync_(key, ctrl, visitor, path8);
+        replaceNode(key, path9, ctrl);
+        return visitAsync_(key, ctrl, visitor, path9);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path8 = Object.freeze(path8.concat(node));
+          path9 = Object.freeze(path9.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = await visitAsync_(i, node.items[i], visitor, path8);
+            const ci = await visitAsync_(i, node.items[i], visitor, path9);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3981,13 +3981,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path8 = Object.freeze(path8.concat(node));
-          const ck = await visitAsync_("key", node.key, visitor, path8);
+          path9 = Object.freeze(path9.concat(node));
+          const ck = await visitAsync_("key", node.key, visitor, path9);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = await visitAsync_("value", node.value, visitor, path8);
+          const cv = await visitAsync_("value", node.value, visitor, path9);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -4014,23 +4014,23 @@ var require_visit = __commonJS({
       }
       return visitor;
     }
-    function callVisitor(key, node, visitor, path8) {
+    function callVisitor(key, node, visitor, path9) {
       if (typeof visitor === "function")
-        return visitor(key, node, path8);
+        return visitor(key, node, path9);
       if (identity.isMap(node))
-        return visitor.Map?.(key, node, path8);
+        return visitor.Map?.(key, node, path9);
       if (identity.isSeq(node))
-        return visitor.Seq?.(key, node, path8);
+        return visitor.Seq?.(key, node, path9);
       if (identity.isPair(node))
-        return visitor.Pair?.(key, node, path8);
+        return visitor.Pair?.(key, node, path9);
       if (identity.isScalar(node))
-        return visitor.Scalar?.(key, node, path8);
+        return visitor.Scalar?.(key, node, path9);
       if (identity.isAlias(node))
-        return visitor.Alias?.(key, node, path8);
+        return visitor.Alias?.(key, node, path9);
       return void 0;
     }
-    function replaceNode(key, path8, node) {
-      const parent = path8[path8.length - 1];
+    function replaceNode(key, path9, node) {
+      const parent = path9[path9.length - 1];
       if (identity.isCollection(parent)) {
         parent.items[key] = node;
       } else if (identity.isPair(parent)) {
@@ -4642,10 +4642,10 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path8, value) {
+    function collectionFromPath(schema, path9, value) {
       let v = value;
-      for (let i = path8.length - 1; i >= 0; --i) {
-        const k = path8[i];
+      for (let i = path9.length - 1; i >= 0; --i) {
+        const k = path9[i];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
           const a = [];
           a[k] = v;
@@ -4664,7 +4664,7 @@ var require_Collection = __commonJS({
         sourceObjects: /* @__PURE__ */ new Map()
       });
     }
-    var isEmptyPath = (path8) => path8 == null || typeof path8 === "object" && !!path8[Symbol.iterator]().next().done;
+    var isEmptyPath = (path9) => path9 == null || typeof path9 === "object" && !!path9[Symbol.iterator]().next().done;
     var Collection = class extends Node.NodeBase {
       constructor(type, schema) {
         super(type);
@@ -4694,11 +4694,11 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path8, value) {
-        if (isEmptyPath(path8))
+      addIn(path9, value) {
+        if (isEmptyPath(path9))
           this.add(value);
         else {
-          const [key, ...rest] = path8;
+          const [key, ...rest] = path9;
           const node = this.get(key, true);
           if (identity.isCollection(node))
             node.addIn(rest, value);
@@ -4712,8 +4712,8 @@ var require_Collection = __commonJS({
        * Removes a value from the collection.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path8) {
-        const [key, ...rest] = path8;
+      deleteIn(path9) {
+        const [key, ...rest] = path9;
         if (rest.length === 0)
           return this.delete(key);
         const node = this.get(key, true);
@@ -4727,8 +4727,8 @@ var require_Collection = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path8, keepScalar) {
-        const [key, ...rest] = path8;
+      getIn(path9, keepScalar) {
+        const [key, ...rest] = path9;
         const node = this.get(key, true);
         if (rest.length === 0)
           return !keepScalar && identity.isScalar(node) ? node.value : node;
@@ -4746,8 +4746,8 @@ var require_Collection = __commonJS({
       /**
        * Checks if the collection includes a value with the key `key`.
        */
-      hasIn(path8) {
-        const [key, ...rest] = path8;
+      hasIn(path9) {
+        const [key, ...rest] = path9;
         if (rest.length === 0)
           return this.has(key);
         const node = this.get(key, true);
@@ -4757,8 +4757,8 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path8, value) {
-        const [key, ...rest] = path8;
+      setIn(path9, value) {
+        const [key, ...rest] = path9;
         if (rest.length === 0) {
           this.set(key, value);
         } else {
@@ -7273,9 +7273,9 @@ var require_Document = __commonJS({
           this.contents.add(value);
       }
       /** Adds a value to the document. */
-      addIn(path8, value) {
+      addIn(path9, value) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path8, value);
+          this.contents.addIn(path9, value);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -7350,14 +7350,14 @@ var require_Document = __commonJS({
        * Removes a value from the document.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path8) {
-        if (Collection.isEmptyPath(path8)) {
+      deleteIn(path9) {
+        if (Collection.isEmptyPath(path9)) {
           if (this.contents == null)
             return false;
           this.contents = null;
           return true;
         }
-        return assertCollection(this.contents) ? this.contents.deleteIn(path8) : false;
+        return assertCollection(this.contents) ? this.contents.deleteIn(path9) : false;
       }
       /**
        * Returns item at `key`, or `undefined` if not found. By default unwraps
@@ -7372,10 +7372,10 @@ var require_Document = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path8, keepScalar) {
-        if (Collection.isEmptyPath(path8))
+      getIn(path9, keepScalar) {
+        if (Collection.isEmptyPath(path9))
           return !keepScalar && identity.isScalar(this.contents) ? this.contents.value : this.contents;
-        return identity.isCollection(this.contents) ? this.contents.getIn(path8, keepScalar) : void 0;
+        return identity.isCollection(this.contents) ? this.contents.getIn(path9, keepScalar) : void 0;
       }
       /**
        * Checks if the document includes a value with the key `key`.
@@ -7386,10 +7386,10 @@ var require_Document = __commonJS({
       /**
        * Checks if the document includes a value at `path`.
        */
-      hasIn(path8) {
-        if (Collection.isEmptyPath(path8))
+      hasIn(path9) {
+        if (Collection.isEmptyPath(path9))
           return this.contents !== void 0;
-        return identity.isCollection(this.contents) ? this.contents.hasIn(path8) : false;
+        return identity.isCollection(this.contents) ? this.contents.hasIn(path9) : false;
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
@@ -7406,13 +7406,13 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path8, value) {
-        if (Collection.isEmptyPath(path8)) {
+      setIn(path9, value) {
+        if (Collection.isEmptyPath(path9)) {
           this.contents = value;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path8), value);
+          this.contents = Collection.collectionFromPath(this.schema, Array.from(path9), value);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path8, value);
+          this.contents.setIn(path9, value);
         }
       }
       /**
@@ -9373,9 +9373,9 @@ var require_cst_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
-    visit.itemAtPath = (cst, path8) => {
+    visit.itemAtPath = (cst, path9) => {
       let item = cst;
-      for (const [field, index2] of path8) {
+      for (const [field, index2] of path9) {
         const tok = item?.[field];
         if (tok && "items" in tok) {
           item = tok.items[index2];
@@ -9384,23 +9384,23 @@ var require_cst_visit = __commonJS({
       }
       return item;
     };
-    visit.parentCollection = (cst, path8) => {
-      const parent = visit.itemAtPath(cst, path8.slice(0, -1));
-      const field = path8[path8.length - 1][0];
+    visit.parentCollection = (cst, path9) => {
+      const parent = visit.itemAtPath(cst, path9.slice(0, -1));
+      const field = path9[path9.length - 1][0];
       const coll = parent?.[field];
       if (coll && "items" in coll)
         return coll;
       throw new Error("Parent collection not found");
     };
-    function _visit(path8, item, visitor) {
-      let ctrl = visitor(item, path8);
+    function _visit(path9, item, visitor) {
+      let ctrl = visitor(item, path9);
       if (typeof ctrl === "symbol")
         return ctrl;
       for (const field of ["key", "value"]) {
         const token = item[field];
         if (token && "items" in token) {
           for (let i = 0; i < token.items.length; ++i) {
-            const ci = _visit(Object.freeze(path8.concat([[field, i]])), token.items[i], visitor);
+            const ci = _visit(Object.freeze(path9.concat([[field, i]])), token.items[i], visitor);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -9411,10 +9411,10 @@ var require_cst_visit = __commonJS({
             }
           }
           if (typeof ctrl === "function" && field === "key")
-            ctrl = ctrl(item, path8);
+            ctrl = ctrl(item, path9);
         }
       }
-      return typeof ctrl === "function" ? ctrl(item, path8) : ctrl;
+      return typeof ctrl === "function" ? ctrl(item, path9) : ctrl;
     }
     exports.visit = visit;
   }
@@ -11489,8 +11489,8 @@ var require_utils = __commonJS({
       }
       return output;
     };
-    exports.basename = (path8, { windows } = {}) => {
-      const segs = path8.split(windows ? /[\\/]/ : "/");
+    exports.basename = (path9, { windows } = {}) => {
+      const segs = path9.split(windows ? /[\\/]/ : "/");
       const last = segs[segs.length - 1];
       if (last === "") {
         return segs[segs.length - 2];
@@ -12827,7 +12827,7 @@ var require_path = __commonJS({
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.convertPosixPathToPattern = exports.convertWindowsPathToPattern = exports.convertPathToPattern = exports.escapePosixPath = exports.escapeWindowsPath = exports.escape = exports.removeLeadingDotSegment = exports.makeAbsolute = exports.unixify = void 0;
     var os = __require("os");
-    var path8 = __require("path");
+    var path9 = __require("path");
     var IS_WINDOWS_PLATFORM = os.platform() === "win32";
     var LEADING_DOT_SEGMENT_CHARACTERS_COUNT = 2;
     var POSIX_UNESCAPED_GLOB_SYMBOLS_RE = /(\\?)([()*?[\]{|}]|^!|[!+@](?=\()|\\(?![!()*+?@[\]{|}]))/g;
@@ -12839,7 +12839,7 @@ var require_path = __commonJS({
     }
     exports.unixify = unixify;
     function makeAbsolute(cwd, filepath) {
-      return path8.resolve(cwd, filepath);
+      return path9.resolve(cwd, filepath);
     }
     exports.makeAbsolute = makeAbsolute;
     function removeLeadingDotSegment(entry) {
@@ -14136,7 +14136,7 @@ var require_braces = __commonJS({
 var require_constants3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/constants.js"(exports, module) {
     "use strict";
-    var path8 = __require("path");
+    var path9 = __require("path");
     var WIN_SLASH = "\\\\/";
     var WIN_NO_SLASH = `[^${WIN_SLASH}]`;
     var DEFAULT_MAX_EXTGLOB_RECURSION = 0;
@@ -14310,7 +14310,7 @@ var require_constants3 = __commonJS({
       /* | */
       CHAR_ZERO_WIDTH_NOBREAK_SPACE: 65279,
       /* \uFEFF */
-      SEP: path8.sep,
+      SEP: path9.sep,
       /**
        * Create EXTGLOB_CHARS
        */
@@ -14337,7 +14337,7 @@ var require_constants3 = __commonJS({
 var require_utils3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/utils.js"(exports) {
     "use strict";
-    var path8 = __require("path");
+    var path9 = __require("path");
     var win32 = process.platform === "win32";
     var {
       REGEX_BACKSLASH,
@@ -14366,7 +14366,7 @@ var require_utils3 = __commonJS({
       if (options && typeof options.windows === "boolean") {
         return options.windows;
       }
-      return win32 === true || path8.sep === "\\";
+      return win32 === true || path9.sep === "\\";
     };
     exports.escapeLast = (input, char, lastIdx) => {
       const idx = input.lastIndexOf(char, lastIdx);
@@ -15730,7 +15730,7 @@ var require_parse3 = __commonJS({
 var require_picomatch3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/picomatch.js"(exports, module) {
     "use strict";
-    var path8 = __require("path");
+    var path9 = __require("path");
     var scan3 = require_scan2();
     var parse2 = require_parse3();
     var utils = require_utils3();
@@ -15815,7 +15815,7 @@ var require_picomatch3 = __commonJS({
     };
     picomatch3.matchBase = (input, glob, options, posix = utils.isWindows(options)) => {
       const regex = glob instanceof RegExp ? glob : picomatch3.makeRe(glob, options);
-      return regex.test(path8.basename(input));
+      return regex.test(path9.basename(input));
     };
     picomatch3.isMatch = (str, patterns, options) => picomatch3(patterns, options)(str);
     picomatch3.parse = (pattern, options) => {
@@ -16042,7 +16042,7 @@ var require_pattern = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.isAbsolute = exports.partitionAbsoluteAndRelative = exports.removeDuplicateSlashes = exports.matchAny = exports.convertPatternsToRe = exports.makeRe = exports.getPatternParts = exports.expandBraceExpansion = exports.expandPatternsWithBraceExpansion = exports.isAffectDepthOfReadingPattern = exports.endsWithSlashGlobStar = exports.hasGlobStar = exports.getBaseDirectory = exports.isPatternRelatedToParentDirectory = exports.getPatternsOutsideCurrentDirectory = exports.getPatternsInsideCurrentDirectory = exports.getPositivePatterns = exports.getNegativePatterns = exports.isPositivePattern = exports.isNegativePattern = exports.convertToNegativePattern = exports.convertToPositivePattern = exports.isDynamicPattern = exports.isStaticPattern = void 0;
-    var path8 = __require("path");
+    var path9 = __require("path");
     var globParent = require_glob_parent();
     var micromatch = require_micromatch();
     var GLOBSTAR = "**";
@@ -16137,7 +16137,7 @@ var require_pattern = __commonJS({
     }
     exports.endsWithSlashGlobStar = endsWithSlashGlobStar;
     function isAffectDepthOfReadingPattern(pattern) {
-      const basename = path8.basename(pattern);
+      const basename = path9.basename(pattern);
       return endsWithSlashGlobStar(pattern) || isStaticPattern(basename);
     }
     exports.isAffectDepthOfReadingPattern = isAffectDepthOfReadingPattern;
@@ -16195,7 +16195,7 @@ var require_pattern = __commonJS({
     }
     exports.partitionAbsoluteAndRelative = partitionAbsoluteAndRelative;
     function isAbsolute(pattern) {
-      return path8.isAbsolute(pattern);
+      return path9.isAbsolute(pattern);
     }
     exports.isAbsolute = isAbsolute;
   }
@@ -16372,8 +16372,8 @@ var require_utils4 = __commonJS({
     exports.errno = errno;
     var fs = require_fs();
     exports.fs = fs;
-    var path8 = require_path();
-    exports.path = path8;
+    var path9 = require_path();
+    exports.path = path9;
     var pattern = require_pattern();
     exports.pattern = pattern;
     var stream = require_stream();
@@ -16485,8 +16485,8 @@ var require_async = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path8, settings, callback) {
-      settings.fs.lstat(path8, (lstatError, lstat2) => {
+    function read(path9, settings, callback) {
+      settings.fs.lstat(path9, (lstatError, lstat2) => {
         if (lstatError !== null) {
           callFailureCallback(callback, lstatError);
           return;
@@ -16495,7 +16495,7 @@ var require_async = __commonJS({
           callSuccessCallback(callback, lstat2);
           return;
         }
-        settings.fs.stat(path8, (statError, stat4) => {
+        settings.fs.stat(path9, (statError, stat4) => {
           if (statError !== null) {
             if (settings.throwErrorOnBrokenSymbolicLink) {
               callFailureCallback(callback, statError);
@@ -16527,13 +16527,13 @@ var require_sync = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path8, settings) {
-      const lstat2 = settings.fs.lstatSync(path8);
+    function read(path9, settings) {
+      const lstat2 = settings.fs.lstatSync(path9);
       if (!lstat2.isSymbolicLink() || !settings.followSymbolicLink) {
         return lstat2;
       }
       try {
-        const stat4 = settings.fs.statSync(path8);
+        const stat4 = settings.fs.statSync(path9);
         if (settings.markSymbolicLink) {
           stat4.isSymbolicLink = () => true;
         }
@@ -16604,17 +16604,17 @@ var require_out = __commonJS({
     var sync = require_sync();
     var settings_1 = require_settings();
     exports.Settings = settings_1.default;
-    function stat4(path8, optionsOrSettingsOrCallback, callback) {
+    function stat4(path9, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path8, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path9, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path8, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path9, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.stat = stat4;
-    function statSync2(path8, optionsOrSettings) {
+    function statSync2(path9, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path8, settings);
+      return sync.read(path9, settings);
     }
     exports.statSync = statSync2;
     function getSettings(settingsOrOptions = {}) {
@@ -16830,16 +16830,16 @@ var require_async2 = __commonJS({
           return;
         }
         const tasks = names.map((name) => {
-          const path8 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
+          const path9 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
           return (done) => {
-            fsStat.stat(path8, settings.fsStatSettings, (error, stats) => {
+            fsStat.stat(path9, settings.fsStatSettings, (error, stats) => {
               if (error !== null) {
                 done(error);
                 return;
               }
               const entry = {
                 name,
-                path: path8,
+                path: path9,
                 dirent: utils.fs.createDirentFromStats(name, stats)
               };
               if (settings.stats) {
@@ -16957,7 +16957,7 @@ var require_settings2 = __commonJS({
   "node_modules/@nodelib/fs.scandir/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path8 = __require("path");
+    var path9 = __require("path");
     var fsStat = require_out();
     var fs = require_fs4();
     var Settings = class {
@@ -16965,7 +16965,7 @@ var require_settings2 = __commonJS({
         this._options = _options;
         this.followSymbolicLinks = this._getValue(this._options.followSymbolicLinks, false);
         this.fs = fs.createFileSystemAdapter(this._options.fs);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path8.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path9.sep);
         this.stats = this._getValue(this._options.stats, false);
         this.throwErrorOnBrokenSymbolicLink = this._getValue(this._options.throwErrorOnBrokenSymbolicLink, true);
         this.fsStatSettings = new fsStat.Settings({
@@ -16992,17 +16992,17 @@ var require_out2 = __commonJS({
     var sync = require_sync2();
     var settings_1 = require_settings2();
     exports.Settings = settings_1.default;
-    function scandir(path8, optionsOrSettingsOrCallback, callback) {
+    function scandir(path9, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path8, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path9, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path8, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path9, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.scandir = scandir;
-    function scandirSync(path8, optionsOrSettings) {
+    function scandirSync(path9, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path8, settings);
+      return sync.read(path9, settings);
     }
     exports.scandirSync = scandirSync;
     function getSettings(settingsOrOptions = {}) {
@@ -17650,7 +17650,7 @@ var require_settings3 = __commonJS({
   "node_modules/@nodelib/fs.walk/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path8 = __require("path");
+    var path9 = __require("path");
     var fsScandir = require_out2();
     var Settings = class {
       constructor(_options = {}) {
@@ -17660,7 +17660,7 @@ var require_settings3 = __commonJS({
         this.deepFilter = this._getValue(this._options.deepFilter, null);
         this.entryFilter = this._getValue(this._options.entryFilter, null);
         this.errorFilter = this._getValue(this._options.errorFilter, null);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path8.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path9.sep);
         this.fsScandirSettings = new fsScandir.Settings({
           followSymbolicLinks: this._options.followSymbolicLinks,
           fs: this._options.fs,
@@ -17722,7 +17722,7 @@ var require_reader2 = __commonJS({
   "node_modules/fast-glob/out/readers/reader.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path8 = __require("path");
+    var path9 = __require("path");
     var fsStat = require_out();
     var utils = require_utils4();
     var Reader = class {
@@ -17735,7 +17735,7 @@ var require_reader2 = __commonJS({
         });
       }
       _getFullEntryPath(filepath) {
-        return path8.resolve(this._settings.cwd, filepath);
+        return path9.resolve(this._settings.cwd, filepath);
       }
       _makeEntry(stats, pattern) {
         const entry = {
@@ -18151,7 +18151,7 @@ var require_provider = __commonJS({
   "node_modules/fast-glob/out/providers/provider.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path8 = __require("path");
+    var path9 = __require("path");
     var deep_1 = require_deep();
     var entry_1 = require_entry();
     var error_1 = require_error();
@@ -18165,7 +18165,7 @@ var require_provider = __commonJS({
         this.entryTransformer = new entry_2.default(this._settings);
       }
       _getRootDirectory(task) {
-        return path8.resolve(this._settings.cwd, task.base);
+        return path9.resolve(this._settings.cwd, task.base);
       }
       _getReaderOptions(task) {
         const basePath = task.base === "." ? "" : task.base;
@@ -21888,7 +21888,7 @@ var init_hf = __esm({
 // src/cli/main.ts
 import { statSync } from "node:fs";
 import { writeFile as writeFile3 } from "node:fs/promises";
-import path7 from "node:path";
+import path8 from "node:path";
 
 // src/judge/report.ts
 import { relative } from "node:path";
@@ -23283,9 +23283,9 @@ import path3 from "node:path";
 
 // src/policy/format.ts
 var PLAIN_KEY = /^[A-Za-z0-9_$-]+$/;
-function formatPath(path8) {
+function formatPath(path9) {
   let out = "";
-  for (const seg of path8) {
+  for (const seg of path9) {
     if (typeof seg === "number") out += `[${seg}]`;
     else if (PLAIN_KEY.test(seg)) out += out === "" ? seg : `.${seg}`;
     else out += `[${JSON.stringify(seg)}]`;
@@ -23341,8 +23341,8 @@ function readPolicyYaml(text) {
       errors.push({ position: { line: 1, column: 1 }, path: [], message: e2.message });
     }
   }
-  const locate2 = (path8, part = "value") => {
-    const found = walk(doc, path8);
+  const locate2 = (path9, part = "value") => {
+    const found = walk(doc, path9);
     const node = part === "key" ? found.key ?? found.value : found.value ?? found.key;
     const offset = node?.range?.[0];
     return offset === void 0 ? { line: 1, column: 1 } : pos(offset);
@@ -23360,10 +23360,10 @@ function keyText(pair) {
 function resolved(doc, node) {
   return (0, import_yaml.isAlias)(node) ? node.resolve(doc) : node;
 }
-function walk(doc, path8) {
+function walk(doc, path9) {
   let value = resolved(doc, doc.contents);
   let key;
-  for (const seg of path8) {
+  for (const seg of path9) {
     if ((0, import_yaml.isMap)(value)) {
       const pair = value.items.find((p) => keyText(p) === String(seg));
       if (!pair) break;
@@ -23383,7 +23383,7 @@ function walk(doc, path8) {
   return { key, value: value ?? void 0 };
 }
 function pathAtOffset(doc, offset) {
-  const path8 = [];
+  const path9 = [];
   let node = doc.contents;
   for (; ; ) {
     if ((0, import_yaml.isMap)(node)) {
@@ -23393,23 +23393,23 @@ function pathAtOffset(doc, offset) {
         return start !== void 0 && end !== void 0 && start <= offset && offset <= end;
       });
       const k = pair && keyText(pair);
-      if (!pair || k === void 0) return path8;
-      path8.push(k);
+      if (!pair || k === void 0) return path9;
+      path9.push(k);
       node = pair.value;
     } else if ((0, import_yaml.isSeq)(node)) {
       const i = node.items.findIndex((it) => {
         const r = it?.range;
         return r != null && r[0] <= offset && offset <= r[2];
       });
-      if (i < 0) return path8;
-      path8.push(i);
+      if (i < 0) return path9;
+      path9.push(i);
       node = node.items[i];
     } else {
-      return path8;
+      return path9;
     }
   }
 }
-function findDuplicates(doc, node, path8, pos, out) {
+function findDuplicates(doc, node, path9, pos, out) {
   if ((0, import_yaml.isMap)(node)) {
     const seen = /* @__PURE__ */ new Map();
     for (const pair of node.items) {
@@ -23421,17 +23421,17 @@ function findDuplicates(doc, node, path8, pos, out) {
         if (first) {
           out.push({
             position: pos(start),
-            path: [...path8, k],
+            path: [...path9, k],
             message: `duplicate key \`${k}\` (first set on line ${first.line}); a key may appear once per mapping`
           });
         } else {
           seen.set(k, pos(start));
         }
       }
-      findDuplicates(doc, pair.value, k === void 0 ? path8 : [...path8, k], pos, out);
+      findDuplicates(doc, pair.value, k === void 0 ? path9 : [...path9, k], pos, out);
     }
   } else if ((0, import_yaml.isSeq)(node)) {
-    node.items.forEach((item, i) => findDuplicates(doc, item, [...path8, i], pos, out));
+    node.items.forEach((item, i) => findDuplicates(doc, item, [...path9, i], pos, out));
   }
 }
 
@@ -26007,7 +26007,7 @@ function schemaKeyIndex() {
   return keyIndex;
 }
 function issueOf(e2, root) {
-  const path8 = pointerPath(e2.instancePath, root);
+  const path9 = pointerPath(e2.instancePath, root);
   const p = e2.params;
   const data2 = e2.data;
   switch (e2.keyword) {
@@ -26027,15 +26027,15 @@ function issueOf(e2, root) {
           message += `; expected one of ${valid.map((k) => `\`${k}\``).join(", ")}`;
         }
       }
-      return { path: [...path8, key], part: "key", message, ...suggestion ? { suggestion } : {} };
+      return { path: [...path9, key], part: "key", message, ...suggestion ? { suggestion } : {} };
     }
     case "required": {
       const key = String(p.missingProperty);
-      return { path: [...path8, key], part: "key", message: `missing required key \`${key}\`` };
+      return { path: [...path9, key], part: "key", message: `missing required key \`${key}\`` };
     }
     case "dependentRequired": {
       return {
-        path: [...path8, String(p.property)],
+        path: [...path9, String(p.property)],
         part: "key",
         message: `\`${String(p.property)}\` is only used together with \`${String(p.missingProperty)}\`; set \`${String(p.missingProperty)}\` too or remove it`
       };
@@ -26043,9 +26043,9 @@ function issueOf(e2, root) {
     case "false schema": {
       const m = /\/dependentSchemas\/([^/]+)\//.exec(e2.schemaPath);
       const with_ = m ? m[1].replace(/~1/g, "/").replace(/~0/g, "~") : void 0;
-      const key = String(path8[path8.length - 1]);
+      const key = String(path9[path9.length - 1]);
       return {
-        path: path8,
+        path: path9,
         part: "key",
         message: with_ ? `set either \`${with_}\` or \`${key}\`, not both` : `\`${key}\` is not allowed here`
       };
@@ -26058,25 +26058,25 @@ function issueOf(e2, root) {
         suggestion = `write shares as fractions: \`${Number.parseFloat(data2) / 100}\``;
       } else if (typeof data2 === "string" && numeric && data2.trim() !== "" && Number.isFinite(Number(data2))) {
         suggestion = `write it without quotes: \`${data2.trim()}\``;
-      } else if (path8.length === 2 && path8[0] === "languages" && typeof data2 === "number") {
-        suggestion = `write \`${String(path8[1])}: { target: ${data2} }\``;
+      } else if (path9.length === 2 && path9[0] === "languages" && typeof data2 === "number") {
+        suggestion = `write \`${String(path9[1])}: { target: ${data2} }\``;
       } else if (typeof data2 === "string" && want.includes("a list") && want.length === 1) {
         suggestion = `write a list: \`[${data2}]\``;
       }
-      return { path: path8, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path9, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "enum": {
       const allowed = p.allowedValues.map(String);
       const near = typeof data2 === "string" ? nearest(data2, allowed) : void 0;
       return {
-        path: path8,
+        path: path9,
         part: "value",
         message: `must be one of ${allowed.map((v) => `\`${v}\``).join(", ")}, not ${kindOf(data2)}`,
         ...near ? { suggestion: didYouMean(near) } : {}
       };
     }
     case "const": {
-      return { path: path8, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
+      return { path: path9, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
     }
     case "minimum":
     case "maximum":
@@ -26087,24 +26087,24 @@ function issueOf(e2, root) {
       if (e2.keyword === "maximum" && p.limit === 1 && typeof data2 === "number" && data2 > 1 && data2 <= 100) {
         suggestion = `shares are fractions of 1: ${data2} % is \`${data2 / 100}\``;
       }
-      return { path: path8, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path9, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "minProperties": {
       const names = propertyNames(e2.parentSchema);
       const dependent = new Set(Object.keys(e2.parentSchema?.dependentRequired ?? {}));
       const primary = names.filter((k) => !dependent.has(k));
       const what = primary.length > 0 && primary.length <= MAX_LISTED_KEYS ? `; set ${primary.map((k) => `\`${k}\``).join(" or ")}` : "";
-      return { path: path8, part: "value", message: `must not be empty${what}` };
+      return { path: path9, part: "value", message: `must not be empty${what}` };
     }
     case "minItems":
-      return { path: path8, part: "value", message: "must not be an empty list" };
+      return { path: path9, part: "value", message: "must not be an empty list" };
     case "minLength":
-      return { path: path8, part: "value", message: "must not be empty" };
+      return { path: path9, part: "value", message: "must not be empty" };
     case "uniqueItems":
       const item = Array.isArray(data2) ? data2[Number(p.j)] : void 0;
-      return { path: path8, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
+      return { path: path9, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
     default:
-      return { path: path8, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
+      return { path: path9, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
   }
 }
 
@@ -42227,8 +42227,8 @@ var ShardFailure = class extends Error {
   shard;
   name = "ShardFailure";
 };
-function throwIfFaultInjected(path8) {
-  if (process.env.SLUICE_FAULT_SHARD && path8 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+function throwIfFaultInjected(path9) {
+  if (process.env.SLUICE_FAULT_SHARD && path9 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
 }
 function workOf(ref) {
   return ref.textBytesHint ?? ref.sizeBytes;
@@ -42241,8 +42241,8 @@ function defaultWorkers() {
 }
 function canRunWorkers(entry) {
   if (!entry) return false;
-  const path8 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
-  return path8.endsWith(".js") && existsSync(path8);
+  const path9 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
+  return path9.endsWith(".js") && existsSync(path9);
 }
 function startWorker(entry, init) {
   const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
@@ -42631,8 +42631,8 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     for (const b of reading.values()) inFlight += b;
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes3 + inFlight, elapsedMs: performance.now() - started });
   };
-  const readingAt = (path8, b) => {
-    reading.set(path8, b);
+  const readingAt = (path9, b) => {
+    reading.set(path9, b);
     if (opts.onProgress) report();
   };
   const done = (r) => {
@@ -43060,6 +43060,11 @@ async function runCheckAgainstBase(opts, baseRef) {
   return out;
 }
 
+// src/core/parts.ts
+import { mkdtemp as mkdtemp2, rm as rm2 } from "node:fs/promises";
+import { tmpdir as tmpdir2 } from "node:os";
+import path7 from "node:path";
+
 // src/core/partition.ts
 import { readFile as readFile6 } from "node:fs/promises";
 
@@ -43068,8 +43073,8 @@ import { createHash as createHash7 } from "node:crypto";
 var PARTIAL_FORMAT = "sluice-partial";
 var PARTIAL_VERSION = 1;
 var GIT_OBJECT_ID = /^(?:[0-9a-f]{40}|[0-9a-f]{64})$/;
-function partitionOf(path8, count3) {
-  const h = createHash7("sha256").update(path8).digest();
+function partitionOf(path9, count3) {
+  const h = createHash7("sha256").update(path9).digest();
   return h.readUInt32BE(0) % count3 + 1;
 }
 function partialToJson(p) {
@@ -43200,6 +43205,72 @@ async function mergePartials(policyFile, partFiles, opts) {
   return buildReport(policy, corpus, opts.cwd);
 }
 
+// src/core/parts.ts
+async function readParts(patterns, workspace, what) {
+  const { default: fg } = await Promise.resolve().then(() => __toESM(require_out4(), 1));
+  const files = (await fg([...patterns], { cwd: workspace, absolute: true, onlyFiles: true, dot: true })).sort();
+  if (files.length === 0) {
+    throw new ConfigError(`${what}: no file matches ${patterns.map((p) => `\`${p}\``).join(", ")} in ${workspace}; bring the scan jobs' part files there first`);
+  }
+  const parts = [];
+  for (const file of files) parts.push(await readPartialFile(file));
+  return parts;
+}
+async function seedFromParts(policy, parts, top, rootRel, cacheDir, what) {
+  const { settingsId } = await prepareOrThrow(policy);
+  const mine = parts.filter((p) => p.partial.settingsId === settingsId);
+  if (mine.length === 0) {
+    const names = [...new Set(parts.map((p) => p.partial.policy))].join(", ");
+    throw new ConfigError(
+      `${what}: none of the ${parts.length} part files was measured under ${policy.file} as it is now (they are of ${names}): run \`sluice scan --partition\` with this policy and sluice version`
+    );
+  }
+  const set = checkPartialSet(mine, policy, settingsId);
+  const here = await cleanBlobs(top, rootRel);
+  const cache = new ResultCache(cacheDir);
+  let taken = 0;
+  let notTaken = 0;
+  for (const { file, partial } of set.parts) {
+    for (const result of partial.results) {
+      const scanned = partial.blobs?.[result.path];
+      const blob = here.get(result.path);
+      if (scanned !== void 0 && blob !== void 0 && scanned !== blob) {
+        throw new ConfigError(
+          `${file}: ${result.path} was scanned as git blob ${scanned.slice(0, 12)}, and this checkout has ${blob.slice(0, 12)}: run the scan jobs and this job on the same commit`
+        );
+      }
+      if (scanned === void 0 || blob === void 0 || result.read.broken) {
+        notTaken++;
+        continue;
+      }
+      await cache.put({ ...result, contentId: blob });
+      taken++;
+    }
+  }
+  return { parts: set.parts.length, taken, notTaken };
+}
+async function seedRunFromParts(opts, patterns, what) {
+  const parts = await readParts(patterns, opts.cwd ?? process.cwd(), what);
+  const scratch3 = opts.cacheDir === null ? await mkdtemp2(path7.join(tmpdir2(), "sluice-parts-")) : null;
+  const dispose = async () => {
+    if (scratch3 !== null) await rm2(scratch3, { recursive: true, force: true });
+  };
+  const cacheDir = scratch3 ?? opts.cacheDir;
+  const seeded = [];
+  try {
+    for (const file of opts.policies) {
+      const policy = await loadPolicyOrThrow(file, opts.root);
+      const top = await gitTopLevel(policy.root);
+      if (top === null) throw new ConfigError(`${what} needs the corpus in a git work tree (results are matched to shards by git blob id), and ${policy.root} of ${policy.file} is not in one`);
+      seeded.push({ policy: policy.name, seeded: await seedFromParts(policy, parts, top, await rootInRepo(top, policy), cacheDir, what) });
+    }
+  } catch (err2) {
+    await dispose();
+    throw err2;
+  }
+  return { options: { ...opts, cacheDir }, seeded, dispose };
+}
+
 // src/core/worker.ts
 import { parentPort, workerData, isMainThread } from "node:worker_threads";
 var PROGRESS_STEP_BYTES = 8 * 1024 * 1024;
@@ -43285,8 +43356,8 @@ var HTML_SPECIAL = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'":
 function escapeMarkdown(text) {
   return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, (c) => `U+${c.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`).replace(MARKDOWN_PUNCT, (c) => `\\${c}`).replace(/[&<>"']/g, (c) => HTML_SPECIAL[c]).replace(/@/g, "&#64;").replace(/:\/\//g, "&#58;//").replace(/\r?\n|\r/g, " ");
 }
-function codePath(path8) {
-  const safe = path8.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
+function codePath(path9) {
+  const safe = path9.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
   return `\`${safe}\``;
 }
 
@@ -43350,10 +43421,10 @@ var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\
 var MAX_REJECTIONS_LISTED = 10;
 function renderMarkdown(report, opts = {}) {
   const out = [];
-  const loc = (path8, line) => {
-    const text = codePath(line === void 0 ? path8 : `${path8}:${line}`);
+  const loc = (path9, line) => {
+    const text = codePath(line === void 0 ? path9 : `${path9}:${line}`);
     if (!opts.linkBase) return text;
-    const href = `${opts.linkBase}/${path8.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
+    const href = `${opts.linkBase}/${path9.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
     return `[${text}](${href})`;
   };
   out.push(`## ${ICON[report.verdict]} sluice \xB7 ${escapeMarkdown(report.policy.name)}: ${report.verdict.toUpperCase()}`);
@@ -43761,6 +43832,9 @@ Options for check:
                          change adds, rules that changed verdict (terminal and --markdown); the
                          verdict is the working tree's
       --comparison-json FILE   with --base, write the comparison as JSON to FILE
+      --parts PATTERN    take each shard's result from the part files of \`sluice scan --partition\`
+                         jobs that PATTERN matches (repeat for several), where the part names the
+                         git blob this checkout has at its path; the rest are measured here
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
       --workers N        threads measuring shards (default: one per 2 MB of compressed shards
@@ -43806,7 +43880,8 @@ function parseCli(argv, env, isTTY) {
         partition: { type: "string" },
         out: { type: "string" },
         base: { type: "string" },
-        "comparison-json": { type: "string" }
+        "comparison-json": { type: "string" },
+        parts: { type: "string", multiple: true }
       }
     });
   } catch (err2) {
@@ -43827,7 +43902,9 @@ function parseCli(argv, env, isTTY) {
   }
   const cacheDir = v["no-cache"] ? null : v["cache-dir"] ?? ".sluice-cache";
   const color = v["no-color"] ? false : v.color ? true : isTTY && !("NO_COLOR" in env && env.NO_COLOR !== "");
-  if (command !== "check" && (v.base !== void 0 || v["comparison-json"] !== void 0)) throw new UsageError(`--base and --comparison-json are options of \`sluice check\`, not of \`sluice ${command}\``);
+  if (command !== "check" && (v.base !== void 0 || v["comparison-json"] !== void 0 || v.parts !== void 0)) {
+    throw new UsageError(`--base, --comparison-json and --parts are options of \`sluice check\`, not of \`sluice ${command}\`${command === "merge" ? " (merge takes the part files as its arguments)" : ""}`);
+  }
   if (command === "scan") {
     const m = /^(\d+)\/(\d+)$/.exec(v.partition ?? "");
     if (!m) throw new UsageError("scan needs --partition I/N, e.g. --partition 1/8");
@@ -43865,13 +43942,14 @@ function parseCli(argv, env, isTTY) {
     out.base = v.base;
   }
   if (v["comparison-json"] !== void 0) out.comparisonJson = v["comparison-json"];
+  if (v.parts !== void 0) out.parts = v.parts;
   return out;
 }
 
 // src/cli/main.ts
 async function check(opts) {
   const progress = progressPrinter();
-  const options = {
+  let options = {
     policies: opts.policies,
     cacheDir: opts.cacheDir,
     ...opts.root !== void 0 ? { root: opts.root } : {},
@@ -43883,14 +43961,28 @@ async function check(opts) {
     ...opts.minSplitBytes !== void 0 ? { minSplitBytes: opts.minSplitBytes } : {},
     outputs: outputsOf([["--json", opts.json], ["--markdown", opts.markdown], ["--comparison-json", opts.comparisonJson]])
   };
-  if (opts.base !== void 0) {
-    const judged = await runCheckAgainstBase(options, opts.base);
-    progress.clear();
-    return emit(judged, opts);
+  let dispose = async () => {
+  };
+  if (opts.parts !== void 0) {
+    const seeded = await seedRunFromParts(options, opts.parts, "--parts");
+    ({ options, dispose } = seeded);
+    for (const { policy, seeded: s } of seeded.seeded) {
+      process.stderr.write(`sluice ${policy}: took ${s.taken} shard results from ${s.parts} parts${s.notTaken > 0 ? `; ${s.notTaken} left to measure here (no git blob in the part, or the file differs from the index here)` : ""}
+`);
+    }
   }
-  const reports = await runCheck(options);
-  progress.clear();
-  return emit(reports.map((report) => ({ report, comparison: null })), opts);
+  try {
+    if (opts.base !== void 0) {
+      const judged = await runCheckAgainstBase(options, opts.base);
+      progress.clear();
+      return await emit(judged, opts);
+    }
+    const reports = await runCheck(options);
+    progress.clear();
+    return await emit(reports.map((report) => ({ report, comparison: null })), opts);
+  } finally {
+    await dispose();
+  }
 }
 async function scan2(opts) {
   const progress = progressPrinter();
@@ -43968,14 +44060,14 @@ function checkPaths(outputs, policies, cacheDir) {
       return "none";
     }
   };
-  const policyFiles = new Set(policies.map((p) => path7.resolve(p)));
+  const policyFiles = new Set(policies.map((p) => path8.resolve(p)));
   for (const [option, file] of outputs) {
     if (file === void 0) continue;
     if (kind(file) === "dir") throw new UsageError(`${option} ${file}: is a directory; give a file name to write to`);
-    const parent = path7.dirname(path7.resolve(file));
+    const parent = path8.dirname(path8.resolve(file));
     const parentKind = kind(parent);
     if (parentKind !== "dir") throw new UsageError(`${option} ${file}: ${parent} ${parentKind === "none" ? "does not exist" : "is not a directory"}`);
-    if (policyFiles.has(path7.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
+    if (policyFiles.has(path8.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
   }
   if (cacheDir !== null && kind(cacheDir) === "file") throw new UsageError(`--cache-dir ${cacheDir}: is a file, not a directory`);
 }

@@ -17,7 +17,7 @@ import { makeDirectory } from '../results/cache.js';
 import { contentIdOf } from '../results/scan.js';
 import { TOOL_VERSION } from '../version.js';
 import { annotationsOf, capAnnotations, type Annotation } from './annotations.js';
-import { readParts, seedFromParts } from './parts.js';
+import { readParts, seedFromParts } from '../core/parts.js';
 import { scanPartition } from '../core/partition.js';
 import { partialToJson } from '../results/partition.js';
 import { pruneResults, restoreResults, saveResults } from './cache.js';
@@ -107,7 +107,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
   const restored = s.cache ? await restoreResults(cacheDir, cacheKey, [cacheKey.slice(0, cacheKey.lastIndexOf('-') + 1), keyPrefix], io.info, warn) : undefined;
 
   // Shard results the scan jobs of a fan-out measured, put where the measuring steps look first.
-  const parts = s.parts.length > 0 ? await readParts(s.parts, s.workspace) : null;
+  const parts = s.parts.length > 0 ? await readParts(s.parts, s.workspace, 'input `parts`') : null;
   if (parts && !top) throw new ConfigError(`input \`parts\` needs a git checkout (results are matched to shards by git blob id), and ${s.workspace} is not in a git work tree`);
 
   const usedKeys = new Set<string>();
@@ -169,7 +169,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
     judged.push(
       await io.group(`sluice: ${policy.name}`, async () => {
         if (parts && top) {
-          const seeded = await seedFromParts(policy, parts, top, await rootInRepo(top, policy), cacheDir);
+          const seeded = await seedFromParts(policy, parts, top, await rootInRepo(top, policy), cacheDir, 'input `parts`');
           const left = seeded.notTaken > 0 ? `; ${seeded.notTaken} left to measure here (no git blob in the part, or the file differs from the index here)` : '';
           io.info(`sluice ${policy.name}: took ${seeded.taken} shard results from ${seeded.parts} parts${left}`);
         }

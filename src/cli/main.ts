@@ -4,6 +4,7 @@ import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { ConfigError, repeatSuffixes, runCheck, type CheckOptions, type Progress } from '../core/check.js';
 import { GitError, runCheckAgainstBase } from '../core/compare.js';
+import { seedRunFromParts } from '../core/parts.js';
 import { mergePartials, scanPartition } from '../core/partition.js';
 import { maxWorkers, ShardFailure } from '../core/pool.js';
 import { isShardWorker, runShardWorker } from '../core/worker.js';
@@ -19,7 +20,7 @@ import { parseCli, USAGE, UsageError, type CheckCliOptions, type MergeCliOptions
 
 async function check(opts: CheckCliOptions): Promise<number> {
   const progress = progressPrinter();
-  const options: CheckOptions = {
+  let options: CheckOptions = {
     policies: opts.policies,
     cacheDir: opts.cacheDir,
     ...(opts.root !== undefined ? { root: opts.root } : {}),
@@ -30,14 +31,26 @@ async function check(opts: CheckCliOptions): Promise<number> {
     ...(opts.minSplitBytes !== undefined ? { minSplitBytes: opts.minSplitBytes } : {}),
     outputs: outputsOf([['--json', opts.json], ['--markdown', opts.markdown], ['--comparison-json', opts.comparisonJson]]),
   };
-  if (opts.base !== undefined) {
-    const judged = await runCheckAgainstBase(options, opts.base);
-    progress.clear();
-    return emit(judged, opts);
+  let dispose = async (): Promise<void> => {};
+  if (opts.parts !== undefined) {
+    const seeded = await seedRunFromParts(options, opts.parts, '--parts');
+    ({ options, dispose } = seeded);
+    for (const { policy, seeded: s } of seeded.seeded) {
+      process.stderr.write(`sluice ${policy}: took ${s.taken} shard results from ${s.parts} parts${s.notTaken > 0 ? `; ${s.notTaken} left to measure here (no git blob in the part, or the file differs from the index here)` : ''}\n`);
+    }
   }
-  const reports = await runCheck(options);
-  progress.clear();
-  return emit(reports.map((report) => ({ report, comparison: null })), opts);
+  try {
+    if (opts.base !== undefined) {
+      const judged = await runCheckAgainstBase(options, opts.base);
+      progress.clear();
+      return await emit(judged, opts);
+    }
+    const reports = await runCheck(options);
+    progress.clear();
+    return await emit(reports.map((report) => ({ report, comparison: null })), opts);
+  } finally {
+    await dispose();
+  }
 }
 
 async function scan(opts: ScanCliOptions): Promise<number> {

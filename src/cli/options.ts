@@ -21,6 +21,9 @@ Options for check:
                          change adds, rules that changed verdict (terminal and --markdown); the
                          verdict is the working tree's
       --comparison-json FILE   with --base, write the comparison as JSON to FILE
+      --parts PATTERN    take each shard's result from the part files of \`sluice scan --partition\`
+                         jobs that PATTERN matches (repeat for several), where the part names the
+                         git blob this checkout has at its path; the rest are measured here
       --cache-dir DIR    where per-shard results are cached by content (default .sluice-cache)
       --no-cache         measure every shard again
       --workers N        threads measuring shards (default: one per 2 MB of compressed shards
@@ -52,6 +55,8 @@ export interface CheckCliOptions {
   /** A git ref to compare the working tree's corpus with. */
   base?: string;
   comparisonJson?: string;
+  /** Patterns of part files whose shard results are taken instead of measuring. */
+  parts?: string[];
 }
 
 export interface ScanCliOptions {
@@ -65,7 +70,7 @@ export interface ScanCliOptions {
   minSplitBytes?: number;
 }
 
-export interface MergeCliOptions extends Omit<CheckCliOptions, 'command' | 'policies' | 'base' | 'comparisonJson'> {
+export interface MergeCliOptions extends Omit<CheckCliOptions, 'command' | 'policies' | 'base' | 'comparisonJson' | 'parts'> {
   command: 'merge';
   policy: string;
   parts: string[];
@@ -109,6 +114,7 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
         out: { type: 'string' },
         base: { type: 'string' },
         'comparison-json': { type: 'string' },
+        parts: { type: 'string', multiple: true },
       },
     });
   } catch (err) {
@@ -129,7 +135,9 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
   }
   const cacheDir = v['no-cache'] ? null : (v['cache-dir'] ?? '.sluice-cache');
   const color = v['no-color'] ? false : v.color ? true : isTTY && !('NO_COLOR' in env && env.NO_COLOR !== '');
-  if (command !== 'check' && (v.base !== undefined || v['comparison-json'] !== undefined)) throw new UsageError(`--base and --comparison-json are options of \`sluice check\`, not of \`sluice ${command}\``);
+  if (command !== 'check' && (v.base !== undefined || v['comparison-json'] !== undefined || v.parts !== undefined)) {
+    throw new UsageError(`--base, --comparison-json and --parts are options of \`sluice check\`, not of \`sluice ${command}\`${command === 'merge' ? ' (merge takes the part files as its arguments)' : ''}`);
+  }
   if (command === 'scan') {
     const m = /^(\d+)\/(\d+)$/.exec(v.partition ?? '');
     if (!m) throw new UsageError('scan needs --partition I/N, e.g. --partition 1/8');
@@ -167,5 +175,6 @@ export function parseCli(argv: string[], env: NodeJS.ProcessEnv, isTTY: boolean)
     out.base = v.base;
   }
   if (v['comparison-json'] !== undefined) out.comparisonJson = v['comparison-json'];
+  if (v.parts !== undefined) out.parts = v.parts;
   return out;
 }

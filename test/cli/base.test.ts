@@ -93,6 +93,35 @@ describe('sluice check --base', () => {
     expect(needsBase.stderr).toContain('--comparison-json needs --base REF');
     const notScan = sluice(['scan', '--policy', 'policies/newsroom.yaml', '--partition', '1/1', '--out', 'p.json', '--base', 'main'], { cwd: repo.dir });
     expect(notScan.status).toBe(2);
-    expect(notScan.stderr).toContain('--base and --comparison-json are options of `sluice check`, not of `sluice scan`');
+    expect(notScan.stderr).toContain('--base, --comparison-json and --parts are options of `sluice check`, not of `sluice scan`');
+  });
+});
+
+describe('sluice check --parts', () => {
+  it('takes the scan jobs\' results instead of measuring, and compares with base as one run does', () => {
+    const { repo } = branchRepo();
+    for (const i of [1, 2]) {
+      const scan = sluice(['scan', '--policy', 'policies/newsroom.yaml', '--partition', `${i}/2`, '--out', `part-${i}.json`, '--no-cache'], { cwd: repo.dir });
+      expect(scan.status, scan.stderr).toBe(0);
+    }
+    const out = mkdtempSync(path.join(tmpdir(), 'sluice-parts-cli-'));
+    const one = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache', '--comparison-json', path.join(out, 'one.json')], { cwd: repo.dir, json: true });
+    const fanned = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache', '--parts', 'part-*.json', '--comparison-json', path.join(out, 'fanned.json')], { cwd: repo.dir, json: true });
+    expect(fanned.status, fanned.stderr).toBe(one.status);
+    expect(fanned.stderr).toContain('sluice newsroom: took 8 shard results from 2 parts');
+    // Nothing at head measured: every head shard came from the parts (through the run's scratch cache).
+    expect(fanned.report!.timing.cacheMisses).toBe(0);
+    expect(withoutTiming(fanned.report!)).toBe(withoutTiming(one.report!));
+    expect(readFileSync(path.join(out, 'fanned.json'), 'utf8')).toBe(readFileSync(path.join(out, 'one.json'), 'utf8'));
+  });
+
+  it('is refused by merge and scan, and says when no file matches', () => {
+    const { repo } = newsroomRepo(1);
+    const merge = sluice(['merge', 'p.json', '--policy', 'policies/newsroom.yaml', '--parts', 'p.json'], { cwd: repo.dir });
+    expect(merge.status).toBe(2);
+    expect(merge.stderr).toContain('merge takes the part files as its arguments');
+    const none = sluice(['check', 'policies/newsroom.yaml', '--parts', 'artifacts/*.json', '--no-cache'], { cwd: repo.dir });
+    expect(none.status).toBe(2);
+    expect(none.stderr).toContain('--parts: no file matches `artifacts/*.json`');
   });
 });
