@@ -47,7 +47,7 @@ export interface CorpusResult {
   dictionary?: Record<string, { main: DictionaryResult; baseline?: DictionaryResult }>;
   duplicates?: DuplicateSummary;
   /** When some shards were taken as new: the duplicates they add against the rest. */
-  duplicatesAgainstExisting?: { newShards: string[]; docs: number; exactDocs: number; nearDocs: number; perShard: Array<{ shard: string; docs: number; exactDocs: number; nearDocs: number }> };
+  duplicatesAgainstExisting?: { newShards: string[]; unknownShards: string[]; docs: number; exactDocs: number; nearDocs: number; perShard: Array<{ shard: string; docs: number; exactDocs: number; nearDocs: number }> };
   contamination?: { ngram: number; evalFiles: string[]; evalItems: number };
   elapsedMs: number;
 }

@@ -3,6 +3,7 @@
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { Ajv2020 } from 'ajv/dist/2020.js';
 import { describe, expect, it } from 'vitest';
 import { fakeGitHub, newsroomRepo, policyYaml, runBundle, stories } from '../action/harness.js';
 import { sluice } from './helpers.js';
@@ -17,6 +18,9 @@ function branchRepo(): ReturnType<typeof newsroomRepo> & { head: string } {
   repo.git('mv', 'data/hin/hin-001.jsonl', 'data/hin/hin-renamed.jsonl');
   return { repo, base, head: repo.commit('Desk: new and re-filed stories') };
 }
+
+/** The comparison's JSON Schema, compiled strictly (schemas/comparison.schema.json, JSON Schema 2020-12). */
+const validComparison = new Ajv2020({ strict: true, allowUnionTypes: true, allErrors: true }).compile(JSON.parse(readFileSync('schemas/comparison.schema.json', 'utf8')) as object);
 
 const withoutTiming = (r: object): string => JSON.stringify({ ...r, timing: null }, (k, v: unknown) => (k === 'fromCache' ? undefined : v));
 
@@ -56,6 +60,8 @@ describe('sluice check --base', () => {
     expect(action.code, action.stdout).toBe(0);
     const fromAction = JSON.parse(readFileSync(path.join(action.reportDir, 'newsroom.comparison.json'), 'utf8')) as { base: { label: string } };
     expect({ ...fromAction, base: { ...fromAction.base, label: 'main' } }).toEqual(comparison);
+    // Both validate against the schema the README points to.
+    for (const c of [comparison, fromAction]) expect(validComparison(c), JSON.stringify(validComparison.errors)).toBe(true);
   });
 
   it('fails the run (exit 1) on the working tree\'s verdict, whatever the base had', () => {
