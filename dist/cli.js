@@ -22993,6 +22993,19 @@ function judgeRules(policy, corpus, langs, sampled) {
       ));
     }
   }
+  if (rules.duplicates && rules.duplicates.maxAdded !== void 0) {
+    const limit = rules.duplicates.maxAdded;
+    const added = corpus.duplicatesAgainstExisting;
+    if (added === void 0) {
+      out.push(unjudged(policy, "duplicates", "change", limit, "share", "not judged: no change to judge (the Action on a pull request, or sluice check --base REF, compares with a base)"));
+    } else {
+      const copies = added.exactDocs + added.nearDocs;
+      const rate = ratio(copies, added.docs) ?? 0;
+      const locs = added.perShard.filter((p) => p.exactDocs + p.nearDocs > 0).map((p) => ({ path: p.shard, detail: `${p.exactDocs} exact and ${p.nearDocs} near copies of the rest of the corpus among its ${p.docs} documents` }));
+      const message = added.docs === 0 ? "the change adds no documents" : `${copies} of the ${added.docs} documents the change adds copy the rest of the corpus (${added.exactDocs} exact, ${added.nearDocs} near; ${pct(rate)}; limit ${pct(limit)})`;
+      out.push(outcome(policy, "duplicates", "change", rate, limit, "share", rate > limit + 1e-12, message, locs));
+    }
+  }
   if (rules.contamination && corpus.contamination) {
     const docs = corpus.shards.reduce((s, r) => s + (r.contamination?.docs ?? 0), 0);
     const locs = corpus.shards.flatMap((s) => (s.contamination?.samples ?? []).map((x) => ({ path: s.path, line: x.line, detail: `shares a ${corpus.contamination.ngram}-gram with ${x.evalFile}:${x.evalLine}` })));
@@ -23684,6 +23697,10 @@ var policy_schema_default = {
               description: "Highest share of documents that exactly repeat an earlier one.",
               $ref: "#/$defs/share"
             },
+            "max-added": {
+              description: "Highest share of the documents a change adds (in its added, modified, and renamed-and-edited shards) that copy a document of the rest of the corpus, exactly or nearly (at `near.threshold`). Judged against a base: the Action on a pull request, `sluice check --base REF`; without one it is listed as not judged. Unlike `max-exact` and `near.max`, which are over the whole corpus, it is not diluted by the corpus's size.",
+              $ref: "#/$defs/share"
+            },
             near: {
               description: "Near-duplicate detection settings.",
               type: "object",
@@ -23837,10 +23854,10 @@ var import_ucs2length = __toESM(require_ucs2length(), 1);
 var import_equal = __toESM(require_equal(), 1);
 var pick = (m) => typeof m === "function" ? m : m.default;
 var validate = validate20;
-var schema31 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "title": "sluice policy", "description": "What a corpus must satisfy to merge: where its shards are, which languages it holds, and the rules a pull request is judged by. Keys are kebab-case.", "type": "object", "additionalProperties": false, "required": ["version", "corpus", "languages"], "properties": { "version": { "description": "Policy format version. This sluice reads version 1; a higher number means the policy was written for a newer sluice.", "type": "integer", "const": 1 }, "name": { "description": "Name shown in reports. Default: the policy file name without its extension.", "type": "string", "minLength": 1 }, "root": { "description": "Directory all globs and files are relative to, itself relative to the policy file's directory. Default: the nearest directory above the policy file that holds a `.git` entry, else the policy file's directory.", "type": "string", "minLength": 1 }, "corpus": { "description": "Where the shards are and how to read them.", "type": "object", "additionalProperties": false, "required": ["include"], "properties": { "include": { "description": "Glob or list of globs (relative to root) matching the shards: .jsonl, .txt, optionally .gz or .zst compressed.", "type": ["string", "array"], "minLength": 1, "minItems": 1, "items": { "type": "string", "minLength": 1 }, "examples": [["data/**/*.jsonl.gz"]] }, "exclude": { "description": "Glob or list of globs (relative to root) of files to leave out even when `include` matches them.", "type": ["string", "array"], "minLength": 1, "items": { "type": "string", "minLength": 1 }, "default": [] }, "text": { "description": "Dot path of the text field in JSONL records, e.g. `text` or `meta.body`.", "type": "string", "minLength": 1, "default": "text" }, "declared-language": { "description": "Dot path of a field in JSONL records that declares the document's language, when the shards carry one; it is compared with the detected language.", "type": "string", "minLength": 1 }, "subset": { "description": "Pattern with exactly one `{subset}` placeholder that names a shard's subset from its path, e.g. `data/{subset}/**`.", "type": "string", "minLength": 1, "examples": ["data/{subset}/**"] }, "encodings": { "description": "Shards not in UTF-8: glob (relative to root) \u2192 encoding name as iconv-lite knows it (e.g. `windows-1256`). A shard that matches several globs takes the first, in the order written.", "type": "object", "additionalProperties": { "type": "string", "minLength": 1 }, "default": {} }, "max-line-bytes": { "description": "Lines longer than this many bytes (after decompression) are rejected without being buffered. Default 8 MiB.", "type": "integer", "minimum": 1, "default": 8388608 } } }, "languages": { "description": "The languages the corpus is meant to hold, keyed by ISO 639-1 (`hi`), ISO 639-3 (`hin`) or BCP 47 (`hi-IN`, `sr-Latn`) codes. `other` and `und` are reserved for text in unlisted languages and text too short to label.", "type": "object", "minProperties": 1, "additionalProperties": { "$ref": "#/$defs/language" }, "examples": [{ "hin": { "scripts": ["Devanagari"], "target": 0.4 }, "eng": { "scripts": ["Latin"], "target": 0.6 } }] }, "detection": { "description": "Language identification settings.", "type": "object", "additionalProperties": false, "properties": { "min-chars": { "description": "Texts with fewer letters than this are labelled `und` (too short to judge). Default 20.", "type": "integer", "minimum": 0, "default": 20 } } }, "tokenizer": { "$ref": "#/$defs/tokenizer", "description": "The model's tokenizer: token counts for the mix and fertility are measured with it. Either `builtin` or `file`." }, "baseline": { "$ref": "#/$defs/tokenizer", "description": "A second tokenizer to compare fertility against (e.g. the one in use before a vocabulary change). Either `builtin` or `file`." }, "sampling": { "description": "Judge a deterministic sample of documents (picked by document hash) instead of all of them. Either `docs-per-shard` or `fraction`.", "type": "object", "additionalProperties": false, "minProperties": 1, "properties": { "docs-per-shard": { "description": "At most this many documents from each shard.", "type": "integer", "minimum": 1 }, "fraction": { "description": "This share of each shard's documents, in (0, 1].", "type": "number", "exclusiveMinimum": 0, "maximum": 1 } }, "dependentSchemas": { "docs-per-shard": { "properties": { "fraction": false } } } }, "rules": { "description": "What the corpus is judged by. `input` is always judged; the other rules only when listed.", "type": "object", "additionalProperties": false, "properties": { "input": { "description": "Input that could not be read: rejected lines and broken shards. Always judged, because a report over broken shards is incomplete.", "type": "object", "additionalProperties": false, "properties": { "max-rejected": { "description": "Highest share of input lines that may be rejected (invalid JSON, bad encoding, missing text field, ...). No limit when absent; rejections are still counted and reported.", "$ref": "#/$defs/share" }, "max-broken-shards": { "description": "How many shards may be unreadable or broken (corrupt or truncated compression). Default 0.", "type": "integer", "minimum": 0, "default": 0 } } }, "mix": { "description": "Each language's share of the corpus against its `target`. Needs at least one language with a `target`.", "type": "object", "additionalProperties": false, "properties": { "unit": { "description": "What a share is counted in. Default `tokens` when a tokenizer is set, else `words` (UAX #29 word boundaries).", "enum": ["docs", "bytes", "chars", "words", "tokens"] }, "tolerance": { "description": "Allowed absolute distance between a language's share and its target (0.03 = 3 points). Default 0.03.", "$ref": "#/$defs/share", "default": 0.03 }, "max-other": { "description": "Highest share of text in languages the policy does not list (`other`).", "$ref": "#/$defs/share" }, "max-und": { "description": "Highest share of text too short or unclear to label (`und`).", "$ref": "#/$defs/share" } } }, "script": { "description": "Script purity: the share of a document's letters that are in its language's own scripts.", "type": "object", "additionalProperties": false, "properties": { "min-purity": { "description": "A document whose purity is below this is impure. Default 0.9.", "$ref": "#/$defs/share", "default": 0.9 }, "max-impure-docs": { "description": "Highest share of impure documents, per language. Default 0.02.", "$ref": "#/$defs/share", "default": 0.02 } } }, "encoding": { "description": "Encoding anomalies in the text: replacement characters, control characters, bidirectional controls, zero-width characters, private-use characters, mojibake.", "type": "object", "additionalProperties": false, "properties": { "max-anomalous-docs": { "description": "Highest share of documents with any forbidden anomaly. Default 0.", "$ref": "#/$defs/share", "default": 0 }, "forbid": { "description": "Anomaly kinds that make a document anomalous. Default: replacement-char, control-chars, bidi-controls, mojibake. `zero-width` is not in the default because joiners are part of correct spelling in several scripts.", "type": "array", "uniqueItems": true, "items": { "enum": ["replacement-char", "control-chars", "bidi-controls", "zero-width", "private-use", "mojibake"] }, "default": ["replacement-char", "control-chars", "bidi-controls", "mojibake"] } } }, "fertility": { "description": "Tokenizer fertility (subword tokens per word) and the share of continued words (words split into two or more tokens), per language. Needs `tokenizer`.", "type": "object", "additionalProperties": false, "properties": { "max": { "description": "Per language key (as written under `languages`): highest running-text fertility.", "type": "object", "additionalProperties": { "type": "number", "exclusiveMinimum": 0 }, "default": {} }, "max-regression": { "description": "Highest relative rise of fertility against the base branch or the baseline tokenizer (0.03 = 3 %).", "type": "number", "minimum": 0 }, "max-continued": { "description": "Per language key: highest share of continued words.", "type": "object", "additionalProperties": { "$ref": "#/$defs/share" }, "default": {} }, "word-lists": { "description": "Per language key: a word list (one entry a line, or a hunspell .dic), relative to root, for dictionary fertility.", "type": "object", "additionalProperties": { "type": "string", "minLength": 1 }, "default": {} } } }, "duplicates": { "description": "Exact duplicates (hash of normalized text) and near duplicates (MinHash estimate of the Jaccard similarity of word shingles).", "type": "object", "additionalProperties": false, "properties": { "max-exact": { "description": "Highest share of documents that exactly repeat an earlier one.", "$ref": "#/$defs/share" }, "near": { "description": "Near-duplicate detection settings.", "type": "object", "additionalProperties": false, "properties": { "threshold": { "description": "Estimated Jaccard similarity at or above which two documents are near duplicates, in (0, 1). Default 0.8.", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.8 }, "max": { "description": "Highest share of documents that nearly repeat another.", "$ref": "#/$defs/share" }, "shingle": { "description": "Words per shingle. Default 5.", "type": "integer", "minimum": 1, "default": 5 }, "hashes": { "description": "MinHash functions per document, 16 to 1024. Default 128. The estimate's standard error is sqrt(J(1-J)/k) for k hashes: below 16 it is too coarse to judge a threshold (common practice), and above 1024 the cost grows with little gain.", "type": "integer", "minimum": 16, "maximum": 1024, "default": 128 } } }, "punctuation": { "description": "Exact-duplicate normalization: keep punctuation (default) or strip it before hashing.", "enum": ["keep", "strip"], "default": "keep" } } }, "contamination": { "description": "Training documents that contain text of an evaluation item (n-gram overlap).", "type": "object", "additionalProperties": false, "required": ["eval"], "properties": { "eval": { "description": "Glob or list of globs (relative to root) matching the evaluation sets (.jsonl or .txt).", "type": ["string", "array"], "minLength": 1, "minItems": 1, "items": { "type": "string", "minLength": 1 } }, "ngram": { "description": "Words per n-gram; a document sharing any n-gram with an evaluation item is contaminated. Default 13, the length used for the overlap test in Brown et al. (2020).", "type": "integer", "minimum": 1, "default": 13 }, "max-docs": { "description": "Highest number of contaminated documents. Default 0.", "type": "integer", "minimum": 0, "default": 0 } } } } }, "severity": { "description": "Per rule: `error` blocks the merge, `warn` only reports. A rule not listed is `error`.", "type": "object", "additionalProperties": false, "properties": { "input": { "$ref": "#/$defs/severity" }, "mix": { "$ref": "#/$defs/severity" }, "script": { "$ref": "#/$defs/severity" }, "encoding": { "$ref": "#/$defs/severity" }, "fertility": { "$ref": "#/$defs/severity" }, "duplicates": { "$ref": "#/$defs/severity" }, "contamination": { "$ref": "#/$defs/severity" } } } }, "$defs": { "share": { "description": "A share, from 0 to 1 (0.02 = 2 %).", "type": "number", "minimum": 0, "maximum": 1 }, "severity": { "description": "`error` blocks the merge; `warn` only reports.", "enum": ["error", "warn"], "default": "error" }, "language": { "description": "One language of the corpus. An entry with nothing after the colon takes the defaults.", "type": ["object", "null"], "additionalProperties": false, "properties": { "scripts": { "description": "Unicode scripts that count as this language's own, as Script property names (`Devanagari`) or ISO 15924 codes (`Deva`). Optional for common languages and for BCP 47 keys with a script subtag (`sr-Latn`).", "type": "array", "minItems": 1, "uniqueItems": true, "items": { "type": "string", "minLength": 1 }, "examples": [["Devanagari"], ["Han", "Hiragana", "Katakana"]] }, "target": { "description": "Target share of the mix, 0 to 1 (0.40 = 40 %). Targets of all languages sum to at most 1.", "$ref": "#/$defs/share" } } }, "tokenizer": { "type": "object", "additionalProperties": false, "minProperties": 1, "properties": { "builtin": { "description": "An encoding shipped with sluice (from js-tiktoken).", "enum": ["gpt2", "r50k_base", "p50k_base", "cl100k_base", "o200k_base"] }, "file": { "description": "A tokenizer file relative to root: a Hugging Face `tokenizer.json`, or tiktoken ranks (`.tiktoken`: base64 token and rank per line).", "type": "string", "minLength": 1 }, "format": { "description": "Format of `file`. Default: from the file name (`.json` \u2192 tokenizer.json, `.tiktoken` \u2192 tiktoken).", "enum": ["tokenizer.json", "tiktoken"] }, "pattern": { "description": "For tiktoken rank files, which carry no pre-tokenization pattern: the builtin whose pattern to use (e.g. `cl100k_base`), or a JavaScript regular expression (Unicode mode).", "type": "string", "minLength": 1 } }, "dependentRequired": { "format": ["file"], "pattern": ["file"] }, "dependentSchemas": { "builtin": { "properties": { "file": false } } } } } };
+var schema31 = { "$schema": "https://json-schema.org/draft/2020-12/schema", "title": "sluice policy", "description": "What a corpus must satisfy to merge: where its shards are, which languages it holds, and the rules a pull request is judged by. Keys are kebab-case.", "type": "object", "additionalProperties": false, "required": ["version", "corpus", "languages"], "properties": { "version": { "description": "Policy format version. This sluice reads version 1; a higher number means the policy was written for a newer sluice.", "type": "integer", "const": 1 }, "name": { "description": "Name shown in reports. Default: the policy file name without its extension.", "type": "string", "minLength": 1 }, "root": { "description": "Directory all globs and files are relative to, itself relative to the policy file's directory. Default: the nearest directory above the policy file that holds a `.git` entry, else the policy file's directory.", "type": "string", "minLength": 1 }, "corpus": { "description": "Where the shards are and how to read them.", "type": "object", "additionalProperties": false, "required": ["include"], "properties": { "include": { "description": "Glob or list of globs (relative to root) matching the shards: .jsonl, .txt, optionally .gz or .zst compressed.", "type": ["string", "array"], "minLength": 1, "minItems": 1, "items": { "type": "string", "minLength": 1 }, "examples": [["data/**/*.jsonl.gz"]] }, "exclude": { "description": "Glob or list of globs (relative to root) of files to leave out even when `include` matches them.", "type": ["string", "array"], "minLength": 1, "items": { "type": "string", "minLength": 1 }, "default": [] }, "text": { "description": "Dot path of the text field in JSONL records, e.g. `text` or `meta.body`.", "type": "string", "minLength": 1, "default": "text" }, "declared-language": { "description": "Dot path of a field in JSONL records that declares the document's language, when the shards carry one; it is compared with the detected language.", "type": "string", "minLength": 1 }, "subset": { "description": "Pattern with exactly one `{subset}` placeholder that names a shard's subset from its path, e.g. `data/{subset}/**`.", "type": "string", "minLength": 1, "examples": ["data/{subset}/**"] }, "encodings": { "description": "Shards not in UTF-8: glob (relative to root) \u2192 encoding name as iconv-lite knows it (e.g. `windows-1256`). A shard that matches several globs takes the first, in the order written.", "type": "object", "additionalProperties": { "type": "string", "minLength": 1 }, "default": {} }, "max-line-bytes": { "description": "Lines longer than this many bytes (after decompression) are rejected without being buffered. Default 8 MiB.", "type": "integer", "minimum": 1, "default": 8388608 } } }, "languages": { "description": "The languages the corpus is meant to hold, keyed by ISO 639-1 (`hi`), ISO 639-3 (`hin`) or BCP 47 (`hi-IN`, `sr-Latn`) codes. `other` and `und` are reserved for text in unlisted languages and text too short to label.", "type": "object", "minProperties": 1, "additionalProperties": { "$ref": "#/$defs/language" }, "examples": [{ "hin": { "scripts": ["Devanagari"], "target": 0.4 }, "eng": { "scripts": ["Latin"], "target": 0.6 } }] }, "detection": { "description": "Language identification settings.", "type": "object", "additionalProperties": false, "properties": { "min-chars": { "description": "Texts with fewer letters than this are labelled `und` (too short to judge). Default 20.", "type": "integer", "minimum": 0, "default": 20 } } }, "tokenizer": { "$ref": "#/$defs/tokenizer", "description": "The model's tokenizer: token counts for the mix and fertility are measured with it. Either `builtin` or `file`." }, "baseline": { "$ref": "#/$defs/tokenizer", "description": "A second tokenizer to compare fertility against (e.g. the one in use before a vocabulary change). Either `builtin` or `file`." }, "sampling": { "description": "Judge a deterministic sample of documents (picked by document hash) instead of all of them. Either `docs-per-shard` or `fraction`.", "type": "object", "additionalProperties": false, "minProperties": 1, "properties": { "docs-per-shard": { "description": "At most this many documents from each shard.", "type": "integer", "minimum": 1 }, "fraction": { "description": "This share of each shard's documents, in (0, 1].", "type": "number", "exclusiveMinimum": 0, "maximum": 1 } }, "dependentSchemas": { "docs-per-shard": { "properties": { "fraction": false } } } }, "rules": { "description": "What the corpus is judged by. `input` is always judged; the other rules only when listed.", "type": "object", "additionalProperties": false, "properties": { "input": { "description": "Input that could not be read: rejected lines and broken shards. Always judged, because a report over broken shards is incomplete.", "type": "object", "additionalProperties": false, "properties": { "max-rejected": { "description": "Highest share of input lines that may be rejected (invalid JSON, bad encoding, missing text field, ...). No limit when absent; rejections are still counted and reported.", "$ref": "#/$defs/share" }, "max-broken-shards": { "description": "How many shards may be unreadable or broken (corrupt or truncated compression). Default 0.", "type": "integer", "minimum": 0, "default": 0 } } }, "mix": { "description": "Each language's share of the corpus against its `target`. Needs at least one language with a `target`.", "type": "object", "additionalProperties": false, "properties": { "unit": { "description": "What a share is counted in. Default `tokens` when a tokenizer is set, else `words` (UAX #29 word boundaries).", "enum": ["docs", "bytes", "chars", "words", "tokens"] }, "tolerance": { "description": "Allowed absolute distance between a language's share and its target (0.03 = 3 points). Default 0.03.", "$ref": "#/$defs/share", "default": 0.03 }, "max-other": { "description": "Highest share of text in languages the policy does not list (`other`).", "$ref": "#/$defs/share" }, "max-und": { "description": "Highest share of text too short or unclear to label (`und`).", "$ref": "#/$defs/share" } } }, "script": { "description": "Script purity: the share of a document's letters that are in its language's own scripts.", "type": "object", "additionalProperties": false, "properties": { "min-purity": { "description": "A document whose purity is below this is impure. Default 0.9.", "$ref": "#/$defs/share", "default": 0.9 }, "max-impure-docs": { "description": "Highest share of impure documents, per language. Default 0.02.", "$ref": "#/$defs/share", "default": 0.02 } } }, "encoding": { "description": "Encoding anomalies in the text: replacement characters, control characters, bidirectional controls, zero-width characters, private-use characters, mojibake.", "type": "object", "additionalProperties": false, "properties": { "max-anomalous-docs": { "description": "Highest share of documents with any forbidden anomaly. Default 0.", "$ref": "#/$defs/share", "default": 0 }, "forbid": { "description": "Anomaly kinds that make a document anomalous. Default: replacement-char, control-chars, bidi-controls, mojibake. `zero-width` is not in the default because joiners are part of correct spelling in several scripts.", "type": "array", "uniqueItems": true, "items": { "enum": ["replacement-char", "control-chars", "bidi-controls", "zero-width", "private-use", "mojibake"] }, "default": ["replacement-char", "control-chars", "bidi-controls", "mojibake"] } } }, "fertility": { "description": "Tokenizer fertility (subword tokens per word) and the share of continued words (words split into two or more tokens), per language. Needs `tokenizer`.", "type": "object", "additionalProperties": false, "properties": { "max": { "description": "Per language key (as written under `languages`): highest running-text fertility.", "type": "object", "additionalProperties": { "type": "number", "exclusiveMinimum": 0 }, "default": {} }, "max-regression": { "description": "Highest relative rise of fertility against the base branch or the baseline tokenizer (0.03 = 3 %).", "type": "number", "minimum": 0 }, "max-continued": { "description": "Per language key: highest share of continued words.", "type": "object", "additionalProperties": { "$ref": "#/$defs/share" }, "default": {} }, "word-lists": { "description": "Per language key: a word list (one entry a line, or a hunspell .dic), relative to root, for dictionary fertility.", "type": "object", "additionalProperties": { "type": "string", "minLength": 1 }, "default": {} } } }, "duplicates": { "description": "Exact duplicates (hash of normalized text) and near duplicates (MinHash estimate of the Jaccard similarity of word shingles).", "type": "object", "additionalProperties": false, "properties": { "max-exact": { "description": "Highest share of documents that exactly repeat an earlier one.", "$ref": "#/$defs/share" }, "max-added": { "description": "Highest share of the documents a change adds (in its added, modified, and renamed-and-edited shards) that copy a document of the rest of the corpus, exactly or nearly (at `near.threshold`). Judged against a base: the Action on a pull request, `sluice check --base REF`; without one it is listed as not judged. Unlike `max-exact` and `near.max`, which are over the whole corpus, it is not diluted by the corpus's size.", "$ref": "#/$defs/share" }, "near": { "description": "Near-duplicate detection settings.", "type": "object", "additionalProperties": false, "properties": { "threshold": { "description": "Estimated Jaccard similarity at or above which two documents are near duplicates, in (0, 1). Default 0.8.", "type": "number", "exclusiveMinimum": 0, "exclusiveMaximum": 1, "default": 0.8 }, "max": { "description": "Highest share of documents that nearly repeat another.", "$ref": "#/$defs/share" }, "shingle": { "description": "Words per shingle. Default 5.", "type": "integer", "minimum": 1, "default": 5 }, "hashes": { "description": "MinHash functions per document, 16 to 1024. Default 128. The estimate's standard error is sqrt(J(1-J)/k) for k hashes: below 16 it is too coarse to judge a threshold (common practice), and above 1024 the cost grows with little gain.", "type": "integer", "minimum": 16, "maximum": 1024, "default": 128 } } }, "punctuation": { "description": "Exact-duplicate normalization: keep punctuation (default) or strip it before hashing.", "enum": ["keep", "strip"], "default": "keep" } } }, "contamination": { "description": "Training documents that contain text of an evaluation item (n-gram overlap).", "type": "object", "additionalProperties": false, "required": ["eval"], "properties": { "eval": { "description": "Glob or list of globs (relative to root) matching the evaluation sets (.jsonl or .txt).", "type": ["string", "array"], "minLength": 1, "minItems": 1, "items": { "type": "string", "minLength": 1 } }, "ngram": { "description": "Words per n-gram; a document sharing any n-gram with an evaluation item is contaminated. Default 13, the length used for the overlap test in Brown et al. (2020).", "type": "integer", "minimum": 1, "default": 13 }, "max-docs": { "description": "Highest number of contaminated documents. Default 0.", "type": "integer", "minimum": 0, "default": 0 } } } } }, "severity": { "description": "Per rule: `error` blocks the merge, `warn` only reports. A rule not listed is `error`.", "type": "object", "additionalProperties": false, "properties": { "input": { "$ref": "#/$defs/severity" }, "mix": { "$ref": "#/$defs/severity" }, "script": { "$ref": "#/$defs/severity" }, "encoding": { "$ref": "#/$defs/severity" }, "fertility": { "$ref": "#/$defs/severity" }, "duplicates": { "$ref": "#/$defs/severity" }, "contamination": { "$ref": "#/$defs/severity" } } } }, "$defs": { "share": { "description": "A share, from 0 to 1 (0.02 = 2 %).", "type": "number", "minimum": 0, "maximum": 1 }, "severity": { "description": "`error` blocks the merge; `warn` only reports.", "enum": ["error", "warn"], "default": "error" }, "language": { "description": "One language of the corpus. An entry with nothing after the colon takes the defaults.", "type": ["object", "null"], "additionalProperties": false, "properties": { "scripts": { "description": "Unicode scripts that count as this language's own, as Script property names (`Devanagari`) or ISO 15924 codes (`Deva`). Optional for common languages and for BCP 47 keys with a script subtag (`sr-Latn`).", "type": "array", "minItems": 1, "uniqueItems": true, "items": { "type": "string", "minLength": 1 }, "examples": [["Devanagari"], ["Han", "Hiragana", "Katakana"]] }, "target": { "description": "Target share of the mix, 0 to 1 (0.40 = 40 %). Targets of all languages sum to at most 1.", "$ref": "#/$defs/share" } } }, "tokenizer": { "type": "object", "additionalProperties": false, "minProperties": 1, "properties": { "builtin": { "description": "An encoding shipped with sluice (from js-tiktoken).", "enum": ["gpt2", "r50k_base", "p50k_base", "cl100k_base", "o200k_base"] }, "file": { "description": "A tokenizer file relative to root: a Hugging Face `tokenizer.json`, or tiktoken ranks (`.tiktoken`: base64 token and rank per line).", "type": "string", "minLength": 1 }, "format": { "description": "Format of `file`. Default: from the file name (`.json` \u2192 tokenizer.json, `.tiktoken` \u2192 tiktoken).", "enum": ["tokenizer.json", "tiktoken"] }, "pattern": { "description": "For tiktoken rank files, which carry no pre-tokenization pattern: the builtin whose pattern to use (e.g. `cl100k_base`), or a JavaScript regular expression (Unicode mode).", "type": "string", "minLength": 1 } }, "dependentRequired": { "format": ["file"], "pattern": ["file"] }, "dependentSchemas": { "builtin": { "properties": { "file": false } } } } } };
 var schema34 = { "type": "object", "additionalProperties": false, "minProperties": 1, "properties": { "builtin": { "description": "An encoding shipped with sluice (from js-tiktoken).", "enum": ["gpt2", "r50k_base", "p50k_base", "cl100k_base", "o200k_base"] }, "file": { "description": "A tokenizer file relative to root: a Hugging Face `tokenizer.json`, or tiktoken ranks (`.tiktoken`: base64 token and rank per line).", "type": "string", "minLength": 1 }, "format": { "description": "Format of `file`. Default: from the file name (`.json` \u2192 tokenizer.json, `.tiktoken` \u2192 tiktoken).", "enum": ["tokenizer.json", "tiktoken"] }, "pattern": { "description": "For tiktoken rank files, which carry no pre-tokenization pattern: the builtin whose pattern to use (e.g. `cl100k_base`), or a JavaScript regular expression (Unicode mode).", "type": "string", "minLength": 1 } }, "dependentRequired": { "format": ["file"], "pattern": ["file"] }, "dependentSchemas": { "builtin": { "properties": { "file": false } } } };
 var schema33 = { "description": "A share, from 0 to 1 (0.02 = 2 %).", "type": "number", "minimum": 0, "maximum": 1 };
-var schema46 = { "description": "`error` blocks the merge; `warn` only reports.", "enum": ["error", "warn"], "default": "error" };
+var schema47 = { "description": "`error` blocks the merge; `warn` only reports.", "enum": ["error", "warn"], "default": "error" };
 var func1 = Object.prototype.hasOwnProperty;
 var func2 = pick(import_ucs2length.default);
 var func0 = pick(import_equal.default);
@@ -25393,7 +25410,7 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
           let data58 = data34.duplicates;
           if (data58 && typeof data58 == "object" && !Array.isArray(data58)) {
             for (const key17 in data58) {
-              if (!(key17 === "max-exact" || key17 === "near" || key17 === "punctuation")) {
+              if (!(key17 === "max-exact" || key17 === "max-added" || key17 === "near" || key17 === "punctuation")) {
                 const err122 = { instancePath: instancePath + "/rules/duplicates", schemaPath: "#/properties/rules/properties/duplicates/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key17 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.duplicates, data: data58 };
                 if (vErrors === null) {
                   vErrors = [err122];
@@ -25434,43 +25451,43 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                 errors++;
               }
             }
-            if (data58.near !== void 0) {
-              let data60 = data58.near;
-              if (data60 && typeof data60 == "object" && !Array.isArray(data60)) {
-                for (const key18 in data60) {
-                  if (!(key18 === "threshold" || key18 === "max" || key18 === "shingle" || key18 === "hashes")) {
-                    const err126 = { instancePath: instancePath + "/rules/duplicates/near", schemaPath: "#/properties/rules/properties/duplicates/properties/near/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key18 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.duplicates.properties.near, data: data60 };
-                    if (vErrors === null) {
-                      vErrors = [err126];
-                    } else {
-                      vErrors.push(err126);
-                    }
-                    errors++;
-                  }
-                }
-                if (data60.threshold !== void 0) {
-                  let data61 = data60.threshold;
-                  if (typeof data61 == "number" && isFinite(data61)) {
-                    if (data61 >= 1 || isNaN(data61)) {
-                      const err127 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data61 };
-                      if (vErrors === null) {
-                        vErrors = [err127];
-                      } else {
-                        vErrors.push(err127);
-                      }
-                      errors++;
-                    }
-                    if (data61 <= 0 || isNaN(data61)) {
-                      const err128 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data61 };
-                      if (vErrors === null) {
-                        vErrors = [err128];
-                      } else {
-                        vErrors.push(err128);
-                      }
-                      errors++;
-                    }
+            if (data58["max-added"] !== void 0) {
+              let data60 = data58["max-added"];
+              if (typeof data60 == "number" && isFinite(data60)) {
+                if (data60 > 1 || isNaN(data60)) {
+                  const err126 = { instancePath: instancePath + "/rules/duplicates/max-added", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data60 };
+                  if (vErrors === null) {
+                    vErrors = [err126];
                   } else {
-                    const err129 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data61 };
+                    vErrors.push(err126);
+                  }
+                  errors++;
+                }
+                if (data60 < 0 || isNaN(data60)) {
+                  const err127 = { instancePath: instancePath + "/rules/duplicates/max-added", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data60 };
+                  if (vErrors === null) {
+                    vErrors = [err127];
+                  } else {
+                    vErrors.push(err127);
+                  }
+                  errors++;
+                }
+              } else {
+                const err128 = { instancePath: instancePath + "/rules/duplicates/max-added", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data60 };
+                if (vErrors === null) {
+                  vErrors = [err128];
+                } else {
+                  vErrors.push(err128);
+                }
+                errors++;
+              }
+            }
+            if (data58.near !== void 0) {
+              let data61 = data58.near;
+              if (data61 && typeof data61 == "object" && !Array.isArray(data61)) {
+                for (const key18 in data61) {
+                  if (!(key18 === "threshold" || key18 === "max" || key18 === "shingle" || key18 === "hashes")) {
+                    const err129 = { instancePath: instancePath + "/rules/duplicates/near", schemaPath: "#/properties/rules/properties/duplicates/properties/near/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key18 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.duplicates.properties.near, data: data61 };
                     if (vErrors === null) {
                       vErrors = [err129];
                     } else {
@@ -25479,11 +25496,11 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                     errors++;
                   }
                 }
-                if (data60.max !== void 0) {
-                  let data62 = data60.max;
+                if (data61.threshold !== void 0) {
+                  let data62 = data61.threshold;
                   if (typeof data62 == "number" && isFinite(data62)) {
-                    if (data62 > 1 || isNaN(data62)) {
-                      const err130 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data62 };
+                    if (data62 >= 1 || isNaN(data62)) {
+                      const err130 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/exclusiveMaximum", keyword: "exclusiveMaximum", params: { comparison: "<", limit: 1 }, message: "must be < 1", schema: 1, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data62 };
                       if (vErrors === null) {
                         vErrors = [err130];
                       } else {
@@ -25491,8 +25508,8 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                       }
                       errors++;
                     }
-                    if (data62 < 0 || isNaN(data62)) {
-                      const err131 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data62 };
+                    if (data62 <= 0 || isNaN(data62)) {
+                      const err131 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/exclusiveMinimum", keyword: "exclusiveMinimum", params: { comparison: ">", limit: 0 }, message: "must be > 0", schema: 0, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data62 };
                       if (vErrors === null) {
                         vErrors = [err131];
                       } else {
@@ -25501,7 +25518,7 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                       errors++;
                     }
                   } else {
-                    const err132 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data62 };
+                    const err132 = { instancePath: instancePath + "/rules/duplicates/near/threshold", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/threshold/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.threshold, data: data62 };
                     if (vErrors === null) {
                       vErrors = [err132];
                     } else {
@@ -25510,20 +25527,20 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                     errors++;
                   }
                 }
-                if (data60.shingle !== void 0) {
-                  let data63 = data60.shingle;
-                  if (!(typeof data63 == "number" && (!(data63 % 1) && !isNaN(data63)) && isFinite(data63))) {
-                    const err133 = { instancePath: instancePath + "/rules/duplicates/near/shingle", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/shingle/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle, data: data63 };
-                    if (vErrors === null) {
-                      vErrors = [err133];
-                    } else {
-                      vErrors.push(err133);
-                    }
-                    errors++;
-                  }
+                if (data61.max !== void 0) {
+                  let data63 = data61.max;
                   if (typeof data63 == "number" && isFinite(data63)) {
-                    if (data63 < 1 || isNaN(data63)) {
-                      const err134 = { instancePath: instancePath + "/rules/duplicates/near/shingle", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/shingle/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle, data: data63 };
+                    if (data63 > 1 || isNaN(data63)) {
+                      const err133 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1 }, message: "must be <= 1", schema: 1, parentSchema: schema33, data: data63 };
+                      if (vErrors === null) {
+                        vErrors = [err133];
+                      } else {
+                        vErrors.push(err133);
+                      }
+                      errors++;
+                    }
+                    if (data63 < 0 || isNaN(data63)) {
+                      const err134 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema33, data: data63 };
                       if (vErrors === null) {
                         vErrors = [err134];
                       } else {
@@ -25531,12 +25548,8 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                       }
                       errors++;
                     }
-                  }
-                }
-                if (data60.hashes !== void 0) {
-                  let data64 = data60.hashes;
-                  if (!(typeof data64 == "number" && (!(data64 % 1) && !isNaN(data64)) && isFinite(data64))) {
-                    const err135 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data64 };
+                  } else {
+                    const err135 = { instancePath: instancePath + "/rules/duplicates/near/max", schemaPath: "#/$defs/share/type", keyword: "type", params: { type: "number" }, message: "must be number", schema: schema33.type, parentSchema: schema33, data: data63 };
                     if (vErrors === null) {
                       vErrors = [err135];
                     } else {
@@ -25544,18 +25557,21 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                     }
                     errors++;
                   }
-                  if (typeof data64 == "number" && isFinite(data64)) {
-                    if (data64 > 1024 || isNaN(data64)) {
-                      const err136 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1024 }, message: "must be <= 1024", schema: 1024, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data64 };
-                      if (vErrors === null) {
-                        vErrors = [err136];
-                      } else {
-                        vErrors.push(err136);
-                      }
-                      errors++;
+                }
+                if (data61.shingle !== void 0) {
+                  let data64 = data61.shingle;
+                  if (!(typeof data64 == "number" && (!(data64 % 1) && !isNaN(data64)) && isFinite(data64))) {
+                    const err136 = { instancePath: instancePath + "/rules/duplicates/near/shingle", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/shingle/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle, data: data64 };
+                    if (vErrors === null) {
+                      vErrors = [err136];
+                    } else {
+                      vErrors.push(err136);
                     }
-                    if (data64 < 16 || isNaN(data64)) {
-                      const err137 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/minimum", keyword: "minimum", params: { comparison: ">=", limit: 16 }, message: "must be >= 16", schema: 16, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data64 };
+                    errors++;
+                  }
+                  if (typeof data64 == "number" && isFinite(data64)) {
+                    if (data64 < 1 || isNaN(data64)) {
+                      const err137 = { instancePath: instancePath + "/rules/duplicates/near/shingle", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/shingle/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.shingle, data: data64 };
                       if (vErrors === null) {
                         vErrors = [err137];
                       } else {
@@ -25565,53 +25581,52 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                     }
                   }
                 }
+                if (data61.hashes !== void 0) {
+                  let data65 = data61.hashes;
+                  if (!(typeof data65 == "number" && (!(data65 % 1) && !isNaN(data65)) && isFinite(data65))) {
+                    const err138 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data65 };
+                    if (vErrors === null) {
+                      vErrors = [err138];
+                    } else {
+                      vErrors.push(err138);
+                    }
+                    errors++;
+                  }
+                  if (typeof data65 == "number" && isFinite(data65)) {
+                    if (data65 > 1024 || isNaN(data65)) {
+                      const err139 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/maximum", keyword: "maximum", params: { comparison: "<=", limit: 1024 }, message: "must be <= 1024", schema: 1024, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data65 };
+                      if (vErrors === null) {
+                        vErrors = [err139];
+                      } else {
+                        vErrors.push(err139);
+                      }
+                      errors++;
+                    }
+                    if (data65 < 16 || isNaN(data65)) {
+                      const err140 = { instancePath: instancePath + "/rules/duplicates/near/hashes", schemaPath: "#/properties/rules/properties/duplicates/properties/near/properties/hashes/minimum", keyword: "minimum", params: { comparison: ">=", limit: 16 }, message: "must be >= 16", schema: 16, parentSchema: schema31.properties.rules.properties.duplicates.properties.near.properties.hashes, data: data65 };
+                      if (vErrors === null) {
+                        vErrors = [err140];
+                      } else {
+                        vErrors.push(err140);
+                      }
+                      errors++;
+                    }
+                  }
+                }
               } else {
-                const err138 = { instancePath: instancePath + "/rules/duplicates/near", schemaPath: "#/properties/rules/properties/duplicates/properties/near/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.duplicates.properties.near.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near, data: data60 };
+                const err141 = { instancePath: instancePath + "/rules/duplicates/near", schemaPath: "#/properties/rules/properties/duplicates/properties/near/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.duplicates.properties.near.type, parentSchema: schema31.properties.rules.properties.duplicates.properties.near, data: data61 };
                 if (vErrors === null) {
-                  vErrors = [err138];
+                  vErrors = [err141];
                 } else {
-                  vErrors.push(err138);
+                  vErrors.push(err141);
                 }
                 errors++;
               }
             }
             if (data58.punctuation !== void 0) {
-              let data65 = data58.punctuation;
-              if (!(data65 === "keep" || data65 === "strip")) {
-                const err139 = { instancePath: instancePath + "/rules/duplicates/punctuation", schemaPath: "#/properties/rules/properties/duplicates/properties/punctuation/enum", keyword: "enum", params: { allowedValues: schema31.properties.rules.properties.duplicates.properties.punctuation.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.rules.properties.duplicates.properties.punctuation.enum, parentSchema: schema31.properties.rules.properties.duplicates.properties.punctuation, data: data65 };
-                if (vErrors === null) {
-                  vErrors = [err139];
-                } else {
-                  vErrors.push(err139);
-                }
-                errors++;
-              }
-            }
-          } else {
-            const err140 = { instancePath: instancePath + "/rules/duplicates", schemaPath: "#/properties/rules/properties/duplicates/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.duplicates.type, parentSchema: schema31.properties.rules.properties.duplicates, data: data58 };
-            if (vErrors === null) {
-              vErrors = [err140];
-            } else {
-              vErrors.push(err140);
-            }
-            errors++;
-          }
-        }
-        if (data34.contamination !== void 0) {
-          let data66 = data34.contamination;
-          if (data66 && typeof data66 == "object" && !Array.isArray(data66)) {
-            if (data66.eval === void 0) {
-              const err141 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/required", keyword: "required", params: { missingProperty: "eval" }, message: "must have required property 'eval'", schema: schema31.properties.rules.properties.contamination.required, parentSchema: schema31.properties.rules.properties.contamination, data: data66 };
-              if (vErrors === null) {
-                vErrors = [err141];
-              } else {
-                vErrors.push(err141);
-              }
-              errors++;
-            }
-            for (const key19 in data66) {
-              if (!(key19 === "eval" || key19 === "ngram" || key19 === "max-docs")) {
-                const err142 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key19 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.contamination, data: data66 };
+              let data66 = data58.punctuation;
+              if (!(data66 === "keep" || data66 === "strip")) {
+                const err142 = { instancePath: instancePath + "/rules/duplicates/punctuation", schemaPath: "#/properties/rules/properties/duplicates/properties/punctuation/enum", keyword: "enum", params: { allowedValues: schema31.properties.rules.properties.duplicates.properties.punctuation.enum }, message: "must be equal to one of the allowed values", schema: schema31.properties.rules.properties.duplicates.properties.punctuation.enum, parentSchema: schema31.properties.rules.properties.duplicates.properties.punctuation, data: data66 };
                 if (vErrors === null) {
                   vErrors = [err142];
                 } else {
@@ -25620,147 +25635,144 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
                 errors++;
               }
             }
-            if (data66.eval !== void 0) {
-              let data67 = data66.eval;
-              if (typeof data67 !== "string" && !Array.isArray(data67)) {
-                const err143 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/type", keyword: "type", params: { type: schema31.properties.rules.properties.contamination.properties.eval.type }, message: "must be string,array", schema: schema31.properties.rules.properties.contamination.properties.eval.type, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data67 };
+          } else {
+            const err143 = { instancePath: instancePath + "/rules/duplicates", schemaPath: "#/properties/rules/properties/duplicates/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.duplicates.type, parentSchema: schema31.properties.rules.properties.duplicates, data: data58 };
+            if (vErrors === null) {
+              vErrors = [err143];
+            } else {
+              vErrors.push(err143);
+            }
+            errors++;
+          }
+        }
+        if (data34.contamination !== void 0) {
+          let data67 = data34.contamination;
+          if (data67 && typeof data67 == "object" && !Array.isArray(data67)) {
+            if (data67.eval === void 0) {
+              const err144 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/required", keyword: "required", params: { missingProperty: "eval" }, message: "must have required property 'eval'", schema: schema31.properties.rules.properties.contamination.required, parentSchema: schema31.properties.rules.properties.contamination, data: data67 };
+              if (vErrors === null) {
+                vErrors = [err144];
+              } else {
+                vErrors.push(err144);
+              }
+              errors++;
+            }
+            for (const key19 in data67) {
+              if (!(key19 === "eval" || key19 === "ngram" || key19 === "max-docs")) {
+                const err145 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key19 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.rules.properties.contamination, data: data67 };
                 if (vErrors === null) {
-                  vErrors = [err143];
+                  vErrors = [err145];
                 } else {
-                  vErrors.push(err143);
+                  vErrors.push(err145);
                 }
                 errors++;
               }
-              if (typeof data67 === "string") {
-                if (func2(data67) < 1) {
-                  const err144 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data67 };
+            }
+            if (data67.eval !== void 0) {
+              let data68 = data67.eval;
+              if (typeof data68 !== "string" && !Array.isArray(data68)) {
+                const err146 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/type", keyword: "type", params: { type: schema31.properties.rules.properties.contamination.properties.eval.type }, message: "must be string,array", schema: schema31.properties.rules.properties.contamination.properties.eval.type, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data68 };
+                if (vErrors === null) {
+                  vErrors = [err146];
+                } else {
+                  vErrors.push(err146);
+                }
+                errors++;
+              }
+              if (typeof data68 === "string") {
+                if (func2(data68) < 1) {
+                  const err147 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data68 };
                   if (vErrors === null) {
-                    vErrors = [err144];
+                    vErrors = [err147];
                   } else {
-                    vErrors.push(err144);
+                    vErrors.push(err147);
                   }
                   errors++;
                 }
               }
-              if (Array.isArray(data67)) {
-                if (data67.length < 1) {
-                  const err145 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data67 };
+              if (Array.isArray(data68)) {
+                if (data68.length < 1) {
+                  const err148 = { instancePath: instancePath + "/rules/contamination/eval", schemaPath: "#/properties/rules/properties/contamination/properties/eval/minItems", keyword: "minItems", params: { limit: 1 }, message: "must NOT have fewer than 1 items", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval, data: data68 };
                   if (vErrors === null) {
-                    vErrors = [err145];
+                    vErrors = [err148];
                   } else {
-                    vErrors.push(err145);
+                    vErrors.push(err148);
                   }
                   errors++;
                 }
-                const len3 = data67.length;
+                const len3 = data68.length;
                 for (let i4 = 0; i4 < len3; i4++) {
-                  let data68 = data67[i4];
-                  if (typeof data68 === "string") {
-                    if (func2(data68) < 1) {
-                      const err146 = { instancePath: instancePath + "/rules/contamination/eval/" + i4, schemaPath: "#/properties/rules/properties/contamination/properties/eval/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval.items, data: data68 };
+                  let data69 = data68[i4];
+                  if (typeof data69 === "string") {
+                    if (func2(data69) < 1) {
+                      const err149 = { instancePath: instancePath + "/rules/contamination/eval/" + i4, schemaPath: "#/properties/rules/properties/contamination/properties/eval/items/minLength", keyword: "minLength", params: { limit: 1 }, message: "must NOT have fewer than 1 characters", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.eval.items, data: data69 };
                       if (vErrors === null) {
-                        vErrors = [err146];
+                        vErrors = [err149];
                       } else {
-                        vErrors.push(err146);
+                        vErrors.push(err149);
                       }
                       errors++;
                     }
                   } else {
-                    const err147 = { instancePath: instancePath + "/rules/contamination/eval/" + i4, schemaPath: "#/properties/rules/properties/contamination/properties/eval/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.rules.properties.contamination.properties.eval.items.type, parentSchema: schema31.properties.rules.properties.contamination.properties.eval.items, data: data68 };
+                    const err150 = { instancePath: instancePath + "/rules/contamination/eval/" + i4, schemaPath: "#/properties/rules/properties/contamination/properties/eval/items/type", keyword: "type", params: { type: "string" }, message: "must be string", schema: schema31.properties.rules.properties.contamination.properties.eval.items.type, parentSchema: schema31.properties.rules.properties.contamination.properties.eval.items, data: data69 };
                     if (vErrors === null) {
-                      vErrors = [err147];
+                      vErrors = [err150];
                     } else {
-                      vErrors.push(err147);
+                      vErrors.push(err150);
                     }
                     errors++;
                   }
                 }
               }
             }
-            if (data66.ngram !== void 0) {
-              let data69 = data66.ngram;
-              if (!(typeof data69 == "number" && (!(data69 % 1) && !isNaN(data69)) && isFinite(data69))) {
-                const err148 = { instancePath: instancePath + "/rules/contamination/ngram", schemaPath: "#/properties/rules/properties/contamination/properties/ngram/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.contamination.properties.ngram.type, parentSchema: schema31.properties.rules.properties.contamination.properties.ngram, data: data69 };
+            if (data67.ngram !== void 0) {
+              let data70 = data67.ngram;
+              if (!(typeof data70 == "number" && (!(data70 % 1) && !isNaN(data70)) && isFinite(data70))) {
+                const err151 = { instancePath: instancePath + "/rules/contamination/ngram", schemaPath: "#/properties/rules/properties/contamination/properties/ngram/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.contamination.properties.ngram.type, parentSchema: schema31.properties.rules.properties.contamination.properties.ngram, data: data70 };
                 if (vErrors === null) {
-                  vErrors = [err148];
+                  vErrors = [err151];
                 } else {
-                  vErrors.push(err148);
+                  vErrors.push(err151);
                 }
                 errors++;
               }
-              if (typeof data69 == "number" && isFinite(data69)) {
-                if (data69 < 1 || isNaN(data69)) {
-                  const err149 = { instancePath: instancePath + "/rules/contamination/ngram", schemaPath: "#/properties/rules/properties/contamination/properties/ngram/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.ngram, data: data69 };
+              if (typeof data70 == "number" && isFinite(data70)) {
+                if (data70 < 1 || isNaN(data70)) {
+                  const err152 = { instancePath: instancePath + "/rules/contamination/ngram", schemaPath: "#/properties/rules/properties/contamination/properties/ngram/minimum", keyword: "minimum", params: { comparison: ">=", limit: 1 }, message: "must be >= 1", schema: 1, parentSchema: schema31.properties.rules.properties.contamination.properties.ngram, data: data70 };
                   if (vErrors === null) {
-                    vErrors = [err149];
+                    vErrors = [err152];
                   } else {
-                    vErrors.push(err149);
+                    vErrors.push(err152);
                   }
                   errors++;
                 }
               }
             }
-            if (data66["max-docs"] !== void 0) {
-              let data70 = data66["max-docs"];
-              if (!(typeof data70 == "number" && (!(data70 % 1) && !isNaN(data70)) && isFinite(data70))) {
-                const err150 = { instancePath: instancePath + "/rules/contamination/max-docs", schemaPath: "#/properties/rules/properties/contamination/properties/max-docs/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.contamination.properties["max-docs"].type, parentSchema: schema31.properties.rules.properties.contamination.properties["max-docs"], data: data70 };
+            if (data67["max-docs"] !== void 0) {
+              let data71 = data67["max-docs"];
+              if (!(typeof data71 == "number" && (!(data71 % 1) && !isNaN(data71)) && isFinite(data71))) {
+                const err153 = { instancePath: instancePath + "/rules/contamination/max-docs", schemaPath: "#/properties/rules/properties/contamination/properties/max-docs/type", keyword: "type", params: { type: "integer" }, message: "must be integer", schema: schema31.properties.rules.properties.contamination.properties["max-docs"].type, parentSchema: schema31.properties.rules.properties.contamination.properties["max-docs"], data: data71 };
                 if (vErrors === null) {
-                  vErrors = [err150];
+                  vErrors = [err153];
                 } else {
-                  vErrors.push(err150);
+                  vErrors.push(err153);
                 }
                 errors++;
               }
-              if (typeof data70 == "number" && isFinite(data70)) {
-                if (data70 < 0 || isNaN(data70)) {
-                  const err151 = { instancePath: instancePath + "/rules/contamination/max-docs", schemaPath: "#/properties/rules/properties/contamination/properties/max-docs/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema31.properties.rules.properties.contamination.properties["max-docs"], data: data70 };
+              if (typeof data71 == "number" && isFinite(data71)) {
+                if (data71 < 0 || isNaN(data71)) {
+                  const err154 = { instancePath: instancePath + "/rules/contamination/max-docs", schemaPath: "#/properties/rules/properties/contamination/properties/max-docs/minimum", keyword: "minimum", params: { comparison: ">=", limit: 0 }, message: "must be >= 0", schema: 0, parentSchema: schema31.properties.rules.properties.contamination.properties["max-docs"], data: data71 };
                   if (vErrors === null) {
-                    vErrors = [err151];
+                    vErrors = [err154];
                   } else {
-                    vErrors.push(err151);
+                    vErrors.push(err154);
                   }
                   errors++;
                 }
               }
             }
           } else {
-            const err152 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.contamination.type, parentSchema: schema31.properties.rules.properties.contamination, data: data66 };
-            if (vErrors === null) {
-              vErrors = [err152];
-            } else {
-              vErrors.push(err152);
-            }
-            errors++;
-          }
-        }
-      } else {
-        const err153 = { instancePath: instancePath + "/rules", schemaPath: "#/properties/rules/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.type, parentSchema: schema31.properties.rules, data: data34 };
-        if (vErrors === null) {
-          vErrors = [err153];
-        } else {
-          vErrors.push(err153);
-        }
-        errors++;
-      }
-    }
-    if (data2.severity !== void 0) {
-      let data71 = data2.severity;
-      if (data71 && typeof data71 == "object" && !Array.isArray(data71)) {
-        for (const key20 in data71) {
-          if (!(key20 === "input" || key20 === "mix" || key20 === "script" || key20 === "encoding" || key20 === "fertility" || key20 === "duplicates" || key20 === "contamination")) {
-            const err154 = { instancePath: instancePath + "/severity", schemaPath: "#/properties/severity/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key20 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.severity, data: data71 };
-            if (vErrors === null) {
-              vErrors = [err154];
-            } else {
-              vErrors.push(err154);
-            }
-            errors++;
-          }
-        }
-        if (data71.input !== void 0) {
-          let data72 = data71.input;
-          if (!(data72 === "error" || data72 === "warn")) {
-            const err155 = { instancePath: instancePath + "/severity/input", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data72 };
+            const err155 = { instancePath: instancePath + "/rules/contamination", schemaPath: "#/properties/rules/properties/contamination/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.properties.contamination.type, parentSchema: schema31.properties.rules.properties.contamination, data: data67 };
             if (vErrors === null) {
               vErrors = [err155];
             } else {
@@ -25769,22 +25781,22 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
             errors++;
           }
         }
-        if (data71.mix !== void 0) {
-          let data73 = data71.mix;
-          if (!(data73 === "error" || data73 === "warn")) {
-            const err156 = { instancePath: instancePath + "/severity/mix", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data73 };
-            if (vErrors === null) {
-              vErrors = [err156];
-            } else {
-              vErrors.push(err156);
-            }
-            errors++;
-          }
+      } else {
+        const err156 = { instancePath: instancePath + "/rules", schemaPath: "#/properties/rules/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.rules.type, parentSchema: schema31.properties.rules, data: data34 };
+        if (vErrors === null) {
+          vErrors = [err156];
+        } else {
+          vErrors.push(err156);
         }
-        if (data71.script !== void 0) {
-          let data74 = data71.script;
-          if (!(data74 === "error" || data74 === "warn")) {
-            const err157 = { instancePath: instancePath + "/severity/script", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data74 };
+        errors++;
+      }
+    }
+    if (data2.severity !== void 0) {
+      let data72 = data2.severity;
+      if (data72 && typeof data72 == "object" && !Array.isArray(data72)) {
+        for (const key20 in data72) {
+          if (!(key20 === "input" || key20 === "mix" || key20 === "script" || key20 === "encoding" || key20 === "fertility" || key20 === "duplicates" || key20 === "contamination")) {
+            const err157 = { instancePath: instancePath + "/severity", schemaPath: "#/properties/severity/additionalProperties", keyword: "additionalProperties", params: { additionalProperty: key20 }, message: "must NOT have additional properties", schema: false, parentSchema: schema31.properties.severity, data: data72 };
             if (vErrors === null) {
               vErrors = [err157];
             } else {
@@ -25793,10 +25805,10 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
             errors++;
           }
         }
-        if (data71.encoding !== void 0) {
-          let data75 = data71.encoding;
-          if (!(data75 === "error" || data75 === "warn")) {
-            const err158 = { instancePath: instancePath + "/severity/encoding", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data75 };
+        if (data72.input !== void 0) {
+          let data73 = data72.input;
+          if (!(data73 === "error" || data73 === "warn")) {
+            const err158 = { instancePath: instancePath + "/severity/input", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema47.enum }, message: "must be equal to one of the allowed values", schema: schema47.enum, parentSchema: schema47, data: data73 };
             if (vErrors === null) {
               vErrors = [err158];
             } else {
@@ -25805,10 +25817,10 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
             errors++;
           }
         }
-        if (data71.fertility !== void 0) {
-          let data76 = data71.fertility;
-          if (!(data76 === "error" || data76 === "warn")) {
-            const err159 = { instancePath: instancePath + "/severity/fertility", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data76 };
+        if (data72.mix !== void 0) {
+          let data74 = data72.mix;
+          if (!(data74 === "error" || data74 === "warn")) {
+            const err159 = { instancePath: instancePath + "/severity/mix", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema47.enum }, message: "must be equal to one of the allowed values", schema: schema47.enum, parentSchema: schema47, data: data74 };
             if (vErrors === null) {
               vErrors = [err159];
             } else {
@@ -25817,10 +25829,10 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
             errors++;
           }
         }
-        if (data71.duplicates !== void 0) {
-          let data77 = data71.duplicates;
-          if (!(data77 === "error" || data77 === "warn")) {
-            const err160 = { instancePath: instancePath + "/severity/duplicates", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data77 };
+        if (data72.script !== void 0) {
+          let data75 = data72.script;
+          if (!(data75 === "error" || data75 === "warn")) {
+            const err160 = { instancePath: instancePath + "/severity/script", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema47.enum }, message: "must be equal to one of the allowed values", schema: schema47.enum, parentSchema: schema47, data: data75 };
             if (vErrors === null) {
               vErrors = [err160];
             } else {
@@ -25829,10 +25841,10 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
             errors++;
           }
         }
-        if (data71.contamination !== void 0) {
-          let data78 = data71.contamination;
-          if (!(data78 === "error" || data78 === "warn")) {
-            const err161 = { instancePath: instancePath + "/severity/contamination", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema46.enum }, message: "must be equal to one of the allowed values", schema: schema46.enum, parentSchema: schema46, data: data78 };
+        if (data72.encoding !== void 0) {
+          let data76 = data72.encoding;
+          if (!(data76 === "error" || data76 === "warn")) {
+            const err161 = { instancePath: instancePath + "/severity/encoding", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema47.enum }, message: "must be equal to one of the allowed values", schema: schema47.enum, parentSchema: schema47, data: data76 };
             if (vErrors === null) {
               vErrors = [err161];
             } else {
@@ -25841,22 +25853,58 @@ function validate20(data2, { instancePath = "", parentData, parentDataProperty, 
             errors++;
           }
         }
+        if (data72.fertility !== void 0) {
+          let data77 = data72.fertility;
+          if (!(data77 === "error" || data77 === "warn")) {
+            const err162 = { instancePath: instancePath + "/severity/fertility", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema47.enum }, message: "must be equal to one of the allowed values", schema: schema47.enum, parentSchema: schema47, data: data77 };
+            if (vErrors === null) {
+              vErrors = [err162];
+            } else {
+              vErrors.push(err162);
+            }
+            errors++;
+          }
+        }
+        if (data72.duplicates !== void 0) {
+          let data78 = data72.duplicates;
+          if (!(data78 === "error" || data78 === "warn")) {
+            const err163 = { instancePath: instancePath + "/severity/duplicates", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema47.enum }, message: "must be equal to one of the allowed values", schema: schema47.enum, parentSchema: schema47, data: data78 };
+            if (vErrors === null) {
+              vErrors = [err163];
+            } else {
+              vErrors.push(err163);
+            }
+            errors++;
+          }
+        }
+        if (data72.contamination !== void 0) {
+          let data79 = data72.contamination;
+          if (!(data79 === "error" || data79 === "warn")) {
+            const err164 = { instancePath: instancePath + "/severity/contamination", schemaPath: "#/$defs/severity/enum", keyword: "enum", params: { allowedValues: schema47.enum }, message: "must be equal to one of the allowed values", schema: schema47.enum, parentSchema: schema47, data: data79 };
+            if (vErrors === null) {
+              vErrors = [err164];
+            } else {
+              vErrors.push(err164);
+            }
+            errors++;
+          }
+        }
       } else {
-        const err162 = { instancePath: instancePath + "/severity", schemaPath: "#/properties/severity/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.severity.type, parentSchema: schema31.properties.severity, data: data71 };
+        const err165 = { instancePath: instancePath + "/severity", schemaPath: "#/properties/severity/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.properties.severity.type, parentSchema: schema31.properties.severity, data: data72 };
         if (vErrors === null) {
-          vErrors = [err162];
+          vErrors = [err165];
         } else {
-          vErrors.push(err162);
+          vErrors.push(err165);
         }
         errors++;
       }
     }
   } else {
-    const err163 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.type, parentSchema: schema31, data: data2 };
+    const err166 = { instancePath, schemaPath: "#/type", keyword: "type", params: { type: "object" }, message: "must be object", schema: schema31.type, parentSchema: schema31, data: data2 };
     if (vErrors === null) {
-      vErrors = [err163];
+      vErrors = [err166];
     } else {
-      vErrors.push(err163);
+      vErrors.push(err166);
     }
     errors++;
   }
@@ -27625,6 +27673,7 @@ function buildRules(r, ctx) {
     const nearMax = asNum(near.max);
     const rule = {
       ...asNum(dup["max-exact"]) !== void 0 ? { maxExact: asNum(dup["max-exact"]) } : {},
+      ...asNum(dup["max-added"]) !== void 0 ? { maxAdded: asNum(dup["max-added"]) } : {},
       near: {
         threshold: asNum(near.threshold) ?? DEFAULT_NEAR.threshold,
         ...nearMax !== void 0 ? { max: nearMax } : {},
@@ -27633,8 +27682,8 @@ function buildRules(r, ctx) {
       },
       punctuation: dup.punctuation === "strip" ? "strip" : "keep"
     };
-    if (rule.maxExact === void 0 && rule.near.max === void 0) {
-      sink.warning(["rules", "duplicates"], "sets neither `max-exact` nor `near.max`, so it only reports", { part: "key" });
+    if (rule.maxExact === void 0 && rule.near.max === void 0 && rule.maxAdded === void 0) {
+      sink.warning(["rules", "duplicates"], "sets none of `max-exact`, `near.max` and `max-added`, so it only reports", { part: "key" });
     }
     if (rule.near.threshold < LOOSE_NEAR_THRESHOLD) {
       sink.warning(["rules", "duplicates", "near", "threshold"], `${fmt(rule.near.threshold)} counts documents that share little text as near duplicates`);
@@ -42794,9 +42843,10 @@ function compareReports(base, head, commit, label, changes, addedDuplicates) {
   const baseRules = /* @__PURE__ */ new Map();
   const RANK2 = { pass: 0, unjudged: 1, uncertain: 2, warn: 3, fail: 4 };
   const worst = (a, b) => a !== void 0 && RANK2[a] > RANK2[b] ? a : b;
-  for (const r of base?.rules ?? []) baseRules.set(id(r), worst(baseRules.get(id(r)), r.verdict));
+  const overBoth = (r) => r.scope !== "change";
+  for (const r of (base?.rules ?? []).filter(overBoth)) baseRules.set(id(r), worst(baseRules.get(id(r)), r.verdict));
   const headRules = /* @__PURE__ */ new Map();
-  for (const r of head.rules) {
+  for (const r of head.rules.filter(overBoth)) {
     const prev = headRules.get(id(r));
     const verdict = worst(prev?.verdict, r.verdict);
     headRules.set(id(r), { verdict, message: prev && prev.verdict === verdict ? prev.message : r.message, rule: r.rule, scope: r.scope });
@@ -42807,7 +42857,7 @@ function compareReports(base, head, commit, label, changes, addedDuplicates) {
       const from = baseRules.get(k) ?? "none";
       if (from !== h.verdict) flipped.push({ rule: h.rule, scope: h.scope, from, to: h.verdict, message: h.message });
     }
-    for (const r of base.rules) {
+    for (const r of base.rules.filter(overBoth)) {
       if (!headRules.has(id(r)) && r.verdict !== "pass" && !flipped.some((f) => id(f) === id(r))) flipped.push({ rule: r.rule, scope: r.scope, from: baseRules.get(id(r)), to: "none", message: r.message });
     }
   }

@@ -114,9 +114,11 @@ export function compareReports(base: Report | null, head: Report, commit: string
   // A rule may have several outcomes per scope (input: broken and rejected); the worst stands for the pair.
   const RANK: Record<RuleVerdict, number> = { pass: 0, unjudged: 1, uncertain: 2, warn: 3, fail: 4 };
   const worst = (a: RuleVerdict | undefined, b: RuleVerdict): RuleVerdict => (a !== undefined && RANK[a] > RANK[b] ? a : b);
-  for (const r of base?.rules ?? []) baseRules.set(id(r), worst(baseRules.get(id(r)), r.verdict));
+  // A rule over the change itself (scope `change`) has an outcome only at head, where there is a change: it never flips.
+  const overBoth = (r: { scope: string }): boolean => r.scope !== 'change';
+  for (const r of (base?.rules ?? []).filter(overBoth)) baseRules.set(id(r), worst(baseRules.get(id(r)), r.verdict));
   const headRules = new Map<string, { verdict: RuleVerdict; message: string; rule: string; scope: string }>();
-  for (const r of head.rules) {
+  for (const r of head.rules.filter(overBoth)) {
     const prev = headRules.get(id(r));
     const verdict = worst(prev?.verdict, r.verdict);
     headRules.set(id(r), { verdict, message: prev && prev.verdict === verdict ? prev.message : r.message, rule: r.rule, scope: r.scope });
@@ -127,7 +129,7 @@ export function compareReports(base: Report | null, head: Report, commit: string
       const from = baseRules.get(k) ?? 'none';
       if (from !== h.verdict) flipped.push({ rule: h.rule, scope: h.scope, from, to: h.verdict, message: h.message });
     }
-    for (const r of base.rules) {
+    for (const r of base.rules.filter(overBoth)) {
       if (!headRules.has(id(r)) && r.verdict !== 'pass' && !flipped.some((f) => id(f) === id(r))) flipped.push({ rule: r.rule, scope: r.scope, from: baseRules.get(id(r))!, to: 'none', message: r.message });
     }
   }

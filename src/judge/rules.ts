@@ -279,6 +279,25 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
     }
   }
 
+  // What the change itself adds, not diluted by the corpus's size: known only when there is a base to compare with.
+  if (rules.duplicates && rules.duplicates.maxAdded !== undefined) {
+    const limit = rules.duplicates.maxAdded;
+    const added = corpus.duplicatesAgainstExisting;
+    if (added === undefined) {
+      out.push(unjudged(policy, 'duplicates', 'change', limit, 'share', 'not judged: no change to judge (the Action on a pull request, or sluice check --base REF, compares with a base)'));
+    } else {
+      const copies = added.exactDocs + added.nearDocs;
+      const rate = ratio(copies, added.docs) ?? 0;
+      const locs: Location[] = added.perShard
+        .filter((p) => p.exactDocs + p.nearDocs > 0)
+        .map((p) => ({ path: p.shard, detail: `${p.exactDocs} exact and ${p.nearDocs} near copies of the rest of the corpus among its ${p.docs} documents` }));
+      const message = added.docs === 0
+        ? 'the change adds no documents'
+        : `${copies} of the ${added.docs} documents the change adds copy the rest of the corpus (${added.exactDocs} exact, ${added.nearDocs} near; ${pct(rate)}; limit ${pct(limit)})`;
+      out.push(outcome(policy, 'duplicates', 'change', rate, limit, 'share', rate > limit + 1e-12, message, locs));
+    }
+  }
+
   if (rules.contamination && corpus.contamination) {
     const docs = corpus.shards.reduce((s, r) => s + (r.contamination?.docs ?? 0), 0);
     const locs = corpus.shards.flatMap((s) => (s.contamination?.samples ?? []).map((x) => ({ path: s.path, line: x.line, detail: `shares a ${corpus.contamination!.ngram}-gram with ${x.evalFile}:${x.evalLine}` })));

@@ -419,6 +419,7 @@ function buildRules(r: Obj, ctx: RulesContext): Rules {
     const nearMax = asNum(near.max);
     const rule: DuplicatesRule = {
       ...(asNum(dup['max-exact']) !== undefined ? { maxExact: asNum(dup['max-exact'])! } : {}),
+      ...(asNum(dup['max-added']) !== undefined ? { maxAdded: asNum(dup['max-added'])! } : {}),
       near: {
         threshold: asNum(near.threshold) ?? DEFAULT_NEAR.threshold,
         ...(nearMax !== undefined ? { max: nearMax } : {}),
@@ -427,8 +428,8 @@ function buildRules(r: Obj, ctx: RulesContext): Rules {
       },
       punctuation: dup.punctuation === 'strip' ? 'strip' : 'keep',
     };
-    if (rule.maxExact === undefined && rule.near.max === undefined) {
-      sink.warning(['rules', 'duplicates'], 'sets neither `max-exact` nor `near.max`, so it only reports', { part: 'key' });
+    if (rule.maxExact === undefined && rule.near.max === undefined && rule.maxAdded === undefined) {
+      sink.warning(['rules', 'duplicates'], 'sets none of `max-exact`, `near.max` and `max-added`, so it only reports', { part: 'key' });
     }
     if (rule.near.threshold < LOOSE_NEAR_THRESHOLD) {
       sink.warning(['rules', 'duplicates', 'near', 'threshold'], `${fmt(rule.near.threshold)} counts documents that share little text as near duplicates`);

@@ -121,6 +121,8 @@ export interface NearDuplicateSpec {
 
 export interface DuplicatesRule {
   maxExact?: number;
+  /** Highest share of the documents a change adds that copy the rest of the corpus (exactly or nearly); judged only against a base. */
+  maxAdded?: number;
   near: NearDuplicateSpec;
   /** Exact-duplicate normalization: punctuation kept (default) or stripped. */
   punctuation: 'keep' | 'strip';

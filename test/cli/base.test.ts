@@ -131,3 +131,45 @@ describe('sluice check --parts', () => {
     expect(none.stderr).toContain('--parts: no file matches `artifacts/*.json`');
   });
 });
+
+describe('rules.duplicates.max-added: the copies a change adds, not diluted by the corpus', () => {
+  const withMaxAdded = (limit: number): string => policyYaml({ duplicates: true }).replace('max: 0.5 } }', `max: 0.5 }, max-added: ${limit} }`);
+
+  it('fails a change whose new documents copy the corpus past the limit, though the corpus-wide rates pass', () => {
+    const { repo } = newsroomRepo(3, withMaxAdded(0.3));
+    repo.git('checkout', '-q', '-b', 'desk/update');
+    repo.write('data/hin/hin-new.jsonl', stories('hin', 10, 1700));
+    repo.write('data/eng/eng-copy.jsonl', stories('eng', 10, 1)); // a copy of eng-001.jsonl
+    repo.write('data/eng/eng-002.jsonl', stories('eng', 12, 2));
+    repo.commit('Desk: new stories and a re-filed English shard');
+    const run = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache'], { cwd: repo.dir, json: true });
+    expect(run.status).toBe(1);
+    const added = run.report!.rules.find((r) => r.rule === 'duplicates' && r.scope === 'change')!;
+    // 10 of the 32 documents in the added and modified shards are copies of eng-001.jsonl: 31.25 %.
+    expect(added).toMatchObject({ verdict: 'fail', measured: 10 / 32, limit: 0.3 });
+    expect(added.message).toBe('10 of the 32 documents the change adds copy the rest of the corpus (10 exact, 0 near; 31.3 %; limit 30.0 %)');
+    expect(added.locations).toEqual([{ path: 'data/eng/eng-copy.jsonl', detail: '10 exact and 0 near copies of the rest of the corpus among its 10 documents' }]);
+    // The corpus-wide exact rate (10 of 72 documents) is under its limit of 50 %.
+    expect(run.report!.rules.find((r) => r.rule === 'duplicates' && r.scope === 'corpus' && r.message.includes('exact'))!.verdict).toBe('pass');
+    expect(run.report!.headline).toBe('FAIL: 1 check at error severity failed: duplicates (change)');
+    // It exists only at head, so it is not listed among the rules that changed against base.
+    expect(run.stdout).toContain('no rule changed its verdict');
+  });
+
+  it('passes under a higher limit, and is listed as not judged without a base', () => {
+    const { repo } = newsroomRepo(2, withMaxAdded(0.5));
+    const plain = sluice(['check', 'policies/newsroom.yaml', '--no-cache'], { cwd: repo.dir, json: true });
+    expect(plain.status).toBe(0);
+    const rule = plain.report!.rules.find((r) => r.scope === 'change')!;
+    expect(rule).toMatchObject({ rule: 'duplicates', verdict: 'unjudged', measured: null, limit: 0.5 });
+    expect(rule.message).toContain('not judged: no change to judge');
+    expect(plain.report!.headline).toContain('1 check not judged, with nothing to measure: duplicates (change)');
+    repo.git('checkout', '-q', '-b', 'desk/more');
+    repo.write('data/eng/eng-copy.jsonl', stories('eng', 10, 1));
+    repo.write('data/hin/hin-new.jsonl', stories('hin', 10, 1800));
+    repo.commit('Desk: more');
+    const run = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache'], { cwd: repo.dir, json: true });
+    expect(run.status, run.stderr).toBe(0);
+    expect(run.report!.rules.find((r) => r.scope === 'change')).toMatchObject({ verdict: 'pass', measured: 0.5, limit: 0.5 });
+  });
+});
