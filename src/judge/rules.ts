@@ -286,14 +286,18 @@ export function judgeRules(policy: Policy, corpus: CorpusResult, langs: Record<s
     if (added === undefined) {
       out.push(unjudged(policy, 'duplicates', 'change', limit, 'share', 'not judged: no change to judge (the Action on a pull request, or sluice check --base REF, compares with a base)'));
     } else {
-      const copies = added.exactDocs + added.nearDocs;
-      const rate = ratio(copies, added.docs) ?? 0;
+      const ofRest = added.exactDocs + added.nearDocs;
+      const within = added.withinExactDocs + added.withinNearDocs;
+      const rate = ratio(ofRest + within, added.docs) ?? 0;
       const locs: Location[] = added.perShard
-        .filter((p) => p.exactDocs + p.nearDocs > 0)
-        .map((p) => ({ path: p.shard, detail: `${p.exactDocs} exact and ${p.nearDocs} near copies of the rest of the corpus among its ${p.docs} documents` }));
+        .filter((p) => p.exactDocs + p.nearDocs + p.withinExactDocs + p.withinNearDocs > 0)
+        .map((p) => ({
+          path: p.shard,
+          detail: `of its ${p.docs} documents, ${p.exactDocs} exact and ${p.nearDocs} near copies of the rest of the corpus, ${p.withinExactDocs} exact and ${p.withinNearDocs} near repeats of documents the change adds`,
+        }));
       const message = added.docs === 0
         ? 'the change adds no documents'
-        : `${copies} of the ${added.docs} documents the change adds copy the rest of the corpus (${added.exactDocs} exact, ${added.nearDocs} near; ${pct(rate)}; limit ${pct(limit)})`;
+        : `${ofRest + within} of the ${added.docs} documents the change adds are copies: ${ofRest} of the rest of the corpus (${added.exactDocs} exact, ${added.nearDocs} near), ${within} of documents the change adds itself (${added.withinExactDocs} exact, ${added.withinNearDocs} near); ${pct(rate)}; limit ${pct(limit)}`;
       out.push(outcome(policy, 'duplicates', 'change', rate, limit, 'share', rate > limit + 1e-12, message, locs));
     }
   }

@@ -121,7 +121,7 @@ export interface NearDuplicateSpec {
 
 export interface DuplicatesRule {
   maxExact?: number;
-  /** Highest share of the documents a change adds that copy the rest of the corpus (exactly or nearly); judged only against a base. */
+  /** Highest share of the documents a change adds that copy the rest of the corpus or repeat one another (exactly or nearly); judged only against a base. */
   maxAdded?: number;
   near: NearDuplicateSpec;
   /** Exact-duplicate normalization: punctuation kept (default) or stripped. */

@@ -42,6 +42,11 @@ function changeCounts(changes: ShardChange[]): string {
   return parts.length ? parts.join(', ') : 'no shard changed';
 }
 
+/** True when a new shard holds copies: of the rest of the corpus, or of documents the change adds. */
+function hasCopies(s: NonNullable<Comparison['addedDuplicates']>['perShard'][number]): boolean {
+  return s.exactDocs + s.nearDocs + s.withinExactDocs + s.withinNearDocs > 0;
+}
+
 /** Returns the comparison against base as Markdown: a compact table, then collapsed sections. */
 export function renderComparison(c: Comparison, opts: { linkBase?: string } = {}): string {
   const out: string[] = [];
@@ -58,7 +63,8 @@ export function renderComparison(c: Comparison, opts: { linkBase?: string } = {}
   }
   if (c.addedDuplicates) {
     const d = c.addedDuplicates;
-    out.push(`| duplicates the change adds against the rest | | | ${count(d.exactDocs)} exact, ${count(d.nearDocs)} near of ${count(d.docs)} new documents |`);
+    const within = d.withinExactDocs + d.withinNearDocs > 0 ? `; ${count(d.withinExactDocs)} exact, ${count(d.withinNearDocs)} near repeats within the change` : '';
+    out.push(`| duplicates the change adds against the rest | | | ${count(d.exactDocs)} exact, ${count(d.nearDocs)} near of ${count(d.docs)} new documents${within} |`);
   }
   out.push('');
   if (c.flipped.length > 0) {
@@ -100,11 +106,11 @@ export function renderComparison(c: Comparison, opts: { linkBase?: string } = {}
     out.push('', '</details>', '');
   }
 
-  if (c.addedDuplicates && c.addedDuplicates.perShard.some((s) => s.exactDocs + s.nearDocs > 0)) {
+  if (c.addedDuplicates && c.addedDuplicates.perShard.some(hasCopies)) {
     out.push(`<details><summary>Duplicates added against the rest of the corpus</summary>`, '');
-    out.push('| new or changed shard | documents | exact copies of existing | near copies of existing |', '|---|---:|---:|---:|');
-    for (const s of c.addedDuplicates.perShard.filter((x) => x.exactDocs + x.nearDocs > 0).slice(0, MAX_CHANGE_ROWS)) {
-      out.push(`| ${linkTo(s.shard, opts.linkBase)} | ${count(s.docs)} | ${count(s.exactDocs)} | ${count(s.nearDocs)} |`);
+    out.push('| new or changed shard | documents | exact copies of existing | near copies of existing | repeats within the change (exact, near) |', '|---|---:|---:|---:|---:|');
+    for (const s of c.addedDuplicates.perShard.filter(hasCopies).slice(0, MAX_CHANGE_ROWS)) {
+      out.push(`| ${linkTo(s.shard, opts.linkBase)} | ${count(s.docs)} | ${count(s.exactDocs)} | ${count(s.nearDocs)} | ${count(s.withinExactDocs)}, ${count(s.withinNearDocs)} |`);
     }
     out.push('', '</details>', '');
   }
@@ -145,9 +151,11 @@ export function renderComparisonTerminal(c: Comparison, opts: { color: boolean; 
   }
   if (c.addedDuplicates) {
     const d = c.addedDuplicates;
-    lines.push(`  duplicates the change adds against the rest: ${count(d.exactDocs)} exact, ${count(d.nearDocs)} near of ${count(d.docs)} new documents`);
-    for (const s of d.perShard.filter((x) => x.exactDocs + x.nearDocs > 0).slice(0, TERMINAL_CHANGE_ROWS)) {
-      lines.push(`    ${clean(s.shard)} ${dim(`${count(s.exactDocs)} exact, ${count(s.nearDocs)} near of ${count(s.docs)}`)}`);
+    const within = d.withinExactDocs + d.withinNearDocs > 0 ? `; ${count(d.withinExactDocs)} exact, ${count(d.withinNearDocs)} near repeats within the change` : '';
+    lines.push(`  duplicates the change adds against the rest: ${count(d.exactDocs)} exact, ${count(d.nearDocs)} near of ${count(d.docs)} new documents${within}`);
+    for (const s of d.perShard.filter(hasCopies).slice(0, TERMINAL_CHANGE_ROWS)) {
+      const repeats = s.withinExactDocs + s.withinNearDocs > 0 ? `; ${count(s.withinExactDocs)} exact, ${count(s.withinNearDocs)} near repeats within the change` : '';
+      lines.push(`    ${clean(s.shard)} ${dim(`${count(s.exactDocs)} exact, ${count(s.nearDocs)} near of ${count(s.docs)}${repeats}`)}`);
     }
   }
   if (c.flipped.length > 0) {

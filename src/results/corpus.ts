@@ -1,5 +1,6 @@
 // The whole corpus as the judge sees it: every shard's result, what was skipped,
 // and the figures that only exist across shards (duplicates, dictionary fertility).
+import type { AgainstExisting } from '../measure/duplicates/index.js';
 import type { SkippedFile } from '../read/types.js';
 import type { CorpusTally } from './tally.js';
 import type { ShardResult } from './types.js';
@@ -47,7 +48,7 @@ export interface CorpusResult {
   dictionary?: Record<string, { main: DictionaryResult; baseline?: DictionaryResult }>;
   duplicates?: DuplicateSummary;
   /** When some shards were taken as new: the duplicates they add against the rest. */
-  duplicatesAgainstExisting?: { newShards: string[]; unknownShards: string[]; docs: number; exactDocs: number; nearDocs: number; perShard: Array<{ shard: string; docs: number; exactDocs: number; nearDocs: number }> };
+  duplicatesAgainstExisting?: AgainstExisting;
   contamination?: { ngram: number; evalFiles: string[]; evalItems: number };
   elapsedMs: number;
 }

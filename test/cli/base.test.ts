@@ -147,13 +147,30 @@ describe('rules.duplicates.max-added: the copies a change adds, not diluted by t
     const added = run.report!.rules.find((r) => r.rule === 'duplicates' && r.scope === 'change')!;
     // 10 of the 32 documents in the added and modified shards are copies of eng-001.jsonl: 31.25 %.
     expect(added).toMatchObject({ verdict: 'fail', measured: 10 / 32, limit: 0.3 });
-    expect(added.message).toBe('10 of the 32 documents the change adds copy the rest of the corpus (10 exact, 0 near; 31.3 %; limit 30.0 %)');
-    expect(added.locations).toEqual([{ path: 'data/eng/eng-copy.jsonl', detail: '10 exact and 0 near copies of the rest of the corpus among its 10 documents' }]);
+    expect(added.message).toBe('10 of the 32 documents the change adds are copies: 10 of the rest of the corpus (10 exact, 0 near), 0 of documents the change adds itself (0 exact, 0 near); 31.3 %; limit 30.0 %');
+    expect(added.locations).toEqual([{ path: 'data/eng/eng-copy.jsonl', detail: 'of its 10 documents, 10 exact and 0 near copies of the rest of the corpus, 0 exact and 0 near repeats of documents the change adds' }]);
     // The corpus-wide exact rate (10 of 72 documents) is under its limit of 50 %.
     expect(run.report!.rules.find((r) => r.rule === 'duplicates' && r.scope === 'corpus' && r.message.includes('exact'))!.verdict).toBe('pass');
     expect(run.report!.headline).toBe('FAIL: 1 check at error severity failed: duplicates (change)');
     // It exists only at head, so it is not listed among the rules that changed against base.
     expect(run.stdout).toContain('no rule changed its verdict');
+  });
+
+  it('counts a shard that repeats its own stories, with no copy of the corpus at all', () => {
+    const { repo } = newsroomRepo(3, withMaxAdded(0.3));
+    repo.git('checkout', '-q', '-b', 'desk/scrape');
+    // A scraper that fetched the same four new stories five times over, one shard, plus a clean one.
+    const four = stories('eng', 4, 900);
+    repo.write('data/eng/scrape-000.jsonl', four.repeat(5));
+    repo.write('data/hin/hin-new.jsonl', stories('hin', 10, 1900));
+    repo.commit('Desk: a scrape');
+    const run = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache'], { cwd: repo.dir, json: true });
+    expect(run.status).toBe(1);
+    const added = run.report!.rules.find((r) => r.scope === 'change')!;
+    // 16 of the 30 new documents repeat one of the four stories: 53.3 %.
+    expect(added).toMatchObject({ verdict: 'fail', measured: 16 / 30 });
+    expect(added.message).toContain('16 of the 30 documents the change adds are copies: 0 of the rest of the corpus (0 exact, 0 near), 16 of documents the change adds itself (16 exact, 0 near)');
+    expect(run.stdout).toContain('duplicates the change adds against the rest: 0 exact, 0 near of 30 new documents; 16 exact, 0 near repeats within the change');
   });
 
   it('passes under a higher limit, and is listed as not judged without a base', () => {

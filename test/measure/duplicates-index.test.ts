@@ -248,7 +248,8 @@ describe('duplicates a change adds against the existing corpus', () => {
   const fresh = 'A reader wrote in to ask why the crossword had moved to page eleven, and the desk promised to move it back by the end of the month.';
   const existing = index([STORY_EN, other]);
   // The near copy adds one word at the end: 22 shingles shared of 23 (Jaccard ≈ 0.96).
-  const change = index([STORY_EN, `${other} Updated`, fresh, fresh, STORY_HI]);
+  // Then a story new to the corpus twice, a near copy of it, and one more new story.
+  const change = index([STORY_EN, `${other} Updated`, fresh, fresh, `${fresh} Updated`, STORY_HI]);
 
   for (const names of [['a-existing.jsonl', 'b-new.jsonl'], ['b-existing.jsonl', 'a-new.jsonl']]) {
     it(`counts new documents with an exact or near copy in an existing shard, in either order (${names.join(', ')})`, () => {
@@ -261,15 +262,43 @@ describe('duplicates a change adds against the existing corpus', () => {
       expect(f.againstExisting).toEqual({
         newShards: [newName, 'missing.jsonl'],
         unknownShards: ['missing.jsonl'],
-        docs: 5,
+        docs: 6,
         exactDocs: 1,
         nearDocs: 1,
-        perShard: [{ shard: newName, docs: 5, exactDocs: 1, nearDocs: 1 }],
+        // The fresh story's second copy, and its near copy: copies within the change itself.
+        withinExactDocs: 1,
+        withinNearDocs: 1,
+        perShard: [{ shard: newName, docs: 6, exactDocs: 1, nearDocs: 1, withinExactDocs: 1, withinNearDocs: 1 }],
       });
-      // Within the whole corpus, the repeated fresh story is a duplicate too.
-      expect(f.exactDocs + f.nearDocs).toBe(3);
+      // Within the whole corpus, the repeated fresh story and its near copy are duplicates too.
+      expect(f.exactDocs + f.nearDocs).toBe(4);
     });
   }
+});
+
+describe('copies within a change, across its new shards', () => {
+  const fresh = 'A reader wrote in to ask why the crossword had moved to page eleven, and the desk promised to move it back by the end of the month.';
+  const other = 'The sports page carried the score of the district final, which the home side won by two wickets in the last over of a long afternoon.';
+
+  it('counts every member of a group of new documents but the first once, whichever shard it is in, and never a copy of the existing corpus twice', () => {
+    const shards = [
+      { shard: 'a-existing.jsonl', index: index([other]) },
+      { shard: 'b-new.jsonl', index: index([fresh, other]) },
+      { shard: 'c-new.jsonl', index: index([fresh, fresh, other, `${fresh} Updated`]) },
+    ];
+    const f = joinDuplicates(shards, { ...OPTS, newShards: ['b-new.jsonl', 'c-new.jsonl'] });
+    const a = f.againstExisting!;
+    // `other` (twice among the new documents) copies the existing shard: both are copies of existing, none within.
+    expect([a.docs, a.exactDocs, a.nearDocs]).toEqual([6, 2, 0]);
+    // `fresh` three times (the first in b-new) and its near copy: 2 exact and 1 near within the change.
+    expect([a.withinExactDocs, a.withinNearDocs]).toEqual([2, 1]);
+    expect(a.perShard).toEqual([
+      { shard: 'b-new.jsonl', docs: 2, exactDocs: 1, nearDocs: 0, withinExactDocs: 0, withinNearDocs: 0 },
+      { shard: 'c-new.jsonl', docs: 4, exactDocs: 1, nearDocs: 0, withinExactDocs: 2, withinNearDocs: 1 },
+    ]);
+    // Every duplicate the whole corpus counts among the new documents is one of these.
+    expect(f.exactDocs + f.nearDocs).toBe(a.exactDocs + a.nearDocs + a.withinExactDocs + a.withinNearDocs);
+  });
 });
 
 describe('index blob', () => {

@@ -300,12 +300,18 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
         docs: 0,
         exactDocs: 0,
         nearDocs: 0,
+        withinExactDocs: 0,
+        withinNearDocs: 0,
         perShard: [],
       }
     : undefined;
+  // PARTICIPANT is not read after the band passes: the tally reuses the bit on a class's first
+  // document to mark that it has met one of the class's new members.
+  const SEEN_NEW = PARTICIPANT;
+  if (against) for (let g = 0; g < n; g++) flags[g] = flags[g]! & ~SEEN_NEW;
   indexes.forEach((s, si) => {
     const st = tallyOf();
-    const ag = { shard: s.shard, docs: 0, exactDocs: 0, nearDocs: 0 };
+    const ag = { shard: s.shard, docs: 0, exactDocs: 0, nearDocs: 0, withinExactDocs: 0, withinNearDocs: 0 };
     readLocations(s, (i, _line, language, kind) => {
       const g = s.start + i;
       let lt = perLanguage.get(language);
@@ -322,6 +328,13 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
           const fr = flags[r]!;
           if (fr & CLASS_HAS_EXISTING) ag.exactDocs++;
           else if (fr & NEAR_EXISTING) ag.nearDocs++;
+          // A class of new documents only, met in corpus order, so its first document r comes first.
+          else if (fr & SEEN_NEW) ag.withinExactDocs++;
+          else {
+            flags[r] = fr | SEEN_NEW;
+            // Verified against an earlier class, which has no existing member (else NEAR_EXISTING would be set): a near copy within the change.
+            if (r === g && (fr & NEAR) !== 0) ag.withinNearDocs++;
+          }
         }
       }
     });
@@ -331,6 +344,8 @@ export function joinDuplicates(shards: Array<{ shard: string; index: Uint8Array 
       against.docs += ag.docs;
       against.exactDocs += ag.exactDocs;
       against.nearDocs += ag.nearDocs;
+      against.withinExactDocs += ag.withinExactDocs;
+      against.withinNearDocs += ag.withinNearDocs;
     }
   });
 

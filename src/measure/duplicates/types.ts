@@ -95,7 +95,14 @@ export interface AgainstExisting {
   exactDocs: number;
   /** New documents, not exact, with a verified near copy in an existing shard. */
   nearDocs: number;
-  perShard: Array<{ shard: string; docs: number; exactDocs: number; nearDocs: number }>;
+  /**
+   * New documents with no copy in an existing shard that repeat an earlier new document (in corpus
+   * order): exactly, or nearly (their exact class verified against an earlier class of new
+   * documents only). Every group of copies within the change counts all but its first member.
+   */
+  withinExactDocs: number;
+  withinNearDocs: number;
+  perShard: Array<{ shard: string; docs: number; exactDocs: number; nearDocs: number; withinExactDocs: number; withinNearDocs: number }>;
 }
 
 /** Work done by the join and where it was bounded. */
