@@ -28448,6 +28448,7 @@ function recordParser(textField, declaredLanguageField) {
 // src/read/source.ts
 import { createReadStream } from "node:fs";
 import { open } from "node:fs/promises";
+import { Readable } from "node:stream";
 import { createGunzip } from "node:zlib";
 
 // node_modules/fzstd/esm/index.mjs
@@ -29442,12 +29443,50 @@ async function textSizeHint(ref) {
     await handle?.close();
   }
 }
+var LFS_POINTER_START = "version https://git-lfs.github.com/spec/v1\n";
+var LFS_POINTER_MAX_BYTES = 1024;
+function lfsPointerProblem(bytes3) {
+  if (bytes3.length >= LFS_POINTER_MAX_BYTES || !bytes3.subarray(0, LFS_POINTER_START.length).equals(Buffer.from(LFS_POINTER_START))) return void 0;
+  const text = bytes3.toString("latin1");
+  const oid = /^oid sha256:([0-9a-f]{64})$/m.exec(text)?.[1];
+  const size = /^size (\d+)$/m.exec(text)?.[1];
+  const what = oid ? ` (object ${oid.slice(0, 12)}\u2026${size ? `, ${Number(size).toLocaleString("en-US")} bytes` : ""})` : "";
+  return `a Git LFS pointer${what}, not the shard itself: fetch the LFS objects first (git lfs pull; actions/checkout with lfs: true)`;
+}
 async function pumpShard(ref, write, pace) {
   let source;
   try {
     source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: readChunkBytes(ref) });
   } catch (error) {
     return { compressedBytes: 0, error: `cannot open: ${messageOf2(error)}` };
+  }
+  if (ref.sizeBytes < LFS_POINTER_MAX_BYTES) {
+    const it = source[Symbol.asyncIterator]();
+    const held = [];
+    let heldBytes = 0;
+    let ended = false;
+    try {
+      while (heldBytes < LFS_POINTER_MAX_BYTES) {
+        const next = await it.next();
+        if (next.done) {
+          ended = true;
+          break;
+        }
+        held.push(next.value);
+        heldBytes += next.value.length;
+      }
+    } catch (error) {
+      return { compressedBytes: 0, error: `read failed: ${messageOf2(error)}` };
+    }
+    const lfs = ended ? lfsPointerProblem(Buffer.concat(held)) : void 0;
+    if (lfs !== void 0) return { compressedBytes: 0, error: lfs };
+    source = Readable.from(
+      (async function* () {
+        yield* held;
+        if (ended) return;
+        for (let next = await it.next(); !next.done; next = await it.next()) yield next.value;
+      })()
+    );
   }
   switch (ref.compression) {
     case "none":

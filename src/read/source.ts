@@ -3,7 +3,7 @@
 // a throw; an error thrown by the consumer is the consumer's and is thrown on.
 import { createReadStream } from 'node:fs';
 import { open } from 'node:fs/promises';
-import type { Readable } from 'node:stream';
+import { Readable } from 'node:stream';
 import { createGunzip, type Gunzip } from 'node:zlib';
 import type { ShardRef } from './types.js';
 import type { XXHashAPI } from 'xxhash-wasm';
@@ -57,6 +57,24 @@ export async function textSizeHint(ref: ShardRef): Promise<number> {
 /** Called between raw chunks; a promise it returns holds the next read back until it settles (backpressure from a slower consumer). */
 export type Pace = () => Promise<void> | undefined;
 
+/**
+ * A Git LFS pointer file begins with this line, and the whole file is under 1024 bytes (Git LFS
+ * specification, "The Pointer"). A repository that keeps its shards in LFS and was checked out
+ * without the LFS objects, or a base commit's shards read from git, hold pointers instead of data.
+ */
+const LFS_POINTER_START = 'version https://git-lfs.github.com/spec/v1\n';
+const LFS_POINTER_MAX_BYTES = 1024;
+
+/** Returns why a small file's bytes are a Git LFS pointer rather than a shard, or undefined. */
+export function lfsPointerProblem(bytes: Buffer): string | undefined {
+  if (bytes.length >= LFS_POINTER_MAX_BYTES || !bytes.subarray(0, LFS_POINTER_START.length).equals(Buffer.from(LFS_POINTER_START))) return undefined;
+  const text = bytes.toString('latin1');
+  const oid = /^oid sha256:([0-9a-f]{64})$/m.exec(text)?.[1];
+  const size = /^size (\d+)$/m.exec(text)?.[1];
+  const what = oid ? ` (object ${oid.slice(0, 12)}…${size ? `, ${Number(size).toLocaleString('en-US')} bytes` : ''})` : '';
+  return `a Git LFS pointer${what}, not the shard itself: fetch the LFS objects first (git lfs pull; actions/checkout with lfs: true)`;
+}
+
 /** Streams the shard's decompressed bytes into `write` and returns the raw byte count and, when the stream broke, why. */
 export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void, pace?: Pace): Promise<PumpResult> {
   let source: Readable;
@@ -64,6 +82,37 @@ export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void, p
     source = ref.open?.() ?? createReadStream(ref.absPath, { highWaterMark: readChunkBytes(ref) });
   } catch (error) {
     return { compressedBytes: 0, error: `cannot open: ${messageOf(error)}` };
+  }
+  // Only a file small enough to be a Git LFS pointer is looked at first. Its first bytes (at most the
+  // pointer limit's worth, should the file have grown since it was listed) are held, then streamed on
+  // in the chunks they came in, followed by the rest.
+  if (ref.sizeBytes < LFS_POINTER_MAX_BYTES) {
+    const it = source[Symbol.asyncIterator]() as AsyncIterator<Buffer>;
+    const held: Buffer[] = [];
+    let heldBytes = 0;
+    let ended = false;
+    try {
+      while (heldBytes < LFS_POINTER_MAX_BYTES) {
+        const next = await it.next();
+        if (next.done) {
+          ended = true;
+          break;
+        }
+        held.push(next.value);
+        heldBytes += next.value.length;
+      }
+    } catch (error) {
+      return { compressedBytes: 0, error: `read failed: ${messageOf(error)}` };
+    }
+    const lfs = ended ? lfsPointerProblem(Buffer.concat(held)) : undefined;
+    if (lfs !== undefined) return { compressedBytes: 0, error: lfs };
+    source = Readable.from(
+      (async function* () {
+        yield* held;
+        if (ended) return;
+        for (let next = await it.next(); !next.done; next = await it.next()) yield next.value;
+      })(),
+    );
   }
   switch (ref.compression) {
     case 'none':

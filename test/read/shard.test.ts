@@ -163,6 +163,43 @@ describe('readShard on JSONL', () => {
     expect(account.broken?.message).toMatch(/ENOENT/);
   });
 
+  // The pointer format of the Git LFS specification ("The Pointer"): a version line, the object's oid and size.
+  const POINTER = 'version https://git-lfs.github.com/spec/v1\noid sha256:4d7a214614ab2935c943f9e0ff69d22eadbb8f32b1258daaa5e2ca24d17e2393\nsize 12345678\n';
+
+  it('calls a Git LFS pointer where a shard should be broken, saying so, whatever the extension', async () => {
+    for (const compression of ['none', 'gzip', 'zstd'] as const) {
+      const ref = memoryShard(Buffer.from(POINTER), { compression, path: `data/hin-00.jsonl${compression === 'gzip' ? '.gz' : compression === 'zstd' ? '.zst' : ''}` });
+      const { account, docs } = await readAll(ref);
+      expect(docs, compression).toEqual([]);
+      expect(account.lines, compression).toBe(0);
+      expect(account.broken?.afterLine, compression).toBe(0);
+      expect(account.broken?.message, compression).toBe('a Git LFS pointer (object 4d7a214614ab…, 12,345,678 bytes), not the shard itself: fetch the LFS objects first (git lfs pull; actions/checkout with lfs: true)');
+    }
+    // Text that merely starts like one, in a larger file, is read as text.
+    const long = memoryShard(Buffer.from(`${POINTER}${'x'.repeat(2000)}\n`), { format: 'txt', path: 'notes.txt' });
+    const { account } = await readAll(long);
+    expect(account.broken).toBeUndefined();
+    expect(account.docs).toBe(1);
+  });
+
+  it('reads a shard to its end when it has grown past the pointer size since it was listed', async () => {
+    const lines = Array.from({ length: 200 }, (_, i) => JSON.stringify({ text: `wire copy ${i}` })).join('\n');
+    const ref = { ...memoryShard(Buffer.from(lines), { chunkBytes: 100 }), sizeBytes: 10 };
+    const { account, docs } = await readAll(ref);
+    expect(account.broken).toBeUndefined();
+    expect(account.docs).toBe(200);
+    expect(docs.at(-1)?.text).toBe('wire copy 199');
+  });
+
+  it('reads a small shard that is no pointer exactly as before', async () => {
+    const small = gzipSync(Buffer.from('{"text":"नगर परिषद की बैठक"}\n\n{"text":"desk notes"}\n'));
+    expect(small.length).toBeLessThan(1024);
+    const { account, docs } = await readAll(memoryShard(small, { compression: 'gzip', path: 'small.jsonl.gz' }));
+    expect(account.broken).toBeUndefined();
+    expect([account.lines, account.docs, account.empty]).toEqual([3, 2, 1]);
+    expect(docs.map((d) => d.text)).toEqual(['नगर परिषद की बैठक', 'desk notes']);
+  });
+
   it('gives rejected lines, not documents, for random bytes with NULs named .jsonl', async () => {
     // Deterministic "random" bytes: a fixed seed through a simple LCG, so a failure can be replayed.
     const junk = Buffer.alloc(256 * 1024);
