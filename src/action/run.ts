@@ -26,6 +26,7 @@ import type { ActionSettings } from './inputs.js';
 import { commentBody, commentMarker, renderActionMarkdown, summaryBody } from './markdown.js';
 import type { ActionIO } from './runner.js';
 import { writeSummary } from './summary.js';
+import { codePath, escapeMarkdown } from '../render/escape.js';
 
 /** Bump when the layout of the saved cache changes, so old entries are not restored. */
 const CACHE_LAYOUT = 1;
@@ -131,6 +132,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
     // A scan job of a matrix: measure this share of each policy's shards and write the part; the final job judges.
     const { index, count } = s.partition;
     const written: string[] = [];
+    const lines: string[] = [];
     let measured = false;
     for (const [i, policy] of policies.entries()) {
       const file = `${stems[i]!}.part-${index}-of-${count}.json`;
@@ -150,6 +152,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
         const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
         if (fromCache < partial.results.length) measured = true;
         io.info(`sluice ${policy.name}: partition ${index}/${count}: ${partial.results.length} of ${partial.shardsInCorpus} shards, ${docs} documents, ${fromCache} from cache → ${file}`);
+        lines.push(`| ${escapeMarkdown(policy.name)} | ${partial.results.length} of ${partial.shardsInCorpus} | ${docs.toLocaleString('en-US')} | ${fromCache} | ${codePath(path.basename(file))} |`);
       });
       written.push(file);
     }
@@ -160,6 +163,8 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
     } else {
       await rm(cacheDir, { recursive: true, force: true });
     }
+    const summary = [`## sluice: partition ${index}/${count} scanned`, '', 'This job measures its share of the shards and judges nothing: the job given all parts (input `parts`) judges and comments.', '', '| policy | shards | documents | from cache | part |', '|---|---:|---:|---:|---|', ...lines].join('\n');
+    if (!(await writeSummary(s.summaryFile, summary))) io.info('sluice: no GITHUB_STEP_SUMMARY for the partition summary');
     io.setOutput('parts', written.join('\n'));
     io.setOutput('verdict', '');
     return { verdict: 'pass', failure: null, reports: [] };

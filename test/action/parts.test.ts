@@ -148,6 +148,8 @@ describe('the Action as a scan job of a matrix (input `partition`)', () => {
       const job = await runBundle({ repo, event: 'pull_request', api, pr, runnerTemp: temps[i - 1]!, inputs: { partition: `${i}/2` } });
       expect(job.code, job.stdout + job.stderr).toBe(0);
       expect(job.outputs['verdict']).toBe('');
+      expect(job.summary).toContain(`## sluice: partition ${i}/2 scanned`);
+      expect(job.summary).toMatch(new RegExp(`\\| newsroom \\| \\d+ of 8 \\| \\d+ \\| 0 \\| \`newsroom\\.part-${i}-of-2\\.json\` \\|`));
       const written = job.outputs['parts']!;
       expect(path.basename(written)).toBe(`newsroom.part-${i}-of-2.json`);
       const m = new RegExp(`partition ${i}/2: (\\d+) of 8 shards, \\d+ documents, 0 from cache`).exec(job.stdout);
