@@ -3912,17 +3912,17 @@ var require_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
-    function visit_(key, node, visitor, path9) {
-      const ctrl = callVisitor(key, node, visitor, path9);
+    function visit_(key, node, visitor, path10) {
+      const ctrl = callVisitor(key, node, visitor, path10);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path9, ctrl);
-        return visit_(key, ctrl, visitor, path9);
+        replaceNode(key, path10, ctrl);
+        return visit_(key, ctrl, visitor, path10);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path9 = Object.freeze(path9.concat(node));
+          path10 = Object.freeze(path10.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = visit_(i, node.items[i], visitor, path9);
+            const ci = visit_(i, node.items[i], visitor, path10);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3933,13 +3933,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path9 = Object.freeze(path9.concat(node));
-          const ck = visit_("key", node.key, visitor, path9);
+          path10 = Object.freeze(path10.concat(node));
+          const ck = visit_("key", node.key, visitor, path10);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = visit_("value", node.value, visitor, path9);
+          const cv = visit_("value", node.value, visitor, path10);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -3960,17 +3960,17 @@ var require_visit = __commonJS({
     visitAsync.BREAK = BREAK;
     visitAsync.SKIP = SKIP2;
     visitAsync.REMOVE = REMOVE;
-    async function visitAsync_(key, node, visitor, path9) {
-      const ctrl = await callVisitor(key, node, visitor, path9);
+    async function visitAsync_(key, node, visitor, path10) {
+      const ctrl = await callVisitor(key, node, visitor, path10);
       if (identity.isNode(ctrl) || identity.isPair(ctrl)) {
-        replaceNode(key, path9, ctrl);
-        return visitAsync_(key, ctrl, visitor, path9);
+        replaceNode(key, path10, ctrl);
+        return visitAsync_(key, ctrl, visitor, path10);
       }
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
-          path9 = Object.freeze(path9.concat(node));
+          path10 = Object.freeze(path10.concat(node));
           for (let i = 0; i < node.items.length; ++i) {
-            const ci = await visitAsync_(i, node.items[i], visitor, path9);
+            const ci = await visitAsync_(i, node.items[i], visitor, path10);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -3981,13 +3981,13 @@ var require_visit = __commonJS({
             }
           }
         } else if (identity.isPair(node)) {
-          path9 = Object.freeze(path9.concat(node));
-          const ck = await visitAsync_("key", node.key, visitor, path9);
+          path10 = Object.freeze(path10.concat(node));
+          const ck = await visitAsync_("key", node.key, visitor, path10);
           if (ck === BREAK)
             return BREAK;
           else if (ck === REMOVE)
             node.key = null;
-          const cv = await visitAsync_("value", node.value, visitor, path9);
+          const cv = await visitAsync_("value", node.value, visitor, path10);
           if (cv === BREAK)
             return BREAK;
           else if (cv === REMOVE)
@@ -4014,23 +4014,23 @@ var require_visit = __commonJS({
       }
       return visitor;
     }
-    function callVisitor(key, node, visitor, path9) {
+    function callVisitor(key, node, visitor, path10) {
       if (typeof visitor === "function")
-        return visitor(key, node, path9);
+        return visitor(key, node, path10);
       if (identity.isMap(node))
-        return visitor.Map?.(key, node, path9);
+        return visitor.Map?.(key, node, path10);
       if (identity.isSeq(node))
-        return visitor.Seq?.(key, node, path9);
+        return visitor.Seq?.(key, node, path10);
       if (identity.isPair(node))
-        return visitor.Pair?.(key, node, path9);
+        return visitor.Pair?.(key, node, path10);
       if (identity.isScalar(node))
-        return visitor.Scalar?.(key, node, path9);
+        return visitor.Scalar?.(key, node, path10);
       if (identity.isAlias(node))
-        return visitor.Alias?.(key, node, path9);
+        return visitor.Alias?.(key, node, path10);
       return void 0;
     }
-    function replaceNode(key, path9, node) {
-      const parent = path9[path9.length - 1];
+    function replaceNode(key, path10, node) {
+      const parent = path10[path10.length - 1];
       if (identity.isCollection(parent)) {
         parent.items[key] = node;
       } else if (identity.isPair(parent)) {
@@ -4642,10 +4642,10 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path9, value) {
+    function collectionFromPath(schema, path10, value) {
       let v = value;
-      for (let i = path9.length - 1; i >= 0; --i) {
-        const k = path9[i];
+      for (let i = path10.length - 1; i >= 0; --i) {
+        const k = path10[i];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
           const a = [];
           a[k] = v;
@@ -4664,7 +4664,7 @@ var require_Collection = __commonJS({
         sourceObjects: /* @__PURE__ */ new Map()
       });
     }
-    var isEmptyPath = (path9) => path9 == null || typeof path9 === "object" && !!path9[Symbol.iterator]().next().done;
+    var isEmptyPath = (path10) => path10 == null || typeof path10 === "object" && !!path10[Symbol.iterator]().next().done;
     var Collection = class extends Node.NodeBase {
       constructor(type, schema) {
         super(type);
@@ -4694,11 +4694,11 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path9, value) {
-        if (isEmptyPath(path9))
+      addIn(path10, value) {
+        if (isEmptyPath(path10))
           this.add(value);
         else {
-          const [key, ...rest] = path9;
+          const [key, ...rest] = path10;
           const node = this.get(key, true);
           if (identity.isCollection(node))
             node.addIn(rest, value);
@@ -4712,8 +4712,8 @@ var require_Collection = __commonJS({
        * Removes a value from the collection.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path9) {
-        const [key, ...rest] = path9;
+      deleteIn(path10) {
+        const [key, ...rest] = path10;
         if (rest.length === 0)
           return this.delete(key);
         const node = this.get(key, true);
@@ -4727,8 +4727,8 @@ var require_Collection = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path9, keepScalar) {
-        const [key, ...rest] = path9;
+      getIn(path10, keepScalar) {
+        const [key, ...rest] = path10;
         const node = this.get(key, true);
         if (rest.length === 0)
           return !keepScalar && identity.isScalar(node) ? node.value : node;
@@ -4746,8 +4746,8 @@ var require_Collection = __commonJS({
       /**
        * Checks if the collection includes a value with the key `key`.
        */
-      hasIn(path9) {
-        const [key, ...rest] = path9;
+      hasIn(path10) {
+        const [key, ...rest] = path10;
         if (rest.length === 0)
           return this.has(key);
         const node = this.get(key, true);
@@ -4757,8 +4757,8 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path9, value) {
-        const [key, ...rest] = path9;
+      setIn(path10, value) {
+        const [key, ...rest] = path10;
         if (rest.length === 0) {
           this.set(key, value);
         } else {
@@ -7273,9 +7273,9 @@ var require_Document = __commonJS({
           this.contents.add(value);
       }
       /** Adds a value to the document. */
-      addIn(path9, value) {
+      addIn(path10, value) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path9, value);
+          this.contents.addIn(path10, value);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -7350,14 +7350,14 @@ var require_Document = __commonJS({
        * Removes a value from the document.
        * @returns `true` if the item was found and removed.
        */
-      deleteIn(path9) {
-        if (Collection.isEmptyPath(path9)) {
+      deleteIn(path10) {
+        if (Collection.isEmptyPath(path10)) {
           if (this.contents == null)
             return false;
           this.contents = null;
           return true;
         }
-        return assertCollection(this.contents) ? this.contents.deleteIn(path9) : false;
+        return assertCollection(this.contents) ? this.contents.deleteIn(path10) : false;
       }
       /**
        * Returns item at `key`, or `undefined` if not found. By default unwraps
@@ -7372,10 +7372,10 @@ var require_Document = __commonJS({
        * scalar values from their surrounding node; to disable set `keepScalar` to
        * `true` (collections are always returned intact).
        */
-      getIn(path9, keepScalar) {
-        if (Collection.isEmptyPath(path9))
+      getIn(path10, keepScalar) {
+        if (Collection.isEmptyPath(path10))
           return !keepScalar && identity.isScalar(this.contents) ? this.contents.value : this.contents;
-        return identity.isCollection(this.contents) ? this.contents.getIn(path9, keepScalar) : void 0;
+        return identity.isCollection(this.contents) ? this.contents.getIn(path10, keepScalar) : void 0;
       }
       /**
        * Checks if the document includes a value with the key `key`.
@@ -7386,10 +7386,10 @@ var require_Document = __commonJS({
       /**
        * Checks if the document includes a value at `path`.
        */
-      hasIn(path9) {
-        if (Collection.isEmptyPath(path9))
+      hasIn(path10) {
+        if (Collection.isEmptyPath(path10))
           return this.contents !== void 0;
-        return identity.isCollection(this.contents) ? this.contents.hasIn(path9) : false;
+        return identity.isCollection(this.contents) ? this.contents.hasIn(path10) : false;
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
@@ -7406,13 +7406,13 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path9, value) {
-        if (Collection.isEmptyPath(path9)) {
+      setIn(path10, value) {
+        if (Collection.isEmptyPath(path10)) {
           this.contents = value;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path9), value);
+          this.contents = Collection.collectionFromPath(this.schema, Array.from(path10), value);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path9, value);
+          this.contents.setIn(path10, value);
         }
       }
       /**
@@ -9373,9 +9373,9 @@ var require_cst_visit = __commonJS({
     visit.BREAK = BREAK;
     visit.SKIP = SKIP2;
     visit.REMOVE = REMOVE;
-    visit.itemAtPath = (cst, path9) => {
+    visit.itemAtPath = (cst, path10) => {
       let item = cst;
-      for (const [field, index2] of path9) {
+      for (const [field, index2] of path10) {
         const tok = item?.[field];
         if (tok && "items" in tok) {
           item = tok.items[index2];
@@ -9384,23 +9384,23 @@ var require_cst_visit = __commonJS({
       }
       return item;
     };
-    visit.parentCollection = (cst, path9) => {
-      const parent = visit.itemAtPath(cst, path9.slice(0, -1));
-      const field = path9[path9.length - 1][0];
+    visit.parentCollection = (cst, path10) => {
+      const parent = visit.itemAtPath(cst, path10.slice(0, -1));
+      const field = path10[path10.length - 1][0];
       const coll = parent?.[field];
       if (coll && "items" in coll)
         return coll;
       throw new Error("Parent collection not found");
     };
-    function _visit(path9, item, visitor) {
-      let ctrl = visitor(item, path9);
+    function _visit(path10, item, visitor) {
+      let ctrl = visitor(item, path10);
       if (typeof ctrl === "symbol")
         return ctrl;
       for (const field of ["key", "value"]) {
         const token = item[field];
         if (token && "items" in token) {
           for (let i = 0; i < token.items.length; ++i) {
-            const ci = _visit(Object.freeze(path9.concat([[field, i]])), token.items[i], visitor);
+            const ci = _visit(Object.freeze(path10.concat([[field, i]])), token.items[i], visitor);
             if (typeof ci === "number")
               i = ci - 1;
             else if (ci === BREAK)
@@ -9411,10 +9411,10 @@ var require_cst_visit = __commonJS({
             }
           }
           if (typeof ctrl === "function" && field === "key")
-            ctrl = ctrl(item, path9);
+            ctrl = ctrl(item, path10);
         }
       }
-      return typeof ctrl === "function" ? ctrl(item, path9) : ctrl;
+      return typeof ctrl === "function" ? ctrl(item, path10) : ctrl;
     }
     exports.visit = visit;
   }
@@ -11489,8 +11489,8 @@ var require_utils = __commonJS({
       }
       return output;
     };
-    exports.basename = (path9, { windows } = {}) => {
-      const segs = path9.split(windows ? /[\\/]/ : "/");
+    exports.basename = (path10, { windows } = {}) => {
+      const segs = path10.split(windows ? /[\\/]/ : "/");
       const last = segs[segs.length - 1];
       if (last === "") {
         return segs[segs.length - 2];
@@ -12827,7 +12827,7 @@ var require_path = __commonJS({
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.convertPosixPathToPattern = exports.convertWindowsPathToPattern = exports.convertPathToPattern = exports.escapePosixPath = exports.escapeWindowsPath = exports.escape = exports.removeLeadingDotSegment = exports.makeAbsolute = exports.unixify = void 0;
     var os = __require("os");
-    var path9 = __require("path");
+    var path10 = __require("path");
     var IS_WINDOWS_PLATFORM = os.platform() === "win32";
     var LEADING_DOT_SEGMENT_CHARACTERS_COUNT = 2;
     var POSIX_UNESCAPED_GLOB_SYMBOLS_RE = /(\\?)([()*?[\]{|}]|^!|[!+@](?=\()|\\(?![!()*+?@[\]{|}]))/g;
@@ -12839,7 +12839,7 @@ var require_path = __commonJS({
     }
     exports.unixify = unixify;
     function makeAbsolute(cwd, filepath) {
-      return path9.resolve(cwd, filepath);
+      return path10.resolve(cwd, filepath);
     }
     exports.makeAbsolute = makeAbsolute;
     function removeLeadingDotSegment(entry) {
@@ -14136,7 +14136,7 @@ var require_braces = __commonJS({
 var require_constants3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/constants.js"(exports, module) {
     "use strict";
-    var path9 = __require("path");
+    var path10 = __require("path");
     var WIN_SLASH = "\\\\/";
     var WIN_NO_SLASH = `[^${WIN_SLASH}]`;
     var DEFAULT_MAX_EXTGLOB_RECURSION = 0;
@@ -14310,7 +14310,7 @@ var require_constants3 = __commonJS({
       /* | */
       CHAR_ZERO_WIDTH_NOBREAK_SPACE: 65279,
       /* \uFEFF */
-      SEP: path9.sep,
+      SEP: path10.sep,
       /**
        * Create EXTGLOB_CHARS
        */
@@ -14337,7 +14337,7 @@ var require_constants3 = __commonJS({
 var require_utils3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/utils.js"(exports) {
     "use strict";
-    var path9 = __require("path");
+    var path10 = __require("path");
     var win32 = process.platform === "win32";
     var {
       REGEX_BACKSLASH,
@@ -14366,7 +14366,7 @@ var require_utils3 = __commonJS({
       if (options && typeof options.windows === "boolean") {
         return options.windows;
       }
-      return win32 === true || path9.sep === "\\";
+      return win32 === true || path10.sep === "\\";
     };
     exports.escapeLast = (input, char, lastIdx) => {
       const idx = input.lastIndexOf(char, lastIdx);
@@ -15730,7 +15730,7 @@ var require_parse3 = __commonJS({
 var require_picomatch3 = __commonJS({
   "node_modules/micromatch/node_modules/picomatch/lib/picomatch.js"(exports, module) {
     "use strict";
-    var path9 = __require("path");
+    var path10 = __require("path");
     var scan3 = require_scan2();
     var parse2 = require_parse3();
     var utils = require_utils3();
@@ -15815,7 +15815,7 @@ var require_picomatch3 = __commonJS({
     };
     picomatch3.matchBase = (input, glob, options, posix = utils.isWindows(options)) => {
       const regex = glob instanceof RegExp ? glob : picomatch3.makeRe(glob, options);
-      return regex.test(path9.basename(input));
+      return regex.test(path10.basename(input));
     };
     picomatch3.isMatch = (str, patterns, options) => picomatch3(patterns, options)(str);
     picomatch3.parse = (pattern, options) => {
@@ -16042,7 +16042,7 @@ var require_pattern = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.isAbsolute = exports.partitionAbsoluteAndRelative = exports.removeDuplicateSlashes = exports.matchAny = exports.convertPatternsToRe = exports.makeRe = exports.getPatternParts = exports.expandBraceExpansion = exports.expandPatternsWithBraceExpansion = exports.isAffectDepthOfReadingPattern = exports.endsWithSlashGlobStar = exports.hasGlobStar = exports.getBaseDirectory = exports.isPatternRelatedToParentDirectory = exports.getPatternsOutsideCurrentDirectory = exports.getPatternsInsideCurrentDirectory = exports.getPositivePatterns = exports.getNegativePatterns = exports.isPositivePattern = exports.isNegativePattern = exports.convertToNegativePattern = exports.convertToPositivePattern = exports.isDynamicPattern = exports.isStaticPattern = void 0;
-    var path9 = __require("path");
+    var path10 = __require("path");
     var globParent = require_glob_parent();
     var micromatch = require_micromatch();
     var GLOBSTAR = "**";
@@ -16137,7 +16137,7 @@ var require_pattern = __commonJS({
     }
     exports.endsWithSlashGlobStar = endsWithSlashGlobStar;
     function isAffectDepthOfReadingPattern(pattern) {
-      const basename = path9.basename(pattern);
+      const basename = path10.basename(pattern);
       return endsWithSlashGlobStar(pattern) || isStaticPattern(basename);
     }
     exports.isAffectDepthOfReadingPattern = isAffectDepthOfReadingPattern;
@@ -16195,7 +16195,7 @@ var require_pattern = __commonJS({
     }
     exports.partitionAbsoluteAndRelative = partitionAbsoluteAndRelative;
     function isAbsolute(pattern) {
-      return path9.isAbsolute(pattern);
+      return path10.isAbsolute(pattern);
     }
     exports.isAbsolute = isAbsolute;
   }
@@ -16372,8 +16372,8 @@ var require_utils4 = __commonJS({
     exports.errno = errno;
     var fs = require_fs();
     exports.fs = fs;
-    var path9 = require_path();
-    exports.path = path9;
+    var path10 = require_path();
+    exports.path = path10;
     var pattern = require_pattern();
     exports.pattern = pattern;
     var stream = require_stream();
@@ -16485,8 +16485,8 @@ var require_async = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path9, settings, callback) {
-      settings.fs.lstat(path9, (lstatError, lstat2) => {
+    function read(path10, settings, callback) {
+      settings.fs.lstat(path10, (lstatError, lstat2) => {
         if (lstatError !== null) {
           callFailureCallback(callback, lstatError);
           return;
@@ -16495,7 +16495,7 @@ var require_async = __commonJS({
           callSuccessCallback(callback, lstat2);
           return;
         }
-        settings.fs.stat(path9, (statError, stat4) => {
+        settings.fs.stat(path10, (statError, stat5) => {
           if (statError !== null) {
             if (settings.throwErrorOnBrokenSymbolicLink) {
               callFailureCallback(callback, statError);
@@ -16505,9 +16505,9 @@ var require_async = __commonJS({
             return;
           }
           if (settings.markSymbolicLink) {
-            stat4.isSymbolicLink = () => true;
+            stat5.isSymbolicLink = () => true;
           }
-          callSuccessCallback(callback, stat4);
+          callSuccessCallback(callback, stat5);
         });
       });
     }
@@ -16527,17 +16527,17 @@ var require_sync = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.read = void 0;
-    function read(path9, settings) {
-      const lstat2 = settings.fs.lstatSync(path9);
+    function read(path10, settings) {
+      const lstat2 = settings.fs.lstatSync(path10);
       if (!lstat2.isSymbolicLink() || !settings.followSymbolicLink) {
         return lstat2;
       }
       try {
-        const stat4 = settings.fs.statSync(path9);
+        const stat5 = settings.fs.statSync(path10);
         if (settings.markSymbolicLink) {
-          stat4.isSymbolicLink = () => true;
+          stat5.isSymbolicLink = () => true;
         }
-        return stat4;
+        return stat5;
       } catch (error) {
         if (!settings.throwErrorOnBrokenSymbolicLink) {
           return lstat2;
@@ -16604,17 +16604,17 @@ var require_out = __commonJS({
     var sync = require_sync();
     var settings_1 = require_settings();
     exports.Settings = settings_1.default;
-    function stat4(path9, optionsOrSettingsOrCallback, callback) {
+    function stat5(path10, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path9, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path10, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path9, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path10, getSettings(optionsOrSettingsOrCallback), callback);
     }
-    exports.stat = stat4;
-    function statSync2(path9, optionsOrSettings) {
+    exports.stat = stat5;
+    function statSync2(path10, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path9, settings);
+      return sync.read(path10, settings);
     }
     exports.statSync = statSync2;
     function getSettings(settingsOrOptions = {}) {
@@ -16830,16 +16830,16 @@ var require_async2 = __commonJS({
           return;
         }
         const tasks = names.map((name) => {
-          const path9 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
+          const path10 = common.joinPathSegments(directory, name, settings.pathSegmentSeparator);
           return (done) => {
-            fsStat.stat(path9, settings.fsStatSettings, (error, stats) => {
+            fsStat.stat(path10, settings.fsStatSettings, (error, stats) => {
               if (error !== null) {
                 done(error);
                 return;
               }
               const entry = {
                 name,
-                path: path9,
+                path: path10,
                 dirent: utils.fs.createDirentFromStats(name, stats)
               };
               if (settings.stats) {
@@ -16957,7 +16957,7 @@ var require_settings2 = __commonJS({
   "node_modules/@nodelib/fs.scandir/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path9 = __require("path");
+    var path10 = __require("path");
     var fsStat = require_out();
     var fs = require_fs4();
     var Settings = class {
@@ -16965,7 +16965,7 @@ var require_settings2 = __commonJS({
         this._options = _options;
         this.followSymbolicLinks = this._getValue(this._options.followSymbolicLinks, false);
         this.fs = fs.createFileSystemAdapter(this._options.fs);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path9.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path10.sep);
         this.stats = this._getValue(this._options.stats, false);
         this.throwErrorOnBrokenSymbolicLink = this._getValue(this._options.throwErrorOnBrokenSymbolicLink, true);
         this.fsStatSettings = new fsStat.Settings({
@@ -16992,17 +16992,17 @@ var require_out2 = __commonJS({
     var sync = require_sync2();
     var settings_1 = require_settings2();
     exports.Settings = settings_1.default;
-    function scandir(path9, optionsOrSettingsOrCallback, callback) {
+    function scandir(path10, optionsOrSettingsOrCallback, callback) {
       if (typeof optionsOrSettingsOrCallback === "function") {
-        async.read(path9, getSettings(), optionsOrSettingsOrCallback);
+        async.read(path10, getSettings(), optionsOrSettingsOrCallback);
         return;
       }
-      async.read(path9, getSettings(optionsOrSettingsOrCallback), callback);
+      async.read(path10, getSettings(optionsOrSettingsOrCallback), callback);
     }
     exports.scandir = scandir;
-    function scandirSync(path9, optionsOrSettings) {
+    function scandirSync(path10, optionsOrSettings) {
       const settings = getSettings(optionsOrSettings);
-      return sync.read(path9, settings);
+      return sync.read(path10, settings);
     }
     exports.scandirSync = scandirSync;
     function getSettings(settingsOrOptions = {}) {
@@ -17650,7 +17650,7 @@ var require_settings3 = __commonJS({
   "node_modules/@nodelib/fs.walk/out/settings.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path9 = __require("path");
+    var path10 = __require("path");
     var fsScandir = require_out2();
     var Settings = class {
       constructor(_options = {}) {
@@ -17660,7 +17660,7 @@ var require_settings3 = __commonJS({
         this.deepFilter = this._getValue(this._options.deepFilter, null);
         this.entryFilter = this._getValue(this._options.entryFilter, null);
         this.errorFilter = this._getValue(this._options.errorFilter, null);
-        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path9.sep);
+        this.pathSegmentSeparator = this._getValue(this._options.pathSegmentSeparator, path10.sep);
         this.fsScandirSettings = new fsScandir.Settings({
           followSymbolicLinks: this._options.followSymbolicLinks,
           fs: this._options.fs,
@@ -17722,7 +17722,7 @@ var require_reader2 = __commonJS({
   "node_modules/fast-glob/out/readers/reader.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path9 = __require("path");
+    var path10 = __require("path");
     var fsStat = require_out();
     var utils = require_utils4();
     var Reader = class {
@@ -17735,7 +17735,7 @@ var require_reader2 = __commonJS({
         });
       }
       _getFullEntryPath(filepath) {
-        return path9.resolve(this._settings.cwd, filepath);
+        return path10.resolve(this._settings.cwd, filepath);
       }
       _makeEntry(stats, pattern) {
         const entry = {
@@ -18151,7 +18151,7 @@ var require_provider = __commonJS({
   "node_modules/fast-glob/out/providers/provider.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
-    var path9 = __require("path");
+    var path10 = __require("path");
     var deep_1 = require_deep();
     var entry_1 = require_entry();
     var error_1 = require_error();
@@ -18165,7 +18165,7 @@ var require_provider = __commonJS({
         this.entryTransformer = new entry_2.default(this._settings);
       }
       _getRootDirectory(task) {
-        return path9.resolve(this._settings.cwd, task.base);
+        return path10.resolve(this._settings.cwd, task.base);
       }
       _getReaderOptions(task) {
         const basePath = task.base === "." ? "" : task.base;
@@ -21888,7 +21888,7 @@ var init_hf = __esm({
 // src/cli/main.ts
 import { statSync } from "node:fs";
 import { writeFile as writeFile3 } from "node:fs/promises";
-import path8 from "node:path";
+import path9 from "node:path";
 
 // src/judge/report.ts
 import { relative } from "node:path";
@@ -23300,9 +23300,9 @@ import path3 from "node:path";
 
 // src/policy/format.ts
 var PLAIN_KEY = /^[A-Za-z0-9_$-]+$/;
-function formatPath(path9) {
+function formatPath(path10) {
   let out = "";
-  for (const seg of path9) {
+  for (const seg of path10) {
     if (typeof seg === "number") out += `[${seg}]`;
     else if (PLAIN_KEY.test(seg)) out += out === "" ? seg : `.${seg}`;
     else out += `[${JSON.stringify(seg)}]`;
@@ -23358,8 +23358,8 @@ function readPolicyYaml(text) {
       errors.push({ position: { line: 1, column: 1 }, path: [], message: e2.message });
     }
   }
-  const locate2 = (path9, part = "value") => {
-    const found = walk(doc, path9);
+  const locate2 = (path10, part = "value") => {
+    const found = walk(doc, path10);
     const node = part === "key" ? found.key ?? found.value : found.value ?? found.key;
     const offset = node?.range?.[0];
     return offset === void 0 ? { line: 1, column: 1 } : pos(offset);
@@ -23377,10 +23377,10 @@ function keyText(pair) {
 function resolved(doc, node) {
   return (0, import_yaml.isAlias)(node) ? node.resolve(doc) : node;
 }
-function walk(doc, path9) {
+function walk(doc, path10) {
   let value = resolved(doc, doc.contents);
   let key;
-  for (const seg of path9) {
+  for (const seg of path10) {
     if ((0, import_yaml.isMap)(value)) {
       const pair = value.items.find((p) => keyText(p) === String(seg));
       if (!pair) break;
@@ -23400,7 +23400,7 @@ function walk(doc, path9) {
   return { key, value: value ?? void 0 };
 }
 function pathAtOffset(doc, offset) {
-  const path9 = [];
+  const path10 = [];
   let node = doc.contents;
   for (; ; ) {
     if ((0, import_yaml.isMap)(node)) {
@@ -23410,23 +23410,23 @@ function pathAtOffset(doc, offset) {
         return start !== void 0 && end !== void 0 && start <= offset && offset <= end;
       });
       const k = pair && keyText(pair);
-      if (!pair || k === void 0) return path9;
-      path9.push(k);
+      if (!pair || k === void 0) return path10;
+      path10.push(k);
       node = pair.value;
     } else if ((0, import_yaml.isSeq)(node)) {
       const i = node.items.findIndex((it) => {
         const r = it?.range;
         return r != null && r[0] <= offset && offset <= r[2];
       });
-      if (i < 0) return path9;
-      path9.push(i);
+      if (i < 0) return path10;
+      path10.push(i);
       node = node.items[i];
     } else {
-      return path9;
+      return path10;
     }
   }
 }
-function findDuplicates(doc, node, path9, pos, out) {
+function findDuplicates(doc, node, path10, pos, out) {
   if ((0, import_yaml.isMap)(node)) {
     const seen = /* @__PURE__ */ new Map();
     for (const pair of node.items) {
@@ -23438,17 +23438,17 @@ function findDuplicates(doc, node, path9, pos, out) {
         if (first) {
           out.push({
             position: pos(start),
-            path: [...path9, k],
+            path: [...path10, k],
             message: `duplicate key \`${k}\` (first set on line ${first.line}); a key may appear once per mapping`
           });
         } else {
           seen.set(k, pos(start));
         }
       }
-      findDuplicates(doc, pair.value, k === void 0 ? path9 : [...path9, k], pos, out);
+      findDuplicates(doc, pair.value, k === void 0 ? path10 : [...path10, k], pos, out);
     }
   } else if ((0, import_yaml.isSeq)(node)) {
-    node.items.forEach((item, i) => findDuplicates(doc, item, [...path9, i], pos, out));
+    node.items.forEach((item, i) => findDuplicates(doc, item, [...path10, i], pos, out));
   }
 }
 
@@ -26059,7 +26059,7 @@ function schemaKeyIndex() {
   return keyIndex;
 }
 function issueOf(e2, root) {
-  const path9 = pointerPath(e2.instancePath, root);
+  const path10 = pointerPath(e2.instancePath, root);
   const p = e2.params;
   const data2 = e2.data;
   switch (e2.keyword) {
@@ -26079,15 +26079,15 @@ function issueOf(e2, root) {
           message += `; expected one of ${valid.map((k) => `\`${k}\``).join(", ")}`;
         }
       }
-      return { path: [...path9, key], part: "key", message, ...suggestion ? { suggestion } : {} };
+      return { path: [...path10, key], part: "key", message, ...suggestion ? { suggestion } : {} };
     }
     case "required": {
       const key = String(p.missingProperty);
-      return { path: [...path9, key], part: "key", message: `missing required key \`${key}\`` };
+      return { path: [...path10, key], part: "key", message: `missing required key \`${key}\`` };
     }
     case "dependentRequired": {
       return {
-        path: [...path9, String(p.property)],
+        path: [...path10, String(p.property)],
         part: "key",
         message: `\`${String(p.property)}\` is only used together with \`${String(p.missingProperty)}\`; set \`${String(p.missingProperty)}\` too or remove it`
       };
@@ -26095,9 +26095,9 @@ function issueOf(e2, root) {
     case "false schema": {
       const m = /\/dependentSchemas\/([^/]+)\//.exec(e2.schemaPath);
       const with_ = m ? m[1].replace(/~1/g, "/").replace(/~0/g, "~") : void 0;
-      const key = String(path9[path9.length - 1]);
+      const key = String(path10[path10.length - 1]);
       return {
-        path: path9,
+        path: path10,
         part: "key",
         message: with_ ? `set either \`${with_}\` or \`${key}\`, not both` : `\`${key}\` is not allowed here`
       };
@@ -26110,25 +26110,25 @@ function issueOf(e2, root) {
         suggestion = `write shares as fractions: \`${Number.parseFloat(data2) / 100}\``;
       } else if (typeof data2 === "string" && numeric && data2.trim() !== "" && Number.isFinite(Number(data2))) {
         suggestion = `write it without quotes: \`${data2.trim()}\``;
-      } else if (path9.length === 2 && path9[0] === "languages" && typeof data2 === "number") {
-        suggestion = `write \`${String(path9[1])}: { target: ${data2} }\``;
+      } else if (path10.length === 2 && path10[0] === "languages" && typeof data2 === "number") {
+        suggestion = `write \`${String(path10[1])}: { target: ${data2} }\``;
       } else if (typeof data2 === "string" && want.includes("a list") && want.length === 1) {
         suggestion = `write a list: \`[${data2}]\``;
       }
-      return { path: path9, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path10, part: "value", message: `must be ${want.join(" or ")}, not ${kindOf(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "enum": {
       const allowed = p.allowedValues.map(String);
       const near = typeof data2 === "string" ? nearest(data2, allowed) : void 0;
       return {
-        path: path9,
+        path: path10,
         part: "value",
         message: `must be one of ${allowed.map((v) => `\`${v}\``).join(", ")}, not ${kindOf(data2)}`,
         ...near ? { suggestion: didYouMean(near) } : {}
       };
     }
     case "const": {
-      return { path: path9, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
+      return { path: path10, part: "value", message: `must be ${JSON.stringify(p.allowedValue)}, not ${kindOf(data2)}` };
     }
     case "minimum":
     case "maximum":
@@ -26139,24 +26139,24 @@ function issueOf(e2, root) {
       if (e2.keyword === "maximum" && p.limit === 1 && typeof data2 === "number" && data2 > 1 && data2 <= 100) {
         suggestion = `shares are fractions of 1: ${data2} % is \`${data2 / 100}\``;
       }
-      return { path: path9, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
+      return { path: path10, part: "value", message: `must be ${cmp} ${String(p.limit)}, not ${String(data2)}`, ...suggestion ? { suggestion } : {} };
     }
     case "minProperties": {
       const names = propertyNames(e2.parentSchema);
       const dependent = new Set(Object.keys(e2.parentSchema?.dependentRequired ?? {}));
       const primary = names.filter((k) => !dependent.has(k));
       const what = primary.length > 0 && primary.length <= MAX_LISTED_KEYS ? `; set ${primary.map((k) => `\`${k}\``).join(" or ")}` : "";
-      return { path: path9, part: "value", message: `must not be empty${what}` };
+      return { path: path10, part: "value", message: `must not be empty${what}` };
     }
     case "minItems":
-      return { path: path9, part: "value", message: "must not be an empty list" };
+      return { path: path10, part: "value", message: "must not be an empty list" };
     case "minLength":
-      return { path: path9, part: "value", message: "must not be empty" };
+      return { path: path10, part: "value", message: "must not be empty" };
     case "uniqueItems":
       const item = Array.isArray(data2) ? data2[Number(p.j)] : void 0;
-      return { path: path9, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
+      return { path: path10, part: "value", message: `lists ${item === void 0 ? "an entry" : `\`${String(item)}\``} twice; each may appear once` };
     default:
-      return { path: path9, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
+      return { path: path10, part: "value", message: e2.message ?? `fails the \`${e2.keyword}\` check` };
   }
 }
 
@@ -28447,7 +28447,8 @@ function recordParser(textField, declaredLanguageField) {
 
 // src/read/source.ts
 import { createReadStream } from "node:fs";
-import { open } from "node:fs/promises";
+import { open, stat as stat3 } from "node:fs/promises";
+import path5 from "node:path";
 import { Readable } from "node:stream";
 import { createGunzip } from "node:zlib";
 
@@ -29445,13 +29446,57 @@ async function textSizeHint(ref) {
 }
 var LFS_POINTER_START = "version https://git-lfs.github.com/spec/v1\n";
 var LFS_POINTER_MAX_BYTES = 1024;
+function isLfsPointer(bytes3) {
+  return bytes3.length < LFS_POINTER_MAX_BYTES && bytes3.subarray(0, LFS_POINTER_START.length).equals(Buffer.from(LFS_POINTER_START));
+}
+function lfsPointerOid(bytes3) {
+  if (!isLfsPointer(bytes3)) return void 0;
+  return /^oid sha256:([0-9a-f]{64})$/m.exec(bytes3.toString("latin1"))?.[1];
+}
+function resolvingLfsPointer(source, objectsDir) {
+  return Readable.from(
+    (async function* () {
+      const it = source[Symbol.asyncIterator]();
+      const held = [];
+      let heldBytes = 0;
+      let ended = false;
+      while (heldBytes < LFS_POINTER_MAX_BYTES) {
+        const next = await it.next();
+        if (next.done) {
+          ended = true;
+          break;
+        }
+        held.push(next.value);
+        heldBytes += next.value.length;
+      }
+      const oid = ended ? lfsPointerOid(Buffer.concat(held)) : void 0;
+      if (oid !== void 0) {
+        const object = path5.join(objectsDir, oid.slice(0, 2), oid.slice(2, 4), oid);
+        if (await isFile(object)) {
+          yield* createReadStream(object, { highWaterMark: READ_CHUNK_BYTES });
+          return;
+        }
+      }
+      yield* held;
+      if (ended) return;
+      for (let next = await it.next(); !next.done; next = await it.next()) yield next.value;
+    })()
+  );
+}
+async function isFile(p) {
+  try {
+    return (await stat3(p)).isFile();
+  } catch {
+    return false;
+  }
+}
 function lfsPointerProblem(bytes3) {
-  if (bytes3.length >= LFS_POINTER_MAX_BYTES || !bytes3.subarray(0, LFS_POINTER_START.length).equals(Buffer.from(LFS_POINTER_START))) return void 0;
+  if (!isLfsPointer(bytes3)) return void 0;
   const text = bytes3.toString("latin1");
   const oid = /^oid sha256:([0-9a-f]{64})$/m.exec(text)?.[1];
   const size = /^size (\d+)$/m.exec(text)?.[1];
   const what = oid ? ` (object ${oid.slice(0, 12)}\u2026${size ? `, ${Number(size).toLocaleString("en-US")} bytes` : ""})` : "";
-  return `a Git LFS pointer${what}, not the shard itself: fetch the LFS objects first (git lfs pull; actions/checkout with lfs: true)`;
+  return `a Git LFS pointer${what}, not the shard itself: fetch the LFS objects first (git lfs pull, or actions/checkout with lfs: true; for a base commit's shards, git lfs fetch origin <commit>)`;
 }
 async function pumpShard(ref, write, pace) {
   let source;
@@ -29748,7 +29793,7 @@ var TextSink = class extends AccountingSink {
 
 // src/results/cache.ts
 import { createHash as createHash3 } from "node:crypto";
-import { mkdir, readFile as readFile2, rename, stat as stat3, writeFile } from "node:fs/promises";
+import { mkdir, readFile as readFile2, rename, stat as stat4, writeFile } from "node:fs/promises";
 import { dirname, join } from "node:path";
 
 // src/measure/duplicates/hash.ts
@@ -31597,14 +31642,14 @@ async function makeDirectory(dir) {
     return;
   } catch (error) {
     const code = error.code;
-    if (code === "EEXIST" && (await stat3(dir)).isDirectory()) return;
+    if (code === "EEXIST" && (await stat4(dir)).isDirectory()) return;
     if (code !== "ENOENT" || dirname(dir) === dir) throw error;
   }
   await makeDirectory(dirname(dir));
   try {
     await mkdir(dir);
   } catch (error) {
-    if (error.code !== "EEXIST" || !(await stat3(dir)).isDirectory()) throw error;
+    if (error.code !== "EEXIST" || !(await stat4(dir)).isDirectory()) throw error;
   }
 }
 var ResultCache = class {
@@ -42315,7 +42360,7 @@ async function prepareAnalyzers(policy, options = {}) {
 
 // src/core/check.ts
 import { existsSync as existsSync2, opendirSync, realpathSync } from "node:fs";
-import path5 from "node:path";
+import path6 from "node:path";
 
 // src/core/pool.ts
 import { existsSync } from "node:fs";
@@ -42330,8 +42375,8 @@ var ShardFailure = class extends Error {
   shard;
   name = "ShardFailure";
 };
-function throwIfFaultInjected(path9) {
-  if (process.env.SLUICE_FAULT_SHARD && path9 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
+function throwIfFaultInjected(path10) {
+  if (process.env.SLUICE_FAULT_SHARD && path10 === process.env.SLUICE_FAULT_SHARD) throw new Error("injected fault (SLUICE_FAULT_SHARD)");
 }
 function workOf(ref) {
   return ref.textBytesHint ?? ref.sizeBytes;
@@ -42344,8 +42389,8 @@ function defaultWorkers() {
 }
 function canRunWorkers(entry) {
   if (!entry) return false;
-  const path9 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
-  return path9.endsWith(".js") && existsSync(path9);
+  const path10 = typeof entry === "string" && !entry.startsWith("file:") ? entry : fileURLToPath(entry);
+  return path10.endsWith(".js") && existsSync(path10);
 }
 function startWorker(entry, init) {
   const worker = new Worker(typeof entry === "string" && entry.startsWith("file:") ? new URL(entry) : entry, { workerData: init });
@@ -42676,7 +42721,7 @@ function refuseOutputsAmongShards(shards, outputs) {
     try {
       return realpathSync(p);
     } catch {
-      return path5.resolve(p);
+      return path6.resolve(p);
     }
   };
   const byPath = new Map(shards.map((s) => [real(s.absPath), s.path]));
@@ -42734,8 +42779,8 @@ async function measureShards(policy, shards, prepared, opts, started = performan
     for (const b of reading.values()) inFlight += b;
     opts.onProgress?.({ policy: policy.name, shardsDone: results.length, shards: shards.length, bytes: bytes3 + inFlight, elapsedMs: performance.now() - started });
   };
-  const readingAt = (path9, b) => {
-    reading.set(path9, b);
+  const readingAt = (path10, b) => {
+    reading.set(path10, b);
     if (opts.onProgress) report();
   };
   const done = (r) => {
@@ -42851,7 +42896,7 @@ import { mkdtemp, readFile as readFile5, realpath as realpath2, rename as rename
 var import_picomatch2 = __toESM(require_picomatch2(), 1);
 import { tmpdir } from "node:os";
 import { pipeline } from "node:stream/promises";
-import path6 from "node:path";
+import path7 from "node:path";
 
 // src/judge/comparison.ts
 function shardChanges(base, head, gitRenames, docs = { base: /* @__PURE__ */ new Map(), head: /* @__PURE__ */ new Map() }) {
@@ -42940,7 +42985,7 @@ async function baseMemoKey(policy, settingsId, commit) {
 }
 async function readBaseMemo(cacheDir, settingsId, key) {
   try {
-    return JSON.parse(await readFile5(path6.join(cacheDir, `${settingsId}-${key}.json`), "utf8"));
+    return JSON.parse(await readFile5(path7.join(cacheDir, `${settingsId}-${key}.json`), "utf8"));
   } catch {
     return void 0;
   }
@@ -42948,7 +42993,7 @@ async function readBaseMemo(cacheDir, settingsId, key) {
 async function writeBaseMemo(cacheDir, settingsId, key, report, corpus) {
   const memo = { report, docs: Object.fromEntries(corpus.shards.map((s) => [s.path, s.read.docs])) };
   await makeDirectory(cacheDir);
-  const file = path6.join(cacheDir, `${settingsId}-${key}.json`);
+  const file = path7.join(cacheDir, `${settingsId}-${key}.json`);
   await writeFile2(`${file}.tmp`, JSON.stringify(memo));
   await rename2(`${file}.tmp`, file);
 }
@@ -42980,8 +43025,8 @@ async function resolveCommit(top, ref) {
   }
 }
 async function rootInRepo(top, policy) {
-  const rel = path6.relative(top, await realpath2(policy.root)).split(path6.sep).join("/");
-  if (rel === ".." || rel.startsWith("../") || path6.isAbsolute(rel)) {
+  const rel = path7.relative(top, await realpath2(policy.root)).split(path7.sep).join("/");
+  if (rel === ".." || rel.startsWith("../") || path7.isAbsolute(rel)) {
     throw new ConfigError(`${policy.file}: root ${policy.root} is outside the git repository ${top}; a base comparison needs the corpus in the repository`);
   }
   return rel;
@@ -43017,7 +43062,14 @@ function blobStream(top, blob) {
   child.on("error", (err2) => child.stdout.destroy(err2));
   return child.stdout;
 }
-function baseShardRefs(top, commit, policy, shards, onRead) {
+async function lfsObjectsDir(top) {
+  try {
+    return path7.resolve(top, (await git(top, ["rev-parse", "--git-common-dir"])).trim(), "lfs", "objects");
+  } catch {
+    return void 0;
+  }
+}
+function baseShardRefs(top, commit, policy, shards, onRead, lfsObjects) {
   const classify = pathClassifier(policy.corpus);
   const refs = [];
   for (const s of shards) {
@@ -43032,7 +43084,8 @@ function baseShardRefs(top, commit, policy, shards, onRead) {
       sizeBytes: s.sizeBytes,
       open: () => {
         onRead?.();
-        return blobStream(top, s.blob);
+        const blob = blobStream(top, s.blob);
+        return lfsObjects !== void 0 && s.sizeBytes < LFS_POINTER_MAX_BYTES ? resolvingLfsPointer(blob, lfsObjects) : blob;
       }
     };
     if (c.subset !== void 0) ref.subset = c.subset;
@@ -43085,7 +43138,7 @@ async function renamesBetween(top, commit, rootRel) {
 async function withBaseTokenizer(policy, top, baseCommit, baseLabel) {
   const tok = policy.tokenizer;
   if (!tok || tok.kind !== "file" || policy.baseline) return policy;
-  const rel = path6.relative(top, await realpath2(tok.absPath).catch(() => tok.absPath)).split(path6.sep).join("/");
+  const rel = path7.relative(top, await realpath2(tok.absPath).catch(() => tok.absPath)).split(path7.sep).join("/");
   if (rel.startsWith("..")) return policy;
   let baseBlob;
   let headBlob;
@@ -43096,8 +43149,8 @@ async function withBaseTokenizer(policy, top, baseCommit, baseLabel) {
     return policy;
   }
   if (baseBlob === headBlob) return policy;
-  const dir = await mkdtemp(path6.join(tmpdir(), "sluice-base-tokenizer-"));
-  const file = path6.join(dir, path6.basename(rel));
+  const dir = await mkdtemp(path7.join(tmpdir(), "sluice-base-tokenizer-"));
+  const file = path7.join(dir, path7.basename(rel));
   await pipeline(blobStream(top, baseBlob), createWriteStream(file));
   const baseline = { ...tok, file: `${tok.file} at ${baseLabel}`, absPath: file };
   return { ...policy, baseline };
@@ -43123,7 +43176,7 @@ async function compareWithBase(givenPolicy, opts) {
   let base = null;
   let baseDocs = /* @__PURE__ */ new Map();
   let baseBlobReads = 0;
-  const refs = baseShardRefs(opts.top, opts.baseCommit, policy, baseShards, () => baseBlobReads += 1);
+  const refs = baseShardRefs(opts.top, opts.baseCommit, policy, baseShards, () => baseBlobReads += 1, await lfsObjectsDir(opts.top));
   if (refs.length > 0) {
     const { settingsId } = prepared;
     const memoKey = opts.check.cacheDir ? await baseMemoKey(policy, settingsId, opts.baseCommit) : void 0;
@@ -43147,7 +43200,7 @@ async function compareWithBase(givenPolicy, opts) {
 }
 async function runCheckAgainstBase(opts, baseRef) {
   const out = [];
-  const scratch3 = opts.cacheDir === null ? await mkdtemp(path6.join(tmpdir(), "sluice-compare-")) : null;
+  const scratch3 = opts.cacheDir === null ? await mkdtemp(path7.join(tmpdir(), "sluice-compare-")) : null;
   const check2 = scratch3 === null ? opts : { ...opts, cacheDir: scratch3 };
   try {
     for (const file of opts.policies) {
@@ -43167,7 +43220,7 @@ async function runCheckAgainstBase(opts, baseRef) {
 // src/core/parts.ts
 import { mkdtemp as mkdtemp2, rm as rm2 } from "node:fs/promises";
 import { tmpdir as tmpdir2 } from "node:os";
-import path7 from "node:path";
+import path8 from "node:path";
 
 // src/core/partition.ts
 import { readFile as readFile6 } from "node:fs/promises";
@@ -43177,8 +43230,8 @@ import { createHash as createHash7 } from "node:crypto";
 var PARTIAL_FORMAT = "sluice-partial";
 var PARTIAL_VERSION = 1;
 var GIT_OBJECT_ID = /^(?:[0-9a-f]{40}|[0-9a-f]{64})$/;
-function partitionOf(path9, count3) {
-  const h = createHash7("sha256").update(path9).digest();
+function partitionOf(path10, count3) {
+  const h = createHash7("sha256").update(path10).digest();
   return h.readUInt32BE(0) % count3 + 1;
 }
 function partialToJson(p) {
@@ -43355,7 +43408,7 @@ async function seedFromParts(policy, parts, top, rootRel, cacheDir, what) {
 }
 async function seedRunFromParts(opts, patterns, what) {
   const parts = await readParts(patterns, opts.cwd ?? process.cwd(), what);
-  const scratch3 = opts.cacheDir === null ? await mkdtemp2(path7.join(tmpdir2(), "sluice-parts-")) : null;
+  const scratch3 = opts.cacheDir === null ? await mkdtemp2(path8.join(tmpdir2(), "sluice-parts-")) : null;
   const dispose = async () => {
     if (scratch3 !== null) await rm2(scratch3, { recursive: true, force: true });
   };
@@ -43460,8 +43513,8 @@ var HTML_SPECIAL = { "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'":
 function escapeMarkdown(text) {
   return text.replace(/[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, (c) => `U+${c.codePointAt(0).toString(16).toUpperCase().padStart(4, "0")}`).replace(MARKDOWN_PUNCT, (c) => `\\${c}`).replace(/[&<>"']/g, (c) => HTML_SPECIAL[c]).replace(/@/g, "&#64;").replace(/:\/\//g, "&#58;//").replace(/\r?\n|\r/g, " ");
 }
-function codePath(path9) {
-  const safe = path9.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
+function codePath(path10) {
+  const safe = path10.replace(/[\u0000-\u001F\u007F-\u009F\u200B-\u200F\u202A-\u202E\u2060-\u2069\uFEFF]/g, "?").replace(/`/g, "'").replace(/\|/g, "\\|");
   return `\`${safe}\``;
 }
 
@@ -43525,10 +43578,10 @@ var ICON = { pass: "\u2705", warn: "\u26A0\uFE0F", fail: "\u274C", uncertain: "\
 var MAX_REJECTIONS_LISTED = 10;
 function renderMarkdown(report, opts = {}) {
   const out = [];
-  const loc = (path9, line) => {
-    const text = codePath(line === void 0 ? path9 : `${path9}:${line}`);
+  const loc = (path10, line) => {
+    const text = codePath(line === void 0 ? path10 : `${path10}:${line}`);
     if (!opts.linkBase) return text;
-    const href = `${opts.linkBase}/${path9.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
+    const href = `${opts.linkBase}/${path10.split("/").map((seg) => encodeURIComponent(seg).replace(/[()'!*]/g, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`)).join("/")}${line !== void 0 ? `#L${line}` : ""}`;
     return `[${text}](${href})`;
   };
   out.push(`## ${ICON[report.verdict]} sluice \xB7 ${escapeMarkdown(report.policy.name)}: ${report.verdict.toUpperCase()}`);
@@ -44170,14 +44223,14 @@ function checkPaths(outputs, policies, cacheDir) {
       return "none";
     }
   };
-  const policyFiles = new Set(policies.map((p) => path8.resolve(p)));
+  const policyFiles = new Set(policies.map((p) => path9.resolve(p)));
   for (const [option, file] of outputs) {
     if (file === void 0) continue;
     if (kind(file) === "dir") throw new UsageError(`${option} ${file}: is a directory; give a file name to write to`);
-    const parent = path8.dirname(path8.resolve(file));
+    const parent = path9.dirname(path9.resolve(file));
     const parentKind = kind(parent);
     if (parentKind !== "dir") throw new UsageError(`${option} ${file}: ${parent} ${parentKind === "none" ? "does not exist" : "is not a directory"}`);
-    if (policyFiles.has(path8.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
+    if (policyFiles.has(path9.resolve(file))) throw new UsageError(`${option} ${file}: is an input of this run; the report would overwrite it`);
   }
   if (cacheDir !== null && kind(cacheDir) === "file") throw new UsageError(`--cache-dir ${cacheDir}: is a file, not a directory`);
 }

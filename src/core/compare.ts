@@ -16,7 +16,7 @@ import picomatch from 'picomatch';
 import { buildReport } from '../judge/report.js';
 import type { Report } from '../judge/types.js';
 import type { Policy } from '../policy/types.js';
-import { pathClassifier } from '../read/index.js';
+import { LFS_POINTER_MAX_BYTES, pathClassifier, resolvingLfsPointer } from '../read/index.js';
 import type { ShardRef } from '../read/types.js';
 import type { CorpusResult } from '../results/corpus.js';
 import { contentIdOf } from '../results/scan.js';
@@ -171,8 +171,17 @@ export function blobStream(top: string, blob: string): Readable {
   return child.stdout;
 }
 
-/** Returns ShardRefs for base shards, classified by the policy's path rules and read from git; `onRead` is called each time a blob is opened. */
-export function baseShardRefs(top: string, commit: string, policy: Policy, shards: BaseShard[], onRead?: () => void): ShardRef[] {
+/** Returns where the clone keeps its Git LFS objects (`<git dir>/lfs/objects`), or undefined when git cannot say. */
+async function lfsObjectsDir(top: string): Promise<string | undefined> {
+  try {
+    return path.resolve(top, (await git(top, ['rev-parse', '--git-common-dir'])).trim(), 'lfs', 'objects');
+  } catch {
+    return undefined;
+  }
+}
+
+/** Returns ShardRefs for base shards, classified by the policy's path rules and read from git; `onRead` is called each time a blob is opened; `lfsObjects`: where LFS pointers' objects are looked up. */
+export function baseShardRefs(top: string, commit: string, policy: Policy, shards: BaseShard[], onRead?: () => void, lfsObjects?: string): ShardRef[] {
   const classify = pathClassifier(policy.corpus);
   const refs: ShardRef[] = [];
   for (const s of shards) {
@@ -188,7 +197,9 @@ export function baseShardRefs(top: string, commit: string, policy: Policy, shard
       sizeBytes: s.sizeBytes,
       open: () => {
         onRead?.();
-        return blobStream(top, s.blob);
+        // A shard kept in Git LFS is a pointer in the commit: read the object when the clone has it.
+        const blob = blobStream(top, s.blob);
+        return lfsObjects !== undefined && s.sizeBytes < LFS_POINTER_MAX_BYTES ? resolvingLfsPointer(blob, lfsObjects) : blob;
       },
     };
     if (c.subset !== undefined) ref.subset = c.subset;
@@ -319,7 +330,7 @@ export async function compareWithBase(givenPolicy: Policy, opts: CompareOptions)
   let base: Side | null = null;
   let baseDocs = new Map<string, number>();
   let baseBlobReads = 0;
-  const refs = baseShardRefs(opts.top, opts.baseCommit, policy, baseShards, () => (baseBlobReads += 1));
+  const refs = baseShardRefs(opts.top, opts.baseCommit, policy, baseShards, () => (baseBlobReads += 1), await lfsObjectsDir(opts.top));
   if (refs.length > 0) {
     // The base was judged before (a push to the default branch, or an earlier run of this PR) under the same
     // policy and settings: reuse that judgement, so the run costs what the PR changed, not the corpus size.

@@ -2,7 +2,8 @@
 // corrupt or truncated stream or an I/O error ends the flow with an error value, never
 // a throw; an error thrown by the consumer is the consumer's and is thrown on.
 import { createReadStream } from 'node:fs';
-import { open } from 'node:fs/promises';
+import { open, stat } from 'node:fs/promises';
+import path from 'node:path';
 import { Readable } from 'node:stream';
 import { createGunzip, type Gunzip } from 'node:zlib';
 import type { ShardRef } from './types.js';
@@ -63,16 +64,72 @@ export type Pace = () => Promise<void> | undefined;
  * without the LFS objects, or a base commit's shards read from git, hold pointers instead of data.
  */
 const LFS_POINTER_START = 'version https://git-lfs.github.com/spec/v1\n';
-const LFS_POINTER_MAX_BYTES = 1024;
+export const LFS_POINTER_MAX_BYTES = 1024;
+
+function isLfsPointer(bytes: Buffer): boolean {
+  return bytes.length < LFS_POINTER_MAX_BYTES && bytes.subarray(0, LFS_POINTER_START.length).equals(Buffer.from(LFS_POINTER_START));
+}
+
+/** Returns the sha256 oid a Git LFS pointer names, or undefined when the bytes are no pointer. */
+export function lfsPointerOid(bytes: Buffer): string | undefined {
+  if (!isLfsPointer(bytes)) return undefined;
+  return /^oid sha256:([0-9a-f]{64})$/m.exec(bytes.toString('latin1'))?.[1];
+}
+
+/**
+ * Returns a stream of `source`'s bytes, or, when they are a Git LFS pointer whose object is in the
+ * clone's local LFS store (`objectsDir`: `<git dir>/lfs/objects`, objects at `aa/bb/<oid>` under it,
+ * as Git LFS keeps them), of that object's bytes. A pointer without a local object is passed on
+ * as it is, and reading it then says what it is (lfsPointerProblem). For shards read from git
+ * objects, such as a base commit's, where the working tree's LFS checkout does not apply.
+ */
+export function resolvingLfsPointer(source: Readable, objectsDir: string): Readable {
+  return Readable.from(
+    (async function* () {
+      const it = source[Symbol.asyncIterator]() as AsyncIterator<Buffer>;
+      const held: Buffer[] = [];
+      let heldBytes = 0;
+      let ended = false;
+      while (heldBytes < LFS_POINTER_MAX_BYTES) {
+        const next = await it.next();
+        if (next.done) {
+          ended = true;
+          break;
+        }
+        held.push(next.value);
+        heldBytes += next.value.length;
+      }
+      const oid = ended ? lfsPointerOid(Buffer.concat(held)) : undefined;
+      if (oid !== undefined) {
+        const object = path.join(objectsDir, oid.slice(0, 2), oid.slice(2, 4), oid);
+        if (await isFile(object)) {
+          yield* createReadStream(object, { highWaterMark: READ_CHUNK_BYTES });
+          return;
+        }
+      }
+      yield* held;
+      if (ended) return;
+      for (let next = await it.next(); !next.done; next = await it.next()) yield next.value;
+    })(),
+  );
+}
+
+async function isFile(p: string): Promise<boolean> {
+  try {
+    return (await stat(p)).isFile();
+  } catch {
+    return false;
+  }
+}
 
 /** Returns why a small file's bytes are a Git LFS pointer rather than a shard, or undefined. */
 export function lfsPointerProblem(bytes: Buffer): string | undefined {
-  if (bytes.length >= LFS_POINTER_MAX_BYTES || !bytes.subarray(0, LFS_POINTER_START.length).equals(Buffer.from(LFS_POINTER_START))) return undefined;
+  if (!isLfsPointer(bytes)) return undefined;
   const text = bytes.toString('latin1');
   const oid = /^oid sha256:([0-9a-f]{64})$/m.exec(text)?.[1];
   const size = /^size (\d+)$/m.exec(text)?.[1];
   const what = oid ? ` (object ${oid.slice(0, 12)}…${size ? `, ${Number(size).toLocaleString('en-US')} bytes` : ''})` : '';
-  return `a Git LFS pointer${what}, not the shard itself: fetch the LFS objects first (git lfs pull; actions/checkout with lfs: true)`;
+  return `a Git LFS pointer${what}, not the shard itself: fetch the LFS objects first (git lfs pull, or actions/checkout with lfs: true; for a base commit's shards, git lfs fetch origin <commit>)`;
 }
 
 /** Streams the shard's decompressed bytes into `write` and returns the raw byte count and, when the stream broke, why. */

@@ -1,5 +1,6 @@
 // `sluice check --base REF`: the working tree's corpus judged and compared with a git commit,
 // by the same core the Action uses on a pull request (the comparison JSON is the same).
+import { createHash } from 'node:crypto';
 import { mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -188,5 +189,43 @@ describe('rules.duplicates.max-added: the copies a change adds, not diluted by t
     const run = sluice(['check', 'policies/newsroom.yaml', '--base', 'main', '--no-cache'], { cwd: repo.dir, json: true });
     expect(run.status, run.stderr).toBe(0);
     expect(run.report!.rules.find((r) => r.scope === 'change')).toMatchObject({ verdict: 'pass', measured: 0.5, limit: 0.5 });
+  });
+});
+
+describe('sluice check --base on a corpus kept in Git LFS', () => {
+  // A shard as Git LFS commits it: a pointer (Git LFS specification, "The Pointer") in the
+  // commit, the bytes in the clone's LFS store at .git/lfs/objects/<aa>/<bb>/<oid>.
+  function lfsRepo(withObject: boolean): ReturnType<typeof newsroomRepo>['repo'] {
+    const { repo } = newsroomRepo(1);
+    const shards = { 'data/eng/eng-lfs.jsonl': stories('eng', 10, 4242), 'data/hin/hin-lfs.jsonl': stories('hin', 10, 4343) };
+    for (const [file, text] of Object.entries(shards)) {
+      const oid = createHash('sha256').update(text).digest('hex');
+      repo.write(file, `version https://git-lfs.github.com/spec/v1\noid sha256:${oid}\nsize ${Buffer.byteLength(text)}\n`);
+      if (withObject) repo.write(`.git/lfs/objects/${oid.slice(0, 2)}/${oid.slice(2, 4)}/${oid}`, text);
+    }
+    repo.commit('Desk: two shards in LFS');
+    // The working tree as an LFS checkout leaves it: the bytes, where the commit has the pointers.
+    for (const [file, text] of Object.entries(shards)) repo.write(file, text);
+    return repo;
+  }
+
+  it('reads a base shard that is an LFS pointer from the local LFS store', () => {
+    const repo = lfsRepo(true);
+    const run = sluice(['check', 'policies/newsroom.yaml', '--base', 'HEAD', '--no-cache', '--comparison-json', 'cmp.json'], { cwd: repo.dir, json: true });
+    expect(run.status, run.stdout + run.stderr).toBe(0);
+    expect(run.stdout).not.toContain('Git LFS pointer');
+    const cmp = JSON.parse(readFileSync(path.join(repo.dir, 'cmp.json'), 'utf8')) as { docs: { base: number; head: number }; verdict: { base: string } };
+    // The same 40 documents on both sides: the base read the objects, not the pointers' three lines.
+    expect(cmp.docs).toEqual({ base: 40, head: 40 });
+    expect(cmp.verdict.base).toBe('pass');
+  });
+
+  it('says what a base pointer is when the clone lacks its object', () => {
+    const repo = lfsRepo(false);
+    const run = sluice(['check', 'policies/newsroom.yaml', '--base', 'HEAD', '--no-cache', '--comparison-json', 'cmp.json'], { cwd: repo.dir });
+    expect(run.status).toBe(0);
+    const cmp = JSON.parse(readFileSync(path.join(repo.dir, 'cmp.json'), 'utf8')) as { verdict: { base: string }; flipped: Array<{ rule: string; from: string; message: string }> };
+    expect(cmp.verdict.base).toBe('fail');
+    expect(cmp.flipped.find((f) => f.rule === 'input')).toMatchObject({ from: 'fail' });
   });
 });

@@ -173,7 +173,7 @@ describe('readShard on JSONL', () => {
       expect(docs, compression).toEqual([]);
       expect(account.lines, compression).toBe(0);
       expect(account.broken?.afterLine, compression).toBe(0);
-      expect(account.broken?.message, compression).toBe('a Git LFS pointer (object 4d7a214614ab…, 12,345,678 bytes), not the shard itself: fetch the LFS objects first (git lfs pull; actions/checkout with lfs: true)');
+      expect(account.broken?.message, compression).toBe('a Git LFS pointer (object 4d7a214614ab…, 12,345,678 bytes), not the shard itself: fetch the LFS objects first (git lfs pull, or actions/checkout with lfs: true; for a base commit\'s shards, git lfs fetch origin <commit>)');
     }
     // Text that merely starts like one, in a larger file, is read as text.
     const long = memoryShard(Buffer.from(`${POINTER}${'x'.repeat(2000)}\n`), { format: 'txt', path: 'notes.txt' });
