@@ -29453,23 +29453,28 @@ function lfsPointerOid(bytes3) {
   if (!isLfsPointer(bytes3)) return void 0;
   return /^oid sha256:([0-9a-f]{64})$/m.exec(bytes3.toString("latin1"))?.[1];
 }
+async function holdStart(source) {
+  const rest = source[Symbol.asyncIterator]();
+  const held = [];
+  let heldBytes = 0;
+  while (heldBytes < LFS_POINTER_MAX_BYTES) {
+    const next = await rest.next();
+    if (next.done) return { held, ended: true, rest };
+    held.push(next.value);
+    heldBytes += next.value.length;
+  }
+  return { held, ended: false, rest };
+}
+async function* restOf(start) {
+  yield* start.held;
+  if (start.ended) return;
+  for (let next = await start.rest.next(); !next.done; next = await start.rest.next()) yield next.value;
+}
 function resolvingLfsPointer(source, objectsDir) {
   return Readable.from(
     (async function* () {
-      const it = source[Symbol.asyncIterator]();
-      const held = [];
-      let heldBytes = 0;
-      let ended = false;
-      while (heldBytes < LFS_POINTER_MAX_BYTES) {
-        const next = await it.next();
-        if (next.done) {
-          ended = true;
-          break;
-        }
-        held.push(next.value);
-        heldBytes += next.value.length;
-      }
-      const oid = ended ? lfsPointerOid(Buffer.concat(held)) : void 0;
+      const start = await holdStart(source);
+      const oid = start.ended ? lfsPointerOid(Buffer.concat(start.held)) : void 0;
       if (oid !== void 0) {
         const object = path5.join(objectsDir, oid.slice(0, 2), oid.slice(2, 4), oid);
         if (await isFile(object)) {
@@ -29477,9 +29482,7 @@ function resolvingLfsPointer(source, objectsDir) {
           return;
         }
       }
-      yield* held;
-      if (ended) return;
-      for (let next = await it.next(); !next.done; next = await it.next()) yield next.value;
+      yield* restOf(start);
     })()
   );
 }
@@ -29506,32 +29509,15 @@ async function pumpShard(ref, write, pace) {
     return { compressedBytes: 0, error: `cannot open: ${messageOf2(error)}` };
   }
   if (ref.sizeBytes < LFS_POINTER_MAX_BYTES) {
-    const it = source[Symbol.asyncIterator]();
-    const held = [];
-    let heldBytes = 0;
-    let ended = false;
+    let start;
     try {
-      while (heldBytes < LFS_POINTER_MAX_BYTES) {
-        const next = await it.next();
-        if (next.done) {
-          ended = true;
-          break;
-        }
-        held.push(next.value);
-        heldBytes += next.value.length;
-      }
+      start = await holdStart(source);
     } catch (error) {
       return { compressedBytes: 0, error: `read failed: ${messageOf2(error)}` };
     }
-    const lfs = ended ? lfsPointerProblem(Buffer.concat(held)) : void 0;
+    const lfs = start.ended ? lfsPointerProblem(Buffer.concat(start.held)) : void 0;
     if (lfs !== void 0) return { compressedBytes: 0, error: lfs };
-    source = Readable.from(
-      (async function* () {
-        yield* held;
-        if (ended) return;
-        for (let next = await it.next(); !next.done; next = await it.next()) yield next.value;
-      })()
-    );
+    source = Readable.from(restOf(start));
   }
   switch (ref.compression) {
     case "none":

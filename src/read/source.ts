@@ -76,6 +76,35 @@ export function lfsPointerOid(bytes: Buffer): string | undefined {
   return /^oid sha256:([0-9a-f]{64})$/m.exec(bytes.toString('latin1'))?.[1];
 }
 
+/** The first bytes of a stream, held (at most LFS_POINTER_MAX_BYTES' worth, in the chunks they came in), and the rest of it. */
+interface HeldStart {
+  held: Buffer[];
+  /** The stream ended within the held bytes: they are all of it. */
+  ended: boolean;
+  rest: AsyncIterator<Buffer>;
+}
+
+/** Reads up to the pointer limit's worth of a stream's first chunks; a read error is thrown. */
+async function holdStart(source: Readable): Promise<HeldStart> {
+  const rest = source[Symbol.asyncIterator]() as AsyncIterator<Buffer>;
+  const held: Buffer[] = [];
+  let heldBytes = 0;
+  while (heldBytes < LFS_POINTER_MAX_BYTES) {
+    const next = await rest.next();
+    if (next.done) return { held, ended: true, rest };
+    held.push(next.value);
+    heldBytes += next.value.length;
+  }
+  return { held, ended: false, rest };
+}
+
+/** The held chunks, then the rest of the stream. */
+async function* restOf(start: HeldStart): AsyncGenerator<Buffer> {
+  yield* start.held;
+  if (start.ended) return;
+  for (let next = await start.rest.next(); !next.done; next = await start.rest.next()) yield next.value;
+}
+
 /**
  * Returns a stream of `source`'s bytes, or, when they are a Git LFS pointer whose object is in the
  * clone's local LFS store (`objectsDir`: `<git dir>/lfs/objects`, objects at `aa/bb/<oid>` under it,
@@ -86,20 +115,8 @@ export function lfsPointerOid(bytes: Buffer): string | undefined {
 export function resolvingLfsPointer(source: Readable, objectsDir: string): Readable {
   return Readable.from(
     (async function* () {
-      const it = source[Symbol.asyncIterator]() as AsyncIterator<Buffer>;
-      const held: Buffer[] = [];
-      let heldBytes = 0;
-      let ended = false;
-      while (heldBytes < LFS_POINTER_MAX_BYTES) {
-        const next = await it.next();
-        if (next.done) {
-          ended = true;
-          break;
-        }
-        held.push(next.value);
-        heldBytes += next.value.length;
-      }
-      const oid = ended ? lfsPointerOid(Buffer.concat(held)) : undefined;
+      const start = await holdStart(source);
+      const oid = start.ended ? lfsPointerOid(Buffer.concat(start.held)) : undefined;
       if (oid !== undefined) {
         const object = path.join(objectsDir, oid.slice(0, 2), oid.slice(2, 4), oid);
         if (await isFile(object)) {
@@ -107,9 +124,7 @@ export function resolvingLfsPointer(source: Readable, objectsDir: string): Reada
           return;
         }
       }
-      yield* held;
-      if (ended) return;
-      for (let next = await it.next(); !next.done; next = await it.next()) yield next.value;
+      yield* restOf(start);
     })(),
   );
 }
@@ -144,32 +159,15 @@ export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void, p
   // pointer limit's worth, should the file have grown since it was listed) are held, then streamed on
   // in the chunks they came in, followed by the rest.
   if (ref.sizeBytes < LFS_POINTER_MAX_BYTES) {
-    const it = source[Symbol.asyncIterator]() as AsyncIterator<Buffer>;
-    const held: Buffer[] = [];
-    let heldBytes = 0;
-    let ended = false;
+    let start: HeldStart;
     try {
-      while (heldBytes < LFS_POINTER_MAX_BYTES) {
-        const next = await it.next();
-        if (next.done) {
-          ended = true;
-          break;
-        }
-        held.push(next.value);
-        heldBytes += next.value.length;
-      }
+      start = await holdStart(source);
     } catch (error) {
       return { compressedBytes: 0, error: `read failed: ${messageOf(error)}` };
     }
-    const lfs = ended ? lfsPointerProblem(Buffer.concat(held)) : undefined;
+    const lfs = start.ended ? lfsPointerProblem(Buffer.concat(start.held)) : undefined;
     if (lfs !== undefined) return { compressedBytes: 0, error: lfs };
-    source = Readable.from(
-      (async function* () {
-        yield* held;
-        if (ended) return;
-        for (let next = await it.next(); !next.done; next = await it.next()) yield next.value;
-      })(),
-    );
+    source = Readable.from(restOf(start));
   }
   switch (ref.compression) {
     case 'none':
