@@ -17,7 +17,7 @@ import { makeDirectory } from '../results/cache.js';
 import { contentIdOf } from '../results/scan.js';
 import { TOOL_VERSION } from '../version.js';
 import { annotationsOf, capAnnotations, type Annotation } from './annotations.js';
-import { readParts, seedFromParts } from '../core/parts.js';
+import { readParts, seededLine, seedFromParts } from '../core/parts.js';
 import { scanPartition } from '../core/partition.js';
 import { partialToJson } from '../results/partition.js';
 import { pruneResults, restoreResults, saveResults } from './cache.js';
@@ -122,6 +122,29 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
     ...(s.workers !== null ? { workers: s.workers } : {}),
   };
   if (s.workers !== null && s.workers > maxWorkers()) warn(`sluice: input \`workers\` is ${s.workers}: measuring on ${maxWorkers()} threads, twice this runner's cores`);
+  // A policy's working-tree shards keyed by blob id where git knows them (else by their bytes), each key recorded as used.
+  const keysOf = async (policy: Policy): Promise<{ rootRel: string | null; contentKey: NonNullable<CheckOptions['contentKey']> }> => {
+    const rootRel = top ? await rootInRepo(top, policy).catch(() => null) : null;
+    const keyOf = top && rootRel !== null ? await workingTreeKeys(top, rootRel) : contentIdOf;
+    return {
+      rootRel,
+      contentKey: async (ref) => {
+        const k = await keyOf(ref);
+        usedKeys.add(k);
+        return k;
+      },
+    };
+  };
+  // Keeps the results this run used (and saves them when it measured something or restored another entry), or drops a scratch cache.
+  const keepCache = async (measured: boolean, dropped: string): Promise<void> => {
+    if (!s.cache) {
+      await rm(cacheDir, { recursive: true, force: true });
+      return;
+    }
+    const removed = await pruneResults(cacheDir, usedSettings, usedKeys);
+    if (removed > 0) io.info(`sluice: dropped ${removed} cached results ${dropped}`);
+    if (measured || restored !== cacheKey) await saveResults(cacheDir, cacheKey, io.info, warn);
+  };
   const judged: Judged[] = [];
   await makeDirectory(s.reportDir);
   // One file stem per policy; two policies with one name get -2, -3, ...
@@ -137,16 +160,8 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
     for (const [i, policy] of policies.entries()) {
       const file = `${stems[i]!}.part-${index}-of-${count}.json`;
       await io.group(`sluice: ${policy.name}, partition ${index}/${count}`, async () => {
-        const rootRel = top ? await rootInRepo(top, policy).catch(() => null) : null;
-        const keyOf = top && rootRel !== null ? await workingTreeKeys(top, rootRel) : contentIdOf;
-        const { partial, fromCache } = await scanPartition(policy.file, index, count, {
-          ...check,
-          contentKey: async (ref) => {
-            const k = await keyOf(ref);
-            usedKeys.add(k);
-            return k;
-          },
-        });
+        const { contentKey } = await keysOf(policy);
+        const { partial, fromCache } = await scanPartition(policy.file, index, count, { ...check, contentKey });
         usedSettings.add(partial.settingsId);
         await writeFile(file, partialToJson(partial));
         const docs = partial.results.reduce((n, r) => n + r.read.docs, 0);
@@ -156,13 +171,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
       });
       written.push(file);
     }
-    if (s.cache) {
-      const removed = await pruneResults(cacheDir, usedSettings, usedKeys);
-      if (removed > 0) io.info(`sluice: dropped ${removed} cached results outside this partition`);
-      if (measured || restored !== cacheKey) await saveResults(cacheDir, cacheKey, io.info, warn);
-    } else {
-      await rm(cacheDir, { recursive: true, force: true });
-    }
+    await keepCache(measured, 'outside this partition');
     const summary = [`## sluice: partition ${index}/${count} scanned`, '', 'This job measures its share of the shards and judges nothing: the job given all parts (input `parts`) judges and comments.', '', '| policy | shards | documents | from cache | part |', '|---|---:|---:|---:|---|', ...lines].join('\n');
     if (!(await writeSummary(s.summaryFile, summary))) io.info('sluice: no GITHUB_STEP_SUMMARY for the partition summary');
     io.setOutput('parts', written.join('\n'));
@@ -174,9 +183,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
     judged.push(
       await io.group(`sluice: ${policy.name}`, async () => {
         if (parts && top) {
-          const seeded = await seedFromParts(policy, parts, top, await rootInRepo(top, policy), cacheDir, 'input `parts`');
-          const left = seeded.notTaken > 0 ? `; ${seeded.notTaken} left to measure here (no git blob in the part, or the file differs from the index here)` : '';
-          io.info(`sluice ${policy.name}: took ${seeded.taken} shard results from ${seeded.parts} parts${left}`);
+          io.info(seededLine(policy.name, await seedFromParts(policy, parts, top, await rootInRepo(top, policy), cacheDir, 'input `parts`')));
         }
         let j: Judged;
         if (base && top) {
@@ -186,16 +193,8 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
           await writeFile(`${stem}.base.json`, r.base ? renderJson(r.base.report) : 'null\n');
           await writeFile(`${stem}.comparison.json`, `${JSON.stringify(r.comparison, null, 2)}\n`);
         } else {
-          const rootRel = top ? await rootInRepo(top, policy).catch(() => null) : null;
-          const keyOf = top && rootRel !== null ? await workingTreeKeys(top, rootRel) : contentIdOf;
-          const corpus = await measureCorpus(policy, {
-            ...check,
-            contentKey: async (ref) => {
-              const k = await keyOf(ref);
-              usedKeys.add(k);
-              return k;
-            },
-          });
+          const { rootRel, contentKey } = await keysOf(policy);
+          const corpus = await measureCorpus(policy, { ...check, contentKey });
           for (const sh of corpus.shards) usedSettings.add(sh.settingsId);
           const settingsId = corpus.shards[0]?.settingsId;
           const report = buildReport(policy, corpus, s.workspace);
@@ -273,14 +272,7 @@ export async function runAction(s: ActionSettings, io: ActionIO): Promise<Action
     io.info(`sluice: ${omitted.error} more error and ${omitted.warning} more warning findings are not annotated (GitHub shows 10 of each per step); all are in the report`);
   }
 
-  if (s.cache) {
-    const removed = await pruneResults(cacheDir, usedSettings, usedKeys);
-    if (removed > 0) io.info(`sluice: dropped ${removed} cached results no longer in the corpus`);
-    const measured = reports.some((r) => r.timing.cacheMisses > 0) || judged.some((j) => j.baseBlobReads > 0);
-    if (measured || restored !== cacheKey) await saveResults(cacheDir, cacheKey, io.info, warn);
-  } else {
-    await rm(cacheDir, { recursive: true, force: true });
-  }
+  await keepCache(reports.some((r) => r.timing.cacheMisses > 0) || judged.some((j) => j.baseBlobReads > 0), 'no longer in the corpus');
 
   const verdict = reports.reduce<Verdict>((v, r) => (RANK[r.verdict] > RANK[v] ? r.verdict : v), 'pass');
   io.setOutput('verdict', verdict);

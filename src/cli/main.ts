@@ -4,7 +4,7 @@ import { writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { ConfigError, repeatSuffixes, runCheck, type CheckOptions, type Progress } from '../core/check.js';
 import { GitError, runCheckAgainstBase } from '../core/compare.js';
-import { seedRunFromParts } from '../core/parts.js';
+import { seededLine, seedRunFromParts } from '../core/parts.js';
 import { mergePartials, scanPartition } from '../core/partition.js';
 import { maxWorkers, ShardFailure } from '../core/pool.js';
 import { isShardWorker, runShardWorker } from '../core/worker.js';
@@ -35,9 +35,7 @@ async function check(opts: CheckCliOptions): Promise<number> {
   if (opts.parts !== undefined) {
     const seeded = await seedRunFromParts(options, opts.parts, '--parts');
     ({ options, dispose } = seeded);
-    for (const { policy, seeded: s } of seeded.seeded) {
-      process.stderr.write(`sluice ${policy}: took ${s.taken} shard results from ${s.parts} parts${s.notTaken > 0 ? `; ${s.notTaken} left to measure here (no git blob in the part, or the file differs from the index here)` : ''}\n`);
-    }
+    for (const { policy, seeded: s } of seeded.seeded) process.stderr.write(`${seededLine(policy, s)}\n`);
   }
   try {
     if (opts.base !== undefined) {

@@ -70,15 +70,21 @@ async function blobsOf(policy: Policy, results: readonly ShardResult[], onWarnin
   return out;
 }
 
+/** A part file as read, with the path it was read from. */
+export interface ReadPart {
+  file: string;
+  partial: Partial;
+}
+
 /** The parts of one complete partitioned scan, checked to belong together. */
 export interface PartialSet {
-  parts: Array<{ file: string; partial: Partial }>;
+  parts: readonly ReadPart[];
   results: ShardResult[];
   skipped: SkippedFile[];
 }
 
 /** Reads one partial result file; throws ConfigError naming it when it cannot be read or is not a partial. */
-export async function readPartialFile(file: string): Promise<{ file: string; partial: Partial }> {
+export async function readPartialFile(file: string): Promise<ReadPart> {
   let text: string;
   try {
     text = await readFile(file, 'utf8');
@@ -95,7 +101,7 @@ export async function readPartialFile(file: string): Promise<{ file: string; par
  * other settings than `settingsId` (those `policy` gives now), or when the parts are not exactly
  * one of each partition of one corpus.
  */
-export function checkPartialSet(parts: Array<{ file: string; partial: Partial }>, policy: { file: string }, settingsId: string): PartialSet {
+export function checkPartialSet(parts: readonly ReadPart[], policy: { file: string }, settingsId: string): PartialSet {
   if (parts.length === 0) throw new ConfigError('merge: no partial result files given');
   for (const { file, partial } of parts) {
     if (partial.settingsId !== settingsId) {
@@ -125,8 +131,7 @@ export async function mergePartials(policyFile: string, partFiles: string[], opt
   const started = performance.now();
   const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
   const prepared = await prepareOrThrow(policy);
-  if (partFiles.length === 0) throw new ConfigError('merge: no partial result files given');
-  const read: Array<{ file: string; partial: Partial }> = [];
+  const read: ReadPart[] = [];
   for (const file of partFiles) read.push(await readPartialFile(file));
   const { parts, results, skipped } = checkPartialSet(read, policy, prepared.settingsId);
   let corpus;

@@ -9,13 +9,9 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { ConfigError, loadPolicyOrThrow, prepareOrThrow, type CheckOptions } from './check.js';
 import { cleanBlobs, gitTopLevel, rootInRepo } from './compare.js';
-import { checkPartialSet, readPartialFile } from './partition.js';
+import { checkPartialSet, readPartialFile, type ReadPart } from './partition.js';
 import type { Policy } from '../policy/types.js';
 import { ResultCache } from '../results/cache.js';
-import type { Partial } from '../results/partition.js';
-
-/** A part file as read, with its path as the input's patterns found it. */
-export type ReadPart = { file: string; partial: Partial };
 
 /** Returns the part files the patterns (relative to `workspace`) match, read; throws ConfigError when none matches, naming the option or input (`what`) that gave them. */
 export async function readParts(patterns: readonly string[], workspace: string, what: string): Promise<ReadPart[]> {
@@ -35,6 +31,12 @@ export interface Seeded {
   parts: number;
   taken: number;
   notTaken: number;
+}
+
+/** Returns the line that says what a policy took from the parts, for the front ends' logs. */
+export function seededLine(policyName: string, s: Seeded): string {
+  const left = s.notTaken > 0 ? `; ${s.notTaken} left to measure here (no git blob in the part, or the file differs from the index here)` : '';
+  return `sluice ${policyName}: took ${s.taken} shard results from ${s.parts} parts${left}`;
 }
 
 /**
