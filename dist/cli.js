@@ -29470,22 +29470,6 @@ async function* restOf(start) {
   if (start.ended) return;
   for (let next = await start.rest.next(); !next.done; next = await start.rest.next()) yield next.value;
 }
-function resolvingLfsPointer(source, objectsDir) {
-  return Readable.from(
-    (async function* () {
-      const start = await holdStart(source);
-      const oid = start.ended ? lfsPointerOid(Buffer.concat(start.held)) : void 0;
-      if (oid !== void 0) {
-        const object = path5.join(objectsDir, oid.slice(0, 2), oid.slice(2, 4), oid);
-        if (await isFile(object)) {
-          yield* createReadStream(object, { highWaterMark: READ_CHUNK_BYTES });
-          return;
-        }
-      }
-      yield* restOf(start);
-    })()
-  );
-}
 async function isFile(p) {
   try {
     return (await stat3(p)).isFile();
@@ -29495,9 +29479,8 @@ async function isFile(p) {
 }
 function lfsPointerProblem(bytes3) {
   if (!isLfsPointer(bytes3)) return void 0;
-  const text = bytes3.toString("latin1");
-  const oid = /^oid sha256:([0-9a-f]{64})$/m.exec(text)?.[1];
-  const size = /^size (\d+)$/m.exec(text)?.[1];
+  const oid = lfsPointerOid(bytes3);
+  const size = /^size (\d+)$/m.exec(bytes3.toString("latin1"))?.[1];
   const what = oid ? ` (object ${oid.slice(0, 12)}\u2026${size ? `, ${Number(size).toLocaleString("en-US")} bytes` : ""})` : "";
   return `a Git LFS pointer${what}, not the shard itself: fetch the LFS objects first (git lfs pull, or actions/checkout with lfs: true; for a base commit's shards, git lfs fetch origin <commit>)`;
 }
@@ -29515,9 +29498,14 @@ async function pumpShard(ref, write, pace) {
     } catch (error) {
       return { compressedBytes: 0, error: `read failed: ${messageOf2(error)}` };
     }
-    const lfs = start.ended ? lfsPointerProblem(Buffer.concat(start.held)) : void 0;
-    if (lfs !== void 0) return { compressedBytes: 0, error: lfs };
-    source = Readable.from(restOf(start));
+    const whole = start.ended ? Buffer.concat(start.held) : void 0;
+    const lfs = whole === void 0 ? void 0 : lfsPointerProblem(whole);
+    if (lfs !== void 0) {
+      const oid = lfsPointerOid(whole);
+      const object = ref.lfsObjects === void 0 || oid === void 0 ? void 0 : path5.join(ref.lfsObjects, oid.slice(0, 2), oid.slice(2, 4), oid);
+      if (object === void 0 || !await isFile(object)) return { compressedBytes: 0, error: lfs };
+      source = createReadStream(object, { highWaterMark: readChunkBytes(ref) });
+    } else source = Readable.from(restOf(start));
   }
   switch (ref.compression) {
     case "none":
@@ -43070,10 +43058,10 @@ function baseShardRefs(top, commit, policy, shards, onRead, lfsObjects) {
       sizeBytes: s.sizeBytes,
       open: () => {
         onRead?.();
-        const blob = blobStream(top, s.blob);
-        return lfsObjects !== void 0 && s.sizeBytes < LFS_POINTER_MAX_BYTES ? resolvingLfsPointer(blob, lfsObjects) : blob;
+        return blobStream(top, s.blob);
       }
     };
+    if (lfsObjects !== void 0) ref.lfsObjects = lfsObjects;
     if (c.subset !== void 0) ref.subset = c.subset;
     refs.push(ref);
   }
@@ -43333,7 +43321,6 @@ async function mergePartials(policyFile, partFiles, opts) {
   const started = performance.now();
   const policy = await loadPolicyOrThrow(policyFile, opts.root, opts.onWarning);
   const prepared = await prepareOrThrow(policy);
-  if (partFiles.length === 0) throw new ConfigError("merge: no partial result files given");
   const read = [];
   for (const file of partFiles) read.push(await readPartialFile(file));
   const { parts, results, skipped } = checkPartialSet(read, policy, prepared.settingsId);
@@ -43358,6 +43345,10 @@ async function readParts(patterns, workspace, what) {
   const parts = [];
   for (const file of files) parts.push(await readPartialFile(file));
   return parts;
+}
+function seededLine(policyName, s) {
+  const left = s.notTaken > 0 ? `; ${s.notTaken} left to measure here (no git blob in the part, or the file differs from the index here)` : "";
+  return `sluice ${policyName}: took ${s.taken} shard results from ${s.parts} parts${left}`;
 }
 async function seedFromParts(policy, parts, top, rootRel, cacheDir, what) {
   const { settingsId } = await prepareOrThrow(policy);
@@ -44115,10 +44106,8 @@ async function check(opts) {
   if (opts.parts !== void 0) {
     const seeded = await seedRunFromParts(options, opts.parts, "--parts");
     ({ options, dispose } = seeded);
-    for (const { policy, seeded: s } of seeded.seeded) {
-      process.stderr.write(`sluice ${policy}: took ${s.taken} shard results from ${s.parts} parts${s.notTaken > 0 ? `; ${s.notTaken} left to measure here (no git blob in the part, or the file differs from the index here)` : ""}
+    for (const { policy, seeded: s } of seeded.seeded) process.stderr.write(`${seededLine(policy, s)}
 `);
-    }
   }
   try {
     if (opts.base !== void 0) {

@@ -16,7 +16,7 @@ import picomatch from 'picomatch';
 import { buildReport } from '../judge/report.js';
 import type { Report } from '../judge/types.js';
 import type { Policy } from '../policy/types.js';
-import { LFS_POINTER_MAX_BYTES, pathClassifier, resolvingLfsPointer } from '../read/index.js';
+import { pathClassifier } from '../read/index.js';
 import type { ShardRef } from '../read/types.js';
 import type { CorpusResult } from '../results/corpus.js';
 import { contentIdOf } from '../results/scan.js';
@@ -197,11 +197,11 @@ export function baseShardRefs(top: string, commit: string, policy: Policy, shard
       sizeBytes: s.sizeBytes,
       open: () => {
         onRead?.();
-        // A shard kept in Git LFS is a pointer in the commit: read the object when the clone has it.
-        const blob = blobStream(top, s.blob);
-        return lfsObjects !== undefined && s.sizeBytes < LFS_POINTER_MAX_BYTES ? resolvingLfsPointer(blob, lfsObjects) : blob;
+        return blobStream(top, s.blob);
       },
     };
+    // A shard kept in Git LFS is a pointer in the commit: the reader takes the object when the clone has it.
+    if (lfsObjects !== undefined) ref.lfsObjects = lfsObjects;
     if (c.subset !== undefined) ref.subset = c.subset;
     refs.push(ref);
   }

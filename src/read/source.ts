@@ -64,14 +64,14 @@ export type Pace = () => Promise<void> | undefined;
  * without the LFS objects, or a base commit's shards read from git, hold pointers instead of data.
  */
 const LFS_POINTER_START = 'version https://git-lfs.github.com/spec/v1\n';
-export const LFS_POINTER_MAX_BYTES = 1024;
+const LFS_POINTER_MAX_BYTES = 1024;
 
 function isLfsPointer(bytes: Buffer): boolean {
   return bytes.length < LFS_POINTER_MAX_BYTES && bytes.subarray(0, LFS_POINTER_START.length).equals(Buffer.from(LFS_POINTER_START));
 }
 
 /** Returns the sha256 oid a Git LFS pointer names, or undefined when the bytes are no pointer. */
-export function lfsPointerOid(bytes: Buffer): string | undefined {
+function lfsPointerOid(bytes: Buffer): string | undefined {
   if (!isLfsPointer(bytes)) return undefined;
   return /^oid sha256:([0-9a-f]{64})$/m.exec(bytes.toString('latin1'))?.[1];
 }
@@ -105,30 +105,6 @@ async function* restOf(start: HeldStart): AsyncGenerator<Buffer> {
   for (let next = await start.rest.next(); !next.done; next = await start.rest.next()) yield next.value;
 }
 
-/**
- * Returns a stream of `source`'s bytes, or, when they are a Git LFS pointer whose object is in the
- * clone's local LFS store (`objectsDir`: `<git dir>/lfs/objects`, objects at `aa/bb/<oid>` under it,
- * as Git LFS keeps them), of that object's bytes. A pointer without a local object is passed on
- * as it is, and reading it then says what it is (lfsPointerProblem). For shards read from git
- * objects, such as a base commit's, where the working tree's LFS checkout does not apply.
- */
-export function resolvingLfsPointer(source: Readable, objectsDir: string): Readable {
-  return Readable.from(
-    (async function* () {
-      const start = await holdStart(source);
-      const oid = start.ended ? lfsPointerOid(Buffer.concat(start.held)) : undefined;
-      if (oid !== undefined) {
-        const object = path.join(objectsDir, oid.slice(0, 2), oid.slice(2, 4), oid);
-        if (await isFile(object)) {
-          yield* createReadStream(object, { highWaterMark: READ_CHUNK_BYTES });
-          return;
-        }
-      }
-      yield* restOf(start);
-    })(),
-  );
-}
-
 async function isFile(p: string): Promise<boolean> {
   try {
     return (await stat(p)).isFile();
@@ -140,9 +116,8 @@ async function isFile(p: string): Promise<boolean> {
 /** Returns why a small file's bytes are a Git LFS pointer rather than a shard, or undefined. */
 export function lfsPointerProblem(bytes: Buffer): string | undefined {
   if (!isLfsPointer(bytes)) return undefined;
-  const text = bytes.toString('latin1');
-  const oid = /^oid sha256:([0-9a-f]{64})$/m.exec(text)?.[1];
-  const size = /^size (\d+)$/m.exec(text)?.[1];
+  const oid = lfsPointerOid(bytes);
+  const size = /^size (\d+)$/m.exec(bytes.toString('latin1'))?.[1];
   const what = oid ? ` (object ${oid.slice(0, 12)}…${size ? `, ${Number(size).toLocaleString('en-US')} bytes` : ''})` : '';
   return `a Git LFS pointer${what}, not the shard itself: fetch the LFS objects first (git lfs pull, or actions/checkout with lfs: true; for a base commit's shards, git lfs fetch origin <commit>)`;
 }
@@ -165,9 +140,15 @@ export async function pumpShard(ref: ShardRef, write: (chunk: Buffer) => void, p
     } catch (error) {
       return { compressedBytes: 0, error: `read failed: ${messageOf(error)}` };
     }
-    const lfs = start.ended ? lfsPointerProblem(Buffer.concat(start.held)) : undefined;
-    if (lfs !== undefined) return { compressedBytes: 0, error: lfs };
-    source = Readable.from(restOf(start));
+    const whole = start.ended ? Buffer.concat(start.held) : undefined;
+    const lfs = whole === undefined ? undefined : lfsPointerProblem(whole);
+    if (lfs !== undefined) {
+      // Read from git (a base commit's shard): the object, when the clone's LFS store has it (objects at aa/bb/<oid>, as Git LFS keeps them).
+      const oid = lfsPointerOid(whole!)!;
+      const object = ref.lfsObjects === undefined || oid === undefined ? undefined : path.join(ref.lfsObjects, oid.slice(0, 2), oid.slice(2, 4), oid);
+      if (object === undefined || !(await isFile(object))) return { compressedBytes: 0, error: lfs };
+      source = createReadStream(object, { highWaterMark: readChunkBytes(ref) });
+    } else source = Readable.from(restOf(start));
   }
   switch (ref.compression) {
     case 'none':

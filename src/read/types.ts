@@ -32,6 +32,8 @@ export interface ShardRef {
   textBytesHint?: number;
   /** Opens the raw (still compressed) bytes; defaults to the file at absPath. Lets other sources (a git blob) be read the same way. */
   open?: () => Readable;
+  /** Where the object of a Git LFS pointer is looked up (`<git dir>/lfs/objects`) when the bytes turn out to be one: set for shards read from git objects, such as a base commit's. */
+  lfsObjects?: string;
 }
 
 /** Why a path matched by the globs is not read. */
