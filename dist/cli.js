@@ -43821,6 +43821,9 @@ function changeCounts(changes) {
   const parts = ["added", "modified", "renamed", "deleted"].filter((s) => by(s) > 0).map((s) => `${by(s)} ${s}`);
   return parts.length ? parts.join(", ") : "no shard changed";
 }
+function repeatsWithin(c) {
+  return c.withinExactDocs + c.withinNearDocs > 0 ? `; ${count2(c.withinExactDocs)} exact, ${count2(c.withinNearDocs)} near repeats within the change` : "";
+}
 function hasCopies(s) {
   return s.exactDocs + s.nearDocs + s.withinExactDocs + s.withinNearDocs > 0;
 }
@@ -43839,7 +43842,7 @@ function renderComparison(c, opts = {}) {
   }
   if (c.addedDuplicates) {
     const d = c.addedDuplicates;
-    const within = d.withinExactDocs + d.withinNearDocs > 0 ? `; ${count2(d.withinExactDocs)} exact, ${count2(d.withinNearDocs)} near repeats within the change` : "";
+    const within = repeatsWithin(d);
     out.push(`| duplicates the change adds against the rest | | | ${count2(d.exactDocs)} exact, ${count2(d.nearDocs)} near of ${count2(d.docs)} new documents${within} |`);
   }
   out.push("");
@@ -43917,10 +43920,10 @@ function renderComparisonTerminal(c, opts) {
   }
   if (c.addedDuplicates) {
     const d = c.addedDuplicates;
-    const within = d.withinExactDocs + d.withinNearDocs > 0 ? `; ${count2(d.withinExactDocs)} exact, ${count2(d.withinNearDocs)} near repeats within the change` : "";
+    const within = repeatsWithin(d);
     lines.push(`  duplicates the change adds against the rest: ${count2(d.exactDocs)} exact, ${count2(d.nearDocs)} near of ${count2(d.docs)} new documents${within}`);
     for (const s of d.perShard.filter(hasCopies).slice(0, TERMINAL_CHANGE_ROWS)) {
-      const repeats = s.withinExactDocs + s.withinNearDocs > 0 ? `; ${count2(s.withinExactDocs)} exact, ${count2(s.withinNearDocs)} near repeats within the change` : "";
+      const repeats = repeatsWithin(s);
       lines.push(`    ${clean2(s.shard)} ${dim(`${count2(s.exactDocs)} exact, ${count2(s.nearDocs)} near of ${count2(s.docs)}${repeats}`)}`);
     }
   }

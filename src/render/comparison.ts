@@ -42,6 +42,11 @@ function changeCounts(changes: ShardChange[]): string {
   return parts.length ? parts.join(', ') : 'no shard changed';
 }
 
+/** Returns `; N exact, M near repeats within the change` for counts that have any, else nothing. */
+function repeatsWithin(c: { withinExactDocs: number; withinNearDocs: number }): string {
+  return c.withinExactDocs + c.withinNearDocs > 0 ? `; ${count(c.withinExactDocs)} exact, ${count(c.withinNearDocs)} near repeats within the change` : '';
+}
+
 /** True when a new shard holds copies: of the rest of the corpus, or of documents the change adds. */
 function hasCopies(s: NonNullable<Comparison['addedDuplicates']>['perShard'][number]): boolean {
   return s.exactDocs + s.nearDocs + s.withinExactDocs + s.withinNearDocs > 0;
@@ -63,7 +68,7 @@ export function renderComparison(c: Comparison, opts: { linkBase?: string } = {}
   }
   if (c.addedDuplicates) {
     const d = c.addedDuplicates;
-    const within = d.withinExactDocs + d.withinNearDocs > 0 ? `; ${count(d.withinExactDocs)} exact, ${count(d.withinNearDocs)} near repeats within the change` : '';
+    const within = repeatsWithin(d);
     out.push(`| duplicates the change adds against the rest | | | ${count(d.exactDocs)} exact, ${count(d.nearDocs)} near of ${count(d.docs)} new documents${within} |`);
   }
   out.push('');
@@ -151,10 +156,10 @@ export function renderComparisonTerminal(c: Comparison, opts: { color: boolean; 
   }
   if (c.addedDuplicates) {
     const d = c.addedDuplicates;
-    const within = d.withinExactDocs + d.withinNearDocs > 0 ? `; ${count(d.withinExactDocs)} exact, ${count(d.withinNearDocs)} near repeats within the change` : '';
+    const within = repeatsWithin(d);
     lines.push(`  duplicates the change adds against the rest: ${count(d.exactDocs)} exact, ${count(d.nearDocs)} near of ${count(d.docs)} new documents${within}`);
     for (const s of d.perShard.filter(hasCopies).slice(0, TERMINAL_CHANGE_ROWS)) {
-      const repeats = s.withinExactDocs + s.withinNearDocs > 0 ? `; ${count(s.withinExactDocs)} exact, ${count(s.withinNearDocs)} near repeats within the change` : '';
+      const repeats = repeatsWithin(s);
       lines.push(`    ${clean(s.shard)} ${dim(`${count(s.exactDocs)} exact, ${count(s.nearDocs)} near of ${count(s.docs)}${repeats}`)}`);
     }
   }
